@@ -1,0 +1,54 @@
+import { EmptyState, ErrorNotice, Loading } from '@ui/components/page-state.tsx';
+import { formatMoney } from '@ui/format.ts';
+import { useOverview } from '../../features/overview/api/get-overview.ts';
+import { StatusStrip } from '../../features/overview/components/status-strip.tsx';
+import { statusLabels } from '../../features/overview/components/status-labels.ts';
+
+const dateFormat = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric' });
+
+export function TodayPage() {
+  const overview = useOverview();
+  if (overview.isPending) return <Loading label="Gathering today's work…" />;
+  if (overview.isError) return <ErrorNotice message={overview.error.message} onRetry={() => void overview.refetch()} />;
+  const { shopName, countsByStatus, recentOrders } = overview.data;
+  return (
+    <div className="grid gap-6 lg:grid-cols-[22rem_1fr]">
+      <section className="rounded-card border border-linen-200 bg-white p-5">
+        <h1 className="text-xl font-semibold">{shopName}</h1>
+        <p className="mb-4 text-sm text-walnut-500">Where every order stands</p>
+        <StatusStrip counts={countsByStatus} />
+      </section>
+      <section className="rounded-card border border-linen-200 bg-white p-5">
+        <h2 className="mb-3 text-lg font-semibold">Latest orders</h2>
+        {recentOrders.length === 0 ? (
+          <EmptyState title="No orders yet.">New orders appear here as soon as a customer's card is held.</EmptyState>
+        ) : (
+          <div className="overflow-x-auto">
+            <table className="w-full min-w-[36rem] text-left text-sm">
+              <thead className="text-walnut-500">
+                <tr>
+                  <th className="py-1.5 font-medium">Order</th>
+                  <th className="py-1.5 font-medium">Customer</th>
+                  <th className="py-1.5 font-medium">Where it stands</th>
+                  <th className="py-1.5 font-medium">Needed by</th>
+                  <th className="py-1.5 text-right font-medium">Total</th>
+                </tr>
+              </thead>
+              <tbody>
+                {recentOrders.map((order) => (
+                  <tr key={order.id} className="border-t border-linen-200">
+                    <td className="py-2 font-medium">{order.number}</td>
+                    <td className="py-2">{order.customerName}</td>
+                    <td className="py-2">{statusLabels[order.status]}</td>
+                    <td className="py-2">{order.neededBy ? dateFormat.format(new Date(`${order.neededBy}T12:00:00Z`)) : '—'}</td>
+                    <td className="py-2 text-right tabular-nums">{formatMoney(order.totalCents, order.currency)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        )}
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,6 @@
+/** The studio app's route table (served under /admin; the router's basename adds it). */
+export const paths = {
+  home: { path: '/', href: () => '/' },
+} as const;
+
+export const basename = '/admin';

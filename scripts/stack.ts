@@ -1,0 +1,147 @@
+/**
+ * The pieces that `npm start` and `npm test` put together: the environment of one local stack (demo or test), the
+ * database migration and seeding, the fakes, the app build and the server process.
+ */
+import { spawn, type ChildProcess } from 'node:child_process';
+import { setTimeout as sleep } from 'node:timers/promises';
+import { join } from 'node:path';
+import { loadDatabaseConfig } from '../server/src/config.ts';
+import { openDatabase } from '../server/src/db/knex.ts';
+import { startFakes } from '../fakes/index.ts';
+import { demoPeople } from '../seeds/data/people.ts';
+import { localDatabaseSettings, projectRoot } from './db-lifecycle.ts';
+
+export type StackProfile = 'demo' | 'test';
+
+interface Ports {
+  app: number;
+  google: number;
+  stripe: number;
+  smtp: number;
+  smtpHttp: number;
+}
+
+// The test stack sits 100 ports above the demo stack, so `npm test` runs while the demo shop is open.
+const portsByProfile: Record<StackProfile, Ports> = {
+  demo: { app: 3000, google: 4010, stripe: 12111, smtp: 2525, smtpHttp: 4025 },
+  test: { app: 3100, google: 4110, stripe: 12211, smtp: 2625, smtpHttp: 4125 },
+};
+
+export interface LocalStack {
+  ports: Ports;
+  appOrigin: string;
+  env: NodeJS.ProcessEnv;
+}
+
+/** Environment for the server in the local demo or test stack; values already set in the shell win. */
+export function localStack(profile: StackProfile): LocalStack {
+  const ports = portsByProfile[profile];
+  const appPort = profile === 'demo' && process.env.PORT ? Number(process.env.PORT) : ports.app;
+  const appOrigin = `http://127.0.0.1:${appPort}`;
+  const db = localDatabaseSettings();
+  const env: NodeJS.ProcessEnv = {
+    DB_HOST: '127.0.0.1',
+    DB_PORT: String(db.port),
+    DB_USER: db.user,
+    DB_PASSWORD: db.password,
+    DB_NAME: profile === 'demo' ? 'hoopwright' : 'hoopwright_test',
+    HOST: '127.0.0.1',
+    PORT: String(appPort),
+    APP_ORIGIN: appOrigin,
+    SESSION_SECRET: `local-${profile}-session-secret-not-for-production`,
+    STATIC_DIR: join(projectRoot, 'dist'),
+    OWNER_EMAILS: demoPeople.filter((p) => p.role === 'owner').map((p) => p.email).join(','),
+    GOOGLE_CLIENT_ID: 'hoopwright-local-client',
+    GOOGLE_CLIENT_SECRET: 'hoopwright-local-secret',
+    GOOGLE_OAUTH_BASE_URL: `http://127.0.0.1:${ports.google}`,
+    STRIPE_SECRET_KEY: 'sk_test_hoopwright_local',
+    STRIPE_WEBHOOK_SECRET: 'whsec_hoopwright_local',
+    STRIPE_API_URL: `http://127.0.0.1:${ports.stripe}`,
+    SMTP_URL: `smtp://127.0.0.1:${ports.smtp}`,
+    ...(profile === 'demo' ? pickDefined(process.env, ['HOST', 'PORT', 'APP_ORIGIN']) : {}),
+  };
+  return { ports: { ...ports, app: appPort }, appOrigin, env };
+}
+
+function pickDefined(env: NodeJS.ProcessEnv, keys: string[]): NodeJS.ProcessEnv {
+  return Object.fromEntries(keys.filter((k) => env[k]).map((k) => [k, env[k]]));
+}
+
+/** Applies pending migrations; seeds the demo data when asked to always, or when the database has no users yet. */
+export async function migrateAndSeed(env: NodeJS.ProcessEnv, seed: 'always' | 'when-empty'): Promise<{ migrated: number; seeded: boolean }> {
+  const db = openDatabase(loadDatabaseConfig({ ...process.env, ...env }));
+  try {
+    const [, applied] = await db.migrate.latest();
+    const [{ n }] = await db('users').count({ n: '*' });
+    const shouldSeed = seed === 'always' || Number(n) === 0;
+    if (shouldSeed) await db.seed.run();
+    return { migrated: applied.length, seeded: shouldSeed };
+  } finally {
+    await db.destroy();
+  }
+}
+
+/** Starts the three local stand-ins (sign-in, payments, mail) on the stack's ports. */
+export function startLocalFakes(stack: LocalStack) {
+  return startFakes({
+    host: '127.0.0.1',
+    googlePort: stack.ports.google,
+    stripePort: stack.ports.stripe,
+    smtpPort: stack.ports.smtp,
+    smtpHttpPort: stack.ports.smtpHttp,
+    identities: demoPeople.map(({ sub, email, name, givenName, familyName }) => ({ sub, email, name, givenName, familyName })),
+    stripeApiKey: stack.env.STRIPE_SECRET_KEY!,
+    stripeWebhookSecret: stack.env.STRIPE_WEBHOOK_SECRET!,
+    stripeWebhookUrl: `${stack.appOrigin}/api/webhooks/stripe`,
+  });
+}
+
+/** Runs a command from node_modules/.bin (or any program) and resolves with its exit code. */
+export function run(command: string, args: string[], env: NodeJS.ProcessEnv = {}): Promise<number> {
+  const bin = command.includes('/') ? command : join(projectRoot, 'node_modules', '.bin', command);
+  return new Promise((resolve) => {
+    const child = spawn(bin, args, { cwd: projectRoot, stdio: 'inherit', env: { ...process.env, ...env } });
+    child.on('exit', (code, signal) => resolve(code ?? (signal ? 1 : 0)));
+  });
+}
+
+/** Builds both apps into dist/ (each build takes about a second). */
+export async function buildApps(): Promise<void> {
+  for (const app of ['storefront', 'admin']) {
+    const code = await run('vite', ['build', app, '--logLevel', 'warn']);
+    if (code !== 0) throw new Error(`Building the ${app} app failed.`);
+  }
+}
+
+/** Starts the API server as its own process and waits until it answers /api/health. */
+export async function startServerProcess(stack: LocalStack, options: { quiet?: boolean } = {}): Promise<ChildProcess> {
+  const child = spawn(process.execPath, ['--import', 'tsx', join(projectRoot, 'server/src/main.ts')], {
+    cwd: projectRoot,
+    env: { ...process.env, ...stack.env },
+    stdio: options.quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
+  });
+  let exited = false;
+  child.on('exit', () => (exited = true));
+  const deadline = Date.now() + 30_000;
+  for (;;) {
+    if (exited) throw new Error('The API server stopped while starting; see the messages above.');
+    try {
+      const response = await fetch(`${stack.appOrigin}/api/health`);
+      if (response.ok) return child;
+    } catch {
+      // not listening yet
+    }
+    if (Date.now() > deadline) throw new Error(`The API server did not answer on ${stack.appOrigin} within 30 s.`);
+    await sleep(200);
+  }
+}
+
+/** Asks a child process to stop and waits for it (SIGKILL after a grace period). */
+export async function stopProcess(child: ChildProcess | undefined, graceMs = 8_000): Promise<void> {
+  if (!child || child.exitCode !== null || child.signalCode !== null) return;
+  const exited = new Promise<void>((resolve) => child.once('exit', () => resolve()));
+  child.kill('SIGTERM');
+  const timer = setTimeout(() => child.kill('SIGKILL'), graceMs);
+  await exited;
+  clearTimeout(timer);
+}

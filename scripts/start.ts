@@ -1,0 +1,69 @@
+/**
+ * `npm start`: the demo shop on this machine. MariaDB (installed and started if needed), migrations, demo data on
+ * first run, the local sign-in/payment/mail stand-ins, both apps built, and the API serving everything on one origin.
+ * Ctrl-C stops it all, including the database this command started.
+ */
+import type { ChildProcess } from 'node:child_process';
+import { demoPeople } from '../seeds/data/people.ts';
+import { startLocalDatabase, stopLocalDatabase } from './db-lifecycle.ts';
+import { buildApps, localStack, migrateAndSeed, startLocalFakes, startServerProcess, stopProcess } from './stack.ts';
+
+const stack = localStack('demo');
+const usesOwnDatabase = !process.env.DATABASE_URL;
+let startedDatabase = false;
+let server: ChildProcess | undefined;
+let fakes: Awaited<ReturnType<typeof startLocalFakes>> | undefined;
+let isStopping = false;
+
+async function stopAll(exitCode: number): Promise<never> {
+  if (!isStopping) {
+    isStopping = true;
+    console.log('\nStopping the demo shop…');
+    await stopProcess(server);
+    await fakes?.close();
+    if (startedDatabase) await stopLocalDatabase();
+    console.log('Stopped.');
+  }
+  process.exit(exitCode);
+}
+
+process.on('SIGINT', () => void stopAll(0));
+process.on('SIGTERM', () => void stopAll(0));
+
+try {
+  if (usesOwnDatabase) {
+    console.log('Starting MariaDB…');
+    startedDatabase = (await startLocalDatabase()).started;
+  }
+  const { migrated, seeded } = await migrateAndSeed(stack.env, 'when-empty');
+  console.log(`Database ready (${migrated} new migrations${seeded ? ', demo data loaded' : ''}).`);
+  fakes = await startLocalFakes(stack);
+  console.log('Building the storefront and studio apps…');
+  await buildApps();
+  server = await startServerProcess(stack);
+  server.on('exit', (code) => {
+    if (!isStopping) {
+      console.error(`The API server stopped unexpectedly (exit ${code}).`);
+      void stopAll(1);
+    }
+  });
+
+  const people = demoPeople.map((p) => `    ${p.role.padEnd(8)} ${p.name} <${p.email}>`).join('\n');
+  console.log(`
+  Hoopwright demo shop is running.
+
+    Storefront (customers):  ${stack.appOrigin}/
+    Studio app (the shop):   ${stack.appOrigin}/admin/
+
+  Sign in with any of these demo people on the local sign-in page (or type a new e-mail to become a new customer):
+${people}
+
+  Test payments: card 4242 4242 4242 4242 is accepted, 4000 0000 0000 0002 is declined (any future expiry, any CVC).
+  Captured e-mails: ${fakes.urls.smtpHttp}/messages
+
+  Press Ctrl-C to stop.
+`);
+} catch (error) {
+  console.error(`\nThe demo shop could not start: ${(error as Error).message}`);
+  await stopAll(1);
+}

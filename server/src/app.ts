@@ -1,0 +1,110 @@
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import passport from 'passport';
+import { existsSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import type Stripe from 'stripe';
+import type { AppConfig } from './config.ts';
+import type { Db } from './db/knex.ts';
+import type { Mailer } from './integrations/mailer.ts';
+import { createGoogleStrategy } from './auth/google-strategy.ts';
+import { requireRole } from './auth/roles.ts';
+import type { SessionLayer } from './auth/session.ts';
+import { createUserService } from './services/user-service.ts';
+import { requestId } from './middleware/request-id.ts';
+import { requireSameOrigin } from './middleware/same-origin.ts';
+import { createErrorHandler, notFoundHandler } from './middleware/error-handler.ts';
+import { createAuthRouter } from './routes/auth.ts';
+import { createMeRouter } from './routes/me.ts';
+import { createCatalogRouter } from './routes/catalog.ts';
+import { createPaymentWebhookRouter } from './routes/payment-webhooks.ts';
+import { createAdminOverviewRouter } from './routes/admin/overview.ts';
+import type { CurrentUser } from './contracts/users.ts';
+
+export interface AppDeps {
+  config: AppConfig;
+  db: Db;
+  sessions: SessionLayer;
+  stripe: Stripe;
+  mailer: Mailer;
+  now: () => Date;
+  log: (line: string) => void;
+}
+
+function securityHeaders(config: AppConfig) {
+  return helmet({
+    contentSecurityPolicy: {
+      useDefaults: false,
+      directives: {
+        defaultSrc: ["'self'"],
+        scriptSrc: ["'self'"],
+        styleSrc: ["'self'"],
+        imgSrc: ["'self'", 'data:', 'blob:'],
+        fontSrc: ["'self'", 'data:'],
+        connectSrc: ["'self'"],
+        formAction: ["'self'"],
+        frameAncestors: ["'none'"],
+        objectSrc: ["'none'"],
+        baseUri: ["'self'"],
+        ...(config.isCookieSecure ? { upgradeInsecureRequests: [] } : {}),
+      },
+    },
+    strictTransportSecurity: config.isCookieSecure,
+  });
+}
+
+/** Serves a built single-page app at `base`, falling back to its index.html for client-side routes. */
+function mountSinglePageApp(app: Express, base: string, dir: string): void {
+  const index = join(dir, 'index.html');
+  if (!existsSync(index)) return;
+  app.use(base, express.static(dir, { index: false, maxAge: '1h', immutable: false }));
+  const pattern = base === '/' ? '/{*splat}' : `${base}{/*splat}`;
+  app.get(pattern, (_req, res) => {
+    res.set('Cache-Control', 'no-cache');
+    res.sendFile(index);
+  });
+}
+
+/** Builds the Express app: middleware, routers, the two apps and the error handler. It does not listen. */
+export function createApp(deps: AppDeps): Express {
+  const { config, db } = deps;
+  const users = createUserService({ db, ownerEmails: config.ownerEmails });
+  passport.use(createGoogleStrategy(config, users));
+  passport.serializeUser((user, done) => done(null, (user as CurrentUser).id));
+  passport.deserializeUser((id: number, done) => {
+    users.findById(id).then((user) => done(null, user ?? false), done);
+  });
+
+  const app = express();
+  app.disable('x-powered-by');
+  if (config.isBehindProxy) app.set('trust proxy', 1);
+  app.use(requestId);
+  app.use(securityHeaders(config));
+
+  // Webhooks authenticate by signature, not by session or origin, and need the raw body.
+  app.use('/api/webhooks/stripe', createPaymentWebhookRouter({ db, stripe: deps.stripe, webhookSecret: config.stripe.webhookSecret, now: deps.now }));
+
+  app.use('/api', requireSameOrigin(config.appOrigin));
+  app.use('/api', express.json({ limit: '1mb' }));
+  app.use('/api', deps.sessions.middleware, passport.session());
+  app.use('/api', (_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
+
+  app.get('/api/health', (_req, res) => res.json({ ok: true }));
+  app.use('/api/auth', createAuthRouter());
+  app.use('/api/me', createMeRouter());
+  app.use('/api/catalog', createCatalogRouter({ db }));
+  app.use('/api/admin', requireRole('staff', 'owner'));
+  app.use('/api/admin/overview', createAdminOverviewRouter({ db }));
+  app.use('/api', notFoundHandler);
+
+  const staticRoot = resolve(config.staticDir);
+  mountSinglePageApp(app, '/admin', join(staticRoot, 'admin'));
+  mountSinglePageApp(app, '/', join(staticRoot, 'storefront'));
+
+  app.use(notFoundHandler);
+  app.use(createErrorHandler(deps.log));
+  return app;
+}

@@ -1,0 +1,50 @@
+import session from 'express-session';
+import MySQLStoreFactory from 'express-mysql-session';
+import type { RequestHandler } from 'express';
+import type { AppConfig } from '../config.ts';
+
+export interface SessionLayer {
+  middleware: RequestHandler;
+  close(): Promise<void>;
+}
+
+const dayMs = 86_400_000;
+
+/**
+ * Sessions live in MariaDB (the `sessions` table from the migrations), so they survive a server restart. The store
+ * keeps its own small pool, which it ends on close.
+ */
+export async function createSessionLayer(config: AppConfig): Promise<SessionLayer> {
+  const MySQLStore = MySQLStoreFactory(session as never);
+  const store = new MySQLStore({
+    host: config.database.host,
+    port: config.database.port,
+    user: config.database.user,
+    password: config.database.password,
+    database: config.database.database,
+    createDatabaseTable: false,
+    expiration: 14 * dayMs,
+    clearExpired: true,
+    checkExpirationInterval: 15 * 60_000,
+    endConnectionOnClose: true,
+    connectionLimit: 3,
+  } as never);
+  await store.onReady();
+  const middleware = session({
+    name: 'hw.sid',
+    secret: config.sessionSecret,
+    store,
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    proxy: config.isBehindProxy,
+    cookie: {
+      httpOnly: true,
+      sameSite: 'lax',
+      secure: config.isCookieSecure,
+      maxAge: 14 * dayMs,
+      path: '/',
+    },
+  });
+  return { middleware, close: () => store.close() };
+}

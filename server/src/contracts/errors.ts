@@ -1,0 +1,24 @@
+import { z } from 'zod';
+
+/** Every expected failure the API reports has one of these kinds; one table maps each to an HTTP status. */
+export const errorKinds = [
+  'invalid',
+  'unauthenticated',
+  'forbidden',
+  'not-found',
+  'conflict',
+  'too-large',
+  'unsupported-type',
+  'payment-failed',
+] as const;
+export type ErrorKind = (typeof errorKinds)[number];
+
+export const apiErrorBody = z.object({
+  error: z.object({
+    kind: z.enum([...errorKinds, 'server']),
+    message: z.string(),
+    /** Field path (dot-joined) to a message a person can act on. */
+    fields: z.record(z.string(), z.string()).optional(),
+  }),
+});
+export type ApiErrorBody = z.infer<typeof apiErrorBody>;

@@ -1,0 +1,16 @@
+import type { Db } from '../knex.ts';
+
+/**
+ * Records a verified webhook event once. Returns false when the event id was seen before, so a redelivery is
+ * acknowledged without being processed twice.
+ */
+export async function recordWebhookEvent(
+  db: Db,
+  event: { id: string; type: string; payload: string; receivedAt: Date },
+): Promise<boolean> {
+  const inserted = await db('payment_webhook_events')
+    .insert({ event_id: event.id, type: event.type, payload: event.payload, received_at: event.receivedAt })
+    .onConflict('event_id')
+    .ignore();
+  return Number((inserted as unknown as number[])[0] ?? 0) > 0;
+}

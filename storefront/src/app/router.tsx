@@ -1,0 +1,19 @@
+import { createBrowserRouter } from 'react-router-dom';
+import { paths } from '../config/paths.ts';
+import { ShopLayout } from './layout.tsx';
+import { HomePage } from './routes/home.tsx';
+import { GarmentPage } from './routes/garment.tsx';
+import { SignInPage } from './routes/sign-in.tsx';
+import { NotFoundPage } from './routes/not-found.tsx';
+
+export const router = createBrowserRouter([
+  {
+    element: <ShopLayout />,
+    children: [
+      { path: paths.home.path, element: <HomePage /> },
+      { path: paths.garment.path, element: <GarmentPage /> },
+      { path: paths.signIn.path, element: <SignInPage /> },
+      { path: '*', element: <NotFoundPage /> },
+    ],
+  },
+]);

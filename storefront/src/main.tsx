@@ -1,0 +1,11 @@
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import '@ui/fonts.ts';
+import './index.css';
+import { AppProvider } from './app/provider.tsx';
+
+createRoot(document.getElementById('root')!).render(
+  <StrictMode>
+    <AppProvider />
+  </StrictMode>,
+);

@@ -1,0 +1,3 @@
+import { appConfig } from '../vite.base.ts';
+
+export default appConfig('storefront', 5173);

@@ -1,0 +1,60 @@
+import { expect, test } from '@playwright/test';
+import { restartAppServer } from './support/app-server.ts';
+import { signInAs } from './support/sign-in.ts';
+
+test.describe.configure({ mode: 'serial' });
+
+test('when a customer signs in, then the shop greets them by name and the studio app refuses them', async ({ page }) => {
+  await page.goto('/');
+  await expect(page.getByRole('heading', { name: /choose a garment/i })).toBeVisible();
+  await signInAs(page, 'Priya Castellanos');
+  await expect(page.getByText('Signed in as')).toContainText('Priya Castellanos');
+
+  await page.goto('/admin/');
+  await expect(page.getByRole('heading', { name: /this area is for the studio team/i })).toBeVisible();
+  await expect(page.getByRole('alert')).toContainText('customer account');
+
+  await page.goto('/');
+  await page.getByRole('button', { name: 'Sign out' }).click();
+  await expect(page.getByRole('link', { name: 'Sign in' })).toBeVisible();
+  await page.reload();
+  await expect(page.getByRole('link', { name: 'Sign in' })).toBeVisible();
+});
+
+test('when the owner signs in to the studio app, then the home shows the orders, and the session survives a server restart', async ({ page }) => {
+  await page.goto('/admin/');
+  await expect(page.getByRole('heading', { name: 'Studio sign-in' })).toBeVisible();
+  await signInAs(page, 'Marigold Ashby', /sign in with google/i);
+  await expect(page.getByRole('heading', { name: /wren & bobbin/i })).toBeVisible();
+  await expect(page.getByRole('list', { name: 'Orders by status' })).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'Latest orders' })).toBeVisible();
+
+  await restartAppServer();
+  await page.reload();
+  await expect(page.getByRole('heading', { name: 'Latest orders' })).toBeVisible();
+  await expect(page.getByText('Marigold Ashby')).toBeVisible();
+
+  await page.getByRole('button', { name: 'Sign out' }).click();
+  await expect(page.getByRole('heading', { name: 'Studio sign-in' })).toBeVisible();
+});
+
+test('when the pages load, then nothing is fetched from any host but this one', async ({ page }) => {
+  const foreign: string[] = [];
+  page.on('request', (request) => {
+    const url = new URL(request.url());
+    if (!['127.0.0.1', 'localhost'].includes(url.hostname) && url.protocol !== 'data:' && url.protocol !== 'blob:') foreign.push(request.url());
+  });
+  const cspErrors: string[] = [];
+  page.on('console', (message) => {
+    if (message.type() === 'error' && /Content Security Policy/i.test(message.text())) cspErrors.push(message.text());
+  });
+  await page.goto('/');
+  await expect(page.getByRole('heading', { name: /choose a garment/i })).toBeVisible();
+  await page.getByRole('link').filter({ hasText: /dress/i }).first().click();
+  await expect(page.getByRole('heading', { name: /sizes and hem lengths/i })).toBeVisible();
+  await page.goto('/admin/');
+  await expect(page.getByRole('heading', { name: 'Studio sign-in' })).toBeVisible();
+  expect(await page.evaluate(() => document.fonts.check('500 16px Poppins'))).toBe(true);
+  expect(foreign).toEqual([]);
+  expect(cspErrors).toEqual([]);
+});

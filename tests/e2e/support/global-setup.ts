@@ -1,0 +1,5 @@
+import { startAppServer } from './app-server.ts';
+
+export default async function globalSetup(): Promise<void> {
+  await startAppServer();
+}

@@ -1,0 +1,70 @@
+/**
+ * The API under test: createApp over the real test database (migrated and freshly seeded per test file) with the
+ * local sign-in stand-in on a free port. Tests talk to it through supertest.
+ */
+import request from 'supertest';
+import type { Express } from 'express';
+import { loadConfig, type AppConfig } from '../../server/src/config.ts';
+import { openDatabase, type Db } from '../../server/src/db/knex.ts';
+import { createApp } from '../../server/src/app.ts';
+import { createSessionLayer, type SessionLayer } from '../../server/src/auth/session.ts';
+import { createStripeClient } from '../../server/src/integrations/payment-gateway.ts';
+import { createMailer } from '../../server/src/integrations/mailer.ts';
+import { startGoogleOAuthFake } from '../../fakes/google-oauth/server.ts';
+import { demoPeople } from '../../seeds/data/people.ts';
+import { localStack } from '../../scripts/stack.ts';
+
+export interface ApiHarness {
+  app: Express;
+  config: AppConfig;
+  db: Db;
+  /** A supertest agent that keeps cookies and sends this app's Origin, as the browser apps do. */
+  agent(): ReturnType<typeof request.agent>;
+  /** Signs the agent in through the authorization-code flow of the local provider. */
+  signIn(agent: ReturnType<typeof request.agent>, email: string): Promise<void>;
+  close(): Promise<void>;
+}
+
+export const fixedNow = () => new Date('2026-12-01T10:00:00Z');
+
+export async function startApiHarness(): Promise<ApiHarness> {
+  const google = await startGoogleOAuthFake({
+    port: 0,
+    identities: demoPeople.map(({ sub, email, name, givenName, familyName }) => ({ sub, email, name, givenName, familyName })),
+  });
+  const stack = localStack('test');
+  const config = loadConfig({ ...process.env, ...stack.env, GOOGLE_OAUTH_BASE_URL: google.url, STATIC_DIR: '/nonexistent' });
+  const db = openDatabase(config.database);
+  await db.migrate.latest();
+  await db.seed.run();
+  const sessions: SessionLayer = await createSessionLayer(config);
+  const mailer = createMailer(config);
+  const app = createApp({ config, db, sessions, stripe: createStripeClient(config), mailer, now: fixedNow, log: () => {} });
+
+  const agent = () => request.agent(app).set('Origin', config.appOrigin);
+
+  async function signIn(client: ReturnType<typeof request.agent>, email: string): Promise<void> {
+    const start = await client.get('/api/auth/google').expect(302);
+    const authorizeUrl = new URL(start.headers.location!);
+    const person = demoPeople.find((p) => p.email === email);
+    // The stand-in's page posts the chosen identity back to itself and redirects with a code.
+    const form = new URLSearchParams({ ...Object.fromEntries(authorizeUrl.searchParams), ...(person ? { identity: person.sub } : { email }) });
+    const decision = await fetch(new URL('/authorize', google.url), { method: 'POST', body: form, redirect: 'manual' });
+    const callback = new URL(decision.headers.get('location')!);
+    await client.get(`${callback.pathname}${callback.search}`).expect(302);
+  }
+
+  return {
+    app,
+    config,
+    db,
+    agent,
+    signIn,
+    async close() {
+      await sessions.close();
+      mailer.close();
+      await db.destroy();
+      await google.close();
+    },
+  };
+}
