@@ -1,0 +1,157 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { checkPricingRuleSet, priceQuote, type PricingRuleSet, type QuoteInput, type QuotePlacement } from '../../../server/src/engine/index.ts';
+
+// Worked arithmetic, not market rates (trade-facts: no neutral published rate exists).
+const ruleSet: PricingRuleSet = {
+  version: 3,
+  currency: 'USD',
+  garmentBaseCents: { '2T': 1800, '4': 2000 },
+  centsPerThousandStitches: 95,
+  minimumPerPlacementCents: 500,
+  extraHoopingCents: 150,
+  colorChangeCents: 25,
+  artworkSetupCents: 2500,
+  lettering: { centsPerThousandStitches: 120, minimumCents: 600 },
+  rushMultiplierBp: 15_000,
+  quantityBreaks: [{ minQty: 6, discountBp: 1000 }, { minQty: 3, discountBp: 500 }],
+  taxRateBp: 825,
+};
+
+const border: QuotePlacement = { id: 'hem', label: 'Hem border', kind: 'stitching', stitches: 12_345, hoopings: 4, colorChanges: 5, hasCustomerArtwork: false };
+const name: QuotePlacement = { id: 'name', label: 'Name', kind: 'lettering', stitches: 1187, hoopings: 1, colorChanges: 0, hasCustomerArtwork: false };
+const upload: QuotePlacement = { id: 'pocket', label: 'Pocket art', kind: 'stitching', stitches: 3001, hoopings: 1, colorChanges: 2, hasCustomerArtwork: true };
+const order: QuoteInput = { ruleSet, sizeCode: '4', quantity: 3, placements: [border, name, upload], isRush: true };
+
+const flatRules: PricingRuleSet = { ...ruleSet, minimumPerPlacementCents: 0, extraHoopingCents: 0, colorChangeCents: 0, quantityBreaks: [], rushMultiplierBp: 10_000, taxRateBp: 0 };
+
+describe('priceQuote', () => {
+  it('when a rush order of 3 has a border, a name and customer artwork, then every line follows the worked arithmetic', () => {
+    const quote = priceQuote(order);
+    expect(quote.ok).toBe(true);
+    if (!quote.ok) return;
+    expect(quote.lines.map(({ code, amountCents }) => [code, amountCents])).toEqual([
+      ['garment', 6000], // 2,000 × 3
+      ['stitching', 3518], // 12,345 × 95 / 1,000 = 1,172.775 ¢ a garment × 3 = 3,518.325
+      ['lettering', 1800], // 1,187 × 120 / 1,000 = 142.44 ¢, under the 600 ¢ minimum, × 3
+      ['stitching', 1500], // 3,001 × 95 / 1,000 = 285.095 ¢, under the 500 ¢ minimum, × 3
+      ['extra-hoopings', 1350], // (4 − 1) × 150 × 3
+      ['color-changes', 525], // 7 × 25 × 3
+      ['quantity-discount', -435], // 5 % of 8,693 = 434.65
+      ['rush', 4129], // 50 % of 8,258
+      ['artwork-setup', 2500], // once per order
+      ['tax', 1723], // 8.25 % of 20,887 = 1,723.1775
+    ]);
+    expect(quote).toMatchObject({ subtotalCents: 20_887, taxCents: 1723, totalCents: 22_610, currency: 'USD', ruleSetVersion: 3 });
+    expect(quote.lines[1]).toMatchObject({ placementId: 'hem', label: 'Hem border: 12,345 stitches × 3 garments' });
+  });
+
+  it('when a line ends on exactly half a cent, then it rounds up; just under half rounds down', () => {
+    const at = (stitches: number) => {
+      const quote = priceQuote({ ruleSet: { ...flatRules, centsPerThousandStitches: 5 }, sizeCode: '2T', quantity: 1, placements: [{ ...border, stitches }], isRush: false });
+      return quote.ok ? quote.lines[1].amountCents : Number.NaN;
+    };
+    expect(at(1100)).toBe(6); // 5.5 ¢
+    expect(at(1099)).toBe(5); // 5.495 ¢
+    expect(at(1300)).toBe(7); // 6.5 ¢
+  });
+
+  it('when tax or a discount lands on half a cent, then its magnitude rounds up', () => {
+    const taxed = priceQuote({ ruleSet: { ...flatRules, garmentBaseCents: { '4': 200 }, taxRateBp: 825 }, sizeCode: '4', quantity: 1, placements: [], isRush: false });
+    expect(taxed.ok && taxed.taxCents).toBe(17); // 16.5 ¢
+    const discounted = priceQuote({
+      ruleSet: { ...flatRules, centsPerThousandStitches: 10, quantityBreaks: [{ minQty: 1, discountBp: 500 }] },
+      sizeCode: '4',
+      quantity: 1,
+      placements: [{ ...border, stitches: 1000 }],
+      isRush: false,
+    });
+    expect(discounted.ok && discounted.lines.find((line) => line.code === 'quantity-discount')?.amountCents).toBe(-1); // 0.5 ¢
+  });
+
+  it('when the quantity reaches a higher break, then the larger discount applies', () => {
+    const six = priceQuote({ ...order, quantity: 6, isRush: false });
+    expect(six.ok && six.lines.find((line) => line.code === 'quantity-discount')?.label).toBe('Quantity discount: 10 % off embroidery for 6 or more');
+  });
+
+  it.each([
+    ['an unknown size', { ...order, sizeCode: 'XXL' }, 'Price list 3 has no garment price for size XXL.'],
+    ['a lower-case currency', { ...order, ruleSet: { ...ruleSet, currency: 'usd' } }, /ISO 4217/],
+    ['a rush multiplier below 1', { ...order, ruleSet: { ...ruleSet, rushMultiplierBp: 9000 } }, /rush/],
+    ['fractional cents', { ...order, ruleSet: { ...ruleSet, colorChangeCents: 2.5 } }, /colorChangeCents/],
+    ['a zero quantity', { ...order, quantity: 0 }, /quantity/],
+    ['a placement without hoopings', { ...order, placements: [{ ...border, hoopings: 0 }] }, /Placement 1/],
+    ['an absurd quantity', { ...order, quantity: Number.MAX_SAFE_INTEGER }, /too large/],
+  ])('when given %s, then it fails with a reason', (_, input, reason) => {
+    const quote = priceQuote(input as QuoteInput);
+    expect(quote.ok).toBe(false);
+    expect(!quote.ok && quote.reason).toMatch(reason);
+  });
+
+  it('a rule set survives a JSON round trip unchanged and still validates', () => {
+    const copy: PricingRuleSet = JSON.parse(JSON.stringify(ruleSet));
+    expect(copy).toEqual(ruleSet);
+    expect(checkPricingRuleSet(copy)).toEqual({ ok: true });
+  });
+
+  const cents = (max: number) => fc.integer({ min: 0, max });
+  const arbitraryRules = fc.record({
+    version: fc.integer({ min: 1, max: 99 }),
+    currency: fc.constantFrom('USD', 'EUR', 'GBP', 'JPY'),
+    garmentBaseCents: fc.record({ M: cents(10_000) }),
+    centsPerThousandStitches: cents(500),
+    minimumPerPlacementCents: cents(2000),
+    extraHoopingCents: cents(1000),
+    colorChangeCents: cents(200),
+    artworkSetupCents: cents(10_000),
+    lettering: fc.record({ centsPerThousandStitches: cents(500), minimumCents: cents(2000) }),
+    rushMultiplierBp: fc.integer({ min: 10_000, max: 30_000 }),
+    quantityBreaks: fc.array(fc.record({ minQty: fc.integer({ min: 1, max: 50 }), discountBp: fc.integer({ min: 0, max: 10_000 }) }), { maxLength: 4 }),
+    taxRateBp: fc.integer({ min: 0, max: 2500 }),
+  });
+  const arbitraryPlacement = fc.record({
+    id: fc.string(),
+    label: fc.string(),
+    kind: fc.constantFrom('stitching' as const, 'lettering' as const),
+    stitches: fc.integer({ min: 0, max: 500_000 }),
+    hoopings: fc.integer({ min: 1, max: 30 }),
+    colorChanges: fc.integer({ min: 0, max: 40 }),
+    hasCustomerArtwork: fc.boolean(),
+  });
+  const arbitraryOrder = fc.record({
+    ruleSet: arbitraryRules,
+    sizeCode: fc.constant('M'),
+    quantity: fc.integer({ min: 1, max: 500 }),
+    placements: fc.array(arbitraryPlacement, { minLength: 1, maxLength: 5 }),
+    isRush: fc.boolean(),
+  });
+
+  it('property: the lines always add up to the subtotal and total, in whole cents', () => {
+    fc.assert(
+      fc.property(arbitraryOrder, (input) => {
+        const quote = priceQuote(input);
+        expect(quote.ok).toBe(true);
+        if (!quote.ok) return;
+        const sum = (lines: typeof quote.lines) => lines.reduce((total, line) => total + line.amountCents, 0);
+        expect(sum(quote.lines)).toBe(quote.totalCents);
+        expect(sum(quote.lines.filter((line) => line.code !== 'tax'))).toBe(quote.subtotalCents);
+        expect(quote.subtotalCents + quote.taxCents).toBe(quote.totalCents);
+        expect(quote.lines.every((line) => Number.isSafeInteger(line.amountCents))).toBe(true);
+      }),
+    );
+  });
+
+  it('property: the price never decreases as a placement gains stitches', () => {
+    fc.assert(
+      fc.property(arbitraryOrder, fc.nat({ max: 4 }), fc.integer({ min: 1, max: 100_000 }), (input, pick, extra) => {
+        const index = pick % input.placements.length;
+        const more = input.placements.map((placement, i) => (i === index ? { ...placement, stitches: placement.stitches + extra } : placement));
+        const before = priceQuote(input);
+        const after = priceQuote({ ...input, placements: more });
+        if (!before.ok || !after.ok) throw new Error('quote failed');
+        expect(after.totalCents).toBeGreaterThanOrEqual(before.totalCents);
+        expect(after.subtotalCents).toBeGreaterThanOrEqual(before.subtotalCents);
+      }),
+    );
+  });
+});
