@@ -1,0 +1,56 @@
+import type { Knex } from 'knex';
+import { garments, mockupScale } from './data/garments.ts';
+import { scaleZones } from './data/placement-zones.ts';
+import { readSeedFile } from './data/seed-files.ts';
+import { catalogStamp } from './data/seed-time.ts';
+
+export async function seed(knex: Knex): Promise<void> {
+  await knex('garments').insert(
+    garments.map((garment, index) => ({
+      id: garment.id,
+      slug: garment.slug,
+      name: garment.name,
+      kind: garment.kind,
+      description: garment.description,
+      fabric_type: garment.fabricType,
+      is_napped: garment.isNapped,
+      min_age_months: garment.ageMonths[0],
+      max_age_months: garment.ageMonths[1],
+      mockup_svg: readSeedFile('garments', garment.mockupFile),
+      is_active: true,
+      sort_order: index + 1,
+      ...catalogStamp,
+    })),
+  );
+  await knex('garment_sizes').insert(
+    garments.flatMap((garment) =>
+      garment.sizes.map((size, index) => {
+        const scale = mockupScale(garment, size);
+        return {
+          id: size.id,
+          garment_id: garment.id,
+          code: size.code,
+          label: size.label,
+          sort_order: index + 1,
+          hem_front_mm: size.hem?.frontMm ?? null,
+          hem_circumference_mm: size.hem?.circumferenceMm ?? null,
+          mockup_scale: scale.toFixed(4),
+          placement_zones: JSON.stringify(scaleZones(garment.zones, scale)),
+          ...catalogStamp,
+        };
+      }),
+    ),
+  );
+  await knex('fabric_colours').insert(
+    garments.flatMap((garment) =>
+      garment.colours.map((colour, index) => ({
+        id: colour.id,
+        garment_id: garment.id,
+        name: colour.name,
+        hex: colour.hex,
+        sort_order: index + 1,
+        ...catalogStamp,
+      })),
+    ),
+  );
+}

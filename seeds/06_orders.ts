@@ -1,0 +1,75 @@
+import type { Knex } from 'knex';
+import { userIds } from './data/accounts.ts';
+import { replayOrder } from './data/order-history.ts';
+import { orders, shipToByCustomer } from './data/orders.ts';
+import { demoPeople } from './data/people.ts';
+import { buildQuote, quoteSpecs } from './data/quotes.ts';
+
+export async function seed(knex: Knex): Promise<void> {
+  const ids = { event: 1, proof: 1, email: 1 };
+  const rows: Record<'orders' | 'items' | 'events' | 'proofs' | 'payments' | 'emails', object[]> = {
+    orders: [],
+    items: [],
+    events: [],
+    proofs: [],
+    payments: [],
+    emails: [],
+  };
+  for (const order of orders) {
+    const spec = quoteSpecs.find((candidate) => candidate.id === order.quoteId);
+    if (!spec) throw new Error(`Seed data: order ${order.number} names a missing quote`);
+    const quote = buildQuote(spec);
+    if (!quote.customer || quote.designId === null) throw new Error(`Seed data: order ${order.number} needs a saved design`);
+    const totals = quote.row as { subtotal_cents: number; tax_cents: number; total_cents: number; currency: string; quantity: number };
+    const history = replayOrder({
+      order,
+      customer: quote.customer,
+      customerEmail: demoPeople[userIds[quote.customer] - 1].email,
+      totalCents: totals.total_cents,
+      currency: totals.currency,
+      ids,
+    });
+    rows.orders.push({
+      id: order.id,
+      number: order.number,
+      customer_id: userIds[quote.customer],
+      quote_id: spec.id,
+      status: history.status,
+      payment_status: history.paymentStatus,
+      subtotal_cents: totals.subtotal_cents,
+      tax_cents: totals.tax_cents,
+      total_cents: totals.total_cents,
+      currency: totals.currency,
+      needed_by: order.neededBy ?? null,
+      ship_to: JSON.stringify(shipToByCustomer[quote.customer]),
+      customer_note: order.customerNote ?? null,
+      placed_at: history.placedAt,
+      created_at: history.createdAt,
+      updated_at: history.updatedAt,
+    });
+    // One line per order: the quote priced one design on identical garments. The unit price is the pre-tax
+    // amount shared over the garments; the one-off artwork setup makes it inexact, so total_cents is the figure.
+    rows.items.push({
+      id: order.id,
+      order_id: order.id,
+      design_id: quote.designId,
+      garment_size_id: quote.garmentSizeId,
+      quantity: totals.quantity,
+      unit_price_cents: Math.round(totals.subtotal_cents / totals.quantity),
+      total_cents: totals.subtotal_cents,
+      description: quote.description,
+      created_at: history.createdAt,
+      updated_at: history.createdAt,
+    });
+    rows.events.push(...history.events);
+    rows.proofs.push(...history.proofs);
+    rows.payments.push(history.payment);
+    rows.emails.push(...history.emails);
+  }
+  await knex('orders').insert(rows.orders);
+  await knex('order_items').insert(rows.items);
+  await knex('order_events').insert(rows.events);
+  await knex('proofs').insert(rows.proofs);
+  await knex('payments').insert(rows.payments);
+  await knex('email_log').insert(rows.emails);
+}
