@@ -4,8 +4,9 @@ export const garmentSize = z.object({
   id: z.number().int(),
   code: z.string(),
   label: z.string(),
-  hemFrontMm: z.number(),
-  hemCircumferenceMm: z.number(),
+  /** Null for garments without a hem border (bibs, bonnets). */
+  hemFrontMm: z.number().nullable(),
+  hemCircumferenceMm: z.number().nullable(),
 });
 
 export const fabricColour = z.object({ id: z.number().int(), name: z.string(), hex: z.string() });

@@ -32,8 +32,8 @@ export async function listActiveGarments(db: Db): Promise<GarmentSummary[]> {
         id: s.id,
         code: s.code,
         label: s.label,
-        hemFrontMm: Number(s.hem_front_mm),
-        hemCircumferenceMm: Number(s.hem_circumference_mm),
+        hemFrontMm: s.hem_front_mm === null ? null : Number(s.hem_front_mm),
+        hemCircumferenceMm: s.hem_circumference_mm === null ? null : Number(s.hem_circumference_mm),
       })),
     colours: colours.filter((c) => c.garment_id === g.id).map((c) => ({ id: c.id, name: c.name, hex: c.hex })),
   }));

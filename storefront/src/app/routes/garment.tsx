@@ -21,6 +21,7 @@ export function GarmentPage() {
       </div>
     );
   }
+  const hasHem = garment.sizes.some((size) => size.hemCircumferenceMm !== null);
   const colour = garment.colours.find((c) => c.id === colourId) ?? garment.colours[0];
   return (
     <div className="grid gap-8 lg:grid-cols-[3fr_2fr]">
@@ -46,7 +47,9 @@ export function GarmentPage() {
           </div>
         </fieldset>
         <h2 className="mt-6 font-medium">Sizes and hem lengths</h2>
-        <p className="text-sm text-walnut-500">The hem length decides how many repeats of a border fit all the way round.</p>
+        <p className="text-sm text-walnut-500">
+          {hasHem ? 'The hem length decides how many repeats of a border fit all the way round.' : 'This piece takes a name or a single motif rather than a hem border.'}
+        </p>
         <table className="mt-2 w-full text-left text-sm">
           <thead className="text-walnut-500">
             <tr>
@@ -59,8 +62,8 @@ export function GarmentPage() {
             {garment.sizes.map((size) => (
               <tr key={size.id} className="border-t border-linen-200">
                 <td className="py-2">{size.label}</td>
-                <td className="py-2">{formatLength(size.hemFrontMm)}</td>
-                <td className="py-2">{formatLength(size.hemCircumferenceMm)}</td>
+                <td className="py-2">{size.hemFrontMm === null ? '—' : formatLength(size.hemFrontMm)}</td>
+                <td className="py-2">{size.hemCircumferenceMm === null ? '—' : formatLength(size.hemCircumferenceMm)}</td>
               </tr>
             ))}
           </tbody>
