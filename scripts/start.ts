@@ -13,18 +13,19 @@ const usesOwnDatabase = !process.env.DATABASE_URL;
 let startedDatabase = false;
 let server: ChildProcess | undefined;
 let fakes: Awaited<ReturnType<typeof startLocalFakes>> | undefined;
-let isStopping = false;
+let stopping: Promise<never> | undefined;
 
-async function stopAll(exitCode: number): Promise<never> {
-  if (!isStopping) {
-    isStopping = true;
+/** Stops everything once; further signals (npm and tsx pass Ctrl-C on as well) wait for the same shutdown. */
+function stopAll(exitCode: number): Promise<never> {
+  stopping ??= (async () => {
     console.log('\nStopping the demo shop…');
     await stopProcess(server);
     await fakes?.close();
     if (startedDatabase) await stopLocalDatabase();
     console.log('Stopped.');
-  }
-  process.exit(exitCode);
+    process.exit(exitCode);
+  })();
+  return stopping;
 }
 
 process.on('SIGINT', () => void stopAll(0));
@@ -42,7 +43,7 @@ try {
   await buildApps();
   server = await startServerProcess(stack);
   server.on('exit', (code) => {
-    if (!isStopping) {
+    if (!stopping) {
       console.error(`The API server stopped unexpectedly (exit ${code}).`);
       void stopAll(1);
     }

@@ -25,7 +25,7 @@ export function GarmentPage() {
   const colour = garment.colours.find((c) => c.id === colourId) ?? garment.colours[0];
   return (
     <div className="grid gap-8 lg:grid-cols-[3fr_2fr]">
-      <GarmentPicture garment={garment} colourHex={colour?.hex} className="min-h-80" />
+      <GarmentPicture garment={garment} colourHex={colour?.hex} className="min-h-96" imageClassName="max-h-[32rem]" />
       <div>
         <Link to={paths.home.href()} className="text-sm text-walnut-500 hover:text-madder-600">← All garments</Link>
         <h1 className="mt-2 text-3xl font-semibold">{garment.name}</h1>
