@@ -8,6 +8,7 @@
 import { execFileSync, spawn, spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { createServer } from 'node:net';
 import { userInfo } from 'node:os';
 import { join, resolve } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
@@ -97,6 +98,15 @@ function runningPid(settings: LocalDatabaseSettings): number | undefined {
   }
 }
 
+function isPortFree(port: number): Promise<boolean> {
+  return new Promise((resolve) => {
+    const probe = createServer()
+      .once('error', () => resolve(false))
+      .once('listening', () => probe.close(() => resolve(true)));
+    probe.listen(port, '127.0.0.1');
+  });
+}
+
 function initialiseDataDir(settings: LocalDatabaseSettings): void {
   if (existsSync(join(settings.dataDir, 'mysql'))) return;
   console.log(`Initialising a MariaDB data folder in ${settings.dataDir} ...`);
@@ -138,6 +148,12 @@ export async function startLocalDatabase(settings = localDatabaseSettings()): Pr
   if (runningPid(settings) && ping(settings)) {
     runSql(settings, grantSql(settings));
     return { started: false };
+  }
+  if (!(await isPortFree(settings.port))) {
+    throw new Error(
+      `Port ${settings.port} on 127.0.0.1 is taken by another program (another checkout's database?). ` +
+        `Stop it, or choose another port, e.g. HW_DB_PORT=3308 npm start.`,
+    );
   }
   initialiseDataDir(settings);
   const logFile = join(settings.dataDir, 'mariadbd.err');
