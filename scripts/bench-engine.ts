@@ -34,7 +34,7 @@ function loadFont(name: string): GlyphOutlineSource {
 const ruleSet: PricingRuleSet = {
   version: 7,
   currency: 'USD',
-  garmentBaseCents: { '2T': 1800, '4': 2000, '6': 2200 },
+  garmentBaseCents: { 'smocked-yoke-dress': { '2T': 1800, '4': 2000, '6': 2200 } },
   centsPerThousandStitches: 95,
   minimumPerPlacementCents: 500,
   extraHoopingCents: 150,
@@ -49,6 +49,7 @@ const ruleSet: PricingRuleSet = {
 const sailboat: CatalogMotif = { stitchCount: 2400, mix: { run: 15, satin: 55, fill: 30 }, colorChanges: 2, widthMm: 60, heightMm: 45, trims: 3 };
 const payload = {
   ruleSet,
+  garment: { slug: 'smocked-yoke-dress', name: 'Smocked yoke dress' },
   sizeCode: '4',
   quantity: 3,
   isRush: false,
@@ -84,7 +85,7 @@ function fullQuote(): number {
     hoopings: placements.reduce((sum, p) => sum + p.hoopings, 0),
     trims: border.trims + name.trims,
   });
-  const quote = priceQuote({ ruleSet, sizeCode: payload.sizeCode, quantity: payload.quantity, placements, isRush: payload.isRush });
+  const quote = priceQuote({ ruleSet, garment: payload.garment, sizeCode: payload.sizeCode, quantity: payload.quantity, placements, isRush: payload.isRush });
   if (!quote.ok || !minutes.ok) throw new Error('quote failed');
   return quote.totalCents;
 }

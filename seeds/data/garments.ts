@@ -154,7 +154,7 @@ export const garments: SeedGarment[] = [
     mockupFile: 'sun-bonnet.svg',
     referenceSizeCode: '3-6m',
     zones: [{ code: 'brim', label: 'Brim', xMm: 95, yMm: 30, widthMm: 70, heightMm: 30 }],
-    // Bonnet codes differ from the clothing sizes because the price list keys blank prices by size code alone.
+    // Bonnet codes differ from the clothing sizes so each size reads plainly in the price list and on quotes.
     sizes: [
       { id: 501, code: '0-3m', label: '0–3 months', scale: 0.92 },
       { id: 502, code: '3-6m', label: '3–6 months', scale: 1 },

@@ -1,22 +1,24 @@
 import type { PricingRuleSet } from '../../server/src/engine/index.ts';
+import { garments } from './garments.ts';
 
-/** Blank garment prices by size code, shared by every garment that uses the code (the rule set keys them so). */
-const garmentBaseCents: Record<string, number> = {
-  '6m': 3400,
-  '12m': 3600,
-  '18m': 3800,
-  '2T': 4200,
-  '3T': 4400,
-  '4T': 4600,
-  small: 1200,
-  medium: 1300,
-  large: 1400,
-  xlarge: 1500,
-  '0-3m': 2200,
-  '3-6m': 2200,
-  '6-12m': 2400,
-  '12-24m': 2600,
+/**
+ * Blank garment prices by garment slug and size code, for every seeded garment and size. The knit romper is the
+ * cheapest of the clothes, the hand-smocked lawn bishop dress the dearest; bibs and bonnets are small blanks.
+ */
+const garmentBaseCents: PricingRuleSet['garmentBaseCents'] = {
+  'smocked-yoke-dress': { '6m': 3400, '12m': 3600, '18m': 3800, '2T': 4200, '3T': 4400, '4T': 4600 },
+  'bubble-romper': { '6m': 2400, '12m': 2600, '18m': 2800, '2T': 3000 },
+  'bishop-dress': { '6m': 3800, '12m': 4000, '18m': 4200, '2T': 4600, '3T': 4800 },
+  'terry-bib': { small: 1200, medium: 1300, large: 1400, xlarge: 1500 },
+  'sun-bonnet': { '0-3m': 2200, '3-6m': 2200, '6-12m': 2400, '12-24m': 2600 },
 };
+
+// A garment or size added to the seeds without a price would only fail later, when a quote for it is priced.
+for (const garment of garments) {
+  for (const size of garment.sizes) {
+    if (garmentBaseCents[garment.slug]?.[size.code] === undefined) throw new Error(`Seed data: no blank price for ${garment.slug} in size ${size.code}`);
+  }
+}
 
 const publishedRules: PricingRuleSet = {
   version: 1,

@@ -72,7 +72,9 @@ export function buildQuote(spec: QuoteSpec): BuiltQuote {
   const figures = designFigures(choice);
   const quote = priceQuote({
     ruleSet: publishedRuleSet.rules,
+    garment: { slug: figures.garment.slug, name: figures.garment.name },
     sizeCode: figures.size.code,
+    sizeLabel: figures.size.label,
     quantity: spec.quantity,
     placements: figures.quotePlacements,
     isRush: spec.isRush,

@@ -22,7 +22,11 @@ export interface QuotePlacement {
 
 export interface QuoteInput {
   ruleSet: PricingRuleSet;
+  /** The blank being embroidered: the slug keys the price list, the name is shown on the garment line. */
+  garment: { slug: string; name: string };
   sizeCode: string;
+  /** Shown on the garment line instead of the code: "6 months". */
+  sizeLabel?: string;
   /** Identical garments in the order. */
   quantity: number;
   placements: QuotePlacement[];
@@ -68,12 +72,14 @@ export interface Quote {
  */
 export function priceQuote(input: QuoteInput): EngineResult<Quote> {
   if (!isRecord(input)) return fail('The quote request is missing.');
-  const { ruleSet, sizeCode, quantity, placements, isRush } = input;
+  const { ruleSet, garment, sizeCode, sizeLabel, quantity, placements, isRush } = input;
   const ruleCheck = checkPricingRuleSet(ruleSet);
   if (!ruleCheck.ok) return ruleCheck;
+  if (!isRecord(garment) || typeof garment.slug !== 'string' || typeof garment.name !== 'string') return fail('Choose a garment.');
   if (typeof sizeCode !== 'string') return fail('Choose a garment size.');
-  const garmentCents = garmentBaseFor(ruleSet, sizeCode);
-  if (garmentCents === undefined) return fail(`Price list ${ruleSet.version} has no garment price for size ${sizeCode}.`);
+  if (sizeLabel !== undefined && typeof sizeLabel !== 'string') return fail('The size label must be text.');
+  const garmentCents = garmentBaseFor(ruleSet, garment.slug, sizeCode);
+  if (garmentCents === undefined) return fail(`Price list ${ruleSet.version} has no price for the ${garment.name} in size ${sizeCode}.`);
   if (!isWholeNumber(quantity, 1)) return fail('The quantity must be a whole number, 1 or more.');
   if (typeof isRush !== 'boolean') return fail('Say whether the order is a rush order.');
   if (!Array.isArray(placements)) return fail('The placements must be a list.');
@@ -85,7 +91,7 @@ export function priceQuote(input: QuoteInput): EngineResult<Quote> {
   const qty = BigInt(quantity);
   const per = ` × ${formatCount(quantity, 'garment')}`;
   const lines: { code: QuoteLineCode; label: string; cents: bigint; placementId?: string }[] = [
-    { code: 'garment', label: `Garment, size ${sizeCode}${per}`, cents: BigInt(garmentCents) * qty },
+    { code: 'garment', label: `${garment.name}, size ${sizeLabel ?? sizeCode}${per}`, cents: BigInt(garmentCents) * qty },
   ];
   let workCents = 0n;
   for (const placement of placements) {

@@ -17,8 +17,11 @@ export interface PricingRuleSet {
   version: number;
   /** ISO 4217 code, e.g. "USD". */
   currency: string;
-  /** Blank garment price by size code ("2T", "4", "6X"…), per garment. */
-  garmentBaseCents: Record<string, number>;
+  /**
+   * Blank garment price, per garment, by garment slug and then size code: `{ "bishop-dress": { "6m": 3800 } }`.
+   * Each blank has its own prices, so a 2T bib can cost less than a 2T dress.
+   */
+  garmentBaseCents: Record<string /* garment slug */, Record<string /* size code */, number>>;
   /** Embroidery price per 1,000 stitches, per garment (stitch count is the trade's standard basis). */
   centsPerThousandStitches: number;
   /** Least a placement costs per garment, however few its stitches. */
@@ -45,9 +48,12 @@ export function checkPricingRuleSet(ruleSet: PricingRuleSet): EngineResult<objec
   if (!isRecord(ruleSet)) return fail('The price list is missing.');
   if (!isWholeNumber(ruleSet.version, 1)) return fail('The price list version must be a whole number, 1 or more.');
   if (typeof ruleSet.currency !== 'string' || !/^[A-Z]{3}$/.test(ruleSet.currency)) return fail('The currency must be a three-letter ISO 4217 code such as USD.');
-  if (!isRecord(ruleSet.garmentBaseCents)) return fail('The price list has no garment prices by size.');
-  for (const [size, cents] of Object.entries(ruleSet.garmentBaseCents)) {
-    if (!isWholeNumber(cents)) return fail(`The garment price for size ${size} must be whole cents, 0 or more.`);
+  if (!isRecord(ruleSet.garmentBaseCents)) return fail('The price list has no garment prices by garment and size.');
+  for (const [garment, sizes] of Object.entries(ruleSet.garmentBaseCents)) {
+    if (!isRecord(sizes)) return fail(`The garment prices for ${garment} must be listed by size code.`);
+    for (const [size, cents] of Object.entries(sizes)) {
+      if (!isWholeNumber(cents)) return fail(`The garment price for ${garment} in size ${size} must be whole cents, 0 or more.`);
+    }
   }
   for (const field of CENT_FIELDS) {
     if (!isWholeNumber(ruleSet[field])) return fail(`The price list's ${field} must be whole cents, 0 or more.`);
@@ -74,7 +80,9 @@ export function quantityBreakFor(ruleSet: PricingRuleSet, quantity: number): Qua
   );
 }
 
-/** The garment price for a size, read without touching inherited object keys. */
-export function garmentBaseFor(ruleSet: PricingRuleSet, sizeCode: string): number | undefined {
-  return Object.hasOwn(ruleSet.garmentBaseCents, sizeCode) ? ruleSet.garmentBaseCents[sizeCode] : undefined;
+/** The blank price of a garment in a size, read without touching inherited object keys at either level. */
+export function garmentBaseFor(ruleSet: PricingRuleSet, garmentSlug: string, sizeCode: string): number | undefined {
+  if (!Object.hasOwn(ruleSet.garmentBaseCents, garmentSlug)) return undefined;
+  const sizes = ruleSet.garmentBaseCents[garmentSlug];
+  return Object.hasOwn(sizes, sizeCode) ? sizes[sizeCode] : undefined;
 }

@@ -32,11 +32,27 @@ function survives(call: () => unknown): void {
   if (typeof result === 'object' && result !== null && 'ok' in result && result.ok === false) expect(typeof result.reason).toBe('string');
 }
 
+/** A sound price list, for checking the hostile parts one at a time. */
+const rules = {
+  version: 1,
+  currency: 'USD',
+  garmentBaseCents: { dress: { M: 2000 } },
+  centsPerThousandStitches: 100,
+  minimumPerPlacementCents: 500,
+  extraHoopingCents: 100,
+  colorChangeCents: 25,
+  artworkSetupCents: 2500,
+  lettering: { centsPerThousandStitches: 120, minimumCents: 600 },
+  rushMultiplierBp: 15_000,
+  quantityBreaks: [],
+  taxRateBp: 800,
+};
+
 describe('no input makes an engine function throw', () => {
   it('hand-picked hostile values', () => {
     const bare = Object.create(null) as Record<string, unknown>;
     survives(() => nearestThreads('#ffffff', [{ code: bare, name: bare, hex: bare }] as never, 1));
-    survives(() => priceQuote({ ruleSet: bare, sizeCode: bare, quantity: bare, placements: bare, isRush: bare } as never));
+    survives(() => priceQuote({ ruleSet: bare, garment: bare, sizeCode: bare, sizeLabel: bare, quantity: bare, placements: bare, isRush: bare } as never));
     survives(() => estimateStitches({ kind: 'svg', svgText: '<svg width="1in" height="1in" viewBox="0 0 1 1"><path d="M0 0L1e400 0" stroke="#000"/></svg>' }));
     survives(() => estimateStitches({ kind: 'svg', svgText: '<svg width="1in" viewBox="0 0 1 1"><g transform="scale(1e300)"><rect width="1e300" height="1e300"/></g></svg>' }));
     survives(() => estimateStitches({ kind: 'svg', svgText: '<!DOCTYPE svg [<!ENTITY a "aaaaaaaaaa"><!ENTITY b "&a;&a;&a;&a;">]><svg width="1in">&b;</svg>' }));
@@ -108,7 +124,9 @@ describe('no input makes an engine function throw', () => {
         survives(() => estimateRunMinutes(anything as never));
         survives(() => estimateRunMinutes({ ...counts, machine } as never));
         survives(() => priceQuote(anything as never));
-        survives(() => priceQuote({ ruleSet: anything, sizeCode: 'M', quantity: counts.stitches, placements: [counts], isRush: false } as never));
+        survives(() => priceQuote({ ruleSet: anything, garment: { slug: 'dress', name: 'Dress' }, sizeCode: 'M', quantity: counts.stitches, placements: [counts], isRush: false } as never));
+        survives(() => priceQuote({ ruleSet: { ...rules, garmentBaseCents: anything }, garment: anything, sizeCode: anything, sizeLabel: anything, quantity: 1, placements: [], isRush: false } as never));
+        survives(() => priceQuote({ ruleSet: { ...rules, garmentBaseCents: { dress: anything } }, garment: { slug: 'dress', name: 'Dress' }, sizeCode: 'M', quantity: 1, placements: [], isRush: false } as never));
         survives(() => checkPricingRuleSet(anything as never));
       }),
       { numRuns: 500 },

@@ -6,7 +6,7 @@ import { checkPricingRuleSet, priceQuote, type PricingRuleSet, type QuoteInput, 
 const ruleSet: PricingRuleSet = {
   version: 3,
   currency: 'USD',
-  garmentBaseCents: { '2T': 1800, '4': 2000 },
+  garmentBaseCents: { 'smocked-dress': { '2T': 1800, '4': 2000 }, bib: { '2T': 700, '4': 800 } },
   centsPerThousandStitches: 95,
   minimumPerPlacementCents: 500,
   extraHoopingCents: 150,
@@ -21,7 +21,8 @@ const ruleSet: PricingRuleSet = {
 const border: QuotePlacement = { id: 'hem', label: 'Hem border', kind: 'stitching', stitches: 12_345, hoopings: 4, colorChanges: 5, hasCustomerArtwork: false };
 const name: QuotePlacement = { id: 'name', label: 'Name', kind: 'lettering', stitches: 1187, hoopings: 1, colorChanges: 0, hasCustomerArtwork: false };
 const upload: QuotePlacement = { id: 'pocket', label: 'Pocket art', kind: 'stitching', stitches: 3001, hoopings: 1, colorChanges: 2, hasCustomerArtwork: true };
-const order: QuoteInput = { ruleSet, sizeCode: '4', quantity: 3, placements: [border, name, upload], isRush: true };
+const dress = { slug: 'smocked-dress', name: 'Smocked dress' };
+const order: QuoteInput = { ruleSet, garment: dress, sizeCode: '4', quantity: 3, placements: [border, name, upload], isRush: true };
 
 const flatRules: PricingRuleSet = { ...ruleSet, minimumPerPlacementCents: 0, extraHoopingCents: 0, colorChangeCents: 0, quantityBreaks: [], rushMultiplierBp: 10_000, taxRateBp: 0 };
 
@@ -43,12 +44,22 @@ describe('priceQuote', () => {
       ['tax', 1723], // 8.25 % of 20,887 = 1,723.1775
     ]);
     expect(quote).toMatchObject({ subtotalCents: 20_887, taxCents: 1723, totalCents: 22_610, currency: 'USD', ruleSetVersion: 3 });
+    expect(quote.lines[0]).toMatchObject({ code: 'garment', label: 'Smocked dress, size 4 × 3 garments' });
     expect(quote.lines[1]).toMatchObject({ placementId: 'hem', label: 'Hem border: 12,345 stitches × 3 garments' });
+  });
+
+  it('when two garments share a size code, then each is priced from its own list and named on the garment line', () => {
+    const bib = priceQuote({ ...order, garment: { slug: 'bib', name: 'Terry bib' }, quantity: 1 });
+    const frock = priceQuote({ ...order, quantity: 1 });
+    expect(bib.ok && bib.lines[0]).toEqual({ code: 'garment', label: 'Terry bib, size 4 × 1 garment', amountCents: 800 });
+    expect(frock.ok && frock.lines[0].amountCents).toBe(2000);
+    const labelled = priceQuote({ ...order, ruleSet: { ...ruleSet, garmentBaseCents: { 'bishop-dress': { '6m': 3800 } } }, garment: { slug: 'bishop-dress', name: 'Bishop dress' }, sizeCode: '6m', sizeLabel: '6 months', quantity: 1 });
+    expect(labelled.ok && labelled.lines[0]).toEqual({ code: 'garment', label: 'Bishop dress, size 6 months × 1 garment', amountCents: 3800 });
   });
 
   it('when a line ends on exactly half a cent, then it rounds up; just under half rounds down', () => {
     const at = (stitches: number) => {
-      const quote = priceQuote({ ruleSet: { ...flatRules, centsPerThousandStitches: 5 }, sizeCode: '2T', quantity: 1, placements: [{ ...border, stitches }], isRush: false });
+      const quote = priceQuote({ ruleSet: { ...flatRules, centsPerThousandStitches: 5 }, garment: dress, sizeCode: '2T', quantity: 1, placements: [{ ...border, stitches }], isRush: false });
       return quote.ok ? quote.lines[1].amountCents : Number.NaN;
     };
     expect(at(1100)).toBe(6); // 5.5 ¢
@@ -57,10 +68,11 @@ describe('priceQuote', () => {
   });
 
   it('when tax or a discount lands on half a cent, then its magnitude rounds up', () => {
-    const taxed = priceQuote({ ruleSet: { ...flatRules, garmentBaseCents: { '4': 200 }, taxRateBp: 825 }, sizeCode: '4', quantity: 1, placements: [], isRush: false });
+    const taxed = priceQuote({ ruleSet: { ...flatRules, garmentBaseCents: { 'smocked-dress': { '4': 200 } }, taxRateBp: 825 }, garment: dress, sizeCode: '4', quantity: 1, placements: [], isRush: false });
     expect(taxed.ok && taxed.taxCents).toBe(17); // 16.5 ¢
     const discounted = priceQuote({
       ruleSet: { ...flatRules, centsPerThousandStitches: 10, quantityBreaks: [{ minQty: 1, discountBp: 500 }] },
+      garment: dress,
       sizeCode: '4',
       quantity: 1,
       placements: [{ ...border, stitches: 1000 }],
@@ -75,7 +87,13 @@ describe('priceQuote', () => {
   });
 
   it.each([
-    ['an unknown size', { ...order, sizeCode: 'XXL' }, 'Price list 3 has no garment price for size XXL.'],
+    ['an unknown size', { ...order, sizeCode: 'XXL' }, 'Price list 3 has no price for the Smocked dress in size XXL.'],
+    ['an unknown garment', { ...order, garment: { slug: 'bishop-dress', name: 'Bishop dress' } }, 'Price list 3 has no price for the Bishop dress in size 4.'],
+    ['an inherited key as the garment', { ...order, garment: { slug: 'constructor', name: 'Constructor' } }, /no price for the Constructor in size 4/],
+    ['an inherited key as the size', { ...order, sizeCode: 'toString' }, /no price for the Smocked dress in size toString/],
+    ['no garment', { ...order, garment: undefined }, 'Choose a garment.'],
+    ['garment prices not listed by size', { ...order, ruleSet: { ...ruleSet, garmentBaseCents: { bib: 800 } } }, 'The garment prices for bib must be listed by size code.'],
+    ['a fractional garment price', { ...order, ruleSet: { ...ruleSet, garmentBaseCents: { bib: { '4': 7.5 } } } }, 'The garment price for bib in size 4 must be whole cents, 0 or more.'],
     ['a lower-case currency', { ...order, ruleSet: { ...ruleSet, currency: 'usd' } }, /ISO 4217/],
     ['a rush multiplier below 1', { ...order, ruleSet: { ...ruleSet, rushMultiplierBp: 9000 } }, /rush/],
     ['fractional cents', { ...order, ruleSet: { ...ruleSet, colorChangeCents: 2.5 } }, /colorChangeCents/],
@@ -98,7 +116,7 @@ describe('priceQuote', () => {
   const arbitraryRules = fc.record({
     version: fc.integer({ min: 1, max: 99 }),
     currency: fc.constantFrom('USD', 'EUR', 'GBP', 'JPY'),
-    garmentBaseCents: fc.record({ M: cents(10_000) }),
+    garmentBaseCents: fc.record({ dress: fc.record({ M: cents(10_000), L: cents(10_000) }), bib: fc.record({ M: cents(10_000) }) }),
     centsPerThousandStitches: cents(500),
     minimumPerPlacementCents: cents(2000),
     extraHoopingCents: cents(1000),
@@ -120,6 +138,7 @@ describe('priceQuote', () => {
   });
   const arbitraryOrder = fc.record({
     ruleSet: arbitraryRules,
+    garment: fc.constantFrom({ slug: 'dress', name: 'Dress' }, { slug: 'bib', name: 'Bib' }),
     sizeCode: fc.constant('M'),
     quantity: fc.integer({ min: 1, max: 500 }),
     placements: fc.array(arbitraryPlacement, { minLength: 1, maxLength: 5 }),
