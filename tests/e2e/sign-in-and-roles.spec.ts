@@ -58,3 +58,15 @@ test('when the pages load, then nothing is fetched from any host but this one', 
   expect(foreign).toEqual([]);
   expect(cspErrors).toEqual([]);
 });
+
+test('when a keyboard user arrives on a phone-width screen, then the first Tab offers a skip to the page and the garments stack in one column', async ({ page }) => {
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.goto('/');
+  await expect(page.getByRole('heading', { name: /choose a garment/i })).toBeVisible();
+  await page.keyboard.press('Tab');
+  await expect(page.getByRole('link', { name: 'Skip to the page' })).toBeFocused();
+  const cards = page.getByRole('listitem').filter({ has: page.getByRole('heading', { level: 3 }) });
+  const [first, second] = [await cards.nth(0).boundingBox(), await cards.nth(1).boundingBox()];
+  expect(second!.y).toBeGreaterThan(first!.y + first!.height - 1);
+  expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+});

@@ -1,5 +1,6 @@
 import { NavLink, Outlet } from 'react-router-dom';
 import { HoopMark } from '@ui/components/logo.tsx';
+import { SkipLink } from '@ui/components/skip-link.tsx';
 import { Button } from '@ui/components/button.tsx';
 import { useCurrentUser } from '@ui/session/get-current-user.ts';
 import { useSignOut } from '@ui/session/sign-out.ts';
@@ -26,6 +27,7 @@ function SignedInAs() {
 export function StudioLayout() {
   return (
     <div className="min-h-screen">
+      <SkipLink />
       <header className="border-b border-walnut-700 bg-walnut-900 text-linen-100">
         <div className="mx-auto flex max-w-7xl flex-wrap items-center justify-between gap-3 px-4 py-2.5">
           <div className="flex items-center gap-6">
@@ -42,7 +44,7 @@ export function StudioLayout() {
           <SignedInAs />
         </div>
       </header>
-      <main className="mx-auto max-w-7xl px-4 py-6">
+      <main id="main" tabIndex={-1} className="outline-none mx-auto max-w-7xl px-4 py-6">
         <StaffGate>
           <Outlet />
         </StaffGate>

@@ -1,5 +1,6 @@
 import { Link, Outlet, useLocation } from 'react-router-dom';
 import { HoopMark } from '@ui/components/logo.tsx';
+import { SkipLink } from '@ui/components/skip-link.tsx';
 import { Button, ButtonLink } from '@ui/components/button.tsx';
 import { useCurrentUser } from '@ui/session/get-current-user.ts';
 import { useSignOut } from '@ui/session/sign-out.ts';
@@ -35,6 +36,7 @@ function AccountArea() {
 export function ShopLayout() {
   return (
     <div className="flex min-h-screen flex-col">
+      <SkipLink />
       <header className="border-b border-linen-200 bg-linen-100/70">
         <div className="mx-auto flex max-w-6xl items-center justify-between gap-4 px-4 py-3 sm:px-6">
           <Link to={paths.home.href()} className="flex items-center gap-2.5 text-walnut-700">
@@ -47,7 +49,7 @@ export function ShopLayout() {
           <AccountArea />
         </div>
       </header>
-      <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 sm:px-6">
+      <main id="main" tabIndex={-1} className="outline-none mx-auto w-full max-w-6xl flex-1 px-4 py-8 sm:px-6">
         <Outlet />
       </main>
       <footer className="border-t border-linen-200 bg-linen-100/60">
