@@ -93,7 +93,7 @@ export function createApp(deps: AppDeps): Express {
   });
 
   app.get('/api/health', (_req, res) => res.json({ ok: true }));
-  app.use('/api/auth', createAuthRouter());
+  app.use('/api/auth', createAuthRouter({ log: deps.log }));
   app.use('/api/me', createMeRouter());
   app.use('/api/catalog', createCatalogRouter({ db }));
   app.use('/api/admin', requireRole('staff', 'owner'));

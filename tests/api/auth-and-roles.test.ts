@@ -51,6 +51,19 @@ describe('sign-in session', () => {
     await agent.get('/api/me').expect(401);
   });
 
+  it('when a used or made-up code comes back to the callback, then the person is sent to sign in again, not shown an error', async () => {
+    const agent = harness.agent();
+    const start = await agent.get('/api/auth/google').expect(302);
+    const state = new URL(start.headers.location!).searchParams.get('state');
+    const res = await agent.get(`/api/auth/google/callback?code=already-used&state=${state}`).expect(302);
+    expect(decodeURIComponent(res.headers.location!)).toBe('/sign-in?problem=Sign-in did not finish, so nothing changed. Please try again.');
+  });
+
+  it('when the callback carries a state this session never issued, then it is refused the same way', async () => {
+    const res = await harness.agent().get('/api/auth/google/callback?code=x&state=forged').expect(302);
+    expect(res.headers.location).toMatch(/^\/sign-in\?problem=Sign-in%20did%20not%20finish/);
+  });
+
   it('when the return path points at another host, then sign-in is refused before it starts', async () => {
     const res = await harness.agent().get('/api/auth/google?returnTo=//evil.test/x').expect(400);
     expect(res.body.error.fields.returnTo).toMatch(/path on this site/);
