@@ -50,8 +50,8 @@ test('when the pages load, then nothing is fetched from any host but this one', 
   });
   await page.goto('/');
   await expect(page.getByRole('heading', { name: /choose a garment/i })).toBeVisible();
-  await page.getByRole('link').filter({ hasText: /dress/i }).first().click();
-  await expect(page.getByRole('heading', { name: /sizes and hem lengths/i })).toBeVisible();
+  await page.getByRole('link').filter({ hasText: /bishop dress/i }).first().click();
+  await expect(page.getByRole('heading', { name: /borders all the way round/i })).toBeVisible();
   await page.goto('/admin/');
   await expect(page.getByRole('heading', { name: 'Studio sign-in' })).toBeVisible();
   expect(await page.evaluate(() => document.fonts.check('500 16px Poppins'))).toBe(true);

@@ -26,3 +26,25 @@ export type GarmentSummary = z.infer<typeof garmentSummary>;
 
 export const garmentListResponse = z.object({ garments: z.array(garmentSummary) });
 export type GarmentListResponse = z.infer<typeof garmentListResponse>;
+
+export const motifKind = z.enum(['border', 'single']);
+
+/** A catalogue motif as the storefront shows it: the artwork and the limits it may be resized within. */
+export const motifSummary = z.object({
+  id: z.number().int(),
+  slug: z.string(),
+  name: z.string(),
+  kind: motifKind,
+  svg: z.string(),
+  widthMm: z.number(),
+  heightMm: z.number(),
+  /** Space between border repeats at 100 %, negative for overlap. */
+  gapMm: z.number(),
+  minScalePct: z.number().int(),
+  maxScalePct: z.number().int(),
+  colourCount: z.number().int(),
+});
+export type MotifSummary = z.infer<typeof motifSummary>;
+
+export const motifListResponse = z.object({ motifs: z.array(motifSummary) });
+export type MotifListResponse = z.infer<typeof motifListResponse>;

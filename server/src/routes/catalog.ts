@@ -1,13 +1,18 @@
 import { Router } from 'express';
 import type { Db } from '../db/knex.ts';
 import { listActiveGarments } from '../db/repos/garment-repo.ts';
-import type { GarmentListResponse } from '../contracts/catalog.ts';
+import { listActiveMotifs } from '../db/repos/motif-repo.ts';
+import type { GarmentListResponse, MotifListResponse } from '../contracts/catalog.ts';
 
 /** Public catalogue: what a visitor can choose before signing in. */
 export function createCatalogRouter(deps: { db: Db }): Router {
   const router = Router();
   router.get('/garments', async (_req, res) => {
     const body: GarmentListResponse = { garments: await listActiveGarments(deps.db) };
+    res.json(body);
+  });
+  router.get('/motifs', async (_req, res) => {
+    const body: MotifListResponse = { motifs: await listActiveMotifs(deps.db) };
     res.json(body);
   });
   return router;

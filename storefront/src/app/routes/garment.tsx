@@ -1,15 +1,20 @@
 import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
-import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
+import { EmptyState, ErrorNotice, Loading } from '@ui/components/page-state.tsx';
 import { formatLength } from '@ui/format.ts';
 import { useGarments } from '../../features/catalog/api/get-garments.ts';
+import { useMotifs } from '../../features/catalog/api/get-motifs.ts';
 import { GarmentPicture } from '../../features/catalog/components/garment-picture.tsx';
+import { SizePicker } from '../../features/catalog/components/size-picker.tsx';
+import { BorderFitList } from '../../features/catalog/components/border-fit-list.tsx';
 import { paths } from '../../config/paths.ts';
 
 export function GarmentPage() {
   const { slug } = useParams();
   const garments = useGarments();
+  const motifs = useMotifs();
   const [colourId, setColourId] = useState<number>();
+  const [sizeId, setSizeId] = useState<number>();
   if (garments.isPending) return <Loading />;
   if (garments.isError) return <ErrorNotice message={garments.error.message} onRetry={() => void garments.refetch()} />;
   const garment = garments.data.find((g) => g.slug === slug);
@@ -23,52 +28,69 @@ export function GarmentPage() {
   }
   const hasHem = garment.sizes.some((size) => size.hemCircumferenceMm !== null);
   const colour = garment.colours.find((c) => c.id === colourId) ?? garment.colours[0];
+  const size = garment.sizes.find((s) => s.id === sizeId) ?? garment.sizes[0];
+  const borders = motifs.data?.filter((motif) => motif.kind === 'border') ?? [];
   return (
-    <div className="grid gap-8 lg:grid-cols-[3fr_2fr]">
-      <GarmentPicture garment={garment} colourHex={colour?.hex} className="min-h-96" imageClassName="max-h-[32rem]" />
-      <div>
-        <Link to={paths.home.href()} className="text-sm text-walnut-500 hover:text-madder-600">← All garments</Link>
-        <h1 className="mt-2 text-3xl font-semibold">{garment.name}</h1>
-        <p className="mt-3 text-walnut-700">{garment.description}</p>
-        <fieldset className="mt-6">
-          <legend className="font-medium">Fabric colour{colour ? `: ${colour.name}` : ''}</legend>
-          <div className="mt-2 flex flex-wrap gap-2">
-            {garment.colours.map((c) => (
-              <button
-                key={c.id}
-                type="button"
-                aria-pressed={c.id === colour?.id}
-                aria-label={c.name}
-                onClick={() => setColourId(c.id)}
-                className="h-11 w-11 rounded-full border-2 border-white shadow ring-2 ring-linen-300 aria-pressed:ring-madder-500"
-                style={{ backgroundColor: c.hex }}
-              />
-            ))}
+    <div>
+      <div className="grid gap-8 lg:grid-cols-[3fr_2fr]">
+        <GarmentPicture garment={garment} colourHex={colour?.hex} className="min-h-96" imageClassName="max-h-[32rem]" />
+        <div>
+          <Link to={paths.home.href()} className="text-sm text-walnut-500 hover:text-madder-600">← All garments</Link>
+          <h1 className="mt-2 text-3xl font-semibold">{garment.name}</h1>
+          <p className="mt-3 text-walnut-700">{garment.description}</p>
+          <fieldset className="mt-6">
+            <legend className="font-medium">Fabric colour{colour ? `: ${colour.name}` : ''}</legend>
+            <div className="mt-2 flex flex-wrap gap-2">
+              {garment.colours.map((c) => (
+                <button
+                  key={c.id}
+                  type="button"
+                  aria-pressed={c.id === colour?.id}
+                  aria-label={c.name}
+                  onClick={() => setColourId(c.id)}
+                  className="h-11 w-11 rounded-full border-2 border-white shadow ring-2 ring-linen-300 aria-pressed:ring-madder-500"
+                  style={{ backgroundColor: c.hex }}
+                />
+              ))}
+            </div>
+          </fieldset>
+          <div className="mt-6">
+            <SizePicker sizes={garment.sizes} selectedId={size?.id} onSelect={setSizeId} />
           </div>
-        </fieldset>
-        <h2 className="mt-6 font-medium">Sizes and hem lengths</h2>
-        <p className="text-sm text-walnut-500">
-          {hasHem ? 'The hem length decides how many repeats of a border fit all the way round.' : 'This piece takes a name or a single motif rather than a hem border.'}
-        </p>
-        <table className="mt-2 w-full text-left text-sm">
-          <thead className="text-walnut-500">
-            <tr>
-              <th className="py-1 font-medium">Size</th>
-              <th className="py-1 font-medium">Front hem</th>
-              <th className="py-1 font-medium">All the way round</th>
-            </tr>
-          </thead>
-          <tbody>
-            {garment.sizes.map((size) => (
-              <tr key={size.id} className="border-t border-linen-200">
-                <td className="py-2">{size.label}</td>
-                <td className="py-2">{size.hemFrontMm === null ? '—' : formatLength(size.hemFrontMm)}</td>
-                <td className="py-2">{size.hemCircumferenceMm === null ? '—' : formatLength(size.hemCircumferenceMm)}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+          {size && (
+            <dl className="mt-4 grid grid-cols-2 gap-3 text-sm">
+              <div className="rounded-lg bg-linen-100 p-3">
+                <dt className="text-walnut-500">Front of the hem</dt>
+                <dd className="font-medium">{size.hemFrontMm === null ? 'No hem border' : formatLength(size.hemFrontMm)}</dd>
+              </div>
+              <div className="rounded-lg bg-linen-100 p-3">
+                <dt className="text-walnut-500">All the way round</dt>
+                <dd className="font-medium">{size.hemCircumferenceMm === null ? 'No hem border' : formatLength(size.hemCircumferenceMm)}</dd>
+              </div>
+            </dl>
+          )}
+        </div>
       </div>
+
+      <section aria-labelledby="borders-heading" className="mt-10">
+        <h2 id="borders-heading" className="seam inline-block pb-2 text-xl font-semibold">Borders all the way round</h2>
+        {!hasHem ? (
+          <p className="mt-3 text-walnut-700">This piece takes a name or a single motif rather than a hem border.</p>
+        ) : (
+          <>
+            <p className="mt-3 max-w-2xl text-sm text-walnut-700">
+              A border is one little picture repeated end to end round the hem. We resize it very slightly so that whole
+              repeats meet exactly at the back seam — never a cut-off duck. Here is how each border sits on size {size?.label}.
+            </p>
+            <div className="mt-4">
+              {motifs.isPending && <Loading label="Laying out the borders…" />}
+              {motifs.isError && <ErrorNotice message={motifs.error.message} onRetry={() => void motifs.refetch()} />}
+              {motifs.isSuccess && borders.length === 0 && <EmptyState title="No borders are on offer just now." />}
+              {size && borders.length > 0 && <BorderFitList motifs={borders} size={size} fabricHex={colour?.hex} />}
+            </div>
+          </>
+        )}
+      </section>
     </div>
   );
 }

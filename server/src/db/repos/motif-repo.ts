@@ -1,0 +1,24 @@
+import type { Db } from '../knex.ts';
+import type { MotifSummary } from '../../contracts/catalog.ts';
+
+/** Active motifs, borders first, in the shop's display order. */
+export async function listActiveMotifs(db: Db): Promise<MotifSummary[]> {
+  const rows = await db('motifs')
+    .select('id', 'slug', 'name', 'kind', 'svg', 'width_mm', 'height_mm', 'gap_mm', 'min_scale_pct', 'max_scale_pct', 'colour_count')
+    .where({ is_active: true })
+    .orderBy([{ column: 'kind' }, { column: 'sort_order' }, { column: 'id' }]);
+  return rows.map((row) => ({
+    id: row.id,
+    slug: row.slug,
+    name: row.name,
+    kind: row.kind,
+    svg: row.svg,
+    // mysql2 returns DECIMAL columns as strings.
+    widthMm: Number(row.width_mm),
+    heightMm: Number(row.height_mm),
+    gapMm: Number(row.gap_mm),
+    minScalePct: row.min_scale_pct,
+    maxScalePct: row.max_scale_pct,
+    colourCount: row.colour_count,
+  }));
+}

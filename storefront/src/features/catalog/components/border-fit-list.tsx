@@ -1,0 +1,50 @@
+import type { GarmentSummary, MotifSummary } from '@server/contracts/catalog.ts';
+// Straight from its module: the engine's entry also registers colour spaces at load, which this page does not need.
+import { fitBorder } from '@server/engine/fit-border.ts';
+import { formatLength } from '@ui/format.ts';
+import { HemBorderStrip } from './hem-border-strip.tsx';
+
+type Size = GarmentSummary['sizes'][number];
+
+/**
+ * For one size, how each border motif would run all the way round the hem: the number of repeats, the size each is
+ * stitched at, and a drawing. The figures come from the same engine the studio plans production with; prices are
+ * always quoted by the server.
+ */
+export function BorderFitList({ motifs, size, fabricHex }: { motifs: MotifSummary[]; size: Size; fabricHex: string | undefined }) {
+  const circumferenceMm = size.hemCircumferenceMm;
+  if (circumferenceMm === null) return null;
+  return (
+    <ul className="grid gap-4">
+      {motifs.map((motif) => {
+        const fit = fitBorder({
+          runLengthMm: circumferenceMm,
+          closed: true,
+          motifWidthMm: motif.widthMm,
+          gapMm: motif.gapMm,
+          minScale: motif.minScalePct / 100,
+          maxScale: motif.maxScalePct / 100,
+        });
+        return (
+          <li key={motif.id} className="rounded-card border border-linen-200 bg-white p-4">
+            <div className="flex flex-wrap items-baseline justify-between gap-2">
+              <h3 className="font-medium">{motif.name}</h3>
+              {fit.ok ? (
+                <p className="text-sm text-walnut-700">
+                  {fit.count} repeats, each {formatLength(fit.repeatWidthMm)} ({Math.round(fit.scale * 1000) / 10} % of its drawn size)
+                </p>
+              ) : (
+                <p className="text-sm text-madder-700">Doesn't fit this size: {fit.reason}</p>
+              )}
+            </div>
+            {fit.ok && (
+              <div className="mt-3">
+                <HemBorderStrip motif={motif} fit={fit} circumferenceMm={circumferenceMm} frontMm={size.hemFrontMm} fabricHex={fabricHex} />
+              </div>
+            )}
+          </li>
+        );
+      })}
+    </ul>
+  );
+}

@@ -1,0 +1,55 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import { garmentListResponse, motifListResponse } from '../../server/src/contracts/catalog.ts';
+import { fitBorder } from '../../server/src/engine/index.ts';
+import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+
+let harness: ApiHarness;
+beforeAll(async () => {
+  harness = await startApiHarness();
+});
+afterAll(async () => {
+  await harness.close();
+});
+
+describe('GET /api/catalog/garments', () => {
+  it('when anyone asks, then the active garments come with their sizes and colours, matching the contract', async () => {
+    const res = await request(harness.app).get('/api/catalog/garments').expect(200);
+    const { garments } = garmentListResponse.parse(res.body);
+    expect(garments.length).toBeGreaterThanOrEqual(4);
+    for (const garment of garments) {
+      expect(garment.sizes.length).toBeGreaterThanOrEqual(4);
+      expect(garment.colours.length).toBeGreaterThanOrEqual(3);
+    }
+  });
+
+  it('when a garment takes no hem border, then its hem lengths are null rather than zero', async () => {
+    const { garments } = garmentListResponse.parse((await request(harness.app).get('/api/catalog/garments')).body);
+    const bib = garments.find((garment) => garment.kind === 'bib')!;
+    expect(bib.sizes.every((size) => size.hemCircumferenceMm === null)).toBe(true);
+  });
+});
+
+describe('GET /api/catalog/motifs', () => {
+  it('when anyone asks, then the active motifs come borders first, with numeric sizes and resize limits', async () => {
+    const res = await request(harness.app).get('/api/catalog/motifs').expect(200);
+    const { motifs } = motifListResponse.parse(res.body);
+    expect(motifs.length).toBeGreaterThanOrEqual(6);
+    expect(motifs[0]!.kind).toBe('border');
+    expect(motifs.findIndex((m) => m.kind === 'single')).toBeGreaterThan(motifs.findLastIndex((m) => m.kind === 'border'));
+    expect(motifs.every((m) => m.svg.startsWith('<svg') && m.minScalePct <= 100 && m.maxScalePct >= 100)).toBe(true);
+  });
+
+  it('when the 180 mm border meets the 692 mm hem of the seeded 6-month bishop dress, then 4 repeats of 173 mm fit', async () => {
+    // The trade's worked case (common practice, no source): 692 mm loop, 180 mm motif allowed 90–110 % → 4 × 173 mm.
+    const [garments, motifs] = await Promise.all([
+      request(harness.app).get('/api/catalog/garments').then((r) => garmentListResponse.parse(r.body).garments),
+      request(harness.app).get('/api/catalog/motifs').then((r) => motifListResponse.parse(r.body).motifs),
+    ]);
+    const size = garments.flatMap((g) => g.sizes).find((s) => s.hemCircumferenceMm === 692)!;
+    const motif = motifs.find((m) => m.widthMm === 180)!;
+    const fit = fitBorder({ runLengthMm: size.hemCircumferenceMm!, closed: true, motifWidthMm: motif.widthMm, gapMm: motif.gapMm, minScale: motif.minScalePct / 100, maxScale: motif.maxScalePct / 100 });
+    expect(fit).toMatchObject({ ok: true, count: 4 });
+    expect(fit.ok && fit.repeatWidthMm).toBeCloseTo(173, 6);
+  });
+});
