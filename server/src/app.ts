@@ -12,6 +12,7 @@ import { requireRole } from './auth/roles.ts';
 import type { SessionLayer } from './auth/session.ts';
 import { createUserService } from './services/user-service.ts';
 import { requestId } from './middleware/request-id.ts';
+import { accessLog } from './middleware/access-log.ts';
 import { requireSameOrigin } from './middleware/same-origin.ts';
 import { createErrorHandler, notFoundHandler } from './middleware/error-handler.ts';
 import { createAuthRouter } from './routes/auth.ts';
@@ -79,6 +80,7 @@ export function createApp(deps: AppDeps): Express {
   app.disable('x-powered-by');
   if (config.isBehindProxy) app.set('trust proxy', 1);
   app.use(requestId);
+  app.use('/api', accessLog(deps.log));
   app.use(securityHeaders(config));
 
   // Webhooks authenticate by signature, not by session or origin, and need the raw body.

@@ -1,16 +1,26 @@
 import { createBrowserRouter } from 'react-router-dom';
+import { RouteError } from '@ui/components/route-error.tsx';
 import { basename, paths } from '../config/paths.ts';
 import { StudioLayout } from './layout.tsx';
 import { TodayPage } from './routes/today.tsx';
 import { NotFoundPage } from './routes/not-found.tsx';
 
+const studioHome = `${basename}/`;
+
 export const router = createBrowserRouter(
   [
     {
       element: <StudioLayout />,
+      errorElement: <RouteError homeHref={studioHome} />,
       children: [
-        { path: paths.home.path, element: <TodayPage /> },
-        { path: '*', element: <NotFoundPage /> },
+        {
+          // A page that fails to render is replaced inside the layout, so navigation stays usable.
+          errorElement: <RouteError homeHref={studioHome} />,
+          children: [
+            { path: paths.home.path, element: <TodayPage /> },
+            { path: '*', element: <NotFoundPage /> },
+          ],
+        },
       ],
     },
   ],

@@ -1,4 +1,5 @@
 import { createBrowserRouter } from 'react-router-dom';
+import { RouteError } from '@ui/components/route-error.tsx';
 import { paths } from '../config/paths.ts';
 import { ShopLayout } from './layout.tsx';
 import { HomePage } from './routes/home.tsx';
@@ -9,11 +10,18 @@ import { NotFoundPage } from './routes/not-found.tsx';
 export const router = createBrowserRouter([
   {
     element: <ShopLayout />,
+    errorElement: <RouteError homeHref="/" />,
     children: [
-      { path: paths.home.path, element: <HomePage /> },
-      { path: paths.garment.path, element: <GarmentPage /> },
-      { path: paths.signIn.path, element: <SignInPage /> },
-      { path: '*', element: <NotFoundPage /> },
+      {
+        // A page that fails to render is replaced inside the layout, so the header and sign-in stay usable.
+        errorElement: <RouteError homeHref="/" />,
+        children: [
+          { path: paths.home.path, element: <HomePage /> },
+          { path: paths.garment.path, element: <GarmentPage /> },
+          { path: paths.signIn.path, element: <SignInPage /> },
+          { path: '*', element: <NotFoundPage /> },
+        ],
+      },
     ],
   },
 ]);
