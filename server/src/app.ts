@@ -20,6 +20,7 @@ import { createMeRouter } from './routes/me.ts';
 import { createCatalogRouter } from './routes/catalog.ts';
 import { createPaymentWebhookRouter } from './routes/payment-webhooks.ts';
 import { createAdminOverviewRouter } from './routes/admin/overview.ts';
+import { createAdminCatalogRouter } from './routes/admin/catalog.ts';
 import type { CurrentUser } from './contracts/users.ts';
 
 export interface AppDeps {
@@ -100,6 +101,7 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/catalog', createCatalogRouter({ db }));
   app.use('/api/admin', requireRole('staff', 'owner'));
   app.use('/api/admin/overview', createAdminOverviewRouter({ db }));
+  app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));
   app.use('/api', notFoundHandler);
 
   const staticRoot = resolve(config.staticDir);

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { garmentListResponse, motifListResponse } from '../../server/src/contracts/catalog.ts';
+import { studioCatalogResponse } from '../../server/src/contracts/admin-catalog.ts';
 import { fitBorder } from '../../server/src/engine/index.ts';
 import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
 
@@ -51,5 +52,26 @@ describe('GET /api/catalog/motifs', () => {
     const fit = fitBorder({ runLengthMm: size.hemCircumferenceMm!, closed: true, motifWidthMm: motif.widthMm, gapMm: motif.gapMm, minScale: motif.minScalePct / 100, maxScale: motif.maxScalePct / 100 });
     expect(fit).toMatchObject({ ok: true, count: 4 });
     expect(fit.ok && fit.repeatWidthMm).toBeCloseTo(173, 6);
+  });
+});
+
+describe('GET /api/admin/catalog', () => {
+  it('when a customer asks, then it is refused', async () => {
+    const agent = harness.agent();
+    await harness.signIn(agent, 'priya@example.test');
+    await agent.get('/api/admin/catalog').expect(403);
+  });
+
+  it('when staff ask, then motifs come with their measured stitch mix and the threads, hoops and fonts', async () => {
+    const agent = harness.agent();
+    await harness.signIn(agent, 'tobias@wrenandbobbin.test');
+    const body = studioCatalogResponse.parse((await agent.get('/api/admin/catalog').expect(200)).body);
+    expect(body.threads.length).toBeGreaterThanOrEqual(30);
+    expect(body.hoops.map((h) => `${h.fieldWidthMm}×${h.fieldHeightMm}`)).toEqual(expect.arrayContaining(['100×100', '120×180']));
+    expect(body.fonts.filter((f) => f.isActive).length).toBeGreaterThanOrEqual(3);
+    for (const motif of body.motifs) {
+      expect(motif.mix.run + motif.mix.satin + motif.mix.fill).toBe(motif.stitchCount);
+      expect(motif.threadCodes).toHaveLength(motif.colourCount);
+    }
   });
 });

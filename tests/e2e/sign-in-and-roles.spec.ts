@@ -70,3 +70,14 @@ test('when a keyboard user arrives on a phone-width screen, then the first Tab o
   expect(second!.y).toBeGreaterThan(first!.y + first!.height - 1);
   expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
 });
+
+test('when staff open the studio app on a phone, then nothing runs off the side of the screen', async ({ page }) => {
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.goto('/admin/');
+  await signInAs(page, 'Tobias Fenwick', /sign in with google/i);
+  await expect(page.getByRole('heading', { name: 'Latest orders' })).toBeVisible();
+  expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+  await page.getByRole('link', { name: 'Catalogue' }).click();
+  await expect(page.getByRole('heading', { name: 'Thread palette' })).toBeVisible();
+  expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+});

@@ -7,6 +7,11 @@ import { useSignOut } from '@ui/session/sign-out.ts';
 import { paths } from '../config/paths.ts';
 import { StaffGate } from './staff-gate.tsx';
 
+const sections = [
+  { href: paths.home.href(), label: 'Today' },
+  { href: paths.catalogue.href(), label: 'Catalogue' },
+];
+
 function SignedInAs() {
   const me = useCurrentUser();
   const signOut = useSignOut();
@@ -36,9 +41,11 @@ export function StudioLayout() {
               <span className="font-semibold">Hoopwright <span className="font-normal text-linen-300">studio</span></span>
             </span>
             <nav aria-label="Studio sections" className="flex gap-1 text-sm">
-              <NavLink to={paths.home.href()} end className={({ isActive }) => `rounded-full px-3 py-1.5 ${isActive ? 'bg-linen-100 text-walnut-900' : 'hover:bg-walnut-700'}`}>
-                Today
-              </NavLink>
+              {sections.map((section) => (
+                <NavLink key={section.href} to={section.href} end className={({ isActive }) => `rounded-full px-3 py-1.5 ${isActive ? 'bg-linen-100 text-walnut-900' : 'hover:bg-walnut-700'}`}>
+                  {section.label}
+                </NavLink>
+              ))}
             </nav>
           </div>
           <SignedInAs />

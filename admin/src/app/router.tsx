@@ -3,6 +3,7 @@ import { RouteError } from '@ui/components/route-error.tsx';
 import { basename, paths } from '../config/paths.ts';
 import { StudioLayout } from './layout.tsx';
 import { TodayPage } from './routes/today.tsx';
+import { CataloguePage } from './routes/catalogue.tsx';
 import { NotFoundPage } from './routes/not-found.tsx';
 
 const studioHome = `${basename}/`;
@@ -18,6 +19,7 @@ export const router = createBrowserRouter(
           errorElement: <RouteError homeHref={studioHome} />,
           children: [
             { path: paths.home.path, element: <TodayPage /> },
+            { path: paths.catalogue.path, element: <CataloguePage /> },
             { path: '*', element: <NotFoundPage /> },
           ],
         },

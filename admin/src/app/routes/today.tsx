@@ -13,12 +13,12 @@ export function TodayPage() {
   const { shopName, countsByStatus, recentOrders } = overview.data;
   return (
     <div className="grid gap-6 lg:grid-cols-[22rem_1fr]">
-      <section className="rounded-card border border-linen-200 bg-white p-5">
+      <section className="min-w-0 rounded-card border border-linen-200 bg-white p-5">
         <h1 className="text-xl font-semibold">{shopName}</h1>
         <p className="mb-4 text-sm text-walnut-500">Where every order stands</p>
         <StatusStrip counts={countsByStatus} />
       </section>
-      <section className="rounded-card border border-linen-200 bg-white p-5">
+      <section className="min-w-0 rounded-card border border-linen-200 bg-white p-5">
         <h2 className="mb-3 text-lg font-semibold">Latest orders</h2>
         {recentOrders.length === 0 ? (
           <EmptyState title="No orders yet.">New orders appear here as soon as a customer's card is held.</EmptyState>

@@ -1,0 +1,36 @@
+import { z } from 'zod';
+import { motifSummary } from './catalog.ts';
+
+/** A motif as the studio sees it: the customer-facing summary plus the digitized file's measured figures. */
+export const studioMotif = motifSummary.extend({
+  stitchCount: z.number().int(),
+  mix: z.object({ run: z.number().int(), satin: z.number().int(), fill: z.number().int() }),
+  threadCodes: z.array(z.string()),
+  isActive: z.boolean(),
+});
+export type StudioMotif = z.infer<typeof studioMotif>;
+
+export const studioThread = z.object({ id: z.number().int(), code: z.string(), name: z.string(), hex: z.string(), isActive: z.boolean() });
+export type StudioThread = z.infer<typeof studioThread>;
+
+export const studioHoop = z.object({ id: z.number().int(), slug: z.string(), name: z.string(), fieldWidthMm: z.number(), fieldHeightMm: z.number(), isActive: z.boolean() });
+export type StudioHoop = z.infer<typeof studioHoop>;
+
+export const studioFont = z.object({
+  id: z.number().int(),
+  slug: z.string(),
+  name: z.string(),
+  fontFamily: z.string(),
+  minHeightMm: z.number(),
+  maxHeightMm: z.number(),
+  isActive: z.boolean(),
+});
+export type StudioFont = z.infer<typeof studioFont>;
+
+export const studioCatalogResponse = z.object({
+  motifs: z.array(studioMotif),
+  threads: z.array(studioThread),
+  hoops: z.array(studioHoop),
+  fonts: z.array(studioFont),
+});
+export type StudioCatalogResponse = z.infer<typeof studioCatalogResponse>;
