@@ -27,8 +27,16 @@ export const seededTables = [
   'users',
 ];
 
-/** Empties every table the seeds fill, so the following seed files can insert with fixed ids. */
+/**
+ * Empties every table the seeds fill, so the following seed files can insert with fixed ids. The demo replaces real
+ * data wholesale, so it refuses a database where anyone but demo and test people (addresses ending in .test) has
+ * signed in: a `db:seed` pointed at the shop's live database by mistake stops here.
+ */
 export async function seed(knex: Knex): Promise<void> {
+  const [{ n }] = await knex('users').whereNot('email', 'like', '%.test').count({ n: '*' });
+  if (Number(n) > 0) {
+    throw new Error(`This database has ${n} real customer or staff accounts; the demo seeds would erase them, so nothing was changed.`);
+  }
   for (const table of seededTables) await knex(table).del();
   // Rows the app adds after seeding then get the same ids on every run (InnoDB moves the counter past the
   // largest id the seeds insert).

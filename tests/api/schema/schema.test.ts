@@ -87,4 +87,12 @@ describe('schema and demo seeds', () => {
     await db.seed.run();
     expect(await checksums()).toEqual(before);
   });
+
+  it('when a real person has signed up, then the demo seeds refuse to run and change nothing', async () => {
+    const [id] = await db('users').insert({ email: 'a.parent@gmail.example', name: 'A Parent', role: 'customer' });
+    const before = await checksums();
+    await expect(db.seed.run()).rejects.toThrow(/1 real customer or staff accounts/);
+    expect(await checksums()).toEqual(before);
+    await db('users').where({ id }).del();
+  });
 });
