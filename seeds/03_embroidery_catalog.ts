@@ -3,7 +3,7 @@ import type { Knex } from 'knex';
 import { userIds } from './data/accounts.ts';
 import { hoops } from './data/hoops.ts';
 import { letteringFonts } from './data/lettering-fonts.ts';
-import { motifs } from './data/motifs.ts';
+import { borderGapMm, motifs } from './data/motifs.ts';
 import { readSeedFile } from './data/seed-files.ts';
 import { catalogStamp } from './data/seed-time.ts';
 import { threads } from './data/threads.ts';
@@ -47,8 +47,7 @@ export async function seed(knex: Knex): Promise<void> {
       colour_count: motif.threadCodes.length,
       min_scale_pct: motif.minScalePct,
       max_scale_pct: motif.maxScalePct,
-      // The borders are continuous lines that meet end to end.
-      gap_mm: 0,
+      gap_mm: borderGapMm,
       default_thread_codes: JSON.stringify(motif.threadCodes),
       is_active: true,
       sort_order: index + 1,

@@ -5,9 +5,3 @@ export const hoops = [
   { id: 3, slug: 'long-160x260', name: 'Long 160 × 260 mm (6 × 10 in)', field_width_mm: 160, field_height_mm: 260, sort_order: 3 },
   { id: 4, slug: 'large-200x300', name: 'Large 200 × 300 mm (8 × 12 in)', field_width_mm: 200, field_height_mm: 300, sort_order: 4 },
 ];
-
-/**
- * Hoops the studio stitches hem borders in, first choice first: the oblong (one 173 mm daisy repeat per hooping,
- * issue 3's worked case), else the next larger hoop a repeat fits in. The square hoop is too short for a border.
- */
-export const borderHoops = hoops.filter((hoop) => hoop.field_height_mm >= 180);

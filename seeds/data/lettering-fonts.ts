@@ -47,7 +47,7 @@ export const letteringFonts = [
     min_height_mm: 14,
     max_height_mm: 60,
     // Hidden for now: opentype.js 2.0 cannot lay this font out (its GSUB uses chained context substitution format
-    // 2), so the lettering estimate fails for it.
+    // 2). The server's font loader shapes it with fontkit instead, so pricing it works; showing it is the studio's call.
     is_active: false,
     sort_order: 4,
   },

@@ -19,6 +19,9 @@ export interface SeedMotif {
   threadCodes: string[];
 }
 
+/** The borders are continuous lines that meet end to end: no gap between repeats. */
+export const borderGapMm = 0;
+
 export const motifs: SeedMotif[] = [
   // 180 mm at 100 %, 90–110 %: a 692 mm hem loop takes 4 repeats at 96.1 % (issue 3's worked case).
   {

@@ -1,0 +1,62 @@
+import type { CatalogMotif, StitchEstimate } from '../engine/index.ts';
+import type { DesignPlacement } from '../contracts/designs.ts';
+import type { CatalogHoop, CatalogMotifEntry } from './quote-catalog.ts';
+
+/** What one placement costs to sew, per garment. */
+export interface PlacementFigures {
+  id: string;
+  /** Shown on the quote line: "Hem border: Daisy and leaf chain", "Lettering “Clara”". */
+  label: string;
+  kind: DesignPlacement['kind'];
+  estimate: StitchEstimate;
+  hoopings: number;
+  hasCustomerArtwork: boolean;
+  /** Borders only: the fit and the hoop it is stitched in. */
+  border?: {
+    count: number;
+    scalePct: number;
+    /** One stitched repeat, mm. */
+    repeatWidthMm: number;
+    hoop: CatalogHoop;
+  };
+}
+
+/** A placement's figures, or why it cannot be sewn, at its field path in the request. */
+export type PlacementOutcome = { ok: true; figures: PlacementFigures } | { ok: false; field: string; message: string };
+
+export const refuse = (field: string, message: string): PlacementOutcome => ({ ok: false, field, message });
+
+export const countOf = (n: number, noun: string) => `${n} ${noun}${n === 1 ? '' : 's'}`;
+
+/** Smallest sewing field first; hoops of equal area keep their catalogue order. */
+export function byFieldArea(hoops: readonly CatalogHoop[]): CatalogHoop[] {
+  return [...hoops].sort((a, b) => a.fieldWidthMm * a.fieldHeightMm - b.fieldWidthMm * b.fieldHeightMm);
+}
+
+/** The engine's view of a catalogue motif; its colour changes are between its colours, in stitching order. */
+export function catalogMotifFor(motif: CatalogMotifEntry): CatalogMotif {
+  return {
+    stitchCount: motif.run + motif.satin + motif.fill,
+    mix: { run: motif.run, satin: motif.satin, fill: motif.fill },
+    colorChanges: motif.colourCount - 1,
+    widthMm: motif.widthMm,
+    heightMm: motif.heightMm,
+  };
+}
+
+const mm = (value: number) => `${Number(value.toFixed(1))}`;
+
+/**
+ * A single item is sewn in one hooping, so some hoop's field must hold it, either way round. The item's own width
+ * and height are checked, not its turned outline: a turned item can be hooped at its angle (common practice, no
+ * source). `what` names the item for the message: "The Little lamb at 115 %".
+ */
+export function checkFitsAHoop(hoops: readonly CatalogHoop[], what: string, estimate: StitchEstimate, field: string): PlacementOutcome | undefined {
+  const { widthMm, heightMm } = estimate;
+  const holds = (hoop: CatalogHoop) =>
+    (widthMm <= hoop.fieldWidthMm && heightMm <= hoop.fieldHeightMm) || (widthMm <= hoop.fieldHeightMm && heightMm <= hoop.fieldWidthMm);
+  if (hoops.some(holds)) return undefined;
+  const largest = byFieldArea(hoops).at(-1);
+  const limit = largest ? `the ${mm(largest.fieldWidthMm)} × ${mm(largest.fieldHeightMm)} mm sewing field of our largest hoop` : 'any hoop the studio has';
+  return refuse(field, `${what} comes to ${mm(widthMm)} × ${mm(heightMm)} mm, bigger than ${limit}; make it smaller.`);
+}

@@ -1,0 +1,105 @@
+import type { Db } from '../db/knex.ts';
+import { loadQuoteCatalog, type QuoteCatalogRecord } from '../db/repos/quote-catalog-repo.ts';
+import { priceQuote } from '../engine/index.ts';
+import type { LetteringFontLoader } from '../integrations/lettering-fonts.ts';
+import type { DesignDocument } from '../contracts/designs.ts';
+import type { QuotePreviewRequest, QuotePreviewResponse } from '../contracts/quotes.ts';
+import { failure, ok, type Result } from '../contracts/result.ts';
+import { figureDesign } from './design-figures.ts';
+import type { QuoteCatalog } from './quote-catalog.ts';
+
+/** Quotes priced by the server from the published price list; the client's own figures are never used. */
+export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader }) {
+  /** Prices a design without saving it, for one garment size and quantity. Reads only, so no transaction. */
+  async function preview(request: QuotePreviewRequest): Promise<Result<QuotePreviewResponse>> {
+    const record = await loadQuoteCatalog(deps.db, {
+      garmentId: request.garmentId,
+      sizeId: request.sizeId,
+      colourId: request.colourId,
+      ...slugsNamedIn(request.document),
+    });
+    if (!record.ok) return record;
+    const figured = figureDesign(toQuoteCatalog(record.value, deps.fonts), request.document);
+    if (!figured.ok) return figured;
+    const figures = figured.value;
+    const { garment, size, ruleSet } = record.value;
+    const quote = priceQuote({
+      ruleSet,
+      garment: { slug: garment.slug, name: garment.name },
+      sizeCode: size.code,
+      sizeLabel: size.label,
+      quantity: request.quantity,
+      placements: figures.quotePlacements,
+      isRush: request.isRush,
+    });
+    // The design was sound, so a pricing failure is the price list's: it has no price for this size, say.
+    if (!quote.ok) return failure('conflict', `This garment can't be priced online right now: ${quote.reason}`);
+
+    return ok({
+      quote: {
+        lines: quote.lines,
+        subtotalCents: quote.subtotalCents,
+        taxCents: quote.taxCents,
+        totalCents: quote.totalCents,
+        currency: quote.currency,
+        ruleSetVersion: quote.ruleSetVersion,
+      },
+      placements: figures.placements.map((placement) => ({
+        id: placement.id,
+        label: placement.label,
+        kind: placement.kind,
+        stitches: placement.estimate.stitches,
+        colourChanges: placement.estimate.colorChanges,
+        hoopings: placement.hoopings,
+        ...(placement.border && {
+          border: {
+            count: placement.border.count,
+            scalePct: placement.border.scalePct,
+            repeatWidthMm: placement.border.repeatWidthMm,
+            hoopSlug: placement.border.hoop.slug,
+            hoopName: placement.border.hoop.name,
+          },
+        }),
+        widthMm: placement.estimate.widthMm,
+        heightMm: placement.estimate.heightMm,
+      })),
+      runMinutes: figures.runMinutes,
+      stabilizer: {
+        backing: figures.stabilizer.backing,
+        topping: figures.stabilizer.topping,
+        density: figures.stabilizer.density,
+        messages: figures.stabilizer.messages,
+      },
+      cautions: figures.cautions,
+    });
+  }
+
+  return { preview };
+}
+
+export type QuoteService = ReturnType<typeof createQuoteService>;
+
+/** The motifs and fonts a design names, so only those rows are read. */
+function slugsNamedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: string[] } {
+  const motifSlugs = new Set<string>();
+  const fontSlugs = new Set<string>();
+  for (const placement of document.placements) {
+    if (placement.kind === 'border' || placement.kind === 'motif') motifSlugs.add(placement.motif);
+    if (placement.kind === 'lettering') fontSlugs.add(placement.font);
+  }
+  return { motifSlugs: [...motifSlugs], fontSlugs: [...fontSlugs] };
+}
+
+/** The catalogue as `figureDesign` takes it; artwork uploads are left out until the server stores them. */
+function toQuoteCatalog(record: QuoteCatalogRecord, fonts: LetteringFontLoader): QuoteCatalog {
+  return {
+    garment: record.garment,
+    size: record.size,
+    motifs: new Map(record.motifs.map((motif) => [motif.slug, motif])),
+    fonts: new Map(
+      record.fonts.map(({ fontsourcePackage, fileName, ...font }) => [font.slug, { ...font, outlines: fonts({ fontsourcePackage, fileName }) }]),
+    ),
+    hoops: record.hoops,
+    machine: record.machine,
+  };
+}
