@@ -11,6 +11,8 @@ import { createGoogleStrategy } from './auth/google-strategy.ts';
 import { requireRole } from './auth/roles.ts';
 import type { SessionLayer } from './auth/session.ts';
 import { createUserService } from './services/user-service.ts';
+import { createQuoteService } from './services/quote-service.ts';
+import { createLetteringFontLoader } from './integrations/lettering-fonts.ts';
 import { requestId } from './middleware/request-id.ts';
 import { accessLog } from './middleware/access-log.ts';
 import { requireSameOrigin } from './middleware/same-origin.ts';
@@ -18,9 +20,11 @@ import { createErrorHandler, notFoundHandler } from './middleware/error-handler.
 import { createAuthRouter } from './routes/auth.ts';
 import { createMeRouter } from './routes/me.ts';
 import { createCatalogRouter } from './routes/catalog.ts';
+import { createQuotesRouter } from './routes/quotes.ts';
 import { createPaymentWebhookRouter } from './routes/payment-webhooks.ts';
 import { createAdminOverviewRouter } from './routes/admin/overview.ts';
 import { createAdminCatalogRouter } from './routes/admin/catalog.ts';
+import { createAdminOrdersRouter } from './routes/admin/orders.ts';
 import type { CurrentUser } from './contracts/users.ts';
 
 export interface AppDeps {
@@ -99,9 +103,11 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/auth', createAuthRouter({ log: deps.log }));
   app.use('/api/me', createMeRouter());
   app.use('/api/catalog', createCatalogRouter({ db }));
+  app.use('/api/quotes', createQuotesRouter({ quotes: createQuoteService({ db, fonts: createLetteringFontLoader() }) }));
   app.use('/api/admin', requireRole('staff', 'owner'));
   app.use('/api/admin/overview', createAdminOverviewRouter({ db }));
   app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));
+  app.use('/api/admin/orders', createAdminOrdersRouter({ db }));
   app.use('/api', notFoundHandler);
 
   const staticRoot = resolve(config.staticDir);

@@ -4,6 +4,7 @@ import { basename, paths } from '../config/paths.ts';
 import { StudioLayout } from './layout.tsx';
 import { TodayPage } from './routes/today.tsx';
 import { CataloguePage } from './routes/catalogue.tsx';
+import { OrderPage } from './routes/order.tsx';
 import { NotFoundPage } from './routes/not-found.tsx';
 
 const studioHome = `${basename}/`;
@@ -20,6 +21,7 @@ export const router = createBrowserRouter(
           children: [
             { path: paths.home.path, element: <TodayPage /> },
             { path: paths.catalogue.path, element: <CataloguePage /> },
+            { path: paths.order.path, element: <OrderPage /> },
             { path: '*', element: <NotFoundPage /> },
           ],
         },

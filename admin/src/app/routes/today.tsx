@@ -1,8 +1,10 @@
+import { Link } from 'react-router-dom';
 import { EmptyState, ErrorNotice, Loading } from '@ui/components/page-state.tsx';
+import { paths } from '../../config/paths.ts';
 import { formatMoney } from '@ui/format.ts';
 import { useOverview } from '../../features/overview/api/get-overview.ts';
 import { StatusStrip } from '../../features/overview/components/status-strip.tsx';
-import { statusLabels } from '../../features/overview/components/status-labels.ts';
+import { statusLabels } from '../../lib/order-status-labels.ts';
 
 const dateFormat = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric' });
 
@@ -37,7 +39,9 @@ export function TodayPage() {
               <tbody>
                 {recentOrders.map((order) => (
                   <tr key={order.id} className="border-t border-linen-200">
-                    <td className="py-2 font-medium">{order.number}</td>
+                    <td className="py-2 font-medium">
+                      <Link to={paths.order.href(order.number)} className="text-madder-700 underline-offset-2 hover:underline">{order.number}</Link>
+                    </td>
                     <td className="py-2">{order.customerName}</td>
                     <td className="py-2">{statusLabels[order.status]}</td>
                     <td className="py-2">{order.neededBy ? dateFormat.format(new Date(`${order.neededBy}T12:00:00Z`)) : '—'}</td>

@@ -1,5 +1,5 @@
 import { orderStatuses } from '@server/contracts/admin-overview.ts';
-import { statusLabels } from './status-labels.ts';
+import { statusLabels } from '../../../lib/order-status-labels.ts';
 
 /** One bar per status, its length the share of orders in that status: the day's workload at a glance. */
 export function StatusStrip({ counts }: { counts: Record<string, number> }) {

@@ -1,0 +1,83 @@
+import type { ReactNode } from 'react';
+import { Link, useParams } from 'react-router-dom';
+import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
+import { formatMoney } from '@ui/format.ts';
+import { useOrder } from '../../features/orders/api/get-order.ts';
+import { OrderTimeline } from '../../features/orders/components/order-timeline.tsx';
+import { OrderMoney } from '../../features/orders/components/order-money.tsx';
+import { statusLabels } from '../../lib/order-status-labels.ts';
+import { paths } from '../../config/paths.ts';
+
+const day = new Intl.DateTimeFormat('en-US', { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' });
+
+function Panel({ title, children }: { title: string; children: ReactNode }) {
+  return (
+    <section className="min-w-0 rounded-card border border-linen-200 bg-white p-5">
+      <h2 className="mb-3 text-lg font-semibold">{title}</h2>
+      {children}
+    </section>
+  );
+}
+
+export function OrderPage() {
+  const { number = '' } = useParams();
+  const detail = useOrder(number);
+  if (detail.isPending) return <Loading label={`Opening order ${number}…`} />;
+  if (detail.isError) return <ErrorNotice message={detail.error.message} onRetry={() => void detail.refetch()} />;
+  const { order, items, proofs, events } = detail.data;
+  return (
+    <div className="grid gap-6">
+      <div>
+        <Link to={paths.home.href()} className="text-sm text-walnut-500 hover:text-madder-600">← Today</Link>
+        <div className="mt-1 flex flex-wrap items-baseline gap-x-4 gap-y-1">
+          <h1 className="text-2xl font-semibold">Order {order.number}</h1>
+          <span className="rounded-full bg-sage-50 px-3 py-1 text-sm font-medium text-sage-700">{statusLabels[order.status]}</span>
+        </div>
+        <p className="mt-1 text-walnut-700">
+          {order.customer.name} · <a className="underline" href={`mailto:${order.customer.email}`}>{order.customer.email}</a>
+          {order.neededBy && <> · needed by <strong>{day.format(new Date(`${order.neededBy}T12:00:00Z`))}</strong></>}
+        </p>
+        {order.customerNote && <p className="mt-2 max-w-2xl rounded-lg bg-saffron-100 p-3 text-sm">“{order.customerNote}”</p>}
+      </div>
+      <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
+        <div className="grid min-w-0 content-start gap-6">
+          <Panel title="What to make">
+            <ul className="grid gap-2 text-sm">
+              {items.map((item) => (
+                <li key={item.id} className="flex justify-between gap-3 border-b border-linen-200 pb-2 last:border-0">
+                  <span>
+                    <span className="font-medium">{item.designName}</span>
+                    <span className="block text-walnut-500">{item.description} × {item.quantity}</span>
+                  </span>
+                  <span className="tabular-nums">{formatMoney(item.totalCents, order.currency)}</span>
+                </li>
+              ))}
+            </ul>
+          </Panel>
+          <Panel title="Price and payment">
+            <OrderMoney detail={detail.data} />
+          </Panel>
+        </div>
+        <div className="grid min-w-0 content-start gap-6">
+          <Panel title="Proofs">
+            {proofs.length === 0 ? (
+              <p className="text-sm text-walnut-500">No proof sent yet.</p>
+            ) : (
+              <ul className="grid gap-2 text-sm">
+                {proofs.map((proof) => (
+                  <li key={proof.version} className="rounded-lg bg-linen-100 p-3">
+                    <p className="font-medium">Proof {proof.version} · {proof.status.replaceAll('_', ' ')}</p>
+                    {proof.message && <p className="text-walnut-700">{proof.message}</p>}
+                  </li>
+                ))}
+              </ul>
+            )}
+          </Panel>
+          <Panel title="History">
+            <OrderTimeline events={events} />
+          </Panel>
+        </div>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,49 @@
+import { z } from 'zod';
+import { orderStatus } from './admin-overview.ts';
+
+export const orderNumberParams = z.object({
+  number: z.string().regex(/^[A-Z]{2}-\d{1,10}$/, 'must look like WB-1001'),
+});
+
+export const paymentStatus = z.enum(['none', 'authorized', 'captured', 'partially_refunded', 'refunded', 'voided']);
+
+export const orderEvent = z.object({
+  id: z.number().int(),
+  type: z.string(),
+  fromStatus: orderStatus.nullable(),
+  toStatus: orderStatus.nullable(),
+  note: z.string().nullable(),
+  actorName: z.string().nullable(),
+  createdAt: z.string(),
+});
+
+export const orderDetailResponse = z.object({
+  order: z.object({
+    id: z.number().int(),
+    number: z.string(),
+    status: orderStatus,
+    paymentStatus,
+    customer: z.object({ name: z.string(), email: z.string() }),
+    neededBy: z.string().nullable(),
+    placedAt: z.string().nullable(),
+    customerNote: z.string().nullable(),
+    subtotalCents: z.number().int(),
+    taxCents: z.number().int(),
+    totalCents: z.number().int(),
+    currency: z.string(),
+  }),
+  items: z.array(z.object({ id: z.number().int(), description: z.string(), quantity: z.number().int(), totalCents: z.number().int(), designName: z.string() })),
+  quote: z.object({ ruleSetVersion: z.number().int(), lines: z.array(z.object({ code: z.string(), label: z.string(), amountCents: z.number().int() })) }),
+  payments: z.array(
+    z.object({
+      status: z.string(),
+      authorizedCents: z.number().int(),
+      capturedCents: z.number().int(),
+      refundedCents: z.number().int(),
+      captureBefore: z.string().nullable(),
+    }),
+  ),
+  proofs: z.array(z.object({ version: z.number().int(), status: z.string(), message: z.string().nullable(), sentAt: z.string(), respondedAt: z.string().nullable() })),
+  events: z.array(orderEvent),
+});
+export type OrderDetailResponse = z.infer<typeof orderDetailResponse>;
