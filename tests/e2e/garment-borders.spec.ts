@@ -10,6 +10,12 @@ test('when a parent opens the bishop dress, then each border shows how many repe
   await expect(daisy.getByRole('img', { name: 'The hem unrolled: 4 repeats of Daisy and leaf chain all the way round' })).toBeVisible();
   await expect(daisy.locator('img')).toHaveCount(4);
 
+  // The price is the server's: garment, stitches and re-hooping, itemized on request.
+  await expect(daisy.locator('summary')).toContainText(/\$\d+\.\d\d for the bishop dress with this border/);
+  await daisy.getByText("How it's priced").click();
+  await expect(daisy.getByRole('cell', { name: /^Re-hooping: 3 extra hoopings/ })).toBeVisible();
+  await expect(daisy).toContainText('sewn in 4 hoopings');
+
   await page.getByRole('radio', { name: '3T' }).check({ force: true });
   await expect(daisy).not.toContainText('4 repeats');
   await page.getByRole('button', { name: 'Blush' }).click();

@@ -29,6 +29,12 @@ test('when the owner signs in to the studio app, then the home shows the orders,
   await expect(page.getByRole('list', { name: 'Orders by status' })).toBeVisible();
   await expect(page.getByRole('heading', { name: 'Latest orders' })).toBeVisible();
 
+  await page.getByRole('link', { name: 'WB-1004' }).click();
+  await expect(page.getByRole('heading', { name: 'Order WB-1004' })).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'History' })).toBeVisible();
+  await expect(page.getByText(/Priced with price list version \d+/)).toBeVisible();
+  await page.getByRole('link', { name: '← Today' }).click();
+
   await restartAppServer();
   await page.reload();
   await expect(page.getByRole('heading', { name: 'Latest orders' })).toBeVisible();

@@ -5,7 +5,6 @@ import { motifSummary } from './catalog.ts';
 export const studioMotif = motifSummary.extend({
   stitchCount: z.number().int(),
   mix: z.object({ run: z.number().int(), satin: z.number().int(), fill: z.number().int() }),
-  threadCodes: z.array(z.string()),
   isActive: z.boolean(),
 });
 export type StudioMotif = z.infer<typeof studioMotif>;

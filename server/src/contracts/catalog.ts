@@ -43,6 +43,8 @@ export const motifSummary = z.object({
   minScalePct: z.number().int(),
   maxScalePct: z.number().int(),
   colourCount: z.number().int(),
+  /** The studio's suggested thread for each colour, in stitching order. */
+  threadCodes: z.array(z.string()),
 });
 export type MotifSummary = z.infer<typeof motifSummary>;
 

@@ -4,7 +4,7 @@ import type { MotifSummary } from '../../contracts/catalog.ts';
 /** Active motifs, borders first, in the shop's display order. */
 export async function listActiveMotifs(db: Db): Promise<MotifSummary[]> {
   const rows = await db('motifs')
-    .select('id', 'slug', 'name', 'kind', 'svg', 'width_mm', 'height_mm', 'gap_mm', 'min_scale_pct', 'max_scale_pct', 'colour_count')
+    .select('id', 'slug', 'name', 'kind', 'svg', 'width_mm', 'height_mm', 'gap_mm', 'min_scale_pct', 'max_scale_pct', 'colour_count', 'default_thread_codes')
     .where({ is_active: true })
     .orderBy([{ column: 'kind' }, { column: 'sort_order' }, { column: 'id' }]);
   return rows.map((row) => ({
@@ -20,5 +20,7 @@ export async function listActiveMotifs(db: Db): Promise<MotifSummary[]> {
     minScalePct: row.min_scale_pct,
     maxScalePct: row.max_scale_pct,
     colourCount: row.colour_count,
+    // JSON columns arrive parsed.
+    threadCodes: row.default_thread_codes,
   }));
 }

@@ -7,6 +7,7 @@ import { useMotifs } from '../../features/catalog/api/get-motifs.ts';
 import { GarmentPicture } from '../../features/catalog/components/garment-picture.tsx';
 import { SizePicker } from '../../features/catalog/components/size-picker.tsx';
 import { BorderFitList } from '../../features/catalog/components/border-fit-list.tsx';
+import { BorderPrice } from '../../features/quote/components/border-price.tsx';
 import { paths } from '../../config/paths.ts';
 
 export function GarmentPage() {
@@ -86,7 +87,12 @@ export function GarmentPage() {
               {motifs.isPending && <Loading label="Laying out the borders…" />}
               {motifs.isError && <ErrorNotice message={motifs.error.message} onRetry={() => void motifs.refetch()} />}
               {motifs.isSuccess && borders.length === 0 && <EmptyState title="No borders are on offer just now." />}
-              {size && borders.length > 0 && <BorderFitList motifs={borders} size={size} fabricHex={colour?.hex} />}
+              {size && borders.length > 0 && <BorderFitList
+                  motifs={borders}
+                  size={size}
+                  fabricHex={colour?.hex}
+                  priceOf={(motif) => <BorderPrice garment={garment} sizeId={size.id} colourId={colour?.id} motif={motif} />}
+                />}
             </div>
           </>
         )}

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import type { GarmentSummary, MotifSummary } from '@server/contracts/catalog.ts';
 // Straight from its module: the engine's entry also registers colour spaces at load, which this page does not need.
 import { fitBorder } from '@server/engine/fit-border.ts';
@@ -11,7 +12,18 @@ type Size = GarmentSummary['sizes'][number];
  * stitched at, and a drawing. The figures come from the same engine the studio plans production with; prices are
  * always quoted by the server.
  */
-export function BorderFitList({ motifs, size, fabricHex }: { motifs: MotifSummary[]; size: Size; fabricHex: string | undefined }) {
+export function BorderFitList({
+  motifs,
+  size,
+  fabricHex,
+  priceOf,
+}: {
+  motifs: MotifSummary[];
+  size: Size;
+  fabricHex: string | undefined;
+  /** The page supplies each border's price, which always comes from the server. */
+  priceOf: (motif: MotifSummary) => ReactNode;
+}) {
   const circumferenceMm = size.hemCircumferenceMm;
   if (circumferenceMm === null) return null;
   return (
@@ -40,6 +52,7 @@ export function BorderFitList({ motifs, size, fabricHex }: { motifs: MotifSummar
             {fit.ok && (
               <div className="mt-3">
                 <HemBorderStrip motif={motif} fit={fit} circumferenceMm={circumferenceMm} frontMm={size.hemFrontMm} fabricHex={fabricHex} />
+                <div className="mt-3">{priceOf(motif)}</div>
               </div>
             )}
           </li>
