@@ -1,0 +1,16 @@
+/** Plain words for what happened to an order; unknown kinds of event fall back to their own name. */
+const eventLabels: Record<string, string> = {
+  order_created: 'Order placed',
+  payment_authorized: 'Card held (not charged yet)',
+  proof_sent: 'Proof sent',
+  changes_requested: 'Customer asked for changes',
+  proof_approved: 'Customer approved the proof',
+  payment_captured: 'Card charged',
+  note_added: 'Note',
+  stitched: 'Stitched',
+  shipped: 'Shipped',
+  refunded: 'Refunded',
+  cancelled: 'Cancelled',
+};
+
+export const eventLabel = (type: string): string => eventLabels[type] ?? type.replaceAll('_', ' ');
