@@ -86,16 +86,20 @@ function pidFile(settings: LocalDatabaseSettings): string {
   return join(settings.dataDir, 'mariadbd.pid');
 }
 
+function isAlive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
 function runningPid(settings: LocalDatabaseSettings): number | undefined {
   const file = pidFile(settings);
   if (!existsSync(file)) return undefined;
   const pid = Number(readFileSync(file, 'utf8').trim());
-  try {
-    process.kill(pid, 0);
-    return pid;
-  } catch {
-    return undefined;
-  }
+  return isAlive(pid) ? pid : undefined;
 }
 
 function isPortFree(port: number): Promise<boolean> {
@@ -195,8 +199,9 @@ export async function stopLocalDatabase(settings = localDatabaseSettings()): Pro
   const admin = findProgram('mariadb-admin') ?? 'mariadb-admin';
   const result = spawnSync(admin, [...clientArgs(settings), 'shutdown'], { stdio: 'ignore' });
   if (result.status !== 0) process.kill(pid, 'SIGTERM');
+  // mariadbd removes its pid file before it has fully exited; wait for the process itself, so the port is free.
   const deadline = Date.now() + 30_000;
-  while (runningPid(settings) && Date.now() < deadline) await sleep(200);
+  while (isAlive(pid) && Date.now() < deadline) await sleep(200);
   return { stopped: true };
 }
 
