@@ -3,18 +3,12 @@
  * zones are the reference zones scaled by that size's mockup_scale, so they are in the size's own millimetres.
  */
 
+import type { PlacementZone as CatalogPlacementZone } from '../../server/src/services/quote-catalog.ts';
+
 export type ZoneCode = 'hem' | 'chest' | 'collar' | 'bib_centre' | 'brim';
 
-export interface PlacementZone {
-  code: ZoneCode;
-  label: string;
-  xMm: number;
-  yMm: number;
-  widthMm: number;
-  heightMm: number;
-  /** Hem zones: the border's centre line above the hem edge, mm. It is a stitching measure, so it does not scale. */
-  hemOffsetMm?: number;
-}
+/** The server's placement zone, with the zone codes the demo garments use. */
+export type PlacementZone = CatalogPlacementZone & { code: ZoneCode };
 
 /** 1¾ in: where a hem border's centre line commonly sits above the hem edge (common practice, no source). */
 export const defaultHemOffsetMm = 44.45;
