@@ -1,6 +1,11 @@
 import { defineConfig } from 'vitest/config';
+import { fileURLToPath } from 'node:url';
+
+const here = (path: string) => fileURLToPath(new URL(path, import.meta.url));
 
 export default defineConfig({
+  // The apps' aliases, so unit tests can import the designer's pure model as the apps do.
+  resolve: { alias: { '@server': here('./server/src'), '@ui': here('./ui/src') } },
   test: {
     include: ['tests/unit/**/*.test.ts', 'tests/api/**/*.test.ts'],
     exclude: ['tests/e2e/**', 'node_modules/**'],

@@ -12,6 +12,7 @@ import { requireRole } from './auth/roles.ts';
 import type { SessionLayer } from './auth/session.ts';
 import { createUserService } from './services/user-service.ts';
 import { createQuoteService } from './services/quote-service.ts';
+import { createDesignService } from './services/design-service.ts';
 import { createLetteringFontLoader } from './integrations/lettering-fonts.ts';
 import { requestId } from './middleware/request-id.ts';
 import { accessLog } from './middleware/access-log.ts';
@@ -21,6 +22,7 @@ import { createAuthRouter } from './routes/auth.ts';
 import { createMeRouter } from './routes/me.ts';
 import { createCatalogRouter } from './routes/catalog.ts';
 import { createQuotesRouter } from './routes/quotes.ts';
+import { createDesignsRouter } from './routes/designs.ts';
 import { createPaymentWebhookRouter } from './routes/payment-webhooks.ts';
 import { createAdminOverviewRouter } from './routes/admin/overview.ts';
 import { createAdminCatalogRouter } from './routes/admin/catalog.ts';
@@ -103,7 +105,10 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/auth', createAuthRouter({ log: deps.log }));
   app.use('/api/me', createMeRouter());
   app.use('/api/catalog', createCatalogRouter({ db }));
-  app.use('/api/quotes', createQuotesRouter({ quotes: createQuoteService({ db, fonts: createLetteringFontLoader() }) }));
+  // One quote service, so its font loader parses each font once: saving a design prices it too.
+  const quotes = createQuoteService({ db, fonts: createLetteringFontLoader() });
+  app.use('/api/quotes', createQuotesRouter({ quotes }));
+  app.use('/api/designs', createDesignsRouter({ designs: createDesignService({ db, quotes, now: deps.now }) }));
   app.use('/api/admin', requireRole('staff', 'owner'));
   app.use('/api/admin/overview', createAdminOverviewRouter({ db }));
   app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));

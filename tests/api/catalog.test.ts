@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { garmentListResponse, motifListResponse } from '../../server/src/contracts/catalog.ts';
+import { fontListResponse, garmentListResponse, motifListResponse, threadListResponse } from '../../server/src/contracts/catalog.ts';
 import { studioCatalogResponse } from '../../server/src/contracts/admin-catalog.ts';
 import { fitBorder } from '../../server/src/engine/index.ts';
 import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
@@ -29,6 +29,40 @@ describe('GET /api/catalog/garments', () => {
     const bib = garments.find((garment) => garment.kind === 'bib')!;
     expect(bib.sizes.every((size) => size.hemCircumferenceMm === null)).toBe(true);
   });
+
+  it('when anyone asks, then every size has its placement zones and mockup scale, and hem sizes a hem zone 1¾ in up', async () => {
+    const { garments } = garmentListResponse.parse((await request(harness.app).get('/api/catalog/garments')).body);
+    for (const size of garments.flatMap((garment) => garment.sizes)) {
+      expect(size.zones.length, size.code).toBeGreaterThanOrEqual(1);
+      expect(size.mockupScale).toBeGreaterThan(0);
+      const hem = size.zones.find((zone) => zone.code === 'hem');
+      // 1¾ in = 44.45 mm: where a hem border's centre line commonly sits (common practice, no source).
+      if (size.hemFrontMm !== null) expect(hem?.hemOffsetMm, size.code).toBe(44.45);
+      else expect(hem).toBeUndefined();
+    }
+    const dress = garments.find((garment) => garment.slug === 'smocked-yoke-dress')!;
+    expect(dress.sizes.find((size) => size.code === '2T')!.mockupScale).toBe(1);
+  });
+
+  it('when a garment is listed, then its mockup size is the drawing\'s viewBox in mm', async () => {
+    const { garments } = garmentListResponse.parse((await request(harness.app).get('/api/catalog/garments')).body);
+    const bib = garments.find((garment) => garment.kind === 'bib')!;
+    expect(bib.mockupSvg).toContain('viewBox="0 0 240 300"');
+    expect({ widthMm: bib.mockupWidthMm, heightMm: bib.mockupHeightMm }).toEqual({ widthMm: 240, heightMm: 300 });
+  });
+
+  it('when a drawing has no viewBox, then its mockup size comes from its width and height in mm', async () => {
+    const bib = await harness.db('garments').select('id', 'mockup_svg').where({ slug: 'terry-bib' }).first();
+    const withoutViewBox = (bib.mockup_svg as string).replace(/\sviewBox="[^"]*"/, '').replace('width="240mm"', 'width="241.5mm"');
+    await harness.db('garments').where({ id: bib.id }).update({ mockup_svg: withoutViewBox });
+    try {
+      const { garments } = garmentListResponse.parse((await request(harness.app).get('/api/catalog/garments').expect(200)).body);
+      const listed = garments.find((garment) => garment.id === bib.id)!;
+      expect({ widthMm: listed.mockupWidthMm, heightMm: listed.mockupHeightMm }).toEqual({ widthMm: 241.5, heightMm: 300 });
+    } finally {
+      await harness.db('garments').where({ id: bib.id }).update({ mockup_svg: bib.mockup_svg });
+    }
+  });
 });
 
 describe('GET /api/catalog/motifs', () => {
@@ -52,6 +86,34 @@ describe('GET /api/catalog/motifs', () => {
     const fit = fitBorder({ runLengthMm: size.hemCircumferenceMm!, closed: true, motifWidthMm: motif.widthMm, gapMm: motif.gapMm, minScale: motif.minScalePct / 100, maxScale: motif.maxScalePct / 100 });
     expect(fit).toMatchObject({ ok: true, count: 4 });
     expect(fit.ok && fit.repeatWidthMm).toBeCloseTo(173, 6);
+  });
+});
+
+describe('GET /api/catalog/fonts', () => {
+  it('when anyone asks, then the active lettering fonts come in display order with their letter heights', async () => {
+    const { fonts } = fontListResponse.parse((await request(harness.app).get('/api/catalog/fonts').expect(200)).body);
+    expect(fonts.map((font) => font.slug)).toEqual(['breezy-script', 'rounded-block', 'heirloom-serif']);
+    expect(fonts[0]).toMatchObject({ name: 'Breezy Script', fontFamily: 'Pacifico', minHeightMm: 10, maxHeightMm: 60 });
+  });
+});
+
+describe('GET /api/catalog/threads', () => {
+  it('when anyone asks, then the whole active palette comes in display order', async () => {
+    const { threads } = threadListResponse.parse((await request(harness.app).get('/api/catalog/threads').expect(200)).body);
+    expect(threads.length).toBeGreaterThanOrEqual(30);
+    expect(threads[0]).toEqual({ code: 'WB-101', name: 'Chalk White', hex: '#F7F5EE' });
+    expect(threads.every((thread) => /^#[0-9A-F]{6}$/.test(thread.hex))).toBe(true);
+  });
+
+  it('when the studio retires a thread, then it is no longer offered', async () => {
+    await harness.db('threads').where({ code: 'WB-102' }).update({ is_active: false });
+    try {
+      const { threads } = threadListResponse.parse((await request(harness.app).get('/api/catalog/threads').expect(200)).body);
+      expect(threads.map((thread) => thread.code)).not.toContain('WB-102');
+      expect(threads.map((thread) => thread.code)).toContain('WB-101');
+    } finally {
+      await harness.db('threads').where({ code: 'WB-102' }).update({ is_active: true });
+    }
   });
 });
 

@@ -1,9 +1,25 @@
 import { z } from 'zod';
 
+/** A place on the garment where embroidery may go, in the size's own millimetres on the mockup. */
+export const placementZone = z.object({
+  code: z.string(),
+  label: z.string(),
+  xMm: z.number(),
+  yMm: z.number(),
+  widthMm: z.number(),
+  heightMm: z.number(),
+  /** Hem zones: the border's centre line above the hem edge, mm. */
+  hemOffsetMm: z.number().optional(),
+});
+export type PlacementZoneSummary = z.infer<typeof placementZone>;
+
 export const garmentSize = z.object({
   id: z.number().int(),
   code: z.string(),
   label: z.string(),
+  /** The mockup is drawn once at a reference size; this size is the drawing scaled by mockupScale. */
+  mockupScale: z.number(),
+  zones: z.array(placementZone),
   /** Null for garments without a hem border (bibs, bonnets). */
   hemFrontMm: z.number().nullable(),
   hemCircumferenceMm: z.number().nullable(),
@@ -19,6 +35,9 @@ export const garmentSummary = z.object({
   description: z.string(),
   fabricType: z.string(),
   mockupSvg: z.string(),
+  /** The drawing's size at the reference size, mm (its viewBox). */
+  mockupWidthMm: z.number(),
+  mockupHeightMm: z.number(),
   sizes: z.array(garmentSize),
   colours: z.array(fabricColour),
 });
@@ -50,3 +69,19 @@ export type MotifSummary = z.infer<typeof motifSummary>;
 
 export const motifListResponse = z.object({ motifs: z.array(motifSummary) });
 export type MotifListResponse = z.infer<typeof motifListResponse>;
+
+export const letteringFont = z.object({
+  id: z.number().int(),
+  slug: z.string(),
+  name: z.string(),
+  /** The CSS family of the shipped @fontsource font, for showing the lettering as it will be stitched. */
+  fontFamily: z.string(),
+  minHeightMm: z.number(),
+  maxHeightMm: z.number(),
+});
+export type LetteringFontSummary = z.infer<typeof letteringFont>;
+export const fontListResponse = z.object({ fonts: z.array(letteringFont) });
+
+export const threadColour = z.object({ code: z.string(), name: z.string(), hex: z.string() });
+export type ThreadColourSummary = z.infer<typeof threadColour>;
+export const threadListResponse = z.object({ threads: z.array(threadColour) });

@@ -1,8 +1,11 @@
 import { Router } from 'express';
+import type { z } from 'zod';
 import type { Db } from '../db/knex.ts';
 import { listActiveGarments } from '../db/repos/garment-repo.ts';
 import { listActiveMotifs } from '../db/repos/motif-repo.ts';
-import type { GarmentListResponse, MotifListResponse } from '../contracts/catalog.ts';
+import { listActiveLetteringFonts } from '../db/repos/lettering-font-repo.ts';
+import { listActiveThreads } from '../db/repos/thread-repo.ts';
+import type { fontListResponse, GarmentListResponse, MotifListResponse, threadListResponse } from '../contracts/catalog.ts';
 
 /** Public catalogue: what a visitor can choose before signing in. */
 export function createCatalogRouter(deps: { db: Db }): Router {
@@ -13,6 +16,14 @@ export function createCatalogRouter(deps: { db: Db }): Router {
   });
   router.get('/motifs', async (_req, res) => {
     const body: MotifListResponse = { motifs: await listActiveMotifs(deps.db) };
+    res.json(body);
+  });
+  router.get('/fonts', async (_req, res) => {
+    const body: z.infer<typeof fontListResponse> = { fonts: await listActiveLetteringFonts(deps.db) };
+    res.json(body);
+  });
+  router.get('/threads', async (_req, res) => {
+    const body: z.infer<typeof threadListResponse> = { threads: await listActiveThreads(deps.db) };
     res.json(body);
   });
   return router;

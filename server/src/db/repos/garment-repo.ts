@@ -1,7 +1,42 @@
+import { z } from 'zod';
 import type { Db } from '../knex.ts';
-import type { GarmentSummary } from '../../contracts/catalog.ts';
+import { placementZone, type GarmentSummary } from '../../contracts/catalog.ts';
 
-/** Active garments with their sizes and fabric colours, in the shop's display order. */
+const placementZones = z.array(placementZone);
+
+/** The opening tag of the drawing's root element; `[^>]*` cannot backtrack, however long the drawing. */
+const SVG_OPEN_TAG = /<svg\b[^>]*>/;
+/** An attribute of that tag by exact (case-sensitive, as in SVG) name, not a suffix of another (`data-width`). */
+const attribute = (name: string) => new RegExp(`\\s${name}\\s*=\\s*(?:"([^"]*)"|'([^']*)')`);
+const VIEW_BOX = attribute('viewBox');
+const WIDTH = attribute('width');
+const HEIGHT = attribute('height');
+/** A length in millimetres: unitless (user units, which are mm in our drawings) or with an explicit "mm". */
+const MM_LENGTH = /^(\d+(?:\.\d+)?)(?:mm)?$/;
+
+/**
+ * The drawing's size at the reference size, mm. Garment drawings are made with the viewBox "0 0 W H" in
+ * millimetres (see the garments migration), so the storefront can lay zones over the mockup without parsing
+ * SVG itself; it is read here once, with a regex over the root tag rather than an XML parser, because only two
+ * attributes of one tag are needed. A drawing without a viewBox falls back to its width and height attributes.
+ * A drawing with neither is a broken catalogue row, so it throws rather than guessing a size.
+ */
+function mockupSizeMm(svg: string, slug: string): { widthMm: number; heightMm: number } {
+  const tag = SVG_OPEN_TAG.exec(svg)?.[0] ?? '';
+  const valueOf = (pattern: RegExp) => {
+    const match = pattern.exec(tag);
+    return (match?.[1] ?? match?.[2] ?? '').trim();
+  };
+  const box = valueOf(VIEW_BOX).split(/[\s,]+/).map(Number);
+  const [, , boxWidth = NaN, boxHeight = NaN] = box;
+  if (box.length === 4 && box.every(Number.isFinite) && boxWidth > 0 && boxHeight > 0) return { widthMm: boxWidth, heightMm: boxHeight };
+  const widthMm = Number(MM_LENGTH.exec(valueOf(WIDTH))?.[1] ?? NaN);
+  const heightMm = Number(MM_LENGTH.exec(valueOf(HEIGHT))?.[1] ?? NaN);
+  if (widthMm > 0 && heightMm > 0) return { widthMm, heightMm };
+  throw new Error(`The mockup of garment ${slug} has neither a viewBox nor a width and height in millimetres`);
+}
+
+/** Active garments with their sizes (mockup scale and placement zones) and fabric colours, in display order. */
 export async function listActiveGarments(db: Db): Promise<GarmentSummary[]> {
   const garments = await db('garments')
     .select('id', 'slug', 'name', 'kind', 'description', 'fabric_type', 'mockup_svg')
@@ -10,7 +45,7 @@ export async function listActiveGarments(db: Db): Promise<GarmentSummary[]> {
   const ids = garments.map((g) => g.id as number);
   const [sizes, colours] = await Promise.all([
     db('garment_sizes')
-      .select('id', 'garment_id', 'code', 'label', 'hem_front_mm', 'hem_circumference_mm')
+      .select('id', 'garment_id', 'code', 'label', 'hem_front_mm', 'hem_circumference_mm', 'mockup_scale', 'placement_zones')
       .whereIn('garment_id', ids)
       .orderBy([{ column: 'sort_order' }, { column: 'id' }]),
     db('fabric_colours')
@@ -18,23 +53,32 @@ export async function listActiveGarments(db: Db): Promise<GarmentSummary[]> {
       .whereIn('garment_id', ids)
       .orderBy([{ column: 'sort_order' }, { column: 'id' }]),
   ]);
-  return garments.map((g) => ({
-    id: g.id,
-    slug: g.slug,
-    name: g.name,
-    kind: g.kind,
-    description: g.description ?? '',
-    fabricType: g.fabric_type,
-    mockupSvg: g.mockup_svg,
-    sizes: sizes
-      .filter((s) => s.garment_id === g.id)
-      .map((s) => ({
-        id: s.id,
-        code: s.code,
-        label: s.label,
-        hemFrontMm: s.hem_front_mm === null ? null : Number(s.hem_front_mm),
-        hemCircumferenceMm: s.hem_circumference_mm === null ? null : Number(s.hem_circumference_mm),
-      })),
-    colours: colours.filter((c) => c.garment_id === g.id).map((c) => ({ id: c.id, name: c.name, hex: c.hex })),
-  }));
+  return garments.map((g) => {
+    const mockup = mockupSizeMm(g.mockup_svg, g.slug);
+    return {
+      id: g.id,
+      slug: g.slug,
+      name: g.name,
+      kind: g.kind,
+      description: g.description ?? '',
+      fabricType: g.fabric_type,
+      mockupSvg: g.mockup_svg,
+      mockupWidthMm: mockup.widthMm,
+      mockupHeightMm: mockup.heightMm,
+      sizes: sizes
+        .filter((s) => s.garment_id === g.id)
+        .map((s) => ({
+          id: s.id,
+          code: s.code,
+          label: s.label,
+          // mysql2 returns DECIMAL columns as strings; JSON columns arrive parsed, and are checked because the
+          // storefront draws the zones as they come.
+          mockupScale: Number(s.mockup_scale),
+          zones: placementZones.parse(s.placement_zones),
+          hemFrontMm: s.hem_front_mm === null ? null : Number(s.hem_front_mm),
+          hemCircumferenceMm: s.hem_circumference_mm === null ? null : Number(s.hem_circumference_mm),
+        })),
+      colours: colours.filter((c) => c.garment_id === g.id).map((c) => ({ id: c.id, name: c.name, hex: c.hex })),
+    };
+  });
 }

@@ -1,0 +1,39 @@
+import { z } from 'zod';
+import { designDocument, strictObjectErrors } from './designs.ts';
+
+const catalogId = (what: string) => z.number({ error: `Choose a ${what}` }).int(`Choose a ${what}`).positive(`Choose a ${what}`);
+
+export const designIdParams = z.object({
+  id: z
+    .string()
+    .regex(/^[1-9]\d{0,9}$/, 'must be a design number')
+    .transform(Number),
+});
+
+/** What a customer saves: the garment, size and colour chosen, a name of their own, and the document. */
+export const saveDesignRequest = z.strictObject(
+  {
+    garmentId: catalogId('garment'),
+    sizeId: catalogId('size'),
+    colourId: catalogId('fabric colour'),
+    name: z.string().trim().min(1, 'Give the design a name').max(80, 'Keep the name to 80 characters'),
+    document: designDocument,
+  },
+  strictObjectErrors('the design to save'),
+);
+export type SaveDesignRequest = z.infer<typeof saveDesignRequest>;
+
+export const savedDesign = z.object({
+  id: z.number().int(),
+  name: z.string(),
+  garmentId: z.number().int(),
+  sizeId: z.number().int(),
+  colourId: z.number().int(),
+  document: designDocument,
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type SavedDesign = z.infer<typeof savedDesign>;
+
+export const savedDesignResponse = z.object({ design: savedDesign });
+export const savedDesignListResponse = z.object({ designs: z.array(savedDesign) });

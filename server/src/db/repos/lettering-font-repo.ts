@@ -1,0 +1,19 @@
+import type { Db } from '../knex.ts';
+import type { LetteringFontSummary } from '../../contracts/catalog.ts';
+
+/** Active lettering fonts in the shop's display order, with the letter heights each sews cleanly at. */
+export async function listActiveLetteringFonts(db: Db): Promise<LetteringFontSummary[]> {
+  const rows = await db('lettering_fonts')
+    .select('id', 'slug', 'name', 'font_family', 'min_height_mm', 'max_height_mm')
+    .where({ is_active: true })
+    .orderBy([{ column: 'sort_order' }, { column: 'id' }]);
+  return rows.map((row) => ({
+    id: row.id,
+    slug: row.slug,
+    name: row.name,
+    fontFamily: row.font_family,
+    // mysql2 returns DECIMAL columns as strings.
+    minHeightMm: Number(row.min_height_mm),
+    maxHeightMm: Number(row.max_height_mm),
+  }));
+}
