@@ -1,4 +1,5 @@
 import { createBrowserRouter } from 'react-router-dom';
+import { Loading } from '@ui/components/page-state.tsx';
 import { RouteError } from '@ui/components/route-error.tsx';
 import { paths } from '../config/paths.ts';
 import { ShopLayout } from './layout.tsx';
@@ -18,6 +19,12 @@ export const router = createBrowserRouter([
         children: [
           { path: paths.home.path, element: <HomePage /> },
           { path: paths.garment.path, element: <GarmentPage /> },
+          // Lazy, so the garments and other pages never download the canvas library and lettering fonts.
+          {
+            path: paths.design.path,
+            lazy: () => import('./routes/design.tsx').then(({ DesignPage }) => ({ Component: DesignPage })),
+            hydrateFallbackElement: <Loading label="Opening the designer…" />,
+          },
           { path: paths.signIn.path, element: <SignInPage /> },
           { path: '*', element: <NotFoundPage /> },
         ],

@@ -2,5 +2,10 @@
 export const paths = {
   home: { path: '/', href: () => '/' },
   garment: { path: '/garments/:slug', href: (slug: string) => `/garments/${encodeURIComponent(slug)}` },
+  /** The designer; `designId` opens one of the customer's saved designs. */
+  design: {
+    path: '/design/:slug',
+    href: (slug: string, designId?: number) => `/design/${encodeURIComponent(slug)}${designId === undefined ? '' : `?design=${designId}`}`,
+  },
   signIn: { path: '/sign-in', href: () => '/sign-in' },
 } as const;

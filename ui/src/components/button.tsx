@@ -9,11 +9,14 @@ const tones: Record<Tone, string> = {
 
 const base = 'inline-flex min-h-11 items-center justify-center gap-2 rounded-full px-5 py-2.5 font-medium transition-colors disabled:opacity-60';
 
+/** The button look, for a router link that should read as an action. */
+export const buttonClassName = (tone: Tone = 'primary') => `${base} ${tones[tone]}`;
+
 export function Button({ tone = 'primary', className = '', ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { tone?: Tone }) {
-  return <button type="button" className={`${base} ${tones[tone]} ${className}`} {...props} />;
+  return <button type="button" className={`${buttonClassName(tone)} ${className}`} {...props} />;
 }
 
 /** A link styled as a button, for navigation that leaves the app (sign-in goes through the server). */
 export function ButtonLink({ tone = 'primary', className = '', ...props }: AnchorHTMLAttributes<HTMLAnchorElement> & { tone?: Tone }) {
-  return <a className={`${base} ${tones[tone]} ${className}`} {...props} />;
+  return <a className={`${buttonClassName(tone)} ${className}`} {...props} />;
 }

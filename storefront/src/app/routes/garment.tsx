@@ -1,11 +1,13 @@
 import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { EmptyState, ErrorNotice, Loading } from '@ui/components/page-state.tsx';
+import { buttonClassName } from '@ui/components/button.tsx';
 import { formatLength } from '@ui/format.ts';
 import { useGarments } from '../../features/catalog/api/get-garments.ts';
 import { useMotifs } from '../../features/catalog/api/get-motifs.ts';
 import { GarmentPicture } from '../../features/catalog/components/garment-picture.tsx';
 import { SizePicker } from '../../features/catalog/components/size-picker.tsx';
+import { FabricColourPicker } from '../../features/catalog/components/fabric-colour-picker.tsx';
 import { BorderFitList } from '../../features/catalog/components/border-fit-list.tsx';
 import { BorderPrice } from '../../features/quote/components/border-price.tsx';
 import { paths } from '../../config/paths.ts';
@@ -39,22 +41,12 @@ export function GarmentPage() {
           <Link to={paths.home.href()} className="text-sm text-walnut-500 hover:text-madder-600">← All garments</Link>
           <h1 className="mt-2 text-3xl font-semibold">{garment.name}</h1>
           <p className="mt-3 text-walnut-700">{garment.description}</p>
-          <fieldset className="mt-6">
-            <legend className="font-medium">Fabric colour{colour ? `: ${colour.name}` : ''}</legend>
-            <div className="mt-2 flex flex-wrap gap-2">
-              {garment.colours.map((c) => (
-                <button
-                  key={c.id}
-                  type="button"
-                  aria-pressed={c.id === colour?.id}
-                  aria-label={c.name}
-                  onClick={() => setColourId(c.id)}
-                  className="h-11 w-11 rounded-full border-2 border-white shadow ring-2 ring-linen-300 aria-pressed:ring-madder-500"
-                  style={{ backgroundColor: c.hex }}
-                />
-              ))}
-            </div>
-          </fieldset>
+          <Link to={paths.design.href(garment.slug)} className={`mt-5 ${buttonClassName()}`}>
+            Design this garment
+          </Link>
+          <div className="mt-6">
+            <FabricColourPicker colours={garment.colours} selected={colour} onSelect={setColourId} />
+          </div>
           <div className="mt-6">
             <SizePicker sizes={garment.sizes} selectedId={size?.id} onSelect={setSizeId} />
           </div>

@@ -1,0 +1,69 @@
+import type { BorderPlacement } from '@server/contracts/designs.ts';
+// Straight from its module: the engine's entry also registers colour spaces at load, which the designer does not need.
+import { fitBorder, type BorderFit } from '@server/engine/fit-border.ts';
+import { HEM_ZONE, motifOf, sizeOf, zoneOf, type DesignSetting } from './design-setting.ts';
+
+/** One repeat as it shows on the front of the mockup, mm. */
+export interface BorderRepeat {
+  centerXMm: number;
+  centerYMm: number;
+  widthMm: number;
+  heightMm: number;
+}
+
+/** The strip of the hem the border runs along, mm on the mockup: repeats past its ends are round the back. */
+export interface BorderBand {
+  leftMm: number;
+  widthMm: number;
+  centerYMm: number;
+  heightMm: number;
+}
+
+export type BorderLayout =
+  | { ok: true; fit: BorderFit; isClosed: boolean; runLengthMm: number; band: BorderBand; repeats: BorderRepeat[] }
+  /** `bandHeightMm` is the motif at full size, so an unfitted border can still be kept inside the hem zone. */
+  | { ok: false; reason: string; bandHeightMm: number };
+
+/**
+ * Lays a border out with the engine's fitBorder, the same fit the server prices: the front panel as an open run, or
+ * the whole hem as a closed loop of which the front half shows. The run is centred on the hem zone, and its centre
+ * line sits `hemOffsetMm` above the hem edge (the zone's bottom).
+ */
+export function layoutBorder(setting: DesignSetting, sizeId: number, border: BorderPlacement): BorderLayout {
+  const size = sizeOf(setting, sizeId);
+  const motif = motifOf(setting, border.motif);
+  if (!motif) return { ok: false, reason: 'This border is no longer offered; choose another.', bandHeightMm: 0 };
+  const zone = zoneOf(size, HEM_ZONE);
+  const isClosed = border.run === 'circumference';
+  const runLengthMm = isClosed ? size.hemCircumferenceMm : size.hemFrontMm;
+  if (!zone || runLengthMm === null || size.hemFrontMm === null) {
+    return { ok: false, reason: 'This garment has no hem to take a border.', bandHeightMm: motif.heightMm };
+  }
+  const fit = fitBorder({
+    runLengthMm,
+    closed: isClosed,
+    motifWidthMm: motif.widthMm,
+    gapMm: motif.gapMm,
+    minScale: motif.minScalePct / 100,
+    maxScale: motif.maxScalePct / 100,
+    count: border.count,
+  });
+  if (!fit.ok) return { ok: false, reason: fit.reason, bandHeightMm: motif.heightMm };
+
+  const frontMm = size.hemFrontMm;
+  const middleXMm = zone.xMm + zone.widthMm / 2;
+  const heightMm = motif.heightMm * fit.scale;
+  const centerYMm = zone.yMm + zone.heightMm - border.hemOffsetMm;
+  // The loop is unrolled from the back seam, so the front panel is its middle stretch.
+  const frontStartMm = isClosed ? (runLengthMm - frontMm) / 2 : 0;
+  const repeats = fit.centersMm
+    .map((runMm) => ({ centerXMm: middleXMm - frontMm / 2 + (runMm - frontStartMm), centerYMm, widthMm: fit.repeatWidthMm, heightMm }))
+    .filter((repeat) => Math.abs(repeat.centerXMm - middleXMm) < (frontMm + repeat.widthMm) / 2);
+  return { ok: true, fit, isClosed, runLengthMm, band: { leftMm: middleXMm - frontMm / 2, widthMm: frontMm, centerYMm, heightMm }, repeats };
+}
+
+/** The border band's height for keeping it in the hem zone, mm, whether or not it fits. */
+export const borderBandHeightMm = (layout: BorderLayout) => (layout.ok ? layout.band.heightMm : layout.bandHeightMm);
+
+/** A border only to be laid out, to show how a motif would fit before the customer chooses it. */
+export const trialBorder = (motif: string, run: BorderPlacement['run']): BorderPlacement => ({ id: 'trial', kind: 'border', zone: 'hem', motif, run, hemOffsetMm: 0, threads: ['trial'] });

@@ -1,0 +1,34 @@
+import type { Canvas, FabricObject } from 'fabric/es';
+import type { Dispatch } from '../commands/command-registry.ts';
+import { px, toMm, type DesignView } from '../model/view.ts';
+import type { SceneSync } from './scene-sync.ts';
+
+/**
+ * Turns what the customer does on the canvas into commands; nothing here writes to the design itself. A drag
+ * previews on every pointer move and commits once on release; clicking an item selects it.
+ */
+export function translateCanvasEvents(canvas: Canvas, sync: SceneSync, viewOf: () => DesignView, dispatch: Dispatch): () => void {
+  const target = (object: FabricObject) => {
+    const id = sync.placementIdOf(object);
+    if (id === undefined) return undefined;
+    const view = viewOf();
+    const centre = object.getCenterPoint();
+    return { id, centerXMm: toMm(view, px(centre.x)), centerYMm: toMm(view, px(centre.y)) };
+  };
+  const selected = (objects: FabricObject[] | undefined) => {
+    if (!sync.isEchoing()) dispatch('select-placement', { id: sync.placementIdOf(objects?.[0]) ?? null });
+  };
+  return canvas.on({
+    'object:moving': ({ target: object }) => {
+      const moved = target(object);
+      if (moved) dispatch('drag-placement', moved);
+    },
+    'object:modified': ({ target: object }) => {
+      const moved = target(object);
+      if (moved) dispatch('move-placement', moved);
+    },
+    'selection:created': ({ selected: objects }) => selected(objects),
+    'selection:updated': ({ selected: objects }) => selected(objects),
+    'selection:cleared': () => selected(undefined),
+  });
+}
