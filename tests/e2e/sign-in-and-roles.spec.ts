@@ -60,7 +60,8 @@ test('when the pages load, then nothing is fetched from any host but this one', 
   await expect(page.getByRole('heading', { name: /borders all the way round/i })).toBeVisible();
   await page.goto('/admin/');
   await expect(page.getByRole('heading', { name: 'Studio sign-in' })).toBeVisible();
-  expect(await page.evaluate(() => document.fonts.check('500 16px Poppins'))).toBe(true);
+  // Wait for the face to arrive before asking: a check right after first paint can race the font file.
+  expect(await page.evaluate(async () => (await document.fonts.load('500 16px Poppins'), document.fonts.check('500 16px Poppins')))).toBe(true);
   expect(foreign).toEqual([]);
   expect(cspErrors).toEqual([]);
 });
