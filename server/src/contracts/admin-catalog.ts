@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { motifSummary } from './catalog.ts';
+import { letteringFont, motifSummary, threadColour } from './catalog.ts';
 
 /** A motif as the studio sees it: the customer-facing summary plus the digitized file's measured figures. */
 export const studioMotif = motifSummary.extend({
@@ -9,21 +9,14 @@ export const studioMotif = motifSummary.extend({
 });
 export type StudioMotif = z.infer<typeof studioMotif>;
 
-export const studioThread = z.object({ id: z.number().int(), code: z.string(), name: z.string(), hex: z.string(), isActive: z.boolean() });
+/** Threads and fonts as the studio sees them: the customer-facing entries, hidden ones included. */
+export const studioThread = threadColour.extend({ id: z.number().int(), isActive: z.boolean() });
 export type StudioThread = z.infer<typeof studioThread>;
 
 export const studioHoop = z.object({ id: z.number().int(), slug: z.string(), name: z.string(), fieldWidthMm: z.number(), fieldHeightMm: z.number(), isActive: z.boolean() });
 export type StudioHoop = z.infer<typeof studioHoop>;
 
-export const studioFont = z.object({
-  id: z.number().int(),
-  slug: z.string(),
-  name: z.string(),
-  fontFamily: z.string(),
-  minHeightMm: z.number(),
-  maxHeightMm: z.number(),
-  isActive: z.boolean(),
-});
+export const studioFont = letteringFont.extend({ isActive: z.boolean() });
 export type StudioFont = z.infer<typeof studioFont>;
 
 export const studioCatalogResponse = z.object({

@@ -204,3 +204,28 @@ function limitWording(layout: Layout, scale: number): string {
     ? `${formatPercent(scale)} — below the ${formatPercent(layout.minScale)} minimum for this motif`
     : `${formatPercent(scale)} — above the ${formatPercent(layout.maxScale)} maximum for this motif`;
 }
+
+/** A catalogue motif's width, gap and resize limits, the limits in whole percent as the studio enters them. */
+export interface BorderMotifLimits {
+  widthMm: number;
+  gapMm: number;
+  minScalePct: number;
+  maxScalePct: number;
+}
+
+/**
+ * fitBorder for a catalogue motif: the one place percent limits become the engine's scale factors, so the server's
+ * quote and the storefront's drawing fit a border the same way.
+ */
+export function fitMotifBorder(
+  motif: BorderMotifLimits,
+  run: { runLengthMm: number; closed: boolean; count?: number },
+): EngineResult<BorderFit, BorderFitFailure> {
+  return fitBorder({
+    ...run,
+    motifWidthMm: motif.widthMm,
+    gapMm: motif.gapMm,
+    minScale: motif.minScalePct / 100,
+    maxScale: motif.maxScalePct / 100,
+  });
+}

@@ -7,8 +7,8 @@
 export type { EngineResult, Failure } from './engine-result.ts';
 export { MM_PER_INCH } from './units.ts';
 
-export { fitBorder, MAX_BORDER_REPEATS } from './fit-border.ts';
-export type { BorderFit, BorderFitFailure, BorderFitInput, BorderSuggestion } from './fit-border.ts';
+export { fitBorder, fitMotifBorder, MAX_BORDER_REPEATS } from './fit-border.ts';
+export type { BorderFit, BorderFitFailure, BorderFitInput, BorderMotifLimits, BorderSuggestion } from './fit-border.ts';
 
 export { planHoopings } from './plan-hoopings.ts';
 export type { HoopField, Hooping, HoopingPlan, HoopingPlanInput, HoopingSide } from './plan-hoopings.ts';

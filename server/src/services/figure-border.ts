@@ -1,4 +1,4 @@
-import { estimateBorderStitches, estimateStitches, fitBorder, planHoopings, type BorderFit, type HoopingPlan } from '../engine/index.ts';
+import { estimateBorderStitches, estimateStitches, fitMotifBorder, planHoopings, type BorderFit, type HoopingPlan } from '../engine/index.ts';
 import type { BorderPlacement } from '../contracts/designs.ts';
 import type { CatalogHoop, CatalogMotifEntry, QuoteCatalog } from './quote-catalog.ts';
 import { byFieldArea, catalogMotifFor, countOf, refuse, type PlacementOutcome } from './placement-outcome.ts';
@@ -20,15 +20,7 @@ export function figureBorder(catalog: QuoteCatalog, placement: BorderPlacement, 
   const runLengthMm = isClosed ? size.hemCircumferenceMm : size.hemFrontMm;
   if (runLengthMm === null) return refuse(`${path}.zone`, `The ${garment.name} has no hem to take a border.`);
 
-  const fit = fitBorder({
-    runLengthMm,
-    closed: isClosed,
-    motifWidthMm: motif.widthMm,
-    gapMm: motif.gapMm,
-    minScale: motif.minScalePct / 100,
-    maxScale: motif.maxScalePct / 100,
-    count: placement.count,
-  });
+  const fit = fitMotifBorder(motif, { runLengthMm, closed: isClosed, count: placement.count });
   if (!fit.ok) {
     const where = isClosed ? 'round the hem' : 'along the front hem';
     const isAsked = placement.count !== undefined;

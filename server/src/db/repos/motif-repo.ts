@@ -1,13 +1,9 @@
 import type { Db } from '../knex.ts';
 import type { MotifSummary } from '../../contracts/catalog.ts';
 
-/** Active motifs, borders first, in the shop's display order. */
-export async function listActiveMotifs(db: Db): Promise<MotifSummary[]> {
-  const rows = await db('motifs')
-    .select('id', 'slug', 'name', 'kind', 'svg', 'width_mm', 'height_mm', 'gap_mm', 'min_scale_pct', 'max_scale_pct', 'colour_count', 'default_thread_codes')
-    .where({ is_active: true })
-    .orderBy([{ column: 'kind' }, { column: 'sort_order' }, { column: 'id' }]);
-  return rows.map((row) => ({
+/** A motifs row as the catalogue shows it; the studio's catalogue adds its measured figures on top. */
+export function toMotifSummary(row: Record<string, any>): MotifSummary {
+  return {
     id: row.id,
     slug: row.slug,
     name: row.name,
@@ -22,5 +18,14 @@ export async function listActiveMotifs(db: Db): Promise<MotifSummary[]> {
     colourCount: row.colour_count,
     // JSON columns arrive parsed.
     threadCodes: row.default_thread_codes,
-  }));
+  };
+}
+
+/** Active motifs, borders first, in the shop's display order. */
+export async function listActiveMotifs(db: Db): Promise<MotifSummary[]> {
+  const rows = await db('motifs')
+    .select('id', 'slug', 'name', 'kind', 'svg', 'width_mm', 'height_mm', 'gap_mm', 'min_scale_pct', 'max_scale_pct', 'colour_count', 'default_thread_codes')
+    .where({ is_active: true })
+    .orderBy([{ column: 'kind' }, { column: 'sort_order' }, { column: 'id' }]);
+  return rows.map(toMotifSummary);
 }

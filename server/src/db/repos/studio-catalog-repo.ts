@@ -1,5 +1,7 @@
 import type { Db } from '../knex.ts';
 import type { StudioCatalogResponse } from '../../contracts/admin-catalog.ts';
+import { toMotifSummary } from './motif-repo.ts';
+import { letteringFontColumns, toLetteringFont } from './lettering-font-repo.ts';
 
 const ordered = [{ column: 'sort_order' }, { column: 'id' }];
 
@@ -9,25 +11,14 @@ export async function readStudioCatalog(db: Db): Promise<StudioCatalogResponse> 
     db('motifs').select('*').orderBy([{ column: 'kind' }, ...ordered]),
     db('threads').select('id', 'code', 'name', 'hex', 'is_active').orderBy(ordered),
     db('hoops').select('id', 'slug', 'name', 'field_width_mm', 'field_height_mm', 'is_active').orderBy(ordered),
-    db('lettering_fonts').select('id', 'slug', 'name', 'font_family', 'min_height_mm', 'max_height_mm', 'is_active').orderBy(ordered),
+    db('lettering_fonts').select([...letteringFontColumns, 'is_active']).orderBy(ordered),
   ]);
   // mysql2 returns DECIMAL columns as strings and booleans as 0/1; JSON columns arrive parsed.
   return {
     motifs: motifs.map((m) => ({
-      id: m.id,
-      slug: m.slug,
-      name: m.name,
-      kind: m.kind,
-      svg: m.svg,
-      widthMm: Number(m.width_mm),
-      heightMm: Number(m.height_mm),
-      gapMm: Number(m.gap_mm),
-      minScalePct: m.min_scale_pct,
-      maxScalePct: m.max_scale_pct,
-      colourCount: m.colour_count,
+      ...toMotifSummary(m),
       stitchCount: m.stitch_count,
       mix: { run: m.run_stitches, satin: m.satin_stitches, fill: m.fill_stitches },
-      threadCodes: m.default_thread_codes,
       isActive: Boolean(m.is_active),
     })),
     threads: threads.map((t) => ({ id: t.id, code: t.code, name: t.name, hex: t.hex, isActive: Boolean(t.is_active) })),
@@ -39,14 +30,6 @@ export async function readStudioCatalog(db: Db): Promise<StudioCatalogResponse> 
       fieldHeightMm: Number(h.field_height_mm),
       isActive: Boolean(h.is_active),
     })),
-    fonts: fonts.map((f) => ({
-      id: f.id,
-      slug: f.slug,
-      name: f.name,
-      fontFamily: f.font_family,
-      minHeightMm: Number(f.min_height_mm),
-      maxHeightMm: Number(f.max_height_mm),
-      isActive: Boolean(f.is_active),
-    })),
+    fonts: fonts.map((f) => ({ ...toLetteringFont(f), isActive: Boolean(f.is_active) })),
   };
 }

@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import type { GarmentSummary, MotifSummary } from '@server/contracts/catalog.ts';
 // Straight from its module: the engine's entry also registers colour spaces at load, which this page does not need.
-import { fitBorder } from '@server/engine/fit-border.ts';
+import { fitMotifBorder } from '@server/engine/fit-border.ts';
 import { formatLength } from '@ui/format.ts';
 import { HemBorderStrip } from './hem-border-strip.tsx';
 
@@ -29,14 +29,7 @@ export function BorderFitList({
   return (
     <ul className="grid gap-4">
       {motifs.map((motif) => {
-        const fit = fitBorder({
-          runLengthMm: circumferenceMm,
-          closed: true,
-          motifWidthMm: motif.widthMm,
-          gapMm: motif.gapMm,
-          minScale: motif.minScalePct / 100,
-          maxScale: motif.maxScalePct / 100,
-        });
+        const fit = fitMotifBorder(motif, { runLengthMm: circumferenceMm, closed: true });
         return (
           <li key={motif.id} className="rounded-card border border-linen-200 bg-white p-4">
             <div className="flex flex-wrap items-baseline justify-between gap-2">

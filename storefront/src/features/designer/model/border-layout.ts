@@ -1,6 +1,6 @@
 import type { BorderPlacement } from '@server/contracts/designs.ts';
 // Straight from its module: the engine's entry also registers colour spaces at load, which the designer does not need.
-import { fitBorder, type BorderFit } from '@server/engine/fit-border.ts';
+import { fitMotifBorder, type BorderFit } from '@server/engine/fit-border.ts';
 import { HEM_ZONE, motifOf, sizeOf, zoneOf, type DesignSetting } from './design-setting.ts';
 
 /** One repeat as it shows on the front of the mockup, mm. */
@@ -39,15 +39,7 @@ export function layoutBorder(setting: DesignSetting, sizeId: number, border: Bor
   if (!zone || runLengthMm === null || size.hemFrontMm === null) {
     return { ok: false, reason: 'This garment has no hem to take a border.', bandHeightMm: motif.heightMm };
   }
-  const fit = fitBorder({
-    runLengthMm,
-    closed: isClosed,
-    motifWidthMm: motif.widthMm,
-    gapMm: motif.gapMm,
-    minScale: motif.minScalePct / 100,
-    maxScale: motif.maxScalePct / 100,
-    count: border.count,
-  });
+  const fit = fitMotifBorder(motif, { runLengthMm, closed: isClosed, count: border.count });
   if (!fit.ok) return { ok: false, reason: fit.reason, bandHeightMm: motif.heightMm };
 
   const frontMm = size.hemFrontMm;
