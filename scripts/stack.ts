@@ -35,7 +35,7 @@ export interface LocalStack {
 
 /** Environment for the server in the local demo or test stack; values already set in the shell win. */
 export function localStack(profile: StackProfile): LocalStack {
-  const ports = portsByProfile[profile];
+  const ports = offsetPorts(portsByProfile[profile], Number(process.env.HW_PORT_OFFSET ?? 0));
   const appPort = profile === 'demo' && process.env.PORT ? Number(process.env.PORT) : ports.app;
   const appOrigin = `http://127.0.0.1:${appPort}`;
   const db = localDatabaseSettings();
@@ -61,6 +61,15 @@ export function localStack(profile: StackProfile): LocalStack {
     ...(profile === 'demo' ? pickDefined(process.env, ['HOST', 'PORT', 'APP_ORIGIN']) : {}),
   };
   return { ports: { ...ports, app: appPort }, appOrigin, env };
+}
+
+/**
+ * HW_PORT_OFFSET moves every port of both stacks, so two checkouts on one machine (each with its own MariaDB on its
+ * own HW_DB_PORT) can run their tests side by side.
+ */
+function offsetPorts(ports: Ports, offset: number): Ports {
+  if (!Number.isInteger(offset) || offset < 0 || offset > 20_000) throw new Error('HW_PORT_OFFSET must be a whole number from 0 to 20000.');
+  return Object.fromEntries(Object.entries(ports).map(([name, port]) => [name, port + offset])) as unknown as Ports;
 }
 
 function pickDefined(env: NodeJS.ProcessEnv, keys: string[]): NodeJS.ProcessEnv {
