@@ -37,7 +37,7 @@ export interface OrderHistory {
 /** Status each step moves the order to; steps not listed leave the status as it is. */
 const nextStatus: Partial<Record<OrderStep['type'], OrderStatus>> = {
   order_created: 'awaiting_payment',
-  payment_authorized: 'needs_proof',
+  payment_authorized: 'authorized',
   proof_sent: 'proof_sent',
   changes_requested: 'changes_requested',
   proof_approved: 'proof_approved',
@@ -70,9 +70,9 @@ export function replayOrder(context: OrderContext): OrderHistory {
   let refunds = 0;
 
   /** Records an event; a step with a status in nextStatus also moves the order. */
-  const event = (type: string, when: Date, actor: number | null, extra: { note?: string; payload?: object } = {}) => {
+  const event = (type: string, when: Date, actor: number | null, extra: { note?: string; payload?: object; to?: OrderStatus } = {}) => {
     const from = status;
-    const to = nextStatus[type as OrderStep['type']];
+    const to = extra.to ?? nextStatus[type as OrderStep['type']];
     if (to) status = to;
     events.push({
       id: context.ids.event++,
@@ -177,7 +177,9 @@ export function replayOrder(context: OrderContext): OrderHistory {
         refundedCents += amountCents;
         refunds += 1;
         paymentStatus = refundedCents === totalCents ? 'refunded' : 'partially_refunded';
-        event(step.type, when, userIds[step.by], { note: step.note, payload: { refundId: `re_seed_${ref}_${refunds}`, amountCents } });
+        // A full refund closes the order; a partial one (goodwill, say) leaves it where it was.
+        const to = paymentStatus === 'refunded' ? 'refunded' : undefined;
+        event(step.type, when, userIds[step.by], { note: step.note, payload: { refundId: `re_seed_${ref}_${refunds}`, amountCents }, ...(to && { to }) });
         break;
       }
       case 'cancelled':

@@ -91,8 +91,7 @@ export const orders: OrderSpec[] = [
       { type: 'proof_sent', at: '2026-11-14T17:45', by: 'marigold', message: proofNote },
       { type: 'proof_approved', at: '2026-11-15T03:00' },
       { type: 'payment_captured', at: '2026-11-16T14:30', by: 'marigold' },
-      { type: 'cancelled', at: '2026-11-17T15:10', by: 'marigold', note: 'The 3T blank arrived with a flaw and the supplier is out until January; Dominic agreed to cancel.' },
-      { type: 'refunded', at: '2026-11-17T15:12', by: 'marigold', note: 'Full refund: the studio cancelled.' },
+      { type: 'refunded', at: '2026-11-17T15:12', by: 'marigold', note: 'Full refund: the 3T blank arrived with a flaw and the supplier is out until January; Dominic agreed to cancel.' },
     ],
   },
   {

@@ -1,11 +1,11 @@
 import { z } from 'zod';
-import { orderStatus } from './admin-overview.ts';
+import { orderStatus, paymentStatus } from './order-status.ts';
 
 export const orderNumberParams = z.object({
   number: z.string().regex(/^[A-Z]{2}-\d{1,10}$/, 'must look like WB-1001'),
 });
 
-export const paymentStatus = z.enum(['none', 'authorized', 'captured', 'partially_refunded', 'refunded', 'voided']);
+export { paymentStatus };
 
 export const orderEvent = z.object({
   id: z.number().int(),

@@ -1,18 +1,8 @@
 import { z } from 'zod';
 
-export const orderStatuses = [
-  'awaiting_payment',
-  'needs_proof',
-  'proof_sent',
-  'changes_requested',
-  'proof_approved',
-  'in_production',
-  'stitched',
-  'shipped',
-  'cancelled',
-] as const;
-export const orderStatus = z.enum(orderStatuses);
-export type OrderStatus = z.infer<typeof orderStatus>;
+import { orderStatus } from './order-status.ts';
+
+export { orderStatus, orderStatuses, type OrderStatus } from './order-status.ts';
 
 export const recentOrder = z.object({
   id: z.number().int(),

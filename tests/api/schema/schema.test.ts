@@ -49,7 +49,7 @@ describe('schema and demo seeds', () => {
     expect(sizesPerGarment.every((row) => Number(row.n) >= 4)).toBe(true);
     const statuses = (await db('orders').distinct('status')).map((row) => row.status).sort();
     expect(statuses).toEqual(
-      ['awaiting_payment', 'cancelled', 'changes_requested', 'in_production', 'needs_proof', 'proof_approved', 'proof_sent', 'shipped', 'stitched'],
+      ['authorized', 'awaiting_payment', 'cancelled', 'changes_requested', 'in_production', 'proof_approved', 'proof_sent', 'refunded', 'shipped', 'stitched'],
     );
   });
 
