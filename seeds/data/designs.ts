@@ -195,4 +195,19 @@ export const designs: DesignSpec[] = [
     createdAt: '2026-11-27T03:00',
     updatedAt: '2026-11-27T03:20',
   },
+  // The production sheet's worked case: 4 daisy-chain repeats round the 692 mm hem at 173 mm, with a chest motif.
+  {
+    id: 14,
+    customer: 'harriet',
+    garment: 'bishop-dress',
+    size: '6m',
+    colour: 'Blush',
+    name: "Rosie's garden-party bishop",
+    placements: [
+      { id: 'hem', kind: 'border', motif: 'daisy-chain', run: 'circumference' },
+      { id: 'lamb', kind: 'motif', zone: 'chest', motif: 'little-lamb', scalePct: 90 },
+    ],
+    createdAt: '2026-11-17T19:20',
+    updatedAt: '2026-11-17T19:40',
+  },
 ];

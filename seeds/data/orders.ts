@@ -29,7 +29,7 @@ export const shipToByCustomer: Record<'priya' | 'harriet' | 'dominic', ShipTo> =
 
 const proofNote = 'Here is your proof, drawn to scale on the garment. Reply with any change, or approve it to start stitching.';
 
-/** Twelve orders: every status at least once, as the studio's board shows them on 28 November 2026. */
+/** Thirteen orders: every status at least once, as the studio's board shows them on 28 November 2026. */
 export const orders: OrderSpec[] = [
   {
     id: 1, number: 'WB-1001', quoteId: 1,
@@ -168,5 +168,17 @@ export const orders: OrderSpec[] = [
   {
     id: 12, number: 'WB-1012', quoteId: 12,
     steps: [{ type: 'order_created', at: '2026-11-27T22:45' }],
+  },
+  {
+    id: 13, number: 'WB-1013', quoteId: 15,
+    neededBy: '2026-12-10',
+    customerNote: 'For a garden party; Rosie loves lambs.',
+    steps: [
+      { type: 'order_created', at: '2026-11-17T19:50' },
+      { type: 'payment_authorized', at: '2026-11-17T19:52' },
+      { type: 'proof_sent', at: '2026-11-18T16:10', by: 'marigold', message: proofNote },
+      { type: 'proof_approved', at: '2026-11-19T02:30' },
+      { type: 'payment_captured', at: '2026-11-19T15:00', by: 'marigold' },
+    ],
   },
 ];

@@ -15,7 +15,7 @@ interface QuoteSpec {
   createdAt: string;
 }
 
-/** Quotes the scenario's orders were placed from (ids 1–12, one per order), then one saved and one visitor quote. */
+/** Quotes the scenario's orders were placed from (ids 1–12, one per order), one saved and one visitor quote, then 15 for WB-1013. */
 export const quoteSpecs: QuoteSpec[] = [
   { id: 1, design: 7, quantity: 1, isRush: false, createdAt: '2026-11-08T18:12' },
   { id: 2, design: 3, quantity: 1, isRush: false, createdAt: '2026-11-09T14:05' },
@@ -44,6 +44,7 @@ export const quoteSpecs: QuoteSpec[] = [
     isRush: false,
     createdAt: '2026-11-28T00:30',
   },
+  { id: 15, design: 14, quantity: 1, isRush: false, createdAt: '2026-11-17T19:45' },
 ];
 
 /** A quote is good for two weeks: long enough to decide, short enough that prices do not go stale. */

@@ -27,6 +27,8 @@ import { createPaymentWebhookRouter } from './routes/payment-webhooks.ts';
 import { createAdminOverviewRouter } from './routes/admin/overview.ts';
 import { createAdminCatalogRouter } from './routes/admin/catalog.ts';
 import { createAdminOrdersRouter } from './routes/admin/orders.ts';
+import { createProductionSheetRouter } from './routes/admin/production-sheet.ts';
+import { createProductionSheetService } from './services/production-sheet-service.ts';
 import type { CurrentUser } from './contracts/users.ts';
 
 export interface AppDeps {
@@ -113,6 +115,7 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/admin/overview', createAdminOverviewRouter({ db }));
   app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));
   app.use('/api/admin/orders', createAdminOrdersRouter({ db }));
+  app.use('/api/admin/orders', createProductionSheetRouter({ sheets: createProductionSheetService({ db, fonts: createLetteringFontLoader() }) }));
   app.use('/api', notFoundHandler);
 
   const staticRoot = resolve(config.staticDir);

@@ -1,3 +1,5 @@
+import { toInchFraction } from '@server/engine/inch-fraction.ts';
+
 /** Formats integer minor units with the currency's own decimals (USD 1234 → $12.34, JPY 500 → ¥500). */
 export function formatMoney(cents: number, currency: string, locale = 'en-US'): string {
   const formatter = new Intl.NumberFormat(locale, { style: 'currency', currency });
@@ -5,18 +7,9 @@ export function formatMoney(cents: number, currency: string, locale = 'en-US'): 
   return formatter.format(cents / 10 ** digits);
 }
 
-const mmPerInch = 25.4;
-
 /** A length for people: millimetres and the nearest sixteenth of an inch, e.g. "173 mm · 6 ¹³⁄₁₆ in". */
 export function formatLength(mm: number): string {
-  const sixteenths = Math.round((mm / mmPerInch) * 16);
-  const whole = Math.floor(sixteenths / 16);
-  let num = sixteenths % 16;
-  let den = 16;
-  while (num > 0 && num % 2 === 0) {
-    num /= 2;
-    den /= 2;
-  }
+  const { whole, numerator: num, denominator: den } = toInchFraction(mm);
   const sup = '⁰¹²³⁴⁵⁶⁷⁸⁹';
   const sub = '₀₁₂₃₄₅₆₇₈₉';
   const map = (n: number, digits: string) => String(n).replace(/\d/g, (d) => digits[Number(d)]!);

@@ -46,7 +46,7 @@ const quoteSummary = z.object({
 });
 
 /** Advice the apps show as it is; severity `info` is good practice, `caution` needs a look, `warning` is a hazard. */
-const guidanceMessage = z.object({
+export const guidanceMessage = z.object({
   code: z.string(),
   severity: z.enum(['info', 'caution', 'warning']),
   title: z.string(),

@@ -49,7 +49,11 @@ export function figureBorder(catalog: QuoteCatalog, placement: BorderPlacement, 
         // Two places, as the design document records it: 96.11 for the 692 mm loop of a 180 mm motif.
         scalePct: Number((fit.scale * 100).toFixed(2)),
         repeatWidthMm: fit.repeatWidthMm,
+        pitchMm: fit.pitchMm,
+        runLengthMm,
+        isClosed,
         hoop: planned.hoop,
+        plan: planned.plan,
       },
     },
   };

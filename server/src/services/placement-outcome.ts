@@ -1,4 +1,4 @@
-import type { CatalogMotif, StitchEstimate } from '../engine/index.ts';
+import type { CatalogMotif, HoopingPlan, StitchEstimate } from '../engine/index.ts';
 import type { DesignPlacement } from '../contracts/designs.ts';
 import type { CatalogHoop, CatalogMotifEntry } from './quote-catalog.ts';
 
@@ -17,7 +17,14 @@ export interface PlacementFigures {
     scalePct: number;
     /** One stitched repeat, mm. */
     repeatWidthMm: number;
+    /** Start-to-start distance between repeats, mm. */
+    pitchMm: number;
+    /** The run the repeats fill: the front hem (open) or the whole way round (closed), mm. */
+    runLengthMm: number;
+    isClosed: boolean;
     hoop: CatalogHoop;
+    /** The engine's hooping plan in that hoop: which repeats each hooping holds, in stitching order. */
+    plan: HoopingPlan;
   };
 }
 
@@ -53,10 +60,15 @@ const mm = (value: number) => `${Number(value.toFixed(1))}`;
  */
 export function checkFitsAHoop(hoops: readonly CatalogHoop[], what: string, estimate: StitchEstimate, field: string): PlacementOutcome | undefined {
   const { widthMm, heightMm } = estimate;
-  const holds = (hoop: CatalogHoop) =>
-    (widthMm <= hoop.fieldWidthMm && heightMm <= hoop.fieldHeightMm) || (widthMm <= hoop.fieldHeightMm && heightMm <= hoop.fieldWidthMm);
-  if (hoops.some(holds)) return undefined;
+  if (smallestHoopHolding(hoops, widthMm, heightMm)) return undefined;
   const largest = byFieldArea(hoops).at(-1);
   const limit = largest ? `the ${mm(largest.fieldWidthMm)} × ${mm(largest.fieldHeightMm)} mm sewing field of our largest hoop` : 'any hoop the studio has';
   return refuse(field, `${what} comes to ${mm(widthMm)} × ${mm(heightMm)} mm, bigger than ${limit}; make it smaller.`);
+}
+
+/** The smallest hoop whose sewing field holds an item of this size either way round, as a single item is hooped. */
+export function smallestHoopHolding(hoops: readonly CatalogHoop[], widthMm: number, heightMm: number): CatalogHoop | undefined {
+  return byFieldArea(hoops).find(
+    (hoop) => (widthMm <= hoop.fieldWidthMm && heightMm <= hoop.fieldHeightMm) || (widthMm <= hoop.fieldHeightMm && heightMm <= hoop.fieldWidthMm),
+  );
 }

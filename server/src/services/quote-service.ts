@@ -80,7 +80,7 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader })
 export type QuoteService = ReturnType<typeof createQuoteService>;
 
 /** The motifs and fonts a design names, so only those rows are read. */
-function slugsNamedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: string[] } {
+export function slugsNamedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: string[] } {
   const motifSlugs = new Set<string>();
   const fontSlugs = new Set<string>();
   for (const placement of document.placements) {
@@ -91,7 +91,7 @@ function slugsNamedIn(document: DesignDocument): { motifSlugs: string[]; fontSlu
 }
 
 /** The catalogue as `figureDesign` takes it; artwork uploads are left out until the server stores them. */
-function toQuoteCatalog(record: QuoteCatalogRecord, fonts: LetteringFontLoader): QuoteCatalog {
+export function toQuoteCatalog(record: QuoteCatalogRecord, fonts: LetteringFontLoader): QuoteCatalog {
   return {
     garment: record.garment,
     size: record.size,

@@ -1,0 +1,86 @@
+import { describe, expect, it } from 'vitest';
+import { figureDesign } from '../../../server/src/services/design-figures.ts';
+import { sheetBorderPlan } from '../../../server/src/services/production-sheet-hoopings.ts';
+import { formatLengthPlain } from '../../../server/src/services/production-sheet-pdf-kit.ts';
+import { templateArea, tileName, tileTemplate, TILE_OVERLAP_MM } from '../../../server/src/services/production-sheet-pdf-templates.ts';
+import type { QuoteCatalog } from '../../../server/src/services/quote-catalog.ts';
+
+const daisyChain = {
+  slug: 'daisy-chain', name: 'Daisy chain', kind: 'border' as const, widthMm: 180, heightMm: 40, gapMm: 0,
+  run: 460, satin: 3420, fill: 500, colourCount: 3, minScalePct: 90, maxScalePct: 110,
+};
+const catalog: QuoteCatalog = {
+  garment: { id: 3, slug: 'bishop-dress', name: 'Bishop dress', fabricType: 'woven', isNapped: false, minAgeMonths: 6 },
+  size: { id: 301, code: '6m', label: '6 months', hemFrontMm: 346, hemCircumferenceMm: 692, zones: [] },
+  motifs: new Map([[daisyChain.slug, daisyChain]]),
+  fonts: new Map(),
+  hoops: [{ slug: 'oblong-120x180', name: 'Oblong 120 × 180 mm', fieldWidthMm: 120, fieldHeightMm: 180 }],
+  machine: { stitchesPerMinute: 650, minutesPerColorChange: 0.5, minutesPerHooping: 4, setupMinutes: 10 },
+};
+
+function planFor(run: 'front' | 'circumference') {
+  const figured = figureDesign(catalog, {
+    version: 1,
+    placements: [{ id: 'hem', kind: 'border', zone: 'hem', motif: 'daisy-chain', run, hemOffsetMm: 44.45, threads: ['WB-118', 'WB-101', 'WB-103'] }],
+  });
+  if (!figured.ok) throw new Error(figured.error.message);
+  return sheetBorderPlan(figured.value.placements[0].border!, 40 * (173 / 180), 44.45);
+}
+
+describe('sheetBorderPlan', () => {
+  it('when 4 repeats of 173 mm go round a 692 mm loop, then the hoop centres are ±86.5 and ±259.5 mm from the centre mark, centre first', () => {
+    const plan = planFor('circumference');
+    expect(plan.hoopings.map((h) => [h.order, h.side, h.fromCentreMm])).toEqual([
+      [1, 'center', -86.5],
+      [2, 'left', -259.5],
+      [3, 'right', 86.5],
+      [4, 'right', 259.5],
+    ]);
+  });
+
+  it('when 2 repeats of 173 mm fill the 346 mm front hem, then the centre mark is the middle of the front and the hoops sit 86.5 mm either side', () => {
+    const plan = planFor('front');
+    expect(plan).toMatchObject({ count: 2, isClosed: false, runLengthMm: 346 });
+    expect(plan.hoopings.map((h) => [h.repeatNumbers, h.fromRowStartMm, h.fromCentreMm])).toEqual([
+      [[1], 86.5, -86.5],
+      [[2], 259.5, 86.5],
+    ]);
+  });
+});
+
+describe('tileTemplate', () => {
+  it('when a template fits the printable area, then it prints as one tile', () => {
+    expect(tileTemplate({ widthMm: 188, heightMm: 128 }, templateArea('letter'))).toEqual([
+      { xMm: 0, yMm: 0, widthMm: 188, heightMm: 128, row: 0, column: 0, rows: 1, columns: 1 },
+    ]);
+  });
+
+  it('when a template is wider and taller than the page, then the tiles cover it, overlap by 10 mm and none is larger than the area', () => {
+    const area = templateArea('a4');
+    const template = { widthMm: 268, heightMm: 300 };
+    const tiles = tileTemplate(template, area);
+    expect(tiles.map(tileName)).toEqual(['A1', 'A2', 'B1', 'B2']);
+    for (const tile of tiles) {
+      expect(tile.widthMm).toBeLessThanOrEqual(area.widthMm);
+      expect(tile.heightMm).toBeLessThanOrEqual(area.heightMm);
+    }
+    const [a1, a2, b1] = tiles;
+    expect(a1.xMm + a1.widthMm - a2.xMm).toBeCloseTo(TILE_OVERLAP_MM, 9);
+    expect(a1.yMm + a1.heightMm - b1.yMm).toBeCloseTo(TILE_OVERLAP_MM, 9);
+    expect(a2.xMm + a2.widthMm).toBeCloseTo(template.widthMm, 9);
+    expect(b1.yMm + b1.heightMm).toBeCloseTo(template.heightMm, 9);
+  });
+});
+
+describe('formatLengthPlain', () => {
+  // 1 in = 25.4 mm exactly (NIST SP 811); to the nearest sixteenth as a ruler reads.
+  it.each([
+    [173, '173 mm (6 13/16 in)'],
+    [86.5, '86.5 mm (3 3/8 in)'],
+    [259.5, '259.5 mm (10 3/16 in)'],
+    [50.8, '50.8 mm (2 in)'],
+    [-12.7, '12.7 mm (1/2 in)'],
+  ])('when %s mm is printed, then it reads %s', (mm, text) => {
+    expect(formatLengthPlain(mm)).toBe(text);
+  });
+});
