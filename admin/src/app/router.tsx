@@ -5,6 +5,7 @@ import { StudioLayout } from './layout.tsx';
 import { TodayPage } from './routes/today.tsx';
 import { CataloguePage } from './routes/catalogue.tsx';
 import { OrderPage } from './routes/order.tsx';
+import { ProductionSheetPage } from './routes/production-sheet.tsx';
 import { NotFoundPage } from './routes/not-found.tsx';
 
 const studioHome = `${basename}/`;
@@ -22,6 +23,7 @@ export const router = createBrowserRouter(
             { path: paths.home.path, element: <TodayPage /> },
             { path: paths.catalogue.path, element: <CataloguePage /> },
             { path: paths.order.path, element: <OrderPage /> },
+            { path: paths.productionSheet.path, element: <ProductionSheetPage /> },
             { path: '*', element: <NotFoundPage /> },
           ],
         },

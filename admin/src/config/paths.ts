@@ -3,6 +3,7 @@ export const paths = {
   home: { path: '/', href: () => '/' },
   catalogue: { path: '/catalogue', href: () => '/catalogue' },
   order: { path: '/orders/:number', href: (number: string) => `/orders/${encodeURIComponent(number)}` },
+  productionSheet: { path: '/orders/:number/production', href: (number: string) => `/orders/${encodeURIComponent(number)}/production` },
 } as const;
 
 export const basename = '/admin';

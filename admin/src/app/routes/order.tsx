@@ -32,6 +32,7 @@ export function OrderPage() {
         <div className="mt-1 flex flex-wrap items-baseline gap-x-4 gap-y-1">
           <h1 className="text-2xl font-semibold">Order {order.number}</h1>
           <span className="rounded-full bg-sage-50 px-3 py-1 text-sm font-medium text-sage-700">{statusLabels[order.status]}</span>
+          <Link to={paths.productionSheet.href(order.number)} className="text-sm font-medium text-madder-600 underline hover:text-madder-700">Production sheet</Link>
         </div>
         <p className="mt-1 text-walnut-700">
           {order.customer.name} · <a className="underline" href={`mailto:${order.customer.email}`}>{order.customer.email}</a>

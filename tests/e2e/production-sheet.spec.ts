@@ -1,0 +1,44 @@
+import { readFileSync } from 'node:fs';
+import { expect, test } from '@playwright/test';
+import { signInAs } from './support/sign-in.ts';
+
+test.describe.configure({ mode: 'serial' });
+
+test('when staff open an approved order’s production sheet, then they see the hooping plan and the PDF downloads', async ({ page }) => {
+  await page.goto('/admin/orders/WB-1013');
+  await signInAs(page, 'Tobias Fenwick', /sign in with google/i);
+  await expect(page.getByRole('heading', { name: 'Order WB-1013' })).toBeVisible();
+  await page.getByRole('link', { name: 'Production sheet' }).click();
+
+  await expect(page.getByRole('heading', { name: 'Production sheet · WB-1013' })).toBeVisible();
+  await expect(page.getByRole('heading', { name: /Hooping plan · Hem border: Daisy and leaf chain/ })).toBeVisible();
+  const picture = page.getByTestId('hooping-plan-picture');
+  await expect(picture).toBeVisible();
+  await expect(picture).toHaveAttribute('aria-label', /hooping 1 holds repeat 2/);
+  await expect(page.getByText(/86\.5 mm \(3 ⅜ in\) left of the centre mark/)).toBeVisible();
+  await expect(page.getByText('WB-118').first()).toBeVisible();
+  await page.screenshot({ path: 'test-results/screens/production-sheet.png', fullPage: true });
+
+  // The template is drawn at true size: its SVG is sized in CSS millimetres, 173 mm repeat inside a 188 mm template.
+  const template = page.getByRole('img', { name: /one repeat per hooping, at true size/ });
+  await expect(template).toHaveAttribute('width', '188mm');
+
+  await page.getByText('A4', { exact: true }).click();
+  const download = page.waitForEvent('download');
+  await page.getByRole('link', { name: 'Download PDF' }).click();
+  const file = await download;
+  expect(file.suggestedFilename()).toBe('production-sheet-WB-1013-a4.pdf');
+  const bytes = readFileSync((await file.path())!);
+  expect(bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+
+  await page.setViewportSize({ width: 390, height: 844 });
+  await expect(page.getByRole('link', { name: 'Download PDF' })).toBeVisible();
+  await page.screenshot({ path: 'test-results/screens/production-sheet-phone.png', fullPage: true });
+});
+
+test('when the proof is not approved yet, then the page says why instead of a sheet', async ({ page }) => {
+  await page.goto('/admin/orders/WB-1008/production');
+  await signInAs(page, 'Tobias Fenwick', /sign in with google/i);
+  await expect(page.getByRole('alert')).toContainText('proof waiting for the customer’s answer');
+  await page.screenshot({ path: 'test-results/screens/production-sheet-not-approved.png' });
+});
