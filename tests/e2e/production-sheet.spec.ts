@@ -15,7 +15,7 @@ test('when staff open an approved order’s production sheet, then they see the 
   const picture = page.getByTestId('hooping-plan-picture');
   await expect(picture).toBeVisible();
   await expect(picture).toHaveAttribute('aria-label', /hooping 1 holds repeat 2/);
-  await expect(page.getByText(/86\.5 mm \(3 ⅜ in\) left of the centre mark/)).toBeVisible();
+  await expect(page.getByText(/86\.5 mm \(3 ³⁄₈ in\) left of the centre mark/)).toBeVisible();
   await expect(page.getByText('WB-118').first()).toBeVisible();
   await page.screenshot({ path: 'test-results/screens/production-sheet.png', fullPage: true });
 

@@ -18,6 +18,10 @@ const papers: { value: PaperSize; label: string }[] = [
   { value: 'a4', label: 'A4' },
 ];
 
+/** The paper less 10 mm margins (the print CSS's @page margin), mm: Letter is 215.9 × 279.4 mm, A4 210 × 297 mm. */
+const printableWidthMm: Record<PaperSize, number> = { letter: 195.9, a4: 190 };
+const printableHeightMm: Record<PaperSize, number> = { letter: 259.4, a4: 277 };
+
 const mm1 = (mm: number) => `${Number(Math.abs(mm).toFixed(1))} mm`;
 /** The inch half of formatLength ("3 ⅜ in"), for figures shown in mm to a tenth. */
 const inchesOf = (mm: number) => formatLength(Math.abs(mm)).split(' · ')[1];
@@ -128,7 +132,9 @@ export function ProductionSheetPage() {
           <div>
             <h2 className="text-lg font-semibold">Template · {template.title}</h2>
             <p className="text-sm text-walnut-500">{template.subtitle}</p>
-            <p className="screen-only text-xs text-walnut-500">Shown at true size; wider than the paper, it prints best from the PDF, which tiles it.</p>
+            {(template.widthMm > printableWidthMm[paper] || template.heightMm > printableHeightMm[paper]) && (
+              <p className="screen-only text-xs text-walnut-500">Larger than the paper: print it from the PDF, which splits it into overlapping tiles.</p>
+            )}
           </div>
           <div className="template-frame overflow-x-auto">
             <TrueSizeTemplate template={template} />

@@ -19,7 +19,7 @@ export function HemPlanPicture({ border }: { border: Border }) {
     `Hooping plan along the ${Math.round(border.runLengthMm)} mm hem: ` +
     border.hoopings.map((h) => `hooping ${h.order} holds repeat ${h.repeatNumbers.join(' and ')}`).join('; ') + '.';
   return (
-    <svg role="img" aria-label={label} viewBox={`0 0 ${WIDTH} ${TOP + STRIP + 34}`} className="h-auto w-full" data-testid="hooping-plan-picture">
+    <svg role="img" aria-label={label} viewBox={`0 0 ${WIDTH} ${TOP + STRIP + 34}`} className="h-auto w-full max-w-3xl" data-testid="hooping-plan-picture">
       <rect x={0} y={TOP} width={WIDTH} height={STRIP} fill="#f8f1e4" />
       <line x1={0} x2={WIDTH} y1={TOP + STRIP} y2={TOP + STRIP} stroke="#2e241e" strokeWidth={3} />
       {border.hoopings.map((hooping) => {
