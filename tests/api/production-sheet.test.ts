@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { productionSheetResponse, type ProductionSheet } from '../../server/src/contracts/production-sheet.ts';
 import { planHoopings } from '../../server/src/engine/index.ts';
+import { templateArea, tileTemplate } from '../../server/src/services/production-sheet-pdf-templates.ts';
 import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
 import { readPdfPages, type PdfPage } from '../support/pdf-geometry.ts';
 
@@ -126,6 +127,15 @@ describe('GET /api/admin/orders/:number/production-sheet.pdf', () => {
     // The daisy chain's stem runs the repeat's full width, so the widest outline piece is the 173 mm repeat.
     const outlineWidths = templatePages[0].paths.map((path) => path.widthPt);
     expect(outlineWidths.some((width) => near(width, borderRepeatPt))).toBe(true);
+  });
+
+  it('when a template is wider than the paper (WB-1003: 4 ducklings in the 160 × 260 hoop), then it prints as overlapping tiles, each with its check square', async () => {
+    const sheet = productionSheetResponse.parse((await staff.get(sheetPath('WB-1003')).expect(200)).body);
+    const area = templateArea('letter');
+    const tiles = sheet.templates.flatMap((template) => tileTemplate(template, area));
+    expect(tiles.length).toBeGreaterThan(sheet.templates.length);
+    const pages = await readPdfPages(await fetchPdf('WB-1003', 'letter'));
+    expect(pages.filter((page) => hasSquare(page, checkSquarePt))).toHaveLength(tiles.length);
   });
 
   it('when printed on A4, then every page is 595.28 × 841.89 pt and the check square is still 141.73 pt', async () => {

@@ -10,11 +10,11 @@ import { ACCENT, FONT, FONT_BOLD, GUIDE, INK, MARGIN_MM, PAPER_MM, SOFT_INK, for
 export const CHECK_SQUARE_MM = 50;
 /** Tiles share this much of the template, so they can be laid over each other and taped. */
 export const TILE_OVERLAP_MM = 10;
-const HEADER_MM = 16;
+const HEADER_MM = 17;
 const FOOTER_MM = CHECK_SQUARE_MM + 6;
 const CROSSHAIR_ARM_MM = 12;
-const LEGEND_ITEM = 'Red dashes: the sewing field · red cross: the hoop centre · black: the stitched outline.';
-const LEGEND_BORDER = `${LEGEND_ITEM.slice(0, -1)} · green dots: the border's centre line (mark it as the guide line) · red triangles: where repeats join.`;
+const LEGEND_ITEM = 'Red dashes: sewing field · red cross: hoop centre · black: stitched outline.';
+const LEGEND_BORDER = `${LEGEND_ITEM.slice(0, -1)} · green dots: guide line (border centre) · red triangles: repeat joins.`;
 
 /** One printed piece of a template: a window onto it, mm, and its place in the grid. */
 export interface TemplateTile {
@@ -72,11 +72,14 @@ function drawHeader(doc: Pdf, orderNumber: string, template: PlacementTemplate, 
   doc.fillColor(INK).font(FONT_BOLD).fontSize(11).text(`${orderNumber} · Template · ${template.title}`, x, pt(MARGIN_MM), { width, lineBreak: false, ellipsis: true });
   const isTiled = tile.rows * tile.columns > 1;
   const tiling = isTiled
-    ? `Tile ${tileName(tile)}: ${tile.rows} down × ${tile.columns} across. Overlap the tiles by ${TILE_OVERLAP_MM} mm so the crosses meet, then tape.`
+    ? `Tile ${tileName(tile)} of ${tile.rows} down × ${tile.columns} across: overlap the tiles by ${TILE_OVERLAP_MM} mm so the crosses meet, then tape.`
     : 'Printed at true size on one page.';
-  doc.fillColor(SOFT_INK).font(FONT).fontSize(8).text(`${template.subtitle} ${tiling}`, x, pt(MARGIN_MM + 6), { width, lineBreak: false, ellipsis: true });
   const legend = template.guideLineYMm === null ? LEGEND_ITEM : LEGEND_BORDER;
-  doc.text(legend, x, pt(MARGIN_MM + 10.5), { width, lineBreak: false, ellipsis: true });
+  doc.fillColor(SOFT_INK).font(FONT).fontSize(7.5);
+  // One line each: a line too long for the page is cut short rather than running into the next.
+  [template.subtitle, tiling, legend].forEach((line, i) => {
+    doc.text(line, x, pt(MARGIN_MM + 5.5 + i * 3.4), { width, height: pt(3.4), ellipsis: true });
+  });
 }
 
 /** Draws the part of the template under the tile's window, with the window's top-left at `origin` (pt). */
