@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
 import { signInAs } from './support/sign-in.ts';
+import { readPdfPages } from '../support/pdf-geometry.ts';
 
 test.describe.configure({ mode: 'serial' });
 
@@ -30,6 +31,13 @@ test('when staff open an approved order’s production sheet, then they see the 
   expect(file.suggestedFilename()).toBe('production-sheet-WB-1013-a4.pdf');
   const bytes = readFileSync((await file.path())!);
   expect(bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+
+  // Printing the page itself: the print CSS asks for the chosen paper through a named @page.
+  const printed = await readPdfPages(await page.pdf({ path: 'test-results/screens/production-sheet-printed.pdf', preferCSSPageSize: true, printBackground: true }));
+  expect(printed.length).toBeGreaterThanOrEqual(3);
+  // A4 is 595.28 × 841.89 PDF units (ISO 216; ISO 32000-1 §8.3.2.3); Chromium rounds its page box slightly.
+  expect(Math.abs(printed[0].view[2] - 595.28)).toBeLessThan(1);
+  expect(Math.abs(printed[0].view[3] - 841.89)).toBeLessThan(1);
 
   await page.setViewportSize({ width: 390, height: 844 });
   await expect(page.getByRole('link', { name: 'Download PDF' })).toBeVisible();
