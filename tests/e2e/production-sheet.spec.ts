@@ -1,4 +1,5 @@
 import { readFileSync } from 'node:fs';
+import AxeBuilder from '@axe-core/playwright';
 import { expect, test } from '@playwright/test';
 import { signInAs } from './support/sign-in.ts';
 import { readPdfPages } from '../support/pdf-geometry.ts';
@@ -19,6 +20,8 @@ test('when staff open an approved order’s production sheet, then they see the 
   await expect(page.getByText(/86\.5 mm \(3 ³⁄₈ in\) left of the centre mark/)).toBeVisible();
   await expect(page.getByText('WB-118').first()).toBeVisible();
   await page.screenshot({ path: 'test-results/screens/production-sheet.png', fullPage: true });
+  const audit = await new AxeBuilder({ page }).include('main').analyze();
+  expect(audit.violations.map((violation) => `${violation.id}: ${violation.nodes.map((node) => node.target.join(' ')).join(', ')}`)).toEqual([]);
 
   // The template is drawn at true size: its SVG is sized in CSS millimetres, 173 mm repeat inside a 188 mm template.
   const template = page.getByRole('img', { name: /one repeat per hooping, at true size/ });
