@@ -77,6 +77,8 @@ describe('GET /api/admin/orders/:number/production-sheet', () => {
     expect(sheet.templates.map((template) => template.placementId)).toEqual(['hem', 'lamb']);
     // Common practice, no source: the trade's worked case resizes a 180 mm motif to 173 mm for a 692 mm loop.
     expect(sheet.templates[0].artwork.widthMm).toBeCloseTo(173, 6);
+    // The stem is a running-stitch line, drawn but not tinted; the petals and leaves are filled shapes.
+    expect(new Set(sheet.templates[0].outlines.map((outline) => outline.isFilled))).toEqual(new Set([true, false]));
   });
 
   it('when the order has no approved proof yet, then it answers 409 with the reason', async () => {

@@ -70,8 +70,11 @@ const sheetPlacement = z.object({
   border: borderPlan.nullable(),
 });
 
-/** A stroked outline in the template's millimetres (SVG path data, y down). */
-const templateOutline = z.object({ d: z.string(), hex: z.string() });
+/**
+ * One piece of the stitched outline in the template's millimetres (SVG path data, y down), with the artwork's
+ * colour for it; `isFilled` is false for a line such as a running-stitch stem, which has no inside to tint.
+ */
+const templateOutline = z.object({ d: z.string(), hex: z.string(), isFilled: z.boolean() });
 
 /**
  * A 1:1 placement template, everything in mm from the template's top-left corner: the stitched outline, the

@@ -13,6 +13,8 @@ export interface Outline {
   d: string;
   /** The artwork's own colour for that piece (`#rrggbb`). */
   hex: string;
+  /** False for a stroked line (a running stitch), which has no inside. */
+  isFilled: boolean;
 }
 
 export interface ArtworkOutline {
@@ -40,6 +42,7 @@ export function motifOutline(svgText: string, motif: { widthMm: number; heightMm
   const outlines = drawing.drawables.map((drawable) => ({
     d: svgpath(drawable.pathData).transform(drawable.transform).translate(-minX, -minY).scale(mmPerUnit).abs().round(DECIMALS).toString(),
     hex: drawable.fill ?? drawable.stroke ?? INK,
+    isFilled: drawable.fill !== null,
   }));
   return { widthMm: motif.widthMm * scale, heightMm: motif.heightMm * scale, outlines };
 }
@@ -55,7 +58,7 @@ export function letteringOutline(font: GlyphOutlineSource, text: string, letterH
   return {
     widthMm: extent.maxX - extent.minX,
     heightMm: extent.maxY - extent.minY,
-    outlines: [{ d: commandsToPathData(commands, extent), hex }],
+    outlines: [{ d: commandsToPathData(commands, extent), hex, isFilled: true }],
   };
 }
 

@@ -22,6 +22,7 @@ const papers: { value: PaperSize; label: string }[] = [
 const printableWidthMm: Record<PaperSize, number> = { letter: 195.9, a4: 190 };
 const printableHeightMm: Record<PaperSize, number> = { letter: 259.4, a4: 277 };
 
+const day = new Intl.DateTimeFormat('en-US', { weekday: 'short', month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
 const mm1 = (mm: number) => `${Number(Math.abs(mm).toFixed(1))} mm`;
 /** The inch half of formatLength ("3 ⅜ in"), for figures shown in mm to a tenth. */
 const inchesOf = (mm: number) => formatLength(Math.abs(mm)).split(' · ')[1];
@@ -77,7 +78,7 @@ export function ProductionSheetPage() {
         </div>
         <p className="text-walnut-700">
           {data.order.designName} for {data.order.customerName}
-          {data.order.neededBy && <> · needed by <strong>{data.order.neededBy}</strong></>}
+          {data.order.neededBy && <> · needed by <strong>{day.format(new Date(`${data.order.neededBy}T12:00:00Z`))}</strong></>}
         </p>
         {data.order.customerNote && <p className="max-w-2xl rounded-lg bg-saffron-100 p-3 text-sm">“{data.order.customerNote}”</p>}
         <div className="screen-only flex flex-wrap items-center gap-3">

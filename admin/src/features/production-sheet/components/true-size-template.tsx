@@ -23,7 +23,7 @@ export function TrueSizeTemplate({ template }: { template: PlacementTemplate }) 
       <rect x={field.xMm} y={field.yMm} width={field.widthMm} height={field.heightMm} fill="none" stroke={FIELD} strokeWidth={0.3} strokeDasharray="2 1" />
       <text x={field.xMm + 1.5} y={field.yMm + 4} fontSize={3} fill={FIELD}>sewing field</text>
       {template.outlines.map((outline, i) => (
-        <path key={i} d={outline.d} fill={outline.hex} fillOpacity={0.25} stroke={INK} strokeWidth={0.2} />
+        <path key={i} d={outline.d} fill={outline.isFilled ? outline.hex : 'none'} fillOpacity={0.25} stroke={INK} strokeWidth={0.2} />
       ))}
       {template.guideLineYMm !== null && (
         <line x1={field.xMm} x2={field.xMm + field.widthMm} y1={template.guideLineYMm} y2={template.guideLineYMm} stroke={GUIDE} strokeWidth={0.2} strokeDasharray="1 1" />
