@@ -103,6 +103,13 @@ describe('GET /api/admin/orders/:number/production-sheet', () => {
     await request(harness.app).get(`${sheetPath(WORKED_ORDER)}.pdf?paper=a4`).expect(401);
   });
 
+  it('when the order is for two garments (WB-1004), then the order’s machine time counts both and the setup once', async () => {
+    const twins = productionSheetResponse.parse((await staff.get(sheetPath('WB-1004')).expect(200)).body);
+    expect(twins.order.quantity).toBe(2);
+    const setup = twins.runMinutes.items.find((item) => item.code === 'setup')!.minutes;
+    expect(twins.runMinutes.orderMinutes).toBeCloseTo(2 * twins.runMinutes.totalMinutes - setup, 6);
+  });
+
   it('when every approved seeded order is opened, then each has a sheet', async () => {
     const numbers = (await harness.db('orders').whereIn('status', ['proof_approved', 'in_production', 'stitched', 'shipped']).pluck('number')) as string[];
     expect(numbers.length).toBeGreaterThanOrEqual(5);

@@ -4,6 +4,10 @@ import { sheetBorderPlan } from '../../../server/src/services/production-sheet-h
 import { formatLengthPlain } from '../../../server/src/services/production-sheet-pdf-kit.ts';
 import { templateArea, tileName, tileTemplate, TILE_OVERLAP_MM } from '../../../server/src/services/production-sheet-pdf-templates.ts';
 import type { QuoteCatalog } from '../../../server/src/services/quote-catalog.ts';
+import { letteringOutline } from '../../../server/src/services/production-sheet-outlines.ts';
+import { itemTemplate } from '../../../server/src/services/production-sheet-templates.ts';
+import type { SheetPlacement } from '../../../server/src/contracts/production-sheet.ts';
+import { loadShippedFont } from '../engine/support/load-font.ts';
 
 const daisyChain = {
   slug: 'daisy-chain', name: 'Daisy chain', kind: 'border' as const, widthMm: 180, heightMm: 40, gapMm: 0,
@@ -82,5 +86,23 @@ describe('formatLengthPlain', () => {
     [-12.7, '12.7 mm (1/2 in)'],
   ])('when %s mm is printed, then it reads %s', (mm, text) => {
     expect(formatLengthPlain(mm)).toBe(text);
+  });
+});
+
+describe('template outlines', () => {
+  it('when lettering is set 20 mm tall, then a capital H outline is 20 mm tall, as the engine sizes letters', () => {
+    const outline = letteringOutline(loadShippedFont('fredoka'), 'H', 20, '#2f2f33');
+    expect(outline?.heightMm).toBeCloseTo(20, 3);
+    expect(outline?.outlines[0]).toMatchObject({ hex: '#2f2f33', isFilled: true });
+  });
+
+  it('when an item only fits the hoop turned, then its template turns the field and centres the item on the crosshair', () => {
+    const placement = { id: 'bunny', label: 'Sitting bunny' } as SheetPlacement;
+    const hoop = { slug: 'oblong', name: 'Oblong 180 × 120 mm', fieldWidthMm: 180, fieldHeightMm: 120 };
+    const template = itemTemplate(placement, hoop, { widthMm: 60, heightMm: 150, outlines: [] });
+    expect(template.field).toMatchObject({ widthMm: 120, heightMm: 180 });
+    expect(template.subtitle).toMatch(/turned 90° in the hoop/);
+    expect(template.artwork.xMm + template.artwork.widthMm / 2).toBeCloseTo(template.centre.xMm, 9);
+    expect(template.artwork.yMm + template.artwork.heightMm / 2).toBeCloseTo(template.centre.yMm, 9);
   });
 });
