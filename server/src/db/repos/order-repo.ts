@@ -137,6 +137,8 @@ export async function listPayments(db: Db, orderId: number): Promise<PaymentReco
 /** The payment by the provider's ids, locked for the caller's transaction. */
 export async function lockPaymentBy(trx: Db, key: { checkoutSessionId: string } | { paymentIntentId: string }): Promise<PaymentRecord | undefined> {
   const where = 'checkoutSessionId' in key ? { checkout_session_id: key.checkoutSessionId } : { payment_intent_id: key.paymentIntentId };
+  // An event without the id it should carry matches no payment.
+  if (typeof Object.values(where)[0] !== 'string') return undefined;
   const row = await trx('payments').select('*').where(where).forUpdate().first();
   return row ? toPayment(row) : undefined;
 }
