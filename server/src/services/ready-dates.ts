@@ -12,7 +12,7 @@ export function shopToday(now: Date, timeZone: string): string {
   return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(now);
 }
 
-/** `days` working days after `date`; a weekend day first moves on to Monday. */
+/** The working day `days` working days after `date` (Saturday + 1 is Monday); with 0, a weekend day moves on to Monday. */
 export function addWorkingDays(date: string, days: number): string {
   let at = Date.parse(`${date}T00:00:00Z`);
   let left = days;

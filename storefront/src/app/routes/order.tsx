@@ -1,9 +1,13 @@
+import { lazy, Suspense } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { ApiError } from '@ui/api-client.ts';
 import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
 import { formatMoney } from '@ui/format.ts';
 import { useGarments } from '../../features/catalog/api/get-garments.ts';
 import { GarmentPicture } from '../../features/catalog/components/garment-picture.tsx';
+import { useMotifs } from '../../features/catalog/api/get-motifs.ts';
+import { useFonts } from '../../features/catalog/api/get-fonts.ts';
+import { useThreads } from '../../features/catalog/api/get-threads.ts';
 import { QuoteLines } from '../../features/quote/components/quote-lines.tsx';
 import { useOrder } from '../../features/orders/api/get-order.ts';
 import { OrderStatusBadge } from '../../features/orders/components/order-status-badge.tsx';
@@ -15,6 +19,9 @@ import { DesignSummary } from '../../features/orders/components/design-summary.t
 import { CancelOrderButton } from '../../features/orders/components/cancel-order-button.tsx';
 import { SignInNeeded } from '../../components/sign-in-needed.tsx';
 import { paths } from '../../config/paths.ts';
+
+// Lazy: the preview measures lettering with the designer's canvas library, which the rest of the page never needs.
+const DesignPreview = lazy(() => import('../../features/designer/components/design-preview.tsx').then(({ DesignPreview }) => ({ default: DesignPreview })));
 
 const card = 'rounded-card border border-linen-200 bg-white p-5 shadow-sm';
 
@@ -28,6 +35,9 @@ export function OrderPage() {
   const checkoutReturn = checkoutReturnOf(params.get('checkout'));
   const order = useOrder(number, { isAwaitingWebhook: checkoutReturn === 'done' });
   const garments = useGarments();
+  const motifs = useMotifs();
+  const fonts = useFonts();
+  const threads = useThreads();
 
   if (order.isPending) return <Loading label="Opening your order…" />;
   if (order.isError) {
@@ -82,7 +92,17 @@ export function OrderPage() {
           <PaymentState order={order.data} checkoutReturn={checkoutReturn} />
           <section aria-labelledby="design-heading" className={card}>
             <h2 id="design-heading" className="mb-3 text-lg font-semibold">Your design</h2>
-            {garment && <GarmentPicture garment={garment} colourHex={design.colourHex} imageClassName="max-h-56" className="mb-3" />}
+            {garment && (
+              <div className="mb-3 rounded-card bg-linen-100 p-3">
+                {motifs.data && fonts.data && threads.data ? (
+                  <Suspense fallback={<GarmentPicture garment={garment} colourHex={design.colourHex} imageClassName="max-h-56" />}>
+                    <DesignPreview garment={garment} sizeId={design.sizeId} colourHex={design.colourHex} document={design.document} motifs={motifs.data} fonts={fonts.data} threads={threads.data} label={`Your design on the ${design.garmentName.toLowerCase()}`} />
+                  </Suspense>
+                ) : (
+                  <GarmentPicture garment={garment} colourHex={design.colourHex} imageClassName="max-h-56" />
+                )}
+              </div>
+            )}
             <DesignSummary design={design} />
           </section>
           <section aria-labelledby="price-heading" className={card}>
