@@ -127,6 +127,30 @@ describe('declined and abandoned payments', () => {
     expect(retry.checkoutUrl).not.toBe(order.checkoutUrl);
   });
 
+  it('when a declined card is followed by a good one on the same page, then the order is placed after all', async () => {
+    const agent = await priya();
+    const order = await placeOrder(agent);
+    const [pending] = await paymentsOf(order.number);
+    await harness.deliver({ id: `evt_declined_first_${pending.id}`, object: 'event', type: 'payment_intent.payment_failed', data: { object: { id: `pi_first_${pending.id}`, object: 'payment_intent', metadata: { orderId: String(pending.order_id) }, last_payment_error: { message: 'Your card was declined.' } } } }).expect(200);
+    expect((await paymentsOf(order.number))[0].status).toBe('failed');
+    await harness.pay(order.checkoutUrl);
+    await harness.deliverNewEvents();
+    expect(await orderRow(order.number)).toMatchObject({ status: 'authorized', payment_status: 'authorized' });
+    expect((await detail(agent, order.number)).payment.failureMessage).toBeNull();
+  });
+
+  it('when the order was cancelled while its payment page was open, then the hold that arrives is released at once', async () => {
+    const agent = await priya();
+    const order = await placeOrder(agent);
+    await agent.post(`/api/orders/${order.number}/cancel`).expect(200);
+    await harness.pay(order.checkoutUrl);
+    await harness.deliverNewEvents();
+    const [payment] = await paymentsOf(order.number);
+    expect(payment.status).toBe('voided');
+    expect(harness.stripeState.paymentIntents.get(payment.payment_intent_id)!.status).toBe('canceled');
+    expect(await orderRow(order.number)).toMatchObject({ status: 'cancelled', payment_status: 'voided' });
+  });
+
   it('when the payment page expires, then that attempt is failed and the order still waits for payment', async () => {
     const agent = await priya();
     const order = await placeOrder(agent);

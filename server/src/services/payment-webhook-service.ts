@@ -16,6 +16,7 @@ import {
 import type { LoggedMail } from './order-mail.ts';
 import { sendLoggedMail } from './order-mail.ts';
 import { moveOrder } from './order-transitions.ts';
+import { finalStatuses } from './order-flow.ts';
 import { orderPlacedMail } from './customer-order-mail.ts';
 import { formatMoneyText } from './money-text.ts';
 
@@ -88,7 +89,8 @@ export function createPaymentWebhookService(deps: { db: Db; stripe: Stripe; mail
   /** The card is held: the payment is authorized and a waiting order is placed; a later hold is simply recorded. */
   async function sessionCompleted(trx: Knex.Transaction, session: Stripe.Checkout.Session, intent: Stripe.PaymentIntent | undefined, now: Date): Promise<Effect> {
     const payment = (await lockPaymentBy(trx, { checkoutSessionId: session.id })) ?? (await pendingPaymentOfOrder(trx, session.metadata));
-    if (!payment || payment.status !== 'pending') return undefined;
+    // A declined card fails the attempt, yet the customer may try another card on the same page and succeed.
+    if (!payment || !['pending', 'failed'].includes(payment.status)) return undefined;
     if (!intent || intent.status !== 'requires_capture') {
       return attemptFailed(trx, payment, GENERIC_DECLINE, now);
     }
@@ -111,6 +113,12 @@ export function createPaymentWebhookService(deps: { db: Db; stripe: Stripe; mail
     } else {
       // A second payment after a lapsed hold: the order is already under way, so only the new hold is noted.
       await insertOrderNote(trx, { orderId: order.id, type: 'payment_authorized', actorUserId: null, payload, at: now });
+    }
+    if (finalStatuses.includes(order.status)) {
+      // The order was cancelled while the payment page was open: the new hold is let go at once.
+      await deps.stripe.paymentIntents.cancel(intent.id, { cancellation_reason: 'abandoned' });
+      await updatePayment(trx, payment.id, { status: 'voided' }, now);
+      await insertOrderNote(trx, { orderId: order.id, type: 'payment_voided', actorUserId: null, payload: { paymentIntentId: intent.id }, at: now });
     }
     await syncOrderPaymentStatus(trx, order.id, now);
     if (order.status !== 'awaiting_payment') return undefined;
