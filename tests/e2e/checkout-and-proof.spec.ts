@@ -86,7 +86,7 @@ test('when Priya designs a bishop dress, orders it and pays with the test card, 
   await page.screenshot({ path: screens('order-authorized'), fullPage: true });
 });
 
-test('when the card is declined, then the payment page says so, nothing is charged and the order offers another card', async ({ page }) => {
+test('when the card is declined, then the payment page says so, nothing is charged, and another card from the order page goes through', async ({ page }) => {
   await page.goto('/orders');
   await signInAs(page, 'Priya Castellanos');
   await page.goto('/design/bishop-dress');
@@ -118,6 +118,12 @@ test('when the card is declined, then the payment page says so, nothing is charg
   } finally {
     await db.destroy();
   }
+
+  // Another card on a fresh payment page goes through.
+  await payment.getByRole('button', { name: 'Try another card' }).click();
+  await payWith(page, '4242 4242 4242 4242');
+  await expect(page.getByText('Thank you! Your order is in')).toBeVisible();
+  await expect(page.getByRole('region', { name: 'Payment' })).toContainText('is held on your card, not charged');
 });
 
 test('when the studio sends proofs, then Priya pins a change on the first, approves the second, and the e-mails arrive', async ({ page }) => {

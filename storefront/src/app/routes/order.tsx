@@ -68,6 +68,12 @@ export function OrderPage() {
         </p>
       </div>
 
+      {checkoutReturn === 'done' && summary.status !== 'awaiting_payment' && summary.status !== 'cancelled' && (
+        <p role="status" className="rounded-card border border-sage-500 bg-sage-50 p-4 text-sage-700">
+          Thank you! Your order is in and your card is held, not charged. We will e-mail you as soon as your proof is ready.
+        </p>
+      )}
+
       <section aria-labelledby="steps-heading" className={card}>
         <h2 id="steps-heading" className="sr-only">Where your order is</h2>
         <OrderSteps status={summary.status} />
