@@ -95,6 +95,13 @@ test('when the card is declined, then the payment page says so, nothing is charg
   await page.getByRole('button', { name: 'Add the name' }).click();
   await page.getByRole('textbox', { name: 'Name this design' }).fill('Ada’s name bishop');
   await page.getByRole('button', { name: 'Save and order' }).click();
+  // A bigger size chosen at checkout carries the design to it and prices it again.
+  const yourOrder = page.getByRole('complementary', { name: 'Your order' });
+  await expect(page.getByRole('heading', { name: 'Order “Ada’s name bishop”' })).toBeVisible();
+  await yourOrder.getByText('18 months', { exact: true }).click();
+  await expect(yourOrder.getByRole('radio', { name: '18 months' })).toBeChecked();
+  await expect(page.getByText('Your design is carried to this size')).toBeVisible();
+  await expect(page.getByRole('complementary', { name: 'Your order' }).getByRole('cell', { name: /size 18 months/ })).toBeVisible();
   await page.getByLabel('Needed by').fill(neededBy);
   await fillAddress(page);
   await page.getByRole('button', { name: 'Continue to payment' }).click();
@@ -104,6 +111,7 @@ test('when the card is declined, then the payment page says so, nothing is charg
   await page.screenshot({ path: screens('declined'), fullPage: true });
   await page.getByRole('link', { name: 'Cancel and return to the shop' }).click();
   await expect(page.getByText('Waiting for payment').first()).toBeVisible();
+  await expect(page.getByText(/Ada’s name bishop: Bishop dress, 18 months/)).toBeVisible();
   const payment = page.getByRole('region', { name: 'Payment' });
   await expect(payment).toContainText('your card was not charged');
   await expect(payment).not.toContainText('held on your card');

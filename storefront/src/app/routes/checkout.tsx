@@ -1,4 +1,6 @@
-import { useCallback, useRef, useState } from 'react';
+import { useCallback, useMemo, useRef, useState } from 'react';
+import type { DesignDocument } from '@server/contracts/designs.ts';
+import type { SavedDesign } from '@server/contracts/saved-designs.ts';
 import { Link, useParams } from 'react-router-dom';
 import { ApiError } from '@ui/api-client.ts';
 import { Button, ButtonLink } from '@ui/components/button.tsx';
@@ -9,11 +11,17 @@ import { useCurrentUser } from '@ui/session/get-current-user.ts';
 import { useGarments } from '../../features/catalog/api/get-garments.ts';
 import { GarmentPicture } from '../../features/catalog/components/garment-picture.tsx';
 import { useSavedDesign } from '../../features/designer/api/get-saved-design.ts';
+import { updateDesign } from '../../features/designer/api/update-design.ts';
+import { createDesign } from '../../features/designer/api/create-design.ts';
+import { useMotifs } from '../../features/catalog/api/get-motifs.ts';
+import { useFonts } from '../../features/catalog/api/get-fonts.ts';
+import { SizePicker } from '../../features/catalog/components/size-picker.tsx';
+import { createQuote } from '../../features/checkout/api/create-quote.ts';
 import { QuoteLines } from '../../features/quote/components/quote-lines.tsx';
 import { usePlaceOrder } from '../../features/checkout/api/place-order.ts';
 import { CheckoutForm, type CheckoutFields } from '../../features/checkout/components/checkout-form.tsx';
 import { QuantityField } from '../../features/checkout/components/quantity-field.tsx';
-import { useCheckoutQuote } from '../../features/checkout/hooks/use-checkout-quote.ts';
+import { useCheckoutQuote, type OrderedDesign } from '../../features/checkout/hooks/use-checkout-quote.ts';
 import { paths } from '../../config/paths.ts';
 
 /** What the server said when it priced the order again (an expired quote, or a date that needs a rush). */
@@ -39,12 +47,22 @@ export function CheckoutPage() {
   const me = useCurrentUser();
   const saved = useSavedDesign(me.data ? designId : undefined);
   const garments = useGarments();
+  const motifs = useMotifs();
+  const fonts = useFonts();
   const [quantity, setQuantity] = useState(1);
   const [neededBy, setNeededBy] = useState('');
-  const priced = useCheckoutQuote(saved.data, quantity, false);
+  // Another size chosen here: the design carried to it, saved only when the order is placed.
+  const [resized, setResized] = useState<{ sizeId: number; document: DesignDocument }>();
+  const [resizeProblem, setResizeProblem] = useState<string>();
+  const [isSavingDesign, setIsSavingDesign] = useState(false);
+  const ordered = useMemo<OrderedDesign | undefined>(
+    () => saved.data && { id: saved.data.id, garmentId: saved.data.garmentId, colourId: saved.data.colourId, sizeId: resized?.sizeId ?? saved.data.sizeId, document: resized?.document ?? saved.data.document },
+    [saved.data, resized],
+  );
+  const priced = useCheckoutQuote(ordered, quantity, false);
   const readyDates = priced.quote?.readyDates;
   const isRush = readyDates !== undefined && neededBy !== '' && neededBy < readyDates.earliestReadyDate;
-  const rushPriced = useCheckoutQuote(isRush ? saved.data : undefined, quantity, true);
+  const rushPriced = useCheckoutQuote(isRush ? ordered : undefined, quantity, true);
   const shown = isRush ? rushPriced : priced;
   const place = usePlaceOrder();
   const [repriced, setRepriced] = useState<Repriced>();
@@ -67,14 +85,51 @@ export function CheckoutPage() {
   if (!saved.data || !garments.data) return <Loading label="Getting your design ready to order…" />;
   const design = saved.data;
   const garment = garments.data.find((candidate) => candidate.id === design.garmentId);
-  const size = garment?.sizes.find((candidate) => candidate.id === design.sizeId);
+  const sizeId = ordered?.sizeId ?? design.sizeId;
+  const size = garment?.sizes.find((candidate) => candidate.id === sizeId);
   const colour = garment?.colours.find((candidate) => candidate.id === design.colourId);
 
-  const submit = (fields: CheckoutFields, quoteId = shown.quote?.quoteId) => {
+  const changeSize = async (toSizeId: number) => {
+    if (!garment || !motifs.data || !fonts.data) return;
+    setResizeProblem(undefined);
+    if (toSizeId === design.sizeId) return setResized(undefined);
+    const { resizeDocument } = await import('../../features/designer/render/resize-document.ts');
+    const document = await resizeDocument({ garment, motifs: motifs.data, fonts: fonts.data, sizeId: design.sizeId, colourId: design.colourId, document: design.document, toSizeId });
+    setResized({ sizeId: toSizeId, document });
+  };
+
+  /** Keeps the design in the size chosen here; a design an earlier order stitches is kept, so this one is saved anew. */
+  const saveResized = async (): Promise<SavedDesign> => {
+    const request = { garmentId: design.garmentId, sizeId: resized!.sizeId, colourId: design.colourId, name: design.name, document: resized!.document };
+    try {
+      return await updateDesign({ id: design.id, request });
+    } catch (error) {
+      if (error instanceof ApiError && error.kind === 'conflict') return createDesign(request);
+      throw error;
+    }
+  };
+
+  const submit = async (fields: CheckoutFields, quoteId = shown.quote?.quoteId) => {
     if (quoteId === undefined) return;
     lastFields.current = fields;
     setRepriced(undefined);
-    place.mutate({ quoteId, designId: design.id, ...fields }, {
+    let designId = design.id;
+    if (resized) {
+      setIsSavingDesign(true);
+      try {
+        const kept = await saveResized();
+        if (kept.id !== design.id) {
+          designId = kept.id;
+          quoteId = (await createQuote({ designId, garmentId: kept.garmentId, sizeId: kept.sizeId, colourId: kept.colourId, document: kept.document, quantity, isRush })).quoteId;
+        }
+      } catch (error) {
+        setResizeProblem(error instanceof Error ? error.message : 'Your design could not be saved in the new size.');
+        return;
+      } finally {
+        setIsSavingDesign(false);
+      }
+    }
+    place.mutate({ quoteId, designId, ...fields }, {
       onSuccess: (started) => window.location.assign(started.checkoutUrl),
       onError: (error) => setRepriced(repricedOf(error)),
     });
@@ -95,9 +150,9 @@ export function CheckoutPage() {
             readyDates={readyDates}
             today={localToday()}
             onNeededByChange={onNeededByChange}
-            onSubmit={(fields) => submit(fields)}
+            onSubmit={(fields) => void submit(fields)}
             serverFields={serverFields}
-            isSubmitting={place.isPending}
+            isSubmitting={place.isPending || isSavingDesign}
             canSubmit={quote !== undefined && !shown.isPricing}
             summary={
               <div className="space-y-3">
@@ -109,7 +164,7 @@ export function CheckoutPage() {
                     <p className="mt-1">
                       Was <s>{formatMoney(repriced.previousTotalCents, repriced.currency)}</s>, now <strong>{formatMoney(repriced.totalCents, repriced.currency)}</strong>.
                     </p>
-                    <Button className="mt-3" onClick={() => lastFields.current && submit(lastFields.current, repriced.quoteId)} disabled={place.isPending}>
+                    <Button className="mt-3" onClick={() => lastFields.current && void submit(lastFields.current, repriced.quoteId)} disabled={place.isPending}>
                       Confirm {formatMoney(repriced.totalCents, repriced.currency)} and pay
                     </Button>
                   </div>
@@ -124,8 +179,11 @@ export function CheckoutPage() {
           {garment && <GarmentPicture garment={garment} colourHex={colour?.hex} imageClassName="max-h-48" />}
           <p className="text-sm text-walnut-700">
             {garment?.name}, size {size?.label}, {colour?.name}.{' '}
-            {garment && <Link to={paths.design.href(garment.slug, design.id)} className="text-madder-600 underline">Change the size or design</Link>}
+            {garment && <Link to={paths.design.href(garment.slug, design.id)} className="text-madder-600 underline">Change the design</Link>}
           </p>
+          {garment && motifs.data && fonts.data && <SizePicker sizes={garment.sizes} selectedId={sizeId} onSelect={(id) => void changeSize(id)} />}
+          {resized && <p className="text-sm text-walnut-500">Your design is carried to this size and saved that way when you order.</p>}
+          {resizeProblem && <p role="alert" className="text-sm text-madder-700">{resizeProblem}</p>}
           <QuantityField quantity={quantity} onChange={setQuantity} />
           <div aria-live="polite" className={shown.isPricing ? 'opacity-60' : ''}>
             <p role="status" className="text-sm text-walnut-500">{shown.isPricing ? 'Pricing…' : isRush ? 'Priced as a rush order' : ''}</p>
