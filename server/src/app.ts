@@ -13,6 +13,10 @@ import type { SessionLayer } from './auth/session.ts';
 import { createUserService } from './services/user-service.ts';
 import { createQuoteService } from './services/quote-service.ts';
 import { createDesignService } from './services/design-service.ts';
+import { createStoredQuoteService } from './services/stored-quote-service.ts';
+import { createCheckoutService } from './services/checkout-service.ts';
+import { createCustomerOrderService } from './services/customer-order-service.ts';
+import { createPaymentWebhookService } from './services/payment-webhook-service.ts';
 import { createLetteringFontLoader } from './integrations/lettering-fonts.ts';
 import { requestId } from './middleware/request-id.ts';
 import { accessLog } from './middleware/access-log.ts';
@@ -24,6 +28,7 @@ import { createCatalogRouter } from './routes/catalog.ts';
 import { createQuotesRouter } from './routes/quotes.ts';
 import { createDesignsRouter } from './routes/designs.ts';
 import { createPaymentWebhookRouter } from './routes/payment-webhooks.ts';
+import { createOrdersRouter } from './routes/orders.ts';
 import { createAdminOverviewRouter } from './routes/admin/overview.ts';
 import { createAdminCatalogRouter } from './routes/admin/catalog.ts';
 import { createAdminOrdersRouter } from './routes/admin/orders.ts';
@@ -93,7 +98,8 @@ export function createApp(deps: AppDeps): Express {
   app.use(securityHeaders(config));
 
   // Webhooks authenticate by signature, not by session or origin, and need the raw body.
-  app.use('/api/webhooks/stripe', createPaymentWebhookRouter({ db, stripe: deps.stripe, webhookSecret: config.stripe.webhookSecret, now: deps.now }));
+  const webhooks = createPaymentWebhookService({ db, stripe: deps.stripe, mailer: deps.mailer, appOrigin: config.appOrigin, now: deps.now });
+  app.use('/api/webhooks/stripe', createPaymentWebhookRouter({ stripe: deps.stripe, webhookSecret: config.stripe.webhookSecret, webhooks }));
 
   app.use('/api', requireSameOrigin(config.appOrigin));
   app.use('/api', express.json({ limit: '1mb' }));
@@ -109,8 +115,13 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/catalog', createCatalogRouter({ db }));
   // One quote service, so its font loader parses each font once: saving a design prices it too.
   const quotes = createQuoteService({ db, fonts: createLetteringFontLoader() });
-  app.use('/api/quotes', createQuotesRouter({ quotes }));
+  const storedQuotes = createStoredQuoteService({ db, quotes, now: deps.now });
+  app.use('/api/quotes', createQuotesRouter({ quotes, storedQuotes }));
   app.use('/api/designs', createDesignsRouter({ designs: createDesignService({ db, quotes, now: deps.now }) }));
+  app.use('/api/orders', createOrdersRouter({
+    checkout: createCheckoutService({ db, stripe: deps.stripe, mailer: deps.mailer, storedQuotes, appOrigin: config.appOrigin, now: deps.now }),
+    customerOrders: createCustomerOrderService({ db, mailer: deps.mailer, appOrigin: config.appOrigin, now: deps.now }),
+  }));
   app.use('/api/admin', requireRole('staff', 'owner'));
   app.use('/api/admin/overview', createAdminOverviewRouter({ db }));
   app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));

@@ -27,13 +27,14 @@ export interface ApiHarness {
 
 export const fixedNow = () => new Date('2026-12-01T10:00:00Z');
 
-export async function startApiHarness(): Promise<ApiHarness> {
+/** `env` overrides the test stack's settings, e.g. to point the app at stand-ins a test file started itself. */
+export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {}): Promise<ApiHarness> {
   const google = await startGoogleOAuthFake({
     port: 0,
     identities: demoPeople.map(({ sub, email, name, givenName, familyName }) => ({ sub, email, name, givenName, familyName })),
   });
   const stack = localStack('test');
-  const config = loadConfig({ ...process.env, ...stack.env, GOOGLE_OAUTH_BASE_URL: google.url, STATIC_DIR: '/nonexistent' });
+  const config = loadConfig({ ...process.env, ...stack.env, GOOGLE_OAUTH_BASE_URL: google.url, STATIC_DIR: '/nonexistent', ...options.env });
   const db = openDatabase(config.database);
   await db.migrate.latest();
   await db.seed.run();

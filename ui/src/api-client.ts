@@ -8,6 +8,8 @@ export class ApiError extends Error {
     message: string,
     readonly status: number,
     readonly fields?: Record<string, string>,
+    /** Figures the server sent with a refusal (see apiErrorBody). */
+    readonly details?: Record<string, unknown>,
   ) {
     super(message);
     this.name = 'ApiError';
@@ -40,8 +42,8 @@ export async function apiRequest<T>(path: string, schema: z.ZodType<T> | null, o
   if (!response.ok) {
     const parsed = apiErrorBody.safeParse(await response.json().catch(() => null));
     if (parsed.success) {
-      const { kind, message, fields } = parsed.data.error;
-      throw new ApiError(kind, message, response.status, fields);
+      const { kind, message, fields, details } = parsed.data.error;
+      throw new ApiError(kind, message, response.status, fields, details);
     }
     throw new ApiError('server', `The shop answered with an unexpected error (${response.status}).`, response.status);
   }

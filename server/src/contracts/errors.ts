@@ -19,6 +19,8 @@ export const apiErrorBody = z.object({
     message: z.string(),
     /** Field path (dot-joined) to a message a person can act on. */
     fields: z.record(z.string(), z.string()).optional(),
+    /** Figures that go with a refusal, for the page to show (a repriced quote's totals, say). */
+    details: z.record(z.string(), z.unknown()).optional(),
   }),
 });
 export type ApiErrorBody = z.infer<typeof apiErrorBody>;

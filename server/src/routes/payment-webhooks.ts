@@ -1,14 +1,14 @@
 import express, { Router } from 'express';
 import type Stripe from 'stripe';
-import type { Db } from '../db/knex.ts';
-import { recordWebhookEvent } from '../db/repos/webhook-event-repo.ts';
 import { HttpError } from '../middleware/http-error.ts';
+import type { PaymentWebhookService } from '../services/payment-webhook-service.ts';
 
 /**
  * Stripe's webhook endpoint. The signature is checked over the raw body (re-serialised JSON would not match), so this
- * router is mounted before the JSON parser. Each event id is recorded once; redeliveries are acknowledged only.
+ * router is mounted before the JSON parser. Each event id is recorded and applied once; redeliveries are acknowledged
+ * only. A failure while applying answers 500, so the provider sends the event again.
  */
-export function createPaymentWebhookRouter(deps: { db: Db; stripe: Stripe; webhookSecret: string; now: () => Date }): Router {
+export function createPaymentWebhookRouter(deps: { stripe: Stripe; webhookSecret: string; webhooks: PaymentWebhookService }): Router {
   const router = Router();
   router.post('/', express.raw({ type: '*/*', limit: '1mb' }), async (req, res) => {
     const signature = req.get('stripe-signature');
@@ -21,13 +21,8 @@ export function createPaymentWebhookRouter(deps: { db: Db; stripe: Stripe; webho
     } catch {
       throw new HttpError('invalid', 'The webhook signature does not match; the event was not accepted.');
     }
-    const isNew = await recordWebhookEvent(deps.db, {
-      id: event.id,
-      type: event.type,
-      payload: req.body.toString('utf8'),
-      receivedAt: deps.now(),
-    });
-    res.json({ received: true, duplicate: !isNew });
+    const { isDuplicate } = await deps.webhooks.receive(event, req.body.toString('utf8'));
+    res.json({ received: true, duplicate: isDuplicate });
   });
   return router;
 }

@@ -5,13 +5,20 @@ import type { LetteringFontLoader } from '../integrations/lettering-fonts.ts';
 import type { DesignDocument } from '../contracts/designs.ts';
 import type { QuotePreviewRequest, QuotePreviewResponse } from '../contracts/quotes.ts';
 import { failure, ok, type Result } from '../contracts/result.ts';
-import { figureDesign } from './design-figures.ts';
+import { figureDesign, type DesignFigures } from './design-figures.ts';
 import type { QuoteCatalog } from './quote-catalog.ts';
+
+/** A priced design: the preview's answer, the engine's figures and the catalogue rows it was priced from. */
+export interface PricedDesign {
+  response: QuotePreviewResponse;
+  figures: DesignFigures;
+  catalog: QuoteCatalogRecord;
+}
 
 /** Quotes priced by the server from the published price list; the client's own figures are never used. */
 export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader }) {
-  /** Prices a design without saving it, for one garment size and quantity. Reads only, so no transaction. */
-  async function preview(request: QuotePreviewRequest): Promise<Result<QuotePreviewResponse>> {
+  /** Prices a design for one garment size and quantity, with what storing the quote needs. Reads only. */
+  async function price(request: QuotePreviewRequest): Promise<Result<PricedDesign>> {
     const record = await loadQuoteCatalog(deps.db, {
       garmentId: request.garmentId,
       sizeId: request.sizeId,
@@ -35,15 +42,8 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader })
     // The design was sound, so a pricing failure is the price list's: it has no price for this size, say.
     if (!quote.ok) return failure('conflict', `This garment can't be priced online right now: ${quote.reason}`);
 
-    return ok({
-      quote: {
-        lines: quote.lines,
-        subtotalCents: quote.subtotalCents,
-        taxCents: quote.taxCents,
-        totalCents: quote.totalCents,
-        currency: quote.currency,
-        ruleSetVersion: quote.ruleSetVersion,
-      },
+    const response: QuotePreviewResponse = {
+      quote: quoteSummaryOf(quote),
       placements: figures.placements.map((placement) => ({
         id: placement.id,
         label: placement.label,
@@ -71,13 +71,26 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader })
         messages: figures.stabilizer.messages,
       },
       cautions: figures.cautions,
-    });
+    };
+    return ok({ response, figures, catalog: record.value });
   }
 
-  return { preview };
+  /** Prices a design without saving it, for one garment size and quantity. */
+  async function preview(request: QuotePreviewRequest): Promise<Result<QuotePreviewResponse>> {
+    const priced = await price(request);
+    return priced.ok ? ok(priced.value.response) : priced;
+  }
+
+  return { preview, price };
 }
 
 export type QuoteService = ReturnType<typeof createQuoteService>;
+
+/** The priced lines and totals as the apps get them, from the engine's quote or a stored one. */
+export function quoteSummaryOf(quote: QuotePreviewResponse['quote']): QuotePreviewResponse['quote'] {
+  const { lines, subtotalCents, taxCents, totalCents, currency, ruleSetVersion } = quote;
+  return { lines, subtotalCents, taxCents, totalCents, currency, ruleSetVersion };
+}
 
 /** The motifs and fonts a design names, so only those rows are read. */
 export function slugsNamedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: string[] } {

@@ -22,6 +22,10 @@ function AccountArea() {
   }
   return (
     <div className="flex items-center gap-3">
+      <Link to={paths.orders.href()} className="whitespace-nowrap text-sm font-medium text-walnut-700 underline-offset-4 hover:text-madder-600 hover:underline">
+        <span className="hidden sm:inline">Your orders</span>
+        <span className="sm:hidden">Orders</span>
+      </Link>
       <span className="hidden text-sm sm:inline">
         Signed in as <strong className="font-semibold">{me.data.name}</strong>
       </span>

@@ -7,6 +7,9 @@ import { HomePage } from './routes/home.tsx';
 import { GarmentPage } from './routes/garment.tsx';
 import { SignInPage } from './routes/sign-in.tsx';
 import { NotFoundPage } from './routes/not-found.tsx';
+import { CheckoutPage } from './routes/checkout.tsx';
+import { OrdersPage } from './routes/orders.tsx';
+import { OrderPage } from './routes/order.tsx';
 
 export const router = createBrowserRouter([
   {
@@ -26,6 +29,9 @@ export const router = createBrowserRouter([
             hydrateFallbackElement: <Loading label="Opening the designer…" />,
           },
           { path: paths.signIn.path, element: <SignInPage /> },
+          { path: paths.checkout.path, element: <CheckoutPage /> },
+          { path: paths.orders.path, element: <OrdersPage /> },
+          { path: paths.order.path, element: <OrderPage /> },
           { path: '*', element: <NotFoundPage /> },
         ],
       },

@@ -8,4 +8,8 @@ export const paths = {
     href: (slug: string, designId?: number) => `/design/${encodeURIComponent(slug)}${designId === undefined ? '' : `?design=${designId}`}`,
   },
   signIn: { path: '/sign-in', href: () => '/sign-in' },
+  /** Ordering one of the customer's saved designs: quantity, date, address, then the card page. */
+  checkout: { path: '/checkout/:designId', href: (designId: number) => `/checkout/${designId}` },
+  orders: { path: '/orders', href: () => '/orders' },
+  order: { path: '/orders/:number', href: (number: string) => `/orders/${encodeURIComponent(number)}` },
 } as const;

@@ -21,8 +21,9 @@ export interface QuoteCatalogRecord {
   fonts: (Omit<CatalogFont, 'outlines'> & LetteringFontFile)[];
   hoops: CatalogHoop[];
   machine: ShopMachine;
-  /** The published price list. */
+  /** The published price list, and its row id for the quotes priced with it. */
   ruleSet: PricingRuleSet;
+  ruleSetId: number;
 }
 
 const ordered = [{ column: 'sort_order' }, { column: 'id' }];
@@ -52,7 +53,7 @@ export async function loadQuoteCatalog(db: Db, query: QuoteCatalogQuery): Promis
       .where({ is_active: true }),
     db('hoops').select('slug', 'name', 'field_width_mm', 'field_height_mm').where({ is_active: true }).orderBy(ordered),
     db('shop_settings').select('machine_stitches_per_minute', 'minutes_per_colour_change', 'minutes_per_hooping', 'setup_minutes').where({ id: 1 }).first(),
-    db('pricing_rule_sets').select('rules').where({ status: 'published' }).first(),
+    db('pricing_rule_sets').select('id', 'rules').where({ status: 'published' }).first(),
   ]);
   if (!garment) return failure('not-found', 'That garment is not in the shop any more.', { garmentId: 'Choose another garment' });
   if (!size) return failure('not-found', 'That size is not made in this garment.', { sizeId: 'Choose one of this garment’s sizes' });
@@ -110,5 +111,6 @@ export async function loadQuoteCatalog(db: Db, query: QuoteCatalogQuery): Promis
       setupMinutes: Number(shop.setup_minutes),
     },
     ruleSet: ruleSet.rules as PricingRuleSet,
+    ruleSetId: ruleSet.id,
   });
 }

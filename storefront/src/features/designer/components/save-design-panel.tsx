@@ -1,5 +1,5 @@
 import { useId, useState, type FormEvent } from 'react';
-import { useLocation } from 'react-router-dom';
+import { useLocation, useNavigate } from 'react-router-dom';
 import type { GarmentSummary } from '@server/contracts/catalog.ts';
 import type { SaveDesignRequest, SavedDesign } from '@server/contracts/saved-designs.ts';
 import { ApiError } from '@ui/api-client.ts';
@@ -9,6 +9,7 @@ import { signInHref } from '@ui/session/sign-in-href.ts';
 import { useCreateDesign } from '../api/create-design.ts';
 import { useUpdateDesign } from '../api/update-design.ts';
 import type { DesignerState } from '../model/designer-state.ts';
+import { paths } from '../../../config/paths.ts';
 
 const MAX_NAME_LENGTH = 80;
 
@@ -27,6 +28,7 @@ const requestOf = (garment: GarmentSummary, state: DesignerState, name: string):
 export function SaveDesignPanel({ garment, state, saved, onSaved }: { garment: GarmentSummary; state: DesignerState; saved: SavedDesign | undefined; onSaved: (design: SavedDesign) => void }) {
   const nameId = useId();
   const location = useLocation();
+  const navigate = useNavigate();
   const me = useCurrentUser();
   const create = useCreateDesign();
   const update = useUpdateDesign();
@@ -38,17 +40,24 @@ export function SaveDesignPanel({ garment, state, saved, onSaved }: { garment: G
   const mutation = saved ? update : create;
   const isOrdered = update.error instanceof ApiError && update.error.kind === 'conflict';
 
-  const save = (asNew: boolean) => {
+  const save = (asNew: boolean, then?: (design: SavedDesign) => void) => {
     const done = {
       onSuccess: (design: SavedDesign) => {
         setSavedAs(JSON.stringify(request));
         // A design saved anew after a refusal is the one to save over from now on; the refusal no longer applies.
         update.reset();
         onSaved(design);
+        then?.(design);
       },
     };
     if (saved && !asNew) update.mutate({ id: saved.id, request }, done);
     else create.mutate(request, done);
+  };
+  // Ordering saves first, so the order stitches exactly the design as it stands.
+  const orderIt = () => {
+    const toCheckout = (design: SavedDesign) => void navigate(paths.checkout.href(design.id));
+    if (saved && isSaved) toCheckout(saved);
+    else save(false, toCheckout);
   };
   const submit = (event: FormEvent) => {
     event.preventDefault();
@@ -62,8 +71,8 @@ export function SaveDesignPanel({ garment, state, saved, onSaved }: { garment: G
         <p className="mt-2 text-sm text-walnut-500">Checking whether you are signed in…</p>
       ) : !me.data ? (
         <div className="mt-2 space-y-3 text-sm text-walnut-700">
-          <p>Sign in to save your design and come back to it. It stays right here while you do.</p>
-          <ButtonLink href={signInHref(location.pathname + location.search)}>Sign in to save</ButtonLink>
+          <p>Sign in to save your design, come back to it and order it. It stays right here while you do.</p>
+          <ButtonLink href={signInHref(location.pathname + location.search)}>Sign in to save or order</ButtonLink>
         </div>
       ) : (
         <form onSubmit={submit} className="mt-3 space-y-3">
@@ -83,6 +92,9 @@ export function SaveDesignPanel({ garment, state, saved, onSaved }: { garment: G
             </Button>
             <p role="status" className="text-sm text-sage-700">{isSaved && !mutation.isPending ? '✓ Saved' : ''}</p>
           </div>
+          <Button tone="quiet" onClick={orderIt} disabled={mutation.isPending || name.trim() === '' || state.document.placements.length === 0 || isOrdered}>
+            {isSaved ? 'Order this design' : 'Save and order'}
+          </Button>
           {state.document.placements.length === 0 && <p className="text-sm text-walnut-500">Add something to the garment to save it.</p>}
           {mutation.isError && (
             <div role="alert" className="rounded-lg bg-madder-50 p-3 text-sm text-madder-700">

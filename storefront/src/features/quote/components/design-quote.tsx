@@ -1,8 +1,8 @@
 import type { QuotePreviewRequest } from '@server/contracts/quotes.ts';
 import { ErrorNotice } from '@ui/components/page-state.tsx';
-import { formatMoney } from '@ui/format.ts';
 import { useDesignQuote } from '../hooks/use-design-quote.ts';
 import { MakingNotes } from './making-notes.tsx';
+import { QuoteLines } from './quote-lines.tsx';
 
 /** Where the short total on a phone links to. */
 export const DESIGN_QUOTE_ID = 'your-price';
@@ -28,23 +28,7 @@ export function DesignQuote({ request }: { request: QuotePreviewRequest }) {
         </div>
       ) : preview.data ? (
         <div className={`mt-3 transition-opacity ${isPricing ? 'opacity-60' : ''}`}>
-          <table className="w-full text-sm">
-            <caption className="sr-only">How the price is made up</caption>
-            <tbody>
-              {preview.data.quote.lines.map((line, index) => (
-                <tr key={`${line.code}-${index}`} className="border-t border-linen-200">
-                  <td className="py-1.5 pr-3">{line.label}</td>
-                  <td className="py-1.5 text-right tabular-nums">{formatMoney(line.amountCents, preview.data.quote.currency)}</td>
-                </tr>
-              ))}
-            </tbody>
-            <tfoot>
-              <tr className="border-t-2 border-walnut-900/20 text-base font-semibold">
-                <th scope="row" className="pt-2 text-left">Total</th>
-                <td className="pt-2 text-right tabular-nums">{formatMoney(preview.data.quote.totalCents, preview.data.quote.currency)}</td>
-              </tr>
-            </tfoot>
-          </table>
+          <QuoteLines quote={preview.data.quote} />
           <MakingNotes preview={preview.data} />
         </div>
       ) : (

@@ -1,0 +1,198 @@
+import { z } from 'zod';
+import { designDocument } from './designs.ts';
+import { orderStatus, paymentStatus } from './order-status.ts';
+
+/** Most pins a customer may drop on one proof: more is a conversation for e-mail. */
+export const MAX_PROOF_PINS = 20;
+const MAX_PIN_COMMENT = 300;
+const MAX_PROOF_COMMENT = 2000;
+const MAX_ORDER_NOTE = 1000;
+
+const text = (label: string, max: number) =>
+  z
+    .string({ error: `Enter ${label}` })
+    .trim()
+    .min(1, `Enter ${label}`)
+    .max(max, `Keep ${label} to ${max} characters`);
+const optionalText = (label: string, max: number) =>
+  z
+    .string()
+    .trim()
+    .max(max, `Keep ${label} to ${max} characters`)
+    .optional()
+    .transform((value) => (value === '' ? undefined : value));
+
+/** Where the parcel goes. Country as an ISO 3166-1 alpha-2 code (US, CA, GB…). */
+export const shipTo = z.strictObject({
+  name: text('the name of the person receiving it', 100),
+  line1: text('the street address', 120),
+  line2: optionalText('the second address line', 120),
+  city: text('the town or city', 80),
+  region: text('the state, county or region', 80),
+  postalCode: z
+    .string({ error: 'Enter the postal code' })
+    .trim()
+    .min(2, 'Enter the postal code')
+    .max(12, 'Keep the postal code to 12 characters')
+    .regex(/^[A-Za-z0-9][A-Za-z0-9 -]*$/, 'Use letters, digits, spaces or “-”'),
+  countryCode: z
+    .string({ error: 'Choose the country' })
+    .trim()
+    .transform((value) => value.toUpperCase())
+    .pipe(z.string().regex(/^[A-Z]{2}$/, 'Choose the country')),
+  phone: z
+    .string()
+    .trim()
+    .max(30, 'Keep the phone number to 30 characters')
+    .regex(/^[0-9 +().-]*$/, 'Use digits, spaces and + ( ) - only')
+    .optional()
+    .transform((value) => (value === '' ? undefined : value)),
+});
+export type ShipTo = z.infer<typeof shipTo>;
+
+/** A calendar day, YYYY-MM-DD, that exists. */
+const calendarDate = z
+  .string({ error: 'Choose the date you need it by' })
+  .regex(/^\d{4}-\d{2}-\d{2}$/, 'Choose the date you need it by')
+  .refine((value) => !Number.isNaN(Date.parse(`${value}T00:00:00Z`)) && new Date(`${value}T00:00:00Z`).toISOString().startsWith(value), 'Choose a real date');
+
+const positiveId = (message: string) => z.number({ error: message }).int(message).positive(message);
+
+/** Placing an order from a stored quote; every figure comes from the quote on the server. */
+export const placeOrderRequest = z.strictObject({
+  quoteId: positiveId('Price your design again before ordering'),
+  designId: positiveId('Choose one of your saved designs'),
+  neededBy: calendarDate,
+  shipTo,
+  note: optionalText('the note to the studio', MAX_ORDER_NOTE),
+});
+export type PlaceOrderRequest = z.infer<typeof placeOrderRequest>;
+
+/** Where the browser goes to pay: the payment provider's hosted page. */
+export const checkoutStartedResponse = z.object({ number: z.string(), checkoutUrl: z.string() });
+export type CheckoutStartedResponse = z.infer<typeof checkoutStartedResponse>;
+
+export const orderNumberParam = z.object({
+  number: z.string().regex(/^[A-Z]{2}-\d{1,10}$/, 'must look like WB-1001'),
+});
+
+export const proofParams = orderNumberParam.extend({
+  version: z
+    .string()
+    .regex(/^[1-9]\d{0,3}$/, 'must be a proof version')
+    .transform(Number),
+});
+
+/** A point on the proof image, as percentages of its width and height from the top left. */
+export const proofPin = z.strictObject({
+  xPct: z.number({ error: 'Place the pin on the picture' }).min(0, 'Place the pin on the picture').max(100, 'Place the pin on the picture'),
+  yPct: z.number({ error: 'Place the pin on the picture' }).min(0, 'Place the pin on the picture').max(100, 'Place the pin on the picture'),
+  comment: text('what to change here', MAX_PIN_COMMENT),
+});
+export type ProofPin = z.infer<typeof proofPin>;
+
+/** The customer's answer to a proof: approval may say something; a change request says what to change. */
+export const proofAnswerRequest = z.strictObject({
+  comment: optionalText('your comment', MAX_PROOF_COMMENT),
+  pins: z.array(proofPin).max(MAX_PROOF_PINS, `Drop at most ${MAX_PROOF_PINS} pins; put the rest in your comment`).default([]),
+});
+export type ProofAnswerRequest = z.input<typeof proofAnswerRequest>;
+
+export const customerOrderActions = z.enum(['pay', 'cancel', 'approve_proof', 'request_changes']);
+export type CustomerOrderAction = z.infer<typeof customerOrderActions>;
+
+const orderSummary = z.object({
+  number: z.string(),
+  status: orderStatus,
+  paymentStatus,
+  /** What the order is, for the list: the design's name, garment and size. */
+  description: z.string(),
+  designName: z.string(),
+  garmentName: z.string(),
+  totalCents: z.number().int(),
+  currency: z.string(),
+  neededBy: z.string().nullable(),
+  createdAt: z.string(),
+  placedAt: z.string().nullable(),
+  /** True when the order waits on the customer: a payment to make or a proof to answer. */
+  isWaitingOnCustomer: z.boolean(),
+});
+export type CustomerOrderSummary = z.infer<typeof orderSummary>;
+
+export const customerOrderListResponse = z.object({ orders: z.array(orderSummary) });
+
+/** One step in the order's history, worded for the customer. */
+const timelineEntry = z.object({
+  id: z.number().int(),
+  type: z.string(),
+  title: z.string(),
+  note: z.string().nullable(),
+  at: z.string(),
+});
+
+const proofSummary = z.object({
+  version: z.number().int(),
+  status: z.enum(['sent', 'approved', 'changes_requested', 'superseded']),
+  message: z.string().nullable(),
+  source: z.enum(['render', 'photo']),
+  sentAt: z.string(),
+  respondedAt: z.string().nullable(),
+  customerComment: z.string().nullable(),
+  pins: z.array(z.object({ xPct: z.number(), yPct: z.number(), comment: z.string() })),
+  /** Null when the studio sent the proof without a picture. */
+  imageUrl: z.string().nullable(),
+  /** Only the latest version the studio sent, while unanswered, takes an answer. */
+  isAnswerable: z.boolean(),
+});
+export type CustomerProof = z.infer<typeof proofSummary>;
+
+export const customerOrderResponse = z.object({
+  order: orderSummary.extend({
+    subtotalCents: z.number().int(),
+    taxCents: z.number().int(),
+    quantity: z.number().int(),
+    isRush: z.boolean(),
+    shipTo: z.object({
+      name: z.string(),
+      line1: z.string(),
+      line2: z.string().optional(),
+      city: z.string(),
+      region: z.string(),
+      postalCode: z.string(),
+      countryCode: z.string(),
+      phone: z.string().optional(),
+    }),
+    customerNote: z.string().nullable(),
+  }),
+  quote: z.object({
+    ruleSetVersion: z.number().int(),
+    lines: z.array(z.object({ code: z.string(), label: z.string(), amountCents: z.number().int() })),
+  }),
+  design: z.object({
+    id: z.number().int(),
+    name: z.string(),
+    garmentId: z.number().int(),
+    garmentSlug: z.string(),
+    garmentName: z.string(),
+    sizeId: z.number().int(),
+    sizeLabel: z.string(),
+    colourId: z.number().int(),
+    colourName: z.string(),
+    colourHex: z.string(),
+    document: designDocument,
+  }),
+  payment: z.object({
+    /** Held on the card, not yet charged. */
+    heldCents: z.number().int(),
+    chargedCents: z.number().int(),
+    refundedCents: z.number().int(),
+    /** When the hold lapses unless the studio charges it; ISO 8601. */
+    holdExpiresAt: z.string().nullable(),
+    /** Set when the latest attempt to pay did not go through, in words for the customer. */
+    failureMessage: z.string().nullable(),
+  }),
+  proofs: z.array(proofSummary),
+  timeline: z.array(timelineEntry),
+  actions: z.array(customerOrderActions),
+});
+export type CustomerOrderResponse = z.infer<typeof customerOrderResponse>;
