@@ -4,6 +4,7 @@
  */
 import request from 'supertest';
 import type { Express } from 'express';
+import type Stripe from 'stripe';
 import { loadConfig, type AppConfig } from '../../server/src/config.ts';
 import { openDatabase, type Db } from '../../server/src/db/knex.ts';
 import { createApp } from '../../server/src/app.ts';
@@ -18,6 +19,8 @@ export interface ApiHarness {
   app: Express;
   config: AppConfig;
   db: Db;
+  /** The Stripe client the app uses, so a test can spy on its calls. */
+  stripe: Stripe;
   /** A supertest agent that keeps cookies and sends this app's Origin, as the browser apps do. */
   agent(): ReturnType<typeof request.agent>;
   /** Signs the agent in through the authorization-code flow of the local provider. */
@@ -27,19 +30,21 @@ export interface ApiHarness {
 
 export const fixedNow = () => new Date('2026-12-01T10:00:00Z');
 
-export async function startApiHarness(): Promise<ApiHarness> {
+/** `env` overrides the test stack's settings, e.g. STRIPE_API_URL and SMTP_URL of fakes a test file starts itself. */
+export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {}): Promise<ApiHarness> {
   const google = await startGoogleOAuthFake({
     port: 0,
     identities: demoPeople.map(({ sub, email, name, givenName, familyName }) => ({ sub, email, name, givenName, familyName })),
   });
   const stack = localStack('test');
-  const config = loadConfig({ ...process.env, ...stack.env, GOOGLE_OAUTH_BASE_URL: google.url, STATIC_DIR: '/nonexistent' });
+  const config = loadConfig({ ...process.env, ...stack.env, GOOGLE_OAUTH_BASE_URL: google.url, STATIC_DIR: '/nonexistent', ...options.env });
   const db = openDatabase(config.database);
   await db.migrate.latest();
   await db.seed.run();
   const sessions: SessionLayer = await createSessionLayer(config);
   const mailer = createMailer(config);
-  const app = createApp({ config, db, sessions, stripe: createStripeClient(config), mailer, now: fixedNow, log: () => {} });
+  const stripe = createStripeClient(config);
+  const app = createApp({ config, db, sessions, stripe, mailer, now: fixedNow, log: () => {} });
 
   const agent = () => request.agent(app).set('Origin', config.appOrigin);
 
@@ -58,6 +63,7 @@ export async function startApiHarness(): Promise<ApiHarness> {
     app,
     config,
     db,
+    stripe,
     agent,
     signIn,
     async close() {
