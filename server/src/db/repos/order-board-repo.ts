@@ -39,15 +39,16 @@ async function searchCondition(db: Db, q: string): Promise<Condition> {
   // Only letters and digits reach the FULLTEXT search, so its operators (+ - * " ~ < >) cannot be injected.
   const words = q.split(/[^\p{L}\p{N}]+/u).filter(Boolean);
   const longWords = words.filter((word) => [...word].length >= 3);
-  const ids = (await db('users')
-    .where('role', 'customer')
-    .where((match) => {
-      match.where('email', 'like', `${escaped}%`);
-      if (longWords.length > 0) match.orWhereRaw('MATCH(name) AGAINST (? IN BOOLEAN MODE)', [longWords.map((word) => `+${word}*`).join(' ')]);
-      else if (words.length > 0) match.orWhere('name', 'like', `${escaped}%`);
-    })
-    .limit(MAX_MATCHED_CUSTOMERS)
-    .pluck('id')) as number[];
+  // Two lookups rather than one OR, so each uses its own index (the e-mail's unique key, the name's FULLTEXT).
+  const customers = () => db('users').where('role', 'customer').limit(MAX_MATCHED_CUSTOMERS);
+  const byName =
+    longWords.length > 0
+      ? customers().whereRaw('MATCH(name) AGAINST (? IN BOOLEAN MODE)', [longWords.map((word) => `+${word}*`).join(' ')])
+      : words.length > 0
+        ? customers().where('name', 'like', `${escaped}%`)
+        : undefined;
+  const found = await Promise.all([customers().where('email', 'like', `${escaped}%`).pluck('id'), byName?.pluck('id') ?? []]);
+  const ids = [...new Set(found.flat() as number[])];
   return (query) => query.whereIn('o.customer_id', ids.length > 0 ? ids : [0]);
 }
 
@@ -117,9 +118,12 @@ export async function listBoardOrders(db: Db, query: OrderBoardQuery, today: str
   const filter = await boardFilters(db, filters);
   const column = sortColumns[sort];
   const ordered = db('orders as o').modify(filter).select('o.id').limit(pageSize).offset((page - 1) * pageSize);
-  // Orders without a date sort after those with one, whichever way the list runs.
-  if (sort === 'due' || sort === 'placed') ordered.orderByRaw(`${column} IS NULL`);
-  ordered.orderBy([{ column, order: dir }, { column: 'o.id', order: dir }]);
+  // Orders without a date sort after those with one, whichever way the list runs. Descending, MariaDB puts NULL
+  // last by itself, so the sort can read its index backwards; only ascending needs the extra (unindexed) key.
+  if ((sort === 'due' || sort === 'placed') && dir === 'asc') ordered.orderByRaw(`${column} IS NULL`);
+  // Within a status, newest first or last as the list runs: the (status, placed_at) index holds that order.
+  const tieBreaks = sort === 'status' ? ['o.placed_at', 'o.id'] : ['o.id'];
+  ordered.orderBy([column, ...tieBreaks].map((key) => ({ column: key, order: dir })));
   const [ids, [{ total }]] = await Promise.all([ordered.pluck('o.id') as Promise<number[]>, db('orders as o').modify(filter).count({ total: '*' })]);
   return { rows: await boardRows(db, ids, today), total: Number(total), page, pageSize };
 }
