@@ -5,6 +5,7 @@ import { StudioLayout } from './layout.tsx';
 import { TodayPage } from './routes/today.tsx';
 import { CataloguePage } from './routes/catalogue.tsx';
 import { OrderPage } from './routes/order.tsx';
+import { OrdersPage } from './routes/orders.tsx';
 import { NotFoundPage } from './routes/not-found.tsx';
 
 const studioHome = `${basename}/`;
@@ -21,6 +22,7 @@ export const router = createBrowserRouter(
           children: [
             { path: paths.home.path, element: <TodayPage /> },
             { path: paths.catalogue.path, element: <CataloguePage /> },
+            { path: paths.orders.path, element: <OrdersPage /> },
             { path: paths.order.path, element: <OrderPage /> },
             { path: '*', element: <NotFoundPage /> },
           ],
