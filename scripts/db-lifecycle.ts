@@ -215,3 +215,8 @@ export async function wipeLocalDatabase(settings = localDatabaseSettings()): Pro
 export function recreateLocalDatabase(name: string, settings = localDatabaseSettings()): void {
   runSql(settings, `DROP DATABASE IF EXISTS \`${name}\`;\n${grantSql(settings)}`);
 }
+
+/** Drops one scratch database of the local instance (the order-board benchmark's). */
+export function dropLocalDatabase(name: string, settings = localDatabaseSettings()): void {
+  runSql(settings, `DROP DATABASE IF EXISTS \`${name}\`;`);
+}

@@ -34,6 +34,7 @@ import { createAdminCatalogRouter } from './routes/admin/catalog.ts';
 import { createAdminOrdersRouter } from './routes/admin/orders.ts';
 import { createProductionSheetRouter } from './routes/admin/production-sheet.ts';
 import { createProductionSheetService } from './services/production-sheet-service.ts';
+import { createStudioOrdersRouter } from './routes/admin/studio-orders.ts';
 import type { CurrentUser } from './contracts/users.ts';
 
 export interface AppDeps {
@@ -125,6 +126,7 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/admin', requireRole('staff', 'owner'));
   app.use('/api/admin/overview', createAdminOverviewRouter({ db }));
   app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));
+  app.use('/api/admin/orders', createStudioOrdersRouter({ db, stripe: deps.stripe, mailer: deps.mailer, now: deps.now, appOrigin: config.appOrigin, uploadMaxBytes: config.uploadMaxBytes, fonts: createLetteringFontLoader() }));
   app.use('/api/admin/orders', createAdminOrdersRouter({ db }));
   app.use('/api/admin/orders', createProductionSheetRouter({ sheets: createProductionSheetService({ db, fonts: createLetteringFontLoader() }) }));
   app.use('/api', notFoundHandler);

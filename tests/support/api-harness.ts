@@ -4,6 +4,7 @@
  */
 import request from 'supertest';
 import type { Express } from 'express';
+import type Stripe from 'stripe';
 import { loadConfig, type AppConfig } from '../../server/src/config.ts';
 import { openDatabase, type Db } from '../../server/src/db/knex.ts';
 import { createApp } from '../../server/src/app.ts';
@@ -18,6 +19,8 @@ export interface ApiHarness {
   app: Express;
   config: AppConfig;
   db: Db;
+  /** The Stripe client the app uses, so a test can spy on its calls. */
+  stripe: Stripe;
   /** A supertest agent that keeps cookies and sends this app's Origin, as the browser apps do. */
   agent(): ReturnType<typeof request.agent>;
   /** Signs the agent in through the authorization-code flow of the local provider. */
@@ -27,7 +30,7 @@ export interface ApiHarness {
 
 export const fixedNow = () => new Date('2026-12-01T10:00:00Z');
 
-/** `env` overrides the test stack's settings, e.g. to point the app at stand-ins a test file started itself. */
+/** `env` overrides the test stack's settings, e.g. STRIPE_API_URL and SMTP_URL of fakes a test file starts itself. */
 export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {}): Promise<ApiHarness> {
   const google = await startGoogleOAuthFake({
     port: 0,
@@ -40,7 +43,8 @@ export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {})
   await db.seed.run();
   const sessions: SessionLayer = await createSessionLayer(config);
   const mailer = createMailer(config);
-  const app = createApp({ config, db, sessions, stripe: createStripeClient(config), mailer, now: fixedNow, log: () => {} });
+  const stripe = createStripeClient(config);
+  const app = createApp({ config, db, sessions, stripe, mailer, now: fixedNow, log: () => {} });
 
   const agent = () => request.agent(app).set('Origin', config.appOrigin);
 
@@ -59,6 +63,7 @@ export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {})
     app,
     config,
     db,
+    stripe,
     agent,
     signIn,
     async close() {

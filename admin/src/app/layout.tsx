@@ -10,6 +10,7 @@ import { StaffGate } from './staff-gate.tsx';
 const sections = [
   { href: paths.home.href(), label: 'Today' },
   { href: paths.catalogue.href(), label: 'Catalogue' },
+  { href: paths.orders.href(), label: 'Orders' },
 ];
 
 function SignedInAs() {
@@ -35,7 +36,7 @@ export function StudioLayout() {
       <SkipLink />
       <header className="border-b border-walnut-700 bg-walnut-900 text-linen-100">
         <div className="mx-auto flex max-w-7xl flex-wrap items-center justify-between gap-3 px-4 py-2.5">
-          <div className="flex items-center gap-6">
+          <div className="flex flex-wrap items-center gap-x-6 gap-y-2">
             <span className="flex items-center gap-2">
               <HoopMark className="h-8 w-8" />
               <span className="font-semibold">Hoopwright <span className="font-normal text-linen-300">studio</span></span>

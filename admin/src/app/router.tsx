@@ -6,6 +6,7 @@ import { TodayPage } from './routes/today.tsx';
 import { CataloguePage } from './routes/catalogue.tsx';
 import { OrderPage } from './routes/order.tsx';
 import { ProductionSheetPage } from './routes/production-sheet.tsx';
+import { OrdersPage } from './routes/orders.tsx';
 import { NotFoundPage } from './routes/not-found.tsx';
 
 const studioHome = `${basename}/`;
@@ -22,6 +23,7 @@ export const router = createBrowserRouter(
           children: [
             { path: paths.home.path, element: <TodayPage /> },
             { path: paths.catalogue.path, element: <CataloguePage /> },
+            { path: paths.orders.path, element: <OrdersPage /> },
             { path: paths.order.path, element: <OrderPage /> },
             { path: paths.productionSheet.path, element: <ProductionSheetPage /> },
             { path: '*', element: <NotFoundPage /> },

@@ -2,6 +2,7 @@
 export const paths = {
   home: { path: '/', href: () => '/' },
   catalogue: { path: '/catalogue', href: () => '/catalogue' },
+  orders: { path: '/orders', href: () => '/orders' },
   order: { path: '/orders/:number', href: (number: string) => `/orders/${encodeURIComponent(number)}` },
   productionSheet: { path: '/orders/:number/production', href: (number: string) => `/orders/${encodeURIComponent(number)}/production` },
 } as const;

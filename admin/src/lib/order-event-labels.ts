@@ -11,6 +11,8 @@ const eventLabels: Record<string, string> = {
   shipped: 'Shipped',
   refunded: 'Refunded',
   cancelled: 'Cancelled',
+  authorization_lapsed: 'Card hold ran out (customer asked to pay again)',
+  payment_voided: 'Card hold released',
 };
 
 export const eventLabel = (type: string): string => eventLabels[type] ?? type.replaceAll('_', ' ');

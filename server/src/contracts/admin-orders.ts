@@ -43,7 +43,23 @@ export const orderDetailResponse = z.object({
       captureBefore: z.string().nullable(),
     }),
   ),
-  proofs: z.array(z.object({ version: z.number().int(), status: z.string(), message: z.string().nullable(), sentAt: z.string(), respondedAt: z.string().nullable() })),
+  proofs: z.array(
+    z.object({
+      version: z.number().int(),
+      status: z.string(),
+      message: z.string().nullable(),
+      sentAt: z.string(),
+      respondedAt: z.string().nullable(),
+      source: z.enum(['render', 'photo']),
+      customerComment: z.string().nullable(),
+      /** The customer's pointers on the picture, positions in % of its width and height. */
+      commentPins: z.array(z.object({ xPct: z.number(), yPct: z.number(), comment: z.string() })),
+      /** Null when no picture was kept (seeded history). */
+      imageUrl: z.string().nullable(),
+    }),
+  ),
+  /** What the studio can do to the order now, by the state machine: the order page shows a button for each. */
+  studioActions: z.array(z.enum(['send_proof', 'start_production', 'mark_stitched', 'ship', 'cancel', 'refund'])),
   events: z.array(orderEvent),
 });
 export type OrderDetailResponse = z.infer<typeof orderDetailResponse>;

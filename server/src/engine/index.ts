@@ -45,3 +45,7 @@ export { adviseStabilizer, DEFAULT_DENSITY_THRESHOLDS } from './advise-stabilize
 export type { DensityThresholds, DesignDensity, FabricConstruction, StabilizerAdvice, StabilizerInput, StabilizerKind } from './advise-stabilizer.ts';
 export { garmentCautions } from './garment-cautions.ts';
 export type { GarmentCautionInput } from './garment-cautions.ts';
+export { layoutHemBorder } from './hem-border-layout.ts';
+export type { BorderBand, BorderRepeat, HemZone } from './hem-border-layout.ts';
+export { recolourThreadGroups } from './recolour-threads.ts';
+export type { PaintableElement } from './recolour-threads.ts';

@@ -5,6 +5,9 @@ import { formatMoney } from '@ui/format.ts';
 import { useOrder } from '../../features/orders/api/get-order.ts';
 import { OrderTimeline } from '../../features/orders/components/order-timeline.tsx';
 import { OrderMoney } from '../../features/orders/components/order-money.tsx';
+import { OrderActions } from '../../features/orders/components/order-actions.tsx';
+import { ProofVersions } from '../../features/orders/components/proof-versions.tsx';
+import { SendProofForm } from '../../features/orders/components/send-proof-form.tsx';
 import { statusLabels } from '../../lib/order-status-labels.ts';
 import { paths } from '../../config/paths.ts';
 
@@ -24,11 +27,12 @@ export function OrderPage() {
   const detail = useOrder(number);
   if (detail.isPending) return <Loading label={`Opening order ${number}…`} />;
   if (detail.isError) return <ErrorNotice message={detail.error.message} onRetry={() => void detail.refetch()} />;
-  const { order, items, proofs, events } = detail.data;
+  const { order, items, proofs, events, studioActions } = detail.data;
   return (
     <div className="grid gap-6">
       <div>
         <Link to={paths.home.href()} className="text-sm text-walnut-500 hover:text-madder-600">← Today</Link>
+        <Link to={paths.orders.href()} className="ml-4 text-sm text-walnut-500 hover:text-madder-600">All orders</Link>
         <div className="mt-1 flex flex-wrap items-baseline gap-x-4 gap-y-1">
           <h1 className="text-2xl font-semibold">Order {order.number}</h1>
           <span className="rounded-full bg-sage-50 px-3 py-1 text-sm font-medium text-sage-700">{statusLabels[order.status]}</span>
@@ -42,6 +46,9 @@ export function OrderPage() {
       </div>
       <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
         <div className="grid min-w-0 content-start gap-6">
+          <Panel title="Next step">
+            <OrderActions detail={detail.data} />
+          </Panel>
           <Panel title="What to make">
             <ul className="grid gap-2 text-sm">
               {items.map((item) => (
@@ -61,18 +68,10 @@ export function OrderPage() {
         </div>
         <div className="grid min-w-0 content-start gap-6">
           <Panel title="Proofs">
-            {proofs.length === 0 ? (
-              <p className="text-sm text-walnut-500">No proof sent yet.</p>
-            ) : (
-              <ul className="grid gap-2 text-sm">
-                {proofs.map((proof) => (
-                  <li key={proof.version} className="rounded-lg bg-linen-100 p-3">
-                    <p className="font-medium">Proof {proof.version} · {proof.status.replaceAll('_', ' ')}</p>
-                    {proof.message && <p className="text-walnut-700">{proof.message}</p>}
-                  </li>
-                ))}
-              </ul>
-            )}
+            <div className="grid gap-4">
+              {studioActions.includes('send_proof') && <SendProofForm number={order.number} versionCount={proofs.length} />}
+              <ProofVersions proofs={proofs} />
+            </div>
           </Panel>
           <Panel title="History">
             <OrderTimeline events={events} />

@@ -1,10 +1,11 @@
 import type { Db } from '../knex.ts';
 import type { OrderDetailResponse } from '../../contracts/admin-orders.ts';
+import { proofImagePath } from '../../contracts/studio-orders.ts';
 
 const iso = (value: Date | string | null): string | null => (value === null ? null : new Date(value).toISOString());
 
 /** One order with everything the studio reads on its page: items, priced lines, payments, proofs and history. */
-export async function readOrderDetail(db: Db, number: string): Promise<OrderDetailResponse | undefined> {
+export async function readOrderDetail(db: Db, number: string): Promise<Omit<OrderDetailResponse, 'studioActions'> | undefined> {
   const order = await db('orders as o')
     .join('users as u', 'u.id', 'o.customer_id')
     .join('quotes as q', 'q.id', 'o.quote_id')
@@ -16,7 +17,10 @@ export async function readOrderDetail(db: Db, number: string): Promise<OrderDeta
   const [items, payments, proofs, events] = await Promise.all([
     db('order_items as i').join('designs as d', 'd.id', 'i.design_id').select('i.id', 'i.description', 'i.quantity', 'i.total_cents', 'd.name as design_name').where('i.order_id', order.id).orderBy('i.id'),
     db('payments').select('status', 'amount_authorized_cents', 'amount_captured_cents', 'amount_refunded_cents', 'capture_before').where({ order_id: order.id }).orderBy('id'),
-    db('proofs').select('version', 'status', 'message', 'created_at', 'responded_at').where({ order_id: order.id }).orderBy('version'),
+    db('proofs')
+      .select('version', 'status', 'message', 'created_at', 'responded_at', 'source', 'customer_comment', 'comment_pins', db.raw('image_png IS NOT NULL as has_image'))
+      .where({ order_id: order.id })
+      .orderBy('version'),
     db('order_events as e')
       .leftJoin('users as a', 'a.id', 'e.actor_user_id')
       .select('e.id', 'e.type', 'e.from_status', 'e.to_status', 'e.note', 'a.name as actor_name', 'e.created_at')
@@ -47,7 +51,17 @@ export async function readOrderDetail(db: Db, number: string): Promise<OrderDeta
       refundedCents: Number(p.amount_refunded_cents),
       captureBefore: iso(p.capture_before),
     })),
-    proofs: proofs.map((p) => ({ version: p.version, status: p.status, message: p.message, sentAt: iso(p.created_at)!, respondedAt: iso(p.responded_at) })),
+    proofs: proofs.map((p) => ({
+      version: p.version,
+      status: p.status,
+      message: p.message,
+      sentAt: iso(p.created_at)!,
+      respondedAt: iso(p.responded_at),
+      source: p.source,
+      customerComment: p.customer_comment,
+      commentPins: typeof p.comment_pins === 'string' ? JSON.parse(p.comment_pins) : p.comment_pins,
+      imageUrl: p.has_image ? proofImagePath(order.number, p.version) : null,
+    })),
     events: events.map((e) => ({
       id: e.id,
       type: e.type,

@@ -1,23 +1,10 @@
 import type { BorderPlacement } from '@server/contracts/designs.ts';
 // Straight from its module: the engine's entry also registers colour spaces at load, which the designer does not need.
 import { fitMotifBorder, type BorderFit } from '@server/engine/fit-border.ts';
+import { layoutHemBorder, type BorderBand, type BorderRepeat } from '@server/engine/hem-border-layout.ts';
 import { HEM_ZONE, motifOf, sizeOf, zoneOf, type DesignSetting } from './design-setting.ts';
 
-/** One repeat as it shows on the front of the mockup, mm. */
-export interface BorderRepeat {
-  centerXMm: number;
-  centerYMm: number;
-  widthMm: number;
-  heightMm: number;
-}
-
-/** The strip of the hem the border runs along, mm on the mockup: repeats past its ends are round the back. */
-export interface BorderBand {
-  leftMm: number;
-  widthMm: number;
-  centerYMm: number;
-  heightMm: number;
-}
+export type { BorderBand, BorderRepeat };
 
 export type BorderLayout =
   | { ok: true; fit: BorderFit; isClosed: boolean; runLengthMm: number; band: BorderBand; repeats: BorderRepeat[] }
@@ -42,16 +29,8 @@ export function layoutBorder(setting: DesignSetting, sizeId: number, border: Bor
   const fit = fitMotifBorder(motif, { runLengthMm, closed: isClosed, count: border.count });
   if (!fit.ok) return { ok: false, reason: fit.reason, bandHeightMm: motif.heightMm };
 
-  const frontMm = size.hemFrontMm;
-  const middleXMm = zone.xMm + zone.widthMm / 2;
-  const heightMm = motif.heightMm * fit.scale;
-  const centerYMm = zone.yMm + zone.heightMm - border.hemOffsetMm;
-  // The loop is unrolled from the back seam, so the front panel is its middle stretch.
-  const frontStartMm = isClosed ? (runLengthMm - frontMm) / 2 : 0;
-  const repeats = fit.centersMm
-    .map((runMm) => ({ centerXMm: middleXMm - frontMm / 2 + (runMm - frontStartMm), centerYMm, widthMm: fit.repeatWidthMm, heightMm }))
-    .filter((repeat) => Math.abs(repeat.centerXMm - middleXMm) < (frontMm + repeat.widthMm) / 2);
-  return { ok: true, fit, isClosed, runLengthMm, band: { leftMm: middleXMm - frontMm / 2, widthMm: frontMm, centerYMm, heightMm }, repeats };
+  const { band, repeats } = layoutHemBorder({ zone, fit, isClosed, runLengthMm, hemFrontMm: size.hemFrontMm, hemOffsetMm: border.hemOffsetMm, motifHeightMm: motif.heightMm });
+  return { ok: true, fit, isClosed, runLengthMm, band, repeats };
 }
 
 /** The border band's height for keeping it in the hem zone, mm, whether or not it fits. */

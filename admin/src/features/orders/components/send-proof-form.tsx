@@ -1,0 +1,59 @@
+import { useState, type FormEvent } from 'react';
+import { Button } from '@ui/components/button.tsx';
+import type { ApiError } from '@ui/api-client.ts';
+import { useSendProof } from '../api/send-proof.ts';
+
+const defaultMessage = 'Here is your proof, drawn to scale on the garment. Approve it to start stitching, or point at anything you would like changed.';
+
+/** Sends the next proof version: the server's drawing of the design, or a photo of a test stitch-out. */
+export function SendProofForm({ number, versionCount }: { number: string; versionCount: number }) {
+  const [source, setSource] = useState<'render' | 'photo'>('render');
+  const [message, setMessage] = useState(defaultMessage);
+  const [file, setFile] = useState<File | null>(null);
+  const [progress, setProgress] = useState(0);
+  const send = useSendProof(number, setProgress);
+  const fields = (send.error as ApiError | null)?.fields ?? {};
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    setProgress(0);
+    if (source === 'photo' && file) send.mutate({ source, message, file });
+    else if (source === 'render') send.mutate({ source, message });
+  };
+
+  return (
+    <form onSubmit={submit} className="grid gap-3 rounded-lg border border-linen-200 p-3 text-sm" aria-label="Send a proof">
+      <p className="font-medium">{versionCount === 0 ? 'Send the first proof' : `Send proof ${versionCount + 1}`}</p>
+      <fieldset className="flex flex-wrap gap-4">
+        <legend className="sr-only">What to send</legend>
+        <label className="flex items-center gap-2"><input type="radio" name="source" checked={source === 'render'} onChange={() => setSource('render')} /> Drawing of the design on the garment</label>
+        <label className="flex items-center gap-2"><input type="radio" name="source" checked={source === 'photo'} onChange={() => setSource('photo')} /> Photo of a test stitch-out</label>
+      </fieldset>
+      {source === 'photo' && (
+        <label className="grid gap-1">
+          <span className="font-medium">Photo (PNG or JPEG)</span>
+          <input type="file" accept="image/png,image/jpeg" onChange={(event) => setFile(event.target.files?.[0] ?? null)} aria-invalid={Boolean(fields.file)} />
+          {fields.file && <span className="text-madder-700">{fields.file}</span>}
+        </label>
+      )}
+      <label className="grid gap-1">
+        <span className="font-medium">Note to the customer</span>
+        <textarea value={message} onChange={(event) => setMessage(event.target.value)} rows={3} maxLength={2000} className="rounded-lg border border-linen-300 p-2" aria-invalid={Boolean(fields.message)} />
+        {fields.message && <span className="text-madder-700">{fields.message}</span>}
+      </label>
+      {send.isPending && source === 'photo' && (
+        <label className="grid gap-1 text-walnut-500">
+          Uploading {Math.round(progress * 100)} %
+          <progress value={progress} max={1} className="h-2 w-full" />
+        </label>
+      )}
+      {send.isError && <p role="alert" className="rounded-md bg-madder-50 p-2 text-madder-700">{send.error.message}</p>}
+      {send.isSuccess && <p role="status" className="rounded-md bg-sage-50 p-2 text-sage-700">Proof {send.data.version} is on its way to the customer.</p>}
+      <div>
+        <Button type="submit" disabled={send.isPending || (source === 'photo' && !file) || message.trim() === ''}>
+          {send.isPending ? (source === 'render' ? 'Drawing the proof…' : 'Sending…') : 'Send proof'}
+        </Button>
+      </div>
+    </form>
+  );
+}
