@@ -27,6 +27,11 @@ import { createPaymentWebhookRouter } from './routes/payment-webhooks.ts';
 import { createAdminOverviewRouter } from './routes/admin/overview.ts';
 import { createAdminCatalogRouter } from './routes/admin/catalog.ts';
 import { createAdminOrdersRouter } from './routes/admin/orders.ts';
+import { createCatalogueGarmentsRouter } from './routes/admin/catalogue-garments.ts';
+import { createCatalogueMotifsRouter } from './routes/admin/catalogue-motifs.ts';
+import { createCatalogueFontsRouter } from './routes/admin/catalogue-fonts.ts';
+import { createCatalogueThreadsRouter } from './routes/admin/catalogue-threads.ts';
+import { createCatalogueHoopsRouter } from './routes/admin/catalogue-hoops.ts';
 import type { CurrentUser } from './contracts/users.ts';
 
 export interface AppDeps {
@@ -113,6 +118,11 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/admin/overview', createAdminOverviewRouter({ db }));
   app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));
   app.use('/api/admin/orders', createAdminOrdersRouter({ db }));
+  app.use('/api/admin/catalogue/garments', createCatalogueGarmentsRouter({ db }));
+  app.use('/api/admin/catalogue/motifs', createCatalogueMotifsRouter({ db, uploadMaxBytes: config.uploadMaxBytes }));
+  app.use('/api/admin/catalogue/fonts', createCatalogueFontsRouter({ db }));
+  app.use('/api/admin/catalogue/threads', createCatalogueThreadsRouter({ db }));
+  app.use('/api/admin/catalogue/hoops', createCatalogueHoopsRouter({ db }));
   app.use('/api', notFoundHandler);
 
   const staticRoot = resolve(config.staticDir);

@@ -45,3 +45,6 @@ export { adviseStabilizer, DEFAULT_DENSITY_THRESHOLDS } from './advise-stabilize
 export type { DensityThresholds, DesignDensity, FabricConstruction, StabilizerAdvice, StabilizerInput, StabilizerKind } from './advise-stabilizer.ts';
 export { garmentCautions } from './garment-cautions.ts';
 export type { GarmentCautionInput } from './garment-cautions.ts';
+
+export { apportionStitches, foldUnderlay, svgCanvasSizeMm, svgColoursInOrder } from './motif-figures.ts';
+export type { MotifStitchMix } from './motif-figures.ts';
