@@ -50,6 +50,7 @@ test('when staff retire a thread at phone width, then they confirm first and it 
   await signInAs(page, 'Tobias Fenwick', /sign in with google/i);
   await expect(page.getByRole('heading', { name: 'Smocked yoke dress' })).toBeVisible();
   await page.screenshot({ path: 'test-results/screens/studio-catalogue-phone-garments.png' });
+  expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
   await page.getByRole('link', { name: 'Threads' }).click();
   const retire = page.getByRole('button', { name: /^Retire / }).last();
   const label = (await retire.getAttribute('aria-label'))!.replace(/^Retire /, '');
@@ -61,4 +62,28 @@ test('when staff retire a thread at phone width, then they confirm first and it 
   await page.getByRole('button', { name: `Bring back ${label}` }).click();
   await page.getByRole('button', { name: 'Yes, bring it back' }).click();
   await expect(page.getByRole('button', { name: `Retire ${label}` })).toBeVisible();
+});
+
+test('when staff add a hoop under a short name already taken, then the server’s message shows beside that field, and a new name saves', async ({ page }) => {
+  await page.goto('/admin/catalogue#hoops');
+  await signInAs(page, 'Tobias Fenwick', /sign in with google/i);
+  await page.getByRole('button', { name: 'Add hoop' }).click();
+  const dialog = page.getByRole('dialog', { name: 'Add a hoop' });
+  await dialog.getByLabel('Name', { exact: true }).fill('Square 100');
+  await dialog.getByLabel('Short name').fill('square-100');
+  await dialog.getByLabel('Sewing field width (mm)').fill('0');
+  await dialog.getByLabel('Sewing field height (mm)').fill('100');
+  await dialog.getByRole('button', { name: 'Add hoop' }).click();
+  // The contract checks in the browser first: a zero field never reaches the server.
+  await expect(dialog.getByText('The field width must be more than 0 mm')).toBeVisible();
+  await dialog.getByLabel('Sewing field width (mm)').fill('100');
+  await dialog.getByRole('button', { name: 'Add hoop' }).click();
+  const shortName = dialog.getByLabel('Short name');
+  await expect(shortName).toHaveAttribute('aria-invalid', 'true');
+  await expect(dialog.getByText('Another hoop already uses this short name')).toBeVisible();
+  await page.screenshot({ path: 'test-results/screens/studio-hoop-field-error.png' });
+  await shortName.fill('square-100-spare');
+  await dialog.getByRole('button', { name: 'Add hoop' }).click();
+  await expect(dialog).toBeHidden();
+  await expect(page.getByRole('button', { name: 'Edit Square 100', exact: true })).toBeVisible();
 });

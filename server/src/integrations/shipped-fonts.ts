@@ -40,8 +40,15 @@ function readShippedFont(fontsourcePackage: string): ShippedFont | undefined {
   }
 }
 
-/** Every lettering font installed with the app, by package name. */
+let shipped: ShippedFont[] | undefined;
+
+/** Every lettering font installed with the app, by package name; read once per process, as installs do not change. */
 export function listShippedFonts(): ShippedFont[] {
+  shipped ??= readShippedFonts();
+  return shipped;
+}
+
+function readShippedFonts(): ShippedFont[] {
   const folder = fontsourceFolder();
   if (!folder || !existsSync(folder)) return [];
   return readdirSync(folder)

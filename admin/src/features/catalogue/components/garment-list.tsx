@@ -46,7 +46,7 @@ function DeletePart({ part, garmentId, partId, name, isInUse }: { part: GarmentP
 function SizeTable({ garment, onEdit }: { garment: StudioGarment; onEdit: (request: GarmentEditRequest) => void }) {
   if (garment.sizes.length === 0) return <p className="text-sm text-walnut-500">No sizes yet: customers cannot choose this garment until it has one.</p>;
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full min-w-[36rem] text-left text-sm">
         <caption className="sr-only">Sizes of {garment.name}</caption>
         <thead className="text-walnut-500">
@@ -89,9 +89,9 @@ function SizeTable({ garment, onEdit }: { garment: StudioGarment; onEdit: (reque
 /** Each garment as a card: its drawing, who it is for, its sizes and its fabric colours, with their actions. */
 export function GarmentList({ garments, onEdit }: { garments: StudioGarment[]; onEdit: (request: GarmentEditRequest) => void }) {
   return (
-    <ul className="grid gap-4">
+    <ul className="grid min-w-0 gap-4">
       {garments.map((garment) => (
-        <li key={garment.id} className={`grid gap-4 rounded-lg border border-linen-200 p-4 ${garment.isActive ? 'bg-white' : 'bg-linen-100'}`}>
+        <li key={garment.id} className={`grid min-w-0 gap-4 rounded-lg border border-linen-200 p-4 ${garment.isActive ? 'bg-white' : 'bg-linen-100'}`}>
           <div className="flex flex-wrap items-start gap-4">
             <SvgPicture svg={garment.mockupSvg} label="" className="h-24 w-24 rounded bg-linen-50 p-1" />
             <div className="min-w-48 flex-1">
@@ -112,7 +112,7 @@ export function GarmentList({ garments, onEdit }: { garments: StudioGarment[]; o
               <RetireControl kind="garments" id={garment.id} name={garment.name} isActive={garment.isActive} />
             </div>
           </div>
-          <div className="grid gap-2">
+          <div className="grid min-w-0 gap-2">
             <div className="flex items-center justify-between gap-2">
               <h4 className="text-sm font-semibold">Sizes</h4>
               <button type="button" className={smallButtonClassName} aria-label={`Add a size to ${garment.name}`} onClick={() => onEdit({ form: 'size', garment })}>
@@ -121,7 +121,7 @@ export function GarmentList({ garments, onEdit }: { garments: StudioGarment[]; o
             </div>
             <SizeTable garment={garment} onEdit={onEdit} />
           </div>
-          <div className="grid gap-2">
+          <div className="grid min-w-0 gap-2">
             <div className="flex items-center justify-between gap-2">
               <h4 className="text-sm font-semibold">Fabric colours</h4>
               <button type="button" className={smallButtonClassName} aria-label={`Add a colour to ${garment.name}`} onClick={() => onEdit({ form: 'colour', garment })}>

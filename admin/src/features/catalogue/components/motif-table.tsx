@@ -9,7 +9,7 @@ export function MotifTable({ motifs, threads, renderActions }: { motifs: StudioM
   return (
     <div>
       <StitchMixLegend />
-      <div className="mt-2 overflow-x-auto">
+      <div className="relative mt-2 overflow-x-auto">
         <table className="w-full min-w-[52rem] text-left text-sm">
           <thead className="text-walnut-500">
             <tr>
