@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { createGarmentRequest, fabricConstructions, garmentKinds, type StudioGarment } from '@server/contracts/admin-catalogue-garments.ts';
+import { garmentCautions } from '@server/engine/index.ts';
 import { useSaveCatalogueRow } from '../api/save-catalogue-row.ts';
 import { asNumber, Field, inputClassName, saveOrShowErrors, slugFrom } from './form-field.tsx';
 import { FormActions } from './form-actions.tsx';
@@ -40,6 +41,14 @@ export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDo
   });
   const errors = formState.errors;
   const mockupSvg = watch('mockupSvg');
+  const youngestMonths = watch('minAgeMonths');
+  // The cautions for the youngest wearer the garment is made for, as the storefront shows them on it.
+  const cautions = garmentCautions({
+    wearerAgeMonths: typeof youngestMonths === 'number' && youngestMonths >= 0 ? youngestMonths : undefined,
+    hasDetachableEmbellishments: false,
+    isSleepwear: false,
+    hasHoodOrNeckDrawstring: false,
+  });
 
   async function readDrawing(file: File | undefined) {
     setFileError(undefined);
@@ -91,6 +100,19 @@ export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDo
           Napped fabric (terry, velvet): stitching needs a topping
         </label>
       </div>
+      {cautions.ok && (
+        <aside aria-label="Safety notes for this garment" className="grid gap-1 rounded-lg border border-saffron-500/50 bg-saffron-100 p-3 text-sm">
+          <p className="font-medium">Safety notes customers will see</p>
+          <ul className="grid gap-1">
+            {cautions.messages.map((message) => (
+              <li key={message.code}>
+                <span className="font-medium">{message.title}:</span> {message.text}
+              </li>
+            ))}
+          </ul>
+          <p className="text-xs text-walnut-700">Do not offer a garment as sleepwear unless the garment and the embroidery meet the sleepwear flammability rules where you sell.</p>
+        </aside>
+      )}
       <div className="grid gap-3 sm:grid-cols-[1fr_10rem] sm:items-start">
         <Field label="Flat drawing (SVG, viewBox in mm)" error={fileError ?? errors.mockupSvg?.message} hint="Drawn at the reference size; sizes scale it.">
           <input type="file" accept=".svg,image/svg+xml" className={inputClassName} onChange={(event) => void readDrawing(event.target.files?.[0])} />
