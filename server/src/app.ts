@@ -35,6 +35,11 @@ import { createAdminOrdersRouter } from './routes/admin/orders.ts';
 import { createProductionSheetRouter } from './routes/admin/production-sheet.ts';
 import { createProductionSheetService } from './services/production-sheet-service.ts';
 import { createStudioOrdersRouter } from './routes/admin/studio-orders.ts';
+import { createCatalogueGarmentsRouter } from './routes/admin/catalogue-garments.ts';
+import { createCatalogueMotifsRouter } from './routes/admin/catalogue-motifs.ts';
+import { createCatalogueFontsRouter } from './routes/admin/catalogue-fonts.ts';
+import { createCatalogueThreadsRouter } from './routes/admin/catalogue-threads.ts';
+import { createCatalogueHoopsRouter } from './routes/admin/catalogue-hoops.ts';
 import type { CurrentUser } from './contracts/users.ts';
 
 export interface AppDeps {
@@ -129,6 +134,11 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/admin/orders', createStudioOrdersRouter({ db, stripe: deps.stripe, mailer: deps.mailer, now: deps.now, appOrigin: config.appOrigin, uploadMaxBytes: config.uploadMaxBytes, fonts: createLetteringFontLoader() }));
   app.use('/api/admin/orders', createAdminOrdersRouter({ db }));
   app.use('/api/admin/orders', createProductionSheetRouter({ sheets: createProductionSheetService({ db, fonts: createLetteringFontLoader() }) }));
+  app.use('/api/admin/catalogue/garments', createCatalogueGarmentsRouter({ db }));
+  app.use('/api/admin/catalogue/motifs', createCatalogueMotifsRouter({ db, uploadMaxBytes: config.uploadMaxBytes }));
+  app.use('/api/admin/catalogue/fonts', createCatalogueFontsRouter({ db }));
+  app.use('/api/admin/catalogue/threads', createCatalogueThreadsRouter({ db }));
+  app.use('/api/admin/catalogue/hoops', createCatalogueHoopsRouter({ db }));
   app.use('/api', notFoundHandler);
 
   const staticRoot = resolve(config.staticDir);

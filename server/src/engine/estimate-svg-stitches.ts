@@ -58,7 +58,7 @@ export function estimateSvgStitches(svgText: string, size: SvgSize | undefined, 
   return { ok: true, ...summariseParts(parts, extent, notes) };
 }
 
-function resolveMmPerUnit(drawing: SvgDrawing, size: SvgSize | undefined): number | Failure {
+export function resolveMmPerUnit(drawing: SvgDrawing, size: SvgSize | undefined): number | Failure {
   if (size !== undefined) {
     if (isRecord(size) && 'mmPerUnit' in size) {
       return isPositiveNumber(size.mmPerUnit) ? size.mmPerUnit : fail('Millimetres per unit must be a positive number.');

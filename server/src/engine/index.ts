@@ -49,3 +49,6 @@ export { layoutHemBorder } from './hem-border-layout.ts';
 export type { BorderBand, BorderRepeat, HemZone } from './hem-border-layout.ts';
 export { recolourThreadGroups } from './recolour-threads.ts';
 export type { PaintableElement } from './recolour-threads.ts';
+
+export { apportionStitches, foldUnderlay, svgCanvasSizeMm, svgColoursInOrder } from './motif-figures.ts';
+export type { MotifStitchMix } from './motif-figures.ts';

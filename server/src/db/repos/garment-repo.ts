@@ -36,11 +36,14 @@ export function mockupSizeMm(svg: string, slug: string): { widthMm: number; heig
   throw new Error(`The mockup of garment ${slug} has neither a viewBox nor a width and height in millimetres`);
 }
 
-/** Active garments with their sizes (mockup scale and placement zones) and fabric colours, in display order. */
-export async function listActiveGarments(db: Db): Promise<GarmentSummary[]> {
+/**
+ * Active garments with their sizes (mockup scale and placement zones) and fabric colours, in display order. The
+ * studio's catalogue asks for the retired ones too (`includeRetired`).
+ */
+export async function listActiveGarments(db: Db, options: { includeRetired?: boolean } = {}): Promise<GarmentSummary[]> {
   const garments = await db('garments')
     .select('id', 'slug', 'name', 'kind', 'description', 'fabric_type', 'mockup_svg')
-    .where({ is_active: true })
+    .where(options.includeRetired ? {} : { is_active: true })
     .orderBy([{ column: 'sort_order' }, { column: 'id' }]);
   const ids = garments.map((g) => g.id as number);
   const [sizes, colours] = await Promise.all([

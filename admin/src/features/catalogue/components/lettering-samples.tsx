@@ -3,9 +3,10 @@ import '@fontsource/pacifico/400.css';
 import '@fontsource/fredoka/400.css';
 import '@fontsource/playfair-display/400.css';
 import '@fontsource/great-vibes/400.css';
+import type { ReactNode } from 'react';
 import type { StudioFont } from '@server/contracts/admin-catalog.ts';
 
-export function LetteringSamples({ fonts }: { fonts: StudioFont[] }) {
+export function LetteringSamples({ fonts, renderActions }: { fonts: StudioFont[]; renderActions?: (font: StudioFont) => ReactNode }) {
   return (
     <ul className="grid gap-3 sm:grid-cols-2">
       {fonts.map((font) => (
@@ -15,6 +16,7 @@ export function LetteringSamples({ fonts }: { fonts: StudioFont[] }) {
             <span className="font-medium">{font.name}</span>
             <span className="text-walnut-500"> · letters {font.minHeightMm}–{font.maxHeightMm} mm tall{font.isActive ? '' : ' · hidden from customers'}</span>
           </p>
+          {renderActions && <div className="mt-2 flex flex-wrap gap-2">{renderActions(font)}</div>}
         </li>
       ))}
     </ul>

@@ -1,14 +1,15 @@
+import type { ReactNode } from 'react';
 import type { StudioMotif, StudioThread } from '@server/contracts/admin-catalog.ts';
 import { formatLength } from '@ui/format.ts';
 import { StitchMixBar, StitchMixLegend } from './stitch-mix-bar.tsx';
 
 /** The studio's motifs with the figures the quotes and the production sheet are built from. */
-export function MotifTable({ motifs, threads }: { motifs: StudioMotif[]; threads: StudioThread[] }) {
+export function MotifTable({ motifs, threads, renderActions }: { motifs: StudioMotif[]; threads: StudioThread[]; renderActions?: (motif: StudioMotif) => ReactNode }) {
   const threadByCode = new Map(threads.map((t) => [t.code, t]));
   return (
     <div>
       <StitchMixLegend />
-      <div className="mt-2 overflow-x-auto">
+      <div className="relative mt-2 overflow-x-auto">
         <table className="w-full min-w-[52rem] text-left text-sm">
           <thead className="text-walnut-500">
             <tr>
@@ -19,6 +20,7 @@ export function MotifTable({ motifs, threads }: { motifs: StudioMotif[]; threads
               <th className="py-1.5 text-right font-medium">Stitches</th>
               <th className="py-1.5 pl-4 font-medium">Stitch mix</th>
               <th className="py-1.5 font-medium">Threads in order</th>
+              {renderActions && <th className="py-1.5 font-medium"><span className="sr-only">Actions</span></th>}
             </tr>
           </thead>
           <tbody>
@@ -35,7 +37,10 @@ export function MotifTable({ motifs, threads }: { motifs: StudioMotif[]; threads
                   {formatLength(motif.widthMm)} × {Math.round(motif.heightMm)} mm
                 </td>
                 <td className="py-2">{motif.minScalePct}–{motif.maxScalePct} %</td>
-                <td className="py-2 text-right tabular-nums">{motif.stitchCount.toLocaleString('en-US')}</td>
+                <td className="py-2 text-right tabular-nums">
+                  {motif.stitchCount.toLocaleString('en-US')}
+                  <span className="block text-xs text-walnut-500">{motif.stitchCountSource === 'measured' ? 'measured' : 'estimated'}</span>
+                </td>
                 <td className="py-2 pl-4"><StitchMixBar mix={motif.mix} /></td>
                 <td className="py-2">
                   <span className="flex gap-1">
@@ -52,6 +57,7 @@ export function MotifTable({ motifs, threads }: { motifs: StudioMotif[]; threads
                     })}
                   </span>
                 </td>
+                {renderActions && <td className="py-2 pl-2 align-top">{renderActions(motif)}</td>}
               </tr>
             ))}
           </tbody>
