@@ -27,6 +27,13 @@ import { createPaymentWebhookRouter } from './routes/payment-webhooks.ts';
 import { createAdminOverviewRouter } from './routes/admin/overview.ts';
 import { createAdminCatalogRouter } from './routes/admin/catalog.ts';
 import { createAdminOrdersRouter } from './routes/admin/orders.ts';
+import { createAdminPricingRouter } from './routes/admin/pricing.ts';
+import { createAdminSettingsRouter } from './routes/admin/settings.ts';
+import { createAdminUsersRouter } from './routes/admin/users.ts';
+import { createAdminOutboxRouter } from './routes/admin/outbox.ts';
+import { createOverviewService } from './services/overview-service.ts';
+import { createPricingService } from './services/pricing-service.ts';
+import { createPeopleService } from './services/people-service.ts';
 import type { CurrentUser } from './contracts/users.ts';
 
 export interface AppDeps {
@@ -110,9 +117,13 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/quotes', createQuotesRouter({ quotes }));
   app.use('/api/designs', createDesignsRouter({ designs: createDesignService({ db, quotes, now: deps.now }) }));
   app.use('/api/admin', requireRole('staff', 'owner'));
-  app.use('/api/admin/overview', createAdminOverviewRouter({ db }));
+  app.use('/api/admin/overview', createAdminOverviewRouter({ overview: createOverviewService({ db, now: deps.now }) }));
   app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));
   app.use('/api/admin/orders', createAdminOrdersRouter({ db }));
+  app.use('/api/admin/pricing', createAdminPricingRouter({ pricing: createPricingService({ db, now: deps.now }) }));
+  app.use('/api/admin/settings', createAdminSettingsRouter({ db, now: deps.now }));
+  app.use('/api/admin/users', createAdminUsersRouter({ people: createPeopleService({ db, ownerEmails: config.ownerEmails, now: deps.now }) }));
+  app.use('/api/admin/outbox', createAdminOutboxRouter({ db }));
   app.use('/api', notFoundHandler);
 
   const staticRoot = resolve(config.staticDir);
