@@ -6,6 +6,10 @@ import { TodayPage } from './routes/today.tsx';
 import { CataloguePage } from './routes/catalogue.tsx';
 import { OrderPage } from './routes/order.tsx';
 import { NotFoundPage } from './routes/not-found.tsx';
+import { PricingPage } from './routes/pricing.tsx';
+import { SettingsPage } from './routes/settings.tsx';
+import { PeoplePage } from './routes/people.tsx';
+import { OutboxPage } from './routes/outbox.tsx';
 
 const studioHome = `${basename}/`;
 
@@ -22,6 +26,11 @@ export const router = createBrowserRouter(
             { path: paths.home.path, element: <TodayPage /> },
             { path: paths.catalogue.path, element: <CataloguePage /> },
             { path: paths.order.path, element: <OrderPage /> },
+            { path: paths.pricing.path, element: <PricingPage /> },
+            { path: paths.settings.path, element: <SettingsPage /> },
+            { path: paths.people.path, element: <PeoplePage /> },
+            { path: paths.outbox.path, element: <OutboxPage /> },
+            { path: paths.outboxMessage.path, element: <OutboxPage /> },
             { path: '*', element: <NotFoundPage /> },
           ],
         },
