@@ -1,9 +1,17 @@
+import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type Page } from '@playwright/test';
 import { signInAs } from './support/sign-in.ts';
 
-test.describe.configure({ mode: 'serial' });
+// Each journey runs an accessibility scan or two, which takes a while on a busy machine.
+test.describe.configure({ mode: 'serial', timeout: 60_000 });
 
 const shots = 'test-results/screens';
+
+/** Accessibility rules that fail on this page, as "rule: where" lines (axe-core's WCAG 2 A and AA checks). */
+async function accessibilityProblems(page: Page): Promise<string[]> {
+  const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa']).analyze();
+  return results.violations.flatMap((violation) => violation.nodes.map((node) => `${violation.id}: ${node.target.join(' ')}`));
+}
 
 async function signInAsOwner(page: Page): Promise<void> {
   await page.goto('/admin/');
@@ -23,6 +31,7 @@ test('when the owner opens Today, then the day’s work, machine hours against c
   await hours.getByText('Machine hours as a table').click();
   await expect(hours.getByRole('table')).toContainText('Capacity');
   await page.screenshot({ path: `${shots}/studio-today.png`, fullPage: true });
+  expect(await accessibilityProblems(page)).toEqual([]);
 
   await page.setViewportSize({ width: 390, height: 844 });
   await expect(takings.locator('svg.recharts-surface')).toBeVisible();
@@ -46,6 +55,7 @@ test('when the owner raises the stitch rate in the draft, then the three sample 
   await expect(largest.getByRole('cell').nth(1)).not.toHaveText(before);
   await expect(largest.getByRole('cell').nth(2)).toContainText('+');
   await page.screenshot({ path: `${shots}/studio-pricing-draft.png`, fullPage: true });
+  expect(await accessibilityProblems(page)).toEqual([]);
 
   await page.getByRole('button', { name: 'Save draft' }).click();
   await expect(page.getByText('Draft saved.')).toBeVisible();
@@ -68,6 +78,7 @@ test('when the owner adds a customer to the studio team, then the change shows a
   await dominic.getByRole('button', { name: 'Add Dominic Lark to the studio team' }).click();
   await expect(dominic).toContainText('Studio team');
   await page.screenshot({ path: `${shots}/studio-people.png`, fullPage: true });
+  expect(await accessibilityProblems(page)).toEqual([]);
   // Later journeys sign in as Dominic the customer.
   await dominic.getByRole('button', { name: 'Remove Dominic Lark from the studio team' }).click();
   await expect(dominic).toContainText('Customer');
@@ -84,6 +95,7 @@ test('when the owner opens the outbox, then a message reads in full and a failed
   await message.getByRole('button', { name: 'As designed' }).click();
   await expect(message.frameLocator('iframe').locator('body')).toContainText('Wren & Bobbin');
   await page.screenshot({ path: `${shots}/studio-outbox.png`, fullPage: true });
+  expect(await accessibilityProblems(page)).toEqual([]);
 
   await list.getByLabel('Status').selectOption('failed');
   await expect(list.getByText('Page 1 of 1 · 1 message', { exact: true })).toBeVisible();
@@ -94,4 +106,26 @@ test('when the owner opens the outbox, then a message reads in full and a failed
   await expect(message.getByRole('note')).toContainText('This one was not delivered');
   await expect(message.locator('pre')).toContainText('Your proof for WB-1008 is ready');
   await page.screenshot({ path: `${shots}/studio-outbox-failed.png`, fullPage: true });
+});
+
+test('when the owner lowers the weekly machine hours in Settings, then Today draws the capacity line there', async ({ page }) => {
+  await signInAsOwner(page);
+  await page.getByRole('link', { name: 'Settings' }).click();
+  const hoursField = page.getByLabel('Machine hours a week');
+  await expect(hoursField).toHaveValue('30');
+  await hoursField.fill('200');
+  await page.getByRole('button', { name: 'Save settings' }).click();
+  await expect(page.getByText('A week has 168 hours')).toBeVisible();
+  await hoursField.fill('2');
+  await page.getByRole('button', { name: 'Save settings' }).click();
+  await expect(page.getByText('Saved. New quotes use these figures.')).toBeVisible();
+  await page.screenshot({ path: `${shots}/studio-settings.png`, fullPage: true });
+
+  await page.getByRole('link', { name: 'Today' }).click();
+  await expect(page.getByRole('region', { name: 'Machine hours booked' }).locator('figcaption')).toContainText('of 2 h');
+  // Later journeys expect the seeded capacity.
+  await page.getByRole('link', { name: 'Settings' }).click();
+  await page.getByLabel('Machine hours a week').fill('30');
+  await page.getByRole('button', { name: 'Save settings' }).click();
+  await expect(page.getByText('Saved. New quotes use these figures.')).toBeVisible();
 });

@@ -27,7 +27,7 @@ export function MachineHoursChart({ machineHours }: { machineHours: AdminOvervie
       </figcaption>
       <div aria-hidden="true" className="h-56 w-full">
         <ResponsiveContainer width="100%" height="100%">
-          <BarChart data={rows} margin={{ top: 16, right: 8, bottom: 0, left: 0 }}>
+          <BarChart accessibilityLayer={false} data={rows} margin={{ top: 16, right: 8, bottom: 0, left: 0 }}>
             <CartesianGrid stroke="#efe3cc" vertical={false} />
             <XAxis dataKey="label" tick={{ fontSize: 12 }} interval={0} />
             <YAxis width={40} tick={{ fontSize: 12 }} domain={[0, ticks.at(-1)!]} ticks={ticks} />

@@ -19,7 +19,7 @@ export function RevenueChart({ revenue }: { revenue: AdminOverviewResponse['reve
       </figcaption>
       <div aria-hidden="true" className="h-56 w-full">
         <ResponsiveContainer width="100%" height="100%">
-          <BarChart data={rows} margin={{ top: 16, right: 8, bottom: 0, left: 0 }}>
+          <BarChart accessibilityLayer={false} data={rows} margin={{ top: 16, right: 8, bottom: 0, left: 0 }}>
             <CartesianGrid stroke="#efe3cc" vertical={false} />
             <XAxis dataKey="label" tick={{ fontSize: 11 }} interval="preserveStartEnd" />
             <YAxis width={52} tick={{ fontSize: 12 }} tickFormatter={(value: number) => `$${value}`} />

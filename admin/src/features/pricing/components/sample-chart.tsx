@@ -8,7 +8,7 @@ export function SampleChart({ rows, currency, publishedVersion }: { rows: { name
   return (
     <div aria-hidden="true" className="h-56 w-full">
       <ResponsiveContainer width="100%" height="100%">
-        <BarChart data={rows} margin={{ top: 8, right: 8, bottom: 0, left: 0 }}>
+        <BarChart accessibilityLayer={false} data={rows} margin={{ top: 8, right: 8, bottom: 0, left: 0 }}>
           <CartesianGrid stroke="#efe3cc" vertical={false} />
           <XAxis dataKey="name" tick={{ fontSize: 12 }} />
           <YAxis width={52} tick={{ fontSize: 12 }} allowDecimals={false} tickFormatter={(value: number) => `$${value}`} />

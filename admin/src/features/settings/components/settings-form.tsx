@@ -18,7 +18,7 @@ const fields: { key: Field; label: string; suffix: string; step: string; hint: s
 ];
 
 /** The shop's pace and capacity; every quote's run time is worked out from the first four. */
-export function SettingsForm({ settings, canEdit }: { settings: ShopSettings; canEdit: boolean }) {
+export function SettingsForm({ settings, canEdit, onSaved }: { settings: ShopSettings; canEdit: boolean; onSaved: () => void }) {
   const [values, setValues] = useState<Record<Field, string>>(() => Object.fromEntries(fields.map(({ key }) => [key, String(settings[key])])) as Record<Field, string>);
   const update = useUpdateSettings();
   const errors = update.error instanceof ApiError ? (update.error.fields ?? {}) : {};
@@ -30,7 +30,7 @@ export function SettingsForm({ settings, canEdit }: { settings: ShopSettings; ca
       aria-label="Shop settings"
       onSubmit={(event) => {
         event.preventDefault();
-        update.mutate(Object.fromEntries(fields.map(({ key }) => [key, toNumber(values[key])])) as ShopSettings);
+        update.mutate(Object.fromEntries(fields.map(({ key }) => [key, toNumber(values[key])])) as ShopSettings, { onSuccess: onSaved });
       }}
     >
       {!canEdit && <p className="rounded-xl bg-linen-100 p-3 text-sm text-walnut-700">Only the studio owner can change these.</p>}
