@@ -8,6 +8,7 @@ import type { CommentPin, OrderStep } from './order-timeline.ts';
 import type { OrderSpec } from './orders.ts';
 import { addDays, at } from './seed-time.ts';
 import { userIds, type CustomerKey } from './accounts.ts';
+import { seedMailBodies } from './mail-bodies.ts';
 
 type PaymentStatus = 'none' | 'authorized' | 'captured' | 'partially_refunded' | 'refunded' | 'voided';
 type Row = Record<string, unknown>;
@@ -97,6 +98,7 @@ export function replayOrder(context: OrderContext): OrderHistory {
       status: failure ? 'failed' : 'sent',
       provider_message_id: failure ? null : `<seed-${seq(id)}@wrenandbobbin.test>`,
       error: failure ?? null,
+      ...seedMailBodies(template, order.number),
       created_at: stamp,
       updated_at: stamp,
     });

@@ -40,6 +40,13 @@ import { createCatalogueMotifsRouter } from './routes/admin/catalogue-motifs.ts'
 import { createCatalogueFontsRouter } from './routes/admin/catalogue-fonts.ts';
 import { createCatalogueThreadsRouter } from './routes/admin/catalogue-threads.ts';
 import { createCatalogueHoopsRouter } from './routes/admin/catalogue-hoops.ts';
+import { createAdminPricingRouter } from './routes/admin/pricing.ts';
+import { createAdminSettingsRouter } from './routes/admin/settings.ts';
+import { createAdminUsersRouter } from './routes/admin/users.ts';
+import { createAdminOutboxRouter } from './routes/admin/outbox.ts';
+import { createOverviewService } from './services/overview-service.ts';
+import { createPricingService } from './services/pricing-service.ts';
+import { createPeopleService } from './services/people-service.ts';
 import type { CurrentUser } from './contracts/users.ts';
 
 export interface AppDeps {
@@ -129,7 +136,7 @@ export function createApp(deps: AppDeps): Express {
     customerOrders: createCustomerOrderService({ db, mailer: deps.mailer, appOrigin: config.appOrigin, now: deps.now }),
   }));
   app.use('/api/admin', requireRole('staff', 'owner'));
-  app.use('/api/admin/overview', createAdminOverviewRouter({ db }));
+  app.use('/api/admin/overview', createAdminOverviewRouter({ overview: createOverviewService({ db, now: deps.now }) }));
   app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));
   app.use('/api/admin/orders', createStudioOrdersRouter({ db, stripe: deps.stripe, mailer: deps.mailer, now: deps.now, appOrigin: config.appOrigin, uploadMaxBytes: config.uploadMaxBytes, fonts: createLetteringFontLoader() }));
   app.use('/api/admin/orders', createAdminOrdersRouter({ db }));
@@ -139,6 +146,10 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/admin/catalogue/fonts', createCatalogueFontsRouter({ db }));
   app.use('/api/admin/catalogue/threads', createCatalogueThreadsRouter({ db }));
   app.use('/api/admin/catalogue/hoops', createCatalogueHoopsRouter({ db }));
+  app.use('/api/admin/pricing', createAdminPricingRouter({ pricing: createPricingService({ db, now: deps.now }) }));
+  app.use('/api/admin/settings', createAdminSettingsRouter({ db, now: deps.now }));
+  app.use('/api/admin/users', createAdminUsersRouter({ people: createPeopleService({ db, ownerEmails: config.ownerEmails, now: deps.now }) }));
+  app.use('/api/admin/outbox', createAdminOutboxRouter({ db }));
   app.use('/api', notFoundHandler);
 
   const staticRoot = resolve(config.staticDir);

@@ -7,10 +7,14 @@ import { useSignOut } from '@ui/session/sign-out.ts';
 import { paths } from '../config/paths.ts';
 import { StaffGate } from './staff-gate.tsx';
 
-const sections = [
+const sections: { href: string; label: string; isOwnerOnly?: boolean }[] = [
   { href: paths.home.href(), label: 'Today' },
   { href: paths.catalogue.href(), label: 'Catalogue' },
   { href: paths.orders.href(), label: 'Orders' },
+  { href: paths.pricing.href(), label: 'Pricing' },
+  { href: paths.settings.href(), label: 'Settings' },
+  { href: paths.people.href(), label: 'People', isOwnerOnly: true },
+  { href: paths.outbox.href(), label: 'Outbox' },
 ];
 
 function SignedInAs() {
@@ -31,6 +35,8 @@ function SignedInAs() {
 }
 
 export function StudioLayout() {
+  const me = useCurrentUser();
+  const isOwner = me.data?.role === 'owner';
   return (
     <div className="min-h-screen">
       <SkipLink />
@@ -41,8 +47,8 @@ export function StudioLayout() {
               <HoopMark className="h-8 w-8" />
               <span className="font-semibold">Hoopwright <span className="font-normal text-linen-300">studio</span></span>
             </span>
-            <nav aria-label="Studio sections" className="flex gap-1 text-sm">
-              {sections.map((section) => (
+            <nav aria-label="Studio sections" className="flex flex-wrap gap-1 text-sm">
+              {sections.filter((section) => isOwner || !section.isOwnerOnly).map((section) => (
                 <NavLink key={section.href} to={section.href} end className={({ isActive }) => `rounded-full px-3 py-1.5 ${isActive ? 'bg-linen-100 text-walnut-900' : 'hover:bg-walnut-700'}`}>
                   {section.label}
                 </NavLink>

@@ -8,6 +8,10 @@ import { OrderPage } from './routes/order.tsx';
 import { ProductionSheetPage } from './routes/production-sheet.tsx';
 import { OrdersPage } from './routes/orders.tsx';
 import { NotFoundPage } from './routes/not-found.tsx';
+import { PricingPage } from './routes/pricing.tsx';
+import { SettingsPage } from './routes/settings.tsx';
+import { PeoplePage } from './routes/people.tsx';
+import { OutboxPage } from './routes/outbox.tsx';
 
 const studioHome = `${basename}/`;
 
@@ -26,6 +30,11 @@ export const router = createBrowserRouter(
             { path: paths.orders.path, element: <OrdersPage /> },
             { path: paths.order.path, element: <OrderPage /> },
             { path: paths.productionSheet.path, element: <ProductionSheetPage /> },
+            { path: paths.pricing.path, element: <PricingPage /> },
+            { path: paths.settings.path, element: <SettingsPage /> },
+            { path: paths.people.path, element: <PeoplePage /> },
+            { path: paths.outbox.path, element: <OutboxPage /> },
+            { path: paths.outboxMessage.path, element: <OutboxPage /> },
             { path: '*', element: <NotFoundPage /> },
           ],
         },

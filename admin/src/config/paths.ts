@@ -5,6 +5,11 @@ export const paths = {
   orders: { path: '/orders', href: () => '/orders' },
   order: { path: '/orders/:number', href: (number: string) => `/orders/${encodeURIComponent(number)}` },
   productionSheet: { path: '/orders/:number/production', href: (number: string) => `/orders/${encodeURIComponent(number)}/production` },
+  pricing: { path: '/pricing', href: () => '/pricing' },
+  settings: { path: '/settings', href: () => '/settings' },
+  people: { path: '/people', href: () => '/people' },
+  outbox: { path: '/outbox', href: () => '/outbox' },
+  outboxMessage: { path: '/outbox/:id', href: (id: number) => `/outbox/${id}` },
 } as const;
 
 export const basename = '/admin';

@@ -5,7 +5,7 @@ const isoDate = (value: Date | string | null): string | null =>
   value === null ? null : value instanceof Date ? value.toISOString() : String(value);
 
 /** Order counts per status and the most recently placed orders, for the studio's home screen. */
-export async function readOrderOverview(db: Db, recentLimit: number): Promise<AdminOverviewResponse> {
+export async function readOrderOverview(db: Db, recentLimit: number): Promise<Pick<AdminOverviewResponse, 'shopName' | 'countsByStatus' | 'recentOrders'>> {
   const [shop, counts, recent] = await Promise.all([
     db('shop_settings').select('name').where({ id: 1 }).first(),
     db('orders').select('status').count({ n: '*' }).groupBy('status') as Promise<{ status: string; n: number | string }[]>,

@@ -1,11 +1,10 @@
 import { Router } from 'express';
-import type { Db } from '../../db/knex.ts';
-import { readOrderOverview } from '../../db/repos/order-overview-repo.ts';
+import type { OverviewService } from '../../services/overview-service.ts';
 
-export function createAdminOverviewRouter(deps: { db: Db }): Router {
+export function createAdminOverviewRouter(deps: { overview: OverviewService }): Router {
   const router = Router();
   router.get('/', async (_req, res) => {
-    res.json(await readOrderOverview(deps.db, 12));
+    res.json(await deps.overview.read());
   });
   return router;
 }

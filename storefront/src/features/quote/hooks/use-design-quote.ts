@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import type { QuotePreviewRequest } from '@server/contracts/quotes.ts';
 import { quotePreviewQuery } from '../api/preview-quote.ts';
-import { useDebouncedValue } from './use-debounced-value.ts';
+import { useDebouncedValue } from '@ui/hooks/use-debounced-value.ts';
 
 /** Long enough to wait out a run of arrow presses or typing, short enough to feel live. */
 const SETTLE_MS = 300;

@@ -1,0 +1,64 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { adminOverviewResponse } from '../../server/src/contracts/admin-overview.ts';
+import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+
+let harness: ApiHarness;
+let staff: ReturnType<ApiHarness['agent']>;
+beforeAll(async () => {
+  harness = await startApiHarness();
+  staff = harness.agent();
+  await harness.signIn(staff, 'tobias@wrenandbobbin.test');
+});
+afterAll(async () => {
+  await harness.close();
+});
+
+// The harness's clock reads Tuesday 1 December 2026, 10:00 UTC; the week began on Monday 30 November.
+describe('GET /api/admin/overview', () => {
+  it('when staff open Today, then each group lists the seeded orders that need that action', async () => {
+    const body = adminOverviewResponse.parse((await staff.get('/api/admin/overview').expect(200)).body);
+    expect(body.today).toBe('2026-12-01');
+    const numbers = Object.fromEntries(body.actions.map((group) => [group.kind, group.orders.map((order) => order.number)]));
+    expect(numbers).toEqual({
+      proofs_to_send: ['WB-1009', 'WB-1010'],
+      changes_asked: ['WB-1007'],
+      awaiting_charge: ['WB-1006'],
+      // WB-1006 has no date: placed Sunday 22 Nov + 10 working days = Friday 4 Dec; WB-1010 is needed by 6 Dec.
+      due_soon: ['WB-1006', 'WB-1010'],
+      ready_to_ship: ['WB-1003'],
+    });
+    expect(body.actions.find((group) => group.kind === 'due_soon')!.orders[0]).toMatchObject({ dueDate: '2026-12-04', isOverdue: false });
+  });
+
+  it('when the machine hours are booked by due week, then the sums match the quotes’ run minutes worked by hand', async () => {
+    const { machineHours } = adminOverviewResponse.parse((await staff.get('/api/admin/overview').expect(200)).body);
+    expect(machineHours.capacityHours).toBe(30);
+    expect(machineHours.weeks.map((week) => week.weekStart)).toEqual(['2026-11-30', '2026-12-07', '2026-12-14', '2026-12-21', '2026-12-28', '2027-01-04']);
+    // Week of 30 Nov: WB-1006 42.35 + WB-1010 79.25 = 121.60 min = 2.0267 h.
+    // Week of 7 Dec: WB-1004 35.14 + WB-1008 63.27 + WB-1009 17.63 (placed Thu 26 Nov + 10 working days = Thu 10 Dec) = 116.04 min = 1.934 h.
+    // Week of 14 Dec: WB-1007 48.10 min = 0.8017 h. WB-1003 is stitched, so it no longer books the machine.
+    expect(machineHours.weeks.slice(0, 3)).toEqual([
+      { weekStart: '2026-11-30', bookedHours: 2.03, orderCount: 2 },
+      { weekStart: '2026-12-07', bookedHours: 1.93, orderCount: 3 },
+      { weekStart: '2026-12-14', bookedHours: 0.8, orderCount: 1 },
+    ]);
+  });
+
+  it('when takings are summed by week, then captures minus refunds match the seeded payments', async () => {
+    const { revenue } = adminOverviewResponse.parse((await staff.get('/api/admin/overview').expect(200)).body);
+    expect(revenue.currency).toBe('USD');
+    expect(revenue.weeks).toHaveLength(8);
+    const byWeek = Object.fromEntries(revenue.weeks.map((week) => [week.weekStart, week]));
+    // Week of 9 Nov: 22.47 + 33.17 + 85.51 = 141.15 captured.
+    expect(byWeek['2026-11-09']).toEqual({ weekStart: '2026-11-09', capturedCents: 14_115, refundedCents: 0, netCents: 14_115 });
+    // Week of 16 Nov: 84.58 + 74.90 = 159.48 captured; refunds 84.58 (WB-1005) + 5.00 (WB-1002) = 89.58; net 69.90.
+    expect(byWeek['2026-11-16']).toEqual({ weekStart: '2026-11-16', capturedCents: 15_948, refundedCents: 8958, netCents: 6990 });
+    expect(byWeek['2026-11-30']).toEqual({ weekStart: '2026-11-30', capturedCents: 0, refundedCents: 0, netCents: 0 });
+  });
+
+  it('when a customer asks, then it answers 403', async () => {
+    const customer = harness.agent();
+    await harness.signIn(customer, 'dominic@example.test');
+    await customer.get('/api/admin/overview').expect(403);
+  });
+});

@@ -1,0 +1,16 @@
+import type { QuotePreviewRequest } from '../../server/src/contracts/quotes.ts';
+import { garments } from '../../seeds/data/garments.ts';
+import { motifs } from '../../seeds/data/motifs.ts';
+
+const bishop = garments.find((garment) => garment.slug === 'bishop-dress')!;
+const daisy = motifs.find((motif) => motif.slug === 'daisy-chain')!;
+
+/** A seeded bishop dress, smallest size, with a daisy chain round the hem: a quote any test can ask for. */
+export const daisyDressQuote: QuotePreviewRequest = {
+  garmentId: bishop.id,
+  sizeId: bishop.sizes[0].id,
+  colourId: bishop.colours[0].id,
+  quantity: 1,
+  isRush: false,
+  document: { version: 1, placements: [{ id: 'hem', kind: 'border', zone: 'hem', motif: 'daisy-chain', run: 'circumference', hemOffsetMm: 44.45, threads: daisy.threadCodes }] },
+};
