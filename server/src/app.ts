@@ -23,6 +23,8 @@ import { createMeRouter } from './routes/me.ts';
 import { createCatalogRouter } from './routes/catalog.ts';
 import { createQuotesRouter } from './routes/quotes.ts';
 import { createDesignsRouter } from './routes/designs.ts';
+import { createArtworkRouter } from './routes/artwork.ts';
+import { createArtworkService } from './services/artwork-service.ts';
 import { createPaymentWebhookRouter } from './routes/payment-webhooks.ts';
 import { createAdminOverviewRouter } from './routes/admin/overview.ts';
 import { createAdminCatalogRouter } from './routes/admin/catalog.ts';
@@ -102,13 +104,15 @@ export function createApp(deps: AppDeps): Express {
   });
 
   app.get('/api/health', (_req, res) => res.json({ ok: true }));
-  app.use('/api/auth', createAuthRouter({ log: deps.log }));
+  const artwork = createArtworkService({ db, now: deps.now });
+  app.use('/api/auth', createAuthRouter({ log: deps.log, claimArtwork: artwork.claim }));
   app.use('/api/me', createMeRouter());
   app.use('/api/catalog', createCatalogRouter({ db }));
   // One quote service, so its font loader parses each font once: saving a design prices it too.
   const quotes = createQuoteService({ db, fonts: createLetteringFontLoader() });
   app.use('/api/quotes', createQuotesRouter({ quotes }));
   app.use('/api/designs', createDesignsRouter({ designs: createDesignService({ db, quotes, now: deps.now }) }));
+  app.use('/api/artwork', createArtworkRouter({ artwork, uploadMaxBytes: config.uploadMaxBytes }));
   app.use('/api/admin', requireRole('staff', 'owner'));
   app.use('/api/admin/overview', createAdminOverviewRouter({ db }));
   app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { artworkOwnerOf } from '../auth/artwork-owner.ts';
 import { quotePreviewRequest } from '../contracts/quotes.ts';
 import { validate } from '../middleware/validate.ts';
 import { sendResult } from '../middleware/send-result.ts';
@@ -8,7 +9,7 @@ import type { QuoteService } from '../services/quote-service.ts';
 export function createQuotesRouter(deps: { quotes: QuoteService }): Router {
   const router = Router();
   router.post('/preview', validate(quotePreviewRequest), async (req, res) => {
-    sendResult(res, await deps.quotes.preview(req.body));
+    sendResult(res, await deps.quotes.preview(req.body, artworkOwnerOf(req)));
   });
   return router;
 }

@@ -1,25 +1,34 @@
 import type { Db } from '../db/knex.ts';
 import { loadQuoteCatalog, type QuoteCatalogRecord } from '../db/repos/quote-catalog-repo.ts';
+import { loadOwnedArtworkForQuote, type ArtworkOwner } from '../db/repos/artwork-repo.ts';
 import { priceQuote } from '../engine/index.ts';
 import type { LetteringFontLoader } from '../integrations/lettering-fonts.ts';
 import type { DesignDocument } from '../contracts/designs.ts';
 import type { QuotePreviewRequest, QuotePreviewResponse } from '../contracts/quotes.ts';
 import { failure, ok, type Result } from '../contracts/result.ts';
 import { figureDesign } from './design-figures.ts';
-import type { QuoteCatalog } from './quote-catalog.ts';
+import type { CatalogArtwork, QuoteCatalog } from './quote-catalog.ts';
 
 /** Quotes priced by the server from the published price list; the client's own figures are never used. */
 export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader }) {
-  /** Prices a design without saving it, for one garment size and quantity. Reads only, so no transaction. */
-  async function preview(request: QuotePreviewRequest): Promise<Result<QuotePreviewResponse>> {
-    const record = await loadQuoteCatalog(deps.db, {
-      garmentId: request.garmentId,
-      sizeId: request.sizeId,
-      colourId: request.colourId,
-      ...slugsNamedIn(request.document),
-    });
+  /**
+   * Prices a design without saving it, for one garment size and quantity. Reads only, so no transaction. Artwork
+   * uploads count only when `owner` may see them; anyone else's read as not available.
+   */
+  async function preview(request: QuotePreviewRequest, owner?: ArtworkOwner): Promise<Result<QuotePreviewResponse>> {
+    const { motifSlugs, fontSlugs, artworkIds } = namedIn(request.document);
+    const [record, uploads] = await Promise.all([
+      loadQuoteCatalog(deps.db, { garmentId: request.garmentId, sizeId: request.sizeId, colourId: request.colourId, motifSlugs, fontSlugs }),
+      owner ? loadOwnedArtworkForQuote(deps.db, owner, artworkIds) : [],
+    ]);
     if (!record.ok) return record;
-    const figured = figureDesign(toQuoteCatalog(record.value, deps.fonts), request.document);
+    const artworkUploads = new Map(
+      uploads.map((upload): [number, CatalogArtwork] => [
+        upload.id,
+        upload.svgText !== null ? { svgText: upload.svgText } : { rasterSizePx: { widthPx: upload.widthPx, heightPx: upload.heightPx } },
+      ]),
+    );
+    const figured = figureDesign(toQuoteCatalog(record.value, deps.fonts, artworkUploads), request.document);
     if (!figured.ok) return figured;
     const figures = figured.value;
     const { garment, size, ruleSet } = record.value;
@@ -62,6 +71,7 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader })
         }),
         widthMm: placement.estimate.widthMm,
         heightMm: placement.estimate.heightMm,
+        ...(placement.isPriceProvisional ? { isPriceProvisional: true } : {}),
       })),
       runMinutes: figures.runMinutes,
       stabilizer: {
@@ -79,19 +89,21 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader })
 
 export type QuoteService = ReturnType<typeof createQuoteService>;
 
-/** The motifs and fonts a design names, so only those rows are read. */
-function slugsNamedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: string[] } {
+/** The motifs, fonts and uploads a design names, so only those rows are read. */
+function namedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: string[]; artworkIds: number[] } {
   const motifSlugs = new Set<string>();
   const fontSlugs = new Set<string>();
+  const artworkIds = new Set<number>();
   for (const placement of document.placements) {
     if (placement.kind === 'border' || placement.kind === 'motif') motifSlugs.add(placement.motif);
     if (placement.kind === 'lettering') fontSlugs.add(placement.font);
+    if (placement.kind === 'artwork') artworkIds.add(placement.artworkUploadId);
   }
-  return { motifSlugs: [...motifSlugs], fontSlugs: [...fontSlugs] };
+  return { motifSlugs: [...motifSlugs], fontSlugs: [...fontSlugs], artworkIds: [...artworkIds] };
 }
 
-/** The catalogue as `figureDesign` takes it; artwork uploads are left out until the server stores them. */
-function toQuoteCatalog(record: QuoteCatalogRecord, fonts: LetteringFontLoader): QuoteCatalog {
+/** The catalogue as `figureDesign` takes it, with the uploads the requester may use. */
+function toQuoteCatalog(record: QuoteCatalogRecord, fonts: LetteringFontLoader, artworkUploads: ReadonlyMap<number, CatalogArtwork>): QuoteCatalog {
   return {
     garment: record.garment,
     size: record.size,
@@ -101,5 +113,6 @@ function toQuoteCatalog(record: QuoteCatalogRecord, fonts: LetteringFontLoader):
     ),
     hoops: record.hoops,
     machine: record.machine,
+    artworkUploads,
   };
 }
