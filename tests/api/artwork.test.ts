@@ -192,3 +192,10 @@ describe('POST /api/quotes/preview with artwork', () => {
     expect(refused.body.error.fields).toEqual({ 'document.placements.0.artworkUploadId': 'That artwork upload is not available; upload it again.' });
   });
 });
+
+describe('GET /api/catalog/hoops', () => {
+  it('when anyone asks for the hoops, then they get each sewing field in mm, so the designer can keep items within the largest', async () => {
+    const res = await harness.agent().get('/api/catalog/hoops').expect(200);
+    expect(res.body.hoops).toContainEqual({ slug: 'large-200x300', name: 'Large 200 × 300 mm (8 × 12 in)', fieldWidthMm: 200, fieldHeightMm: 300 });
+  });
+});

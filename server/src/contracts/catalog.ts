@@ -85,3 +85,8 @@ export const fontListResponse = z.object({ fonts: z.array(letteringFont) });
 export const threadColour = z.object({ code: z.string(), name: z.string(), hex: z.string() });
 export type ThreadColourSummary = z.infer<typeof threadColour>;
 export const threadListResponse = z.object({ threads: z.array(threadColour) });
+
+/** A hoop the studio stitches with; the sewing field is the area the machine reaches, mm. */
+export const hoopSummary = z.object({ slug: z.string(), name: z.string(), fieldWidthMm: z.number(), fieldHeightMm: z.number() });
+export type HoopSummary = z.infer<typeof hoopSummary>;
+export const hoopListResponse = z.object({ hoops: z.array(hoopSummary) });

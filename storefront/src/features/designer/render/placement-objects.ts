@@ -1,4 +1,4 @@
-import { FabricText, Group, Rect, Shadow, loadSVGFromString, util, type FabricObject } from 'fabric/es';
+import { FabricImage, FabricText, Group, Rect, Shadow, loadSVGFromString, util, type FabricObject } from 'fabric/es';
 import type { Drawable } from './describe-scene.ts';
 import { registerSvgShapes } from './svg-shapes.ts';
 
@@ -7,7 +7,7 @@ registerSvgShapes();
 /** Madder, the storefront's accent, for the selection outline. */
 const SELECTION_COLOUR = '#9c4230';
 
-/** How every placement behaves on the canvas: moved by dragging, sized only from the panel. */
+/** How every placement behaves on the canvas: moved by dragging, sized from the panel (artwork also by its corners). */
 const interactive = {
   originX: 'center',
   originY: 'center',
@@ -45,6 +45,17 @@ export async function buildPlacementObject(drawable: Drawable): Promise<Placemen
   if (drawable.kind === 'lettering') {
     const text = new FabricText(drawable.text, { ...interactive, fontFamily: drawable.fontFamily, fontSize: drawable.fontSizeMm, fill: drawable.fill, shadow: threadShadow() });
     return { object: text, centerXMm: (current) => current.centerXMm };
+  }
+  if (drawable.kind === 'artwork') {
+    // Drawn as a picture (an SVG upload too): the browser renders it sandboxed, as the server's policy asks.
+    const image = await FabricImage.fromURL(drawable.src);
+    if (!(image.width > 0)) throw new Error('The artwork has nothing in it to draw');
+    image.set({ originX: 'center', originY: 'center', left: 0, top: 0 });
+    image.scale(drawable.widthMm / image.width);
+    // Corner handles resize it about its centre, in proportion; the panel sets its width exactly.
+    const wrapper = new Group([image], { ...interactive, hasControls: true, centeredScaling: true, lockScalingFlip: true, cornerColor: SELECTION_COLOUR, cornerSize: 14, transparentCorners: false });
+    wrapper.setControlsVisibility({ mt: false, mb: false, ml: false, mr: false, mtr: false });
+    return { object: wrapper, centerXMm: (current) => current.centerXMm };
   }
   if (drawable.kind === 'motif') {
     // Wrapped so that the outer object is in millimetres like the others: the SVG's own units are its pixels.

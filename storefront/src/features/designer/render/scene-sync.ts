@@ -158,6 +158,10 @@ export function createSceneSync(canvas: Canvas) {
 
   return {
     sync,
+    /** Puts every object back where the document has it: after a drag or resize the document refused or clamped. */
+    resync: () => {
+      if (latest && !isDisposed) sync(latest);
+    },
     placementIdOf: (object: FabricObject | undefined) => (object ? idByObject.get(object) : undefined),
     isEchoing: () => isEchoing,
     dispose: () => {

@@ -45,6 +45,12 @@ export function DesignQuote({ request }: { request: QuotePreviewRequest }) {
               </tr>
             </tfoot>
           </table>
+          {preview.data.placements.some((placement) => placement.isPriceProvisional) && (
+            <p className="mt-3 rounded-lg border border-saffron-500/50 bg-saffron-100 p-3 text-sm">
+              The studio will confirm the price after digitizing your picture: they turn it into stitches by hand, then
+              tell you the final price before anything is made or charged.
+            </p>
+          )}
           <MakingNotes preview={preview.data} />
         </div>
       ) : (
