@@ -58,6 +58,8 @@ describe('POST /api/artwork', () => {
     expect(row.sanitized_svg).toContain('<circle');
     expect(row.sanitized_svg).toContain('<path');
     expect(row.sanitized_svg).not.toMatch(/<script|onload|onclick|javascript:/i);
+    // Given its size in pixels, so a browser shows it in proportion rather than at its default 300 × 150.
+    expect(row.sanitized_svg).toMatch(/^<svg width="200" height="100"[^>]*viewBox="0 0 200 100"/);
     expect(row.png).toBeNull();
     expect(row.owner_user_id).toBeNull();
     expect(row.session_key).toEqual(expect.any(String));

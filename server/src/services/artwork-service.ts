@@ -31,7 +31,7 @@ export function createArtworkService(deps: { db: Db; now: () => Date }) {
     const inspected = await inspectUpload(file.buffer, ['svg', 'png', 'jpeg']);
     if (!inspected.ok) return { ok: false, error: { ...inspected.error, fields: { file: inspected.error.message } } };
     const clean = inspected.value;
-    const image: ArtworkImage = clean.kind === 'svg' ? { kind: 'svg', svg: clean.svg } : { kind: 'raster', png: clean.png };
+    const image: ArtworkImage = clean.kind === 'svg' ? { kind: 'svg', svg: withIntrinsicSize(clean.svg, clean.widthPx, clean.heightPx) } : { kind: 'raster', png: clean.png };
     const id = await insertArtwork(db, owner, {
       originalName: nameOf(file.originalName),
       // What is stored, not what was sent: rasters are kept as PNG whatever they came as.
@@ -76,6 +76,15 @@ function noSuchArtwork(id: number): Result<never> {
 function nameOf(raw: string): string {
   const base = raw.split(/[\\/]/).at(-1)?.trim() ?? '';
   return (base || 'artwork').slice(-MAX_NAME_LENGTH);
+}
+
+/**
+ * Gives the drawing's root its size in pixels. Shown as a picture, an SVG without a width and height is drawn at
+ * CSS's default 300 × 150 whatever its viewBox, squashing a child's drawing; the viewBox keeps the content's own
+ * coordinates, so stitch estimates are unchanged.
+ */
+export function withIntrinsicSize(svg: string, widthPx: number, heightPx: number): string {
+  return svg.replace(/<svg\b[^>]*>/i, (root) => root.replace(/\s(?:width|height)\s*=\s*("[^"]*"|'[^']*')/gi, '').replace(/^<svg\b/i, `<svg width="${widthPx}" height="${heightPx}"`));
 }
 
 export const artworkImageUrl = (id: number) => `/api/artwork/${id}/image`;
