@@ -2,7 +2,6 @@ import { expect, test, type Page } from '@playwright/test';
 
 const onTheGarment = (page: Page) => page.getByRole('region', { name: 'On the garment' });
 const price = (page: Page) => page.getByRole('region', { name: 'Your price' });
-const addPicture = (page: Page) => page.getByRole('group').filter({ has: page.getByText('Add your own picture', { exact: true }) });
 
 /** A child's sunshine: a filled circle, rays as strokes, and a script that must never reach the page. */
 const sunshine = Buffer.from(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 120 120" onload="document.title='pwned'">
@@ -79,4 +78,20 @@ test('when a parent matches a colour of their own for a name, then the nearest t
   await expect(name.getByRole('radio', { name: threadName })).toBeChecked();
   await expect(name.getByRole('group', { name: `Thread colour: ${threadName}` })).toBeVisible();
   await expect(price(page).getByRole('cell', { name: /^Lettering “Ada”/ })).toBeVisible();
+});
+
+test('when a border goes round the bishop dress’s curved hem, then its repeats follow the curve, and one more or fewer says what it would do', async ({ page }) => {
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.goto('/design/bishop-dress');
+  await page.getByText('Add a border', { exact: true }).click();
+  await page.getByRole('radio', { name: /Daisy and leaf chain/ }).check({ force: true });
+  await page.getByRole('button', { name: 'Add this border' }).click();
+  const border = onTheGarment(page).getByRole('listitem').filter({ hasText: 'Border: Daisy and leaf chain' });
+  // The trade's worked case (common practice, no source): 4 × 173 mm round the 692 mm hem; 5 would be 76.9 %, below 90 %.
+  await expect(border.getByRole('button', { name: 'One fewer (3)' })).toBeDisabled();
+  await expect(border).toContainText('5 repeats would need 76.9 %');
+  await expect(border.getByRole('button', { name: 'One more (5)' })).toBeDisabled();
+  await page.getByRole('group', { name: /^The bishop dress in size/ }).scrollIntoViewIfNeeded();
+  await page.screenshot({ path: 'test-results/screens/border-on-curved-hem-phone.png' });
+  expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
 });

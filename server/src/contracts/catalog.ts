@@ -10,6 +10,11 @@ export const placementZone = z.object({
   heightMm: z.number(),
   /** Hem zones: the border's centre line above the hem edge, mm. */
   hemOffsetMm: z.number().optional(),
+  /**
+   * Hem zones whose hem is drawn curved (the front of a full skirt seen from the front): how far the ends of the
+   * hem edge rise above its middle, which is the zone's bottom, mm. The curve is a parabola across the zone.
+   */
+  hemCurveMm: z.number().optional(),
 });
 export type PlacementZoneSummary = z.infer<typeof placementZone>;
 

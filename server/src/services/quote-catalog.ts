@@ -25,6 +25,8 @@ export interface PlacementZone {
   heightMm: number;
   /** Hem zones: the border's centre line above the hem edge, mm. */
   hemOffsetMm?: number;
+  /** Hem zones drawn curved: how far the hem edge's ends rise above its middle (the zone's bottom), mm. */
+  hemCurveMm?: number;
 }
 
 export interface CatalogSize {

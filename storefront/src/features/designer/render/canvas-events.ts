@@ -16,7 +16,7 @@ export function translateCanvasEvents(canvas: Canvas, sync: SceneSync, viewOf: (
     if (id === undefined) return undefined;
     const view = viewOf();
     const centre = object.getCenterPoint();
-    return { id, centerXMm: toMm(view, px(centre.x)), centerYMm: toMm(view, px(centre.y)) };
+    return { id, centerXMm: toMm(view, px(centre.x)), centerYMm: toMm(view, px(centre.y)) - sync.offsetYMmOf(id) };
   };
   const selected = (objects: FabricObject[] | undefined) => {
     if (!sync.isEchoing()) dispatch('select-placement', { id: sync.placementIdOf(objects?.[0]) ?? null });
