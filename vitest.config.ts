@@ -7,7 +7,7 @@ export default defineConfig({
   // The apps' aliases, so unit tests can import the designer's pure model as the apps do.
   resolve: { alias: { '@server': here('./server/src'), '@ui': here('./ui/src') } },
   test: {
-    include: ['tests/unit/**/*.test.ts', 'tests/api/**/*.test.ts'],
+    include: ['tests/unit/**/*.test.{ts,tsx}', 'tests/api/**/*.test.ts'],
     exclude: ['tests/e2e/**', 'node_modules/**'],
     // API test files share one test database; each file resets it, so files run one at a time.
     fileParallelism: false,

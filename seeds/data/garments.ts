@@ -102,7 +102,8 @@ export const garments: SeedGarment[] = [
     ageMonths: [6, 36],
     mockupFile: 'bishop-dress.svg',
     referenceSizeCode: '12m',
-    zones: [hem(40, 350, 380), { code: 'chest', label: 'Below the smocking', xMm: 180, yMm: 90, widthMm: 100, heightMm: 50 }],
+    // The full skirt is drawn from the front, so its hem curves: the ends rise 10 mm above the middle (bishop-dress.svg).
+    zones: [{ ...hem(40, 350, 380), hemCurveMm: 10 }, { code: 'chest', label: 'Below the smocking', xMm: 180, yMm: 90, widthMm: 100, heightMm: 50 }],
     sizes: [
       { id: 301, code: '6m', label: '6 months', hem: { frontMm: 346, circumferenceMm: 692 } },
       { id: 302, code: '12m', label: '12 months', hem: { frontMm: 380, circumferenceMm: 760 } },

@@ -22,5 +22,6 @@ export function scaleZones(zones: readonly PlacementZone[], scale: number): Plac
     yMm: round2(zone.yMm * scale),
     widthMm: round2(zone.widthMm * scale),
     heightMm: round2(zone.heightMm * scale),
+    ...(zone.hemCurveMm === undefined ? {} : { hemCurveMm: round2(zone.hemCurveMm * scale) }),
   }));
 }

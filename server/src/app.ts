@@ -27,6 +27,8 @@ import { createMeRouter } from './routes/me.ts';
 import { createCatalogRouter } from './routes/catalog.ts';
 import { createQuotesRouter } from './routes/quotes.ts';
 import { createDesignsRouter } from './routes/designs.ts';
+import { createArtworkRouter } from './routes/artwork.ts';
+import { createArtworkService } from './services/artwork-service.ts';
 import { createPaymentWebhookRouter } from './routes/payment-webhooks.ts';
 import { createOrdersRouter } from './routes/orders.ts';
 import { createAdminOverviewRouter } from './routes/admin/overview.ts';
@@ -123,7 +125,8 @@ export function createApp(deps: AppDeps): Express {
   });
 
   app.get('/api/health', (_req, res) => res.json({ ok: true }));
-  app.use('/api/auth', createAuthRouter({ log: deps.log }));
+  const artwork = createArtworkService({ db, now: deps.now });
+  app.use('/api/auth', createAuthRouter({ log: deps.log, claimArtwork: artwork.claim }));
   app.use('/api/me', createMeRouter());
   app.use('/api/catalog', createCatalogRouter({ db }));
   // One quote service, so its font loader parses each font once: saving a design prices it too.
@@ -135,6 +138,7 @@ export function createApp(deps: AppDeps): Express {
     checkout: createCheckoutService({ db, stripe: deps.stripe, mailer: deps.mailer, storedQuotes, appOrigin: config.appOrigin, now: deps.now }),
     customerOrders: createCustomerOrderService({ db, mailer: deps.mailer, appOrigin: config.appOrigin, now: deps.now }),
   }));
+  app.use('/api/artwork', createArtworkRouter({ artwork, uploadMaxBytes: config.uploadMaxBytes }));
   app.use('/api/admin', requireRole('staff', 'owner'));
   app.use('/api/admin/overview', createAdminOverviewRouter({ overview: createOverviewService({ db, now: deps.now }) }));
   app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));

@@ -86,7 +86,7 @@ describe('POST /api/quotes/preview', () => {
 
   it('when a seeded design is priced again, then the server quotes what the seeds stored for it', async () => {
     const stored = await harness.db('quotes as q').join('designs as d', 'd.id', 'q.design_id').select('q.*', 'd.garment_id', 'd.garment_size_id', 'd.fabric_colour_id', 'd.document');
-    // Artwork uploads are not in the server yet, so the one design with the customer's drawing is left out.
+    // Only its owner may price the design with the customer's drawing, so it is left out here (see artwork.test.ts).
     const priced = stored.filter((quote) => !quote.document.placements.some((placement: DesignPlacement) => placement.kind === 'artwork'));
     expect(priced.length).toBeGreaterThanOrEqual(10);
     for (const quote of priced) {
@@ -162,10 +162,10 @@ describe('POST /api/quotes/preview', () => {
     expect(Object.keys(res.body.error.fields)).toEqual(['document.placements.0.count']);
   });
 
-  it('when the design has the customer’s own artwork, then it says uploads are coming soon', async () => {
+  it('when a visitor prices someone else’s artwork upload, then it is not available to them', async () => {
     const artwork: DesignPlacement = { id: 'sun', kind: 'artwork', zone: 'chest', centerXMm: 200, centerYMm: 100, rotationDeg: 0, artworkUploadId: 1, widthMm: 56 };
     const res = await preview({ ...bishopWithDaisies, document: { version: 1, placements: [artwork] } }).expect(400);
-    expect(res.body.error.message).toBe('Uploading your own artwork is coming soon.');
+    expect(res.body.error.fields).toEqual({ 'document.placements.0.artworkUploadId': 'That artwork upload is not available; upload it again.' });
   });
 
   it('when the studio has no published price list, then it is a conflict, not a 500', async () => {

@@ -10,6 +10,11 @@ export const placementZone = z.object({
   heightMm: z.number(),
   /** Hem zones: the border's centre line above the hem edge, mm. */
   hemOffsetMm: z.number().optional(),
+  /**
+   * Hem zones whose hem is drawn curved (the front of a full skirt seen from the front): how far the ends of the
+   * hem edge rise above its middle, which is the zone's bottom, mm. The curve is a parabola across the zone.
+   */
+  hemCurveMm: z.number().optional(),
 });
 export type PlacementZoneSummary = z.infer<typeof placementZone>;
 
@@ -85,3 +90,8 @@ export const fontListResponse = z.object({ fonts: z.array(letteringFont) });
 export const threadColour = z.object({ code: z.string(), name: z.string(), hex: z.string() });
 export type ThreadColourSummary = z.infer<typeof threadColour>;
 export const threadListResponse = z.object({ threads: z.array(threadColour) });
+
+/** A hoop the studio stitches with; the sewing field is the area the machine reaches, mm. */
+export const hoopSummary = z.object({ slug: z.string(), name: z.string(), fieldWidthMm: z.number(), fieldHeightMm: z.number() });
+export type HoopSummary = z.infer<typeof hoopSummary>;
+export const hoopListResponse = z.object({ hoops: z.array(hoopSummary) });

@@ -77,6 +77,11 @@ const figuredPlacement = z.object({
   /** Stitched size, mm: a border's whole length along the hem. */
   widthMm: z.number(),
   heightMm: z.number(),
+  /**
+   * True for a picture the studio has yet to digitize: its stitches are not known, so the price is the minimum and
+   * the setup fee, and the studio confirms it after digitizing. Left out otherwise.
+   */
+  isPriceProvisional: z.boolean().optional(),
 });
 
 export const quotePreviewResponse = z.object({

@@ -18,6 +18,11 @@ export interface QuotePlacement {
   colorChanges: number;
   /** The customer supplied the artwork, so the one-off setup fee applies. */
   hasCustomerArtwork: boolean;
+  /**
+   * The stitches are not known yet (a picture the studio still has to digitize): the line charges the minimum and
+   * says so instead of quoting a count.
+   */
+  isStitchCountPending?: boolean;
 }
 
 export interface QuoteInput {
@@ -101,7 +106,8 @@ export function priceQuote(input: QuoteInput): EngineResult<Quote> {
     const stitchMilliCents = BigInt(placement.stitches) * BigInt(rate);
     const perGarment = stitchMilliCents > BigInt(minimum) * 1000n ? stitchMilliCents : BigInt(minimum) * 1000n;
     const cents = divideRoundHalfUp(perGarment * qty, 1000n);
-    const label = `${placement.label}: ${formatCount(placement.stitches, 'stitch', 'stitches')}${per}`;
+    const stitches = placement.isStitchCountPending ? 'minimum charge until the studio counts the stitches' : formatCount(placement.stitches, 'stitch', 'stitches');
+    const label = `${placement.label}: ${stitches}${per}`;
     lines.push({ code: placement.kind, label, cents, placementId: placement.id });
     workCents += cents;
   }
@@ -153,6 +159,7 @@ function isValidPlacement(placement: unknown): placement is QuotePlacement {
     isWholeNumber(placement.stitches) &&
     isWholeNumber(placement.hoopings, 1) &&
     isWholeNumber(placement.colorChanges) &&
-    typeof placement.hasCustomerArtwork === 'boolean'
+    typeof placement.hasCustomerArtwork === 'boolean' &&
+    (placement.isStitchCountPending === undefined || typeof placement.isStitchCountPending === 'boolean')
   );
 }

@@ -2,7 +2,7 @@ import { Router } from 'express';
 import passport from 'passport';
 import { AuthorizationError, InternalOAuthError, TokenError } from 'passport-oauth2';
 import { z } from 'zod';
-import { returnToPath } from '../contracts/users.ts';
+import { returnToPath, type CurrentUser } from '../contracts/users.ts';
 import { validate } from '../middleware/validate.ts';
 
 declare module 'express-session' {
@@ -25,8 +25,11 @@ function problemMessage(info: unknown): string {
   return refusal?.kind && refusal.message ? refusal.message : unfinished;
 }
 
-/** Sign-in with Google (or the local stand-in), and sign-out. */
-export function createAuthRouter(deps: { log: (line: string) => void }): Router {
+/**
+ * Sign-in with Google (or the local stand-in), and sign-out. `claimArtwork` hands what a visitor uploaded before
+ * signing in to their account.
+ */
+export function createAuthRouter(deps: { log: (line: string) => void; claimArtwork: (sessionKey: string, userId: number) => Promise<void> }): Router {
   const router = Router();
 
   router.get('/google', validate(startQuery, 'query'), (req, res, next) => {
@@ -46,8 +49,13 @@ export function createAuthRouter(deps: { log: (line: string) => void }): Router 
       }
       if (error) return next(error);
       const returnTo = req.session.returnTo ?? '/';
+      const { artworkSessionKey } = req.session;
       if (!user) return signInProblem(problemMessage(info));
-      req.logIn(user, (loginError) => (loginError ? next(loginError) : res.redirect(returnTo)));
+      req.logIn(user, (loginError) => {
+        if (loginError) return next(loginError);
+        if (!artworkSessionKey) return res.redirect(returnTo);
+        deps.claimArtwork(artworkSessionKey, (user as CurrentUser).id).then(() => res.redirect(returnTo), next);
+      });
     })(req, res, next);
   });
 

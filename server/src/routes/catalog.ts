@@ -5,7 +5,8 @@ import { listActiveGarments } from '../db/repos/garment-repo.ts';
 import { listActiveMotifs } from '../db/repos/motif-repo.ts';
 import { listActiveLetteringFonts } from '../db/repos/lettering-font-repo.ts';
 import { listActiveThreads } from '../db/repos/thread-repo.ts';
-import type { fontListResponse, GarmentListResponse, MotifListResponse, threadListResponse } from '../contracts/catalog.ts';
+import { listActiveHoops } from '../db/repos/hoop-repo.ts';
+import type { fontListResponse, GarmentListResponse, hoopListResponse, MotifListResponse, threadListResponse } from '../contracts/catalog.ts';
 
 /** Public catalogue: what a visitor can choose before signing in. */
 export function createCatalogRouter(deps: { db: Db }): Router {
@@ -24,6 +25,10 @@ export function createCatalogRouter(deps: { db: Db }): Router {
   });
   router.get('/threads', async (_req, res) => {
     const body: z.infer<typeof threadListResponse> = { threads: await listActiveThreads(deps.db) };
+    res.json(body);
+  });
+  router.get('/hoops', async (_req, res) => {
+    const body: z.infer<typeof hoopListResponse> = { hoops: await listActiveHoops(deps.db) };
     res.json(body);
   });
   return router;

@@ -1,5 +1,6 @@
 import { Router, type Request } from 'express';
 import type { z } from 'zod';
+import { artworkOwnerOf } from '../auth/artwork-owner.ts';
 import { quotePreviewRequest } from '../contracts/quotes.ts';
 import { createQuoteRequest, quoteIdParams } from '../contracts/stored-quotes.ts';
 import { currentUserOf } from '../auth/roles.ts';
@@ -24,7 +25,7 @@ const viewerOf = (req: Request) => ({ customerId: currentUserOf(req)?.id ?? null
 export function createQuotesRouter(deps: { quotes: QuoteService; storedQuotes: StoredQuoteService }): Router {
   const router = Router();
   router.post('/preview', validate(quotePreviewRequest), async (req, res) => {
-    sendResult(res, await deps.quotes.preview(req.body));
+    sendResult(res, await deps.quotes.preview(req.body, artworkOwnerOf(req)));
   });
   router.post('/', validate(createQuoteRequest), async (req, res) => {
     const viewer = viewerOf(req);

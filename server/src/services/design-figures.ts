@@ -86,6 +86,7 @@ export function figureDesign(catalog: QuoteCatalog, document: DesignDocument): R
       hoopings: figures.hoopings,
       colorChanges: figures.estimate.colorChanges,
       hasCustomerArtwork: figures.hasCustomerArtwork,
+      ...(figures.isPriceProvisional ? { isStitchCountPending: true } : {}),
     })),
     totals,
     runMinutes: { totalMinutes: runMinutes.totalMinutes, items: runMinutes.items },

@@ -41,7 +41,7 @@ export function createDesignService(deps: { db: Db; quotes: QuoteService; now: (
 
   /** Saves a new design once the server can price it; the answer is the design as stored. */
   async function create(customerId: number, request: SaveDesignRequest): Promise<Result<SavedDesignResponse>> {
-    const priceable = await checkPriceable(request);
+    const priceable = await checkPriceable(customerId, request);
     if (!priceable.ok) return priceable;
     const id = await insertDesign(db, customerId, toWrite(request, deps.now()));
     return get(customerId, id);
@@ -53,7 +53,7 @@ export function createDesignService(deps: { db: Db; quotes: QuoteService; now: (
    * an order stitches is kept as it was ordered: the studio proofs and makes exactly that.
    */
   async function update(customerId: number, id: number, request: SaveDesignRequest): Promise<Result<SavedDesignResponse>> {
-    const priceable = await checkPriceable(request);
+    const priceable = await checkPriceable(customerId, request);
     if (!priceable.ok) return priceable;
     const updated = await db.transaction(async (trx): Promise<Result<void>> => {
       if (!(await lockOwnedDesign(trx, { id, customerId }))) return noSuchDesign(id);
@@ -85,7 +85,7 @@ export function createDesignService(deps: { db: Db; quotes: QuoteService; now: (
    * size or colour that is not on offer; here those are fields of the request, so they answer 400 with the same
    * field messages. The engine's refusals are already `invalid`, keyed by the same `document.…` paths.
    */
-  async function checkPriceable(request: SaveDesignRequest): Promise<Result<void>> {
+  async function checkPriceable(customerId: number, request: SaveDesignRequest): Promise<Result<void>> {
     const quoted = await deps.quotes.preview({
       garmentId: request.garmentId,
       sizeId: request.sizeId,
@@ -93,7 +93,7 @@ export function createDesignService(deps: { db: Db; quotes: QuoteService; now: (
       quantity: 1,
       isRush: false,
       document: request.document,
-    });
+    }, { userId: customerId });
     if (quoted.ok) return ok(undefined);
     if (quoted.error.kind === 'not-found') return failure('invalid', quoted.error.message, quoted.error.fields);
     return quoted;

@@ -44,6 +44,7 @@ export function figureBorder(catalog: QuoteCatalog, placement: BorderPlacement, 
       estimate,
       hoopings,
       hasCustomerArtwork: false,
+      isPriceProvisional: false,
       border: {
         count: fit.count,
         // Two places, as the design document records it: 96.11 for the 692 mm loop of a 180 mm motif.

@@ -55,9 +55,28 @@ function figureArtwork(catalog: QuoteCatalog, placement: ArtworkPlacement, path:
   if (!catalog.artworkUploads) return refuse(path, 'Uploading your own artwork is coming soon.');
   const upload = catalog.artworkUploads.get(placement.artworkUploadId);
   if (!upload) return refuse(`${path}.artworkUploadId`, 'That artwork upload is not available; upload it again.');
+  const wording = { label: 'Your artwork', what: `Your artwork at ${placement.widthMm} mm wide`, field: `${path}.widthMm` };
+  if ('rasterSizePx' in upload) return oneHooping(catalog, placement, rasterPlaceholder(upload.rasterSizePx, placement.widthMm), wording, { isPriceProvisional: true });
   const estimate = estimateStitches({ kind: 'svg', svgText: upload.svgText, size: { widthMm: placement.widthMm } });
   if (!estimate.ok) return refuse(`${path}.artworkUploadId`, `Your artwork can't be estimated: ${estimate.reason}`);
-  return oneHooping(catalog, placement, estimate, { label: 'Your artwork', what: `Your artwork at ${placement.widthMm} mm wide`, field: `${path}.widthMm` });
+  return oneHooping(catalog, placement, estimate, wording);
+}
+
+/**
+ * A photo or scan has no lines to count stitches from: the studio digitizes it by hand first. Until then it is
+ * its size on the garment, with no stitches; the quote charges the placement's minimum and the setup fee, and
+ * says the studio will confirm the price.
+ */
+function rasterPlaceholder(sizePx: { widthPx: number; heightPx: number }, widthMm: number): StitchEstimate {
+  return {
+    stitches: 0,
+    colorChanges: 0,
+    trims: 0,
+    byType: { run: 0, satin: 0, fill: 0, underlay: 0 },
+    widthMm,
+    heightMm: (widthMm * sizePx.heightPx) / sizePx.widthPx,
+    notes: ['A picture is digitized by the studio before its stitches are known.'],
+  };
 }
 
 function oneHooping(
@@ -65,6 +84,7 @@ function oneHooping(
   placement: ItemPlacement,
   estimate: StitchEstimate,
   wording: { label: string; what: string; field: string },
+  pricing: { isPriceProvisional: boolean } = { isPriceProvisional: false },
 ): PlacementOutcome {
   const tooBig = checkFitsAHoop(catalog.hoops, wording.what, estimate, wording.field);
   if (tooBig) return tooBig;
@@ -75,6 +95,7 @@ function oneHooping(
     estimate,
     hoopings: 1,
     hasCustomerArtwork: placement.kind === 'artwork',
+    isPriceProvisional: pricing.isPriceProvisional,
   };
   return { ok: true, figures };
 }

@@ -11,6 +11,8 @@ export interface PlacementFigures {
   estimate: StitchEstimate;
   hoopings: number;
   hasCustomerArtwork: boolean;
+  /** The stitches are not known until the studio digitizes the customer's picture, so the price is provisional. */
+  isPriceProvisional: boolean;
   /** Borders only: the fit and the hoop it is stitched in. */
   border?: {
     count: number;

@@ -25,6 +25,8 @@ export interface PlacementZone {
   heightMm: number;
   /** Hem zones: the border's centre line above the hem edge, mm. */
   hemOffsetMm?: number;
+  /** Hem zones drawn curved: how far the hem edge's ends rise above its middle (the zone's bottom), mm. */
+  hemCurveMm?: number;
 }
 
 export interface CatalogSize {
@@ -85,8 +87,11 @@ export interface QuoteCatalog {
   hoops: readonly CatalogHoop[];
   machine: ShopMachine;
   /**
-   * Sanitized SVG of customer uploads by upload id. Absent where uploads are not supported yet (the server's
-   * preview), so artwork placements are refused there; the seeds price their one upload through it.
+   * The customer's uploads by id, as far as their owner may use them: an SVG's sanitized text, from which the
+   * engine counts stitches, or a raster's pixel size, which only the studio can digitize. Absent where uploads
+   * are not supported, so artwork placements are refused there; the seeds price their one upload through it.
    */
-  artworkUploads?: ReadonlyMap<number, { svgText: string }>;
+  artworkUploads?: ReadonlyMap<number, CatalogArtwork>;
 }
+
+export type CatalogArtwork = { svgText: string } | { rasterSizePx: { widthPx: number; heightPx: number } };

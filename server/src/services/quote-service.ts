@@ -1,4 +1,5 @@
 import type { Db } from '../db/knex.ts';
+import { loadOwnedArtworkForQuote, type ArtworkOwner } from '../db/repos/artwork-repo.ts';
 import { loadQuoteCatalog, type QuoteCatalogRecord } from '../db/repos/quote-catalog-repo.ts';
 import { priceQuote } from '../engine/index.ts';
 import type { LetteringFontLoader } from '../integrations/lettering-fonts.ts';
@@ -6,7 +7,7 @@ import type { DesignDocument } from '../contracts/designs.ts';
 import type { QuotePreviewRequest, QuotePreviewResponse } from '../contracts/quotes.ts';
 import { failure, ok, type Result } from '../contracts/result.ts';
 import { figureDesign, type DesignFigures } from './design-figures.ts';
-import type { QuoteCatalog } from './quote-catalog.ts';
+import type { CatalogArtwork, QuoteCatalog } from './quote-catalog.ts';
 
 /** A priced design: the preview's answer, the engine's figures and the catalogue rows it was priced from. */
 export interface PricedDesign {
@@ -17,16 +18,24 @@ export interface PricedDesign {
 
 /** Quotes priced by the server from the published price list; the client's own figures are never used. */
 export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader }) {
-  /** Prices a design for one garment size and quantity, with what storing the quote needs. Reads only. */
-  async function price(request: QuotePreviewRequest): Promise<Result<PricedDesign>> {
-    const record = await loadQuoteCatalog(deps.db, {
-      garmentId: request.garmentId,
-      sizeId: request.sizeId,
-      colourId: request.colourId,
-      ...slugsNamedIn(request.document),
-    });
+  /**
+   * Prices a design for one garment size and quantity, with what storing the quote needs. Reads only. Artwork
+   * uploads count only when `owner` may see them; anyone else's read as not available.
+   */
+  async function price(request: QuotePreviewRequest, owner?: ArtworkOwner): Promise<Result<PricedDesign>> {
+    const { motifSlugs, fontSlugs, artworkIds } = namedIn(request.document);
+    const [record, uploads] = await Promise.all([
+      loadQuoteCatalog(deps.db, { garmentId: request.garmentId, sizeId: request.sizeId, colourId: request.colourId, motifSlugs, fontSlugs }),
+      owner ? loadOwnedArtworkForQuote(deps.db, owner, artworkIds) : [],
+    ]);
     if (!record.ok) return record;
-    const figured = figureDesign(toQuoteCatalog(record.value, deps.fonts), request.document);
+    const artworkUploads = new Map(
+      uploads.map((upload): [number, CatalogArtwork] => [
+        upload.id,
+        upload.svgText !== null ? { svgText: upload.svgText } : { rasterSizePx: { widthPx: upload.widthPx, heightPx: upload.heightPx } },
+      ]),
+    );
+    const figured = figureDesign(toQuoteCatalog(record.value, deps.fonts, artworkUploads), request.document);
     if (!figured.ok) return figured;
     const figures = figured.value;
     const { garment, size, ruleSet } = record.value;
@@ -62,6 +71,7 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader })
         }),
         widthMm: placement.estimate.widthMm,
         heightMm: placement.estimate.heightMm,
+        ...(placement.isPriceProvisional ? { isPriceProvisional: true } : {}),
       })),
       runMinutes: figures.runMinutes,
       stabilizer: {
@@ -76,8 +86,8 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader })
   }
 
   /** Prices a design without saving it, for one garment size and quantity. */
-  async function preview(request: QuotePreviewRequest): Promise<Result<QuotePreviewResponse>> {
-    const priced = await price(request);
+  async function preview(request: QuotePreviewRequest, owner?: ArtworkOwner): Promise<Result<QuotePreviewResponse>> {
+    const priced = await price(request, owner);
     return priced.ok ? ok(priced.value.response) : priced;
   }
 
@@ -92,19 +102,31 @@ export function quoteSummaryOf(quote: QuotePreviewResponse['quote']): QuotePrevi
   return { lines, subtotalCents, taxCents, totalCents, currency, ruleSetVersion };
 }
 
-/** The motifs and fonts a design names, so only those rows are read. */
-export function slugsNamedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: string[] } {
+/** The motifs, fonts and uploads a design names, so only those rows are read. */
+function namedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: string[]; artworkIds: number[] } {
   const motifSlugs = new Set<string>();
   const fontSlugs = new Set<string>();
+  const artworkIds = new Set<number>();
   for (const placement of document.placements) {
     if (placement.kind === 'border' || placement.kind === 'motif') motifSlugs.add(placement.motif);
     if (placement.kind === 'lettering') fontSlugs.add(placement.font);
+    if (placement.kind === 'artwork') artworkIds.add(placement.artworkUploadId);
   }
-  return { motifSlugs: [...motifSlugs], fontSlugs: [...fontSlugs] };
+  return { motifSlugs: [...motifSlugs], fontSlugs: [...fontSlugs], artworkIds: [...artworkIds] };
 }
 
-/** The catalogue as `figureDesign` takes it; artwork uploads are left out until the server stores them. */
-export function toQuoteCatalog(record: QuoteCatalogRecord, fonts: LetteringFontLoader): QuoteCatalog {
+/** The motifs and fonts a design names, so only those catalogue rows are read. */
+export function slugsNamedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: string[] } {
+  const { motifSlugs, fontSlugs } = namedIn(document);
+  return { motifSlugs, fontSlugs };
+}
+
+/** The catalogue as `figureDesign` takes it, with the uploads the requester may use. */
+export function toQuoteCatalog(
+  record: QuoteCatalogRecord,
+  fonts: LetteringFontLoader,
+  artworkUploads: ReadonlyMap<number, CatalogArtwork> = new Map(),
+): QuoteCatalog {
   return {
     garment: record.garment,
     size: record.size,
@@ -114,5 +136,6 @@ export function toQuoteCatalog(record: QuoteCatalogRecord, fonts: LetteringFontL
     ),
     hoops: record.hoops,
     machine: record.machine,
+    artworkUploads,
   };
 }

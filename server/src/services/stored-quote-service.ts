@@ -66,7 +66,8 @@ export function createStoredQuoteService(deps: { db: Db; quotes: QuoteService; n
   }
 
   async function store(request: QuotePreviewRequest, owner: { designId: number | null; customerId: number | null }): Promise<Result<StoredQuote>> {
-    const priced = await deps.quotes.price(request);
+    // The customer's own uploads price with the design; a visitor's stored quote prices catalogue items only.
+    const priced = await deps.quotes.price(request, owner.customerId === null ? undefined : { userId: owner.customerId });
     if (!priced.ok) return priced;
     const { response, figures, catalog } = priced.value;
     const { quote, ...shown } = response;

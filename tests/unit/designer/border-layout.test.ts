@@ -58,3 +58,37 @@ describe('border layout', () => {
     expect(layout).toEqual({ ok: false, reason: 'This border is no longer offered; choose another.', bandHeightMm: 0 });
   });
 });
+
+describe('border layout on a curved hem', () => {
+  // The 6-month bishop dress's hem zone (315.79 mm wide) with its ends rising 10 mm above the middle.
+  const curved = {
+    ...setting,
+    garment: {
+      ...setting.garment,
+      sizes: setting.garment.sizes.map((size) => ({ ...size, zones: size.zones.map((candidate) => (candidate.code === 'hem' ? { ...candidate, hemCurveMm: 10 } : candidate)) })),
+    },
+  };
+
+  it('when repeats go along a hem that curves, then each sits its offset above the edge beneath it, turned to its slope', () => {
+    const layout = layoutBorder(curved, 301, daisy());
+    if (!layout.ok) throw new Error(layout.reason);
+    const hem = zone(0, 'hem');
+    const halfWidthMm = hem.widthMm / 2;
+    const [left, right] = layout.repeats;
+    // At u = ±86.5 / 157.9 the parabola rises 10·u² and slopes at atan(∓2·10·u / 157.9).
+    const u = 86.5 / halfWidthMm;
+    expect(left!.centerYMm).toBeCloseTo(hem.yMm + hem.heightMm - 44.45 - 10 * u * u, 9);
+    expect(right!.centerYMm).toBeCloseTo(left!.centerYMm, 9);
+    expect(right!.rotationDeg).toBeCloseTo((Math.atan((-2 * 10 * u) / halfWidthMm) * 180) / Math.PI, 9);
+    expect(left!.rotationDeg).toBeCloseTo(-right!.rotationDeg, 9);
+    expect(right!.rotationDeg).toBeLessThan(0);
+    // The band covers the repeats and the rise, so the border is kept inside the zone at the ends too.
+    expect(layout.band.heightMm).toBeCloseTo(40 * (173 / 180) + 10, 9);
+  });
+
+  it('when the hem is straight, then the repeats are level and upright', () => {
+    const layout = layoutBorder(setting, 301, daisy());
+    if (!layout.ok) throw new Error(layout.reason);
+    expect(layout.repeats.map((repeat) => repeat.rotationDeg)).toEqual([0, 0]);
+  });
+});

@@ -55,6 +55,16 @@ export const setting: DesignSetting = {
   motifs: [daisyChain, sittingBunny],
   fonts: [breezyScript],
   measureLettering: ({ text, letterHeightMm }) => ({ widthMm: [...text].length * letterHeightMm * 0.6, heightMm: letterHeightMm * 1.3 }),
+  // The demo studio's largest two hoops (seeds/data/hoops.ts).
+  hoops: [
+    { slug: 'oblong-120x180', name: 'Oblong 120 × 180 mm (5 × 7 in)', fieldWidthMm: 120, fieldHeightMm: 180 },
+    { slug: 'large-200x300', name: 'Large 200 × 300 mm (8 × 12 in)', fieldWidthMm: 200, fieldHeightMm: 300 },
+  ],
+  // A drawing twice as wide as it is tall, and a square scan.
+  artworks: [
+    { id: 41, kind: 'svg', originalName: 'sunshine.svg', byteSize: 900, widthPx: 200, heightPx: 100, imageUrl: '/api/artwork/41/image', createdAt: '2026-12-01T09:00:00.000Z' },
+    { id: 42, kind: 'raster', originalName: 'scan.png', byteSize: 5000, widthPx: 300, heightPx: 300, imageUrl: '/api/artwork/42/image', createdAt: '2026-12-01T09:05:00.000Z' },
+  ],
 };
 
 export const sixMonths = bishopDress.sizes[0]!;

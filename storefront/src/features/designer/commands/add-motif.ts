@@ -29,7 +29,7 @@ export const addMotif: EditCommand<AddMotifArgs, 'add-motif'> = {
       ...centreOfZone(zone),
       rotationDeg: 0,
       motif: motif.slug,
-      scalePct: clampMotifScale(motif, args.scalePct),
+      scalePct: clampMotifScale(motif, args.scalePct, setting.hoops),
       threads: motif.threadCodes,
     };
     return appendPlacement(state, settleItem(setting, state.sizeId, placement));

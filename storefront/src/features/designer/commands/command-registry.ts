@@ -3,6 +3,11 @@ import { preview, record, type DesignerHistory } from '../model/history.ts';
 import { addBorder } from './add-border.ts';
 import { addLettering } from './add-lettering.ts';
 import { addMotif } from './add-motif.ts';
+import { addArtwork } from './add-artwork.ts';
+import { updateArtwork } from './update-artwork.ts';
+import { rotatePlacement } from './rotate-placement.ts';
+import { centrePlacement } from './centre-placement.ts';
+import { setThreadColour } from './set-thread-colour.ts';
 import { changeSize } from './change-size.ts';
 import { matchesShortcut, type EditCommand, type HistoryCommand, type KeyPress } from './command.ts';
 import { dragPlacement } from './drag-placement.ts';
@@ -25,6 +30,11 @@ const commands = [
   updateLettering,
   addMotif,
   updateMotif,
+  addArtwork,
+  updateArtwork,
+  rotatePlacement,
+  centrePlacement,
+  setThreadColour,
   dragPlacement,
   movePlacement,
   nudgePlacement,

@@ -8,11 +8,13 @@ export interface UpdateBorderArgs {
   id: string;
   motif?: string;
   run?: BorderPlacement['run'];
+  /** Ask for this many repeats; the engine fits them or says why they don't fit. */
+  count?: number;
 }
 
 /**
- * Changes a border's motif or run. The repeat count, size and hoop a saved document recorded belong to the old
- * layout, so they are dropped and the engine fits the new one afresh.
+ * Changes a border's motif or run, or asks for a number of repeats. A new motif or run drops the count, size and
+ * hoop a saved document recorded, as they belong to the old layout, and the engine fits the new one afresh.
  */
 export const updateBorder: EditCommand<UpdateBorderArgs, 'update-border'> = {
   id: 'update-border',
@@ -24,7 +26,11 @@ export const updateBorder: EditCommand<UpdateBorderArgs, 'update-border'> = {
     const motif = motifOf(setting, args.motif ?? border.motif);
     if (!motif || motif.kind !== 'border') return state;
     const run = args.run ?? border.run;
-    if (motif.slug === border.motif && run === border.run) return state;
+    if (motif.slug === border.motif && run === border.run) {
+      if (args.count === undefined || args.count === border.count || !Number.isInteger(args.count) || args.count < 1) return state;
+      const { scalePct, hoop, ...kept } = border;
+      return withSettled(setting, state, { ...kept, count: args.count });
+    }
     const { count, scalePct, hoop, ...kept } = border;
     const threads = motif.slug === border.motif ? border.threads : motif.threadCodes;
     return withSettled(setting, state, { ...kept, motif: motif.slug, run, threads });

@@ -9,7 +9,6 @@ export interface UpdateLetteringArgs {
   text?: string;
   font?: string;
   letterHeightMm?: number;
-  thread?: string;
   /** Moving to another zone starts from that zone's middle. */
   zone?: string;
 }
@@ -36,10 +35,9 @@ export const updateLettering: EditCommand<UpdateLetteringArgs, 'update-lettering
       text: args.text ?? lettering.text,
       font: font.slug,
       letterHeightMm: clampLetterHeight(font, args.letterHeightMm ?? lettering.letterHeightMm),
-      thread: args.thread ?? lettering.thread,
     };
     const isUnchanged =
-      !zone && next.text === lettering.text && next.font === lettering.font && next.letterHeightMm === lettering.letterHeightMm && next.thread === lettering.thread;
+      !zone && next.text === lettering.text && next.font === lettering.font && next.letterHeightMm === lettering.letterHeightMm;
     return isUnchanged ? state : withSettled(setting, state, next);
   },
 };

@@ -18,7 +18,7 @@ export function AddMotifForm({ setting, state, dispatch }: { setting: DesignSett
   const [zone, setZone] = useState(() => defaultItemZone(size)?.code ?? '');
   const motif = motifOf(setting, slug);
   if (!motif) return <EmptyState title="No single motifs are on offer just now." />;
-  const scale = clampMotifScale(motif, scalePct);
+  const scale = clampMotifScale(motif, scalePct, setting.hoops);
   const submit = (event: FormEvent) => {
     event.preventDefault();
     dispatch('add-motif', { motif: motif.slug, scalePct: scale, zone });
@@ -33,7 +33,7 @@ export function AddMotifForm({ setting, state, dispatch }: { setting: DesignSett
         onChange={setSlug}
         detailOf={(candidate) => `${candidate.colourCount} thread colour${candidate.colourCount === 1 ? '' : 's'}`}
       />
-      <MotifSizeField motif={motif} value={scale} onChange={setScalePct} />
+      <MotifSizeField motif={motif} hoops={setting.hoops} value={scale} onChange={setScalePct} />
       <ZoneChoice zones={size.zones} value={zone} onChange={setZone} />
       <Button type="submit" disabled={!hasRoomForPlacement(state)}>{commandOf('add-motif').label}</Button>
     </form>

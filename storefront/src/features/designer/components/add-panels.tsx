@@ -6,8 +6,9 @@ import { hasRoomForPlacement, MAX_PLACEMENTS, type DesignerState } from '../mode
 import { AddBorderForm } from './add-border-form.tsx';
 import { AddMotifForm } from './add-motif-form.tsx';
 import { AddNameForm } from './add-name-form.tsx';
+import { AddArtworkForm } from './add-artwork-form.tsx';
 
-type Way = 'border' | 'name' | 'motif';
+type Way = 'border' | 'name' | 'motif' | 'artwork';
 
 function Drawer({ title, hint, isOpen, onToggle, children }: { title: string; hint: string; isOpen: boolean; onToggle: (isOpen: boolean) => void; children: ReactNode }) {
   return (
@@ -25,7 +26,7 @@ function Drawer({ title, hint, isOpen, onToggle, children }: { title: string; hi
 }
 
 /**
- * The three ways to add to the garment, each folded away until wanted so the page stays calm on a phone. Adding
+ * The ways to add to the garment, each folded away until wanted so the page stays calm on a phone. Adding
  * folds the way away again: the new item opens under “On the garment”, where it is changed from then on.
  */
 export function AddPanels({
@@ -62,6 +63,9 @@ export function AddPanels({
       </Drawer>
       <Drawer title="Add a motif" hint="A single picture, such as a bunny or a lamb" {...drawer('motif')}>
         <AddMotifForm setting={setting} state={state} dispatch={adding} />
+      </Drawer>
+      <Drawer title="Add your own picture" hint="A child's drawing, a scan or a photo" {...drawer('artwork')}>
+        <AddArtworkForm setting={setting} state={state} dispatch={adding} />
       </Drawer>
     </section>
   );

@@ -66,8 +66,9 @@ export function DesignerWorkspace({ garment, setting, threads, designer, saved, 
           {/* On a phone the full price is far below the garment, so its total rides along here. */}
           <div className="lg:hidden">{priceTotal}</div>
           <p id="canvas-help" className="text-sm text-walnut-500">
-            Drag a name or motif to move it; a border moves up and down. Arrow keys move the chosen item 1 mm (with
-            Shift, 10 mm), Delete removes it, and Ctrl or ⌘ + Z undoes.
+            Drag a name, motif or picture to move it (near the middle it settles on the centre line); a border moves
+            up and down, and a picture's corners resize it. Arrow keys move the chosen item 1 mm (with Shift, 10 mm),
+            R turns it 15° (Shift + R back), C centres it side to side, Delete removes it, and Ctrl or ⌘ + Z undoes.
           </p>
         </div>
         <div className="min-w-0 space-y-6">

@@ -10,7 +10,7 @@ import type { UpdateLetteringArgs } from '../commands/update-lettering.ts';
 import type { Dispatch } from '../commands/command-registry.ts';
 import { FontChoice } from './font-choice.tsx';
 import { LetterHeightField } from './letter-height-field.tsx';
-import { ThreadChoice } from './thread-choice.tsx';
+import { ThreadPicker } from './thread-picker.tsx';
 import { TooBigNote } from './too-big-note.tsx';
 import { ZoneChoice } from './zone-choice.tsx';
 
@@ -68,7 +68,7 @@ export function LetteringEditor({
       {isTooBig && zone && <TooBigNote zone={zone} advice="Try smaller letters or fewer words." />}
       <FontChoice name={`${lettering.id}-font`} fonts={setting.fonts} value={lettering.font} sample={lettering.text} onChange={(slug) => update({ font: slug })} />
       {font && <LetterHeightField font={font} value={lettering.letterHeightMm} onChange={(letterHeightMm) => update({ letterHeightMm })} />}
-      <ThreadChoice name={`${lettering.id}-thread`} threads={threads} value={lettering.thread} onChange={(thread) => update({ thread })} />
+      <ThreadPicker name={`${lettering.id}-thread`} legend="Thread colour" threads={threads} value={lettering.thread} onChange={(thread) => dispatch('set-thread-colour', { id: lettering.id, index: 0, thread })} />
       <ZoneChoice zones={size.zones} value={lettering.zone} onChange={(code) => update({ zone: code })} />
     </div>
   );

@@ -9,6 +9,8 @@ import { BorderEditor } from './border-editor.tsx';
 import { LetteringEditor } from './lettering-editor.tsx';
 import { ItemPosition } from './item-position.tsx';
 import { MotifEditor } from './motif-editor.tsx';
+import { ArtworkEditor } from './artwork-editor.tsx';
+import { RotationField } from './rotation-field.tsx';
 import { NudgePad } from './nudge-pad.tsx';
 
 interface ListProps {
@@ -22,12 +24,12 @@ function Editor({ placement, ...props }: ListProps & { placement: DesignPlacemen
   if (placement.kind === 'border') return <BorderEditor border={placement} {...props} />;
   if (placement.kind === 'lettering') return <LetteringEditor lettering={placement} {...props} />;
   if (placement.kind === 'motif') return <MotifEditor placement={placement} {...props} />;
-  return <p className="text-sm text-walnut-700">The studio sizes and places your artwork on the proof.</p>;
+  return <ArtworkEditor placement={placement} {...props} />;
 }
 
 /**
- * Everything on the garment, each with its own buttons, so the whole design can be made without the canvas: open
- * one to change it or move it step by step, or remove it.
+ * Everything on the garment, each with its own buttons, so the whole design can be made without the canvas or a
+ * mouse: open one to move it step by step or to its centre line, resize or turn it, choose its threads, or remove it.
  */
 export function PlacementList(props: ListProps) {
   const { setting, state, dispatch } = props;
@@ -67,9 +69,10 @@ export function PlacementList(props: ListProps) {
                 </div>
                 {isOpen && (
                   <div className="space-y-4 border-t border-linen-200 p-4">
-                    {placement.kind !== 'artwork' && <NudgePad id={placement.id} label={label} isBorder={placement.kind === 'border'} dispatch={dispatch} />}
+                    <NudgePad id={placement.id} label={label} isBorder={placement.kind === 'border'} dispatch={dispatch} />
                     {isItem(placement) && <ItemPosition setting={setting} state={state} item={placement} />}
                     <Editor placement={placement} {...props} />
+                    {isItem(placement) && <RotationField id={placement.id} label={label} rotationDeg={placement.rotationDeg} dispatch={dispatch} />}
                   </div>
                 )}
               </li>

@@ -1,11 +1,11 @@
 import type { ThreadColourSummary } from '@server/contracts/catalog.ts';
 
 /** The studio's thread palette as thumb-sized swatches in a radio group (arrow keys move between them). */
-export function ThreadChoice({ name, threads, value, onChange }: { name: string; threads: readonly ThreadColourSummary[]; value: string; onChange: (code: string) => void }) {
+export function ThreadChoice({ name, legend = 'Thread colour', threads, value, onChange }: { name: string; legend?: string; threads: readonly ThreadColourSummary[]; value: string; onChange: (code: string) => void }) {
   const chosen = threads.find((thread) => thread.code === value);
   return (
     <fieldset>
-      <legend className="text-sm font-medium">Thread colour{chosen ? `: ${chosen.name}` : ''}</legend>
+      <legend className="text-sm font-medium">{legend}{chosen ? `: ${chosen.name}` : ''}</legend>
       <div className="mt-2 flex flex-wrap gap-1.5">
         {threads.map((thread) => (
           <label key={thread.code} className="cursor-pointer" title={thread.name}>

@@ -1,7 +1,7 @@
 import type { BorderPlacement } from '@server/contracts/designs.ts';
 // Straight from its module: the engine's entry also registers colour spaces at load, which the designer does not need.
 import { fitMotifBorder, type BorderFit } from '@server/engine/fit-border.ts';
-import { layoutHemBorder, type BorderBand, type BorderRepeat } from '@server/engine/hem-border-layout.ts';
+import { hemCurve, layoutHemBorder, type BorderBand, type BorderRepeat } from '@server/engine/hem-border-layout.ts';
 import { HEM_ZONE, motifOf, sizeOf, zoneOf, type DesignSetting } from './design-setting.ts';
 
 export type { BorderBand, BorderRepeat };
@@ -14,7 +14,8 @@ export type BorderLayout =
 /**
  * Lays a border out with the engine's fitBorder, the same fit the server prices: the front panel as an open run, or
  * the whole hem as a closed loop of which the front half shows. The run is centred on the hem zone, and its centre
- * line sits `hemOffsetMm` above the hem edge (the zone's bottom).
+ * line sits `hemOffsetMm` above the hem edge (the zone's bottom). On a hem drawn curved, each repeat follows the
+ * curve: it sits `hemOffsetMm` above the edge beneath it, turned to the edge's slope there.
  */
 export function layoutBorder(setting: DesignSetting, sizeId: number, border: BorderPlacement): BorderLayout {
   const size = sizeOf(setting, sizeId);
@@ -27,7 +28,7 @@ export function layoutBorder(setting: DesignSetting, sizeId: number, border: Bor
     return { ok: false, reason: 'This garment has no hem to take a border.', bandHeightMm: motif.heightMm };
   }
   const fit = fitMotifBorder(motif, { runLengthMm, closed: isClosed, count: border.count });
-  if (!fit.ok) return { ok: false, reason: fit.reason, bandHeightMm: motif.heightMm };
+  if (!fit.ok) return { ok: false, reason: fit.reason, bandHeightMm: motif.heightMm + hemCurve(zone).totalRiseMm };
 
   const { band, repeats } = layoutHemBorder({ zone, fit, isClosed, runLengthMm, hemFrontMm: size.hemFrontMm, hemOffsetMm: border.hemOffsetMm, motifHeightMm: motif.heightMm });
   return { ok: true, fit, isClosed, runLengthMm, band, repeats };

@@ -1,4 +1,5 @@
-import type { GarmentSummary, LetteringFontSummary, MotifSummary, PlacementZoneSummary } from '@server/contracts/catalog.ts';
+import type { ArtworkUpload } from '@server/contracts/artwork.ts';
+import type { GarmentSummary, HoopSummary, LetteringFontSummary, MotifSummary, PlacementZoneSummary } from '@server/contracts/catalog.ts';
 
 type GarmentSize = GarmentSummary['sizes'][number];
 
@@ -16,6 +17,10 @@ export interface DesignSetting {
   motifs: readonly MotifSummary[];
   fonts: readonly LetteringFontSummary[];
   measureLettering: LetteringMeasure;
+  /** The studio's hoops: nothing single may be larger than the largest sewing field. Empty until they arrive. */
+  hoops: readonly HoopSummary[];
+  /** The customer's own uploads (theirs alone), which artwork placements refer to by id. */
+  artworks: readonly ArtworkUpload[];
 }
 
 /** The hem zone's code in the catalogue; a border always runs along it. */
@@ -40,3 +45,5 @@ export const fontOf = (setting: DesignSetting, slug: string) => setting.fonts.fi
 export function mockupSizeMm(garment: GarmentSummary, size: GarmentSize): ExtentMm {
   return { widthMm: garment.mockupWidthMm * size.mockupScale, heightMm: garment.mockupHeightMm * size.mockupScale };
 }
+
+export const artworkOf = (setting: DesignSetting, id: number) => setting.artworks.find((artwork) => artwork.id === id);

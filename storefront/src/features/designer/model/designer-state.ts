@@ -1,4 +1,4 @@
-import type { DesignDocument, DesignPlacement, LetteringPlacement, MotifPlacement } from '@server/contracts/designs.ts';
+import type { ArtworkPlacement, DesignDocument, DesignPlacement, LetteringPlacement, MotifPlacement } from '@server/contracts/designs.ts';
 
 /** Most placements the design document accepts (server/src/contracts/designs.ts). */
 export const MAX_PLACEMENTS = 12;
@@ -14,10 +14,10 @@ export interface DesignerState {
   selectedId: string | null;
 }
 
-/** Placements the customer moves freely inside a zone; borders follow the hem and move only up and down. */
-export type ItemPlacement = MotifPlacement | LetteringPlacement;
+/** Placements the customer moves and turns freely inside a zone; borders follow the hem and move only up and down. */
+export type ItemPlacement = MotifPlacement | LetteringPlacement | ArtworkPlacement;
 
-export const isItem = (placement: DesignPlacement): placement is ItemPlacement => placement.kind === 'motif' || placement.kind === 'lettering';
+export const isItem = (placement: DesignPlacement): placement is ItemPlacement => placement.kind !== 'border';
 
 export function createDesignerState(sizeId: number, colourId: number, document: DesignDocument = { version: 1, placements: [] }): DesignerState {
   return { document, sizeId, colourId, selectedId: null };

@@ -3,6 +3,9 @@ import type { Dispatch } from '../commands/command-registry.ts';
 import { px, toMm, type DesignView } from '../model/view.ts';
 import type { SceneSync } from './scene-sync.ts';
 
+/** Long enough for the dispatched change to reach the canvas first, too short to notice. */
+const RESYNC_AFTER_MS = 50;
+
 /**
  * Turns what the customer does on the canvas into commands; nothing here writes to the design itself. A drag
  * previews on every pointer move and commits once on release; clicking an item selects it.
@@ -13,7 +16,7 @@ export function translateCanvasEvents(canvas: Canvas, sync: SceneSync, viewOf: (
     if (id === undefined) return undefined;
     const view = viewOf();
     const centre = object.getCenterPoint();
-    return { id, centerXMm: toMm(view, px(centre.x)), centerYMm: toMm(view, px(centre.y)) };
+    return { id, centerXMm: toMm(view, px(centre.x)), centerYMm: toMm(view, px(centre.y)) - sync.offsetYMmOf(id) };
   };
   const selected = (objects: FabricObject[] | undefined) => {
     if (!sync.isEchoing()) dispatch('select-placement', { id: sync.placementIdOf(objects?.[0]) ?? null });
@@ -25,7 +28,14 @@ export function translateCanvasEvents(canvas: Canvas, sync: SceneSync, viewOf: (
     },
     'object:modified': ({ target: object }) => {
       const moved = target(object);
-      if (moved) dispatch('move-placement', moved);
+      if (!moved) return;
+      // Objects are drawn in mm and scaled by the view, so a resize by the corner handles shows in the scale.
+      const scaledWidthMm = (object.width * object.scaleX) / viewOf().pxPerMm;
+      if (Math.abs(object.scaleX / viewOf().pxPerMm - 1) > 1e-3) dispatch('update-artwork', { id: moved.id, widthMm: scaledWidthMm });
+      else dispatch('move-placement', moved);
+      // A change the document clamps to what it already was renders no new scene, so once the design has had its
+      // turn to re-render, put every object back where the document has it.
+      setTimeout(() => sync.resync(), RESYNC_AFTER_MS);
     },
     'selection:created': ({ selected: objects }) => selected(objects),
     'selection:updated': ({ selected: objects }) => selected(objects),

@@ -1,6 +1,6 @@
 import type { ThreadColourSummary } from '@server/contracts/catalog.ts';
 import { layoutBorder, type BorderBand, type BorderRepeat } from '../model/border-layout.ts';
-import { fontOf, motifOf, type DesignSetting } from '../model/design-setting.ts';
+import { artworkOf, fontOf, motifOf, type DesignSetting } from '../model/design-setting.ts';
 import type { DesignerState } from '../model/designer-state.ts';
 import { fontSizeFor } from './lettering-fonts.ts';
 import { recolourMotif } from './recolour-motif.ts';
@@ -21,13 +21,15 @@ interface Positioned {
 export type Drawable =
   | (Positioned & { kind: 'lettering'; text: string; fontFamily: string; fontSizeMm: number; fill: string })
   | (Positioned & { kind: 'motif'; svg: string; widthMm: number })
+  /** The customer's own upload, drawn from its clean copy on the server. */
+  | (Positioned & { kind: 'artwork'; src: string; widthMm: number })
   /** `centerXMm` of a border is unused: the repeats carry their own positions along the hem. */
   | (Positioned & { kind: 'border'; svg: string; repeats: BorderRepeat[]; band: BorderBand });
 
 /**
  * The document turned into drawables, one per placement the canvas can show: lettering in its font and thread,
- * motifs in their threads, and a border's repeats as the engine lays them out (a border that does not fit is not
- * drawn; the panel says why). Customer artwork is priced and proofed by the studio, not drawn here.
+ * motifs in their threads, a border's repeats as the engine lays them out (a border that does not fit is not
+ * drawn; the panel says why), and the customer's artwork once its upload is known.
  */
 export function describeScene(state: Pick<DesignerState, 'document' | 'sizeId'>, setting: DesignSetting, threads: readonly ThreadColourSummary[]): Drawable[] {
   const hexOf = (code: string) => threads.find((thread) => thread.code === code)?.hex;
@@ -57,6 +59,12 @@ export function describeScene(state: Pick<DesignerState, 'document' | 'sizeId'>,
       const { band } = layout;
       const key = JSON.stringify([svg, shape, band.leftMm, band.widthMm]);
       return [{ kind: 'border', id: placement.id, key, svg, repeats: layout.repeats, band, centerXMm: band.leftMm + band.widthMm / 2, centerYMm: band.centerYMm, rotationDeg: 0 }];
+    }
+    if (placement.kind === 'artwork') {
+      const artwork = artworkOf(setting, placement.artworkUploadId);
+      if (!artwork) return [];
+      const { id, centerXMm, centerYMm, rotationDeg, widthMm } = placement;
+      return [{ kind: 'artwork', id, key: JSON.stringify([artwork.imageUrl, widthMm]), src: artwork.imageUrl, widthMm, centerXMm, centerYMm, rotationDeg }];
     }
     return [];
   });

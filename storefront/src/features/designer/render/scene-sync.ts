@@ -42,7 +42,7 @@ export function createSceneSync(canvas: Canvas) {
   function place({ drawn }: { drawn: PlacementObject }, drawable: Drawable, view: DesignView) {
     drawn.object.set({
       left: toPx(view, mm(drawn.centerXMm(drawable))),
-      top: toPx(view, mm(drawable.centerYMm)),
+      top: toPx(view, mm(drawable.centerYMm + drawn.offsetYMm)),
       scaleX: view.pxPerMm,
       scaleY: view.pxPerMm,
       angle: drawable.rotationDeg,
@@ -158,7 +158,13 @@ export function createSceneSync(canvas: Canvas) {
 
   return {
     sync,
+    /** Puts every object back where the document has it: after a drag or resize the document refused or clamped. */
+    resync: () => {
+      if (latest && !isDisposed) sync(latest);
+    },
     placementIdOf: (object: FabricObject | undefined) => (object ? idByObject.get(object) : undefined),
+    /** How far an object's centre sits below its placement's centre in the document, mm (see PlacementObject). */
+    offsetYMmOf: (id: string) => built.get(id)?.drawn.offsetYMm ?? 0,
     isEchoing: () => isEchoing,
     dispose: () => {
       isDisposed = true;

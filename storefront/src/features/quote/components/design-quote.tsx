@@ -29,6 +29,12 @@ export function DesignQuote({ request }: { request: QuotePreviewRequest }) {
       ) : preview.data ? (
         <div className={`mt-3 transition-opacity ${isPricing ? 'opacity-60' : ''}`}>
           <QuoteLines quote={preview.data.quote} />
+          {preview.data.placements.some((placement) => placement.isPriceProvisional) && (
+            <p className="mt-3 rounded-lg border border-saffron-500/50 bg-saffron-100 p-3 text-sm">
+              The studio will confirm the price after digitizing your picture: they turn it into stitches by hand, then
+              tell you the final price before anything is made or charged.
+            </p>
+          )}
           <MakingNotes preview={preview.data} />
         </div>
       ) : (

@@ -24,7 +24,8 @@ export function MakingNotes({ preview }: { preview: QuotePreviewResponse }) {
         <ul className="mt-1 space-y-0.5 text-walnut-700">
           {preview.placements.map((placement) => (
             <li key={placement.id}>
-              {placement.label}: about {counted(placement.stitches, 'stitch', 'stitches')}, {counted(placement.hoopings, 'hooping', 'hoopings')}
+              {placement.label}: {placement.isPriceProvisional ? 'stitches counted once the studio has digitized it' : `about ${counted(placement.stitches, 'stitch', 'stitches')}`},{' '}
+              {counted(placement.hoopings, 'hooping', 'hoopings')}
             </li>
           ))}
         </ul>
