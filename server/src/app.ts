@@ -13,6 +13,7 @@ import type { SessionLayer } from './auth/session.ts';
 import { createUserService } from './services/user-service.ts';
 import { createQuoteService } from './services/quote-service.ts';
 import { createDesignService } from './services/design-service.ts';
+import { createDesignSharingService } from './services/design-sharing-service.ts';
 import { createLetteringFontLoader } from './integrations/lettering-fonts.ts';
 import { requestId } from './middleware/request-id.ts';
 import { accessLog } from './middleware/access-log.ts';
@@ -23,6 +24,7 @@ import { createMeRouter } from './routes/me.ts';
 import { createCatalogRouter } from './routes/catalog.ts';
 import { createQuotesRouter } from './routes/quotes.ts';
 import { createDesignsRouter } from './routes/designs.ts';
+import { createSharedDesignsRouter } from './routes/shared-designs.ts';
 import { createPaymentWebhookRouter } from './routes/payment-webhooks.ts';
 import { createAdminOverviewRouter } from './routes/admin/overview.ts';
 import { createAdminCatalogRouter } from './routes/admin/catalog.ts';
@@ -108,7 +110,9 @@ export function createApp(deps: AppDeps): Express {
   // One quote service, so its font loader parses each font once: saving a design prices it too.
   const quotes = createQuoteService({ db, fonts: createLetteringFontLoader() });
   app.use('/api/quotes', createQuotesRouter({ quotes }));
-  app.use('/api/designs', createDesignsRouter({ designs: createDesignService({ db, quotes, now: deps.now }) }));
+  const sharing = createDesignSharingService({ db });
+  app.use('/api/designs', createDesignsRouter({ designs: createDesignService({ db, quotes, now: deps.now }), sharing }));
+  app.use('/api/shared-designs', createSharedDesignsRouter({ sharing }));
   app.use('/api/admin', requireRole('staff', 'owner'));
   app.use('/api/admin/overview', createAdminOverviewRouter({ db }));
   app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));
