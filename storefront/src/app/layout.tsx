@@ -22,6 +22,9 @@ function AccountArea() {
   }
   return (
     <div className="flex items-center gap-3">
+      <Link to={paths.designs.href()} className="inline-flex min-h-11 items-center whitespace-nowrap text-sm font-medium text-madder-600 hover:text-madder-700">
+        My designs
+      </Link>
       <span className="hidden text-sm sm:inline">
         Signed in as <strong className="font-semibold">{me.data.name}</strong>
       </span>
@@ -38,7 +41,7 @@ export function ShopLayout() {
     <div className="flex min-h-screen flex-col">
       <SkipLink />
       <header className="border-b border-linen-200 bg-linen-100/70">
-        <div className="mx-auto flex max-w-6xl items-center justify-between gap-4 px-4 py-3 sm:px-6">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-x-4 gap-y-1 px-4 py-3 sm:px-6">
           <Link to={paths.home.href()} className="flex items-center gap-2.5 text-walnut-700">
             <HoopMark />
             <span className="leading-tight">

@@ -7,6 +7,8 @@ import { HomePage } from './routes/home.tsx';
 import { GarmentPage } from './routes/garment.tsx';
 import { SignInPage } from './routes/sign-in.tsx';
 import { NotFoundPage } from './routes/not-found.tsx';
+import { DesignsPage } from './routes/designs.tsx';
+import { SharedDesignPage } from './routes/shared-design.tsx';
 
 export const router = createBrowserRouter([
   {
@@ -26,6 +28,8 @@ export const router = createBrowserRouter([
             hydrateFallbackElement: <Loading label="Opening the designer…" />,
           },
           { path: paths.signIn.path, element: <SignInPage /> },
+          { path: paths.designs.path, element: <DesignsPage /> },
+          { path: paths.shared.path, element: <SharedDesignPage /> },
           { path: '*', element: <NotFoundPage /> },
         ],
       },

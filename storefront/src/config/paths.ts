@@ -8,4 +8,8 @@ export const paths = {
     href: (slug: string, designId?: number) => `/design/${encodeURIComponent(slug)}${designId === undefined ? '' : `?design=${designId}`}`,
   },
   signIn: { path: '/sign-in', href: () => '/sign-in' },
+  /** The signed-in customer's saved designs. */
+  designs: { path: '/designs', href: () => '/designs' },
+  /** A design shared by its read-only link. */
+  shared: { path: '/shared/:token', href: (token: string) => `/shared/${encodeURIComponent(token)}` },
 } as const;
