@@ -4,6 +4,11 @@ import { signInAs } from './support/sign-in.ts';
 const screens = (name: string) => `test-results/screens/${name}.png`;
 const embroidery = (page: Page) => page.getByRole('region', { name: 'Borders, motifs and lettering' });
 const section = (page: Page, name: RegExp) => embroidery(page).getByRole('region', { name });
+/** Taps the kind's chip (the visible label of its radio), as a finger would. */
+async function chooseKind(page: Page, kind: string) {
+  await embroidery(page).getByRole('search', { name: 'Filter the embroidery' }).getByText(kind, { exact: true }).click();
+  await expect(embroidery(page).getByRole('radio', { name: kind })).toBeChecked();
+}
 
 test('when a parent filters the embroidery by garment and kind, then the address keeps the filter and the fonts show in their own face', async ({ page }) => {
   await page.goto('/');
@@ -18,7 +23,7 @@ test('when a parent filters the embroidery by garment and kind, then the address
   await embroidery(page).getByRole('combobox', { name: 'For the garment' }).selectOption({ label: 'Terry bib' });
   await expect(page).toHaveURL(/\?garment=terry-bib$/);
   await expect(section(page, /^Borders/)).toContainText('No borders suit the terry bib.');
-  await embroidery(page).getByRole('radio', { name: 'Single motifs' }).check({ force: true });
+  await chooseKind(page, 'Single motifs');
   await expect(page).toHaveURL(/\?garment=terry-bib&kind=single$/);
   await expect(section(page, /^Borders/)).toHaveCount(0);
   await expect(section(page, /^Single motifs/).getByRole('listitem').first()).toBeVisible();
@@ -38,7 +43,7 @@ test('when a parent filters the embroidery by garment and kind, then the address
   expect(await loadedFamilies()).not.toContain('Great Vibes');
   await page.screenshot({ path: screens('catalogue-lettering'), fullPage: true });
 
-  await embroidery(page).getByRole('radio', { name: 'Everything' }).check({ force: true });
+  await chooseKind(page, 'Everything');
   await embroidery(page).getByRole('combobox', { name: 'For the garment' }).selectOption({ label: 'Any garment' });
   await expect(page).toHaveURL(/\/$/);
 });

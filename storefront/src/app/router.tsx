@@ -7,8 +7,6 @@ import { HomePage } from './routes/home.tsx';
 import { GarmentPage } from './routes/garment.tsx';
 import { SignInPage } from './routes/sign-in.tsx';
 import { NotFoundPage } from './routes/not-found.tsx';
-import { DesignsPage } from './routes/designs.tsx';
-import { SharedDesignPage } from './routes/shared-design.tsx';
 
 export const router = createBrowserRouter([
   {
@@ -28,8 +26,17 @@ export const router = createBrowserRouter([
             hydrateFallbackElement: <Loading label="Opening the designer…" />,
           },
           { path: paths.signIn.path, element: <SignInPage /> },
-          { path: paths.designs.path, element: <DesignsPage /> },
-          { path: paths.shared.path, element: <SharedDesignPage /> },
+          // Lazy too: only customers with saved designs, and people opening a shared link, need these.
+          {
+            path: paths.designs.path,
+            lazy: () => import('./routes/designs.tsx').then(({ DesignsPage }) => ({ Component: DesignsPage })),
+            hydrateFallbackElement: <Loading label="Fetching your designs…" />,
+          },
+          {
+            path: paths.shared.path,
+            lazy: () => import('./routes/shared-design.tsx').then(({ SharedDesignPage }) => ({ Component: SharedDesignPage })),
+            hydrateFallbackElement: <Loading label="Opening the shared design…" />,
+          },
           { path: '*', element: <NotFoundPage /> },
         ],
       },

@@ -22,7 +22,7 @@ export function DeleteDesignButton({ design }: { design: SavedDesign }) {
             copy and change that.
           </p>
         )}
-        <Button tone="quiet" className="mt-2" onClick={() => remove.reset()}>OK</Button>
+        <Button tone="quiet" className="mt-2" autoFocus onClick={() => remove.reset()}>OK</Button>
       </div>
     );
   }
@@ -33,7 +33,8 @@ export function DeleteDesignButton({ design }: { design: SavedDesign }) {
     <div role="group" aria-label={`Delete “${design.name}”?`} className="flex flex-wrap items-center gap-2 rounded-lg bg-madder-50 p-3 text-sm">
       <span className="text-madder-700">Delete “{design.name}” for good?</span>
       <Button disabled={remove.isPending} onClick={() => remove.mutate(design.id)}>{remove.isPending ? 'Deleting…' : 'Yes, delete it'}</Button>
-      <Button tone="quiet" onClick={() => setIsAsking(false)}>Keep it</Button>
+      {/* Focus lands on the safe answer, so a stray Enter keeps the design. */}
+      <Button tone="quiet" autoFocus onClick={() => setIsAsking(false)}>Keep it</Button>
     </div>
   );
 }
