@@ -3,6 +3,7 @@ import { garments, mockupScale } from './data/garments.ts';
 import { scaleZones } from './data/placement-zones.ts';
 import { readSeedFile } from './data/seed-files.ts';
 import { catalogStamp } from './data/seed-time.ts';
+import { backMockupFiles, sizeMeasurements } from './data/garment-measurements.ts';
 
 export async function seed(knex: Knex): Promise<void> {
   await knex('garments').insert(
@@ -17,6 +18,7 @@ export async function seed(knex: Knex): Promise<void> {
       min_age_months: garment.ageMonths[0],
       max_age_months: garment.ageMonths[1],
       mockup_svg: readSeedFile('garments', garment.mockupFile),
+      mockup_back_svg: backMockupFiles[garment.slug] ? readSeedFile('garments', backMockupFiles[garment.slug]!) : null,
       is_active: true,
       sort_order: index + 1,
       ...catalogStamp,
@@ -36,6 +38,8 @@ export async function seed(knex: Knex): Promise<void> {
           hem_circumference_mm: size.hem?.circumferenceMm ?? null,
           mockup_scale: scale.toFixed(4),
           placement_zones: JSON.stringify(scaleZones(garment.zones, scale)),
+          chest_mm: sizeMeasurements[size.id]?.chestMm ?? null,
+          length_mm: sizeMeasurements[size.id]?.lengthMm ?? null,
           ...catalogStamp,
         };
       }),

@@ -51,6 +51,16 @@ export type GarmentSummary = z.infer<typeof garmentSummary>;
 export const garmentListResponse = z.object({ garments: z.array(garmentSummary) });
 export type GarmentListResponse = z.infer<typeof garmentListResponse>;
 
+/** A size on the garment's own page: its measurements too, mm (null where one does not apply, as a bonnet's chest). */
+export const garmentSizeDetail = garmentSize.extend({ chestMm: z.number().nullable(), lengthMm: z.number().nullable() });
+
+/** One garment for its product page: the list's summary plus the back drawing (same viewBox) and measured sizes. */
+export const garmentDetail = garmentSummary.extend({ mockupBackSvg: z.string().nullable(), sizes: z.array(garmentSizeDetail) });
+export type GarmentDetail = z.infer<typeof garmentDetail>;
+
+export const garmentSlugParams = z.object({ slug: z.string().regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, 'must be a garment name from the catalogue') });
+export const garmentDetailResponse = z.object({ garment: garmentDetail });
+
 export const motifKind = z.enum(['border', 'single']);
 
 /** A catalogue motif as the storefront shows it: the artwork and the limits it may be resized within. */
@@ -67,6 +77,8 @@ export const motifSummary = z.object({
   minScalePct: z.number().int(),
   maxScalePct: z.number().int(),
   colourCount: z.number().int(),
+  /** Stitches at 100 %, as measured from the digitized file: what the customer sees as the motif's size of work. */
+  stitchCount: z.number().int(),
   /** The studio's suggested thread for each colour, in stitching order. */
   threadCodes: z.array(z.string()),
 });

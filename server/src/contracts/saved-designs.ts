@@ -10,13 +10,16 @@ export const designIdParams = z.object({
     .transform(Number),
 });
 
+/** The name a customer gives a design. */
+export const designName = z.string().trim().min(1, 'Give the design a name').max(80, 'Keep the name to 80 characters');
+
 /** What a customer saves: the garment, size and colour chosen, a name of their own, and the document. */
 export const saveDesignRequest = z.strictObject(
   {
     garmentId: catalogId('garment'),
     sizeId: catalogId('size'),
     colourId: catalogId('fabric colour'),
-    name: z.string().trim().min(1, 'Give the design a name').max(80, 'Keep the name to 80 characters'),
+    name: designName,
     document: designDocument,
   },
   strictObjectErrors('the design to save'),
@@ -30,6 +33,8 @@ export const savedDesign = z.object({
   sizeId: z.number().int(),
   colourId: z.number().int(),
   document: designDocument,
+  /** The code of its read-only link while the customer shares it, else null. */
+  shareToken: z.string().nullable(),
   createdAt: z.string(),
   updatedAt: z.string(),
 });

@@ -1,18 +1,27 @@
 import { Router } from 'express';
 import type { z } from 'zod';
 import type { Db } from '../db/knex.ts';
-import { listActiveGarments } from '../db/repos/garment-repo.ts';
+import { findActiveGarmentDetail, listActiveGarments } from '../db/repos/garment-repo.ts';
 import { listActiveMotifs } from '../db/repos/motif-repo.ts';
 import { listActiveLetteringFonts } from '../db/repos/lettering-font-repo.ts';
 import { listActiveThreads } from '../db/repos/thread-repo.ts';
 import { listActiveHoops } from '../db/repos/hoop-repo.ts';
-import type { fontListResponse, GarmentListResponse, hoopListResponse, MotifListResponse, threadListResponse } from '../contracts/catalog.ts';
+import { garmentSlugParams, type fontListResponse, type garmentDetailResponse, type GarmentListResponse, type hoopListResponse, type MotifListResponse, type threadListResponse } from '../contracts/catalog.ts';
+import { validate } from '../middleware/validate.ts';
+import { HttpError } from '../middleware/http-error.ts';
 
 /** Public catalogue: what a visitor can choose before signing in. */
 export function createCatalogRouter(deps: { db: Db }): Router {
   const router = Router();
   router.get('/garments', async (_req, res) => {
     const body: GarmentListResponse = { garments: await listActiveGarments(deps.db) };
+    res.json(body);
+  });
+  router.get('/garments/:slug', validate(garmentSlugParams, 'params'), async (_req, res) => {
+    const { slug } = res.locals.params as z.infer<typeof garmentSlugParams>;
+    const garment = await findActiveGarmentDetail(deps.db, slug);
+    if (!garment) throw new HttpError('not-found', `There is no garment “${slug}” on offer.`);
+    const body: z.infer<typeof garmentDetailResponse> = { garment };
     res.json(body);
   });
   router.get('/motifs', async (_req, res) => {

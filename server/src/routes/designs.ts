@@ -2,9 +2,11 @@ import { Router, type Request } from 'express';
 import type { z } from 'zod';
 import { currentUserOf, requireSignIn } from '../auth/roles.ts';
 import { designIdParams, saveDesignRequest } from '../contracts/saved-designs.ts';
+import { renameDesignRequest } from '../contracts/design-sharing.ts';
 import { validate } from '../middleware/validate.ts';
 import { sendResult } from '../middleware/send-result.ts';
 import type { DesignService } from '../services/design-service.ts';
+import type { DesignSharingService } from '../services/design-sharing-service.ts';
 
 type DesignIdParams = z.infer<typeof designIdParams>;
 
@@ -12,7 +14,7 @@ type DesignIdParams = z.infer<typeof designIdParams>;
 const customerIdOf = (req: Request) => currentUserOf(req)!.id;
 
 /** A customer's saved designs: signed in only, and each person reaches only their own. */
-export function createDesignsRouter(deps: { designs: DesignService }): Router {
+export function createDesignsRouter(deps: { designs: DesignService; sharing: DesignSharingService }): Router {
   const router = Router();
   router.use(requireSignIn);
   router.get('/', async (req, res) => {
@@ -32,6 +34,24 @@ export function createDesignsRouter(deps: { designs: DesignService }): Router {
   router.delete('/:id', validate(designIdParams, 'params'), async (req, res) => {
     const { id } = res.locals.params as DesignIdParams;
     const result = await deps.designs.remove(customerIdOf(req), id);
+    if (result.ok) res.status(204).end();
+    else sendResult(res, result);
+  });
+  router.patch('/:id', validate(designIdParams, 'params'), validate(renameDesignRequest), async (req, res) => {
+    const { id } = res.locals.params as DesignIdParams;
+    sendResult(res, await deps.designs.rename(customerIdOf(req), id, req.body.name));
+  });
+  router.post('/:id/duplicate', validate(designIdParams, 'params'), async (req, res) => {
+    const { id } = res.locals.params as DesignIdParams;
+    sendResult(res, await deps.designs.duplicate(customerIdOf(req), id), 201);
+  });
+  router.post('/:id/share', validate(designIdParams, 'params'), async (req, res) => {
+    const { id } = res.locals.params as DesignIdParams;
+    sendResult(res, await deps.sharing.share(customerIdOf(req), id));
+  });
+  router.delete('/:id/share', validate(designIdParams, 'params'), async (req, res) => {
+    const { id } = res.locals.params as DesignIdParams;
+    const result = await deps.sharing.unshare(customerIdOf(req), id);
     if (result.ok) res.status(204).end();
     else sendResult(res, result);
   });

@@ -11,6 +11,7 @@ import {
   type DesignWrite,
   type StoredDesign,
 } from '../db/repos/design-repo.ts';
+import { renameOwnedDesign } from '../db/repos/design-share-repo.ts';
 import { restoreDesign } from '../contracts/designs.ts';
 import type { SaveDesignRequest, SavedDesign, savedDesignListResponse, savedDesignResponse } from '../contracts/saved-designs.ts';
 import { failure, ok, type Result } from '../contracts/result.ts';
@@ -99,13 +100,38 @@ export function createDesignService(deps: { db: Db; quotes: QuoteService; now: (
     return quoted;
   }
 
-  return { list, get, create, update, remove };
+  /**
+   * Saves a copy of one of the customer's designs as a new design of theirs, under the same checks as a new save:
+   * the way to change a design an order keeps, or to try a variation. The copy is not shared.
+   */
+  async function duplicate(customerId: number, id: number): Promise<Result<SavedDesignResponse>> {
+    const original = await get(customerId, id);
+    if (!original.ok) return original;
+    const { garmentId, sizeId, colourId, name, document } = original.value.design;
+    return create(customerId, { garmentId, sizeId, colourId, name: copyNameOf(name), document });
+  }
+
+  /** Renames one of the customer's designs. The document is untouched, so a design an order keeps may be renamed. */
+  async function rename(customerId: number, id: number, name: string): Promise<Result<SavedDesignResponse>> {
+    const isFound = await renameOwnedDesign(db, { id, customerId }, name, deps.now());
+    return isFound ? get(customerId, id) : noSuchDesign(id);
+  }
+
+  return { list, get, create, update, remove, duplicate, rename };
 }
 
 export type DesignService = ReturnType<typeof createDesignService>;
 
 function noSuchDesign(id: number): Result<never> {
   return failure('not-found', `There is no design ${id}.`);
+}
+
+const MAX_NAME_LENGTH = 80;
+const COPY_SUFFIX = ' (copy)';
+
+/** “Name (copy)”, shortened so that it still fits the 80 characters a name may have. */
+function copyNameOf(name: string): string {
+  return `${name.slice(0, MAX_NAME_LENGTH - COPY_SUFFIX.length).trimEnd()}${COPY_SUFFIX}`;
 }
 
 function toWrite(request: SaveDesignRequest, savedAt: Date): DesignWrite {

@@ -22,8 +22,12 @@ function AccountArea() {
   }
   return (
     <div className="flex items-center gap-3">
-      <Link to={paths.orders.href()} className="whitespace-nowrap text-sm font-medium text-walnut-700 underline-offset-4 hover:text-madder-600 hover:underline">
-        <span className="hidden sm:inline">Your orders</span>
+      <Link to={paths.designs.href()} className="inline-flex min-h-11 items-center whitespace-nowrap text-sm font-medium text-walnut-700 underline-offset-4 hover:text-madder-600 hover:underline">
+        <span className="hidden sm:inline">My designs</span>
+        <span className="sm:hidden">Designs</span>
+      </Link>
+      <Link to={paths.orders.href()} className="inline-flex min-h-11 items-center whitespace-nowrap text-sm font-medium text-walnut-700 underline-offset-4 hover:text-madder-600 hover:underline">
+        <span className="hidden sm:inline">My orders</span>
         <span className="sm:hidden">Orders</span>
       </Link>
       <span className="hidden text-sm sm:inline">
@@ -42,7 +46,7 @@ export function ShopLayout() {
     <div className="flex min-h-screen flex-col">
       <SkipLink />
       <header className="border-b border-linen-200 bg-linen-100/70">
-        <div className="mx-auto flex max-w-6xl items-center justify-between gap-4 px-4 py-3 sm:px-6">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-x-4 gap-y-1 px-4 py-3 sm:px-6">
           <Link to={paths.home.href()} className="flex items-center gap-2.5 text-walnut-700">
             <HoopMark />
             <span className="leading-tight">

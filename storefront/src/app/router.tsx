@@ -32,6 +32,17 @@ export const router = createBrowserRouter([
           { path: paths.checkout.path, element: <CheckoutPage /> },
           { path: paths.orders.path, element: <OrdersPage /> },
           { path: paths.order.path, element: <OrderPage /> },
+          // Lazy too: only customers with saved designs, and people opening a shared link, need these.
+          {
+            path: paths.designs.path,
+            lazy: () => import('./routes/designs.tsx').then(({ DesignsPage }) => ({ Component: DesignsPage })),
+            hydrateFallbackElement: <Loading label="Fetching your designs…" />,
+          },
+          {
+            path: paths.shared.path,
+            lazy: () => import('./routes/shared-design.tsx').then(({ SharedDesignPage }) => ({ Component: SharedDesignPage })),
+            hydrateFallbackElement: <Loading label="Opening the shared design…" />,
+          },
           { path: '*', element: <NotFoundPage /> },
         ],
       },

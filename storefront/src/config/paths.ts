@@ -12,4 +12,8 @@ export const paths = {
   checkout: { path: '/checkout/:designId', href: (designId: number) => `/checkout/${designId}` },
   orders: { path: '/orders', href: () => '/orders' },
   order: { path: '/orders/:number', href: (number: string) => `/orders/${encodeURIComponent(number)}` },
+  /** The signed-in customer's saved designs. */
+  designs: { path: '/designs', href: () => '/designs' },
+  /** A design shared by its read-only link. */
+  shared: { path: '/shared/:token', href: (token: string) => `/shared/${encodeURIComponent(token)}` },
 } as const;

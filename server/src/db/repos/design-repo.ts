@@ -9,6 +9,7 @@ export interface StoredDesign {
   sizeId: number;
   colourId: number;
   document: unknown;
+  shareToken: string | null;
   /** ISO 8601, UTC. */
   createdAt: string;
   updatedAt: string;
@@ -30,10 +31,10 @@ export interface DesignWrite {
   savedAt: Date;
 }
 
-const storedColumns = ['id', 'name', 'garment_id', 'garment_size_id', 'fabric_colour_id', 'document', 'created_at', 'updated_at'];
+export const storedColumns = ['id', 'name', 'garment_id', 'garment_size_id', 'fabric_colour_id', 'document', 'share_token', 'created_at', 'updated_at'];
 
 // mysql2 reads DATETIME as a Date (the pool runs in UTC) and JSON columns arrive parsed.
-function toStoredDesign(row: Record<string, unknown>): StoredDesign {
+export function toStoredDesign(row: Record<string, unknown>): StoredDesign {
   return {
     id: row.id as number,
     name: row.name as string,
@@ -41,6 +42,7 @@ function toStoredDesign(row: Record<string, unknown>): StoredDesign {
     sizeId: row.garment_size_id as number,
     colourId: row.fabric_colour_id as number,
     document: row.document,
+    shareToken: (row.share_token as string | null) ?? null,
     createdAt: (row.created_at as Date).toISOString(),
     updatedAt: (row.updated_at as Date).toISOString(),
   };

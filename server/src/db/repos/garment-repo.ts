@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { Db } from '../knex.ts';
-import { placementZone, type GarmentSummary } from '../../contracts/catalog.ts';
+import { placementZone, type GarmentDetail, type GarmentSummary } from '../../contracts/catalog.ts';
 
 const placementZones = z.array(placementZone);
 
@@ -21,7 +21,7 @@ const MM_LENGTH = /^(\d+(?:\.\d+)?)(?:mm)?$/;
  * attributes of one tag are needed. A drawing without a viewBox falls back to its width and height attributes.
  * A drawing with neither is a broken catalogue row, so it throws rather than guessing a size.
  */
-export function mockupSizeMm(svg: string, slug: string): { widthMm: number; heightMm: number } {
+function mockupSizeMm(svg: string, slug: string): { widthMm: number; heightMm: number } {
   const tag = SVG_OPEN_TAG.exec(svg)?.[0] ?? '';
   const valueOf = (pattern: RegExp) => {
     const match = pattern.exec(tag);
@@ -36,19 +36,18 @@ export function mockupSizeMm(svg: string, slug: string): { widthMm: number; heig
   throw new Error(`The mockup of garment ${slug} has neither a viewBox nor a width and height in millimetres`);
 }
 
-/**
- * Active garments with their sizes (mockup scale and placement zones) and fabric colours, in display order. The
- * studio's catalogue asks for the retired ones too (`includeRetired`).
- */
-export async function listActiveGarments(db: Db, options: { includeRetired?: boolean } = {}): Promise<GarmentSummary[]> {
-  const garments = await db('garments')
-    .select('id', 'slug', 'name', 'kind', 'description', 'fabric_type', 'mockup_svg')
-    .where(options.includeRetired ? {} : { is_active: true })
+type Row = Record<string, any>;
+
+/** Active garments (one, when a slug is given; retired ones too when asked) with their size and colour rows, in display order. */
+async function readActiveGarments(db: Db, extra: { garmentColumns: string[]; sizeColumns: string[]; slug?: string; includeRetired?: boolean }) {
+  const garments: Row[] = await db('garments')
+    .select('id', 'slug', 'name', 'kind', 'description', 'fabric_type', 'mockup_svg', ...extra.garmentColumns)
+    .where({ ...(extra.includeRetired ? {} : { is_active: true }), ...(extra.slug === undefined ? {} : { slug: extra.slug }) })
     .orderBy([{ column: 'sort_order' }, { column: 'id' }]);
   const ids = garments.map((g) => g.id as number);
-  const [sizes, colours] = await Promise.all([
+  const [sizes, colours]: Row[][] = await Promise.all([
     db('garment_sizes')
-      .select('id', 'garment_id', 'code', 'label', 'hem_front_mm', 'hem_circumference_mm', 'mockup_scale', 'placement_zones')
+      .select('id', 'garment_id', 'code', 'label', 'hem_front_mm', 'hem_circumference_mm', 'mockup_scale', 'placement_zones', ...extra.sizeColumns)
       .whereIn('garment_id', ids)
       .orderBy([{ column: 'sort_order' }, { column: 'id' }]),
     db('fabric_colours')
@@ -56,32 +55,59 @@ export async function listActiveGarments(db: Db, options: { includeRetired?: boo
       .whereIn('garment_id', ids)
       .orderBy([{ column: 'sort_order' }, { column: 'id' }]),
   ]);
-  return garments.map((g) => {
-    const mockup = mockupSizeMm(g.mockup_svg, g.slug);
-    return {
-      id: g.id,
-      slug: g.slug,
-      name: g.name,
-      kind: g.kind,
-      description: g.description ?? '',
-      fabricType: g.fabric_type,
-      mockupSvg: g.mockup_svg,
-      mockupWidthMm: mockup.widthMm,
-      mockupHeightMm: mockup.heightMm,
-      sizes: sizes
-        .filter((s) => s.garment_id === g.id)
-        .map((s) => ({
-          id: s.id,
-          code: s.code,
-          label: s.label,
-          // mysql2 returns DECIMAL columns as strings; JSON columns arrive parsed, and are checked because the
-          // storefront draws the zones as they come.
-          mockupScale: Number(s.mockup_scale),
-          zones: placementZones.parse(s.placement_zones),
-          hemFrontMm: s.hem_front_mm === null ? null : Number(s.hem_front_mm),
-          hemCircumferenceMm: s.hem_circumference_mm === null ? null : Number(s.hem_circumference_mm),
-        })),
-      colours: colours.filter((c) => c.garment_id === g.id).map((c) => ({ id: c.id, name: c.name, hex: c.hex })),
-    };
-  });
+  return garments.map((g) => ({ row: g, sizes: sizes.filter((s) => s.garment_id === g.id), colours: colours.filter((c) => c.garment_id === g.id) }));
+}
+
+// mysql2 returns DECIMAL columns as strings; JSON columns arrive parsed, and are checked because the storefront
+// draws the zones as they come.
+const millimetres = (value: unknown) => (value === null ? null : Number(value));
+
+function toGarmentSummary({ row: g, sizes, colours }: { row: Row; sizes: Row[]; colours: Row[] }): GarmentSummary {
+  const mockup = mockupSizeMm(g.mockup_svg, g.slug);
+  return {
+    id: g.id,
+    slug: g.slug,
+    name: g.name,
+    kind: g.kind,
+    description: g.description ?? '',
+    fabricType: g.fabric_type,
+    mockupSvg: g.mockup_svg,
+    mockupWidthMm: mockup.widthMm,
+    mockupHeightMm: mockup.heightMm,
+    sizes: sizes.map((s) => ({
+      id: s.id,
+      code: s.code,
+      label: s.label,
+      mockupScale: Number(s.mockup_scale),
+      zones: placementZones.parse(s.placement_zones),
+      hemFrontMm: millimetres(s.hem_front_mm),
+      hemCircumferenceMm: millimetres(s.hem_circumference_mm),
+    })),
+    colours: colours.map((c) => ({ id: c.id, name: c.name, hex: c.hex })),
+  };
+}
+
+/**
+ * Active garments with their sizes (mockup scale and placement zones) and fabric colours, in display order. The
+ * studio's catalogue asks for the retired ones too (`includeRetired`).
+ */
+export async function listActiveGarments(db: Db, options: { includeRetired?: boolean } = {}): Promise<GarmentSummary[]> {
+  const garments = await readActiveGarments(db, { garmentColumns: [], sizeColumns: [], includeRetired: options.includeRetired });
+  return garments.map(toGarmentSummary);
+}
+
+/** One active garment for its product page, with its back drawing and each size's measurements; undefined if not on offer. */
+export async function findActiveGarmentDetail(db: Db, slug: string): Promise<GarmentDetail | undefined> {
+  const [garment] = await readActiveGarments(db, { garmentColumns: ['mockup_back_svg'], sizeColumns: ['chest_mm', 'length_mm'], slug });
+  if (!garment) return undefined;
+  const summary = toGarmentSummary(garment);
+  return {
+    ...summary,
+    mockupBackSvg: garment.row.mockup_back_svg ?? null,
+    sizes: summary.sizes.map((size, index) => ({
+      ...size,
+      chestMm: millimetres(garment.sizes[index]!.chest_mm),
+      lengthMm: millimetres(garment.sizes[index]!.length_mm),
+    })),
+  };
 }

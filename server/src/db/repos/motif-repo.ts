@@ -16,6 +16,7 @@ export function toMotifSummary(row: Record<string, any>): MotifSummary {
     minScalePct: row.min_scale_pct,
     maxScalePct: row.max_scale_pct,
     colourCount: row.colour_count,
+    stitchCount: row.stitch_count,
     // JSON columns arrive parsed.
     threadCodes: row.default_thread_codes,
   };
@@ -24,7 +25,7 @@ export function toMotifSummary(row: Record<string, any>): MotifSummary {
 /** Active motifs, borders first, in the shop's display order. */
 export async function listActiveMotifs(db: Db): Promise<MotifSummary[]> {
   const rows = await db('motifs')
-    .select('id', 'slug', 'name', 'kind', 'svg', 'width_mm', 'height_mm', 'gap_mm', 'min_scale_pct', 'max_scale_pct', 'colour_count', 'default_thread_codes')
+    .select('id', 'slug', 'name', 'kind', 'svg', 'width_mm', 'height_mm', 'gap_mm', 'min_scale_pct', 'max_scale_pct', 'colour_count', 'stitch_count', 'default_thread_codes')
     .where({ is_active: true })
     .orderBy([{ column: 'kind' }, { column: 'sort_order' }, { column: 'id' }]);
   return rows.map(toMotifSummary);

@@ -1,69 +1,75 @@
 import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
+import { ApiError } from '@ui/api-client.ts';
 import { EmptyState, ErrorNotice, Loading } from '@ui/components/page-state.tsx';
 import { buttonClassName } from '@ui/components/button.tsx';
-import { formatLength } from '@ui/format.ts';
-import { useGarments } from '../../features/catalog/api/get-garments.ts';
+import { useGarment } from '../../features/catalog/api/get-garment.ts';
 import { useMotifs } from '../../features/catalog/api/get-motifs.ts';
-import { GarmentPicture } from '../../features/catalog/components/garment-picture.tsx';
+import { GarmentViews } from '../../features/catalog/components/garment-views.tsx';
 import { SizePicker } from '../../features/catalog/components/size-picker.tsx';
+import { SizeTable } from '../../features/catalog/components/size-table.tsx';
 import { FabricColourPicker } from '../../features/catalog/components/fabric-colour-picker.tsx';
 import { BorderFitList } from '../../features/catalog/components/border-fit-list.tsx';
+import { MotifCard } from '../../features/catalog/components/motif-card.tsx';
+import { motifSuitsGarment } from '../../features/catalog/model/motif-suits-garment.ts';
 import { BorderPrice } from '../../features/quote/components/border-price.tsx';
 import { paths } from '../../config/paths.ts';
 
 export function GarmentPage() {
-  const { slug } = useParams();
-  const garments = useGarments();
+  const { slug = '' } = useParams();
+  const garment = useGarment(slug);
   const motifs = useMotifs();
   const [colourId, setColourId] = useState<number>();
   const [sizeId, setSizeId] = useState<number>();
-  if (garments.isPending) return <Loading />;
-  if (garments.isError) return <ErrorNotice message={garments.error.message} onRetry={() => void garments.refetch()} />;
-  const garment = garments.data.find((g) => g.slug === slug);
-  if (!garment) {
+  if (garment.isPending) return <Loading label="Fetching the garment…" />;
+  if (garment.isError) {
+    const isMissing = garment.error instanceof ApiError && (garment.error.kind === 'not-found' || garment.error.kind === 'invalid');
     return (
       <div>
-        <ErrorNotice message="We could not find that garment; it may no longer be offered." />
+        <ErrorNotice
+          message={isMissing ? 'We could not find that garment; it may no longer be offered.' : garment.error.message}
+          onRetry={isMissing ? undefined : () => void garment.refetch()}
+        />
         <Link to={paths.home.href()} className="mt-4 inline-block text-madder-600 underline">Back to all garments</Link>
       </div>
     );
   }
-  const hasHem = garment.sizes.some((size) => size.hemCircumferenceMm !== null);
-  const colour = garment.colours.find((c) => c.id === colourId) ?? garment.colours[0];
-  const size = garment.sizes.find((s) => s.id === sizeId) ?? garment.sizes[0];
+  const { data } = garment;
+  const hasHem = data.sizes.some((size) => size.hemCircumferenceMm !== null);
+  const colour = data.colours.find((c) => c.id === colourId) ?? data.colours[0];
+  const size = data.sizes.find((s) => s.id === sizeId) ?? data.sizes[0];
   const borders = motifs.data?.filter((motif) => motif.kind === 'border') ?? [];
+  const singles = motifs.data?.filter((motif) => motif.kind === 'single' && motifSuitsGarment(motif, data)) ?? [];
   return (
     <div>
       <div className="grid gap-8 lg:grid-cols-[3fr_2fr]">
-        <GarmentPicture garment={garment} colourHex={colour?.hex} className="min-h-96" imageClassName="max-h-[32rem]" />
+        <GarmentViews garment={data} colourHex={colour?.hex} />
         <div>
-          <Link to={paths.home.href()} className="text-sm text-walnut-500 hover:text-madder-600">← All garments</Link>
-          <h1 className="mt-2 text-3xl font-semibold">{garment.name}</h1>
-          <p className="mt-3 text-walnut-700">{garment.description}</p>
-          <Link to={paths.design.href(garment.slug)} className={`mt-5 ${buttonClassName()}`}>
+          <Link to={paths.home.href()} className="inline-flex min-h-11 items-center text-sm text-walnut-500 hover:text-madder-600">← All garments</Link>
+          <h1 className="mt-1 text-3xl font-semibold">{data.name}</h1>
+          <p className="mt-3 text-walnut-700">{data.description}</p>
+          <Link to={paths.design.href(data.slug)} className={`mt-5 ${buttonClassName()}`}>
             Design this garment
           </Link>
           <div className="mt-6">
-            <FabricColourPicker colours={garment.colours} selected={colour} onSelect={setColourId} />
+            <FabricColourPicker colours={data.colours} selected={colour} onSelect={setColourId} />
           </div>
           <div className="mt-6">
-            <SizePicker sizes={garment.sizes} selectedId={size?.id} onSelect={setSizeId} />
+            <SizePicker sizes={data.sizes} selectedId={size?.id} onSelect={setSizeId} />
           </div>
-          {size && (
-            <dl className="mt-4 grid grid-cols-2 gap-3 text-sm">
-              <div className="rounded-lg bg-linen-100 p-3">
-                <dt className="text-walnut-500">Front of the hem</dt>
-                <dd className="font-medium">{size.hemFrontMm === null ? 'No hem border' : formatLength(size.hemFrontMm)}</dd>
-              </div>
-              <div className="rounded-lg bg-linen-100 p-3">
-                <dt className="text-walnut-500">All the way round</dt>
-                <dd className="font-medium">{size.hemCircumferenceMm === null ? 'No hem border' : formatLength(size.hemCircumferenceMm)}</dd>
-              </div>
-            </dl>
-          )}
         </div>
       </div>
+
+      <section aria-labelledby="sizes-heading" className="mt-10">
+        <h2 id="sizes-heading" className="seam inline-block pb-2 text-xl font-semibold">Sizes and measurements</h2>
+        <p className="mt-3 max-w-2xl text-sm text-walnut-700">
+          Measured on the garment laid flat: the chest all the way round and the length from the shoulder.
+          {hasHem && ' The hem is measured along the line the border is stitched on.'}
+        </p>
+        <div className="mt-4">
+          <SizeTable garmentName={data.name} sizes={data.sizes} selectedId={size?.id} />
+        </div>
+      </section>
 
       <section aria-labelledby="borders-heading" className="mt-10">
         <h2 id="borders-heading" className="seam inline-block pb-2 text-xl font-semibold">Borders all the way round</h2>
@@ -83,11 +89,26 @@ export function GarmentPage() {
                   motifs={borders}
                   size={size}
                   fabricHex={colour?.hex}
-                  priceOf={(motif) => <BorderPrice garment={garment} sizeId={size.id} colourId={colour?.id} motif={motif} />}
+                  priceOf={(motif) => <BorderPrice garment={data} sizeId={size.id} colourId={colour?.id} motif={motif} />}
                 />}
             </div>
           </>
         )}
+      </section>
+
+      <section aria-labelledby="motifs-heading" className="mt-10">
+        <h2 id="motifs-heading" className="seam inline-block pb-2 text-xl font-semibold">Single motifs that suit it</h2>
+        <div className="mt-4">
+          {motifs.isPending && <Loading label="Finding the motifs…" />}
+          {motifs.isSuccess && singles.length === 0 && <EmptyState title={`No single motifs fit the ${data.name.toLowerCase()} just now.`} />}
+          {singles.length > 0 && (
+            <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
+              {singles.map((motif) => (
+                <MotifCard key={motif.id} motif={motif} />
+              ))}
+            </ul>
+          )}
+        </div>
       </section>
     </div>
   );

@@ -1,10 +1,22 @@
+import { useSearchParams } from 'react-router-dom';
 import { EmptyState, ErrorNotice, Loading } from '@ui/components/page-state.tsx';
 import { useGarments } from '../../features/catalog/api/get-garments.ts';
+import { useMotifs } from '../../features/catalog/api/get-motifs.ts';
+import { useFonts } from '../../features/catalog/api/get-fonts.ts';
 import { GarmentCard } from '../../features/catalog/components/garment-card.tsx';
+import { CatalogueFilters } from '../../features/catalog/components/catalogue-filters.tsx';
+import { EmbroideryCatalogue } from '../../features/catalog/components/embroidery-catalogue.tsx';
+import { readCatalogueFilter, writeCatalogueFilter, type CatalogueFilter } from '../../features/catalog/model/catalogue-filter.ts';
 import { paths } from '../../config/paths.ts';
 
 export function HomePage() {
   const garments = useGarments();
+  const motifs = useMotifs();
+  const fonts = useFonts();
+  const [params, setParams] = useSearchParams();
+  const filter = readCatalogueFilter(params);
+  const setFilter = (next: CatalogueFilter) => setParams(writeCatalogueFilter(params, next), { preventScrollReset: true });
+  const embroideryFailure = [motifs, fonts].find((query) => query.isError);
   return (
     <div>
       <section className="rounded-card bg-linen-100 px-6 py-10 sm:px-10">
@@ -31,6 +43,18 @@ export function HomePage() {
           </ul>
         )}
       </div>
+
+      <section aria-labelledby="embroidery-heading" className="mt-14">
+        <h2 id="embroidery-heading" className="seam inline-block pb-2 text-xl font-semibold">Borders, motifs and lettering</h2>
+        <div className="mt-6">
+          {garments.data && <CatalogueFilters garments={garments.data} filter={filter} onChange={setFilter} />}
+          {embroideryFailure && <ErrorNotice message={embroideryFailure.error!.message} onRetry={() => void embroideryFailure.refetch()} />}
+          {!embroideryFailure && (motifs.isPending || fonts.isPending) && <Loading label="Laying out the borders and motifs…" />}
+          {garments.data && motifs.data && fonts.data && (
+            <EmbroideryCatalogue garments={garments.data} motifs={motifs.data} fonts={fonts.data} filter={filter} onFilterChange={setFilter} />
+          )}
+        </div>
+      </section>
     </div>
   );
 }

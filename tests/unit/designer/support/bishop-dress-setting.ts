@@ -41,6 +41,7 @@ const motif = (fields: Partial<MotifSummary> & Pick<MotifSummary, 'id' | 'slug' 
   minScalePct: 90,
   maxScalePct: 110,
   colourCount: 1,
+  stitchCount: 1000,
   threadCodes: ['WB-118'],
   ...fields,
 });

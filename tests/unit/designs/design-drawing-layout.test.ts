@@ -1,0 +1,80 @@
+import { describe, expect, it } from 'vitest';
+import type { DesignDocument } from '../../../server/src/contracts/designs.ts';
+import { drawingOf, layoutDesignDrawing, type DrawingCatalogue } from '../../../storefront/src/features/designs/model/design-drawing-layout.ts';
+import { bishopDress, breezyScript, daisyChain, sittingBunny, sixMonths } from '../designer/support/bishop-dress-setting.ts';
+
+const threads = [
+  { code: 'WB-118', name: 'Leaf', hex: '#5A8A3C' },
+  { code: 'WB-110', name: 'Rose', hex: '#C0506A' },
+];
+const catalogue: DrawingCatalogue = { garment: bishopDress, motifs: [daisyChain, sittingBunny], fonts: [breezyScript], threads };
+
+const documentOf = (...placements: DesignDocument['placements']): DesignDocument => ({ version: 1, placements });
+const daisyLoop = { id: 'hem', kind: 'border', zone: 'hem', motif: 'daisy-chain', run: 'circumference', hemOffsetMm: 44.45, threads: ['WB-118', 'WB-404'] } as const;
+
+describe('layoutDesignDrawing', () => {
+  it('when a border runs all the way round, then only the repeats on the front panel are drawn, on the centre line above the hem', () => {
+    const layout = layoutDesignDrawing(catalogue, sixMonths.id, documentOf(daisyLoop))!;
+    // The 6-month mockup is the 460 × 470 mm drawing scaled by 346 / 380.
+    expect(layout.widthMm).toBeCloseTo(460 * (346 / 380), 6);
+    expect(layout.heightMm).toBeCloseTo(470 * (346 / 380), 6);
+    const [border] = layout.placements;
+    if (border?.kind !== 'border') throw new Error(`expected a border, got ${border?.kind}`);
+    // 4 repeats of 173 mm round the 692 mm loop at 96.1 % (common practice, no source: the trade's worked case); the
+    // 346 mm front panel shows the middle two whole and nothing of the two at the back.
+    expect(border.label).toBe('Border: Daisy and leaf chain, 4 repeats all the way round');
+    expect(border.repeats).toHaveLength(2);
+    expect(border.repeats.map((repeat) => repeat.widthMm)).toEqual([173, 173]);
+    const hem = sixMonths.zones.find((zone) => zone.code === 'hem')!;
+    const lineYMm = hem.yMm + hem.heightMm - 44.45;
+    for (const repeat of border.repeats) expect(repeat.yMm + repeat.heightMm / 2).toBeCloseTo(lineYMm, 6);
+    expect(border.visible.xMm).toBeCloseTo(hem.xMm + (hem.widthMm - 346) / 2, 6);
+    expect(border.visible.widthMm).toBe(346);
+    // Threads are looked up in the palette; an unknown code keeps the drawing's own colour.
+    expect(border.threadHexes).toEqual(['#5A8A3C', undefined]);
+  });
+
+  it('when the design has a motif and lettering, then each sits where the document puts it, at its size, in its thread', () => {
+    const layout = layoutDesignDrawing(
+      catalogue,
+      sixMonths.id,
+      documentOf(
+        { id: 'bunny', kind: 'motif', zone: 'chest', centerXMm: 200, centerYMm: 100, rotationDeg: 10, motif: 'sitting-bunny', scalePct: 50, threads: ['WB-118'] },
+        { id: 'name', kind: 'lettering', zone: 'chest', centerXMm: 210, centerYMm: 110, rotationDeg: 0, text: 'Mae', font: 'breezy-script', letterHeightMm: 20, thread: 'WB-110' },
+      ),
+    )!;
+    expect(layout.placements).toEqual([
+      { kind: 'motif', id: 'bunny', label: 'Motif: Sitting bunny', svg: sittingBunny.svg, threadHexes: ['#5A8A3C'], widthMm: 18, heightMm: 35.5, centerXMm: 200, centerYMm: 100, rotationDeg: 10 },
+      { kind: 'lettering', id: 'name', label: 'Name “Mae” in Breezy Script', text: 'Mae', fontFamily: 'Pacifico', letterHeightMm: 20, hex: '#C0506A', centerXMm: 210, centerYMm: 110, rotationDeg: 0 },
+    ]);
+  });
+
+  it('when the catalogue no longer has a motif or font, or a border no longer fits, then the placement is listed but not drawn', () => {
+    const layout = layoutDesignDrawing(
+      catalogue,
+      bishopDress.sizes[2]!.id,
+      documentOf(
+        daisyLoop,
+        { id: 'gone', kind: 'motif', zone: 'chest', centerXMm: 1, centerYMm: 1, rotationDeg: 0, motif: 'retired-owl', scalePct: 100, threads: ['WB-118'] },
+        { id: 'font', kind: 'lettering', zone: 'chest', centerXMm: 1, centerYMm: 1, rotationDeg: 0, text: 'Bo', font: 'retired-face', letterHeightMm: 10, thread: 'WB-110' },
+      ),
+    )!;
+    expect(layout.placements.map((placement) => [placement.kind, placement.label])).toEqual([
+      ['unavailable', 'Border: Daisy and leaf chain (it no longer fits this size)'],
+      ['unavailable', 'A motif that is no longer offered'],
+      ['unavailable', 'Name “Bo” (its lettering is no longer offered)'],
+    ]);
+  });
+
+  it('when the garment no longer has the size, then there is no drawing', () => {
+    expect(layoutDesignDrawing(catalogue, 999, documentOf())).toBeUndefined();
+  });
+});
+
+describe('drawingOf', () => {
+  it('when the design\'s garment is in the lists, then it comes with its drawing; otherwise neither', () => {
+    const lists = { garments: [bishopDress], motifs: catalogue.motifs, fonts: catalogue.fonts, threads };
+    expect(drawingOf(lists, { garmentId: bishopDress.id, sizeId: sixMonths.id, document: documentOf() })).toMatchObject({ garment: bishopDress, layout: { placements: [] } });
+    expect(drawingOf(lists, { garmentId: 42, sizeId: sixMonths.id, document: documentOf() })).toEqual({ garment: undefined, layout: undefined });
+  });
+});
