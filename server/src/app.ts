@@ -13,14 +13,11 @@ import type { SessionLayer } from './auth/session.ts';
 import { createUserService } from './services/user-service.ts';
 import { createQuoteService } from './services/quote-service.ts';
 import { createDesignService } from './services/design-service.ts';
-<<<<<<< HEAD
 import { createStoredQuoteService } from './services/stored-quote-service.ts';
 import { createCheckoutService } from './services/checkout-service.ts';
 import { createCustomerOrderService } from './services/customer-order-service.ts';
 import { createPaymentWebhookService } from './services/payment-webhook-service.ts';
-=======
 import { createDesignSharingService } from './services/design-sharing-service.ts';
->>>>>>> hw/storefront-browse
 import { createLetteringFontLoader } from './integrations/lettering-fonts.ts';
 import { requestId } from './middleware/request-id.ts';
 import { accessLog } from './middleware/access-log.ts';
@@ -31,12 +28,9 @@ import { createMeRouter } from './routes/me.ts';
 import { createCatalogRouter } from './routes/catalog.ts';
 import { createQuotesRouter } from './routes/quotes.ts';
 import { createDesignsRouter } from './routes/designs.ts';
-<<<<<<< HEAD
 import { createArtworkRouter } from './routes/artwork.ts';
 import { createArtworkService } from './services/artwork-service.ts';
-=======
 import { createSharedDesignsRouter } from './routes/shared-designs.ts';
->>>>>>> hw/storefront-browse
 import { createPaymentWebhookRouter } from './routes/payment-webhooks.ts';
 import { createOrdersRouter } from './routes/orders.ts';
 import { createAdminOverviewRouter } from './routes/admin/overview.ts';
@@ -139,21 +133,16 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/catalog', createCatalogRouter({ db }));
   // One quote service, so its font loader parses each font once: saving a design prices it too.
   const quotes = createQuoteService({ db, fonts: createLetteringFontLoader() });
-<<<<<<< HEAD
   const storedQuotes = createStoredQuoteService({ db, quotes, now: deps.now });
   app.use('/api/quotes', createQuotesRouter({ quotes, storedQuotes }));
-  app.use('/api/designs', createDesignsRouter({ designs: createDesignService({ db, quotes, now: deps.now }) }));
+  const sharing = createDesignSharingService({ db });
+  app.use('/api/designs', createDesignsRouter({ designs: createDesignService({ db, quotes, now: deps.now }), sharing }));
+  app.use('/api/shared-designs', createSharedDesignsRouter({ sharing }));
   app.use('/api/orders', createOrdersRouter({
     checkout: createCheckoutService({ db, stripe: deps.stripe, mailer: deps.mailer, storedQuotes, appOrigin: config.appOrigin, now: deps.now }),
     customerOrders: createCustomerOrderService({ db, mailer: deps.mailer, appOrigin: config.appOrigin, now: deps.now }),
   }));
   app.use('/api/artwork', createArtworkRouter({ artwork, uploadMaxBytes: config.uploadMaxBytes }));
-=======
-  app.use('/api/quotes', createQuotesRouter({ quotes }));
-  const sharing = createDesignSharingService({ db });
-  app.use('/api/designs', createDesignsRouter({ designs: createDesignService({ db, quotes, now: deps.now }), sharing }));
-  app.use('/api/shared-designs', createSharedDesignsRouter({ sharing }));
->>>>>>> hw/storefront-browse
   app.use('/api/admin', requireRole('staff', 'owner'));
   app.use('/api/admin/overview', createAdminOverviewRouter({ overview: createOverviewService({ db, now: deps.now }) }));
   app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));

@@ -21,7 +21,7 @@ const MM_LENGTH = /^(\d+(?:\.\d+)?)(?:mm)?$/;
  * attributes of one tag are needed. A drawing without a viewBox falls back to its width and height attributes.
  * A drawing with neither is a broken catalogue row, so it throws rather than guessing a size.
  */
-function mockupSizeMm(svg: string, slug: string): { widthMm: number; heightMm: number } {
+export function mockupSizeMm(svg: string, slug: string): { widthMm: number; heightMm: number } {
   const tag = SVG_OPEN_TAG.exec(svg)?.[0] ?? '';
   const valueOf = (pattern: RegExp) => {
     const match = pattern.exec(tag);

@@ -2,6 +2,7 @@ import type { GarmentSummary, LetteringFontSummary, MotifSummary } from '@server
 import type { DesignDocument } from '@server/contracts/designs.ts';
 import { changeSize } from '../commands/change-size.ts';
 import { createDesignerState } from '../model/designer-state.ts';
+import type { DesignSetting } from '../model/design-setting.ts';
 import { loadLetteringFonts } from './lettering-fonts.ts';
 import { measureLettering } from './measure-lettering.ts';
 
@@ -9,6 +10,9 @@ interface ResizeRequest {
   garment: GarmentSummary;
   motifs: readonly MotifSummary[];
   fonts: readonly LetteringFontSummary[];
+  /** The studio's hoops and the customer's uploads, when the design may hold artwork or large motifs. */
+  hoops?: DesignSetting['hoops'];
+  artworks?: DesignSetting['artworks'];
   sizeId: number;
   colourId: number;
   document: DesignDocument;
@@ -22,6 +26,6 @@ interface ResizeRequest {
  */
 export async function resizeDocument(request: ResizeRequest): Promise<DesignDocument> {
   await loadLetteringFonts([...new Set(request.fonts.map((font) => font.fontFamily))]);
-  const setting = { garment: request.garment, motifs: request.motifs, fonts: request.fonts, measureLettering };
+  const setting: DesignSetting = { garment: request.garment, motifs: request.motifs, fonts: request.fonts, measureLettering, hoops: request.hoops ?? [], artworks: request.artworks ?? [] };
   return changeSize.perform(createDesignerState(request.sizeId, request.colourId, request.document), { sizeId: request.toSizeId }, setting).document;
 }
