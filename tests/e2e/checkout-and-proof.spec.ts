@@ -116,6 +116,7 @@ test('when the card is declined, then the payment page says so, nothing is charg
   const payment = page.getByRole('region', { name: 'Payment' });
   await expect(payment.getByRole('alert')).toContainText('Your card was declined.');
   await expect(payment).toContainText('Your card has not been charged');
+  await page.screenshot({ path: screens('order-declined'), fullPage: true });
   await expect(payment).not.toContainText('held on your card');
   await expect(payment.getByRole('button', { name: 'Try another card' })).toBeVisible();
   const declinedNumber = /WB-\d+/.exec(page.url())![0];
