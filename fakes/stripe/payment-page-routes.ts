@@ -2,11 +2,30 @@ import express, { Router } from 'express';
 import { z } from 'zod';
 import { completeCheckout } from './complete-checkout.ts';
 import type { FakeStripeContext } from './fake-stripe-context.ts';
+import type { CheckoutSessionRecord } from './fake-stripe-state.ts';
 import { sendPaymentCompletePage, sendPaymentMissingPage, sendPaymentPage } from './payment-page.ts';
 import { checkTestCard } from './test-cards.ts';
 
 const typed = z.string().max(200).catch('');
 const cardFormSchema = z.object({ card_number: typed, expiry: typed, cvc: typed, name: typed });
+
+/**
+ * Stripe reports a declined attempt on the session's PaymentIntent with `payment_intent.payment_failed`; the session
+ * stays open for another card. This fake creates PaymentIntents only for accepted cards, so the event carries a
+ * stand-in intent (its own id series, so the ids of real intents do not shift) with the session's metadata.
+ */
+function announceDecline(ctx: FakeStripeContext, record: CheckoutSessionRecord, message: string): void {
+  ctx.emit('payment_intent.payment_failed', {
+    id: ctx.nextId('pi_declined'),
+    object: 'payment_intent',
+    amount: record.session.amount_total,
+    currency: record.session.currency,
+    capture_method: record.paymentIntentData.captureMethod,
+    metadata: { ...record.paymentIntentData.metadata },
+    status: 'requires_payment_method',
+    last_payment_error: { type: 'card_error', code: 'card_declined', message },
+  });
+}
 
 /** The hosted payment page behind each Checkout Session's `url`. */
 export function createPaymentPageRouter(ctx: FakeStripeContext): Router {
@@ -27,6 +46,7 @@ export function createPaymentPageRouter(ctx: FakeStripeContext): Router {
     const form = cardFormSchema.parse(req.body ?? {});
     const check = checkTestCard(form, ctx.nowMs());
     if (!check.ok) {
+      if (check.decline) announceDecline(ctx, record, check.decline);
       sendPaymentPage(res, { record, form, fieldErrors: check.fieldErrors, decline: check.decline }, check.decline ? 402 : 400);
       return;
     }

@@ -5,7 +5,8 @@ import { openDatabase } from '../../server/src/db/knex.ts';
 import { proofPicture, sendTestProof } from '../support/proof-fixtures.ts';
 import { signInAs } from './support/sign-in.ts';
 
-test.describe.configure({ mode: 'serial' });
+// Each journey walks the designer, the checkout and the payment page, so it gets more than the usual 30 s.
+test.describe.configure({ mode: 'serial', timeout: 90_000 });
 
 const price = (page: Page) => page.getByRole('region', { name: 'Your price' });
 const onTheGarment = (page: Page) => page.getByRole('region', { name: 'On the garment' });
@@ -113,7 +114,9 @@ test('when the card is declined, then the payment page says so, nothing is charg
   await expect(page.getByText('Waiting for payment').first()).toBeVisible();
   await expect(page.getByText(/Ada’s name bishop: Bishop dress, 18 months/)).toBeVisible();
   const payment = page.getByRole('region', { name: 'Payment' });
-  await expect(payment).toContainText('your card was not charged');
+  await expect(payment.getByRole('alert')).toContainText('Your card was declined.');
+  await expect(payment).toContainText('Your card has not been charged');
+  await page.screenshot({ path: screens('order-declined'), fullPage: true });
   await expect(payment).not.toContainText('held on your card');
   await expect(payment.getByRole('button', { name: 'Try another card' })).toBeVisible();
   const declinedNumber = /WB-\d+/.exec(page.url())![0];

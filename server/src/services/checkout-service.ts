@@ -6,12 +6,14 @@ import { findOwnedDesign } from '../db/repos/design-repo.ts';
 import { findQuote, type StoredQuote } from '../db/repos/stored-quote-repo.ts';
 import { readShopSchedule } from '../db/repos/shop-settings-repo.ts';
 import {
+  describeDesignForOrder,
   findCustomerOrder,
   insertOrder,
   insertOrderNote,
   insertPendingPayment,
   listPayments,
   nextOrderNumber,
+  readOrderDescription,
   syncOrderPaymentStatus,
   updatePayment,
   type OrderRecord,
@@ -90,13 +92,7 @@ export function createCheckoutService(deps: CheckoutDeps) {
     if (needsRush || hasExpired) return repriced(quote, { needsRush, hasExpired, dates });
 
     const now = deps.now();
-    const details = await db('garments as g')
-      .join('garment_sizes as s', 's.garment_id', 'g.id')
-      .join('fabric_colours as c', 'c.garment_id', 'g.id')
-      .select('g.name as garment_name', 's.label as size_label', 'c.name as colour_name')
-      .where({ 'g.id': design.garmentId, 's.id': design.sizeId, 'c.id': design.colourId })
-      .first();
-    const description = `${design.name}: ${details?.garment_name ?? 'Garment'}, ${details?.size_label ?? ''}, ${details?.colour_name ?? ''}`;
+    const description = await describeDesignForOrder(db, design);
     const created = await db.transaction(async (trx) => {
       const number = await nextOrderNumber(trx);
       const orderId = await insertOrder(trx, {
@@ -165,8 +161,8 @@ export function createCheckoutService(deps: CheckoutDeps) {
       return failure('conflict', order.status === 'cancelled' ? 'This order is cancelled.' : 'Your card is already held for this order; there is nothing to pay now.');
     }
     const paymentId = await insertPendingPayment(db, order, deps.now());
-    const item = await db('order_items').select('description').where({ order_id: order.id }).orderBy('id').first();
-    const checkoutUrl = await startPayment({ ...order, description: item?.description ?? order.number, customerEmail: customer.email }, paymentId);
+    const description = (await readOrderDescription(db, order.id)) ?? order.number;
+    const checkoutUrl = await startPayment({ ...order, description, customerEmail: customer.email }, paymentId);
     return ok({ number: order.number, checkoutUrl });
   }
 

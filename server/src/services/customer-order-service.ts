@@ -4,8 +4,7 @@ import { listCustomerOrders, lockLatestProof, ordersWithProofWaiting, readCustom
 import { findCustomerOrder, listPayments, type PaymentRecord } from '../db/repos/order-repo.ts';
 import { readShopSchedule } from '../db/repos/shop-settings-repo.ts';
 import { restoreDesign } from '../contracts/designs.ts';
-import type { CustomerOrderAction, CustomerOrderResponse, ProofAnswerRequest, customerOrderListResponse } from '../contracts/orders.ts';
-import { proofAnswerRequest } from '../contracts/orders.ts';
+import type { CustomerOrderAction, CustomerOrderResponse, customerOrderListResponse, proofAnswerRequest } from '../contracts/orders.ts';
 import type { CurrentUser } from '../contracts/users.ts';
 import { failure, ok, type Result } from '../contracts/result.ts';
 import type { z } from 'zod';
@@ -81,8 +80,7 @@ export function createCustomerOrderService(deps: { db: Db; mailer: Mailer; appOr
    * The customer's answer to the latest proof: approval lets the studio charge the card and start; a change
    * request sends the studio back to the design. Only the latest version, while unanswered, can be answered.
    */
-  async function answerProof(customer: CurrentUser, number: string, version: number, isApproved: boolean, request: ProofAnswerRequest): Promise<Result<{ number: string; version: number }>> {
-    const answer: ProofAnswer = proofAnswerRequest.parse(request);
+  async function answerProof(customer: CurrentUser, number: string, version: number, isApproved: boolean, answer: ProofAnswer): Promise<Result<{ number: string; version: number }>> {
     if (!isApproved && !answer.comment && answer.pins.length === 0) {
       return failure('invalid', 'Say what you would like changed, in a comment or with a pin on the picture.', { comment: 'Say what you would like changed' });
     }

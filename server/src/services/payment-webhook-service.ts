@@ -2,9 +2,10 @@ import type { Knex } from 'knex';
 import type Stripe from 'stripe';
 import type { Db } from '../db/knex.ts';
 import type { Mailer } from '../integrations/mailer.ts';
-import { recordWebhookEvent } from '../db/repos/webhook-event-repo.ts';
+import { markWebhookEventProcessed, recordWebhookEvent } from '../db/repos/webhook-event-repo.ts';
 import { readShopSchedule } from '../db/repos/shop-settings-repo.ts';
 import {
+  findCustomerEmail,
   findOrderById,
   insertOrderNote,
   lockLatestPendingPayment,
@@ -42,7 +43,7 @@ export function createPaymentWebhookService(deps: { db: Db; stripe: Stripe; mail
       const isNew = await recordWebhookEvent(trx, { id: event.id, type: event.type, payload: rawPayload, receivedAt: now });
       if (!isNew) return { isDuplicate: true, effect: undefined };
       const effect = await apply(trx, event, intent, now);
-      await trx('payment_webhook_events').where({ event_id: event.id }).update({ processed_at: now });
+      await markWebhookEventProcessed(trx, event.id, now);
       return { isDuplicate: false, effect };
     });
     await outcome.effect?.after?.();
@@ -122,9 +123,9 @@ export function createPaymentWebhookService(deps: { db: Db; stripe: Stripe; mail
     }
     await syncOrderPaymentStatus(trx, order.id, now);
     if (order.status !== 'awaiting_payment') return undefined;
-    const customer = await trx('users').select('email').where({ id: order.customerId }).first();
+    const customerEmail = await findCustomerEmail(trx, order.id);
     const shop = await readShopSchedule(trx);
-    const mail: LoggedMail = orderPlacedMail({ appOrigin: deps.appOrigin, shopName: shop.name, number: order.number, orderId: order.id }, customer.email, formatMoneyText(intent.amount_capturable, order.currency));
+    const mail: LoggedMail = orderPlacedMail({ appOrigin: deps.appOrigin, shopName: shop.name, number: order.number, orderId: order.id }, customerEmail, formatMoneyText(intent.amount_capturable, order.currency));
     return { after: () => sendLoggedMail({ db, mailer: deps.mailer, now: deps.now }, mail) };
   }
 

@@ -1,7 +1,7 @@
 import type { Db } from '../db/knex.ts';
 import { findOwnedDesign } from '../db/repos/design-repo.ts';
 import { readShopSchedule } from '../db/repos/shop-settings-repo.ts';
-import { findQuote, insertQuote, type StoredQuote, type StoredQuoteInput } from '../db/repos/stored-quote-repo.ts';
+import { findFabricColourName, findQuote, insertQuote, type StoredQuote, type StoredQuoteInput } from '../db/repos/stored-quote-repo.ts';
 import { estimateRunMinutes } from '../engine/index.ts';
 import type { CreateQuoteRequest, StoredQuoteResponse } from '../contracts/stored-quotes.ts';
 import type { QuotePreviewRequest } from '../contracts/quotes.ts';
@@ -81,14 +81,14 @@ export function createStoredQuoteService(deps: { db: Db; quotes: QuoteService; n
       machine: catalog.machine,
     });
     if (!runTime.ok) return failure('invalid', `The machine time can't be estimated: ${runTime.reason}`);
-    const colour = request.colourId === undefined ? undefined : await db('fabric_colours').select('name').where({ id: request.colourId }).first();
+    const colourName = request.colourId === undefined ? null : await findFabricColourName(db, request.colourId);
     const input: StoredQuoteInput = {
       garmentId: request.garmentId,
       sizeId: request.sizeId,
       colourId: request.colourId ?? null,
       garment: catalog.garment.slug,
       sizeCode: catalog.size.code,
-      fabricColour: colour?.name ?? null,
+      fabricColour: colourName,
       document: request.document,
       quantity,
       isRush: request.isRush,

@@ -66,6 +66,8 @@ describe('POST /pay/:sessionId', () => {
     expect(page).toContain(`value="${cardNumber}"`);
     expect((await stripe.checkout.sessions.retrieve(session.id)).status).toBe('open');
     expect(fake.state.paymentIntents.size).toBe(0);
+    // As Stripe does, the decline is announced on the session's intent, with the session's metadata.
+    expect(fake.state.events.at(-1)).toMatchObject({ type: 'payment_intent.payment_failed', data: { object: { status: 'requires_payment_method', last_payment_error: { code: 'card_declined', message: expect.stringContaining(message) } } } });
   });
 
   it.each([

@@ -173,3 +173,27 @@ export async function insertOrderNote(trx: Db, event: { orderId: number; type: s
     created_at: event.at,
   });
 }
+
+/** How an order line names its design: "Clara's bishop: Bishop dress, 6 months, Christening White". */
+export async function describeDesignForOrder(db: Db, design: { name: string; garmentId: number; sizeId: number; colourId: number }): Promise<string> {
+  const row = await db('garments as g')
+    .join('garment_sizes as s', 's.garment_id', 'g.id')
+    .join('fabric_colours as c', 'c.garment_id', 'g.id')
+    .select('g.name as garment_name', 's.label as size_label', 'c.name as colour_name')
+    .where({ 'g.id': design.garmentId, 's.id': design.sizeId, 'c.id': design.colourId })
+    .first();
+  return row ? `${design.name}: ${row.garment_name}, ${row.size_label}, ${row.colour_name}` : design.name;
+}
+
+/** The order's line as the customer saw it at checkout. */
+export async function readOrderDescription(db: Db, orderId: number): Promise<string | undefined> {
+  const row = await db('order_items').select('description').where({ order_id: orderId }).orderBy('id').first();
+  return row?.description;
+}
+
+/** Where the order's e-mails go. */
+export async function findCustomerEmail(db: Db, orderId: number): Promise<string> {
+  const row = await db('orders as o').join('users as u', 'u.id', 'o.customer_id').select('u.email').where('o.id', orderId).first();
+  if (!row) throw new Error(`Order ${orderId} has no customer.`);
+  return row.email;
+}

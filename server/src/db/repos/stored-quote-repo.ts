@@ -99,3 +99,8 @@ export async function findQuote(db: Db, id: number): Promise<StoredQuote | undef
     expiresAt: new Date(row.expires_at),
   };
 }
+
+export async function findFabricColourName(db: Db, colourId: number): Promise<string | null> {
+  const row = await db('fabric_colours').select('name').where({ id: colourId }).first();
+  return row?.name ?? null;
+}

@@ -14,3 +14,8 @@ export async function recordWebhookEvent(
     .ignore();
   return Number((inserted as unknown as number[])[0] ?? 0) > 0;
 }
+
+/** Marks an event as applied, in the transaction that applied it. */
+export async function markWebhookEventProcessed(db: Db, eventId: string, processedAt: Date): Promise<void> {
+  await db('payment_webhook_events').where({ event_id: eventId }).update({ processed_at: processedAt });
+}

@@ -33,7 +33,7 @@ export function OrderPage() {
   const { number = '' } = useParams();
   const [params] = useSearchParams();
   const checkoutReturn = checkoutReturnOf(params.get('checkout'));
-  const order = useOrder(number, { isAwaitingWebhook: checkoutReturn === 'done' });
+  const order = useOrder(number, { isBackFromPayment: checkoutReturn !== null });
   const garments = useGarments();
   const motifs = useMotifs();
   const fonts = useFonts();
