@@ -236,6 +236,28 @@ describe('garments, sizes and fabric colours', () => {
     expect((await studioGarments()).find((g) => g.id === bib.id)!.sizes.some((s) => s.id === medium.id)).toBe(true);
   });
 
+  it('when a size and a colour are edited, then the storefront shows the new hem, zones and swatch', async () => {
+    const dress = (await studioGarments()).find((g) => g.slug === 'smocked-yoke-dress')!;
+    const [size, colour] = [dress.sizes.at(-1)!, dress.colours.at(-1)!];
+    const zones = [...size.zones.filter((zone) => zone.code !== 'hem'), { code: 'hem', label: 'Hem', xMm: 5, yMm: 300, widthMm: 290, heightMm: 70, hemOffsetMm: 38.1 }];
+    await staff
+      .put(`/api/admin/catalogue/garments/${dress.id}/sizes/${size.id}`)
+      .send({ code: size.code, label: size.label, hemFrontMm: 545, hemCircumferenceMm: 1090, mockupScale: size.mockupScale, zones })
+      .expect(200);
+    await staff.put(`/api/admin/catalogue/garments/${dress.id}/colours/${colour.id}`).send({ name: 'Sea Glass', hex: '#a8d5c9' }).expect(200);
+    const listed = garmentListResponse.parse((await harness.agent().get('/api/catalog/garments')).body).garments.find((g) => g.id === dress.id)!;
+    expect(listed.sizes.find((s) => s.id === size.id)).toMatchObject({ hemFrontMm: 545, hemCircumferenceMm: 1090 });
+    expect(listed.sizes.find((s) => s.id === size.id)!.zones.find((zone) => zone.code === 'hem')?.hemOffsetMm).toBe(38.1);
+    expect(listed.colours.find((c) => c.id === colour.id)).toMatchObject({ name: 'Sea Glass', hex: '#A8D5C9' });
+  });
+
+  it('when a size or colour is addressed under another garment, then it answers 404 and nothing changes', async () => {
+    const [dress, bib] = ['smocked-yoke-dress', 'terry-bib'].map((slug) => garments.find((g) => g.slug === slug)!);
+    await staff.put(`/api/admin/catalogue/garments/${bib.id}/colours/${dress.colours[0]!.id}`).send({ name: 'Stolen', hex: '#000000' }).expect(404);
+    await staff.delete(`/api/admin/catalogue/garments/${bib.id}/sizes/${dress.sizes[0]!.id}`).expect(404);
+    await staff.post('/api/admin/catalogue/garments/9999/colours').send({ name: 'Nowhere', hex: '#000000' }).expect(404);
+  });
+
   it('when a size has one hem length, a hem zone without its distance and a duplicate code, then 400 names each field', async () => {
     const dress = garments.find((g) => g.slug === 'smocked-yoke-dress')!;
     const bad = { ...size, hemCircumferenceMm: null, zones: [{ ...size.zones[0], hemOffsetMm: undefined }] };
