@@ -9,7 +9,8 @@ const shots = 'test-results/screens';
 
 /** Accessibility rules that fail on this page, as "rule: where" lines (axe-core's WCAG 2 A and AA checks). */
 async function accessibilityProblems(page: Page): Promise<string[]> {
-  const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa']).analyze();
+  // The outbox's sandboxed frame runs no scripts, so axe could only wait for it: it is left out.
+  const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa']).exclude('iframe').analyze();
   return results.violations.flatMap((violation) => violation.nodes.map((node) => `${violation.id}: ${node.target.join(' ')}`));
 }
 
@@ -92,10 +93,10 @@ test('when the owner opens the outbox, then a message reads in full and a failed
   await list.getByRole('listitem').first().getByRole('link').click();
   const message = page.getByRole('region', { name: 'Message' });
   await expect(message.locator('pre')).toContainText('Wren & Bobbin');
+  expect(await accessibilityProblems(page)).toEqual([]);
   await message.getByRole('button', { name: 'As designed' }).click();
   await expect(message.frameLocator('iframe').locator('body')).toContainText('Wren & Bobbin');
   await page.screenshot({ path: `${shots}/studio-outbox.png`, fullPage: true });
-  expect(await accessibilityProblems(page)).toEqual([]);
 
   await list.getByLabel('Status').selectOption('failed');
   await expect(list.getByText('Page 1 of 1 · 1 message', { exact: true })).toBeVisible();

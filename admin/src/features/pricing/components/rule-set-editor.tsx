@@ -35,7 +35,10 @@ export function RuleSetEditor({ ruleSet, canEdit }: { ruleSet: RuleSet; canEdit:
   const settled = useDebouncedValue(rules, 350);
   const preview = usePricingPreview(isComplete(settled) ? settled : undefined);
   const isDirty = JSON.stringify(rules) !== JSON.stringify(ruleSet.rules) || (notes || null) !== ruleSet.notes;
-  const errors = { ...fieldErrorsOf(preview.error), ...fieldErrorsOf(save.error) };
+  const saveErrors = fieldErrorsOf(save.error);
+  const errors = { ...fieldErrorsOf(preview.error), ...saveErrors };
+  // The engine's own check names the whole price list ("rules"), not one input, so it is shown above the buttons.
+  const isFormLevelError = save.isError && (Object.keys(saveErrors).length === 0 || 'rules' in saveErrors);
 
   const onSave = () => save.mutate({ rules, notes: notes.trim() || null });
 
@@ -82,7 +85,7 @@ export function RuleSetEditor({ ruleSet, canEdit }: { ruleSet: RuleSet; canEdit:
             <span role="status" className="text-sm text-sage-700">{save.isSuccess && !isDirty ? 'Draft saved.' : ''}</span>
           </div>
         )}
-        {save.isError && !Object.keys(fieldErrorsOf(save.error)).length && <ErrorNotice message={save.error.message} />}
+        {isFormLevelError && <ErrorNotice message={save.error!.message} />}
         {publish.isError && <ErrorNotice message={publish.error.message} />}
       </form>
       <section aria-labelledby="sample-quotes-heading" className="min-w-0 self-start rounded-card border border-linen-200 bg-linen-50 p-4 xl:sticky xl:top-4">
