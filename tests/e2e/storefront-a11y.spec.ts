@@ -38,11 +38,12 @@ const pages: { name: string; path: string; ready: (page: Page) => Promise<void> 
 
 for (const { name, path, ready } of pages) {
   for (const width of [1280, 390]) {
-    test(`when axe checks ${name} at ${width} px, then it finds no serious or critical violations`, async ({ page }) => {
+    test(`when axe checks ${name} at ${width} px, then it finds no serious or critical violations and nothing runs off the side`, async ({ page }) => {
       await page.setViewportSize({ width, height: 900 });
       await page.goto(path);
       await ready(page);
       expect(await blockingViolations(page)).toEqual([]);
+      expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(width);
     });
   }
 }
@@ -57,4 +58,7 @@ test('when axe checks My designs with a share link and a delete question open, t
   await card.getByRole('button', { name: 'Delete' }).click();
   await expect(card.getByRole('button', { name: 'Keep it' })).toBeFocused();
   expect(await blockingViolations(page)).toEqual([]);
+  await page.setViewportSize({ width: 390, height: 844 });
+  expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+  await page.screenshot({ path: 'test-results/screens/my-designs-phone.png', fullPage: true });
 });

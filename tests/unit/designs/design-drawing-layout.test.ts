@@ -10,7 +10,7 @@ const threads = [
 const catalogue: DrawingCatalogue = { garment: bishopDress, motifs: [daisyChain, sittingBunny], fonts: [breezyScript], threads };
 
 const documentOf = (...placements: DesignDocument['placements']): DesignDocument => ({ version: 1, placements });
-const daisyLoop = { id: 'hem', kind: 'border', zone: 'hem', motif: 'daisy-chain', run: 'circumference', hemOffsetMm: 44.45, threads: ['WB-118', 'WB-404'] } satisfies DesignDocument['placements'][number];
+const daisyLoop: DesignDocument['placements'][number] = { id: 'hem', kind: 'border', zone: 'hem', motif: 'daisy-chain', run: 'circumference', hemOffsetMm: 44.45, threads: ['WB-118', 'WB-404'] };
 
 describe('layoutDesignDrawing', () => {
   it('when a border runs all the way round, then only the repeats on the front panel are drawn, on the centre line above the hem', () => {
