@@ -1,6 +1,7 @@
 import type { Db } from '../db/knex.ts';
 import {
   claimSessionArtwork,
+  countOwnedArtwork,
   findOwnedArtwork,
   findOwnedArtworkImage,
   insertArtwork,
@@ -20,6 +21,12 @@ const loadInspector = () => import('../uploads/inspect-upload.ts');
 
 /** Enough to pick from earlier uploads; a studio's customers upload a drawing or two. */
 const LISTED_UPLOADS = 50;
+/**
+ * Uploads are open to visitors who have not signed in, so each owner may keep only so many: a visitor a handful
+ * (signing in moves them to the account), an account more than any family needs.
+ */
+const MAX_VISITOR_UPLOADS = 10;
+const MAX_ACCOUNT_UPLOADS = 200;
 /** Kept to the name's ending: browsers send a bare name, but some send a path. */
 const MAX_NAME_LENGTH = 255;
 
@@ -33,6 +40,13 @@ export function createArtworkService(deps: { db: Db; now: () => Date }) {
 
   async function upload(owner: ArtworkOwner, file: { buffer: Buffer; originalName: string } | undefined): Promise<Result<{ artwork: ArtworkUpload }>> {
     if (!file) return failure('invalid', 'Choose a picture to upload.', { file: 'Choose a picture to upload.' });
+    const isVisitor = 'sessionKey' in owner;
+    if ((await countOwnedArtwork(db, owner)) >= (isVisitor ? MAX_VISITOR_UPLOADS : MAX_ACCOUNT_UPLOADS)) {
+      const message = isVisitor
+        ? `You have uploaded ${MAX_VISITOR_UPLOADS} pictures already; sign in to upload more, and they come with you.`
+        : `You have uploaded ${MAX_ACCOUNT_UPLOADS} pictures, as many as we keep for one account; get in touch with the studio for more.`;
+      return failure('conflict', message, { file: message });
+    }
     const { inspectUpload } = await loadInspector();
     const inspected = await inspectUpload(file.buffer, ['svg', 'png', 'jpeg']);
     if (!inspected.ok) return { ok: false, error: { ...inspected.error, fields: { file: inspected.error.message } } };
