@@ -95,6 +95,13 @@ describe('POST /api/artwork', () => {
     expect(res.body.error.kind).toBe('too-large');
   });
 
+  it('when a visitor who has not signed in has uploaded 10 pictures, then the next is refused with a way to upload more', async () => {
+    const visitor = harness.agent();
+    for (let n = 0; n < 10; n += 1) await upload(visitor, drawingWithScripts, `drawing-${n}.svg`, 'image/svg+xml').expect(201);
+    const res = await upload(visitor, drawingWithScripts, 'one-more.svg', 'image/svg+xml').expect(409);
+    expect(res.body.error.fields).toEqual({ file: 'You have uploaded 10 pictures already; sign in to upload more, and they come with you.' });
+  });
+
   it('when no file is sent, then the field says to choose one', async () => {
     const res = await harness.agent().post('/api/artwork').field('note', 'hello').expect(400);
     expect(res.body.error.fields).toEqual({ file: 'Choose a picture to upload.' });

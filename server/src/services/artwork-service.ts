@@ -1,6 +1,7 @@
 import type { Db } from '../db/knex.ts';
 import {
   claimSessionArtwork,
+  countOwnedArtwork,
   findOwnedArtwork,
   findOwnedArtworkImage,
   insertArtwork,
@@ -11,10 +12,21 @@ import {
 } from '../db/repos/artwork-repo.ts';
 import type { ArtworkUpload } from '../contracts/artwork.ts';
 import { failure, ok, type Result } from '../contracts/result.ts';
-import { inspectUpload } from '../uploads/inspect-upload.ts';
+
+/**
+ * Inspecting an upload needs jsdom (for DOMPurify) and jimp, which take seconds to load: loaded on the first upload,
+ * so that every start of the server does not wait for them (measured about 6 s under load on the test machine).
+ */
+const loadInspector = () => import('../uploads/inspect-upload.ts');
 
 /** Enough to pick from earlier uploads; a studio's customers upload a drawing or two. */
 const LISTED_UPLOADS = 50;
+/**
+ * Uploads are open to visitors who have not signed in, so each owner may keep only so many: a visitor a handful
+ * (signing in moves them to the account), an account more than any family needs.
+ */
+const MAX_VISITOR_UPLOADS = 10;
+const MAX_ACCOUNT_UPLOADS = 200;
 /** Kept to the name's ending: browsers send a bare name, but some send a path. */
 const MAX_NAME_LENGTH = 255;
 
@@ -28,6 +40,14 @@ export function createArtworkService(deps: { db: Db; now: () => Date }) {
 
   async function upload(owner: ArtworkOwner, file: { buffer: Buffer; originalName: string } | undefined): Promise<Result<{ artwork: ArtworkUpload }>> {
     if (!file) return failure('invalid', 'Choose a picture to upload.', { file: 'Choose a picture to upload.' });
+    const isVisitor = 'sessionKey' in owner;
+    if ((await countOwnedArtwork(db, owner)) >= (isVisitor ? MAX_VISITOR_UPLOADS : MAX_ACCOUNT_UPLOADS)) {
+      const message = isVisitor
+        ? `You have uploaded ${MAX_VISITOR_UPLOADS} pictures already; sign in to upload more, and they come with you.`
+        : `You have uploaded ${MAX_ACCOUNT_UPLOADS} pictures, as many as we keep for one account; get in touch with the studio for more.`;
+      return failure('conflict', message, { file: message });
+    }
+    const { inspectUpload } = await loadInspector();
     const inspected = await inspectUpload(file.buffer, ['svg', 'png', 'jpeg']);
     if (!inspected.ok) return { ok: false, error: { ...inspected.error, fields: { file: inspected.error.message } } };
     const clean = inspected.value;

@@ -48,6 +48,18 @@ describe('priceQuote', () => {
     expect(quote.lines[1]).toMatchObject({ placementId: 'hem', label: 'Hem border: 12,345 stitches × 3 garments' });
   });
 
+  it('when a picture’s stitches are not yet counted, then its line charges the minimum and says so, and the setup applies', () => {
+    const scan: QuotePlacement = { id: 'scan', label: 'Your artwork', kind: 'stitching', stitches: 0, hoopings: 1, colorChanges: 0, hasCustomerArtwork: true, isStitchCountPending: true };
+    const quote = priceQuote({ ...order, quantity: 1, isRush: false, placements: [scan] });
+    if (!quote.ok) throw new Error(quote.reason);
+    expect(quote.lines.map(({ code, label, amountCents }) => [code, label, amountCents])).toEqual([
+      ['garment', 'Smocked dress, size 4 × 1 garment', 2000],
+      ['stitching', 'Your artwork: minimum charge until the studio counts the stitches × 1 garment', 500], // the 500 ¢ minimum
+      ['artwork-setup', 'Artwork setup: 1 design, once per order', 2500],
+      ['tax', 'Tax 8.25 %', 413], // 8.25 % of 5,000 = 412.5, half up
+    ]);
+  });
+
   it('when two garments share a size code, then each is priced from its own list and named on the garment line', () => {
     const bib = priceQuote({ ...order, garment: { slug: 'bib', name: 'Terry bib' }, quantity: 1 });
     const frock = priceQuote({ ...order, quantity: 1 });

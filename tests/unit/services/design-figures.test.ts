@@ -187,6 +187,14 @@ describe('figureDesign', () => {
     expect(figured.value.placements[0].estimate.widthMm).toBeCloseTo(50.4, 1);
   });
 
+  it('when the upload is a photo or scan, then it has no stitch count yet, keeps its proportions, and its price is marked provisional', () => {
+    const artwork: DesignPlacement = { id: 'scan', kind: 'artwork', zone: 'chest', centerXMm: 50, centerYMm: 50, rotationDeg: 0, artworkUploadId: 2, widthMm: 60 };
+    const figured = figureDesign(catalogWith({ artworkUploads: new Map([[2, { rasterSizePx: { widthPx: 900, heightPx: 600 } }]]) }), design(artwork));
+    if (!figured.ok) throw new Error(figured.error.message);
+    expect(figured.value.placements[0]).toMatchObject({ isPriceProvisional: true, hasCustomerArtwork: true, estimate: { stitches: 0, widthMm: 60, heightMm: 40 } });
+    expect(figured.value.quotePlacements[0]).toMatchObject({ stitches: 0, hasCustomerArtwork: true, isStitchCountPending: true });
+  });
+
   it('when a design has nothing on it, then there is nothing to price', () => {
     const figured = figureDesign(catalogWith(), design());
     expect(!figured.ok && figured.error.fields).toEqual({ 'document.placements': 'Add a border, a name or a motif so there is embroidery to price.' });

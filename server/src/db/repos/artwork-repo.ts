@@ -75,6 +75,11 @@ export async function findOwnedArtworkImage(db: Db, owner: ArtworkOwner, id: num
   return row.sanitized_svg !== null ? { kind: 'svg', svg: row.sanitized_svg } : { kind: 'raster', png: row.png };
 }
 
+export async function countOwnedArtwork(db: Db, owner: ArtworkOwner): Promise<number> {
+  const row = await ownedBy(db('artwork_uploads').count({ count: '*' }), owner).first();
+  return Number(row?.count ?? 0);
+}
+
 /** The owner's uploads, newest first. */
 export async function listOwnedArtwork(db: Db, owner: ArtworkOwner, limit: number): Promise<ArtworkMeta[]> {
   const rows = await ownedBy(db('artwork_uploads').select(metaColumns(db)), owner)

@@ -4,9 +4,11 @@ import { artworkWidthRange } from '../model/artwork-rules.ts';
 import { artworkOf, sizeOf, zoneOf, type DesignSetting } from '../model/design-setting.ts';
 import type { DesignerState } from '../model/designer-state.ts';
 import { largestHoop } from '../model/hoop-limit.ts';
-import { uprightExtent } from '../model/item-extent.ts';
+import { itemExtent, uprightExtent } from '../model/item-extent.ts';
+import { fitsZone } from '../model/clamp.ts';
 import { ArtworkWidthField } from './artwork-width-field.tsx';
 import { ZoneChoice } from './zone-choice.tsx';
+import { TooBigNote } from './too-big-note.tsx';
 
 export function ArtworkEditor({ placement, setting, state, dispatch }: { placement: ArtworkPlacement; setting: DesignSetting; state: DesignerState; dispatch: Dispatch }) {
   const artwork = artworkOf(setting, placement.artworkUploadId);
@@ -32,6 +34,7 @@ export function ArtworkEditor({ placement, setting, state, dispatch }: { placeme
       ) : (
         <p className="text-sm text-walnut-700">This artwork was uploaded in another browser or account; sign in to the account that uploaded it to see it.</p>
       )}
+      {zone && !fitsZone(itemExtent(setting, placement), zone) && <TooBigNote zone={zone} advice="Try it narrower, turned less, or in another place." />}
       <ArtworkWidthField
         value={placement.widthMm}
         heightMm={uprightExtent(setting, placement).heightMm}
