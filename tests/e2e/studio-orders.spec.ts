@@ -77,6 +77,13 @@ test('when staff look at due dates or use a phone, then the calendar marks rush 
   await page.screenshot({ path: shots('calendar'), fullPage: true });
   expect(await accessibilityProblems(page)).toEqual([]);
 
+  await page.getByRole('button', { name: 'List' }).click();
+  await page.getByRole('table').getByRole('button', { name: 'Harriet Okonkwo' }).first().click();
+  await expect(page.getByText('Only the orders of')).toContainText('Harriet Okonkwo');
+  await expect(page.getByRole('table').getByRole('button', { name: 'Priya Castellanos' })).toHaveCount(0);
+  await page.getByRole('button', { name: 'Show every customer' }).click();
+  await expect(page.getByRole('table').getByRole('button', { name: 'Priya Castellanos' }).first()).toBeVisible();
+
   await page.setViewportSize({ width: 390, height: 844 });
   await page.goto('/admin/orders?sort=due&dir=asc');
   const cards = page.getByRole('list', { name: 'Orders' });
