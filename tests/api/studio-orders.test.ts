@@ -210,7 +210,7 @@ describe('who may use the studio’s routes', () => {
 
   it('when a customer or a signed-out visitor calls any admin route, then every one is refused (403 and 401) and nothing changes', async () => {
     const routes = adminRoutes(harness.app);
-    const mine = ['get /api/admin/orders', 'get /api/admin/orders/due', 'post /api/admin/orders/:number/proofs', 'get /api/admin/orders/:number/proofs/:version/image', 'post /api/admin/orders/:number/capture', 'post /api/admin/orders/:number/cancel', 'post /api/admin/orders/:number/refunds', 'post /api/admin/orders/:number/stitched', 'post /api/admin/orders/:number/shipped', 'get /api/admin/orders/:number'];
+    const mine = ['get /api/admin/orders', 'get /api/admin/orders/due', 'post /api/admin/orders/:number/proofs', 'get /api/admin/orders/:number/proofs/preview', 'get /api/admin/orders/:number/proofs/:version/image', 'post /api/admin/orders/:number/capture', 'post /api/admin/orders/:number/cancel', 'post /api/admin/orders/:number/refunds', 'post /api/admin/orders/:number/stitched', 'post /api/admin/orders/:number/shipped', 'get /api/admin/orders/:number'];
     expect(routes.map((route) => `${route.method} ${route.path}`)).toEqual(expect.arrayContaining(mine));
     const customer = harness.agent();
     await harness.signIn(customer, 'harriet@example.test');

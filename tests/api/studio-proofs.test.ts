@@ -107,6 +107,18 @@ describe('POST /api/admin/orders/:number/proofs', () => {
   });
 });
 
+describe('GET /api/admin/orders/:number/proofs/preview', () => {
+  it('when staff preview the drawing, then they get the picture a render would send, and nothing is kept or sent', async () => {
+    const order = await harness.db('orders').where({ number: 'WB-1003' }).first('id', 'status');
+    const mailsBefore = await harness.db('email_log').where({ order_id: order.id }).count({ n: '*' });
+    const res = await staff.get('/api/admin/orders/WB-1003/proofs/preview').expect(200).expect('Content-Type', 'image/png');
+    expect((await Jimp.read(res.body as Buffer)).width).toBe(1080);
+    expect(await harness.db('orders').where({ id: order.id }).first('status')).toEqual({ status: order.status });
+    expect(await harness.db('email_log').where({ order_id: order.id }).count({ n: '*' })).toEqual(mailsBefore);
+    await staff.get('/api/admin/orders/WB-9999/proofs/preview').expect(404);
+  });
+});
+
 describe('GET /api/admin/orders/:number/proofs/:version/image', () => {
   it('when the version does not exist or kept no picture, then it answers 404', async () => {
     await staff.get('/api/admin/orders/WB-1010/proofs/9/image').expect(404);

@@ -98,6 +98,9 @@ export type SentProofResponse = z.infer<typeof sentProofResponse>;
 /** Where the studio app loads a proof's picture. */
 export const proofImagePath = (number: string, version: number) => `/api/admin/orders/${encodeURIComponent(number)}/proofs/${version}/image`;
 
+/** The drawing a render proof would send, made afresh and not kept. */
+export const proofPreviewPath = (number: string) => `/api/admin/orders/${encodeURIComponent(number)}/proofs/preview`;
+
 export const proofImageParams = z.object({
   number: z.string().regex(/^[A-Z]{2}-\d{1,10}$/, 'must look like WB-1001'),
   version: z.coerce.number({ error: 'must be a version number' }).int('must be a version number').min(1, 'versions start at 1').max(1000, 'is not a version of this proof'),

@@ -21,16 +21,25 @@ import { proofReadyMail } from './studio-order-mail.ts';
 export function createProofService(deps: { db: Db; mailer: Mailer; now: () => Date; appOrigin: string; fonts: LetteringFontLoader }) {
   const { db } = deps;
 
-  async function pictureFor(orderId: number, request: SendProofRequest, photo: Buffer | undefined): Promise<Result<Buffer>> {
-    if (request.source === 'photo') {
-      if (!photo) return failure('invalid', 'Choose the photo of the stitch-out to send.', { file: 'Choose a PNG or JPEG photo' });
-      const inspected = await inspectUpload(photo, ['png', 'jpeg']);
-      if (!inspected.ok) return inspected;
-      return inspected.value.kind === 'svg' ? failure('unsupported-type', 'Please upload a PNG or JPEG photo.') : ok(inspected.value.png);
-    }
+  async function drawing(orderId: number): Promise<Result<Buffer>> {
     const scene = await loadProofScene(db, orderId);
     if (!scene) return failure('conflict', 'This order has no design to draw a proof from; send a photo instead.');
     return ok((await renderProof(scene, deps.fonts)).png);
+  }
+
+  async function pictureFor(orderId: number, request: SendProofRequest, photo: Buffer | undefined): Promise<Result<Buffer>> {
+    if (request.source === 'render') return drawing(orderId);
+    if (!photo) return failure('invalid', 'Choose the photo of the stitch-out to send.', { file: 'Choose a PNG or JPEG photo' });
+    const inspected = await inspectUpload(photo, ['png', 'jpeg']);
+    if (!inspected.ok) return inspected;
+    return inspected.value.kind === 'svg' ? failure('unsupported-type', 'Please upload a PNG or JPEG photo.') : ok(inspected.value.png);
+  }
+
+  /** The drawing a render proof would send now, for the studio to look at first; nothing is stored or sent. */
+  async function preview(number: string): Promise<Result<Buffer>> {
+    const order = await findStudioOrder(db, number);
+    if (!order) return failure('not-found', `There is no order ${number}.`);
+    return drawing(order.id);
   }
 
   async function send(number: string, request: SendProofRequest, photo: Buffer | undefined, actor: StudioActor): Promise<Result<SentProofResponse>> {
@@ -75,5 +84,5 @@ export function createProofService(deps: { db: Db; mailer: Mailer; now: () => Da
     return ok(row.image_png as Buffer);
   }
 
-  return { send, image };
+  return { send, preview, image };
 }

@@ -45,7 +45,13 @@ export function OrdersPage() {
             <EmptyState title="No orders match.">Try fewer status chips, a wider date range or another search.</EmptyState>
           ) : (
             <div className={`grid gap-4 transition-opacity ${board.isPlaceholderData ? 'opacity-60' : ''}`} aria-busy={board.isFetching}>
-              <OrderBoardTable rows={board.data.rows} query={query} onSort={(sort, dir) => update({ sort, dir })} />
+              {query.customer && board.data.rows[0] && (
+                <p className="flex flex-wrap items-center gap-2 text-sm">
+                  Only the orders of <strong>{board.data.rows[0].customer.name}</strong>
+                  <button type="button" onClick={() => update({ customer: undefined })} className="rounded-full border border-linen-300 px-3 py-1 hover:bg-linen-100">Show every customer</button>
+                </p>
+              )}
+              <OrderBoardTable rows={board.data.rows} query={query} onSort={(sort, dir) => update({ sort, dir })} onCustomer={(customer) => update({ customer })} />
               <BoardPager query={query} total={board.data.total} onChange={update} />
             </div>
           )}

@@ -71,6 +71,12 @@ export function createStudioOrdersRouter(deps: StudioOrdersDeps): Router {
     sendResult(res, await proofs.send(numberOf(res), req.body, req.file?.buffer, actorOf(req)), 201);
   });
 
+  router.get('/:number/proofs/preview', validate(orderNumberParams, 'params'), async (_req, res) => {
+    const image = await proofs.preview(numberOf(res));
+    if (!image.ok) return sendResult(res, image);
+    res.type('image/png').send(image.value);
+  });
+
   router.get('/:number/proofs/:version/image', validate(proofImageParams, 'params'), async (_req, res) => {
     const { number, version } = res.locals.params as z.infer<typeof proofImageParams>;
     const image = await proofs.image(number, version);

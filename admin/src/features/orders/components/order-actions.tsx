@@ -55,12 +55,15 @@ export function OrderActions({ detail }: { detail: OrderDetailResponse }) {
   return (
     <div className="grid gap-3">
       <div className="flex flex-wrap gap-2">
-        {can('start_production') && <Button onClick={() => open('charge')}>Approve & charge {money(live?.authorizedCents ?? order.totalCents)}</Button>}
+        {can('start_production') && order.paymentStatus === 'authorized' && <Button onClick={() => open('charge')}>Approve & charge {money(live?.authorizedCents ?? order.totalCents)}</Button>}
         {can('mark_stitched') && <Button onClick={() => run({ action: 'stitched' })} disabled={action.isPending}>Mark stitched</Button>}
         {can('ship') && <Button onClick={() => open('ship')}>Mark shipped</Button>}
         {can('refund') && refundableCents > 0 && <Button tone="quiet" onClick={() => open('refund')}>Refund…</Button>}
         {can('cancel') && <Button tone="quiet" onClick={() => open('cancel')}>Cancel order…</Button>}
       </div>
+      {can('start_production') && order.paymentStatus !== 'authorized' && (
+        <p className="rounded-md bg-saffron-100 p-2 text-sm">The proof is approved, but no card is held: the customer has been asked to confirm their card again. Charge the order once they have.</p>
+      )}
       {step === 'charge' && (
         <Confirm question={`Charge ${money(live?.authorizedCents ?? order.totalCents)} to ${order.customer.name}’s card and start production?`} confirmLabel="Charge the card" isBusy={action.isPending} onBack={() => setStep(null)} onConfirm={() => run({ action: 'capture' })} />
       )}

@@ -10,6 +10,11 @@ import { DueFlags, formatDueDay } from './order-badges.tsx';
 const placed = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
 const column = createColumnHelper<BoardOrder>();
 
+/** What the cells may ask of the board. */
+interface BoardMeta {
+  onCustomer: (customerId: number) => void;
+}
+
 const columns = [
   column.accessor('number', {
     id: 'number',
@@ -25,12 +30,18 @@ const columns = [
     id: 'customer',
     header: 'Customer',
     enableSorting: false,
-    cell: (info) => (
-      <span>
-        {info.getValue()}
-        <span className="block text-xs text-walnut-500">{info.row.original.customer.email}</span>
-      </span>
-    ),
+    cell: (info) => {
+      const { customer } = info.row.original;
+      const onCustomer = (info.table.options.meta as BoardMeta | undefined)?.onCustomer;
+      return (
+        <span>
+          <button type="button" onClick={() => onCustomer?.(customer.id)} title={`Only ${customer.name}’s orders`} className="text-left underline-offset-2 hover:underline">
+            {info.getValue()}
+          </button>
+          <span className="block text-xs text-walnut-500">{customer.email}</span>
+        </span>
+      );
+    },
   }),
   column.accessor('status', { id: 'status', header: 'Where it stands', cell: (info) => statusLabels[info.getValue()] }),
   column.accessor('neededBy', {
@@ -53,9 +64,9 @@ const sortable = new Set<string>(['number', 'placed', 'status', 'due', 'total'] 
  * The board as a table (sorting by the server: the header buttons write the sort into the URL) and, at phone
  * width, as one card per order with the same facts.
  */
-export function OrderBoardTable({ rows, query, onSort }: { rows: BoardOrder[]; query: OrderBoardQuery; onSort: (sort: BoardSortKey, dir: 'asc' | 'desc') => void }) {
+export function OrderBoardTable({ rows, query, onSort, onCustomer }: { rows: BoardOrder[]; query: OrderBoardQuery; onSort: (sort: BoardSortKey, dir: 'asc' | 'desc') => void; onCustomer: (customerId: number) => void }) {
   const sorting = useMemo<SortingState>(() => [{ id: query.sort, desc: query.dir === 'desc' }], [query.sort, query.dir]);
-  const table = useReactTable({ data: rows, columns, state: { sorting }, manualSorting: true, getCoreRowModel: getCoreRowModel() });
+  const table = useReactTable({ data: rows, columns, state: { sorting }, manualSorting: true, getCoreRowModel: getCoreRowModel(), meta: { onCustomer } satisfies BoardMeta });
   const sortBy = (id: string) => onSort(id as BoardSortKey, query.sort === id && query.dir === 'asc' ? 'desc' : query.sort === id ? 'asc' : id === 'due' || id === 'number' ? 'asc' : 'desc');
 
   return (

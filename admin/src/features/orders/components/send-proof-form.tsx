@@ -1,9 +1,23 @@
 import { useState, type FormEvent } from 'react';
 import { Button } from '@ui/components/button.tsx';
 import type { ApiError } from '@ui/api-client.ts';
+import { proofPreviewPath } from '@server/contracts/studio-orders.ts';
 import { useSendProof } from '../api/send-proof.ts';
 
 const defaultMessage = 'Here is your proof, drawn to scale on the garment. Approve it to start stitching, or point at anything you would like changed.';
+
+/** The drawing a render would send, drawn by the server on request; nothing is stored until it is sent. */
+function DrawingPreview({ number }: { number: string }) {
+  const [state, setState] = useState<'closed' | 'loading' | 'shown' | 'failed'>('closed');
+  if (state === 'closed') return <div><Button tone="quiet" onClick={() => setState('loading')}>Preview the drawing</Button></div>;
+  return (
+    <figure className="grid gap-1">
+      {state === 'loading' && <p role="status" className="text-walnut-500">Drawing the design on the garment…</p>}
+      {state === 'failed' && <p role="alert" className="text-madder-700">The drawing could not be made; try again, or send a photo.</p>}
+      <img src={proofPreviewPath(number)} alt="Preview of the drawing the customer would get" onLoad={() => setState('shown')} onError={() => setState('failed')} className={`w-full max-w-sm rounded-md border border-linen-200 ${state === 'shown' ? '' : 'hidden'}`} />
+    </figure>
+  );
+}
 
 /** Sends the next proof version: the server's drawing of the design, or a photo of a test stitch-out. */
 export function SendProofForm({ number, versionCount }: { number: string; versionCount: number }) {
@@ -29,6 +43,7 @@ export function SendProofForm({ number, versionCount }: { number: string; versio
         <label className="flex items-center gap-2"><input type="radio" name="source" checked={source === 'render'} onChange={() => setSource('render')} /> Drawing of the design on the garment</label>
         <label className="flex items-center gap-2"><input type="radio" name="source" checked={source === 'photo'} onChange={() => setSource('photo')} /> Photo of a test stitch-out</label>
       </fieldset>
+      {source === 'render' && <DrawingPreview number={number} />}
       {source === 'photo' && (
         <label className="grid gap-1">
           <span className="font-medium">Photo (PNG or JPEG)</span>
