@@ -35,11 +35,12 @@ describe('GET /api/admin/overview', () => {
     expect(machineHours.capacityHours).toBe(30);
     expect(machineHours.weeks.map((week) => week.weekStart)).toEqual(['2026-11-30', '2026-12-07', '2026-12-14', '2026-12-21', '2026-12-28', '2027-01-04']);
     // Week of 30 Nov: WB-1006 42.35 + WB-1010 79.25 = 121.60 min = 2.0267 h.
-    // Week of 7 Dec: WB-1004 35.14 + WB-1008 63.27 + WB-1009 17.63 (placed Thu 26 Nov + 10 working days = Thu 10 Dec) = 116.04 min = 1.934 h.
+    // Week of 7 Dec: WB-1004 35.14 + WB-1008 63.27 + WB-1009 17.63 (placed Thu 26 Nov + 10 working days = Thu 10 Dec)
+    // + WB-1013 66.45 (needed by Thu 10 Dec) = 182.49 min = 3.0415 h.
     // Week of 14 Dec: WB-1007 48.10 min = 0.8017 h. WB-1003 is stitched, so it no longer books the machine.
     expect(machineHours.weeks.slice(0, 3)).toEqual([
       { weekStart: '2026-11-30', bookedHours: 2.03, orderCount: 2 },
-      { weekStart: '2026-12-07', bookedHours: 1.93, orderCount: 3 },
+      { weekStart: '2026-12-07', bookedHours: 3.04, orderCount: 4 },
       { weekStart: '2026-12-14', bookedHours: 0.8, orderCount: 1 },
     ]);
   });
@@ -51,8 +52,9 @@ describe('GET /api/admin/overview', () => {
     const byWeek = Object.fromEntries(revenue.weeks.map((week) => [week.weekStart, week]));
     // Week of 9 Nov: 22.47 + 33.17 + 85.51 = 141.15 captured.
     expect(byWeek['2026-11-09']).toEqual({ weekStart: '2026-11-09', capturedCents: 14_115, refundedCents: 0, netCents: 14_115 });
-    // Week of 16 Nov: 84.58 + 74.90 = 159.48 captured; refunds 84.58 (WB-1005) + 5.00 (WB-1002) = 89.58; net 69.90.
-    expect(byWeek['2026-11-16']).toEqual({ weekStart: '2026-11-16', capturedCents: 15_948, refundedCents: 8958, netCents: 6990 });
+    // Week of 16 Nov: 84.58 + 74.90 + 87.33 (WB-1013, 19 Nov) = 246.81 captured; refunds 84.58 (WB-1005) + 5.00 (WB-1002) =
+    // 89.58; net 157.23.
+    expect(byWeek['2026-11-16']).toEqual({ weekStart: '2026-11-16', capturedCents: 24_681, refundedCents: 8958, netCents: 15_723 });
     expect(byWeek['2026-11-30']).toEqual({ weekStart: '2026-11-30', capturedCents: 0, refundedCents: 0, netCents: 0 });
   });
 

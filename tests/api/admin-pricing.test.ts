@@ -57,7 +57,7 @@ describe('GET /api/admin/pricing', () => {
     const list = ruleSetListResponse.parse((await owner.get('/api/admin/pricing').expect(200)).body);
     expect(list.canEdit).toBe(true);
     expect(list.ruleSets.map((r) => [r.version, r.status])).toEqual([[2, 'draft'], [1, 'published']]);
-    expect(list.ruleSets[1].quoteCount).toBe(14);
+    expect(list.ruleSets[1].quoteCount).toBe(15);
     expect(list.ruleSets[1].publishedAt).toBe('2026-11-01T16:00:00.000Z');
   });
 
@@ -148,7 +148,7 @@ describe('POST /api/admin/pricing/:id/publish and /drafts', () => {
 
     const list = ruleSetListResponse.parse((await owner.get('/api/admin/pricing').expect(200)).body);
     expect(list.ruleSets.map((r) => [r.version, r.status])).toEqual([[2, 'published'], [1, 'retired']]);
-    expect(list.ruleSets[1]).toMatchObject({ quoteCount: 14, publishedAt: '2026-11-01T16:00:00.000Z' });
+    expect(list.ruleSets[1]).toMatchObject({ quoteCount: 15, publishedAt: '2026-11-01T16:00:00.000Z' });
     expect(await quoteRuleSetIds()).toEqual(before);
     expect(new Set(before.map((q) => q.pricing_rule_set_id))).toEqual(new Set([1]));
 

@@ -2,6 +2,7 @@
  * The e-mails the customer's side of an order sends, as plain text with a light HTML copy. Each names the order
  * and links to its page, where everything else lives.
  */
+import { mailBodies } from './mail-layout.ts';
 import type { LoggedMail } from './order-mail.ts';
 
 interface MailContext {
@@ -11,13 +12,9 @@ interface MailContext {
   orderId: number;
 }
 
-const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
-
 function compose(context: MailContext, to: string, template: string, subject: string, paragraphs: string[]): LoggedMail {
   const link = `${context.appOrigin}/orders/${encodeURIComponent(context.number)}`;
-  const text = [...paragraphs, `See your order: ${link}`, `— ${context.shopName}`].join('\n\n');
-  const html = [...paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`), `<p><a href="${escapeHtml(link)}">See order ${escapeHtml(context.number)}</a></p>`, `<p>— ${escapeHtml(context.shopName)}</p>`].join('\n');
-  return { to, subject, text, html, template, orderId: context.orderId };
+  return { to, subject, ...mailBodies([...paragraphs, `See your order: ${link}`, `— ${context.shopName}`]), template, orderId: context.orderId };
 }
 
 export function orderPlacedMail(context: MailContext, to: string, totalText: string): LoggedMail {

@@ -2,6 +2,7 @@
  * The messages the studio's actions send a customer: plain words, the order number, and a link to the order's page
  * on the storefront, where the proof, the payment and the parcel's progress are shown.
  */
+import { mailBodies } from './mail-layout.ts';
 import type { LoggedMail } from './order-mail.ts';
 
 export interface MailOrder {
@@ -10,6 +11,8 @@ export interface MailOrder {
   customerName: string;
   customerEmail: string;
   currency: string;
+  /** Signs the message. */
+  shopName: string;
 }
 
 const formatMoney = (cents: number, currency: string) => new Intl.NumberFormat('en-US', { style: 'currency', currency }).format(cents / 100);
@@ -17,8 +20,7 @@ const firstName = (name: string) => name.split(/\s+/)[0] || name;
 const orderLink = (appOrigin: string, number: string) => `${appOrigin}/orders/${encodeURIComponent(number)}`;
 
 function compose(order: MailOrder, template: string, subject: string, paragraphs: string[]): LoggedMail {
-  const text = [`Hello ${firstName(order.customerName)},`, ...paragraphs, 'Wren & Bobbin'].join('\n\n');
-  return { to: order.customerEmail, subject, text, template, orderId: order.id };
+  return { to: order.customerEmail, subject, ...mailBodies([`Hello ${firstName(order.customerName)},`, ...paragraphs, `— ${order.shopName}`]), template, orderId: order.id };
 }
 
 export function proofReadyMail(order: MailOrder, appOrigin: string, proof: { version: number; message: string }): LoggedMail {

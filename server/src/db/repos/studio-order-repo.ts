@@ -13,6 +13,8 @@ export interface StudioOrder {
   customerEmail: string;
   totalCents: number;
   currency: string;
+  /** The studio's name, which signs the e-mails the action sends. */
+  shopName: string;
 }
 
 /** The card payment of an order: the authorization checkout made, and what has been charged and given back. */
@@ -29,8 +31,10 @@ export interface OrderPayment {
 export async function findStudioOrder(db: Db | Knex.Transaction, number: string, options: { lock?: boolean } = {}): Promise<StudioOrder | undefined> {
   const query = db('orders as o')
     .join('users as u', 'u.id', 'o.customer_id')
+    // The single settings row (id 1) names the studio.
+    .join('shop_settings as s', 's.id', db.raw('1'))
     .where('o.number', number)
-    .first('o.id', 'o.number', 'o.status', 'o.payment_status', 'o.total_cents', 'o.currency', 'u.name as customer_name', 'u.email as customer_email');
+    .first('o.id', 'o.number', 'o.status', 'o.payment_status', 'o.total_cents', 'o.currency', 'u.name as customer_name', 'u.email as customer_email', 's.name as shop_name');
   // Locks the order row (and the customer's, which nothing else writes in these flows).
   if (options.lock) query.forUpdate();
   const row = await query;
@@ -44,6 +48,7 @@ export async function findStudioOrder(db: Db | Knex.Transaction, number: string,
     customerEmail: row.customer_email,
     totalCents: Number(row.total_cents),
     currency: row.currency,
+    shopName: row.shop_name,
   };
 }
 
