@@ -178,3 +178,11 @@ describe('POST /api/quotes/preview', () => {
     }
   });
 });
+
+describe('GET /api/quotes/ready-dates', () => {
+  it('when anyone asks on Tuesday 1 December, then an order is ready in 10 working days, a rush in 5', async () => {
+    // The harness's clock reads 1 December 2026, a Tuesday (Gregorian calendar); the seeded lead time is 10 working days.
+    const response = await request(harness.app).get('/api/quotes/ready-dates').expect(200);
+    expect(response.body).toEqual({ leadTimeDays: 10, earliestReadyDate: '2026-12-15', earliestRushDate: '2026-12-08' });
+  });
+});

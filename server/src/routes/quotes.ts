@@ -33,6 +33,10 @@ export function createQuotesRouter(deps: { quotes: QuoteService; storedQuotes: S
     if (result.ok && viewer.customerId === null) req.session.quoteIds = [...viewer.sessionQuoteIds, result.value.quoteId].slice(-REMEMBERED_VISITOR_QUOTES);
     sendResult(res, result, 201);
   });
+  // When an order placed today could be ready, for the designer's price panel (before any quote is stored).
+  router.get('/ready-dates', async (_req, res) => {
+    res.json(await deps.storedQuotes.readyDatesToday());
+  });
   router.get('/:id', validate(quoteIdParams, 'params'), async (req, res) => {
     const { id } = res.locals.params as z.infer<typeof quoteIdParams>;
     sendResult(res, await deps.storedQuotes.get(id, viewerOf(req)));

@@ -21,6 +21,7 @@ import { useInitialDesign } from '../../features/designer/hooks/use-initial-desi
 import { useLetteringFontsReady } from '../../features/designer/hooks/use-lettering-fonts.ts';
 import { DesignQuote } from '../../features/quote/components/design-quote.tsx';
 import { DesignQuoteTotal } from '../../features/quote/components/design-quote-total.tsx';
+import { ReadyDatesNote } from '../../features/quote/components/ready-dates-note.tsx';
 import { paths } from '../../config/paths.ts';
 
 interface Catalogue {
@@ -64,7 +65,12 @@ function LoadedDesigner({ garment, motifs, fonts, threads, saved: opened }: Cata
           <FabricColourPicker colours={garment.colours} selected={garment.colours.find((colour) => colour.id === colourId)} onSelect={(id) => designer.dispatch('set-fabric-colour', { colourId: id })} />
         </div>
       }
-      price={<DesignQuote request={request} />}
+      price={
+        <>
+          <DesignQuote request={request} />
+          <ReadyDatesNote isRush={request.isRush} />
+        </>
+      }
       priceTotal={<DesignQuoteTotal request={request} />}
     />
   );
