@@ -7,9 +7,6 @@ import { HomePage } from './routes/home.tsx';
 import { GarmentPage } from './routes/garment.tsx';
 import { SignInPage } from './routes/sign-in.tsx';
 import { NotFoundPage } from './routes/not-found.tsx';
-import { CheckoutPage } from './routes/checkout.tsx';
-import { OrdersPage } from './routes/orders.tsx';
-import { OrderPage } from './routes/order.tsx';
 
 export const router = createBrowserRouter([
   {
@@ -29,9 +26,22 @@ export const router = createBrowserRouter([
             hydrateFallbackElement: <Loading label="Opening the designer…" />,
           },
           { path: paths.signIn.path, element: <SignInPage /> },
-          { path: paths.checkout.path, element: <CheckoutPage /> },
-          { path: paths.orders.path, element: <OrdersPage /> },
-          { path: paths.order.path, element: <OrderPage /> },
+          // Lazy: the form library and the order pages are for customers who order, not for browsing.
+          {
+            path: paths.checkout.path,
+            lazy: () => import('./routes/checkout.tsx').then(({ CheckoutPage }) => ({ Component: CheckoutPage })),
+            hydrateFallbackElement: <Loading label="Opening the checkout…" />,
+          },
+          {
+            path: paths.orders.path,
+            lazy: () => import('./routes/orders.tsx').then(({ OrdersPage }) => ({ Component: OrdersPage })),
+            hydrateFallbackElement: <Loading label="Fetching your orders…" />,
+          },
+          {
+            path: paths.order.path,
+            lazy: () => import('./routes/order.tsx').then(({ OrderPage }) => ({ Component: OrderPage })),
+            hydrateFallbackElement: <Loading label="Fetching your order…" />,
+          },
           // Lazy too: only customers with saved designs, and people opening a shared link, need these.
           {
             path: paths.designs.path,
