@@ -1,3 +1,4 @@
+import type { ComponentType } from 'react';
 import { createBrowserRouter } from 'react-router-dom';
 import { Loading } from '@ui/components/page-state.tsx';
 import { RouteError } from '@ui/components/route-error.tsx';
@@ -7,6 +8,14 @@ import { HomePage } from './routes/home.tsx';
 import { GarmentPage } from './routes/garment.tsx';
 import { SignInPage } from './routes/sign-in.tsx';
 import { NotFoundPage } from './routes/not-found.tsx';
+
+/**
+ * A page loaded only when someone opens it, so the catalogue's first download stays small: the designer brings the
+ * canvas library and lettering fonts, checkout the form library.
+ */
+function lazyPage<Module, Name extends keyof Module>(path: string, load: () => Promise<Module>, name: Name & (Module[Name] extends ComponentType ? unknown : never), waiting: string) {
+  return { path, lazy: () => load().then((module) => ({ Component: module[name] as ComponentType })), hydrateFallbackElement: <Loading label={waiting} /> };
+}
 
 export const router = createBrowserRouter([
   {
@@ -19,40 +28,13 @@ export const router = createBrowserRouter([
         children: [
           { path: paths.home.path, element: <HomePage /> },
           { path: paths.garment.path, element: <GarmentPage /> },
-          // Lazy, so the garments and other pages never download the canvas library and lettering fonts.
-          {
-            path: paths.design.path,
-            lazy: () => import('./routes/design.tsx').then(({ DesignPage }) => ({ Component: DesignPage })),
-            hydrateFallbackElement: <Loading label="Opening the designer…" />,
-          },
+          lazyPage(paths.design.path, () => import('./routes/design.tsx'), 'DesignPage', 'Opening the designer…'),
           { path: paths.signIn.path, element: <SignInPage /> },
-          // Lazy: the form library and the order pages are for customers who order, not for browsing.
-          {
-            path: paths.checkout.path,
-            lazy: () => import('./routes/checkout.tsx').then(({ CheckoutPage }) => ({ Component: CheckoutPage })),
-            hydrateFallbackElement: <Loading label="Opening the checkout…" />,
-          },
-          {
-            path: paths.orders.path,
-            lazy: () => import('./routes/orders.tsx').then(({ OrdersPage }) => ({ Component: OrdersPage })),
-            hydrateFallbackElement: <Loading label="Fetching your orders…" />,
-          },
-          {
-            path: paths.order.path,
-            lazy: () => import('./routes/order.tsx').then(({ OrderPage }) => ({ Component: OrderPage })),
-            hydrateFallbackElement: <Loading label="Fetching your order…" />,
-          },
-          // Lazy too: only customers with saved designs, and people opening a shared link, need these.
-          {
-            path: paths.designs.path,
-            lazy: () => import('./routes/designs.tsx').then(({ DesignsPage }) => ({ Component: DesignsPage })),
-            hydrateFallbackElement: <Loading label="Fetching your designs…" />,
-          },
-          {
-            path: paths.shared.path,
-            lazy: () => import('./routes/shared-design.tsx').then(({ SharedDesignPage }) => ({ Component: SharedDesignPage })),
-            hydrateFallbackElement: <Loading label="Opening the shared design…" />,
-          },
+          lazyPage(paths.checkout.path, () => import('./routes/checkout.tsx'), 'CheckoutPage', 'Opening the checkout…'),
+          lazyPage(paths.orders.path, () => import('./routes/orders.tsx'), 'OrdersPage', 'Fetching your orders…'),
+          lazyPage(paths.order.path, () => import('./routes/order.tsx'), 'OrderPage', 'Fetching your order…'),
+          lazyPage(paths.designs.path, () => import('./routes/designs.tsx'), 'DesignsPage', 'Fetching your designs…'),
+          lazyPage(paths.shared.path, () => import('./routes/shared-design.tsx'), 'SharedDesignPage', 'Opening the shared design…'),
           { path: '*', element: <NotFoundPage /> },
         ],
       },
