@@ -157,3 +157,15 @@ describe('GET /api/admin/orders/:number/production-sheet.pdf', () => {
     expect(pages.filter((page) => hasSquare(page, checkSquarePt))).toHaveLength(2);
   });
 });
+
+describe('a production sheet for the customer’s own artwork', () => {
+  it('when an order with an uploaded drawing is approved, then its sheet counts the drawing’s stitches from the customer’s upload', async () => {
+    // WB-1009 carries Harriet's granddaughter's sun drawing (upload 1); approve it as the customer would.
+    await harness.db('orders').where({ number: 'WB-1009' }).update({ status: 'proof_approved' });
+    const sheet = productionSheetResponse.parse((await staff.get(sheetPath('WB-1009')).expect(200)).body);
+    const drawing = sheet.placements.find((placement) => placement.kind === 'artwork');
+    expect(drawing).toBeDefined();
+    expect(drawing!.stitches).toBeGreaterThan(0);
+    expect((await staff.get(`${sheetPath('WB-1009')}.pdf?paper=a4`).expect(200)).headers['content-type']).toMatch(/pdf/);
+  });
+});

@@ -1,4 +1,5 @@
 import type { Db } from '../db/knex.ts';
+import { loadOwnedArtworkForQuote } from '../db/repos/artwork-repo.ts';
 import { loadQuoteCatalog } from '../db/repos/quote-catalog-repo.ts';
 import { readMotifArtwork, readOrderToMake, readThreadsByCode, type OrderToMake } from '../db/repos/production-sheet-repo.ts';
 import { restoreDesign, type DesignDocument } from '../contracts/designs.ts';
@@ -9,7 +10,7 @@ import type { LetteringFontLoader } from '../integrations/lettering-fonts.ts';
 import { figureDesign } from './design-figures.ts';
 import { renderProductionSheetPdf } from './production-sheet-pdf.ts';
 import { assembleSheet } from './production-sheet-assembly.ts';
-import { slugsNamedIn, toQuoteCatalog } from './quote-service.ts';
+import { artworkCatalogOf, slugsNamedIn, toQuoteCatalog } from './quote-service.ts';
 
 /** The statuses a sheet is printed in: the customer has approved the proof in writing, so the needle may move. */
 const APPROVED_STATUSES: ReadonlySet<OrderStatus> = new Set(['proof_approved', 'in_production', 'stitched', 'shipped']);
@@ -56,7 +57,10 @@ export function createProductionSheetService(deps: { db: Db; fonts: LetteringFon
   async function sheetFor(order: OrderToMake, document: DesignDocument): Promise<Result<ProductionSheet>> {
     const record = await loadQuoteCatalog(db, { garmentId: order.garmentId, sizeId: order.sizeId, colourId: order.colourId, ...slugsNamedIn(document) });
     if (!record.ok) return failure('conflict', `Order ${order.number} can't be figured from the catalogue: ${record.error.message}`);
-    const catalog = toQuoteCatalog(record.value, deps.fonts);
+    // The customer's own uploads are stitched as they were priced: the order's customer owns them.
+    const artworkIds = document.placements.flatMap((placement) => (placement.kind === 'artwork' ? [placement.artworkUploadId] : []));
+    const uploads = await loadOwnedArtworkForQuote(db, { userId: order.customerId }, artworkIds);
+    const catalog = toQuoteCatalog(record.value, deps.fonts, artworkCatalogOf(uploads));
     const figured = figureDesign(catalog, document);
     if (!figured.ok) return failure('conflict', `Order ${order.number} can't be figured from today’s catalogue: ${figured.error.message}`);
     const threadCodes = document.placements.flatMap((placement) =>

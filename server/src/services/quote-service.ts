@@ -29,13 +29,7 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader })
       owner ? loadOwnedArtworkForQuote(deps.db, owner, artworkIds) : [],
     ]);
     if (!record.ok) return record;
-    const artworkUploads = new Map(
-      uploads.map((upload): [number, CatalogArtwork] => [
-        upload.id,
-        upload.svgText !== null ? { svgText: upload.svgText } : { rasterSizePx: { widthPx: upload.widthPx, heightPx: upload.heightPx } },
-      ]),
-    );
-    const figured = figureDesign(toQuoteCatalog(record.value, deps.fonts, artworkUploads), request.document);
+    const figured = figureDesign(toQuoteCatalog(record.value, deps.fonts, artworkCatalogOf(uploads)), request.document);
     if (!figured.ok) return figured;
     const figures = figured.value;
     const { garment, size, ruleSet } = record.value;
@@ -113,6 +107,16 @@ function namedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: s
     if (placement.kind === 'artwork') artworkIds.add(placement.artworkUploadId);
   }
   return { motifSlugs: [...motifSlugs], fontSlugs: [...fontSlugs], artworkIds: [...artworkIds] };
+}
+
+/** Uploaded artwork as `figureDesign` takes it: an SVG's drawing to estimate, or a raster's size in pixels. */
+export function artworkCatalogOf(uploads: Awaited<ReturnType<typeof loadOwnedArtworkForQuote>>): ReadonlyMap<number, CatalogArtwork> {
+  return new Map(
+    uploads.map((upload): [number, CatalogArtwork] => [
+      upload.id,
+      upload.svgText !== null ? { svgText: upload.svgText } : { rasterSizePx: { widthPx: upload.widthPx, heightPx: upload.heightPx } },
+    ]),
+  );
 }
 
 /** The motifs and fonts a design names, so only those catalogue rows are read. */

@@ -5,6 +5,8 @@ import type { OrderStatus } from '../../contracts/order-status.ts';
 export interface OrderToMake {
   number: string;
   status: OrderStatus;
+  /** Whose uploads the design's artwork placements are. */
+  customerId: number;
   customerName: string;
   /** YYYY-MM-DD, or null. */
   neededBy: string | null;
@@ -38,6 +40,7 @@ export async function readOrderToMake(db: Db, number: string): Promise<OrderToMa
       'o.status',
       'o.needed_by',
       'o.customer_note',
+      'o.customer_id',
       'u.name as customer_name',
       'i.quantity',
       'i.garment_size_id',
@@ -55,6 +58,7 @@ export async function readOrderToMake(db: Db, number: string): Promise<OrderToMa
   return {
     number: row.number,
     status: row.status,
+    customerId: row.customer_id,
     customerName: row.customer_name,
     neededBy: row.needed_by ? new Date(row.needed_by).toISOString().slice(0, 10) : null,
     customerNote: row.customer_note,
