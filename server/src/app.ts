@@ -36,6 +36,7 @@ import { createOrdersRouter } from './routes/orders.ts';
 import { createAdminOverviewRouter } from './routes/admin/overview.ts';
 import { createAdminCatalogRouter } from './routes/admin/catalog.ts';
 import { createAdminOrdersRouter } from './routes/admin/orders.ts';
+import { createOrderArtworkRouter } from './routes/admin/order-artwork.ts';
 import { createProductionSheetRouter } from './routes/admin/production-sheet.ts';
 import { createProductionSheetService } from './services/production-sheet-service.ts';
 import { createStudioOrdersRouter } from './routes/admin/studio-orders.ts';
@@ -148,6 +149,7 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));
   app.use('/api/admin/orders', createStudioOrdersRouter({ db, stripe: deps.stripe, mailer: deps.mailer, now: deps.now, appOrigin: config.appOrigin, uploadMaxBytes: config.uploadMaxBytes, fonts: createLetteringFontLoader() }));
   app.use('/api/admin/orders', createAdminOrdersRouter({ db }));
+  app.use('/api/admin/orders', createOrderArtworkRouter({ db }));
   app.use('/api/admin/orders', createProductionSheetRouter({ sheets: createProductionSheetService({ db, fonts: createLetteringFontLoader() }) }));
   app.use('/api/admin/catalogue/garments', createCatalogueGarmentsRouter({ db }));
   app.use('/api/admin/catalogue/motifs', createCatalogueMotifsRouter({ db, uploadMaxBytes: config.uploadMaxBytes }));

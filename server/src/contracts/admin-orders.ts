@@ -32,7 +32,17 @@ export const orderDetailResponse = z.object({
     totalCents: z.number().int(),
     currency: z.string(),
   }),
-  items: z.array(z.object({ id: z.number().int(), description: z.string(), quantity: z.number().int(), totalCents: z.number().int(), designName: z.string() })),
+  items: z.array(
+    z.object({
+      id: z.number().int(),
+      description: z.string(),
+      quantity: z.number().int(),
+      totalCents: z.number().int(),
+      designName: z.string(),
+      /** The customer's own pictures on the design, for the studio to digitize: where each is and its picture's address. */
+      artwork: z.array(z.object({ uploadId: z.number().int(), zone: z.string(), widthMm: z.number(), imageUrl: z.string() })),
+    }),
+  ),
   quote: z.object({ ruleSetVersion: z.number().int(), lines: z.array(z.object({ code: z.string(), label: z.string(), amountCents: z.number().int() })) }),
   payments: z.array(
     z.object({
@@ -63,3 +73,11 @@ export const orderDetailResponse = z.object({
   events: z.array(orderEvent),
 });
 export type OrderDetailResponse = z.infer<typeof orderDetailResponse>;
+
+/** Where the studio opens a customer's uploaded picture that an order stitches. */
+export const orderArtworkImagePath = (number: string, uploadId: number) => `/api/admin/orders/${encodeURIComponent(number)}/artwork/${uploadId}/image`;
+
+export const orderArtworkParams = z.object({
+  number: orderNumberParams.shape.number,
+  uploadId: z.string().regex(/^[1-9]\d{0,9}$/, 'must be an upload number').transform(Number),
+});

@@ -1,4 +1,5 @@
-import { Router } from 'express';
+import { Router, type Response } from 'express';
+import type { ArtworkImage } from '../db/repos/artwork-repo.ts';
 import type { z } from 'zod';
 import { artworkOwnerForUpload, artworkOwnerOf } from '../auth/artwork-owner.ts';
 import { artworkIdParams } from '../contracts/artwork.ts';
@@ -14,6 +15,19 @@ type ArtworkIdParams = z.infer<typeof artworkIdParams>;
  * a policy that runs nothing and loads nothing (its inline styles aside), and the browser may not guess its type.
  */
 const SVG_POLICY = "default-src 'none'; style-src 'unsafe-inline'";
+
+/** Sends a stored upload as a picture, private to whoever may see it. */
+export function sendArtworkImage(res: Response, image: ArtworkImage): void {
+  res.set('X-Content-Type-Options', 'nosniff');
+  // Private: a shared cache must not keep it, but the viewer's browser may for a moment.
+  res.set('Cache-Control', 'private, max-age=300');
+  if (image.kind === 'svg') {
+    res.set('Content-Security-Policy', SVG_POLICY);
+    res.type('image/svg+xml').send(image.svg);
+  } else {
+    res.type('image/png').send(image.png);
+  }
+}
 
 /** The customer's own artwork, for anyone designing, signed in or not; each upload reaches only its owner. */
 export function createArtworkRouter(deps: { artwork: ArtworkService; uploadMaxBytes: number }): Router {
@@ -33,15 +47,7 @@ export function createArtworkRouter(deps: { artwork: ArtworkService; uploadMaxBy
     const { id } = res.locals.params as ArtworkIdParams;
     const found = await deps.artwork.image(artworkOwnerOf(req), id);
     if (!found.ok) return sendResult(res, found);
-    res.set('X-Content-Type-Options', 'nosniff');
-    // Private to its owner: a shared cache must not keep it, but the owner's browser may for a moment.
-    res.set('Cache-Control', 'private, max-age=300');
-    if (found.value.kind === 'svg') {
-      res.set('Content-Security-Policy', SVG_POLICY);
-      res.type('image/svg+xml').send(found.value.svg);
-    } else {
-      res.type('image/png').send(found.value.png);
-    }
+    sendArtworkImage(res, found.value);
   });
   return router;
 }

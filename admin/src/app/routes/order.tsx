@@ -56,6 +56,16 @@ export function OrderPage() {
                   <span>
                     <span className="font-medium">{item.designName}</span>
                     <span className="block text-walnut-500">{item.description} × {item.quantity}</span>
+                    {item.artwork.length > 0 && (
+                      <span className="mt-2 flex flex-wrap gap-3">
+                        {item.artwork.map((picture) => (
+                          <a key={picture.uploadId} href={picture.imageUrl} target="_blank" rel="noreferrer" className="grid w-28 gap-1 text-xs text-madder-600 hover:underline">
+                            <img src={picture.imageUrl} alt={`The customer's picture for the ${picture.zone}, ${picture.widthMm} mm wide`} className="h-24 w-28 rounded-md border border-linen-300 bg-white object-contain p-1" />
+                            Their picture · {picture.zone}, {picture.widthMm} mm wide (to digitize)
+                          </a>
+                        ))}
+                      </span>
+                    )}
                   </span>
                   <span className="tabular-nums">{formatMoney(item.totalCents, order.currency)}</span>
                 </li>

@@ -1,6 +1,8 @@
 import type { Db } from '../knex.ts';
 import type { OrderDetailResponse } from '../../contracts/admin-orders.ts';
 import { proofImagePath } from '../../contracts/studio-orders.ts';
+import { orderArtworkImagePath } from '../../contracts/admin-orders.ts';
+import { restoreDesign } from '../../contracts/designs.ts';
 
 const iso = (value: Date | string | null): string | null => (value === null ? null : new Date(value).toISOString());
 
@@ -15,7 +17,7 @@ export async function readOrderDetail(db: Db, number: string): Promise<Omit<Orde
     .first();
   if (!order) return undefined;
   const [items, payments, proofs, events] = await Promise.all([
-    db('order_items as i').join('designs as d', 'd.id', 'i.design_id').select('i.id', 'i.description', 'i.quantity', 'i.total_cents', 'd.name as design_name').where('i.order_id', order.id).orderBy('i.id'),
+    db('order_items as i').join('designs as d', 'd.id', 'i.design_id').select('i.id', 'i.description', 'i.quantity', 'i.total_cents', 'd.name as design_name', 'd.document').where('i.order_id', order.id).orderBy('i.id'),
     db('payments').select('status', 'amount_authorized_cents', 'amount_captured_cents', 'amount_refunded_cents', 'capture_before').where({ order_id: order.id }).orderBy('id'),
     db('proofs')
       .select('version', 'status', 'message', 'created_at', 'responded_at', 'source', 'customer_comment', 'comment_pins', db.raw('image_png IS NOT NULL as has_image'))
@@ -42,7 +44,14 @@ export async function readOrderDetail(db: Db, number: string): Promise<Omit<Orde
       totalCents: Number(order.total_cents),
       currency: order.currency,
     },
-    items: items.map((i) => ({ id: i.id, description: i.description, quantity: i.quantity, totalCents: Number(i.total_cents), designName: i.design_name })),
+    items: items.map((i) => ({
+      id: i.id,
+      description: i.description,
+      quantity: i.quantity,
+      totalCents: Number(i.total_cents),
+      designName: i.design_name,
+      artwork: artworkOn(i.document).map((placement) => ({ ...placement, imageUrl: orderArtworkImagePath(order.number, placement.uploadId) })),
+    })),
     quote: { ruleSetVersion: order.rule_set_version, lines: order.quote_lines },
     payments: payments.map((p) => ({
       status: p.status,
@@ -72,4 +81,20 @@ export async function readOrderDetail(db: Db, number: string): Promise<Omit<Orde
       createdAt: iso(e.created_at)!,
     })),
   };
+}
+
+/** The uploaded pictures a stored design places; a document that no longer reads has none to show. */
+export function artworkOn(document: unknown): { uploadId: number; zone: string; widthMm: number }[] {
+  const restored = restoreDesign(document);
+  if (!restored.success) return [];
+  return restored.data.placements.flatMap((placement) =>
+    placement.kind === 'artwork' ? [{ uploadId: placement.artworkUploadId, zone: placement.zone, widthMm: placement.widthMm }] : [],
+  );
+}
+
+/** The order's customer and the uploads its designs place, so only those pictures can be opened from the order. */
+export async function readOrderArtworkOwner(db: Db, number: string): Promise<{ customerId: number; uploadIds: number[] } | undefined> {
+  const rows = await db('orders as o').join('order_items as i', 'i.order_id', 'o.id').join('designs as d', 'd.id', 'i.design_id').select('o.customer_id', 'd.document').where('o.number', number);
+  if (rows.length === 0) return undefined;
+  return { customerId: rows[0].customer_id, uploadIds: rows.flatMap((row) => artworkOn(row.document).map((placement) => placement.uploadId)) };
 }
