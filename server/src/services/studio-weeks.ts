@@ -2,6 +2,7 @@
  * The Today page's weekly figures, as pure functions of rows and "now": machine hours booked per week against
  * capacity, and takings per week. Weeks start on Monday and are counted in UTC, as every stored time is.
  */
+import { addWorkingDays } from './ready-dates.ts';
 
 const dayMs = 86_400_000;
 
@@ -10,18 +11,6 @@ export function weekStartOf(date: Date): string {
   const midnight = Date.UTC(date.getUTCFullYear(), date.getUTCMonth(), date.getUTCDate());
   const daysSinceMonday = (new Date(midnight).getUTCDay() + 6) % 7;
   return new Date(midnight - daysSinceMonday * dayMs).toISOString().slice(0, 10);
-}
-
-/** `days` working days (Monday to Friday) after `date`, at the same time of day. */
-export function addWorkingDays(date: Date, days: number): Date {
-  let result = new Date(date.getTime());
-  let left = days;
-  while (left > 0) {
-    result = new Date(result.getTime() + dayMs);
-    const weekday = result.getUTCDay();
-    if (weekday !== 0 && weekday !== 6) left -= 1;
-  }
-  return result;
 }
 
 const addWeeks = (weekStart: string, weeks: number) => new Date(Date.parse(`${weekStart}T00:00:00Z`) + weeks * 7 * dayMs).toISOString().slice(0, 10);
@@ -38,7 +27,8 @@ export interface BookedOrder {
 /** When an order is due: the customer's date, else the lead time in working days after it was placed. */
 export function dueDateOf(order: Pick<BookedOrder, 'neededBy' | 'placedAt'>, leadTimeDays: number): string | null {
   if (order.neededBy) return order.neededBy;
-  return order.placedAt ? addWorkingDays(order.placedAt, leadTimeDays).toISOString().slice(0, 10) : null;
+  // The same working-day rule as the customer's ready dates, counted from the day (UTC) the card was held.
+  return order.placedAt ? addWorkingDays(order.placedAt.toISOString().slice(0, 10), leadTimeDays) : null;
 }
 
 export interface MachineWeek {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { addWorkingDays, bookMachineHours, dueDateOf, sumRevenueByWeek, weekStartOf } from '../../../server/src/services/studio-weeks.ts';
+import { bookMachineHours, dueDateOf, sumRevenueByWeek, weekStartOf } from '../../../server/src/services/studio-weeks.ts';
 
 // 2 December 2026 is a Wednesday (checked against a printed 2026 calendar: 1 Dec is a Tuesday).
 const wednesday = new Date('2026-12-02T15:00:00Z');
@@ -16,10 +16,10 @@ describe('weekStartOf', () => {
   });
 });
 
-describe('addWorkingDays and dueDateOf', () => {
+describe('dueDateOf', () => {
   it('when 10 working days follow a Sunday, then weekends are skipped: Sunday 22 Nov + 10 = Friday 4 Dec', () => {
     // Mon 23 … Fri 27 is 5, Mon 30 … Fri 4 is 10.
-    expect(addWorkingDays(new Date('2026-11-22T03:02:00Z'), 10).toISOString().slice(0, 10)).toBe('2026-12-04');
+    expect(dueDateOf({ neededBy: null, placedAt: new Date('2026-11-22T03:02:00Z') }, 10)).toBe('2026-12-04');
   });
 
   it('when the customer gave a date, then it is the due date; otherwise placed + lead time; unplaced orders have none', () => {
