@@ -1,16 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { outboxListResponse, outboxMessageResponse } from '../../server/src/contracts/admin-outbox.ts';
-import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { useApiHarness, type ApiAgent } from '../support/api-harness.ts';
+import { signedInAgent } from '../support/api-calls.ts';
 
-let harness: ApiHarness;
-let staff: ReturnType<ApiHarness['agent']>;
+const harness = useApiHarness();
+let staff: ApiAgent;
 beforeAll(async () => {
-  harness = await startApiHarness();
-  staff = harness.agent();
-  await harness.signIn(staff, 'tobias@wrenandbobbin.test');
-});
-afterAll(async () => {
-  await harness.close();
+  staff = await signedInAgent(harness, 'tobias@wrenandbobbin.test');
 });
 
 describe('GET /api/admin/outbox', () => {

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import {
   pricingPreviewResponse,
   ruleSetDetailResponse,
@@ -8,23 +8,19 @@ import {
 import { quotePreviewResponse } from '../../server/src/contracts/quotes.ts';
 import { priceQuote, type PricingRuleSet, type QuotePlacement } from '../../server/src/engine/index.ts';
 import { daisyDressQuote } from '../support/sample-designs.ts';
-import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { useApiHarness, type ApiAgent } from '../support/api-harness.ts';
 
-let harness: ApiHarness;
-let owner: ReturnType<ApiHarness['agent']>;
-let staff: ReturnType<ApiHarness['agent']>;
-let customer: ReturnType<ApiHarness['agent']>;
+const harness = useApiHarness();
+let owner: ApiAgent;
+let staff: ApiAgent;
+let customer: ApiAgent;
 beforeAll(async () => {
-  harness = await startApiHarness();
   owner = harness.agent();
   staff = harness.agent();
   customer = harness.agent();
   await harness.signIn(owner, 'marigold@wrenandbobbin.test');
   await harness.signIn(staff, 'tobias@wrenandbobbin.test');
   await harness.signIn(customer, 'priya@example.test');
-});
-afterAll(async () => {
-  await harness.close();
 });
 
 const draftId = 2;

@@ -1,21 +1,17 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { shopSettingsResponse, type ShopSettings } from '../../server/src/contracts/admin-settings.ts';
 import { quotePreviewResponse } from '../../server/src/contracts/quotes.ts';
 import { daisyDressQuote } from '../support/sample-designs.ts';
-import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { useApiHarness, type ApiAgent } from '../support/api-harness.ts';
 
-let harness: ApiHarness;
-let owner: ReturnType<ApiHarness['agent']>;
-let staff: ReturnType<ApiHarness['agent']>;
+const harness = useApiHarness();
+let owner: ApiAgent;
+let staff: ApiAgent;
 beforeAll(async () => {
-  harness = await startApiHarness();
   owner = harness.agent();
   staff = harness.agent();
   await harness.signIn(owner, 'marigold@wrenandbobbin.test');
   await harness.signIn(staff, 'tobias@wrenandbobbin.test');
-});
-afterAll(async () => {
-  await harness.close();
 });
 
 const seeded: ShopSettings = { machineStitchesPerMinute: 650, minutesPerHooping: 4, minutesPerColourChange: 0.5, setupMinutes: 10, leadTimeDays: 10, machineHoursPerWeek: 30 };

@@ -1,22 +1,18 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { peopleResponse, personResponse } from '../../server/src/contracts/admin-users.ts';
-import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { useApiHarness, type ApiAgent } from '../support/api-harness.ts';
 
-let harness: ApiHarness;
-let owner: ReturnType<ApiHarness['agent']>;
-let staff: ReturnType<ApiHarness['agent']>;
-let dominic: ReturnType<ApiHarness['agent']>;
+const harness = useApiHarness();
+let owner: ApiAgent;
+let staff: ApiAgent;
+let dominic: ApiAgent;
 beforeAll(async () => {
-  harness = await startApiHarness();
   owner = harness.agent();
   staff = harness.agent();
   dominic = harness.agent();
   await harness.signIn(owner, 'marigold@wrenandbobbin.test');
   await harness.signIn(staff, 'tobias@wrenandbobbin.test');
   await harness.signIn(dominic, 'dominic@example.test');
-});
-afterAll(async () => {
-  await harness.close();
 });
 
 const ids = { marigold: 1, tobias: 2, dominic: 5 };

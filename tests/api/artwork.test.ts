@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { Jimp, JimpMime } from 'jimp';
 import { artworkUploadResponse, artworkListResponse } from '../../server/src/contracts/artwork.ts';
 import { quotePreviewResponse, type QuotePreviewRequest } from '../../server/src/contracts/quotes.ts';
@@ -6,15 +6,9 @@ import type { DesignPlacement } from '../../server/src/contracts/designs.ts';
 import { estimateStitches } from '../../server/src/engine/index.ts';
 import { garments } from '../../seeds/data/garments.ts';
 import { publishedRuleSet } from '../../seeds/data/pricing.ts';
-import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { useApiHarness, type ApiAgent } from '../support/api-harness.ts';
 
-let harness: ApiHarness;
-beforeAll(async () => {
-  harness = await startApiHarness();
-});
-afterAll(async () => {
-  await harness.close();
-});
+const harness = useApiHarness();
 
 /** A child's drawing with every way an SVG can carry script: an element, an event handler and a javascript: link. */
 const drawingWithScripts = `<?xml version="1.0"?>
@@ -28,7 +22,7 @@ const pngBytes = async (width: number, height: number) => new Jimp({ width, heig
 /** The smallest GIF: a 1 × 1 transparent pixel. */
 const gifBytes = Buffer.from('R0lGODlhAQABAIAAAAAAAP///yH5BAEAAAAALAAAAAABAAEAAAIBRAA7', 'base64');
 
-type Agent = ReturnType<ApiHarness['agent']>;
+type Agent = ApiAgent;
 const upload = (agent: Agent, bytes: Buffer | string, filename: string, contentType: string) =>
   agent.post('/api/artwork').attach('file', Buffer.isBuffer(bytes) ? bytes : Buffer.from(bytes), { filename, contentType });
 

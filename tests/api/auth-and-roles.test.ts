@@ -1,14 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { useApiHarness } from '../support/api-harness.ts';
 
-let harness: ApiHarness;
-beforeAll(async () => {
-  harness = await startApiHarness();
-});
-afterAll(async () => {
-  await harness.close();
-});
+const harness = useApiHarness();
 
 describe('GET /api/me', () => {
   it('when nobody is signed in, then it answers 401 with a message', async () => {

@@ -1,17 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { fontListResponse, garmentListResponse, motifListResponse, threadListResponse } from '../../server/src/contracts/catalog.ts';
 import { studioCatalogResponse } from '../../server/src/contracts/admin-catalog.ts';
 import { fitBorder } from '../../server/src/engine/index.ts';
-import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { useApiHarness } from '../support/api-harness.ts';
 
-let harness: ApiHarness;
-beforeAll(async () => {
-  harness = await startApiHarness();
-});
-afterAll(async () => {
-  await harness.close();
-});
+const harness = useApiHarness();
 
 describe('GET /api/catalog/garments', () => {
   it('when anyone asks, then the active garments come with their sizes and colours, matching the contract', async () => {

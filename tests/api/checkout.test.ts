@@ -3,6 +3,7 @@ import { storedQuoteResponse } from '../../server/src/contracts/stored-quotes.ts
 import { checkoutStartedResponse, type PlaceOrderRequest } from '../../server/src/contracts/orders.ts';
 import { savedDesignResponse } from '../../server/src/contracts/saved-designs.ts';
 import { startPaymentHarness, type PaymentHarness } from '../support/payment-stand-ins.ts';
+import { signedInAgent } from '../support/api-calls.ts';
 
 let harness: PaymentHarness;
 beforeAll(async () => {
@@ -18,11 +19,7 @@ const priya = 'priya@example.test';
 const harriet = 'harriet@example.test';
 const shipTo = { name: 'Priya Castellanos', line1: '48 Larkspur Lane', city: 'Fernhollow', region: 'OR', postalCode: '97000', countryCode: 'us' };
 
-async function signedIn(email: string): Promise<Agent> {
-  const agent = harness.agent();
-  await harness.signIn(agent, email);
-  return agent;
-}
+const signedIn = (email: string): Promise<Agent> => signedInAgent(harness, email);
 
 /** Priya's seeded design 1 (a bishop dress with a daisy border and a name), as the quote request for it. */
 async function designQuoteBody(agent: Agent, designId = 1, changes: { quantity?: number; isRush?: boolean } = {}) {

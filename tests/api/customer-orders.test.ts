@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { customerOrderListResponse, customerOrderResponse } from '../../server/src/contracts/orders.ts';
 import { startPaymentHarness, type PaymentHarness } from '../support/payment-stand-ins.ts';
+import { signedInAgent } from '../support/api-calls.ts';
 import { sendTestProof } from '../support/proof-fixtures.ts';
 import { fixedNow } from '../support/api-harness.ts';
 
@@ -14,11 +15,7 @@ afterAll(async () => {
 
 type Agent = ReturnType<PaymentHarness['agent']>;
 
-async function signedIn(email: string): Promise<Agent> {
-  const agent = harness.agent();
-  await harness.signIn(agent, email);
-  return agent;
-}
+const signedIn = (email: string): Promise<Agent> => signedInAgent(harness, email);
 
 const detail = async (agent: Agent, number: string) => customerOrderResponse.parse((await agent.get(`/api/orders/${number}`).expect(200)).body);
 

@@ -1,17 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { designShareResponse, sharedDesignResponse } from '../../server/src/contracts/design-sharing.ts';
 import { savedDesignListResponse, savedDesignResponse } from '../../server/src/contracts/saved-designs.ts';
 import { demoPeople } from '../../seeds/data/people.ts';
-import { fixedNow, startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { useApiHarness, fixedNow } from '../support/api-harness.ts';
 import { callFor, errorOf, signedInAgent } from '../support/api-calls.ts';
 
-let harness: ApiHarness;
-beforeAll(async () => {
-  harness = await startApiHarness();
-});
-afterAll(async () => {
-  await harness.close();
-});
+const harness = useApiHarness();
 
 /** Seeded designs (seeds/data/designs.ts): Priya has 1–4 and 13, of which 3 is in order WB-1002; Harriet has 5–8. */
 const priyasDesignId = 1;

@@ -1,18 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { apiErrorBody } from '../../server/src/contracts/errors.ts';
 import type { DesignPlacement } from '../../server/src/contracts/designs.ts';
 import { savedDesignListResponse, savedDesignResponse, type SaveDesignRequest } from '../../server/src/contracts/saved-designs.ts';
 import { garments } from '../../seeds/data/garments.ts';
 import { motifs } from '../../seeds/data/motifs.ts';
-import { fixedNow, startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { useApiHarness, fixedNow } from '../support/api-harness.ts';
 
-let harness: ApiHarness;
-beforeAll(async () => {
-  harness = await startApiHarness();
-});
-afterAll(async () => {
-  await harness.close();
-});
+const harness = useApiHarness();
 
 const bishop = garments.find((garment) => garment.slug === 'bishop-dress')!;
 const bib = garments.find((garment) => garment.slug === 'terry-bib')!;

@@ -1,18 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { garmentDetailResponse, motifListResponse } from '../../server/src/contracts/catalog.ts';
 import { apiErrorBody } from '../../server/src/contracts/errors.ts';
 import { motifs } from '../../seeds/data/motifs.ts';
 import { sizeMeasurements } from '../../seeds/data/garment-measurements.ts';
-import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { useApiHarness } from '../support/api-harness.ts';
 
-let harness: ApiHarness;
-beforeAll(async () => {
-  harness = await startApiHarness();
-});
-afterAll(async () => {
-  await harness.close();
-});
+const harness = useApiHarness();
 
 const detailOf = async (slug: string) => garmentDetailResponse.parse((await request(harness.app).get(`/api/catalog/garments/${slug}`).expect(200)).body).garment;
 

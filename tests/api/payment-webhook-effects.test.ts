@@ -4,6 +4,7 @@ import { storedQuoteResponse } from '../../server/src/contracts/stored-quotes.ts
 import { checkoutStartedResponse, customerOrderResponse } from '../../server/src/contracts/orders.ts';
 import { savedDesignResponse } from '../../server/src/contracts/saved-designs.ts';
 import { startPaymentHarness, type PaymentHarness } from '../support/payment-stand-ins.ts';
+import { signedInAgent } from '../support/api-calls.ts';
 
 let harness: PaymentHarness;
 beforeAll(async () => {
@@ -16,11 +17,7 @@ afterAll(async () => {
 type Agent = ReturnType<PaymentHarness['agent']>;
 const shipTo = { name: 'Priya Castellanos', line1: '48 Larkspur Lane', city: 'Fernhollow', region: 'OR', postalCode: '97000', countryCode: 'US' };
 
-async function priya(): Promise<Agent> {
-  const agent = harness.agent();
-  await harness.signIn(agent, 'priya@example.test');
-  return agent;
-}
+const priya = (): Promise<Agent> => signedInAgent(harness, 'priya@example.test');
 
 /** Priya orders her design 1 and is sent to the payment page. */
 async function placeOrder(agent: Agent) {

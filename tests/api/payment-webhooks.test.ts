@@ -1,15 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import Stripe from 'stripe';
-import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { useApiHarness } from '../support/api-harness.ts';
 
-let harness: ApiHarness;
-beforeAll(async () => {
-  harness = await startApiHarness();
-});
-afterAll(async () => {
-  await harness.close();
-});
+const harness = useApiHarness();
 
 const stripe = new Stripe('sk_test_unused');
 

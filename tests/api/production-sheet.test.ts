@@ -1,24 +1,20 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { productionSheetResponse, type ProductionSheet } from '../../server/src/contracts/production-sheet.ts';
 import { planHoopings } from '../../server/src/engine/index.ts';
 import { templateArea, tileTemplate } from '../../server/src/services/production-sheet-pdf-templates.ts';
-import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { useApiHarness, type ApiAgent } from '../support/api-harness.ts';
+import { signedInAgent } from '../support/api-calls.ts';
 import { readPdfPages, type PdfPage } from '../support/pdf-geometry.ts';
 
 /** WB-1013 (seeds/data/orders.ts): the daisy chain round the 6-month bishop's 692 mm hem, in production. */
 const WORKED_ORDER = 'WB-1013';
 const sheetPath = (number: string) => `/api/admin/orders/${number}/production-sheet`;
 
-let harness: ApiHarness;
-let staff: ReturnType<ApiHarness['agent']>;
+const harness = useApiHarness();
+let staff: ApiAgent;
 beforeAll(async () => {
-  harness = await startApiHarness();
-  staff = harness.agent();
-  await harness.signIn(staff, 'tobias@wrenandbobbin.test');
-});
-afterAll(async () => {
-  await harness.close();
+  staff = await signedInAgent(harness, 'tobias@wrenandbobbin.test');
 });
 
 const binary = (res: request.Response, done: (error: Error | null, body: Buffer) => void) => {

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { quotePreviewResponse, type QuotePreviewRequest } from '../../server/src/contracts/quotes.ts';
 import { restoreDesign, type DesignPlacement } from '../../server/src/contracts/designs.ts';
@@ -6,15 +6,9 @@ import { apiErrorBody } from '../../server/src/contracts/errors.ts';
 import { estimateBorderStitches, estimateStitches, fitBorder, planHoopings, priceQuote, type PricingRuleSet } from '../../server/src/engine/index.ts';
 import { garments } from '../../seeds/data/garments.ts';
 import { motifs } from '../../seeds/data/motifs.ts';
-import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { useApiHarness } from '../support/api-harness.ts';
 
-let harness: ApiHarness;
-beforeAll(async () => {
-  harness = await startApiHarness();
-});
-afterAll(async () => {
-  await harness.close();
-});
+const harness = useApiHarness();
 
 const bishop = garments.find((garment) => garment.slug === 'bishop-dress')!;
 const sixMonths = bishop.sizes.find((size) => size.code === '6m')!;

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { converter } from 'culori';
 import { apiErrorBody } from '../../server/src/contracts/errors.ts';
 import { motifListResponse, garmentListResponse, threadListResponse, fontListResponse } from '../../server/src/contracts/catalog.ts';
@@ -7,20 +7,15 @@ import { studioGarmentListResponse } from '../../server/src/contracts/admin-cata
 import { motifPreviewResponse, type CreateMotifRequest } from '../../server/src/contracts/admin-catalogue-motifs.ts';
 import { shippedFontListResponse } from '../../server/src/contracts/admin-catalogue-fonts.ts';
 import { garments } from '../../seeds/data/garments.ts';
-import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { useApiHarness, type ApiAgent } from '../support/api-harness.ts';
+import { signedInAgent } from '../support/api-calls.ts';
 
-let harness: ApiHarness;
-let staff: ReturnType<ApiHarness['agent']>;
-let customer: ReturnType<ApiHarness['agent']>;
+const harness = useApiHarness();
+let staff: ApiAgent;
+let customer: ApiAgent;
 beforeAll(async () => {
-  harness = await startApiHarness();
-  staff = harness.agent();
-  await harness.signIn(staff, 'tobias@wrenandbobbin.test');
-  customer = harness.agent();
-  await harness.signIn(customer, 'priya@example.test');
-});
-afterAll(async () => {
-  await harness.close();
+  staff = await signedInAgent(harness, 'tobias@wrenandbobbin.test');
+  customer = await signedInAgent(harness, 'priya@example.test');
 });
 
 const errorOf = (body: unknown) => apiErrorBody.parse(body).error;
@@ -34,7 +29,7 @@ const hostileSvg =
 /** The 8-byte PNG signature and an IHDR chunk header: enough for the type sniffer to call it a PNG. */
 const pngBytes = Buffer.from('89504e470d0a1a0a0000000d4948445200000001000000010806000000', 'hex');
 
-function uploadPreview(agent: ReturnType<ApiHarness['agent']>, content: Buffer | string, name = 'motif.svg', fields: Record<string, string> = {}) {
+function uploadPreview(agent: ApiAgent, content: Buffer | string, name = 'motif.svg', fields: Record<string, string> = {}) {
   let call = agent.post('/api/admin/catalogue/motifs/preview');
   for (const [key, value] of Object.entries(fields)) call = call.field(key, value);
   return call.attach('file', Buffer.isBuffer(content) ? content : Buffer.from(content), { filename: name, contentType: 'image/svg+xml' });

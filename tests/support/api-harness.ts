@@ -3,6 +3,7 @@
  * local sign-in stand-in on a free port. Tests talk to it through supertest.
  */
 import request from 'supertest';
+import { afterAll, beforeAll } from 'vitest';
 import type { Express } from 'express';
 import type Stripe from 'stripe';
 import { loadConfig, type AppConfig } from '../../server/src/config.ts';
@@ -27,6 +28,8 @@ export interface ApiHarness {
   signIn(agent: ReturnType<typeof request.agent>, email: string): Promise<void>;
   close(): Promise<void>;
 }
+
+export type ApiAgent = ReturnType<ApiHarness['agent']>;
 
 export const fixedNow = () => new Date('2026-12-01T10:00:00Z');
 
@@ -72,5 +75,39 @@ export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {})
       await db.destroy();
       await google.close();
     },
+  };
+}
+
+/**
+ * The harness for one test file: started before its tests and closed after them by hooks this registers, so the
+ * file only says what it needs. Its members may be used inside tests and hooks, once it has started.
+ */
+export function useApiHarness(options: { env?: NodeJS.ProcessEnv } = {}): Omit<ApiHarness, 'close'> {
+  let started: ApiHarness | undefined;
+  beforeAll(async () => {
+    started = await startApiHarness(options);
+  });
+  afterAll(async () => {
+    await started?.close();
+  });
+  const current = () => {
+    if (!started) throw new Error('The API harness starts in beforeAll: use it inside a test or a hook.');
+    return started;
+  };
+  return {
+    get app() {
+      return current().app;
+    },
+    get config() {
+      return current().config;
+    },
+    get db() {
+      return current().db;
+    },
+    get stripe() {
+      return current().stripe;
+    },
+    agent: () => current().agent(),
+    signIn: (client, email) => current().signIn(client, email),
   };
 }
