@@ -132,8 +132,9 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/auth', createAuthRouter({ log: deps.log, claimArtwork: artwork.claim }));
   app.use('/api/me', createMeRouter());
   app.use('/api/catalog', createCatalogRouter({ db }));
-  // One quote service, so its font loader parses each font once: saving a design prices it too.
-  const quotes = createQuoteService({ db, fonts: createLetteringFontLoader() });
+  // One font loader, so each lettering font is parsed once for quotes, saved designs, proofs and production sheets.
+  const fonts = createLetteringFontLoader();
+  const quotes = createQuoteService({ db, fonts });
   const storedQuotes = createStoredQuoteService({ db, quotes, now: deps.now });
   app.use('/api/quotes', createQuotesRouter({ quotes, storedQuotes }));
   const sharing = createDesignSharingService({ db });
@@ -147,10 +148,10 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/admin', requireRole('staff', 'owner'));
   app.use('/api/admin/overview', createAdminOverviewRouter({ overview: createOverviewService({ db, now: deps.now }) }));
   app.use('/api/admin/catalog', createAdminCatalogRouter({ db }));
-  app.use('/api/admin/orders', createStudioOrdersRouter({ db, stripe: deps.stripe, mailer: deps.mailer, now: deps.now, appOrigin: config.appOrigin, uploadMaxBytes: config.uploadMaxBytes, fonts: createLetteringFontLoader() }));
+  app.use('/api/admin/orders', createStudioOrdersRouter({ db, stripe: deps.stripe, mailer: deps.mailer, now: deps.now, appOrigin: config.appOrigin, uploadMaxBytes: config.uploadMaxBytes, fonts }));
   app.use('/api/admin/orders', createAdminOrdersRouter({ db }));
   app.use('/api/admin/orders', createOrderArtworkRouter({ db }));
-  app.use('/api/admin/orders', createProductionSheetRouter({ sheets: createProductionSheetService({ db, fonts: createLetteringFontLoader() }) }));
+  app.use('/api/admin/orders', createProductionSheetRouter({ sheets: createProductionSheetService({ db, fonts }) }));
   app.use('/api/admin/catalogue/garments', createCatalogueGarmentsRouter({ db }));
   app.use('/api/admin/catalogue/motifs', createCatalogueMotifsRouter({ db, uploadMaxBytes: config.uploadMaxBytes }));
   app.use('/api/admin/catalogue/fonts', createCatalogueFontsRouter({ db }));

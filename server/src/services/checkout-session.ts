@@ -1,4 +1,5 @@
 import type Stripe from 'stripe';
+import { orderPageUrl } from './mail-layout.ts';
 
 export interface CheckoutSessionOrder {
   id: number;
@@ -17,7 +18,7 @@ export interface CheckoutSessionOrder {
  */
 export async function openCheckoutSession(stripe: Stripe, appOrigin: string, order: CheckoutSessionOrder, paymentId: number): Promise<{ id: string; url: string }> {
   const metadata = { orderId: String(order.id), orderNumber: order.number, paymentId: String(paymentId) };
-  const orderPage = `${appOrigin}/orders/${encodeURIComponent(order.number)}`;
+  const orderPage = orderPageUrl(appOrigin, order.number);
   const session = await stripe.checkout.sessions.create(
     {
       mode: 'payment',

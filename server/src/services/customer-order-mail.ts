@@ -2,7 +2,7 @@
  * The e-mails the customer's side of an order sends, as plain text with a light HTML copy. Each names the order
  * and links to its page, where everything else lives.
  */
-import { mailBodies } from './mail-layout.ts';
+import { mailBodies, orderPageUrl } from './mail-layout.ts';
 import type { LoggedMail } from './order-mail.ts';
 
 interface MailContext {
@@ -13,7 +13,7 @@ interface MailContext {
 }
 
 function compose(context: MailContext, to: string, template: string, subject: string, paragraphs: string[]): LoggedMail {
-  const link = `${context.appOrigin}/orders/${encodeURIComponent(context.number)}`;
+  const link = orderPageUrl(context.appOrigin, context.number);
   return { to, subject, ...mailBodies([...paragraphs, `See your order: ${link}`, `— ${context.shopName}`]), template, orderId: context.orderId };
 }
 

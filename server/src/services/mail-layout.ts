@@ -19,3 +19,6 @@ function paragraphHtml(paragraph: string): string {
 export function mailBodies(paragraphs: readonly string[]): { text: string; html: string } {
   return { text: paragraphs.join('\n\n'), html: paragraphs.map(paragraphHtml).join('\n') };
 }
+
+/** The customer's page for an order on the storefront, which e-mails and the payment page send them back to. */
+export const orderPageUrl = (appOrigin: string, number: string) => `${appOrigin}/orders/${encodeURIComponent(number)}`;

@@ -5,6 +5,7 @@
  * the work done. Stripe calls carry idempotency keys derived from the order and payment, so a retry after a crash
  * replays Stripe's first answer instead of charging or refunding twice.
  */
+import { formatMoneyText } from './money-text.ts';
 import type { Knex } from 'knex';
 import Stripe from 'stripe';
 import type { Db } from '../db/knex.ts';
@@ -140,7 +141,7 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
       const refundableCents = payment.capturedCents - payment.refundedCents;
       const amountCents = request.amountCents ?? refundableCents;
       if (amountCents > refundableCents) {
-        const most = new Intl.NumberFormat('en-US', { style: 'currency', currency: order.currency }).format(refundableCents / 100);
+        const most = formatMoneyText(refundableCents, order.currency);
         return { result: failure('invalid', `At most ${most} can be refunded.`, { amountCents: `Refund at most ${most}` }) };
       }
       // Keyed by what had been refunded before, so a retry of this refund replays while a later one is new.

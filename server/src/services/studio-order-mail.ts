@@ -2,7 +2,8 @@
  * The messages the studio's actions send a customer: plain words, the order number, and a link to the order's page
  * on the storefront, where the proof, the payment and the parcel's progress are shown.
  */
-import { mailBodies } from './mail-layout.ts';
+import { mailBodies, orderPageUrl } from './mail-layout.ts';
+import { formatMoneyText } from './money-text.ts';
 import type { LoggedMail } from './order-mail.ts';
 
 export interface MailOrder {
@@ -15,9 +16,7 @@ export interface MailOrder {
   shopName: string;
 }
 
-const formatMoney = (cents: number, currency: string) => new Intl.NumberFormat('en-US', { style: 'currency', currency }).format(cents / 100);
 const firstName = (name: string) => name.split(/\s+/)[0] || name;
-const orderLink = (appOrigin: string, number: string) => `${appOrigin}/orders/${encodeURIComponent(number)}`;
 
 function compose(order: MailOrder, template: string, subject: string, paragraphs: string[]): LoggedMail {
   return { to: order.customerEmail, subject, ...mailBodies([`Hello ${firstName(order.customerName)},`, ...paragraphs, `— ${order.shopName}`]), template, orderId: order.id };
@@ -26,7 +25,7 @@ function compose(order: MailOrder, template: string, subject: string, paragraphs
 export function proofReadyMail(order: MailOrder, appOrigin: string, proof: { version: number; message: string }): LoggedMail {
   return compose(order, 'proof_ready', `Your proof for ${order.number} is ready`, [
     proof.message,
-    `Look at proof ${proof.version} and approve it, or point at anything you would like changed: ${orderLink(appOrigin, order.number)}`,
+    `Look at proof ${proof.version} and approve it, or point at anything you would like changed: ${orderPageUrl(appOrigin, order.number)}`,
     'Nothing is stitched and your card is not charged until you approve.',
   ]);
 }
@@ -34,7 +33,7 @@ export function proofReadyMail(order: MailOrder, appOrigin: string, proof: { ver
 export function payAgainMail(order: MailOrder, appOrigin: string): LoggedMail {
   return compose(order, 'payment_lapsed', `Please confirm your payment for ${order.number}`, [
     'Your card was held for this order, but the hold ran out before we could start stitching, so nothing was charged.',
-    `To go ahead, please confirm your card again on your order page: ${orderLink(appOrigin, order.number)}`,
+    `To go ahead, please confirm your card again on your order page: ${orderPageUrl(appOrigin, order.number)}`,
     'Your approved proof is kept; we start stitching as soon as the card is held again.',
   ]);
 }
@@ -43,16 +42,16 @@ export function orderCancelledMail(order: MailOrder, appOrigin: string, reason: 
   return compose(order, 'order_cancelled', `${order.number} has been cancelled`, [
     `We have cancelled order ${order.number}: ${reason}`,
     wasCardReleased ? 'The hold on your card has been released, so nothing was charged.' : 'Nothing was charged for this order.',
-    `Your order page: ${orderLink(appOrigin, order.number)}`,
+    `Your order page: ${orderPageUrl(appOrigin, order.number)}`,
   ]);
 }
 
 export function refundIssuedMail(order: MailOrder, appOrigin: string, refund: { amountCents: number; isFull: boolean; reason: string }): LoggedMail {
-  const amount = formatMoney(refund.amountCents, order.currency);
+  const amount = formatMoneyText(refund.amountCents, order.currency);
   return compose(order, 'refund_issued', `A refund of ${amount} for ${order.number}`, [
     `We have refunded ${amount}${refund.isFull ? ', the whole order,' : ''} to your card: ${refund.reason}`,
     'Banks usually take 5 to 10 days to show it on your statement.',
-    `Your order page: ${orderLink(appOrigin, order.number)}`,
+    `Your order page: ${orderPageUrl(appOrigin, order.number)}`,
   ]);
 }
 
@@ -60,6 +59,6 @@ export function orderShippedMail(order: MailOrder, appOrigin: string, trackingNu
   return compose(order, 'order_shipped', `${order.number} is on its way`, [
     'Your embroidered order has been packed and posted.',
     trackingNumber ? `Tracking number: ${trackingNumber}` : 'The parcel has no tracking number; it usually arrives within a week.',
-    `Your order page: ${orderLink(appOrigin, order.number)}`,
+    `Your order page: ${orderPageUrl(appOrigin, order.number)}`,
   ]);
 }

@@ -1,3 +1,5 @@
+import { svgDataUrl } from '@ui/svg-data-url.ts';
+
 /**
  * A garment's outline drawing in a fabric colour, as an image URL. Each drawing paints its fabric with
  * `currentColor`, so setting the root element's `color` dyes it. It is meant for an <img> or a canvas image, where
@@ -7,5 +9,5 @@ export function dyedMockupSrc(mockupSvg: string, colourHex: string | undefined):
   const dyed = colourHex
     ? mockupSvg.replace(/<svg\b[^>]*>/, (root) => root.replace(/\scolor="[^"]*"/, '').replace(/^<svg/, `<svg color="${colourHex}"`))
     : mockupSvg;
-  return `data:image/svg+xml;charset=utf-8,${encodeURIComponent(dyed)}`;
+  return svgDataUrl(dyed);
 }

@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import type { StudioMotif, StudioThread } from '@server/contracts/admin-catalog.ts';
 import { formatLength } from '@ui/format.ts';
 import { StitchMixBar, StitchMixLegend } from './stitch-mix-bar.tsx';
+import { svgDataUrl } from '@ui/svg-data-url.ts';
 
 /** The studio's motifs with the figures the quotes and the production sheet are built from. */
 export function MotifTable({ motifs, threads, renderActions }: { motifs: StudioMotif[]; threads: StudioThread[]; renderActions?: (motif: StudioMotif) => ReactNode }) {
@@ -28,7 +29,7 @@ export function MotifTable({ motifs, threads, renderActions }: { motifs: StudioM
               <tr key={motif.id} className={`border-t border-linen-200 ${motif.isActive ? '' : 'opacity-55'}`}>
                 <td className="py-2">
                   <span className="flex items-center gap-3">
-                    <img src={`data:image/svg+xml;charset=utf-8,${encodeURIComponent(motif.svg)}`} alt="" className="h-10 w-16 rounded bg-linen-100 object-contain p-0.5" />
+                    <img src={svgDataUrl(motif.svg)} alt="" className="h-10 w-16 rounded bg-linen-100 object-contain p-0.5" />
                     <span className="font-medium">{motif.name}{motif.isActive ? '' : ' (hidden)'}</span>
                   </span>
                 </td>

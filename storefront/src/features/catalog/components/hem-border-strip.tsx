@@ -1,5 +1,6 @@
 import type { MotifSummary } from '@server/contracts/catalog.ts';
 import type { BorderFit } from '@server/engine/index.ts';
+import { svgDataUrl } from '@ui/svg-data-url.ts';
 
 /**
  * The hem unrolled into one line, seam to seam, with each repeat of the border drawn where it will be stitched and
@@ -18,7 +19,7 @@ export function HemBorderStrip({
   frontMm: number | null;
   fabricHex: string | undefined;
 }) {
-  const src = `data:image/svg+xml;charset=utf-8,${encodeURIComponent(motif.svg)}`;
+  const src = svgDataUrl(motif.svg);
   const heightMm = motif.heightMm * fit.scale;
   const percent = (mm: number) => `${(mm / circumferenceMm) * 100}%`;
   return (

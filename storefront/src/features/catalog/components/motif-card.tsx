@@ -1,11 +1,12 @@
 import type { MotifSummary } from '@server/contracts/catalog.ts';
 import { formatLength } from '@ui/format.ts';
+import { svgDataUrl } from '@ui/svg-data-url.ts';
 
 const kindLabels: Record<MotifSummary['kind'], string> = { border: 'Border repeat', single: 'Single motif' };
 
 /** A catalogue motif: its drawing, its finished size at 100 % and how far it can be resized, and its stitch count. */
 export function MotifCard({ motif }: { motif: MotifSummary }) {
-  const src = `data:image/svg+xml;charset=utf-8,${encodeURIComponent(motif.svg)}`;
+  const src = svgDataUrl(motif.svg);
   return (
     <li className="flex flex-col overflow-hidden rounded-card border border-linen-200 bg-white">
       <div className="flex h-36 items-center justify-center bg-linen-100 p-4">

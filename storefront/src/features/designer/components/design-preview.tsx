@@ -6,6 +6,7 @@ import { mockupSizeMm, sizeOf } from '../model/design-setting.ts';
 import { useDesignSetting } from '../hooks/use-design-setting.ts';
 import { useLetteringFontsReady } from '../hooks/use-lettering-fonts.ts';
 import { describeScene, type Drawable } from '../render/describe-scene.ts';
+import { svgDataUrl } from '@ui/svg-data-url.ts';
 
 interface DesignPreviewProps {
   garment: GarmentSummary;
@@ -18,7 +19,6 @@ interface DesignPreviewProps {
   label: string;
 }
 
-const svgSrc = (svg: string) => `data:image/svg+xml;charset=utf-8,${encodeURIComponent(svg)}`;
 
 /** One placement drawn in SVG, in the mockup's millimetres: the same drawables the designer's canvas shows. */
 function PreviewItem({ drawable, clipId }: { drawable: Drawable; clipId: string }) {
@@ -31,10 +31,10 @@ function PreviewItem({ drawable, clipId }: { drawable: Drawable; clipId: string 
         </text>
       );
     case 'motif':
-      return <image href={svgSrc(drawable.svg)} x={drawable.centerXMm - drawable.widthMm / 2} y={drawable.centerYMm - drawable.widthMm / 2} width={drawable.widthMm} height={drawable.widthMm} transform={turn} />;
+      return <image href={svgDataUrl(drawable.svg)} x={drawable.centerXMm - drawable.widthMm / 2} y={drawable.centerYMm - drawable.widthMm / 2} width={drawable.widthMm} height={drawable.widthMm} transform={turn} />;
     case 'border': {
       const { band } = drawable;
-      const src = svgSrc(drawable.svg);
+      const src = svgDataUrl(drawable.svg);
       return (
         <g clipPath={`url(#${clipId})`}>
           <clipPath id={clipId}>

@@ -1,7 +1,8 @@
 import type { ReactNode } from 'react';
 import type { MotifSummary } from '@server/contracts/catalog.ts';
+import { svgDataUrl } from '@ui/svg-data-url.ts';
 
-const pictureOf = (motif: MotifSummary) => `data:image/svg+xml;charset=utf-8,${encodeURIComponent(motif.svg)}`;
+const pictureOf = (motif: MotifSummary) => svgDataUrl(motif.svg);
 
 /** Catalogue motifs as picture cards in a radio group; `detailOf` adds a line under each name. */
 export function MotifChoice({
