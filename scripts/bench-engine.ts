@@ -14,7 +14,7 @@ import {
   fitBorder,
   planHoopings,
   priceQuote,
-  type CatalogMotif,
+  type CatalogueMotif,
   type GlyphOutlineSource,
   type PricingRuleSet,
   type QuotePlacement,
@@ -46,7 +46,7 @@ const ruleSet: PricingRuleSet = {
   taxRateBp: 825,
 };
 
-const sailboat: CatalogMotif = { stitchCount: 2400, mix: { run: 15, satin: 55, fill: 30 }, colorChanges: 2, widthMm: 60, heightMm: 45, trims: 3 };
+const sailboat: CatalogueMotif = { stitchCount: 2400, mix: { run: 15, satin: 55, fill: 30 }, colorChanges: 2, widthMm: 60, heightMm: 45, trims: 3 };
 const payload = {
   ruleSet,
   garment: { slug: 'smocked-yoke-dress', name: 'Smocked yoke dress' },
@@ -68,11 +68,11 @@ function fullQuote(): number {
   if (!fit.ok) throw new Error(fit.reason);
   const plan = planHoopings({ count: fit.count, repeatWidthMm: fit.repeatWidthMm, pitchMm: fit.pitchMm, motifHeightMm: sailboat.heightMm * fit.scale, hoop: payload.hoop, firstCenterMm: fit.centersMm[0] });
   if (!plan.ok) throw new Error(plan.reason);
-  const repeat = estimateStitches({ kind: 'catalog', motif: payload.border.motif, scale: fit.scale });
+  const repeat = estimateStitches({ kind: 'catalogue', motif: payload.border.motif, scale: fit.scale });
   if (!repeat.ok) throw new Error(repeat.reason);
   const border = estimateBorderStitches({ repeat, fit, hoopings: plan.hoopings.length });
   const name = estimateStitches({ kind: 'lettering', text: payload.lettering.text, font, letterHeightMm: payload.lettering.letterHeightMm });
-  const motifs = payload.motifs.map(({ motif, scale }) => estimateStitches({ kind: 'catalog', motif, scale }));
+  const motifs = payload.motifs.map(({ motif, scale }) => estimateStitches({ kind: 'catalogue', motif, scale }));
   if (!border.ok || !name.ok || !motifs.every((m) => m.ok)) throw new Error('estimate failed');
   const placements: QuotePlacement[] = [
     { id: 'hem', label: 'Hem border', kind: 'stitching', stitches: border.stitches, hoopings: plan.hoopings.length, colorChanges: border.colorChanges, hasCustomerArtwork: false },

@@ -7,7 +7,7 @@
 import { loadDatabaseConfig } from '../server/src/config.ts';
 import { openDatabase, type Db } from '../server/src/db/knex.ts';
 import { orderBoardQuery, type OrderBoardQuery } from '../server/src/contracts/studio-orders.ts';
-import { listBoardOrders, listDueOrders } from '../server/src/db/repos/order-board-repo.ts';
+import { listBoardOrders, listDueOrders } from '../server/src/modules/orders/order-board-repo.ts';
 import { dropLocalDatabase, localDatabaseSettings, recreateLocalDatabase, startLocalDatabase, stopLocalDatabase } from './db-lifecycle.ts';
 import { localStack } from './stack.ts';
 

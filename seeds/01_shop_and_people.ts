@@ -1,11 +1,11 @@
 import type { Knex } from 'knex';
 import { joinedAtBySub } from './data/accounts.ts';
 import { demoPeople } from './data/people.ts';
-import { at, catalogStamp } from './data/seed-time.ts';
+import { at, catalogueStamp } from './data/seed-time.ts';
 import { shopSettings } from './data/shop.ts';
 
 export async function seed(knex: Knex): Promise<void> {
-  await knex('shop_settings').insert({ ...shopSettings, ...catalogStamp });
+  await knex('shop_settings').insert({ ...shopSettings, ...catalogueStamp });
   await knex('users').insert(
     demoPeople.map((person, index) => {
       const joinedAt = at(joinedAtBySub[person.sub]);

@@ -2,7 +2,7 @@ import type { Knex } from 'knex';
 import { garments, mockupScale } from './data/garments.ts';
 import { scaleZones } from './data/placement-zones.ts';
 import { readSeedFile } from './data/seed-files.ts';
-import { catalogStamp } from './data/seed-time.ts';
+import { catalogueStamp } from './data/seed-time.ts';
 import { backMockupFiles, sizeMeasurements } from './data/garment-measurements.ts';
 
 export async function seed(knex: Knex): Promise<void> {
@@ -21,7 +21,7 @@ export async function seed(knex: Knex): Promise<void> {
       mockup_back_svg: backMockupFiles[garment.slug] ? readSeedFile('garments', backMockupFiles[garment.slug]!) : null,
       is_active: true,
       sort_order: index + 1,
-      ...catalogStamp,
+      ...catalogueStamp,
     })),
   );
   await knex('garment_sizes').insert(
@@ -40,7 +40,7 @@ export async function seed(knex: Knex): Promise<void> {
           placement_zones: JSON.stringify(scaleZones(garment.zones, scale)),
           chest_mm: sizeMeasurements[size.id]?.chestMm ?? null,
           length_mm: sizeMeasurements[size.id]?.lengthMm ?? null,
-          ...catalogStamp,
+          ...catalogueStamp,
         };
       }),
     ),
@@ -53,7 +53,7 @@ export async function seed(knex: Knex): Promise<void> {
         name: colour.name,
         hex: colour.hex,
         sort_order: index + 1,
-        ...catalogStamp,
+        ...catalogueStamp,
       })),
     ),
   );

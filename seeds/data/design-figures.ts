@@ -6,9 +6,9 @@
 import { restoreDesign, type DesignDocument, type DesignPlacement } from '../../server/src/contracts/designs.ts';
 import type { QuotePlacement } from '../../server/src/engine/index.ts';
 import { createLetteringFontLoader } from '../../server/src/integrations/lettering-fonts.ts';
-import { figureDesign } from '../../server/src/services/design-figures.ts';
-import type { PlacementFigures } from '../../server/src/services/placement-outcome.ts';
-import type { QuoteCatalog } from '../../server/src/services/quote-catalog.ts';
+import { figureDesign } from '../../server/src/modules/quotes/design-figures.ts';
+import type { PlacementFigures } from '../../server/src/modules/quotes/placement-outcome.ts';
+import type { QuoteCatalogue } from '../../server/src/modules/quotes/quote-catalogue.ts';
 import { artworkUploads, type DesignSpec, type PlacementSpec } from './designs.ts';
 import { garments, mockupScale, type SeedGarment, type SeedSize } from './garments.ts';
 import { hoops } from './hoops.ts';
@@ -37,7 +37,7 @@ function find<T>(items: readonly T[], matches: (item: T) => boolean, what: strin
 const fonts = createLetteringFontLoader();
 
 /** The catalogue as 02 and 03 seed it; only the garment and size differ from design to design. */
-const seededCatalog: Omit<QuoteCatalog, 'garment' | 'size'> = {
+const seededCatalogue: Omit<QuoteCatalogue, 'garment' | 'size'> = {
   motifs: new Map(
     motifs.map(({ slug, name, kind, widthMm, heightMm, run, satin, fill, minScalePct, maxScalePct, threadCodes }) => [
       slug,
@@ -111,13 +111,13 @@ export function designFigures(spec: DesignChoice): DesignFigures {
   const size = find(garment.sizes, (candidate) => candidate.code === spec.size, `size ${spec.size} of ${spec.garment}`);
   const colour = find(garment.colours, (candidate) => candidate.name === spec.colour, `colour ${spec.colour}`);
   const zones = scaleZones(garment.zones, mockupScale(garment, size));
-  const catalog: QuoteCatalog = {
-    ...seededCatalog,
+  const catalogue: QuoteCatalogue = {
+    ...seededCatalogue,
     garment: { id: garment.id, slug: garment.slug, name: garment.name, fabricType: garment.fabricType, isNapped: garment.isNapped, minAgeMonths: garment.ageMonths[0] },
     size: { id: size.id, code: size.code, label: size.label, hemFrontMm: size.hem?.frontMm ?? null, hemCircumferenceMm: size.hem?.circumferenceMm ?? null, zones },
   };
   const draft: DesignDocument = { version: 1, placements: spec.placements.map((placement) => draftPlacement(placement, zones)) };
-  const figured = figureDesign(catalog, draft);
+  const figured = figureDesign(catalogue, draft);
   if (!figured.ok) throw new Error(`Seed data: ${spec.garment} ${spec.size}: ${figured.error.message}`);
   const restored = restoreDesign({ version: 1, placements: draft.placements.map((placement, i) => withFit(placement, figured.value.placements[i])) });
   if (!restored.success) throw new Error(`Seed data: ${spec.garment} ${spec.size}: the design document is not valid: ${restored.error.message}`);

@@ -3,12 +3,12 @@
  * zones are the reference zones scaled by that size's mockup_scale, so they are in the size's own millimetres.
  */
 
-import type { PlacementZone as CatalogPlacementZone } from '../../server/src/services/quote-catalog.ts';
+import type { PlacementZone as CataloguePlacementZone } from '../../server/src/modules/quotes/quote-catalogue.ts';
 
 export type ZoneCode = 'hem' | 'chest' | 'collar' | 'bib_centre' | 'brim';
 
 /** The server's placement zone, with the zone codes the demo garments use. */
-export type PlacementZone = CatalogPlacementZone & { code: ZoneCode };
+export type PlacementZone = CataloguePlacementZone & { code: ZoneCode };
 
 /** 1¾ in: where a hem border's centre line commonly sits above the hem edge (common practice, no source). */
 export const defaultHemOffsetMm = 44.45;

@@ -16,4 +16,4 @@ export function addDays(date: Date, days: number): Date {
 }
 
 /** When the studio set up its catalogue: created_at and updated_at of every catalogue row. */
-export const catalogStamp = { created_at: at('2026-11-01T15:00'), updated_at: at('2026-11-01T15:00') };
+export const catalogueStamp = { created_at: at('2026-11-01T15:00'), updated_at: at('2026-11-01T15:00') };

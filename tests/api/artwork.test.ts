@@ -198,12 +198,12 @@ describe('POST /api/quotes/preview with artwork', () => {
 
 describe('the catalogue the designer reads', () => {
   it('when anyone asks for the hoops, then they get each sewing field in mm, so the designer can keep items within the largest', async () => {
-    const res = await harness.agent().get('/api/catalog/hoops').expect(200);
+    const res = await harness.agent().get('/api/catalogue/hoops').expect(200);
     expect(res.body.hoops).toContainEqual({ slug: 'large-200x300', name: 'Large 200 × 300 mm (8 × 12 in)', fieldWidthMm: 200, fieldHeightMm: 300 });
   });
 
   it('when the bishop dress is listed, then its hem zone says how far the drawn hem curves, scaled with each size', async () => {
-    const res = await harness.agent().get('/api/catalog/garments').expect(200);
+    const res = await harness.agent().get('/api/catalogue/garments').expect(200);
     const dress = res.body.garments.find((garment: { slug: string }) => garment.slug === 'bishop-dress');
     const hemOf = (code: string) => dress.sizes.find((size: { code: string }) => size.code === code).zones.find((zone: { code: string }) => zone.code === 'hem');
     expect(hemOf('12m').hemCurveMm).toBe(10);

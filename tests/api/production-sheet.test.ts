@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { productionSheetResponse, type ProductionSheet } from '../../server/src/contracts/production-sheet.ts';
 import { planHoopings } from '../../server/src/engine/index.ts';
-import { templateArea, tileTemplate } from '../../server/src/services/production-sheet-pdf-templates.ts';
+import { templateArea, tileTemplate } from '../../server/src/modules/production/production-sheet-pdf-templates.ts';
 import { useApiHarness, type ApiAgent } from '../support/api-harness.ts';
 import { signedInAgent } from '../support/api-calls.ts';
 import { readPdfPages, type PdfPage } from '../support/pdf-geometry.ts';

@@ -60,7 +60,7 @@ describe('POST /api/quotes/preview', () => {
     if (!fit.ok) throw new Error(fit.reason);
     const plan = planHoopings({ count: fit.count, repeatWidthMm: fit.repeatWidthMm, pitchMm: fit.pitchMm, motifHeightMm: daisy.heightMm * fit.scale, hoop: { fieldWidthMm: 120, fieldHeightMm: 180 } });
     if (!plan.ok) throw new Error(plan.reason);
-    const repeat = estimateStitches({ kind: 'catalog', motif: { stitchCount: daisy.run + daisy.satin + daisy.fill, mix: { run: daisy.run, satin: daisy.satin, fill: daisy.fill }, colorChanges: daisy.threadCodes.length - 1, widthMm: 180, heightMm: daisy.heightMm }, scale: fit.scale });
+    const repeat = estimateStitches({ kind: 'catalogue', motif: { stitchCount: daisy.run + daisy.satin + daisy.fill, mix: { run: daisy.run, satin: daisy.satin, fill: daisy.fill }, colorChanges: daisy.threadCodes.length - 1, widthMm: 180, heightMm: daisy.heightMm }, scale: fit.scale });
     if (!repeat.ok) throw new Error(repeat.reason);
     const border = estimateBorderStitches({ repeat, fit, hoopings: plan.hoopings.length });
     if (!border.ok) throw new Error(border.reason);

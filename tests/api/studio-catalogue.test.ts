@@ -1,8 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { converter } from 'culori';
 import { apiErrorBody } from '../../server/src/contracts/errors.ts';
-import { motifListResponse, garmentListResponse, threadListResponse, fontListResponse } from '../../server/src/contracts/catalog.ts';
-import { studioCatalogResponse } from '../../server/src/contracts/admin-catalog.ts';
+import { motifListResponse, garmentListResponse, threadListResponse, fontListResponse } from '../../server/src/contracts/catalogue.ts';
+import { studioCatalogueResponse } from '../../server/src/contracts/admin-catalogue.ts';
 import { studioGarmentListResponse } from '../../server/src/contracts/admin-catalogue-garments.ts';
 import { motifPreviewResponse, type CreateMotifRequest } from '../../server/src/contracts/admin-catalogue-motifs.ts';
 import { shippedFontListResponse } from '../../server/src/contracts/admin-catalogue-fonts.ts';
@@ -19,7 +19,7 @@ beforeAll(async () => {
 });
 
 const errorOf = (body: unknown) => apiErrorBody.parse(body).error;
-const studioCatalog = async () => studioCatalogResponse.parse((await staff.get('/api/admin/catalog').expect(200)).body);
+const studioCatalogue = async () => studioCatalogueResponse.parse((await staff.get('/api/admin/catalogue').expect(200)).body);
 const studioGarments = async () => studioGarmentListResponse.parse((await staff.get('/api/admin/catalogue/garments').expect(200)).body).garments;
 
 /** A filled 1 in × 1 in square, as in the engine's own test of fill stitches per in². */
@@ -75,11 +75,11 @@ describe('hoops', () => {
     const created = await staff.post('/api/admin/catalogue/hoops').send({ slug: 'round-150', name: 'Round 150', fieldWidthMm: 150, fieldHeightMm: 150 }).expect(201);
     const id = created.body.id as number;
     await staff.put(`/api/admin/catalogue/hoops/${id}`).send({ name: 'Round 150 mm', fieldWidthMm: 148, fieldHeightMm: 149.5 }).expect(200);
-    expect((await studioCatalog()).hoops.find((h) => h.id === id)).toMatchObject({ name: 'Round 150 mm', fieldWidthMm: 148, fieldHeightMm: 149.5, isActive: true });
+    expect((await studioCatalogue()).hoops.find((h) => h.id === id)).toMatchObject({ name: 'Round 150 mm', fieldWidthMm: 148, fieldHeightMm: 149.5, isActive: true });
     expect((await staff.post(`/api/admin/catalogue/hoops/${id}/retire`).expect(200)).body).toEqual({ id, isActive: false });
-    expect((await studioCatalog()).hoops.find((h) => h.id === id)?.isActive).toBe(false);
+    expect((await studioCatalogue()).hoops.find((h) => h.id === id)?.isActive).toBe(false);
     await staff.post(`/api/admin/catalogue/hoops/${id}/reactivate`).expect(200);
-    expect((await studioCatalog()).hoops.find((h) => h.id === id)?.isActive).toBe(true);
+    expect((await studioCatalogue()).hoops.find((h) => h.id === id)?.isActive).toBe(true);
   });
 
   it('when the short name is taken, then it answers 409 naming the field', async () => {
@@ -119,9 +119,9 @@ describe('threads', () => {
     const created = await staff.post('/api/admin/catalogue/threads').send({ code: 'WB-902', name: 'Plum', hex: '#5B2A5E' }).expect(201);
     await staff.put(`/api/admin/catalogue/threads/${created.body.id}`).send({ name: 'Deep plum', hex: '#4B1A4E' }).expect(200);
     await staff.post(`/api/admin/catalogue/threads/${created.body.id}/retire`).expect(200);
-    const palette = threadListResponse.parse((await harness.agent().get('/api/catalog/threads')).body).threads;
+    const palette = threadListResponse.parse((await harness.agent().get('/api/catalogue/threads')).body).threads;
     expect(palette.some((t) => t.code === 'WB-902')).toBe(false);
-    expect((await studioCatalog()).threads.find((t) => t.code === 'WB-902')).toMatchObject({ name: 'Deep plum', hex: '#4B1A4E', isActive: false });
+    expect((await studioCatalogue()).threads.find((t) => t.code === 'WB-902')).toMatchObject({ name: 'Deep plum', hex: '#4B1A4E', isActive: false });
   });
 
   it('when the code is taken or the hex is not a colour, then it answers 409 or 400 with the field', async () => {
@@ -140,18 +140,18 @@ describe('lettering fonts', () => {
   });
 
   it('when a font is retired, then the storefront stops offering it; reactivated, it is back', async () => {
-    const font = (await studioCatalog()).fonts.find((f) => f.slug === 'rounded-block')!;
+    const font = (await studioCatalogue()).fonts.find((f) => f.slug === 'rounded-block')!;
     await staff.post(`/api/admin/catalogue/fonts/${font.id}/retire`).expect(200);
-    const offered = async () => fontListResponse.parse((await harness.agent().get('/api/catalog/fonts')).body).fonts.map((f) => f.slug);
+    const offered = async () => fontListResponse.parse((await harness.agent().get('/api/catalogue/fonts')).body).fonts.map((f) => f.slug);
     expect(await offered()).not.toContain('rounded-block');
     await staff.post(`/api/admin/catalogue/fonts/${font.id}/reactivate`).expect(200);
     expect(await offered()).toContain('rounded-block');
   });
 
   it('when the heights are edited, then they are kept; when the largest is below the smallest, then 400 on maxHeightMm', async () => {
-    const font = (await studioCatalog()).fonts.find((f) => f.slug === 'rounded-block')!;
+    const font = (await studioCatalogue()).fonts.find((f) => f.slug === 'rounded-block')!;
     await staff.put(`/api/admin/catalogue/fonts/${font.id}`).send({ name: 'Rounded Block', minHeightMm: 12, maxHeightMm: 50 }).expect(200);
-    expect((await studioCatalog()).fonts.find((f) => f.id === font.id)).toMatchObject({ minHeightMm: 12, maxHeightMm: 50 });
+    expect((await studioCatalogue()).fonts.find((f) => f.id === font.id)).toMatchObject({ minHeightMm: 12, maxHeightMm: 50 });
     const res = await staff.put(`/api/admin/catalogue/fonts/${font.id}`).send({ name: 'Rounded Block', minHeightMm: 40, maxHeightMm: 20 }).expect(400);
     expect(errorOf(res.body).fields).toHaveProperty('maxHeightMm');
   });
@@ -201,7 +201,7 @@ describe('garments, sizes and fabric colours', () => {
     const id = created.body.id as number;
     await staff.post(`/api/admin/catalogue/garments/${id}/sizes`).send(size).expect(201);
     await staff.post(`/api/admin/catalogue/garments/${id}/colours`).send({ name: 'Oat', hex: '#e8dcc4' }).expect(201);
-    const listed = garmentListResponse.parse((await harness.agent().get('/api/catalog/garments')).body).garments.find((g) => g.id === id)!;
+    const listed = garmentListResponse.parse((await harness.agent().get('/api/catalogue/garments')).body).garments.find((g) => g.id === id)!;
     expect(listed.mockupSvg).not.toMatch(/onload/);
     expect(listed).toMatchObject({ mockupWidthMm: 300, mockupHeightMm: 400, colours: [{ name: 'Oat', hex: '#E8DCC4' }] });
     expect(listed.sizes[0]).toMatchObject({ code: '3T', hemFrontMm: 300, zones: [{ code: 'hem', hemOffsetMm: 44.45 }] });
@@ -211,7 +211,7 @@ describe('garments, sizes and fabric colours', () => {
     const id = (await studioGarments()).find((g) => g.slug === 'pinafore')!.id;
     await staff.put(`/api/admin/catalogue/garments/${id}`).send({ ...garment, mockupSvg: undefined, name: 'Linen pinafore dress', isNapped: true }).expect(200);
     await staff.post(`/api/admin/catalogue/garments/${id}/retire`).expect(200);
-    const storefront = garmentListResponse.parse((await harness.agent().get('/api/catalog/garments')).body).garments;
+    const storefront = garmentListResponse.parse((await harness.agent().get('/api/catalogue/garments')).body).garments;
     expect(storefront.some((g) => g.id === id)).toBe(false);
     expect((await studioGarments()).find((g) => g.id === id)).toMatchObject({ name: 'Linen pinafore dress', isNapped: true, isActive: false });
   });
@@ -240,7 +240,7 @@ describe('garments, sizes and fabric colours', () => {
       .send({ code: size.code, label: size.label, hemFrontMm: 545, hemCircumferenceMm: 1090, mockupScale: size.mockupScale, zones })
       .expect(200);
     await staff.put(`/api/admin/catalogue/garments/${dress.id}/colours/${colour.id}`).send({ name: 'Sea Glass', hex: '#a8d5c9' }).expect(200);
-    const listed = garmentListResponse.parse((await harness.agent().get('/api/catalog/garments')).body).garments.find((g) => g.id === dress.id)!;
+    const listed = garmentListResponse.parse((await harness.agent().get('/api/catalogue/garments')).body).garments.find((g) => g.id === dress.id)!;
     expect(listed.sizes.find((s) => s.id === size.id)).toMatchObject({ hemFrontMm: 545, hemCircumferenceMm: 1090 });
     expect(listed.sizes.find((s) => s.id === size.id)!.zones.find((zone) => zone.code === 'hem')?.hemOffsetMm).toBe(38.1);
     expect(listed.colours.find((c) => c.id === colour.id)).toMatchObject({ name: 'Sea Glass', hex: '#A8D5C9' });
@@ -324,7 +324,7 @@ describe('motifs', () => {
     // 807 top stitches plus the underlay, all under the fill.
     expect(row.fill_stitches).toBeGreaterThan(807);
     expect(row.stitch_count).toBe(row.run_stitches + row.satin_stitches + row.fill_stitches);
-    const listed = motifListResponse.parse((await harness.agent().get('/api/catalog/motifs')).body).motifs;
+    const listed = motifListResponse.parse((await harness.agent().get('/api/catalogue/motifs')).body).motifs;
     expect(listed.some((m) => m.slug === 'rosy-square')).toBe(true);
   });
 
@@ -333,7 +333,7 @@ describe('motifs', () => {
     const row = await harness.db('motifs').where({ id: res.body.id }).first();
     expect(row).toMatchObject({ stitch_count_source: 'measured', stitch_count: 1200, fill_stitches: 1200 });
     expect(row.estimated_fill_stitches).toBeGreaterThan(807);
-    const studio = (await studioCatalog()).motifs.find((m) => m.slug === 'measured-square')!;
+    const studio = (await studioCatalogue()).motifs.find((m) => m.slug === 'measured-square')!;
     expect(studio).toMatchObject({ stitchCountSource: 'measured', stitchCount: 1200, estimatedMix: { run: 0, satin: 0, fill: row.estimated_fill_stitches } });
   });
 
@@ -362,16 +362,16 @@ describe('motifs', () => {
   });
 
   it('when a motif is edited, then the new figures and threads are kept', async () => {
-    const id = (await studioCatalog()).motifs.find((m) => m.slug === 'rosy-square')!.id;
+    const id = (await studioCatalogue()).motifs.find((m) => m.slug === 'rosy-square')!.id;
     await staff.put(`/api/admin/catalogue/motifs/${id}`).send({ ...newMotif(), slug: undefined, name: 'Rosy tile', threadCodes: ['WB-110'], maxScalePct: 150 }).expect(200);
-    expect((await studioCatalog()).motifs.find((m) => m.id === id)).toMatchObject({ name: 'Rosy tile', threadCodes: ['WB-110'], maxScalePct: 150 });
+    expect((await studioCatalogue()).motifs.find((m) => m.id === id)).toMatchObject({ name: 'Rosy tile', threadCodes: ['WB-110'], maxScalePct: 150 });
   });
 
   it('when a motif an ordered design uses is retired, then the storefront drops it but the design and its order still open', async () => {
     // Seeded design 3 (Priya's bib, in order WB-1002) has the sitting bunny on it.
-    const bunny = (await studioCatalog()).motifs.find((m) => m.slug === 'sitting-bunny')!;
+    const bunny = (await studioCatalogue()).motifs.find((m) => m.slug === 'sitting-bunny')!;
     await staff.post(`/api/admin/catalogue/motifs/${bunny.id}/retire`).expect(200);
-    const listed = motifListResponse.parse((await harness.agent().get('/api/catalog/motifs')).body).motifs;
+    const listed = motifListResponse.parse((await harness.agent().get('/api/catalogue/motifs')).body).motifs;
     expect(listed.some((m) => m.slug === 'sitting-bunny')).toBe(false);
     const design = await customer.get('/api/designs/3').expect(200);
     expect(JSON.stringify(design.body.design.document)).toContain('sitting-bunny');

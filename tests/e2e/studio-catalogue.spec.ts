@@ -38,7 +38,7 @@ test('when staff upload a motif SVG, then they see the sanitized drawing and the
   await expect(row).toBeVisible();
   await expect(row).toContainText('estimated');
 
-  const offered = await (await page.request.get('/api/catalog/motifs')).json();
+  const offered = await (await page.request.get('/api/catalogue/motifs')).json();
   const tulip = offered.motifs.find((motif: { slug: string }) => motif.slug === 'tulip-sprig');
   expect(tulip).toMatchObject({ name: 'Tulip sprig', kind: 'single', widthMm: 40, heightMm: 50, colourCount: 3 });
   expect(tulip.svg).not.toContain('script');

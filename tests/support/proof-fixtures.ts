@@ -4,7 +4,7 @@
  */
 import { Jimp } from 'jimp';
 import type { Db } from '../../server/src/db/knex.ts';
-import { moveOrder } from '../../server/src/services/order-transitions.ts';
+import { moveOrder } from '../../server/src/modules/orders/order-transitions.ts';
 
 /** A plain picture to stand for a rendered proof: a linen field with a coloured band where the border would be. */
 export async function proofPicture(bandColour = 0xb5533cff): Promise<Buffer> {

@@ -6,7 +6,7 @@
 import Stripe from 'stripe';
 import { startStripeFake } from '../../fakes/stripe/server.ts';
 import type { Db } from '../../server/src/db/knex.ts';
-import { moveOrder } from '../../server/src/services/order-transitions.ts';
+import { moveOrder } from '../../server/src/modules/orders/order-transitions.ts';
 import { fixedNow, startApiHarness } from './api-harness.ts';
 
 /** The official SDK against a Stripe stand-in, configured as the server's own client is. */

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { garmentSummary } from './catalog.ts';
+import { garmentSummary } from './catalogue.ts';
 import { catalogueName, catalogueSlug, hexColour, lengthMm, sortOrder } from './admin-catalogue-common.ts';
 
 export const garmentKinds = ['dress', 'romper', 'bishop_dress', 'bib', 'bonnet'] as const;

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { motifKind } from './catalog.ts';
+import { motifKind } from './catalogue.ts';
 import { catalogueName, catalogueSlug, lengthMm, sortOrder } from './admin-catalogue-common.ts';
 import { threadCodeField } from './admin-catalogue-threads.ts';
 

@@ -28,7 +28,7 @@ export function strictObjectErrors(what: string) {
 
 const placementId = z.string().regex(/^[A-Za-z0-9_-]{1,40}$/, 'Use 1 to 40 letters, digits, “-” or “_”');
 /** Catalogue slugs (motifs, fonts, hoops): lower-case words joined by hyphens. */
-const catalogSlug = z.string().max(80).regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, 'Choose one from the catalogue');
+const catalogueSlug = z.string().max(80).regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, 'Choose one from the catalogue');
 const zoneCode = z.string().regex(/^[a-z][a-z0-9_]{0,39}$/, 'Choose a place on the garment');
 /** A thread's code in the shop's palette, such as "WB-118". */
 const threadCode = z.string().regex(/^[A-Za-z0-9][A-Za-z0-9 ._-]{0,19}$/, 'Choose a thread from the palette');
@@ -53,13 +53,13 @@ const borderPlacement = z.strictObject({
   id: placementId,
   kind: z.literal('border'),
   zone: z.literal('hem'),
-  motif: catalogSlug,
+  motif: catalogueSlug,
   run: z.enum(['front', 'circumference']),
   count: z.number().int().min(1, 'Ask for at least 1 repeat').max(MAX_REQUESTED_REPEATS, `Ask for at most ${MAX_REQUESTED_REPEATS} repeats`).optional(),
   scalePct: z.number().min(1).max(400).optional(),
   /** The border's centre line above the hem edge, mm. */
   hemOffsetMm: z.number().min(0).max(500),
-  hoop: catalogSlug.optional(),
+  hoop: catalogueSlug.optional(),
   /** One per colour of the motif, in stitching order. */
   threads: threadCodes,
 }, strictObjectErrors('the border'));
@@ -69,7 +69,7 @@ const motifPlacement = z.strictObject({
   id: placementId,
   kind: z.literal('motif'),
   ...itemPosition,
-  motif: catalogSlug,
+  motif: catalogueSlug,
   scalePct: z.number().min(1, 'Use a size from 1 % to 400 %').max(400, 'Use a size from 1 % to 400 %'),
   threads: threadCodes,
 }, strictObjectErrors('the motif'));
@@ -84,7 +84,7 @@ const letteringPlacement = z.strictObject({
     .refine((text) => text.trim() !== '', 'Type the lettering')
     .refine((text) => [...text].length <= MAX_LETTERING_LENGTH, `Keep the lettering to ${MAX_LETTERING_LENGTH} characters or fewer`)
     .refine((text) => !/\p{Cc}/u.test(text), 'Lettering is one line of text'),
-  font: catalogSlug,
+  font: catalogueSlug,
   letterHeightMm: z.number().min(5, 'Letters must be at least 5 mm tall').max(100, 'Letters can be at most 100 mm tall'),
   thread: threadCode,
 }, strictObjectErrors('the lettering'));

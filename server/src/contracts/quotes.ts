@@ -4,14 +4,14 @@ import { designDocument, strictObjectErrors } from './designs.ts';
 /** Garments one quote may price: more is a wholesale order the studio quotes by hand. */
 const MAX_QUOTE_QUANTITY = 50;
 
-const catalogId = (what: string) => z.number({ error: `Choose a ${what}` }).int(`Choose a ${what}`).positive(`Choose a ${what}`);
+const catalogueId = (what: string) => z.number({ error: `Choose a ${what}` }).int(`Choose a ${what}`).positive(`Choose a ${what}`);
 
 /** A design to price, without saving it; strict, like the design document. */
 export const quotePreviewRequest = z.strictObject(
   {
-    garmentId: catalogId('garment'),
-    sizeId: catalogId('size'),
-    colourId: catalogId('fabric colour').optional(),
+    garmentId: catalogueId('garment'),
+    sizeId: catalogueId('size'),
+    colourId: catalogueId('fabric colour').optional(),
     quantity: z
       .number({ error: 'Enter how many garments you would like' })
       .int('Enter a whole number of garments')

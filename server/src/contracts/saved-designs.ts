@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { designDocument, strictObjectErrors } from './designs.ts';
 
-const catalogId = (what: string) => z.number({ error: `Choose a ${what}` }).int(`Choose a ${what}`).positive(`Choose a ${what}`);
+const catalogueId = (what: string) => z.number({ error: `Choose a ${what}` }).int(`Choose a ${what}`).positive(`Choose a ${what}`);
 
 export const designIdParams = z.object({
   id: z
@@ -16,9 +16,9 @@ export const designName = z.string().trim().min(1, 'Give the design a name').max
 /** What a customer saves: the garment, size and colour chosen, a name of their own, and the document. */
 export const saveDesignRequest = z.strictObject(
   {
-    garmentId: catalogId('garment'),
-    sizeId: catalogId('size'),
-    colourId: catalogId('fabric colour'),
+    garmentId: catalogueId('garment'),
+    sizeId: catalogueId('size'),
+    colourId: catalogueId('fabric colour'),
     name: designName,
     document: designDocument,
   },

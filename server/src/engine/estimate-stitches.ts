@@ -1,6 +1,6 @@
 import { fail, type EngineResult } from './engine-result.ts';
 import { isRecord } from './input-checks.ts';
-import { estimateCatalogStitches, type CatalogMotif } from './estimate-catalog-stitches.ts';
+import { estimateCatalogueStitches, type CatalogueMotif } from './estimate-catalogue-stitches.ts';
 import { estimateLetteringStitches, type GlyphOutlineSource } from './estimate-lettering-stitches.ts';
 import { estimateSvgStitches, type SvgSize } from './estimate-svg-stitches.ts';
 import type { StitchEstimate } from './stitch-estimate.ts';
@@ -8,13 +8,13 @@ import { resolveStitchSettings, type StitchSettings } from './stitch-settings.ts
 
 /** What to estimate: a catalogue motif at a scale, SVG artwork, or lettering. */
 export type StitchSource =
-  | { kind: 'catalog'; motif: CatalogMotif; scale: number }
+  | { kind: 'catalogue'; motif: CatalogueMotif; scale: number }
   | { kind: 'svg'; svgText: string; size?: SvgSize }
   | { kind: 'lettering'; text: string; font: GlyphOutlineSource; letterHeightMm: number };
 
 /**
  * Estimates stitches, colour changes and trims for one design source, with its stitched width and height in mm.
- * - catalog: the measured count at 100 %, rescaled (running and satin × scale, fill × scale²).
+ * - catalogue: the measured count at 100 %, rescaled (running and satin × scale, fill × scale²).
  * - svg: paths and basic shapes, in mm from the file's size or `size`. A filled shape whose equivalent column is
  *   narrower than `satinMaxWidthMm` is satin, else fill; a stroke under `satinMinStrokeWidthMm` is running
  *   stitch (`data-stitch="double"`, `"triple"` or `"bean"` on the element or a group multiplies the passes),
@@ -28,8 +28,8 @@ export function estimateStitches(source: StitchSource, settings?: Partial<Stitch
   const resolved = resolveStitchSettings(settings);
   if ('reason' in resolved) return resolved;
   switch (source.kind) {
-    case 'catalog':
-      return estimateCatalogStitches(source.motif, source.scale);
+    case 'catalogue':
+      return estimateCatalogueStitches(source.motif, source.scale);
     case 'svg':
       return estimateSvgStitches(source.svgText, source.size, resolved);
     case 'lettering':

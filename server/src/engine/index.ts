@@ -15,7 +15,7 @@ export type { HoopField, Hooping, HoopingPlan, HoopingPlanInput, HoopingSide } f
 
 export { estimateStitches } from './estimate-stitches.ts';
 export type { StitchSource } from './estimate-stitches.ts';
-export type { CatalogMotif } from './estimate-catalog-stitches.ts';
+export type { CatalogueMotif } from './estimate-catalogue-stitches.ts';
 export type { SvgSize } from './estimate-svg-stitches.ts';
 export { MAX_LETTERING_CHARACTERS } from './estimate-lettering-stitches.ts';
 export type { GlyphOutlineSource } from './estimate-lettering-stitches.ts';

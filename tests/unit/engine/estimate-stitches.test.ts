@@ -15,7 +15,7 @@ describe('estimateStitches: catalogue motifs', () => {
   const motif = { stitchCount: 10_000, mix: { run: 20, satin: 30, fill: 50 }, colorChanges: 3, widthMm: 80, heightMm: 60 };
 
   it('when a motif is stitched at 100 %, then the measured count and mix come back unchanged', () => {
-    expect(estimateStitches({ kind: 'catalog', motif, scale: 1 })).toMatchObject({
+    expect(estimateStitches({ kind: 'catalogue', motif, scale: 1 })).toMatchObject({
       ok: true,
       stitches: 10_000,
       colorChanges: 3,
@@ -26,14 +26,14 @@ describe('estimateStitches: catalogue motifs', () => {
   });
 
   it('when a motif is halved, then running and satin stitches halve and fill stitches quarter (length vs area rule)', () => {
-    const half = estimateStitches({ kind: 'catalog', motif, scale: 0.5 });
+    const half = estimateStitches({ kind: 'catalogue', motif, scale: 0.5 });
     expect(half).toMatchObject({ ok: true, byType: { run: 1000, satin: 1500, fill: 1250 }, stitches: 3750, widthMm: 40, heightMm: 30 });
   });
 
   it.each([
-    ['a zero scale', { kind: 'catalog', motif, scale: 0 }],
-    ['an all-zero mix', { kind: 'catalog', motif: { ...motif, mix: { run: 0, satin: 0, fill: 0 } }, scale: 1 }],
-    ['a fractional stitch count', { kind: 'catalog', motif: { ...motif, stitchCount: 10.5 }, scale: 1 }],
+    ['a zero scale', { kind: 'catalogue', motif, scale: 0 }],
+    ['an all-zero mix', { kind: 'catalogue', motif: { ...motif, mix: { run: 0, satin: 0, fill: 0 } }, scale: 1 }],
+    ['a fractional stitch count', { kind: 'catalogue', motif: { ...motif, stitchCount: 10.5 }, scale: 1 }],
     ['an unknown kind', { kind: 'photo' }],
   ])('when given %s, then it fails with a reason', (_, source) => {
     expect(estimateStitches(source as never).ok).toBe(false);

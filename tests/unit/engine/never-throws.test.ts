@@ -82,7 +82,7 @@ describe('no input makes an engine function throw', () => {
     fc.assert(
       fc.property(junk, shaped(['stitchCount', 'colorChanges', 'widthMm', 'heightMm', 'trims']), number, junk, (source, motif, scale, settings) => {
         survives(() => estimateStitches(source as never));
-        survives(() => estimateStitches({ kind: 'catalog', motif: { mix: { run: 1, satin: 1, fill: 1 }, ...motif }, scale } as never, settings as never));
+        survives(() => estimateStitches({ kind: 'catalogue', motif: { mix: { run: 1, satin: 1, fill: 1 }, ...motif }, scale } as never, settings as never));
       }),
       { numRuns: 500 },
     );

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import type { DesignDocument, DesignPlacement } from '../../../server/src/contracts/designs.ts';
-import { figureDesign } from '../../../server/src/services/design-figures.ts';
-import type { CatalogMotifEntry, QuoteCatalog } from '../../../server/src/services/quote-catalog.ts';
+import { figureDesign } from '../../../server/src/modules/quotes/design-figures.ts';
+import type { CatalogueMotifEntry, QuoteCatalogue } from '../../../server/src/modules/quotes/quote-catalogue.ts';
 import { loadShippedFont } from '../engine/support/load-font.ts';
 
-const daisyChain: CatalogMotifEntry = {
+const daisyChain: CatalogueMotifEntry = {
   slug: 'daisy-chain',
   name: 'Daisy chain',
   kind: 'border',
@@ -18,7 +18,7 @@ const daisyChain: CatalogMotifEntry = {
   minScalePct: 90,
   maxScalePct: 110,
 };
-const littleLamb: CatalogMotifEntry = { ...daisyChain, slug: 'little-lamb', name: 'Little lamb', kind: 'single', widthMm: 62, heightMm: 43, minScalePct: 85, maxScalePct: 115 };
+const littleLamb: CatalogueMotifEntry = { ...daisyChain, slug: 'little-lamb', name: 'Little lamb', kind: 'single', widthMm: 62, heightMm: 43, minScalePct: 85, maxScalePct: 115 };
 
 /** Hoops out of area order, so the test shows the smallest workable one is chosen, not the first listed. */
 const hoops = [
@@ -27,7 +27,7 @@ const hoops = [
   { slug: 'square-100', name: 'Square 100 × 100 mm', fieldWidthMm: 100, fieldHeightMm: 100 },
 ];
 
-function catalogWith(changes: Partial<QuoteCatalog> = {}): QuoteCatalog {
+function catalogueWith(changes: Partial<QuoteCatalogue> = {}): QuoteCatalogue {
   return {
     garment: { id: 3, slug: 'bishop-dress', name: 'Bishop dress', fabricType: 'woven', isNapped: false, minAgeMonths: 6 },
     size: {
@@ -77,7 +77,7 @@ describe('figureDesign', () => {
   it('when a 180 mm daisy chain allowed 90–110 % goes round a 692 mm hem, then it is 4 repeats of 173 mm in 4 hoopings of the 120 × 180 hoop', () => {
     // Issue 3's worked case (common practice, no source): 692 ÷ 4 = 173 mm a repeat, 96.1 % of 180 mm; one
     // 173 mm repeat per 180 mm field, so 4 hoopings. The 100 mm square is smaller but cannot hold a repeat.
-    const figured = figureDesign(catalogWith(), design(border()));
+    const figured = figureDesign(catalogueWith(), design(border()));
     if (!figured.ok) throw new Error(figured.error.message);
     const [hem] = figured.value.placements;
     expect(hem.border).toMatchObject({ count: 4, scalePct: 96.11, hoop: { slug: 'oblong-120x180' } });
@@ -90,7 +90,7 @@ describe('figureDesign', () => {
   });
 
   it('when the customer asks for a count that cannot fit, then it is refused at the count with the engine’s reason and a count that fits', () => {
-    const figured = figureDesign(catalogWith(), design(border({ count: 3 })));
+    const figured = figureDesign(catalogueWith(), design(border({ count: 3 })));
     expect(figured).toEqual({
       ok: false,
       error: {
@@ -102,8 +102,8 @@ describe('figureDesign', () => {
   });
 
   it('when no count of repeats fits the front hem, then the message says what each count would need', () => {
-    const size = { ...catalogWith().size, hemFrontMm: 250 };
-    const figured = figureDesign(catalogWith({ size }), design(border({ run: 'front' })));
+    const size = { ...catalogueWith().size, hemFrontMm: 250 };
+    const figured = figureDesign(catalogueWith({ size }), design(border({ run: 'front' })));
     expect(!figured.ok && figured.error).toEqual({
       kind: 'invalid',
       message: "The Daisy chain doesn't fit along the front hem in size 6 months: 1 repeat need 138.9 % and 2 repeats need 69.4 %; this motif allows 90 % to 110 %.",
@@ -112,13 +112,13 @@ describe('figureDesign', () => {
   });
 
   it('when the garment has no hem, then a border is refused at its zone', () => {
-    const size = { ...catalogWith().size, hemFrontMm: null, hemCircumferenceMm: null };
-    const figured = figureDesign(catalogWith({ size }), design(border()));
+    const size = { ...catalogueWith().size, hemFrontMm: null, hemCircumferenceMm: null };
+    const figured = figureDesign(catalogueWith({ size }), design(border()));
     expect(!figured.ok && figured.error.fields).toEqual({ 'document.placements.0.zone': 'The Bishop dress has no hem to take a border.' });
   });
 
   it('when lettering is added, then it is one hooping priced as lettering, with its stitched size', () => {
-    const figured = figureDesign(catalogWith(), design(border(), lettering('Noah', 16)));
+    const figured = figureDesign(catalogueWith(), design(border(), lettering('Noah', 16)));
     if (!figured.ok) throw new Error(figured.error.message);
     const name = figured.value.placements[1];
     expect(name).toMatchObject({ id: 'name', label: 'Lettering “Noah”', kind: 'lettering', hoopings: 1 });
@@ -130,18 +130,18 @@ describe('figureDesign', () => {
   });
 
   it('when lettering is outside the font’s heights or larger than every hoop, then it is refused at the letter height', () => {
-    const tooSmall = figureDesign(catalogWith(), design(lettering('Noah', 6)));
+    const tooSmall = figureDesign(catalogueWith(), design(lettering('Noah', 6)));
     expect(!tooSmall.ok && tooSmall.error.fields).toEqual({
       'document.placements.0.letterHeightMm': 'Rounded Block sews cleanly from 8 to 60 mm tall; choose a letter height in that range.',
     });
-    const tooWide = figureDesign(catalogWith(), design(lettering('Alexandra Rose', 60)));
+    const tooWide = figureDesign(catalogueWith(), design(lettering('Alexandra Rose', 60)));
     expect(!tooWide.ok && tooWide.error.fields?.['document.placements.0.letterHeightMm']).toMatch(
       /^“Alexandra Rose” at 60 mm comes to \d+(\.\d)? × \d+(\.\d)? mm, bigger than the 200 × 300 mm sewing field of our largest hoop; make it smaller\.$/,
     );
   });
 
   it('when a placement names a motif the catalogue does not have, then it is refused at that field', () => {
-    const figured = figureDesign(catalogWith(), design(lettering('Noah', 16), border({ motif: 'dancing-hippos' })));
+    const figured = figureDesign(catalogueWith(), design(lettering('Noah', 16), border({ motif: 'dancing-hippos' })));
     expect(figured).toEqual({
       ok: false,
       error: {
@@ -154,7 +154,7 @@ describe('figureDesign', () => {
 
   it('when several placements are wrong, then each is named at its own field', () => {
     const lamb: DesignPlacement = { id: 'lamb', kind: 'motif', zone: 'pocket', centerXMm: 50, centerYMm: 50, rotationDeg: 0, motif: 'little-lamb', scalePct: 100, threads: ['WB-127'] };
-    const figured = figureDesign(catalogWith(), design(border({ motif: 'little-lamb' }), lamb, { ...lamb, id: 'lamb-2', zone: 'chest', scalePct: 150 }));
+    const figured = figureDesign(catalogueWith(), design(border({ motif: 'little-lamb' }), lamb, { ...lamb, id: 'lamb-2', zone: 'chest', scalePct: 150 }));
     expect(!figured.ok && figured.error.fields).toEqual({
       'document.placements.0.motif': 'The Little lamb is a single motif, not a border; place it on the garment instead.',
       'document.placements.1.zone': 'The Bishop dress has no place called “pocket”; choose Hem border or Below the smocking.',
@@ -163,13 +163,13 @@ describe('figureDesign', () => {
   });
 
   it('when a motif has fewer threads than colours, then it is refused at its threads', () => {
-    const figured = figureDesign(catalogWith(), design(border({ threads: ['WB-118'] })));
+    const figured = figureDesign(catalogueWith(), design(border({ threads: ['WB-118'] })));
     expect(!figured.ok && figured.error.fields).toEqual({ 'document.placements.0.threads': 'The Daisy chain is sewn in 3 colours; choose a thread for each.' });
   });
 
   it('when the design has the customer’s own artwork and uploads are not supported, then it says they are coming soon', () => {
     const artwork: DesignPlacement = { id: 'sun', kind: 'artwork', zone: 'chest', centerXMm: 50, centerYMm: 50, rotationDeg: 0, artworkUploadId: 1, widthMm: 56 };
-    const figured = figureDesign(catalogWith(), design(artwork));
+    const figured = figureDesign(catalogueWith(), design(artwork));
     expect(!figured.ok && figured.error).toEqual({
       kind: 'invalid',
       message: 'Uploading your own artwork is coming soon.',
@@ -180,7 +180,7 @@ describe('figureDesign', () => {
   it('when uploads are given, then artwork is estimated from its SVG and carries the setup fee', () => {
     const svgText = '<svg xmlns="http://www.w3.org/2000/svg" width="40mm" height="40mm" viewBox="0 0 40 40"><circle cx="20" cy="20" r="18" fill="#fc0"/></svg>';
     const artwork: DesignPlacement = { id: 'sun', kind: 'artwork', zone: 'chest', centerXMm: 50, centerYMm: 50, rotationDeg: 0, artworkUploadId: 1, widthMm: 56 };
-    const figured = figureDesign(catalogWith({ artworkUploads: new Map([[1, { svgText }]]) }), design(artwork));
+    const figured = figureDesign(catalogueWith({ artworkUploads: new Map([[1, { svgText }]]) }), design(artwork));
     if (!figured.ok) throw new Error(figured.error.message);
     expect(figured.value.quotePlacements[0]).toMatchObject({ label: 'Your artwork', kind: 'stitching', hoopings: 1, hasCustomerArtwork: true });
     // The drawing is set 56 mm wide, so the 36 mm circle of its 40 mm view box stitches 36 × 56 ÷ 40 = 50.4 mm.
@@ -189,20 +189,20 @@ describe('figureDesign', () => {
 
   it('when the upload is a photo or scan, then it has no stitch count yet, keeps its proportions, and its price is marked provisional', () => {
     const artwork: DesignPlacement = { id: 'scan', kind: 'artwork', zone: 'chest', centerXMm: 50, centerYMm: 50, rotationDeg: 0, artworkUploadId: 2, widthMm: 60 };
-    const figured = figureDesign(catalogWith({ artworkUploads: new Map([[2, { rasterSizePx: { widthPx: 900, heightPx: 600 } }]]) }), design(artwork));
+    const figured = figureDesign(catalogueWith({ artworkUploads: new Map([[2, { rasterSizePx: { widthPx: 900, heightPx: 600 } }]]) }), design(artwork));
     if (!figured.ok) throw new Error(figured.error.message);
     expect(figured.value.placements[0]).toMatchObject({ isPriceProvisional: true, hasCustomerArtwork: true, estimate: { stitches: 0, widthMm: 60, heightMm: 40 } });
     expect(figured.value.quotePlacements[0]).toMatchObject({ stitches: 0, hasCustomerArtwork: true, isStitchCountPending: true });
   });
 
   it('when a design has nothing on it, then there is nothing to price', () => {
-    const figured = figureDesign(catalogWith(), design());
+    const figured = figureDesign(catalogueWith(), design());
     expect(!figured.ok && figured.error.fields).toEqual({ 'document.placements': 'Add a border, a name or a motif so there is embroidery to price.' });
   });
 
   it('when the garment is knit, napped and for babies, then the advice is cut-away with a topping and a soft back, and the cautions start under 3', () => {
-    const garment = { ...catalogWith().garment, fabricType: 'knit' as const, isNapped: true, minAgeMonths: 0 };
-    const figured = figureDesign(catalogWith({ garment }), design(border()));
+    const garment = { ...catalogueWith().garment, fabricType: 'knit' as const, isNapped: true, minAgeMonths: 0 };
+    const figured = figureDesign(catalogueWith({ garment }), design(border()));
     if (!figured.ok) throw new Error(figured.error.message);
     const { stabilizer, cautions } = figured.value;
     expect(stabilizer).toMatchObject({ backing: 'cutaway', topping: 'water-soluble' });
@@ -211,7 +211,7 @@ describe('figureDesign', () => {
   });
 
   it('when the machine time is figured, then it is for one garment: stitches at the shop’s speed, stops, hoopings and setup', () => {
-    const figured = figureDesign(catalogWith(), design(border()));
+    const figured = figureDesign(catalogueWith(), design(border()));
     if (!figured.ok) throw new Error(figured.error.message);
     const { runMinutes, totals } = figured.value;
     const minutesOf = (code: string) => runMinutes.items.find((item) => item.code === code)!.minutes;

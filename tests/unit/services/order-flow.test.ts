@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { orderStatuses, type OrderStatus } from '../../../server/src/contracts/order-status.ts';
-import { availableOrderActions, finalStatuses, orderActions, planOrderMove, type OrderAction, type OrderActor } from '../../../server/src/services/order-flow.ts';
+import { availableOrderActions, finalStatuses, orderActions, planOrderMove, type OrderAction, type OrderActor } from '../../../server/src/modules/orders/order-flow.ts';
 
 const actors: OrderActor[] = ['customer', 'staff', 'owner', 'system'];
 

@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { figureDesign } from '../../../server/src/services/design-figures.ts';
-import { sheetBorderPlan } from '../../../server/src/services/production-sheet-hoopings.ts';
-import { formatLengthPlain } from '../../../server/src/services/production-sheet-pdf-kit.ts';
-import { templateArea, tileName, tileTemplate, TILE_OVERLAP_MM } from '../../../server/src/services/production-sheet-pdf-templates.ts';
-import type { QuoteCatalog } from '../../../server/src/services/quote-catalog.ts';
-import { letteringOutline } from '../../../server/src/services/production-sheet-outlines.ts';
-import { itemTemplate } from '../../../server/src/services/production-sheet-templates.ts';
+import { figureDesign } from '../../../server/src/modules/quotes/design-figures.ts';
+import { sheetBorderPlan } from '../../../server/src/modules/production/production-sheet-hoopings.ts';
+import { formatLengthPlain } from '../../../server/src/modules/production/production-sheet-pdf-kit.ts';
+import { templateArea, tileName, tileTemplate, TILE_OVERLAP_MM } from '../../../server/src/modules/production/production-sheet-pdf-templates.ts';
+import type { QuoteCatalogue } from '../../../server/src/modules/quotes/quote-catalogue.ts';
+import { letteringOutline } from '../../../server/src/modules/production/production-sheet-outlines.ts';
+import { itemTemplate } from '../../../server/src/modules/production/production-sheet-templates.ts';
 import type { SheetPlacement } from '../../../server/src/contracts/production-sheet.ts';
 import { loadShippedFont } from '../engine/support/load-font.ts';
 
@@ -13,7 +13,7 @@ const daisyChain = {
   slug: 'daisy-chain', name: 'Daisy chain', kind: 'border' as const, widthMm: 180, heightMm: 40, gapMm: 0,
   run: 460, satin: 3420, fill: 500, colourCount: 3, minScalePct: 90, maxScalePct: 110,
 };
-const catalog: QuoteCatalog = {
+const catalogue: QuoteCatalogue = {
   garment: { id: 3, slug: 'bishop-dress', name: 'Bishop dress', fabricType: 'woven', isNapped: false, minAgeMonths: 6 },
   size: { id: 301, code: '6m', label: '6 months', hemFrontMm: 346, hemCircumferenceMm: 692, zones: [] },
   motifs: new Map([[daisyChain.slug, daisyChain]]),
@@ -23,7 +23,7 @@ const catalog: QuoteCatalog = {
 };
 
 function planFor(run: 'front' | 'circumference') {
-  const figured = figureDesign(catalog, {
+  const figured = figureDesign(catalogue, {
     version: 1,
     placements: [{ id: 'hem', kind: 'border', zone: 'hem', motif: 'daisy-chain', run, hemOffsetMm: 44.45, threads: ['WB-118', 'WB-101', 'WB-103'] }],
   });

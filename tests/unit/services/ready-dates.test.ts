@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { addWorkingDays, shopToday, workOutReadyDates } from '../../../server/src/services/ready-dates.ts';
+import { addWorkingDays, shopToday, workOutReadyDates } from '../../../server/src/modules/quotes/ready-dates.ts';
 
 // Weekdays checked against the Gregorian calendar: 1 December 2026 is a Tuesday.
 describe('ready dates', () => {

@@ -1,7 +1,7 @@
 import { useState } from 'react';
-import type { StudioFont, StudioHoop, StudioMotif, StudioThread } from '@server/contracts/admin-catalog.ts';
+import type { StudioFont, StudioHoop, StudioMotif, StudioThread } from '@server/contracts/admin-catalogue.ts';
 import { EmptyState, ErrorNotice, Loading } from '@ui/components/page-state.tsx';
-import { useStudioCatalog } from '../../features/catalogue/api/get-studio-catalog.ts';
+import { useStudioCatalogue } from '../../features/catalogue/api/get-studio-catalogue.ts';
 import { useStudioGarments } from '../../features/catalogue/api/get-studio-garments.ts';
 import type { CatalogueKind } from '../../features/catalogue/api/save-catalogue-row.ts';
 import { CataloguePanel } from '../../features/catalogue/components/catalogue-panel.tsx';
@@ -75,11 +75,11 @@ function RowActions({ kind, row, onEdit }: { kind: CatalogueKind; row: { id: num
 }
 
 export function CataloguePage() {
-  const catalog = useStudioCatalog();
+  const catalogue = useStudioCatalogue();
   const garments = useStudioGarments();
   const [open, setOpen] = useState<OpenForm>({ form: 'none' });
   const close = () => setOpen({ form: 'none' });
-  const threads = catalog.data?.threads ?? [];
+  const threads = catalogue.data?.threads ?? [];
 
   return (
     <div className="grid min-w-0 gap-6">
@@ -106,10 +106,10 @@ export function CataloguePage() {
         )}
       </CataloguePanel>
 
-      {catalog.isPending ? (
+      {catalogue.isPending ? (
         <Loading label="Opening the catalogue…" />
-      ) : catalog.isError ? (
-        <ErrorNotice message={catalog.error.message} onRetry={() => void catalog.refetch()} />
+      ) : catalogue.isError ? (
+        <ErrorNotice message={catalogue.error.message} onRetry={() => void catalogue.refetch()} />
       ) : (
         <>
           <CataloguePanel
@@ -119,9 +119,9 @@ export function CataloguePage() {
             addLabel="Add motif"
             onAdd={() => setOpen({ form: 'motif' })}
           >
-            {catalog.data.motifs.length ? (
+            {catalogue.data.motifs.length ? (
               <MotifTable
-                motifs={catalog.data.motifs}
+                motifs={catalogue.data.motifs}
                 threads={threads}
                 renderActions={(motif) => (
                   <span className="flex flex-col gap-1">
@@ -135,9 +135,9 @@ export function CataloguePage() {
           </CataloguePanel>
           <div className="grid gap-6 lg:grid-cols-2">
             <CataloguePanel id="lettering" title="Lettering" note="Only fonts shipped with the shop can be offered." addLabel="Add font" onAdd={() => setOpen({ form: 'font' })}>
-              {catalog.data.fonts.length ? (
+              {catalogue.data.fonts.length ? (
                 <LetteringSamples
-                  fonts={catalog.data.fonts}
+                  fonts={catalogue.data.fonts}
                   renderActions={(font) => <RowActions kind="fonts" row={font} onEdit={() => setOpen({ form: 'font', font })} />}
                 />
               ) : (
@@ -145,9 +145,9 @@ export function CataloguePage() {
               )}
             </CataloguePanel>
             <CataloguePanel id="hoops" title="Hoops" note="Sewing fields, drawn to the same scale." addLabel="Add hoop" onAdd={() => setOpen({ form: 'hoop' })}>
-              {catalog.data.hoops.length ? (
+              {catalogue.data.hoops.length ? (
                 <HoopFields
-                  hoops={catalog.data.hoops}
+                  hoops={catalogue.data.hoops}
                   renderActions={(hoop) => <RowActions kind="hoops" row={hoop} onEdit={() => setOpen({ form: 'hoop', hoop })} />}
                 />
               ) : (

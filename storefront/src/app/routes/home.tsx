@@ -1,12 +1,12 @@
 import { useSearchParams } from 'react-router-dom';
 import { EmptyState, ErrorNotice, Loading } from '@ui/components/page-state.tsx';
-import { useGarments } from '../../features/catalog/api/get-garments.ts';
-import { useMotifs } from '../../features/catalog/api/get-motifs.ts';
-import { useFonts } from '../../features/catalog/api/get-fonts.ts';
-import { GarmentCard } from '../../features/catalog/components/garment-card.tsx';
-import { CatalogueFilters } from '../../features/catalog/components/catalogue-filters.tsx';
-import { EmbroideryCatalogue } from '../../features/catalog/components/embroidery-catalogue.tsx';
-import { readCatalogueFilter, writeCatalogueFilter, type CatalogueFilter } from '../../features/catalog/model/catalogue-filter.ts';
+import { useGarments } from '../../features/catalogue/api/get-garments.ts';
+import { useMotifs } from '../../features/catalogue/api/get-motifs.ts';
+import { useFonts } from '../../features/catalogue/api/get-fonts.ts';
+import { GarmentCard } from '../../features/catalogue/components/garment-card.tsx';
+import { CatalogueFilters } from '../../features/catalogue/components/catalogue-filters.tsx';
+import { EmbroideryCatalogue } from '../../features/catalogue/components/embroidery-catalogue.tsx';
+import { readCatalogueFilter, writeCatalogueFilter, type CatalogueFilter } from '../../features/catalogue/model/catalogue-filter.ts';
 import { paths } from '../../config/paths.ts';
 
 export function HomePage() {

@@ -3,7 +3,7 @@
  * with its 6-month size scaled by 346 / 380, the daisy border and the sitting bunny. Lettering is "measured" as
  * 0.6 × the letter height per character and 1.3 × the letter height tall, so tests need no fonts.
  */
-import type { GarmentSummary, LetteringFontSummary, MotifSummary } from '../../../../server/src/contracts/catalog.ts';
+import type { GarmentSummary, LetteringFontSummary, MotifSummary } from '../../../../server/src/contracts/catalogue.ts';
 import type { DesignSetting } from '../../../../storefront/src/features/designer/model/design-setting.ts';
 
 const hemOffsetMm = 44.45;

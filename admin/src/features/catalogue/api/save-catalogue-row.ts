@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { catalogueRowRef } from '@server/contracts/admin-catalogue-common.ts';
 import { apiRequest } from '@ui/api-client.ts';
-import { studioCatalogQuery } from './get-studio-catalog.ts';
+import { studioCatalogueQuery } from './get-studio-catalogue.ts';
 import { studioGarmentsQuery } from './get-studio-garments.ts';
 import { shippedFontsQuery } from './get-shipped-fonts.ts';
 
@@ -13,7 +13,7 @@ export function useInvalidateCatalogue() {
   const queryClient = useQueryClient();
   return async (kind: CatalogueKind) => {
     if (kind === 'garments') return queryClient.invalidateQueries({ queryKey: studioGarmentsQuery().queryKey });
-    await queryClient.invalidateQueries({ queryKey: studioCatalogQuery().queryKey });
+    await queryClient.invalidateQueries({ queryKey: studioCatalogueQuery().queryKey });
     if (kind === 'fonts') await queryClient.invalidateQueries({ queryKey: shippedFontsQuery().queryKey });
   };
 }

@@ -1,7 +1,7 @@
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { createFontRequest } from '@server/contracts/admin-catalogue-fonts.ts';
-import type { StudioFont } from '@server/contracts/admin-catalog.ts';
+import type { StudioFont } from '@server/contracts/admin-catalogue.ts';
 import { useShippedFonts } from '../api/get-shipped-fonts.ts';
 import { useSaveCatalogueRow } from '../api/save-catalogue-row.ts';
 import { asNumber, Field, inputClassName, saveOrShowErrors, slugFrom } from './form-field.tsx';

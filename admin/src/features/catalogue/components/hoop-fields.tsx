@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import type { StudioHoop } from '@server/contracts/admin-catalog.ts';
+import type { StudioHoop } from '@server/contracts/admin-catalogue.ts';
 import { formatLength } from '@ui/format.ts';
 
 /** Each hoop's sewing field drawn to one common scale, so their sizes compare at a glance. */

@@ -1,7 +1,7 @@
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { createHoopRequest } from '@server/contracts/admin-catalogue-hoops.ts';
-import type { StudioHoop } from '@server/contracts/admin-catalog.ts';
+import type { StudioHoop } from '@server/contracts/admin-catalogue.ts';
 import { formatLength } from '@ui/format.ts';
 import { useSaveCatalogueRow } from '../api/save-catalogue-row.ts';
 import { asNumber, Field, inputClassName, saveOrShowErrors, slugFrom } from './form-field.tsx';

@@ -4,7 +4,7 @@ import '@fontsource/fredoka/400.css';
 import '@fontsource/playfair-display/400.css';
 import '@fontsource/great-vibes/400.css';
 import type { ReactNode } from 'react';
-import type { StudioFont } from '@server/contracts/admin-catalog.ts';
+import type { StudioFont } from '@server/contracts/admin-catalogue.ts';
 
 export function LetteringSamples({ fonts, renderActions }: { fonts: StudioFont[]; renderActions?: (font: StudioFont) => ReactNode }) {
   return (

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { createMotifRequest, type MotifPreviewResponse } from '@server/contracts/admin-catalogue-motifs.ts';
-import type { StudioMotif, StudioThread } from '@server/contracts/admin-catalog.ts';
+import type { StudioMotif, StudioThread } from '@server/contracts/admin-catalogue.ts';
 import { formatLength } from '@ui/format.ts';
 import type { UploadProgress } from '@ui/upload-with-progress.ts';
 import { usePreviewMotif } from '../api/preview-motif.ts';

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import type { StudioMotif, StudioThread } from '@server/contracts/admin-catalog.ts';
+import type { StudioMotif, StudioThread } from '@server/contracts/admin-catalogue.ts';
 import { formatLength } from '@ui/format.ts';
 import { StitchMixBar, StitchMixLegend } from './stitch-mix-bar.tsx';
 import { svgDataUrl } from '@ui/svg-data-url.ts';

@@ -1,4 +1,4 @@
-import type { StudioMotif } from '@server/contracts/admin-catalog.ts';
+import type { StudioMotif } from '@server/contracts/admin-catalogue.ts';
 
 const parts = [
   { key: 'run', label: 'running', className: 'bg-saffron-500' },

@@ -1,7 +1,7 @@
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { createThreadRequest } from '@server/contracts/admin-catalogue-threads.ts';
-import type { StudioThread } from '@server/contracts/admin-catalog.ts';
+import type { StudioThread } from '@server/contracts/admin-catalogue.ts';
 import { hexToLab } from '@server/engine/index.ts';
 import { useSaveCatalogueRow } from '../api/save-catalogue-row.ts';
 import { asNumber, Field, inputClassName, saveOrShowErrors } from './form-field.tsx';

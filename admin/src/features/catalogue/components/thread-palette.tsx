@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import type { StudioThread } from '@server/contracts/admin-catalog.ts';
+import type { StudioThread } from '@server/contracts/admin-catalogue.ts';
 
 export function ThreadPalette({ threads, renderActions }: { threads: StudioThread[]; renderActions?: (thread: StudioThread) => ReactNode }) {
   return (

@@ -1,5 +1,5 @@
 import { useId, useState, type FormEvent } from 'react';
-import type { ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { ThreadColourSummary } from '@server/contracts/catalogue.ts';
 import { Button } from '@ui/components/button.tsx';
 import { EmptyState } from '@ui/components/page-state.tsx';
 import { commandOf } from '../commands/command-registry.ts';

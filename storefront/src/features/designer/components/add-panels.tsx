@@ -1,5 +1,5 @@
 import { useState, type ReactNode } from 'react';
-import type { ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { ThreadColourSummary } from '@server/contracts/catalogue.ts';
 import type { Dispatch } from '../commands/command-registry.ts';
 import type { DesignSetting } from '../model/design-setting.ts';
 import { hasRoomForPlacement, MAX_PLACEMENTS, type DesignerState } from '../model/designer-state.ts';

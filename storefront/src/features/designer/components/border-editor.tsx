@@ -1,4 +1,4 @@
-import type { ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { ThreadColourSummary } from '@server/contracts/catalogue.ts';
 import type { BorderPlacement } from '@server/contracts/designs.ts';
 import { formatLength } from '@ui/format.ts';
 import { layoutBorder, trialBorder } from '../model/border-layout.ts';

@@ -1,5 +1,5 @@
 import { useId, useMemo } from 'react';
-import type { GarmentSummary, LetteringFontSummary, MotifSummary, ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { GarmentSummary, LetteringFontSummary, MotifSummary, ThreadColourSummary } from '@server/contracts/catalogue.ts';
 import type { DesignDocument } from '@server/contracts/designs.ts';
 import { dyedMockupSrc } from '@store/lib/dyed-mockup.ts';
 import { mockupSizeMm, sizeOf } from '../model/design-setting.ts';

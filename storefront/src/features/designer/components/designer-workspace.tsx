@@ -1,5 +1,5 @@
 import { useMemo, useRef, type ReactNode } from 'react';
-import type { GarmentSummary, ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { GarmentSummary, ThreadColourSummary } from '@server/contracts/catalogue.ts';
 import type { SavedDesign } from '@server/contracts/saved-designs.ts';
 import { dyedMockupSrc } from '@store/lib/dyed-mockup.ts';
 import { findPlacement } from '../model/designer-state.ts';

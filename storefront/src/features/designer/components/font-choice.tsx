@@ -1,4 +1,4 @@
-import type { LetteringFontSummary } from '@server/contracts/catalog.ts';
+import type { LetteringFontSummary } from '@server/contracts/catalogue.ts';
 
 /** The lettering fonts, each shown in its own face with the customer's own words. */
 export function FontChoice({ name, fonts, value, sample, onChange }: { name: string; fonts: readonly LetteringFontSummary[]; value: string; sample: string; onChange: (slug: string) => void }) {

@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import type { LetteringFontSummary } from '@server/contracts/catalog.ts';
+import type { LetteringFontSummary } from '@server/contracts/catalogue.ts';
 import { formatLength } from '@ui/format.ts';
 
 /** How tall the capital letters are, within what the font sews cleanly at, in mm with inches alongside. */

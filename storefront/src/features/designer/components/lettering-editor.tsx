@@ -1,5 +1,5 @@
 import { useId, useState } from 'react';
-import type { ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { ThreadColourSummary } from '@server/contracts/catalogue.ts';
 import type { LetteringPlacement } from '@server/contracts/designs.ts';
 import { fontOf, sizeOf, zoneOf, type DesignSetting } from '../model/design-setting.ts';
 import type { DesignerState } from '../model/designer-state.ts';

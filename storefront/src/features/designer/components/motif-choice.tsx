@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import type { MotifSummary } from '@server/contracts/catalog.ts';
+import type { MotifSummary } from '@server/contracts/catalogue.ts';
 import { svgDataUrl } from '@ui/svg-data-url.ts';
 
 const pictureOf = (motif: MotifSummary) => svgDataUrl(motif.svg);

@@ -1,4 +1,4 @@
-import type { ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { ThreadColourSummary } from '@server/contracts/catalogue.ts';
 import type { MotifPlacement } from '@server/contracts/designs.ts';
 import { fitsZone } from '../model/clamp.ts';
 import { motifOf, sizeOf, zoneOf, type DesignSetting } from '../model/design-setting.ts';

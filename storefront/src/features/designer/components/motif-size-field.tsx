@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import type { HoopSummary, MotifSummary } from '@server/contracts/catalog.ts';
+import type { HoopSummary, MotifSummary } from '@server/contracts/catalogue.ts';
 import { formatLength } from '@ui/format.ts';
 import { largestHoop } from '../model/hoop-limit.ts';
 import { motifScaleRange } from '../model/motif-rules.ts';

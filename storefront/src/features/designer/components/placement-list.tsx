@@ -1,4 +1,4 @@
-import type { ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { ThreadColourSummary } from '@server/contracts/catalogue.ts';
 import type { DesignPlacement } from '@server/contracts/designs.ts';
 import { EmptyState } from '@ui/components/page-state.tsx';
 import { commandOf, type Dispatch } from '../commands/command-registry.ts';

@@ -1,4 +1,4 @@
-import type { ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { ThreadColourSummary } from '@server/contracts/catalogue.ts';
 import type { BorderPlacement, MotifPlacement } from '@server/contracts/designs.ts';
 import type { Dispatch } from '../commands/command-registry.ts';
 import { ThreadPicker } from './thread-picker.tsx';

@@ -1,6 +1,6 @@
 import { useId, useState, type FormEvent } from 'react';
 import { useLocation, useNavigate } from 'react-router-dom';
-import type { GarmentSummary } from '@server/contracts/catalog.ts';
+import type { GarmentSummary } from '@server/contracts/catalogue.ts';
 import type { SaveDesignRequest, SavedDesign } from '@server/contracts/saved-designs.ts';
 import { ApiError } from '@ui/api-client.ts';
 import { Button, ButtonLink } from '@ui/components/button.tsx';

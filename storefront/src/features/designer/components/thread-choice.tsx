@@ -1,4 +1,4 @@
-import type { ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { ThreadColourSummary } from '@server/contracts/catalogue.ts';
 
 /** The studio's thread palette as thumb-sized swatches in a radio group (arrow keys move between them). */
 export function ThreadChoice({ name, legend = 'Thread colour', threads, value, onChange }: { name: string; legend?: string; threads: readonly ThreadColourSummary[]; value: string; onChange: (code: string) => void }) {

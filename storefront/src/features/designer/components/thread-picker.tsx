@@ -1,5 +1,5 @@
 import { useId, useState } from 'react';
-import type { ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { ThreadColourSummary } from '@server/contracts/catalogue.ts';
 import { offerNearestThreads } from '../model/thread-match.ts';
 import { ThreadChoice } from './thread-choice.tsx';
 

@@ -1,4 +1,4 @@
-import type { PlacementZoneSummary } from '@server/contracts/catalog.ts';
+import type { PlacementZoneSummary } from '@server/contracts/catalogue.ts';
 
 /** Said when an item is larger than its zone: it is centred there, but part of it would fall outside. */
 export function TooBigNote({ zone, advice }: { zone: PlacementZoneSummary; advice: string }) {

@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import type { PlacementZoneSummary } from '@server/contracts/catalog.ts';
+import type { PlacementZoneSummary } from '@server/contracts/catalogue.ts';
 
 /** Where on the garment an item goes, when the garment has more than one place for it. */
 export function ZoneChoice({ zones, value, onChange }: { zones: readonly PlacementZoneSummary[]; value: string; onChange: (code: string) => void }) {

@@ -1,5 +1,5 @@
 import { useEffect } from 'react';
-import type { GarmentSummary } from '@server/contracts/catalog.ts';
+import type { GarmentSummary } from '@server/contracts/catalogue.ts';
 import type { DesignerState } from '../model/designer-state.ts';
 import { draftOf, restoreDraft } from '../model/draft.ts';
 

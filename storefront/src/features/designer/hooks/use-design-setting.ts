@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import type { GarmentSummary, LetteringFontSummary, MotifSummary } from '@server/contracts/catalog.ts';
+import type { GarmentSummary, LetteringFontSummary, MotifSummary } from '@server/contracts/catalogue.ts';
 import { useArtworks } from '../api/get-artworks.ts';
 import { useHoops } from '../api/get-hoops.ts';
 import type { DesignSetting } from '../model/design-setting.ts';

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { GarmentSummary } from '@server/contracts/catalog.ts';
+import type { GarmentSummary } from '@server/contracts/catalogue.ts';
 import type { SavedDesign } from '@server/contracts/saved-designs.ts';
 import { createDesignerState, type DesignerState } from '../model/designer-state.ts';
 import { readDesignDraft } from './use-design-draft.ts';

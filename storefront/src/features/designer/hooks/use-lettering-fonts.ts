@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import type { LetteringFontSummary } from '@server/contracts/catalog.ts';
+import type { LetteringFontSummary } from '@server/contracts/catalogue.ts';
 import { loadLetteringFonts } from '../render/lettering-fonts.ts';
 
 /** True once the catalogue's lettering fonts can be drawn and measured. */

@@ -1,5 +1,5 @@
 import type { ArtworkUpload } from '@server/contracts/artwork.ts';
-import type { PlacementZoneSummary } from '@server/contracts/catalog.ts';
+import type { PlacementZoneSummary } from '@server/contracts/catalogue.ts';
 import type { DesignSetting } from './design-setting.ts';
 import { largestFactorInHoops } from './hoop-limit.ts';
 

@@ -1,4 +1,4 @@
-import type { PlacementZoneSummary } from '@server/contracts/catalog.ts';
+import type { PlacementZoneSummary } from '@server/contracts/catalogue.ts';
 import type { ExtentMm } from './design-setting.ts';
 
 /** Positions are kept to 0.01 mm: finer than any machine stitches, and the documents stay readable. */

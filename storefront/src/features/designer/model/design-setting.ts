@@ -1,5 +1,5 @@
 import type { ArtworkUpload } from '@server/contracts/artwork.ts';
-import type { GarmentSummary, HoopSummary, LetteringFontSummary, MotifSummary, PlacementZoneSummary } from '@server/contracts/catalog.ts';
+import type { GarmentSummary, HoopSummary, LetteringFontSummary, MotifSummary, PlacementZoneSummary } from '@server/contracts/catalogue.ts';
 
 type GarmentSize = GarmentSummary['sizes'][number];
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import type { GarmentSummary } from '@server/contracts/catalog.ts';
+import type { GarmentSummary } from '@server/contracts/catalogue.ts';
 import { restoreDesign } from '@server/contracts/designs.ts';
 import { createDesignerState, type DesignerState } from './designer-state.ts';
 

@@ -1,4 +1,4 @@
-import type { HoopSummary } from '@server/contracts/catalog.ts';
+import type { HoopSummary } from '@server/contracts/catalogue.ts';
 import type { ExtentMm } from './design-setting.ts';
 
 /**

@@ -1,4 +1,4 @@
-import type { LetteringFontSummary } from '@server/contracts/catalog.ts';
+import type { LetteringFontSummary } from '@server/contracts/catalogue.ts';
 
 /** As in the design document contract: a name or a short phrase on a child's garment. */
 export const MAX_LETTERING_LENGTH = 40;

@@ -1,4 +1,4 @@
-import type { HoopSummary, MotifSummary } from '@server/contracts/catalog.ts';
+import type { HoopSummary, MotifSummary } from '@server/contracts/catalogue.ts';
 import { largestFactorInHoops } from './hoop-limit.ts';
 
 /**

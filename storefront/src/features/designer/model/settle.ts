@@ -1,4 +1,4 @@
-import type { PlacementZoneSummary } from '@server/contracts/catalog.ts';
+import type { PlacementZoneSummary } from '@server/contracts/catalogue.ts';
 import type { BorderPlacement, DesignPlacement } from '@server/contracts/designs.ts';
 import { borderBandHeightMm, layoutBorder } from './border-layout.ts';
 import { clampCentre, clampHemOffset } from './clamp.ts';

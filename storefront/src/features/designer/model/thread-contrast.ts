@@ -1,4 +1,4 @@
-import type { ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { ThreadColourSummary } from '@server/contracts/catalogue.ts';
 
 /** WCAG's contrast for large text; a name stitched below it fades into the fabric. */
 const LEGIBLE_CONTRAST = 3;

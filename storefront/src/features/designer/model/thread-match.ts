@@ -1,4 +1,4 @@
-import type { ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { ThreadColourSummary } from '@server/contracts/catalogue.ts';
 // Straight from its module, as border-layout does with fitBorder: the engine's entry point is not needed here.
 import { nearestThreads } from '@server/engine/nearest-threads.ts';
 

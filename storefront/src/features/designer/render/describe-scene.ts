@@ -1,4 +1,4 @@
-import type { ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { ThreadColourSummary } from '@server/contracts/catalogue.ts';
 import { layoutBorder, type BorderBand, type BorderRepeat } from '../model/border-layout.ts';
 import { artworkOf, fontOf, motifOf, type DesignSetting } from '../model/design-setting.ts';
 import type { DesignerState } from '../model/designer-state.ts';

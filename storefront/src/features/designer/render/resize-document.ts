@@ -1,4 +1,4 @@
-import type { GarmentSummary, LetteringFontSummary, MotifSummary } from '@server/contracts/catalog.ts';
+import type { GarmentSummary, LetteringFontSummary, MotifSummary } from '@server/contracts/catalogue.ts';
 import type { DesignDocument } from '@server/contracts/designs.ts';
 import { changeSize } from '../commands/change-size.ts';
 import { createDesignerState } from '../model/designer-state.ts';

@@ -1,5 +1,5 @@
 import type { Canvas, FabricImage, FabricObject } from 'fabric/es';
-import type { PlacementZoneSummary } from '@server/contracts/catalog.ts';
+import type { PlacementZoneSummary } from '@server/contracts/catalogue.ts';
 import { mm, toPx, type DesignView } from '../model/view.ts';
 import type { Drawable } from './describe-scene.ts';
 import { fitMockup, loadMockup } from './mockup-background.ts';

@@ -1,5 +1,5 @@
 import { FabricText, Rect, type FabricObject } from 'fabric/es';
-import type { PlacementZoneSummary } from '@server/contracts/catalog.ts';
+import type { PlacementZoneSummary } from '@server/contracts/catalogue.ts';
 import { mm, toPx, type DesignView } from '../model/view.ts';
 
 const WALNUT_500 = '#7a6656';

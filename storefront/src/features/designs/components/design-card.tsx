@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import type { GarmentSummary } from '@server/contracts/catalog.ts';
+import type { GarmentSummary } from '@server/contracts/catalogue.ts';
 import type { SavedDesign } from '@server/contracts/saved-designs.ts';
 import { Button, buttonClassName } from '@ui/components/button.tsx';
 import type { DesignDrawingLayout } from '../model/design-drawing-layout.ts';

@@ -1,5 +1,5 @@
 import { useId, useMemo } from 'react';
-import type { GarmentSummary } from '@server/contracts/catalog.ts';
+import type { GarmentSummary } from '@server/contracts/catalogue.ts';
 import { dyedMockupSrc } from '@store/lib/dyed-mockup.ts';
 import { useLetteringFaces } from '@store/lib/load-lettering-faces.ts';
 import type { DesignDrawingLayout, DrawnPlacement } from '../model/design-drawing-layout.ts';

@@ -1,4 +1,4 @@
-import type { GarmentSummary, LetteringFontSummary, MotifSummary, ThreadColourSummary } from '@server/contracts/catalog.ts';
+import type { GarmentSummary, LetteringFontSummary, MotifSummary, ThreadColourSummary } from '@server/contracts/catalogue.ts';
 import type { BorderPlacement, DesignDocument, DesignPlacement } from '@server/contracts/designs.ts';
 // Straight from its module: the engine's entry also registers colour spaces at load, which a drawing does not need.
 import { fitMotifBorder } from '@server/engine/fit-border.ts';

@@ -1,4 +1,4 @@
-import type { GarmentSummary, MotifSummary } from '@server/contracts/catalog.ts';
+import type { GarmentSummary, MotifSummary } from '@server/contracts/catalogue.ts';
 import type { QuotePreviewRequest } from '@server/contracts/quotes.ts';
 import { formatMoney } from '@ui/format.ts';
 import { useQuotePreview } from '../api/preview-quote.ts';

@@ -1,0 +1,206 @@
+import { isDeepStrictEqual } from 'node:util';
+import type Stripe from 'stripe';
+import type { Db } from '../../db/knex.ts';
+import type { Mailer } from '../../integrations/mailer.ts';
+import { findOwnedDesign } from '../designs/design-repo.ts';
+import { findQuote, type StoredQuote } from '../quotes/stored-quote-repo.ts';
+import { readShopSchedule } from '../settings/shop-settings-repo.ts';
+import {
+  describeDesignForOrder,
+  findCustomerOrder,
+  insertOrder,
+  insertOrderNote,
+  insertPendingPayment,
+  listPayments,
+  nextOrderNumber,
+  readOrderDescription,
+  syncOrderPaymentStatus,
+  updatePayment,
+  type OrderRecord,
+  type PaymentRecord,
+} from './order-repo.ts';
+import { restoreDesign } from '../../contracts/designs.ts';
+import type { CheckoutStartedResponse, PlaceOrderRequest } from '../../contracts/orders.ts';
+import type { CurrentUser } from '../../contracts/users.ts';
+import { failure, ok, type Result } from '../../contracts/result.ts';
+import { formatMoneyText } from '../mail/money-text.ts';
+import { openCheckoutSession } from '../payments/checkout-session.ts';
+import { moveOrder } from './order-transitions.ts';
+import { sendLoggedMail } from '../mail/order-mail.ts';
+import { orderCancelledMail } from './customer-order-mail.ts';
+import { shopToday } from '../quotes/ready-dates.ts';
+import type { StoredQuoteService } from '../quotes/stored-quote-service.ts';
+
+export interface CheckoutDeps {
+  db: Db;
+  stripe: Stripe;
+  mailer: Mailer;
+  storedQuotes: StoredQuoteService;
+  appOrigin: string;
+  now: () => Date;
+}
+
+/** Orders in these statuses are placed and not yet charged: the card must stay held until the studio charges it. */
+const heldStatuses = ['authorized', 'proof_sent', 'changes_requested', 'proof_approved'];
+
+/**
+ * True when the order needs the customer to pay: still awaiting payment (a declined card, an abandoned checkout),
+ * or placed but with no hold left on the card (the authorization lapsed before the studio charged it).
+ */
+export function isPaymentNeeded(order: Pick<OrderRecord, 'status'>, payments: PaymentRecord[], now: Date): boolean {
+  if (order.status === 'awaiting_payment') return true;
+  if (!heldStatuses.includes(order.status)) return false;
+  return !payments.some((p) => p.status === 'authorized' && (p.captureBefore === null || p.captureBefore > now));
+}
+
+/** Checkout: an order from a stored quote, the card held through the payment provider, and cancelling before a charge. */
+export function createCheckoutService(deps: CheckoutDeps) {
+  const { db } = deps;
+  const mailDeps = { db, mailer: deps.mailer, now: deps.now };
+
+  /**
+   * Places the order from the customer's stored quote and opens the hosted payment page. Every figure is the
+   * quote's. A quote that has expired, or that needs a rush to be ready by the date asked for, is priced again
+   * and the customer is asked to confirm the new total (409 with both totals and the new quote id).
+   */
+  async function place(customer: CurrentUser, request: PlaceOrderRequest): Promise<Result<CheckoutStartedResponse>> {
+    const quote = await findQuote(db, request.quoteId);
+    if (!quote || quote.customerId !== customer.id) return failure('not-found', `There is no quote ${request.quoteId}.`, { quoteId: 'Price your design again before ordering' });
+    const design = await findOwnedDesign(db, { id: request.designId, customerId: customer.id });
+    if (!design) return failure('not-found', `There is no design ${request.designId}.`, { designId: 'Choose one of your saved designs' });
+    const restored = restoreDesign(design.document);
+    const isSameDesign =
+      (quote.designId === null || quote.designId === design.id) &&
+      quote.input.garmentId === design.garmentId &&
+      quote.input.sizeId === design.sizeId &&
+      restored.success &&
+      isDeepStrictEqual(quote.input.document, restored.data);
+    if (!isSameDesign) {
+      return failure('conflict', 'This price was worked out for another version of the design or another size. Price the design again to order it.', { quoteId: 'Price your design again before ordering' });
+    }
+
+    const dates = await deps.storedQuotes.readyDatesToday();
+    const shop = await readShopSchedule(db);
+    const today = shopToday(deps.now(), shop.timezone);
+    if (request.neededBy < today) return failure('invalid', 'Choose a date from today on.', { neededBy: 'Choose a date from today on' });
+    if (request.neededBy < dates.earliestRushDate) {
+      const message = `We can't have it ready by then, even as a rush. The earliest is ${dates.earliestRushDate}.`;
+      return failure('conflict', message, { neededBy: message }, { reason: 'too-soon', ...dates });
+    }
+    const needsRush = request.neededBy < dates.earliestReadyDate && !quote.isRush;
+    const hasExpired = quote.expiresAt.getTime() <= deps.now().getTime();
+    if (needsRush || hasExpired) return repriced(quote, { needsRush, hasExpired, dates });
+
+    const now = deps.now();
+    const description = await describeDesignForOrder(db, design);
+    const created = await db.transaction(async (trx) => {
+      const number = await nextOrderNumber(trx);
+      const orderId = await insertOrder(trx, {
+        number,
+        customerId: customer.id,
+        quoteId: quote.id,
+        subtotalCents: quote.subtotalCents,
+        taxCents: quote.taxCents,
+        totalCents: quote.totalCents,
+        currency: quote.currency,
+        neededBy: request.neededBy,
+        shipTo: request.shipTo,
+        note: request.note ?? null,
+        item: { designId: design.id, sizeId: design.sizeId, quantity: quote.quantity, description },
+        createdAt: now,
+      });
+      const paymentId = await insertPendingPayment(trx, { id: orderId, currency: quote.currency }, now);
+      return { orderId, number, paymentId };
+    });
+    const checkoutUrl = await startPayment(
+      { id: created.orderId, number: created.number, totalCents: quote.totalCents, currency: quote.currency, description, customerEmail: customer.email },
+      created.paymentId,
+    );
+    return ok({ number: created.number, checkoutUrl });
+  }
+
+  /** Prices the quote again (with rush when the date needs it) and answers with the change for the customer to confirm. */
+  async function repriced(quote: StoredQuote, why: { needsRush: boolean; hasExpired: boolean; dates: Awaited<ReturnType<StoredQuoteService['readyDatesToday']>> }): Promise<Result<never>> {
+    const fresh = await deps.storedQuotes.reprice(quote, why.needsRush ? { isRush: true } : {});
+    if (!fresh.ok) return fresh;
+    const was = formatMoneyText(quote.totalCents, quote.currency);
+    const now = formatMoneyText(fresh.value.totalCents, fresh.value.currency);
+    const reason = why.needsRush ? 'rush-needed' : 'quote-expired';
+    const message = why.needsRush
+      ? `To be ready by then this order needs a rush (we normally need until ${why.dates.earliestReadyDate}). With rush the total is ${now} instead of ${was}. Confirm to go on.`
+      : `Your price was only held for a while and has been worked out again with today's prices: ${now} instead of ${was}. Confirm to go on.`;
+    return failure('conflict', message, undefined, {
+      reason,
+      quoteId: fresh.value.id,
+      previousTotalCents: quote.totalCents,
+      totalCents: fresh.value.totalCents,
+      currency: fresh.value.currency,
+      isRush: fresh.value.isRush,
+      ...why.dates,
+    });
+  }
+
+  /** Opens the hosted payment page for one pending payment row and keeps the session's id on it. */
+  async function startPayment(order: Parameters<typeof openCheckoutSession>[2], paymentId: number): Promise<string> {
+    try {
+      const session = await openCheckoutSession(deps.stripe, deps.appOrigin, order, paymentId);
+      await updatePayment(db, paymentId, { checkout_session_id: session.id }, deps.now());
+      return session.url;
+    } catch (error) {
+      // The order stays awaiting payment, and its page offers to try again.
+      await updatePayment(db, paymentId, { status: 'failed' }, deps.now());
+      throw error;
+    }
+  }
+
+  /** A new payment page for an order whose card was declined, whose checkout was left, or whose hold lapsed. */
+  async function openPayment(customer: CurrentUser, number: string): Promise<Result<CheckoutStartedResponse>> {
+    const order = await findCustomerOrder(db, customer.id, number);
+    if (!order) return failure('not-found', `There is no order ${number}.`);
+    if (!isPaymentNeeded(order, await listPayments(db, order.id), deps.now())) {
+      return failure('conflict', order.status === 'cancelled' ? 'This order is cancelled.' : 'Your card is already held for this order; there is nothing to pay now.');
+    }
+    const paymentId = await insertPendingPayment(db, order, deps.now());
+    const description = (await readOrderDescription(db, order.id)) ?? order.number;
+    const checkoutUrl = await startPayment({ ...order, description, customerEmail: customer.email }, paymentId);
+    return ok({ number: order.number, checkoutUrl });
+  }
+
+  /** Cancels the customer's order before anything is charged, releasing any hold on the card. */
+  async function cancel(customer: CurrentUser, number: string): Promise<Result<{ number: string }>> {
+    const order = await findCustomerOrder(db, customer.id, number);
+    if (!order) return failure('not-found', `There is no order ${number}.`);
+    const now = deps.now();
+    const moved = await db.transaction(async (trx) => {
+      const move = await moveOrder(trx, { orderId: order.id, action: 'cancel', actor: 'customer', actorUserId: customer.id, note: 'Cancelled by the customer.', now });
+      if (!move.ok) return move;
+      const held = (await listPayments(trx, order.id)).filter((p) => p.status === 'authorized' && p.paymentIntentId);
+      for (const payment of held) {
+        await releaseHold(deps.stripe, payment.paymentIntentId!);
+        await updatePayment(trx, payment.id, { status: 'voided' }, now);
+        await insertOrderNote(trx, { orderId: order.id, type: 'payment_voided', actorUserId: null, payload: { paymentIntentId: payment.paymentIntentId }, at: now });
+      }
+      await syncOrderPaymentStatus(trx, order.id, now);
+      return ok({ wasHeld: held.length > 0 });
+    });
+    if (!moved.ok) return moved;
+    const shop = await readShopSchedule(db);
+    await sendLoggedMail(mailDeps, orderCancelledMail({ appOrigin: deps.appOrigin, shopName: shop.name, number, orderId: order.id }, customer.email, moved.value.wasHeld));
+    return ok({ number });
+  }
+
+  return { place, openPayment, cancel };
+}
+
+/** Cancels a held PaymentIntent; one the provider already let go of (lapsed, cancelled) needs nothing more. */
+async function releaseHold(stripe: Stripe, paymentIntentId: string): Promise<void> {
+  try {
+    await stripe.paymentIntents.cancel(paymentIntentId, { cancellation_reason: 'requested_by_customer' });
+  } catch (error) {
+    const intent = await stripe.paymentIntents.retrieve(paymentIntentId).catch(() => undefined);
+    if (intent?.status === 'canceled') return;
+    throw error;
+  }
+}
+
+export type CheckoutService = ReturnType<typeof createCheckoutService>;

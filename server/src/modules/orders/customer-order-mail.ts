@@ -1,0 +1,49 @@
+/**
+ * The e-mails the customer's side of an order sends, as plain text with a light HTML copy. Each names the order
+ * and links to its page, where everything else lives.
+ */
+import { mailBodies, orderPageUrl } from '../mail/mail-layout.ts';
+import type { LoggedMail } from '../mail/order-mail.ts';
+
+interface MailContext {
+  appOrigin: string;
+  shopName: string;
+  number: string;
+  orderId: number;
+}
+
+function compose(context: MailContext, to: string, template: string, subject: string, paragraphs: string[]): LoggedMail {
+  const link = orderPageUrl(context.appOrigin, context.number);
+  return { to, subject, ...mailBodies([...paragraphs, `See your order: ${link}`, `— ${context.shopName}`]), template, orderId: context.orderId };
+}
+
+export function orderPlacedMail(context: MailContext, to: string, totalText: string): LoggedMail {
+  return compose(context, to, 'order_placed', `We have your order ${context.number}`, [
+    `Thank you! Your order ${context.number} is in.`,
+    `We have put a hold of ${totalText} on your card. Nothing is charged until you approve the proof of your design.`,
+    'Next, we draw a proof of your design on the garment and e-mail you when it is ready to look at.',
+  ]);
+}
+
+export function proofApprovedMail(context: MailContext, to: string, version: number): LoggedMail {
+  return compose(context, to, 'proof_approved', `You approved the proof for ${context.number}`, [
+    `Thank you for approving version ${version} of your proof for ${context.number}.`,
+    'We now charge the amount held on your card and start stitching. We will e-mail you when it ships.',
+  ]);
+}
+
+export function proofAnsweredStudioMail(context: MailContext, to: string, answer: { version: number; isApproved: boolean; comment: string | null; pinCount: number }): LoggedMail {
+  const what = answer.isApproved ? 'approved' : 'asked for changes to';
+  return compose(context, to, answer.isApproved ? 'proof_approved_studio' : 'changes_requested_studio', `${context.number}: the customer ${what} proof ${answer.version}`, [
+    `The customer ${what} proof version ${answer.version} of ${context.number}.`,
+    ...(answer.comment ? [`Their comment: “${answer.comment}”`] : []),
+    ...(answer.pinCount > 0 ? [`They pinned ${answer.pinCount} ${answer.pinCount === 1 ? 'comment' : 'comments'} to the picture.`] : []),
+  ]);
+}
+
+export function orderCancelledMail(context: MailContext, to: string, wasHeld: boolean): LoggedMail {
+  return compose(context, to, 'order_cancelled', `${context.number} has been cancelled`, [
+    `Your order ${context.number} is cancelled, as you asked.`,
+    wasHeld ? 'The hold on your card is released; your bank may take a few days to show it.' : 'Nothing was charged.',
+  ]);
+}

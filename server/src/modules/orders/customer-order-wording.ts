@@ -1,0 +1,59 @@
+/**
+ * The order's history as the customer reads it: plain words for each event, the studio's internal notes left
+ * out. Amounts come from the event's payload.
+ */
+import { formatMoneyText } from '../mail/money-text.ts';
+
+export interface StoredOrderEvent {
+  id: number;
+  type: string;
+  note: string | null;
+  payload: Record<string, unknown> | null;
+  createdAt: string;
+}
+
+/** Events whose note is meant for the customer (their own words, or the reason for a cancel or refund). */
+const notesShown = new Set(['payment_failed', 'changes_requested', 'proof_approved', 'cancelled', 'refunded']);
+
+function titleOf(event: StoredOrderEvent, currency: string): string | undefined {
+  const p = event.payload ?? {};
+  const version = typeof p.proofVersion === 'number' ? ` ${p.proofVersion}` : '';
+  const amount = typeof p.amountCents === 'number' ? formatMoneyText(p.amountCents, currency) : undefined;
+  switch (event.type) {
+    case 'order_created':
+      return 'You placed the order';
+    case 'payment_authorized':
+      return amount ? `${amount} held on your card (not charged yet)` : 'Payment held on your card (not charged yet)';
+    case 'payment_failed':
+      return 'The payment did not go through';
+    case 'payment_voided':
+      return 'The hold on your card was released';
+    case 'proof_sent':
+      return `Proof${version} is ready for you to look at`;
+    case 'changes_requested':
+      return `You asked for changes to proof${version}`;
+    case 'proof_approved':
+      return `You approved proof${version}`;
+    case 'payment_captured':
+      return amount ? `${amount} charged; stitching has started` : 'Card charged; stitching has started';
+    case 'stitched':
+      return 'Stitched and checked';
+    case 'shipped':
+      return typeof p.trackingNumber === 'string' ? `On its way (${p.carrier ?? 'tracking'} ${p.trackingNumber})` : 'On its way';
+    case 'cancelled':
+      return 'Order cancelled';
+    case 'refunded':
+      return amount ? `${amount} refunded` : 'Refunded';
+    default:
+      // Studio notes and anything internal stay in the studio.
+      return undefined;
+  }
+}
+
+/** The customer's timeline, oldest first. */
+export function customerTimeline(events: StoredOrderEvent[], currency: string) {
+  return events.flatMap((event) => {
+    const title = titleOf(event, currency);
+    return title ? [{ id: event.id, type: event.type, title, note: notesShown.has(event.type) ? event.note : null, at: event.createdAt }] : [];
+  });
+}

@@ -1,0 +1,35 @@
+/** The studio's steps after the charge: the embroidery is stitched, then the parcel is posted (and the customer told). */
+import type { Db } from '../../db/knex.ts';
+import type { Mailer } from '../../integrations/mailer.ts';
+import { failure, ok, type Result } from '../../contracts/result.ts';
+import type { OrderActionResponse, ShipOrderRequest } from '../../contracts/studio-orders.ts';
+import { findStudioOrder, readOrderStanding } from './studio-order-repo.ts';
+import { sendLoggedMail } from '../mail/order-mail.ts';
+import type { OrderAction } from './order-flow.ts';
+import { moveOrder } from './order-transitions.ts';
+import type { StudioActor } from '../payments/order-payment-service.ts';
+import { orderShippedMail } from './studio-order-mail.ts';
+
+export function createOrderProductionSteps(deps: { db: Db; mailer: Mailer; now: () => Date; appOrigin: string }) {
+  async function step(number: string, action: Extract<OrderAction, 'mark_stitched' | 'ship'>, actor: StudioActor, payload?: object) {
+    return deps.db.transaction(async (trx) => {
+      const order = await findStudioOrder(trx, number);
+      if (!order) return { order, result: failure('not-found', `There is no order ${number}.`) as Result<OrderActionResponse> };
+      const moved = await moveOrder(trx, { orderId: order.id, action, actor: actor.role, actorUserId: actor.userId, payload, now: deps.now() });
+      if (!moved.ok) return { order, result: moved as Result<OrderActionResponse> };
+      return { order, result: ok(await readOrderStanding(trx, order.id)) };
+    });
+  }
+
+  return {
+    async markStitched(number: string, actor: StudioActor): Promise<Result<OrderActionResponse>> {
+      return (await step(number, 'mark_stitched', actor)).result;
+    },
+    async ship(number: string, request: ShipOrderRequest, actor: StudioActor): Promise<Result<OrderActionResponse>> {
+      const trackingNumber = request.trackingNumber || undefined;
+      const { order, result } = await step(number, 'ship', actor, { carrier: 'Parcel post', trackingNumber: trackingNumber ?? null });
+      if (result.ok && order) await sendLoggedMail(deps, orderShippedMail(order, deps.appOrigin, trackingNumber));
+      return result;
+    },
+  };
+}

@@ -1,0 +1,74 @@
+import { Router } from 'express';
+import passport from 'passport';
+import { AuthorizationError, InternalOAuthError, TokenError } from 'passport-oauth2';
+import { z } from 'zod';
+import { returnToPath, type CurrentUser } from '../../contracts/users.ts';
+import { validate } from '../../middleware/validate.ts';
+
+declare module 'express-session' {
+  interface SessionData {
+    returnTo?: string;
+  }
+}
+
+const startQuery = z.object({ returnTo: returnToPath.optional() });
+
+const unfinished = 'Sign-in did not finish, so nothing changed. Please try again.';
+
+/**
+ * Why a sign-in attempt came back without a user, in words for the person: our own refusals (an unverified e-mail,
+ * an address linked to another account) carry a kind and their message; anything from the OAuth exchange (a stale
+ * or replayed callback, a cancelled consent, a mismatched state) reads as "did not finish".
+ */
+function problemMessage(info: unknown): string {
+  const refusal = info as { kind?: string; message?: string } | undefined;
+  return refusal?.kind && refusal.message ? refusal.message : unfinished;
+}
+
+/**
+ * Sign-in with Google (or the local stand-in), and sign-out. `claimArtwork` hands what a visitor uploaded before
+ * signing in to their account.
+ */
+export function createAuthRouter(deps: { log: (line: string) => void; claimArtwork: (sessionKey: string, userId: number) => Promise<void> }): Router {
+  const router = Router();
+
+  router.get('/google', validate(startQuery, 'query'), (req, res, next) => {
+    req.session.returnTo = (res.locals.query as z.infer<typeof startQuery>).returnTo ?? '/';
+    passport.authenticate('google', { prompt: 'select_account' } as never)(req, res, next);
+  });
+
+  router.get('/google/callback', (req, res, next) => {
+    // The custom callback reads returnTo before req.logIn regenerates the session (which drops its old contents).
+    passport.authenticate('google', (error: unknown, user: Express.User | false, info?: unknown) => {
+      const signInProblem = (message: string) => res.redirect(`/sign-in?problem=${encodeURIComponent(message)}`);
+      // A code that was already used or has expired is the visitor's back button, not a fault of ours.
+      if (error instanceof TokenError || error instanceof AuthorizationError) return signInProblem(unfinished);
+      if (error instanceof InternalOAuthError) {
+        deps.log(`Sign-in provider unreachable: ${error.message}`);
+        return signInProblem('We could not reach the sign-in service just now. Please try again in a minute.');
+      }
+      if (error) return next(error);
+      const returnTo = req.session.returnTo ?? '/';
+      const { artworkSessionKey } = req.session;
+      if (!user) return signInProblem(problemMessage(info));
+      req.logIn(user, (loginError) => {
+        if (loginError) return next(loginError);
+        if (!artworkSessionKey) return res.redirect(returnTo);
+        deps.claimArtwork(artworkSessionKey, (user as CurrentUser).id).then(() => res.redirect(returnTo), next);
+      });
+    })(req, res, next);
+  });
+
+  router.post('/sign-out', (req, res, next) => {
+    req.logout((logoutError) => {
+      if (logoutError) return next(logoutError);
+      req.session.destroy((destroyError) => {
+        if (destroyError) return next(destroyError);
+        res.clearCookie('hw.sid', { path: '/' });
+        res.status(204).end();
+      });
+    });
+  });
+
+  return router;
+}

@@ -1,0 +1,86 @@
+import type { Db } from '../../db/knex.ts';
+import type { OrderStatus } from '../../contracts/order-status.ts';
+
+/** The order row and its (one) item with the ordered design, as a production sheet needs them. */
+export interface OrderToMake {
+  number: string;
+  status: OrderStatus;
+  /** Whose uploads the design's artwork placements are. */
+  customerId: number;
+  customerName: string;
+  /** YYYY-MM-DD, or null. */
+  neededBy: string | null;
+  customerNote: string | null;
+  quantity: number;
+  designName: string;
+  garmentId: number;
+  sizeId: number;
+  colourId: number;
+  colourName: string;
+  colourHex: string;
+  /** Left unread (`unknown`): the caller must pass it through restoreDesign. */
+  document: unknown;
+}
+
+export interface ThreadRow {
+  code: string;
+  name: string;
+  hex: string;
+}
+
+/** The order and its first item; undefined when there is no such order (or it has no item yet). */
+export async function readOrderToMake(db: Db, number: string): Promise<OrderToMake | undefined> {
+  const row = await db('orders as o')
+    .join('users as u', 'u.id', 'o.customer_id')
+    .join('order_items as i', 'i.order_id', 'o.id')
+    .join('designs as d', 'd.id', 'i.design_id')
+    .join('fabric_colours as c', 'c.id', 'd.fabric_colour_id')
+    .select(
+      'o.number',
+      'o.status',
+      'o.needed_by',
+      'o.customer_note',
+      'o.customer_id',
+      'u.name as customer_name',
+      'i.quantity',
+      'i.garment_size_id',
+      'd.name as design_name',
+      'd.garment_id',
+      'd.fabric_colour_id',
+      'd.document',
+      'c.name as colour_name',
+      'c.hex as colour_hex',
+    )
+    .where('o.number', number)
+    .orderBy('i.id')
+    .first();
+  if (!row) return undefined;
+  return {
+    number: row.number,
+    status: row.status,
+    customerId: row.customer_id,
+    customerName: row.customer_name,
+    neededBy: row.needed_by ? new Date(row.needed_by).toISOString().slice(0, 10) : null,
+    customerNote: row.customer_note,
+    quantity: row.quantity,
+    designName: row.design_name,
+    garmentId: row.garment_id,
+    sizeId: row.garment_size_id,
+    colourId: row.fabric_colour_id,
+    colourName: row.colour_name,
+    colourHex: row.colour_hex,
+    document: row.document,
+  };
+}
+
+/** Threads by code, retired ones included: an order is made in the threads it was designed with. */
+export async function readThreadsByCode(db: Db, codes: string[]): Promise<Map<string, ThreadRow>> {
+  const rows = await db('threads').select('code', 'name', 'hex').whereIn('code', codes);
+  return new Map(rows.map((row) => [row.code as string, { code: row.code, name: row.name, hex: row.hex }]));
+}
+
+/** Motif artwork (the stored, sanitized SVG) by slug, retired motifs included. */
+export async function readMotifArtwork(db: Db, slugs: string[]): Promise<Map<string, string>> {
+  const rows = await db('motifs').select('slug', 'svg').whereIn('slug', slugs);
+  return new Map(rows.map((row) => [row.slug as string, row.svg as string]));
+}

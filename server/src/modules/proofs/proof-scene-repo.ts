@@ -1,0 +1,82 @@
+import type { Db } from '../../db/knex.ts';
+import { designDocument, type DesignDocument } from '../../contracts/designs.ts';
+import type { PlacementZone } from '../quotes/quote-catalogue.ts';
+import type { LetteringFontFile } from '../../integrations/lettering-fonts.ts';
+import { mockupSizeMm } from '../catalogue/garment-repo.ts';
+
+/** A motif's drawing and the figures that size and fit it. */
+export interface SceneMotif {
+  svg: string;
+  widthMm: number;
+  heightMm: number;
+  gapMm: number;
+  minScalePct: number;
+  maxScalePct: number;
+}
+
+/** Everything needed to draw an order's design on its garment, as the customer designed it. */
+export interface ProofScene {
+  document: DesignDocument;
+  /** The garment drawing at its reference size, painted with `currentColor`. */
+  mockupSvg: string;
+  /** The drawing at this size, mm. */
+  mockupWidthMm: number;
+  mockupHeightMm: number;
+  fabricHex: string;
+  hemFrontMm: number | null;
+  hemCircumferenceMm: number | null;
+  zones: PlacementZone[];
+  motifs: ReadonlyMap<string, SceneMotif>;
+  threadHexes: ReadonlyMap<string, string>;
+  fonts: ReadonlyMap<string, LetteringFontFile>;
+  artwork: ReadonlyMap<number, { svg: string; widthPx: number; heightPx: number }>;
+}
+
+const mmOrNull = (value: string | null) => (value === null ? null : Number(value));
+
+/**
+ * The scene of an order's first line (an order is one design on identical garments), with the catalogue rows its
+ * design names, retired ones included: a proof shows what was ordered, even if the shop no longer offers it.
+ */
+export async function loadProofScene(db: Db, orderId: number): Promise<ProofScene | undefined> {
+  const row = await db('order_items as i')
+    .join('designs as d', 'd.id', 'i.design_id')
+    .join('garments as g', 'g.id', 'd.garment_id')
+    .join('garment_sizes as s', 's.id', 'i.garment_size_id')
+    .join('fabric_colours as c', 'c.id', 'd.fabric_colour_id')
+    .where('i.order_id', orderId)
+    .orderBy('i.id')
+    .first('d.document', 'g.slug', 'g.mockup_svg', 's.mockup_scale', 's.hem_front_mm', 's.hem_circumference_mm', 's.placement_zones', 'c.hex');
+  if (!row) return undefined;
+  const document = designDocument.parse(typeof row.document === 'string' ? JSON.parse(row.document) : row.document);
+  const motifSlugs = document.placements.flatMap((p) => (p.kind === 'border' || p.kind === 'motif' ? [p.motif] : []));
+  const fontSlugs = document.placements.flatMap((p) => (p.kind === 'lettering' ? [p.font] : []));
+  const uploadIds = document.placements.flatMap((p) => (p.kind === 'artwork' ? [p.artworkUploadId] : []));
+  const [motifs, threads, fonts, uploads] = await Promise.all([
+    db('motifs').whereIn('slug', motifSlugs).select('slug', 'svg', 'width_mm', 'height_mm', 'gap_mm', 'min_scale_pct', 'max_scale_pct'),
+    db('threads').select('code', 'hex'),
+    db('lettering_fonts').whereIn('slug', fontSlugs).select('slug', 'fontsource_package', 'file_name'),
+    db('artwork_uploads').whereIn('id', uploadIds).whereNotNull('sanitized_svg').select('id', 'sanitized_svg', 'width_px', 'height_px'),
+  ]);
+  const reference = mockupSizeMm(row.mockup_svg, row.slug);
+  const scale = Number(row.mockup_scale);
+  return {
+    document,
+    mockupSvg: row.mockup_svg,
+    mockupWidthMm: reference.widthMm * scale,
+    mockupHeightMm: reference.heightMm * scale,
+    fabricHex: row.hex,
+    hemFrontMm: mmOrNull(row.hem_front_mm),
+    hemCircumferenceMm: mmOrNull(row.hem_circumference_mm),
+    zones: typeof row.placement_zones === 'string' ? JSON.parse(row.placement_zones) : row.placement_zones,
+    motifs: new Map(
+      motifs.map((m) => [
+        m.slug,
+        { svg: m.svg, widthMm: Number(m.width_mm), heightMm: Number(m.height_mm), gapMm: Number(m.gap_mm), minScalePct: Number(m.min_scale_pct), maxScalePct: Number(m.max_scale_pct) },
+      ]),
+    ),
+    threadHexes: new Map(threads.map((t) => [t.code, t.hex])),
+    fonts: new Map(fonts.map((f) => [f.slug, { fontsourcePackage: f.fontsource_package, fileName: f.file_name }])),
+    artwork: new Map(uploads.map((u) => [u.id, { svg: u.sanitized_svg, widthPx: u.width_px, heightPx: u.height_px }])),
+  };
+}

@@ -1,0 +1,88 @@
+/**
+ * Sending a proof: the picture is made first (a render of the design on the garment, or a checked photo of a test
+ * stitch-out), outside any transaction; then, with the order locked, the proof becomes the next version, an
+ * unanswered earlier version is superseded and the order moves to `proof_sent`. The customer is e-mailed after.
+ */
+import type { Db } from '../../db/knex.ts';
+import type { Mailer } from '../../integrations/mailer.ts';
+import { failure, ok, type Result } from '../../contracts/result.ts';
+import { proofImagePath, type SendProofRequest, type SentProofResponse } from '../../contracts/studio-orders.ts';
+import { findStudioOrder } from '../orders/studio-order-repo.ts';
+import { loadProofScene } from './proof-scene-repo.ts';
+import { inspectUpload } from '../../integrations/inspect-upload.ts';
+import type { LetteringFontLoader } from '../../integrations/lettering-fonts.ts';
+import { sendLoggedMail } from '../mail/order-mail.ts';
+import { planOrderMove } from '../orders/order-flow.ts';
+import { moveOrder } from '../orders/order-transitions.ts';
+import type { StudioActor } from '../payments/order-payment-service.ts';
+import { renderProof } from './proof-render.ts';
+import { proofReadyMail } from '../orders/studio-order-mail.ts';
+
+export function createProofService(deps: { db: Db; mailer: Mailer; now: () => Date; appOrigin: string; fonts: LetteringFontLoader }) {
+  const { db } = deps;
+
+  async function drawing(orderId: number): Promise<Result<Buffer>> {
+    const scene = await loadProofScene(db, orderId);
+    if (!scene) return failure('conflict', 'This order has no design to draw a proof from; send a photo instead.');
+    return ok((await renderProof(scene, deps.fonts)).png);
+  }
+
+  async function pictureFor(orderId: number, request: SendProofRequest, photo: Buffer | undefined): Promise<Result<Buffer>> {
+    if (request.source === 'render') return drawing(orderId);
+    if (!photo) return failure('invalid', 'Choose the photo of the stitch-out to send.', { file: 'Choose a PNG or JPEG photo' });
+    const inspected = await inspectUpload(photo, ['png', 'jpeg']);
+    if (!inspected.ok) return inspected;
+    return inspected.value.kind === 'svg' ? failure('unsupported-type', 'Please upload a PNG or JPEG photo.') : ok(inspected.value.png);
+  }
+
+  /** The drawing a render proof would send now, for the studio to look at first; nothing is stored or sent. */
+  async function preview(number: string): Promise<Result<Buffer>> {
+    const order = await findStudioOrder(db, number);
+    if (!order) return failure('not-found', `There is no order ${number}.`);
+    return drawing(order.id);
+  }
+
+  async function send(number: string, request: SendProofRequest, photo: Buffer | undefined, actor: StudioActor): Promise<Result<SentProofResponse>> {
+    const order = await findStudioOrder(db, number);
+    if (!order) return failure('not-found', `There is no order ${number}.`);
+    // Checked before the picture is made, so a refused proof costs no rendering; moveOrder checks again under the lock.
+    const planned = planOrderMove(order.status, 'send_proof', actor.role);
+    if (!planned.ok) return failure(planned.kind, planned.reason);
+    const picture = await pictureFor(order.id, request, photo);
+    if (!picture.ok) return picture;
+
+    const sent = await db.transaction(async (trx): Promise<Result<SentProofResponse>> => {
+      const now = deps.now();
+      const latest = await trx('proofs').where({ order_id: order.id }).max({ version: 'version' }).first();
+      const version = Number(latest?.version ?? 0) + 1;
+      const moved = await moveOrder(trx, { orderId: order.id, action: 'send_proof', actor: actor.role, actorUserId: actor.userId, payload: { proofVersion: version, source: request.source }, now });
+      if (!moved.ok) return moved;
+      await trx('proofs').where({ order_id: order.id, status: 'sent' }).update({ status: 'superseded', updated_at: now });
+      await trx('proofs').insert({
+        order_id: order.id,
+        version,
+        status: 'sent',
+        source: request.source,
+        image_png: picture.value,
+        message: request.message,
+        comment_pins: JSON.stringify([]),
+        sent_by_user_id: actor.userId,
+        created_at: now,
+        updated_at: now,
+      });
+      return ok({ version, source: request.source, status: moved.value.to, imageUrl: proofImagePath(order.number, version) });
+    });
+    if (sent.ok) await sendLoggedMail(deps, proofReadyMail(order, deps.appOrigin, { version: sent.value.version, message: request.message }));
+    return sent;
+  }
+
+  /** The stored picture of one proof version; seeded history kept no pictures. */
+  async function image(number: string, version: number): Promise<Result<Buffer>> {
+    const row = await db('proofs as p').join('orders as o', 'o.id', 'p.order_id').where({ 'o.number': number, 'p.version': version }).first('p.image_png');
+    if (!row) return failure('not-found', `Order ${number} has no proof ${version}.`);
+    if (!row.image_png) return failure('not-found', `No picture was kept for proof ${version} of ${number}.`);
+    return ok(row.image_png as Buffer);
+  }
+
+  return { send, preview, image };
+}

@@ -1,0 +1,121 @@
+/**
+ * Turns a design document into everything its quote is priced from, with the engine: each placement's stitches,
+ * colour changes and hoopings, the machine time, the stabilizer advice and the safety cautions. Pure: the
+ * catalogue comes in as plain data, so the server (from the database) and the seeds (from their data files)
+ * compute the same figures for the same design.
+ */
+import {
+  adviseStabilizer,
+  estimateRunMinutes,
+  garmentCautions,
+  type GuidanceMessage,
+  type QuotePlacement,
+  type RunTimeEstimate,
+  type StabilizerAdvice,
+} from '../../engine/index.ts';
+import type { DesignDocument } from '../../contracts/designs.ts';
+import { failure, ok, type Result } from '../../contracts/result.ts';
+import { figureBorder } from './figure-border.ts';
+import { figureItem } from './figure-item.ts';
+import type { PlacementFigures } from './placement-outcome.ts';
+import type { QuoteCatalogue } from './quote-catalogue.ts';
+
+/** Under 3 the stabilizer advice adds a soft cover on the back, matching the cautions' small-parts age. */
+const BABY_OR_TODDLER_BELOW_MONTHS = 36;
+
+export interface DesignFigures {
+  placements: PlacementFigures[];
+  /** One per placement, per garment, ready for `priceQuote`. */
+  quotePlacements: QuotePlacement[];
+  /** Sums over the placements, per garment. */
+  totals: { stitches: number; colourChanges: number; hoopings: number; trims: number };
+  /** For one garment, setup included. */
+  runMinutes: RunTimeEstimate;
+  stabilizer: StabilizerAdvice;
+  cautions: GuidanceMessage[];
+}
+
+/**
+ * Figures a design on the catalogue's garment and size. Every figure is recomputed here; the border fit and hoop
+ * a document records are ignored, and a border's `count` is only the customer's wish. Failures are `invalid`
+ * with a message a parent can act on, keyed by the field path in the quote request (`document.placements.0.motif`).
+ */
+export function figureDesign(catalogue: QuoteCatalogue, document: DesignDocument): Result<DesignFigures> {
+  if (document.placements.length === 0) {
+    const message = 'Add a border, a name or a motif so there is embroidery to price.';
+    return failure('invalid', message, { 'document.placements': message });
+  }
+  const outcomes = document.placements.map((placement, index) => {
+    const path = `document.placements.${index}`;
+    return placement.kind === 'border' ? figureBorder(catalogue, placement, path) : figureItem(catalogue, placement, path);
+  });
+  const refusals = outcomes.flatMap((outcome) => (outcome.ok ? [] : [outcome]));
+  if (refusals.length > 0) {
+    return failure('invalid', refusals[0].message, Object.fromEntries(refusals.map((refusal) => [refusal.field, refusal.message])));
+  }
+  const placements = outcomes.flatMap((outcome) => (outcome.ok ? [outcome.figures] : []));
+  const sum = (pick: (figures: PlacementFigures) => number) => placements.reduce((total, figures) => total + pick(figures), 0);
+  const totals = {
+    stitches: sum((figures) => figures.estimate.stitches),
+    colourChanges: sum((figures) => figures.estimate.colorChanges),
+    hoopings: sum((figures) => figures.hoopings),
+    trims: sum((figures) => figures.estimate.trims),
+  };
+
+  const runMinutes = estimateRunMinutes({ stitches: totals.stitches, colorChanges: totals.colourChanges, hoopings: totals.hoopings, trims: totals.trims, machine: catalogue.machine });
+  if (!runMinutes.ok) return failure('invalid', `The machine time can't be estimated: ${runMinutes.reason}`);
+  const stabilizer = adviseDesignStabilizer(catalogue, placements, totals.stitches);
+  if (!stabilizer.ok) return failure('invalid', `The stabilizer can't be chosen: ${stabilizer.reason}`);
+  // The youngest wearer the garment is made for, so the cautions err towards the younger child. The shop's
+  // garments are not sleepwear and have no drawstrings, and a design of stitches adds no detachable trims.
+  const cautions = garmentCautions({
+    wearerAgeMonths: catalogue.garment.minAgeMonths,
+    isSleepwear: false,
+    hasHoodOrNeckDrawstring: false,
+    hasDetachableEmbellishments: false,
+  });
+  if (!cautions.ok) return failure('invalid', `The garment cautions can't be given: ${cautions.reason}`);
+
+  return ok({
+    placements,
+    quotePlacements: placements.map((figures) => ({
+      id: figures.id,
+      label: figures.label,
+      kind: figures.kind === 'lettering' ? 'lettering' : 'stitching',
+      stitches: figures.estimate.stitches,
+      hoopings: figures.hoopings,
+      colorChanges: figures.estimate.colorChanges,
+      hasCustomerArtwork: figures.hasCustomerArtwork,
+      ...(figures.isPriceProvisional ? { isStitchCountPending: true } : {}),
+    })),
+    totals,
+    runMinutes: { totalMinutes: runMinutes.totalMinutes, items: runMinutes.items },
+    stabilizer: {
+      densityStitchesPerCm2: stabilizer.densityStitchesPerCm2,
+      density: stabilizer.density,
+      backing: stabilizer.backing,
+      topping: stabilizer.topping,
+      messages: stabilizer.messages,
+    },
+    cautions: cautions.messages,
+  });
+}
+
+/**
+ * One backing for the whole garment, from the design's overall density: all stitches over the sum of the
+ * placements' stitched width × height. Summing the areas (rather than taking the box round everything) keeps
+ * the bare fabric between a hem border and a chest name from making the design look airy. The engine takes a
+ * width and a height, so the summed area goes in as the square of the same area.
+ */
+function adviseDesignStabilizer(catalogue: QuoteCatalogue, placements: PlacementFigures[], stitches: number) {
+  const areaMm2 = placements.reduce((total, figures) => total + figures.estimate.widthMm * figures.estimate.heightMm, 0);
+  const sideMm = Math.sqrt(areaMm2);
+  return adviseStabilizer({
+    stitches,
+    widthMm: sideMm,
+    heightMm: sideMm,
+    fabric: catalogue.garment.fabricType,
+    isNapped: catalogue.garment.isNapped,
+    isForBabyOrToddler: catalogue.garment.minAgeMonths < BABY_OR_TODDLER_BELOW_MONTHS,
+  });
+}

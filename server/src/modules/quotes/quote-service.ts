@@ -1,0 +1,145 @@
+import type { Db } from '../../db/knex.ts';
+import { loadOwnedArtworkForQuote, type ArtworkOwner } from '../artwork/artwork-repo.ts';
+import { loadQuoteCatalogue, type QuoteCatalogueRecord } from './quote-catalogue-repo.ts';
+import { priceQuote } from '../../engine/index.ts';
+import type { LetteringFontLoader } from '../../integrations/lettering-fonts.ts';
+import type { DesignDocument } from '../../contracts/designs.ts';
+import type { QuotePreviewRequest, QuotePreviewResponse } from '../../contracts/quotes.ts';
+import { failure, ok, type Result } from '../../contracts/result.ts';
+import { figureDesign, type DesignFigures } from './design-figures.ts';
+import type { CatalogueArtwork, QuoteCatalogue } from './quote-catalogue.ts';
+
+/** A priced design: the preview's answer, the engine's figures and the catalogue rows it was priced from. */
+export interface PricedDesign {
+  response: QuotePreviewResponse;
+  figures: DesignFigures;
+  catalogue: QuoteCatalogueRecord;
+}
+
+/** Quotes priced by the server from the published price list; the client's own figures are never used. */
+export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader }) {
+  /**
+   * Prices a design for one garment size and quantity, with what storing the quote needs. Reads only. Artwork
+   * uploads count only when `owner` may see them; anyone else's read as not available.
+   */
+  async function price(request: QuotePreviewRequest, owner?: ArtworkOwner): Promise<Result<PricedDesign>> {
+    const { motifSlugs, fontSlugs, artworkIds } = namedIn(request.document);
+    const [record, uploads] = await Promise.all([
+      loadQuoteCatalogue(deps.db, { garmentId: request.garmentId, sizeId: request.sizeId, colourId: request.colourId, motifSlugs, fontSlugs }),
+      owner ? loadOwnedArtworkForQuote(deps.db, owner, artworkIds) : [],
+    ]);
+    if (!record.ok) return record;
+    const figured = figureDesign(toQuoteCatalogue(record.value, deps.fonts, artworkCatalogueOf(uploads)), request.document);
+    if (!figured.ok) return figured;
+    const figures = figured.value;
+    const { garment, size, ruleSet } = record.value;
+    const quote = priceQuote({
+      ruleSet,
+      garment: { slug: garment.slug, name: garment.name },
+      sizeCode: size.code,
+      sizeLabel: size.label,
+      quantity: request.quantity,
+      placements: figures.quotePlacements,
+      isRush: request.isRush,
+    });
+    // The design was sound, so a pricing failure is the price list's: it has no price for this size, say.
+    if (!quote.ok) return failure('conflict', `This garment can't be priced online right now: ${quote.reason}`);
+
+    const response: QuotePreviewResponse = {
+      quote: quoteSummaryOf(quote),
+      placements: figures.placements.map((placement) => ({
+        id: placement.id,
+        label: placement.label,
+        kind: placement.kind,
+        stitches: placement.estimate.stitches,
+        colourChanges: placement.estimate.colorChanges,
+        hoopings: placement.hoopings,
+        ...(placement.border && {
+          border: {
+            count: placement.border.count,
+            scalePct: placement.border.scalePct,
+            repeatWidthMm: placement.border.repeatWidthMm,
+            hoopSlug: placement.border.hoop.slug,
+            hoopName: placement.border.hoop.name,
+          },
+        }),
+        widthMm: placement.estimate.widthMm,
+        heightMm: placement.estimate.heightMm,
+        ...(placement.isPriceProvisional ? { isPriceProvisional: true } : {}),
+      })),
+      runMinutes: figures.runMinutes,
+      stabilizer: {
+        backing: figures.stabilizer.backing,
+        topping: figures.stabilizer.topping,
+        density: figures.stabilizer.density,
+        messages: figures.stabilizer.messages,
+      },
+      cautions: figures.cautions,
+    };
+    return ok({ response, figures, catalogue: record.value });
+  }
+
+  /** Prices a design without saving it, for one garment size and quantity. */
+  async function preview(request: QuotePreviewRequest, owner?: ArtworkOwner): Promise<Result<QuotePreviewResponse>> {
+    const priced = await price(request, owner);
+    return priced.ok ? ok(priced.value.response) : priced;
+  }
+
+  return { preview, price };
+}
+
+export type QuoteService = ReturnType<typeof createQuoteService>;
+
+/** The priced lines and totals as the apps get them, from the engine's quote or a stored one. */
+export function quoteSummaryOf(quote: QuotePreviewResponse['quote']): QuotePreviewResponse['quote'] {
+  const { lines, subtotalCents, taxCents, totalCents, currency, ruleSetVersion } = quote;
+  return { lines, subtotalCents, taxCents, totalCents, currency, ruleSetVersion };
+}
+
+/** The motifs, fonts and uploads a design names, so only those rows are read. */
+function namedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: string[]; artworkIds: number[] } {
+  const motifSlugs = new Set<string>();
+  const fontSlugs = new Set<string>();
+  const artworkIds = new Set<number>();
+  for (const placement of document.placements) {
+    if (placement.kind === 'border' || placement.kind === 'motif') motifSlugs.add(placement.motif);
+    if (placement.kind === 'lettering') fontSlugs.add(placement.font);
+    if (placement.kind === 'artwork') artworkIds.add(placement.artworkUploadId);
+  }
+  return { motifSlugs: [...motifSlugs], fontSlugs: [...fontSlugs], artworkIds: [...artworkIds] };
+}
+
+/** Uploaded artwork as `figureDesign` takes it: an SVG's drawing to estimate, or a raster's size in pixels. */
+export function artworkCatalogueOf(uploads: Awaited<ReturnType<typeof loadOwnedArtworkForQuote>>): ReadonlyMap<number, CatalogueArtwork> {
+  return new Map(
+    uploads.map((upload): [number, CatalogueArtwork] => [
+      upload.id,
+      upload.svgText !== null ? { svgText: upload.svgText } : { rasterSizePx: { widthPx: upload.widthPx, heightPx: upload.heightPx } },
+    ]),
+  );
+}
+
+/** The motifs and fonts a design names, so only those catalogue rows are read. */
+export function slugsNamedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: string[] } {
+  const { motifSlugs, fontSlugs } = namedIn(document);
+  return { motifSlugs, fontSlugs };
+}
+
+/** The catalogue as `figureDesign` takes it, with the uploads the requester may use. */
+export function toQuoteCatalogue(
+  record: QuoteCatalogueRecord,
+  fonts: LetteringFontLoader,
+  artworkUploads: ReadonlyMap<number, CatalogueArtwork> = new Map(),
+): QuoteCatalogue {
+  return {
+    garment: record.garment,
+    size: record.size,
+    motifs: new Map(record.motifs.map((motif) => [motif.slug, motif])),
+    fonts: new Map(
+      record.fonts.map(({ fontsourcePackage, fileName, ...font }) => [font.slug, { ...font, outlines: fonts({ fontsourcePackage, fileName }) }]),
+    ),
+    hoops: record.hoops,
+    machine: record.machine,
+    artworkUploads,
+  };
+}
