@@ -20,7 +20,12 @@ export function appConfig(app: 'storefront' | 'admin', port: number) {
       },
     },
     build: { outDir: here(`./dist/${app}`), emptyOutDir: true, chunkSizeWarningLimit: 700, manifest: true },
-    server: { port, strictPort: true, host: '127.0.0.1', proxy: { '/api': { target: apiTarget, changeOrigin: false } } },
+    server: {
+      port,
+      strictPort: true,
+      host: '127.0.0.1',
+      proxy: { '/api': { target: apiTarget, changeOrigin: false } },
+    },
     preview: { port, strictPort: true, host: '127.0.0.1' },
   });
 }

@@ -32,25 +32,35 @@ a{color:var(--accent)}
  */
 export function sendHtmlPage(
   res: Response,
-  page: { status?: number; title: string; notice: string; accent: string; widthRem?: number; css: string; body: SafeHtml },
+  page: {
+    status?: number;
+    title: string;
+    notice: string;
+    accent: string;
+    widthRem?: number;
+    css: string;
+    body: SafeHtml;
+  },
 ): void {
   const css = `:root{--accent:${page.accent};--width:${page.widthRem ?? 30}rem}${BASE_CSS}${page.css}`;
   const styleHash = createHash('sha256').update(css).digest('base64');
   // Stylesheets are constants of the fakes; HTML-escaping them would corrupt their quotes, so they go in as markup.
   const stylesheet = new SafeHtml(css);
   const document = html`<!doctype html>
-<html lang="en">
-<head>
-<meta charset="utf-8">
-<meta name="viewport" content="width=device-width, initial-scale=1">
-<title>${page.title}</title>
-<style>${stylesheet}</style>
-</head>
-<body>
-<div class="notice" role="note">${page.notice}</div>
-<main>${page.body}</main>
-</body>
-</html>`;
+    <html lang="en">
+      <head>
+        <meta charset="utf-8" />
+        <meta name="viewport" content="width=device-width, initial-scale=1" />
+        <title>${page.title}</title>
+        <style>
+          ${stylesheet}
+        </style>
+      </head>
+      <body>
+        <div class="notice" role="note">${page.notice}</div>
+        <main>${page.body}</main>
+      </body>
+    </html>`;
   res
     .status(page.status ?? 200)
     .set({

@@ -45,10 +45,18 @@ export async function startFakes(cfg: FakesConfig): Promise<{ urls: FakeUrls; cl
   if (google.status === 'rejected' || stripe.status === 'rejected' || smtp.status === 'rejected') {
     await closeAll();
     const reasons = [google, stripe, smtp].flatMap((result) => (result.status === 'rejected' ? [result.reason] : []));
-    throw new AggregateError(reasons, `Could not start the local fakes: ${reasons.map((reason) => String(reason)).join('; ')}`);
+    throw new AggregateError(
+      reasons,
+      `Could not start the local fakes: ${reasons.map((reason) => String(reason)).join('; ')}`,
+    );
   }
   return {
-    urls: { google: google.value.url, stripe: stripe.value.url, smtp: smtp.value.smtpUrl, smtpHttp: smtp.value.httpUrl },
+    urls: {
+      google: google.value.url,
+      stripe: stripe.value.url,
+      smtp: smtp.value.smtpUrl,
+      smtpHttp: smtp.value.httpUrl,
+    },
     close: closeAll,
   };
 }

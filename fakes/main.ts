@@ -43,7 +43,13 @@ const settings = z
 
 const fakes = await startFakes({
   ...settings,
-  identities: demoPeople.map(({ sub, email, name, givenName, familyName }: FakeIdentity) => ({ sub, email, name, givenName, familyName })),
+  identities: demoPeople.map(({ sub, email, name, givenName, familyName }: FakeIdentity) => ({
+    sub,
+    email,
+    name,
+    givenName,
+    familyName,
+  })),
 });
 console.log(`Sign-in stand-in   ${fakes.urls.google}/authorize`);
 console.log(`Payments API       ${fakes.urls.stripe}/v1  (webhooks to ${settings.stripeWebhookUrl})`);

@@ -8,8 +8,18 @@ export async function up(knex: Knex): Promise<void> {
     // A customer's saved designs are theirs: they go with the account (orders keep theirs through RESTRICT below).
     t.integer('customer_id').unsigned().notNullable().references('id').inTable('users').onDelete('CASCADE');
     t.integer('garment_id').unsigned().notNullable().references('id').inTable('garments').onDelete('RESTRICT');
-    t.integer('garment_size_id').unsigned().notNullable().references('id').inTable('garment_sizes').onDelete('RESTRICT');
-    t.integer('fabric_colour_id').unsigned().notNullable().references('id').inTable('fabric_colours').onDelete('RESTRICT');
+    t.integer('garment_size_id')
+      .unsigned()
+      .notNullable()
+      .references('id')
+      .inTable('garment_sizes')
+      .onDelete('RESTRICT');
+    t.integer('fabric_colour_id')
+      .unsigned()
+      .notNullable()
+      .references('id')
+      .inTable('fabric_colours')
+      .onDelete('RESTRICT');
     t.string('name', 120).notNullable();
     // The versioned design document (server/src/contracts/designs.ts); document_version tells restoreDesign which
     // migration steps an older document needs.

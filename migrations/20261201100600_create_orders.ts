@@ -53,7 +53,12 @@ export async function up(knex: Knex): Promise<void> {
     t.increments('id');
     t.integer('order_id').unsigned().notNullable().references('id').inTable('orders').onDelete('CASCADE');
     t.integer('design_id').unsigned().notNullable().references('id').inTable('designs').onDelete('RESTRICT');
-    t.integer('garment_size_id').unsigned().notNullable().references('id').inTable('garment_sizes').onDelete('RESTRICT');
+    t.integer('garment_size_id')
+      .unsigned()
+      .notNullable()
+      .references('id')
+      .inTable('garment_sizes')
+      .onDelete('RESTRICT');
     t.integer('quantity').unsigned().notNullable();
     addCents(t, 'order_items', 'unit_price_cents');
     addCents(t, 'order_items', 'total_cents');

@@ -6,14 +6,26 @@ import type { Knex } from 'knex';
  * outbox, a proof records whether it is a render or a photo and the customer's words, and the shop settings gain
  * the lead time and weekly machine hours that due dates and capacity charts are worked out from.
  */
-const before = ['awaiting_payment', 'needs_proof', 'proof_sent', 'changes_requested', 'proof_approved', 'in_production', 'stitched', 'shipped', 'cancelled'];
+const before = [
+  'awaiting_payment',
+  'needs_proof',
+  'proof_sent',
+  'changes_requested',
+  'proof_approved',
+  'in_production',
+  'stitched',
+  'shipped',
+  'cancelled',
+];
 const during = [...before, 'authorized', 'refunded'];
 const after = during.filter((status) => status !== 'needs_proof');
 const enumOf = (values: string[]) => `ENUM(${values.map((v) => `'${v}'`).join(', ')})`;
 
 async function setStatusEnums(knex: Knex, values: string[]): Promise<void> {
   await knex.raw(`ALTER TABLE orders MODIFY status ${enumOf(values)} NOT NULL DEFAULT 'awaiting_payment'`);
-  await knex.raw(`ALTER TABLE order_events MODIFY from_status ${enumOf(values)} NULL, MODIFY to_status ${enumOf(values)} NULL`);
+  await knex.raw(
+    `ALTER TABLE order_events MODIFY from_status ${enumOf(values)} NULL, MODIFY to_status ${enumOf(values)} NULL`,
+  );
 }
 
 async function renameStatus(knex: Knex, from: string, to: string): Promise<void> {

@@ -14,7 +14,9 @@ export async function up(knex: Knex): Promise<void> {
     t.decimal('chest_mm', 8, 2).nullable();
     t.decimal('length_mm', 8, 2).nullable();
   });
-  await knex.raw('ALTER TABLE garment_sizes ADD CONSTRAINT garment_sizes_measurements_positive CHECK ((`chest_mm` IS NULL OR `chest_mm` > 0) AND (`length_mm` IS NULL OR `length_mm` > 0))');
+  await knex.raw(
+    'ALTER TABLE garment_sizes ADD CONSTRAINT garment_sizes_measurements_positive CHECK ((`chest_mm` IS NULL OR `chest_mm` > 0) AND (`length_mm` IS NULL OR `length_mm` > 0))',
+  );
 }
 
 export async function down(knex: Knex): Promise<void> {

@@ -42,23 +42,47 @@ const ruleSet: PricingRuleSet = {
   artworkSetupCents: 2500,
   lettering: { centsPerThousandStitches: 120, minimumCents: 600 },
   rushMultiplierBp: 15_000,
-  quantityBreaks: [{ minQty: 3, discountBp: 500 }, { minQty: 6, discountBp: 1000 }],
+  quantityBreaks: [
+    { minQty: 3, discountBp: 500 },
+    { minQty: 6, discountBp: 1000 },
+  ],
   taxRateBp: 825,
 };
 
-const sailboat: CatalogueMotif = { stitchCount: 2400, mix: { run: 15, satin: 55, fill: 30 }, colorChanges: 2, widthMm: 60, heightMm: 45, trims: 3 };
+const sailboat: CatalogueMotif = {
+  stitchCount: 2400,
+  mix: { run: 15, satin: 55, fill: 30 },
+  colorChanges: 2,
+  widthMm: 60,
+  heightMm: 45,
+  trims: 3,
+};
 const payload = {
   ruleSet,
   garment: { slug: 'smocked-yoke-dress', name: 'Smocked yoke dress' },
   sizeCode: '4',
   quantity: 3,
   isRush: false,
-  border: { runLengthMm: 1800, closed: true, motifWidthMm: 60, gapMm: 0, minScale: 0.9, maxScale: 1.1, motif: sailboat },
+  border: {
+    runLengthMm: 1800,
+    closed: true,
+    motifWidthMm: 60,
+    gapMm: 0,
+    minScale: 0.9,
+    maxScale: 1.1,
+    motif: sailboat,
+  },
   hoop: { fieldWidthMm: 130, fieldHeightMm: 180 },
   lettering: { text: 'Amelia', font: 'pacifico', letterHeightMm: 22 },
   motifs: [
-    { motif: { stitchCount: 3100, mix: { run: 10, satin: 40, fill: 50 }, colorChanges: 3, widthMm: 70, heightMm: 70 }, scale: 1 },
-    { motif: { stitchCount: 1500, mix: { run: 30, satin: 70, fill: 0 }, colorChanges: 1, widthMm: 40, heightMm: 30 }, scale: 0.8 },
+    {
+      motif: { stitchCount: 3100, mix: { run: 10, satin: 40, fill: 50 }, colorChanges: 3, widthMm: 70, heightMm: 70 },
+      scale: 1,
+    },
+    {
+      motif: { stitchCount: 1500, mix: { run: 30, satin: 70, fill: 0 }, colorChanges: 1, widthMm: 40, heightMm: 30 },
+      scale: 0.8,
+    },
   ],
 };
 const font = loadFont(payload.lettering.font);
@@ -66,18 +90,54 @@ const font = loadFont(payload.lettering.font);
 function fullQuote(): number {
   const fit = fitBorder(payload.border);
   if (!fit.ok) throw new Error(fit.reason);
-  const plan = planHoopings({ count: fit.count, repeatWidthMm: fit.repeatWidthMm, pitchMm: fit.pitchMm, motifHeightMm: sailboat.heightMm * fit.scale, hoop: payload.hoop, firstCenterMm: fit.centersMm[0] });
+  const plan = planHoopings({
+    count: fit.count,
+    repeatWidthMm: fit.repeatWidthMm,
+    pitchMm: fit.pitchMm,
+    motifHeightMm: sailboat.heightMm * fit.scale,
+    hoop: payload.hoop,
+    firstCenterMm: fit.centersMm[0],
+  });
   if (!plan.ok) throw new Error(plan.reason);
   const repeat = estimateStitches({ kind: 'catalogue', motif: payload.border.motif, scale: fit.scale });
   if (!repeat.ok) throw new Error(repeat.reason);
   const border = estimateBorderStitches({ repeat, fit, hoopings: plan.hoopings.length });
-  const name = estimateStitches({ kind: 'lettering', text: payload.lettering.text, font, letterHeightMm: payload.lettering.letterHeightMm });
+  const name = estimateStitches({
+    kind: 'lettering',
+    text: payload.lettering.text,
+    font,
+    letterHeightMm: payload.lettering.letterHeightMm,
+  });
   const motifs = payload.motifs.map(({ motif, scale }) => estimateStitches({ kind: 'catalogue', motif, scale }));
   if (!border.ok || !name.ok || !motifs.every((m) => m.ok)) throw new Error('estimate failed');
   const placements: QuotePlacement[] = [
-    { id: 'hem', label: 'Hem border', kind: 'stitching', stitches: border.stitches, hoopings: plan.hoopings.length, colorChanges: border.colorChanges, hasCustomerArtwork: false },
-    { id: 'name', label: 'Name on yoke', kind: 'lettering', stitches: name.stitches, hoopings: 1, colorChanges: 0, hasCustomerArtwork: false },
-    ...motifs.map((m, i): QuotePlacement => ({ id: `motif-${i}`, label: `Motif ${i + 1}`, kind: 'stitching', stitches: m.ok ? m.stitches : 0, hoopings: 1, colorChanges: m.ok ? m.colorChanges : 0, hasCustomerArtwork: false })),
+    {
+      id: 'hem',
+      label: 'Hem border',
+      kind: 'stitching',
+      stitches: border.stitches,
+      hoopings: plan.hoopings.length,
+      colorChanges: border.colorChanges,
+      hasCustomerArtwork: false,
+    },
+    {
+      id: 'name',
+      label: 'Name on yoke',
+      kind: 'lettering',
+      stitches: name.stitches,
+      hoopings: 1,
+      colorChanges: 0,
+      hasCustomerArtwork: false,
+    },
+    ...motifs.map((m, i): QuotePlacement => ({
+      id: `motif-${i}`,
+      label: `Motif ${i + 1}`,
+      kind: 'stitching',
+      stitches: m.ok ? m.stitches : 0,
+      hoopings: 1,
+      colorChanges: m.ok ? m.colorChanges : 0,
+      hasCustomerArtwork: false,
+    })),
   ];
   const minutes = estimateRunMinutes({
     stitches: placements.reduce((sum, p) => sum + p.stitches, 0),
@@ -85,7 +145,14 @@ function fullQuote(): number {
     hoopings: placements.reduce((sum, p) => sum + p.hoopings, 0),
     trims: border.trims + name.trims,
   });
-  const quote = priceQuote({ ruleSet, garment: payload.garment, sizeCode: payload.sizeCode, quantity: payload.quantity, placements, isRush: payload.isRush });
+  const quote = priceQuote({
+    ruleSet,
+    garment: payload.garment,
+    sizeCode: payload.sizeCode,
+    quantity: payload.quantity,
+    placements,
+    isRush: payload.isRush,
+  });
   if (!quote.ok || !minutes.ok) throw new Error('quote failed');
   return quote.totalCents;
 }
@@ -101,7 +168,9 @@ function svgWith5000Segments(): string {
   for (let k = 1; k <= 5000; k += 1) {
     const [x0, y0] = point(k - 1);
     const [x1, y1] = point(k);
-    segments.push(`C${x0 + (x1 - x0) / 3 + 0.2} ${y0 + (y1 - y0) / 3} ${x0 + (2 * (x1 - x0)) / 3 - 0.2} ${y0 + (2 * (y1 - y0)) / 3} ${x1.toFixed(3)} ${y1.toFixed(3)}`);
+    segments.push(
+      `C${x0 + (x1 - x0) / 3 + 0.2} ${y0 + (y1 - y0) / 3} ${x0 + (2 * (x1 - x0)) / 3 - 0.2} ${y0 + (2 * (y1 - y0)) / 3} ${x1.toFixed(3)} ${y1.toFixed(3)}`,
+    );
   }
   const [sx, sy] = point(0);
   return `<svg xmlns="http://www.w3.org/2000/svg" width="120mm" height="120mm" viewBox="0 0 120 120"><path d="M${sx} ${sy}${segments.join('')}Z" fill="#f4a6c0" stroke="#5b3a29" stroke-width="0.4"/></svg>`;
@@ -137,6 +206,12 @@ const svgNs = medianNs(() => {
 const ratio = quoteNs / baselineNs;
 
 console.log(`Quote total for the benchmark design: ${fullQuote()} cents`);
-console.log(`Baseline JSON.parse(JSON.stringify(payload)), ${JSON.stringify(payload).length} bytes: ${microseconds(baselineNs)}`);
-console.log(`Full quote (border ×30, lettering, 2 motifs):  ${microseconds(quoteNs)}  = ${ratio.toFixed(1)} × baseline (target < ${TARGET_RATIO} ×) ${ratio < TARGET_RATIO ? 'PASS' : 'MISS'}`);
-console.log(`SVG estimate, 5,000-segment path:              ${microseconds(svgNs)}  = ${(svgNs / baselineNs).toFixed(1)} × baseline`);
+console.log(
+  `Baseline JSON.parse(JSON.stringify(payload)), ${JSON.stringify(payload).length} bytes: ${microseconds(baselineNs)}`,
+);
+console.log(
+  `Full quote (border ×30, lettering, 2 motifs):  ${microseconds(quoteNs)}  = ${ratio.toFixed(1)} × baseline (target < ${TARGET_RATIO} ×) ${ratio < TARGET_RATIO ? 'PASS' : 'MISS'}`,
+);
+console.log(
+  `SVG estimate, 5,000-segment path:              ${microseconds(svgNs)}  = ${(svgNs / baselineNs).toFixed(1)} × baseline`,
+);

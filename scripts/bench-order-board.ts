@@ -8,7 +8,13 @@ import { loadDatabaseConfig } from '../server/src/config.ts';
 import { openDatabase, type Db } from '../server/src/db/knex.ts';
 import { orderBoardQuery, type OrderBoardQuery } from '../server/src/contracts/studio-orders.ts';
 import { listBoardOrders, listDueOrders } from '../server/src/modules/orders/order-board-repo.ts';
-import { dropLocalDatabase, localDatabaseSettings, recreateLocalDatabase, startLocalDatabase, stopLocalDatabase } from './db-lifecycle.ts';
+import {
+  dropLocalDatabase,
+  localDatabaseSettings,
+  recreateLocalDatabase,
+  startLocalDatabase,
+  stopLocalDatabase,
+} from './db-lifecycle.ts';
 import { localStack } from './stack.ts';
 
 const DATABASE = 'hoopwright_bench';
@@ -33,8 +39,50 @@ function random(seed: number): () => number {
 }
 
 // Invented surnames from sewing words, with common first names: no real person is meant.
-const firstNames = ['Ada', 'Ben', 'Cora', 'Dev', 'Elsa', 'Finn', 'Gita', 'Hugo', 'Iris', 'Jon', 'Kira', 'Leo', 'Mina', 'Nils', 'Opal', 'Pia', 'Quin', 'Rosa', 'Sami', 'Tess'];
-const surnames = ['Bobbinford', 'Threadwell', 'Hemsworthy', 'Pleatley', 'Smockton', 'Seamsby', 'Lacewing', 'Quilterby', 'Darnell', 'Basting', 'Tuckaway', 'Gussetti', 'Hoopley', 'Spoolman', 'Selvedge', 'Ricrack', 'Pinfold', 'Thimbleby', 'Yokefield', 'Bias'];
+const firstNames = [
+  'Ada',
+  'Ben',
+  'Cora',
+  'Dev',
+  'Elsa',
+  'Finn',
+  'Gita',
+  'Hugo',
+  'Iris',
+  'Jon',
+  'Kira',
+  'Leo',
+  'Mina',
+  'Nils',
+  'Opal',
+  'Pia',
+  'Quin',
+  'Rosa',
+  'Sami',
+  'Tess',
+];
+const surnames = [
+  'Bobbinford',
+  'Threadwell',
+  'Hemsworthy',
+  'Pleatley',
+  'Smockton',
+  'Seamsby',
+  'Lacewing',
+  'Quilterby',
+  'Darnell',
+  'Basting',
+  'Tuckaway',
+  'Gussetti',
+  'Hoopley',
+  'Spoolman',
+  'Selvedge',
+  'Ricrack',
+  'Pinfold',
+  'Thimbleby',
+  'Yokefield',
+  'Bias',
+];
 // A studio with 50,000 orders in two years ships about 70 a day, so a few hundred are in the making at any time.
 const statuses = [
   ['shipped', 0.855],
@@ -59,7 +107,9 @@ async function fill(db: Db): Promise<void> {
   });
   for (let i = 0; i < customers.length; i += CHUNK) await db('users').insert(customers.slice(i, i + CHUNK));
   const customerIds = Array.from({ length: CUSTOMER_COUNT }, (_, i) => Number(maxUser) + 1 + i);
-  const items = await db('order_items as i').join('orders as o', 'o.id', 'i.order_id').select('o.quote_id', 'i.design_id', 'i.garment_size_id', 'i.description');
+  const items = await db('order_items as i')
+    .join('orders as o', 'o.id', 'i.order_id')
+    .select('o.quote_id', 'i.design_id', 'i.garment_size_id', 'i.description');
 
   const todayMs = Date.parse(TODAY);
   for (let start = 0; start < ORDER_COUNT; start += CHUNK) {
@@ -79,17 +129,41 @@ async function fill(db: Db): Promise<void> {
         customer_id: pick(customerIds),
         quote_id: line.quote_id,
         status,
-        payment_status: status === 'awaiting_payment' ? 'none' : ['authorized', 'proof_sent', 'changes_requested', 'proof_approved'].includes(status) ? 'authorized' : status === 'cancelled' ? 'voided' : status === 'refunded' ? 'refunded' : 'captured',
+        payment_status:
+          status === 'awaiting_payment'
+            ? 'none'
+            : ['authorized', 'proof_sent', 'changes_requested', 'proof_approved'].includes(status)
+              ? 'authorized'
+              : status === 'cancelled'
+                ? 'voided'
+                : status === 'refunded'
+                  ? 'refunded'
+                  : 'captured',
         subtotal_cents: subtotal,
         tax_cents: tax,
         total_cents: subtotal + tax,
         currency: 'USD',
-        needed_by: next() < 0.4 ? new Date(placedMs + (10 + Math.floor(next() * 40)) * DAY_MS).toISOString().slice(0, 10) : null,
-        ship_to: JSON.stringify({ name: 'Bench Parent', line1: '1 Loom Lane', city: 'Benchton', region: 'OR', postalCode: '97000', countryCode: 'US' }),
+        needed_by:
+          next() < 0.4 ? new Date(placedMs + (10 + Math.floor(next() * 40)) * DAY_MS).toISOString().slice(0, 10) : null,
+        ship_to: JSON.stringify({
+          name: 'Bench Parent',
+          line1: '1 Loom Lane',
+          city: 'Benchton',
+          region: 'OR',
+          postalCode: '97000',
+          countryCode: 'US',
+        }),
         placed_at: status === 'awaiting_payment' ? null : new Date(placedMs),
         created_at: new Date(placedMs),
       });
-      lines.push({ design_id: line.design_id, garment_size_id: line.garment_size_id, quantity: 1 + Math.floor(next() * 3), unit_price_cents: subtotal, total_cents: subtotal, description: line.description });
+      lines.push({
+        design_id: line.design_id,
+        garment_size_id: line.garment_size_id,
+        quantity: 1 + Math.floor(next() * 3),
+        unit_price_cents: subtotal,
+        total_cents: subtotal,
+        description: line.description,
+      });
     }
     const [firstId] = await db('orders').insert(orders);
     await db('order_items').insert(lines.map((line, i) => ({ ...line, order_id: firstId! + i })));
@@ -110,7 +184,9 @@ async function time(label: string, run: () => Promise<unknown>): Promise<void> {
     samples.push(performance.now() - start);
   }
   samples.sort((a, b) => a - b);
-  console.log(`${label.padEnd(58)} median ${percentile(samples, 50).toFixed(1).padStart(6)} ms   p95 ${percentile(samples, 95).toFixed(1).padStart(6)} ms`);
+  console.log(
+    `${label.padEnd(58)} median ${percentile(samples, 50).toFixed(1).padStart(6)} ms   p95 ${percentile(samples, 95).toFixed(1).padStart(6)} ms`,
+  );
 }
 
 const settings = { ...localDatabaseSettings(), databases: [DATABASE] };
@@ -123,19 +199,33 @@ try {
   const filledAt = performance.now();
   await fill(db);
   const [{ n }] = await db('orders').count({ n: '*' });
-  console.log(`Filled ${DATABASE} with ${n} orders in ${((performance.now() - filledAt) / 1000).toFixed(1)} s; ${SAMPLES} runs of each query after ${WARM_UP} to warm up:\n`);
-  const board = (query: Record<string, string>) => () => listBoardOrders(db, orderBoardQuery.parse(query) as OrderBoardQuery, TODAY);
+  console.log(
+    `Filled ${DATABASE} with ${n} orders in ${((performance.now() - filledAt) / 1000).toFixed(1)} s; ${SAMPLES} runs of each query after ${WARM_UP} to warm up:\n`,
+  );
+  const board = (query: Record<string, string>) => () =>
+    listBoardOrders(db, orderBoardQuery.parse(query) as OrderBoardQuery, TODAY);
   await time('newest first, page 1 of 25', board({}));
   await time('newest first, page 40', board({ page: '40' }));
-  await time('needs a proof (authorized + changes requested), due soonest', board({ status: 'authorized,changes_requested', sort: 'due', dir: 'asc' }));
-  await time('on the machine, by order number', board({ status: 'in_production,stitched', sort: 'number', dir: 'asc' }));
-  await time('due in the next 14 days, soonest first', board({ dueFrom: TODAY, dueTo: '2026-12-14', sort: 'due', dir: 'asc' }));
+  await time(
+    'needs a proof (authorized + changes requested), due soonest',
+    board({ status: 'authorized,changes_requested', sort: 'due', dir: 'asc' }),
+  );
+  await time(
+    'on the machine, by order number',
+    board({ status: 'in_production,stitched', sort: 'number', dir: 'asc' }),
+  );
+  await time(
+    'due in the next 14 days, soonest first',
+    board({ dueFrom: TODAY, dueTo: '2026-12-14', sort: 'due', dir: 'asc' }),
+  );
   await time('largest totals first', board({ sort: 'total', dir: 'desc' }));
   await time('by status', board({ sort: 'status', dir: 'asc' }));
   await time('search: order number prefix "WB-4512"', board({ q: 'WB-4512' }));
   await time('search: a surname word "thimbleby"', board({ q: 'thimbleby' }));
   await time('search: e-mail start "rosa.pleat"', board({ q: 'rosa.pleat' }));
-  await time('calendar: open orders due in the next 6 weeks', () => listDueOrders(db, { from: TODAY, to: '2027-01-11' }, TODAY));
+  await time('calendar: open orders due in the next 6 weeks', () =>
+    listDueOrders(db, { from: TODAY, to: '2027-01-11' }, TODAY),
+  );
 } finally {
   await db.destroy();
   dropLocalDatabase(DATABASE, settings);

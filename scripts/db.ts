@@ -8,7 +8,11 @@ const settings = localDatabaseSettings();
 
 if (command === 'start') {
   const { started } = await startLocalDatabase(settings);
-  console.log(started ? `MariaDB started on 127.0.0.1:${settings.port}.` : `MariaDB is already running on 127.0.0.1:${settings.port}.`);
+  console.log(
+    started
+      ? `MariaDB started on 127.0.0.1:${settings.port}.`
+      : `MariaDB is already running on 127.0.0.1:${settings.port}.`,
+  );
 } else if (command === 'stop') {
   const { stopped } = await stopLocalDatabase(settings);
   console.log(stopped ? 'MariaDB stopped.' : 'MariaDB was not running.');

@@ -40,20 +40,29 @@ function recordChunkModules(into: Map<string, BundledModule[]>): Plugin {
     generateBundle(_options, bundle) {
       for (const output of Object.values(bundle)) {
         if (output.type !== 'chunk') continue;
-        into.set(output.fileName, Object.entries(output.modules).map(([id, module]) => ({ id, renderedBytes: module.renderedLength })));
+        into.set(
+          output.fileName,
+          Object.entries(output.modules).map(([id, module]) => ({ id, renderedBytes: module.renderedLength })),
+        );
       }
     },
   };
 }
 
 /** The package (or project folder) a module comes from, to tell where the bytes go. */
-const originOf = (id: string) => /node_modules[\\/]((?:@[^\\/]+[\\/])?[^\\/]+)/.exec(id)?.[1] ?? id.replace(root, '').split(/[\\/]/).slice(0, 3).join('/');
+const originOf = (id: string) =>
+  /node_modules[\\/]((?:@[^\\/]+[\\/])?[^\\/]+)/.exec(id)?.[1] ??
+  id.replace(root, '').split(/[\\/]/).slice(0, 3).join('/');
 
 /** The largest contributors to the given chunks, by package or project folder, before minifying. */
 function largestOrigins(modules: BundledModule[], count: number): string[] {
   const byOrigin = new Map<string, number>();
-  for (const module of modules) byOrigin.set(originOf(module.id), (byOrigin.get(originOf(module.id)) ?? 0) + module.renderedBytes);
-  return [...byOrigin].sort((a, b) => b[1] - a[1]).slice(0, count).map(([origin, bytes]) => `${origin} ${kb(bytes)}`);
+  for (const module of modules)
+    byOrigin.set(originOf(module.id), (byOrigin.get(originOf(module.id)) ?? 0) + module.renderedBytes);
+  return [...byOrigin]
+    .sort((a, b) => b[1] - a[1])
+    .slice(0, count)
+    .map(([origin, bytes]) => `${origin} ${kb(bytes)}`);
 }
 
 /** The entry and every chunk reachable from it through static imports, by manifest key. */
@@ -76,12 +85,19 @@ async function main(): Promise<void> {
   const chunkModules = new Map<string, BundledModule[]>();
   const isBuilt = process.argv.includes('--no-build');
   if (!isBuilt) {
-    await build({ configFile: join(root, 'storefront/vite.config.ts'), logLevel: 'warn', plugins: [recordChunkModules(chunkModules)] });
+    await build({
+      configFile: join(root, 'storefront/vite.config.ts'),
+      logLevel: 'warn',
+      plugins: [recordChunkModules(chunkModules)],
+    });
   }
-  if (!existsSync(manifestPath)) throw new Error(`${manifestPath} is missing: run \`npm run build\` first, or drop --no-build.`);
+  if (!existsSync(manifestPath))
+    throw new Error(`${manifestPath} is missing: run \`npm run build\` first, or drop --no-build.`);
   const manifest = JSON.parse(readFileSync(manifestPath, 'utf8')) as Record<string, ManifestChunk>;
 
-  const initial = initialChunks(manifest).map((key) => manifest[key]!.file).filter((file) => file.endsWith('.js'));
+  const initial = initialChunks(manifest)
+    .map((key) => manifest[key]!.file)
+    .filter((file) => file.endsWith('.js'));
   let totalGzip = 0;
   console.log('Catalogue page, initial JavaScript (entry and its static imports):');
   for (const file of initial) {
@@ -90,18 +106,27 @@ async function main(): Promise<void> {
     totalGzip += gzip;
     console.log(`  ${file}  ${kb(bytes.length)} raw, ${kb(gzip)} gzipped`);
   }
-  console.log(`Total: ${kb(totalGzip)} gzipped; budget ${kb(BUDGET_GZIP_BYTES)}: ${totalGzip <= BUDGET_GZIP_BYTES ? 'within' : 'OVER'} budget.`);
+  console.log(
+    `Total: ${kb(totalGzip)} gzipped; budget ${kb(BUDGET_GZIP_BYTES)}: ${totalGzip <= BUDGET_GZIP_BYTES ? 'within' : 'OVER'} budget.`,
+  );
 
   if (isBuilt) {
-    console.log('Canvas library check skipped with --no-build: the chunks\' module lists are only known while building.');
+    console.log(
+      "Canvas library check skipped with --no-build: the chunks' module lists are only known while building.",
+    );
     return;
   }
   const initialModules = initial.flatMap((file) => chunkModules.get(file) ?? []);
   console.log(`Largest parts of it, before minifying: ${largestOrigins(initialModules, 6).join(', ')}.`);
-  const canvasChunks = [...chunkModules].filter(([, modules]) => modules.some((module) => CANVAS_LIBRARY.test(module.id))).map(([file]) => file);
-  if (canvasChunks.length === 0) throw new Error('No chunk holds the canvas library: has the designer stopped using it, or the build changed?');
+  const canvasChunks = [...chunkModules]
+    .filter(([, modules]) => modules.some((module) => CANVAS_LIBRARY.test(module.id)))
+    .map(([file]) => file);
+  if (canvasChunks.length === 0)
+    throw new Error('No chunk holds the canvas library: has the designer stopped using it, or the build changed?');
   const leaked = canvasChunks.filter((file) => initial.includes(file));
-  console.log(`Canvas library (fabric) is in ${canvasChunks.join(', ')}: ${leaked.length === 0 ? 'not loaded by the catalogue page.' : 'LOADED BY THE CATALOGUE PAGE.'}`);
+  console.log(
+    `Canvas library (fabric) is in ${canvasChunks.join(', ')}: ${leaked.length === 0 ? 'not loaded by the catalogue page.' : 'LOADED BY THE CATALOGUE PAGE.'}`,
+  );
 }
 
 await main();

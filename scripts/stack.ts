@@ -50,7 +50,10 @@ export function localStack(profile: StackProfile): LocalStack {
     APP_ORIGIN: appOrigin,
     SESSION_SECRET: `local-${profile}-session-secret-not-for-production`,
     STATIC_DIR: join(projectRoot, 'dist'),
-    OWNER_EMAILS: demoPeople.filter((p) => p.role === 'owner').map((p) => p.email).join(','),
+    OWNER_EMAILS: demoPeople
+      .filter((p) => p.role === 'owner')
+      .map((p) => p.email)
+      .join(','),
     GOOGLE_CLIENT_ID: 'hoopwright-local-client',
     GOOGLE_CLIENT_SECRET: 'hoopwright-local-secret',
     GOOGLE_OAUTH_BASE_URL: `http://127.0.0.1:${ports.google}`,
@@ -68,7 +71,8 @@ export function localStack(profile: StackProfile): LocalStack {
  * own HW_DB_PORT) can run their tests side by side.
  */
 function offsetPorts(ports: Ports, offset: number): Ports {
-  if (!Number.isInteger(offset) || offset < 0 || offset > 20_000) throw new Error('HW_PORT_OFFSET must be a whole number from 0 to 20000.');
+  if (!Number.isInteger(offset) || offset < 0 || offset > 20_000)
+    throw new Error('HW_PORT_OFFSET must be a whole number from 0 to 20000.');
   return Object.fromEntries(Object.entries(ports).map(([name, port]) => [name, port + offset])) as unknown as Ports;
 }
 
@@ -77,7 +81,10 @@ function pickDefined(env: NodeJS.ProcessEnv, keys: string[]): NodeJS.ProcessEnv 
 }
 
 /** Applies pending migrations; seeds the demo data when asked to always, or when the database has no users yet. */
-export async function migrateAndSeed(env: NodeJS.ProcessEnv, seed: 'always' | 'when-empty'): Promise<{ migrated: number; seeded: boolean }> {
+export async function migrateAndSeed(
+  env: NodeJS.ProcessEnv,
+  seed: 'always' | 'when-empty',
+): Promise<{ migrated: number; seeded: boolean }> {
   const db = openDatabase(loadDatabaseConfig({ ...process.env, ...env }));
   try {
     const [, applied] = await db.migrate.latest();
@@ -98,7 +105,13 @@ export function startLocalFakes(stack: LocalStack) {
     stripePort: stack.ports.stripe,
     smtpPort: stack.ports.smtp,
     smtpHttpPort: stack.ports.smtpHttp,
-    identities: demoPeople.map(({ sub, email, name, givenName, familyName }) => ({ sub, email, name, givenName, familyName })),
+    identities: demoPeople.map(({ sub, email, name, givenName, familyName }) => ({
+      sub,
+      email,
+      name,
+      givenName,
+      familyName,
+    })),
     stripeApiKey: stack.env.STRIPE_SECRET_KEY!,
     stripeWebhookSecret: stack.env.STRIPE_WEBHOOK_SECRET!,
     stripeWebhookUrl: `${stack.appOrigin}/api/webhooks/stripe`,

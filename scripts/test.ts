@@ -22,7 +22,11 @@ interface Tally {
 function readVitestTally(file: string): Tally {
   if (!existsSync(file)) return { passed: 0, failed: 1, skipped: 0 };
   const report = JSON.parse(readFileSync(file, 'utf8'));
-  return { passed: report.numPassedTests, failed: report.numFailedTests, skipped: report.numPendingTests + report.numTodoTests };
+  return {
+    passed: report.numPassedTests,
+    failed: report.numFailedTests,
+    skipped: report.numPendingTests + report.numTodoTests,
+  };
 }
 
 function readPlaywrightTally(file: string): Tally {
@@ -39,7 +43,11 @@ try {
   await migrateAndSeed(stack.env, 'always');
 
   const vitestReport = join(reportDir, 'vitest.json');
-  const vitestCode = await run('vitest', ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`], stack.env);
+  const vitestCode = await run(
+    'vitest',
+    ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestReport}`],
+    stack.env,
+  );
 
   await buildApps();
   await migrateAndSeed(stack.env, 'always');
@@ -47,15 +55,25 @@ try {
   const playwrightReport = join(reportDir, 'playwright.json');
   let playwrightCode: number;
   try {
-    playwrightCode = await run('playwright', ['test'], { ...stack.env, PLAYWRIGHT_JSON_OUTPUT_NAME: playwrightReport, FAKE_SMTP_HTTP_URL: fakes.urls.smtpHttp });
+    playwrightCode = await run('playwright', ['test'], {
+      ...stack.env,
+      PLAYWRIGHT_JSON_OUTPUT_NAME: playwrightReport,
+      FAKE_SMTP_HTTP_URL: fakes.urls.smtpHttp,
+    });
   } finally {
     await fakes.close();
   }
 
   const unit = readVitestTally(vitestReport);
   const browser = readPlaywrightTally(playwrightReport);
-  const total = { passed: unit.passed + browser.passed, failed: unit.failed + browser.failed, skipped: unit.skipped + browser.skipped };
-  console.log(`\nVitest: ${unit.passed} passed, ${unit.failed} failed · Playwright: ${browser.passed} passed, ${browser.failed} failed`);
+  const total = {
+    passed: unit.passed + browser.passed,
+    failed: unit.failed + browser.failed,
+    skipped: unit.skipped + browser.skipped,
+  };
+  console.log(
+    `\nVitest: ${unit.passed} passed, ${unit.failed} failed · Playwright: ${browser.passed} passed, ${browser.failed} failed`,
+  );
   console.log(`${total.passed} passed, ${total.failed} failed, ${total.skipped} skipped`);
   exitCode = vitestCode === 0 && playwrightCode === 0 && total.failed === 0 ? 0 : 1;
 } finally {

@@ -35,7 +35,9 @@ export const seededTables = [
 export async function seed(knex: Knex): Promise<void> {
   const [{ n }] = await knex('users').whereNot('email', 'like', '%.test').count({ n: '*' });
   if (Number(n) > 0) {
-    throw new Error(`This database has ${n} real customer or staff accounts; the demo seeds would erase them, so nothing was changed.`);
+    throw new Error(
+      `This database has ${n} real customer or staff accounts; the demo seeds would erase them, so nothing was changed.`,
+    );
   }
   for (const table of seededTables) await knex(table).del();
   // Rows the app adds after seeding then get the same ids on every run (InnoDB moves the counter past the

@@ -19,8 +19,15 @@ export async function seed(knex: Knex): Promise<void> {
     const spec = quoteSpecs.find((candidate) => candidate.id === order.quoteId);
     if (!spec) throw new Error(`Seed data: order ${order.number} names a missing quote`);
     const quote = buildQuote(spec);
-    if (!quote.customer || quote.designId === null) throw new Error(`Seed data: order ${order.number} needs a saved design`);
-    const totals = quote.row as { subtotal_cents: number; tax_cents: number; total_cents: number; currency: string; quantity: number };
+    if (!quote.customer || quote.designId === null)
+      throw new Error(`Seed data: order ${order.number} needs a saved design`);
+    const totals = quote.row as {
+      subtotal_cents: number;
+      tax_cents: number;
+      total_cents: number;
+      currency: string;
+      quantity: number;
+    };
     const history = replayOrder({
       order,
       customer: quote.customer,

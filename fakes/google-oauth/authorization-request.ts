@@ -8,7 +8,9 @@ function isHttpUrl(value: string): boolean {
 export const authorizationRequestSchema = z.object({
   response_type: z.string({ error: 'response_type is missing.' }),
   client_id: z.string({ error: 'client_id is missing.' }).min(1, 'client_id is empty.'),
-  redirect_uri: z.string({ error: 'redirect_uri is missing.' }).refine(isHttpUrl, 'redirect_uri must be an http(s) URL.'),
+  redirect_uri: z
+    .string({ error: 'redirect_uri is missing.' })
+    .refine(isHttpUrl, 'redirect_uri must be an http(s) URL.'),
   scope: z.string().default(''),
   state: z.string().optional(),
 });
@@ -17,7 +19,10 @@ export type AuthorizationRequest = z.infer<typeof authorizationRequestSchema>;
 
 /** A person typed in on the page instead of picking a listed identity. */
 export const typedIdentitySchema = z.object({
-  email: z.string({ error: 'Enter an e-mail address.' }).trim().pipe(z.email('Enter a full e-mail address, such as maya@example.test.')),
+  email: z
+    .string({ error: 'Enter an e-mail address.' })
+    .trim()
+    .pipe(z.email('Enter a full e-mail address, such as maya@example.test.')),
   name: z.string().trim().max(100, 'Keep the name under 100 characters.').default(''),
 });
 

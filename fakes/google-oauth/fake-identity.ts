@@ -21,7 +21,10 @@ export const fakeIdentityListSchema = z
       familyName: z.string(),
     }),
   )
-  .refine((people) => new Set(people.map((person) => person.sub)).size === people.length, 'identity subs must be unique');
+  .refine(
+    (people) => new Set(people.map((person) => person.sub)).size === people.length,
+    'identity subs must be unique',
+  );
 
 function nameFromEmail(email: string): string {
   const localPart = email.split('@')[0];
@@ -39,7 +42,9 @@ function nameFromEmail(email: string): string {
 export function identityForEmail(email: string, typedName: string): FakeIdentity {
   const normalisedEmail = email.trim().toLowerCase();
   const digest = createHash('sha256').update(normalisedEmail).digest('hex');
-  const sub = `1${BigInt(`0x${digest.slice(0, 16)}`).toString().padStart(20, '0')}`;
+  const sub = `1${BigInt(`0x${digest.slice(0, 16)}`)
+    .toString()
+    .padStart(20, '0')}`;
   const name = typedName.trim().replace(/\s+/g, ' ') || nameFromEmail(normalisedEmail);
   const [givenName, ...familyNames] = name.split(' ');
   return { sub, email: normalisedEmail, name, givenName, familyName: familyNames.join(' ') };

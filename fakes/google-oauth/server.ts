@@ -25,7 +25,10 @@ const tokenRequestSchema = z.object({
 function readAuthorizationRequest(params: unknown, res: Response): AuthorizationRequest | undefined {
   const parsed = authorizationRequestSchema.safeParse(params);
   if (!parsed.success) {
-    sendAuthorizeErrorPage(res, parsed.error.issues.map((issue) => issue.message));
+    sendAuthorizeErrorPage(
+      res,
+      parsed.error.issues.map((issue) => issue.message),
+    );
     return undefined;
   }
   if (parsed.data.response_type !== 'code') {
@@ -73,19 +76,26 @@ export async function startGoogleOAuthFake(opts: {
     if (typeof chosenSub === 'string') {
       identity = identities.find((person) => person.sub === chosenSub);
       if (!identity) {
-        sendAuthorizePage(res, { request, identities, alert: 'That person is no longer on the list. Pick another.' }, 400);
+        sendAuthorizePage(
+          res,
+          { request, identities, alert: 'That person is no longer on the list. Pick another.' },
+          400,
+        );
         return;
       }
     } else {
       const typed = typedIdentitySchema.safeParse(req.body);
       if (!typed.success) {
-        const fieldErrors = Object.fromEntries(typed.error.issues.map((issue) => [String(issue.path[0]), issue.message]));
+        const fieldErrors = Object.fromEntries(
+          typed.error.issues.map((issue) => [String(issue.path[0]), issue.message]),
+        );
         const echo = { email: String(req.body.email ?? ''), name: String(req.body.name ?? '') };
         sendAuthorizePage(res, { request, identities, typed: echo, fieldErrors }, 400);
         return;
       }
       const email = typed.data.email.toLowerCase();
-      identity = identities.find((person) => person.email.toLowerCase() === email) ?? identityForEmail(email, typed.data.name);
+      identity =
+        identities.find((person) => person.email.toLowerCase() === email) ?? identityForEmail(email, typed.data.name);
     }
     const code = grants.issueCode(identity, request.client_id, request.redirect_uri);
     res.redirect(302, clientRedirectUrl(request, { code }));
@@ -95,11 +105,18 @@ export async function startGoogleOAuthFake(opts: {
   app.post('/token', (req, res) => {
     const body = tokenRequestSchema.safeParse(req.body ?? {});
     if (!body.success) return tokenError(res, 400, 'invalid_request', 'Every parameter must be a single string.');
-    const { grant_type: grantType, code, redirect_uri: redirectUri, client_id: clientId, client_secret: secret } = body.data;
+    const {
+      grant_type: grantType,
+      code,
+      redirect_uri: redirectUri,
+      client_id: clientId,
+      client_secret: secret,
+    } = body.data;
     if (grantType !== 'authorization_code') {
       return tokenError(res, 400, 'unsupported_grant_type', 'Only grant_type=authorization_code is supported.');
     }
-    if (!clientId || !secret) return tokenError(res, 401, 'invalid_client', 'client_id and client_secret are required.');
+    if (!clientId || !secret)
+      return tokenError(res, 401, 'invalid_client', 'client_id and client_secret are required.');
     if (!code) return tokenError(res, 400, 'invalid_request', 'code is missing.');
     const redemption = grants.redeemCode(code, clientId, redirectUri);
     if (!redemption.ok) return tokenError(res, 400, 'invalid_grant', redemption.description);
@@ -115,7 +132,9 @@ export async function startGoogleOAuthFake(opts: {
       res
         .status(401)
         .set('WWW-Authenticate', 'Bearer error="invalid_token"')
-        .json({ error: { code: 401, message: 'Request had invalid authentication credentials.', status: 'UNAUTHENTICATED' } });
+        .json({
+          error: { code: 401, message: 'Request had invalid authentication credentials.', status: 'UNAUTHENTICATED' },
+        });
       return;
     }
     res.json(toUserinfo(identity));

@@ -16,7 +16,11 @@ export function createMailHttpApp(mailbox: Mailbox): Express {
       return;
     }
     const { to } = query.data;
-    res.json(to ? mailbox.messages.filter((mail) => mail.envelope.to.some((address) => address.toLowerCase() === to)) : mailbox.messages);
+    res.json(
+      to
+        ? mailbox.messages.filter((mail) => mail.envelope.to.some((address) => address.toLowerCase() === to))
+        : mailbox.messages,
+    );
   });
 
   app.get('/messages/:id', (req, res) => {

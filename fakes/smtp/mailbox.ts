@@ -53,7 +53,10 @@ export function createMailbox(): Mailbox {
         })),
       };
       messages.unshift(mail);
-      contents.set(mail.id, parsed.attachments.map((attachment) => attachment.content));
+      contents.set(
+        mail.id,
+        parsed.attachments.map((attachment) => attachment.content),
+      );
       return mail;
     },
     find: (id) => messages.find((mail) => mail.id === id),

@@ -3,7 +3,16 @@ import { z } from 'zod';
 import { resourceMissing } from './api-error.ts';
 import type { FakeStripeContext } from './fake-stripe-context.ts';
 import type { CheckoutSession, CheckoutSessionRecord } from './fake-stripe-state.ts';
-import { currency, expand, expandFields, formInteger, httpUrl, metadata, parseParams, positiveAmount } from './form-params.ts';
+import {
+  currency,
+  expand,
+  expandFields,
+  formInteger,
+  httpUrl,
+  metadata,
+  parseParams,
+  positiveAmount,
+} from './form-params.ts';
 
 // Stripe's ceiling for a single card payment in two-decimal currencies (999,999.99).
 const MAX_AMOUNT = 99_999_999;

@@ -64,7 +64,12 @@ export function completeCheckout(ctx: FakeStripeContext, record: CheckoutSession
   ctx.state.charges.set(charge.id, charge);
   ctx.state.paymentIntents.set(intent.id, intent);
   // With manual capture nothing has been collected yet, so the session reports `unpaid`: read the PaymentIntent.
-  Object.assign(session, { status: 'complete', payment_status: isManual ? 'unpaid' : 'paid', payment_intent: intent.id, url: null });
+  Object.assign(session, {
+    status: 'complete',
+    payment_status: isManual ? 'unpaid' : 'paid',
+    payment_intent: intent.id,
+    url: null,
+  });
   ctx.emit('checkout.session.completed', session);
   ctx.emit(isManual ? 'payment_intent.amount_capturable_updated' : 'payment_intent.succeeded', intent);
 }

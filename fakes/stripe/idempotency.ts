@@ -27,7 +27,8 @@ export function honourIdempotencyKeys(store: Map<string, IdempotentResponse>): R
     }
     const sendJson = res.json.bind(res);
     res.json = (body: unknown) => {
-      if (res.statusCode < 400) store.set(key, { path, paramsFingerprint, statusCode: res.statusCode, body: JSON.stringify(body) });
+      if (res.statusCode < 400)
+        store.set(key, { path, paramsFingerprint, statusCode: res.statusCode, body: JSON.stringify(body) });
       return sendJson(body);
     };
     next();

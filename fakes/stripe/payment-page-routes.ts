@@ -47,7 +47,11 @@ export function createPaymentPageRouter(ctx: FakeStripeContext): Router {
     const check = checkTestCard(form, ctx.nowMs());
     if (!check.ok) {
       if (check.decline) announceDecline(ctx, record, check.decline);
-      sendPaymentPage(res, { record, form, fieldErrors: check.fieldErrors, decline: check.decline }, check.decline ? 402 : 400);
+      sendPaymentPage(
+        res,
+        { record, form, fieldErrors: check.fieldErrors, decline: check.decline },
+        check.decline ? 402 : 400,
+      );
       return;
     }
     completeCheckout(ctx, record, check.card);

@@ -34,7 +34,10 @@ export function createRefundsRouter(ctx: FakeStripeContext): Router {
       const charge = ctx.state.charges.get(params.charge);
       if (!charge) throw resourceMissing('charge', params.charge);
       if (!charge.captured) {
-        throw invalidRequest(`Charge ${charge.id} has not been captured.`, { code: 'charge_not_refundable', param: 'charge' });
+        throw invalidRequest(`Charge ${charge.id} has not been captured.`, {
+          code: 'charge_not_refundable',
+          param: 'charge',
+        });
       }
       return charge;
     }

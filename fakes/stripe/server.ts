@@ -3,7 +3,12 @@ import { DEFAULT_FAKE_HOST, isLoopbackHost, serveHttpOnLoopback } from '../loopb
 import { createApiRouter } from './api-router.ts';
 import { createFakeControlRouter } from './fake-control-routes.ts';
 import { createIdSequence, type FakeStripeContext } from './fake-stripe-context.ts';
-import { createFakeStripeState, STRIPE_API_VERSION, type FakeStripeState, type StripeEvent } from './fake-stripe-state.ts';
+import {
+  createFakeStripeState,
+  STRIPE_API_VERSION,
+  type FakeStripeState,
+  type StripeEvent,
+} from './fake-stripe-state.ts';
 import { createPaymentPageRouter } from './payment-page-routes.ts';
 import { createWebhookDispatcher } from './webhook-dispatcher.ts';
 

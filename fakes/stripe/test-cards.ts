@@ -17,8 +17,7 @@ export interface AcceptedCard {
 }
 
 export type CardCheck =
-  | { ok: true; card: AcceptedCard }
-  | { ok: false; fieldErrors: CardFieldErrors; decline?: string };
+  { ok: true; card: AcceptedCard } | { ok: false; fieldErrors: CardFieldErrors; decline?: string };
 
 const USE_THE_TEST_CARD = 'Use 4242 4242 4242 4242 with any future date and any three digits.';
 const NEEDS_VERIFICATION = `This test card asks for an extra verification step, which this local page does not imitate. ${USE_THE_TEST_CARD}`;
@@ -77,8 +76,13 @@ export function checkTestCard(form: CardForm, nowMs: number): CardCheck {
 
   const digits = form.card_number.replace(/\s+/g, '');
   if (digits !== SUCCEEDING_TEST_CARD) {
-    const decline = TEST_CARD_DECLINES[digits] ?? `Your card was declined. This local page takes test cards only. ${USE_THE_TEST_CARD}`;
+    const decline =
+      TEST_CARD_DECLINES[digits] ??
+      `Your card was declined. This local page takes test cards only. ${USE_THE_TEST_CARD}`;
     return { ok: false, fieldErrors, decline };
   }
-  return { ok: true, card: { brand: 'visa', last4: digits.slice(-4), expMonth: expiry.month, expYear: expiry.year, holderName } };
+  return {
+    ok: true,
+    card: { brand: 'visa', last4: digits.slice(-4), expMonth: expiry.month, expYear: expiry.year, holderName },
+  };
 }

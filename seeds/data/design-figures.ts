@@ -41,7 +41,20 @@ const seededCatalogue: Omit<QuoteCatalogue, 'garment' | 'size'> = {
   motifs: new Map(
     motifs.map(({ slug, name, kind, widthMm, heightMm, run, satin, fill, minScalePct, maxScalePct, threadCodes }) => [
       slug,
-      { slug, name, kind, widthMm, heightMm, gapMm: borderGapMm, run, satin, fill, colourCount: threadCodes.length, minScalePct, maxScalePct },
+      {
+        slug,
+        name,
+        kind,
+        widthMm,
+        heightMm,
+        gapMm: borderGapMm,
+        run,
+        satin,
+        fill,
+        colourCount: threadCodes.length,
+        minScalePct,
+        maxScalePct,
+      },
     ]),
   ),
   fonts: new Map(
@@ -58,21 +71,31 @@ const seededCatalogue: Omit<QuoteCatalogue, 'garment' | 'size'> = {
         },
       ]),
   ),
-  hoops: hoops.map((hoop) => ({ slug: hoop.slug, name: hoop.name, fieldWidthMm: hoop.field_width_mm, fieldHeightMm: hoop.field_height_mm })),
+  hoops: hoops.map((hoop) => ({
+    slug: hoop.slug,
+    name: hoop.name,
+    fieldWidthMm: hoop.field_width_mm,
+    fieldHeightMm: hoop.field_height_mm,
+  })),
   machine: {
     stitchesPerMinute: shopSettings.machine_stitches_per_minute,
     minutesPerColorChange: shopSettings.minutes_per_colour_change,
     minutesPerHooping: shopSettings.minutes_per_hooping,
     setupMinutes: shopSettings.setup_minutes,
   },
-  artworkUploads: new Map(artworkUploads.map((upload) => [upload.id, { svgText: readSeedFile('uploads', upload.file) }])),
+  artworkUploads: new Map(
+    artworkUploads.map((upload) => [upload.id, { svgText: readSeedFile('uploads', upload.file) }]),
+  ),
 };
 
 const round = (value: number, places: number) => Number(value.toFixed(places));
 
 /** The item's centre on the mockup at this size, mm. */
 function centreIn(zone: PlacementZone, at: [number, number] = [50, 50]) {
-  return { centerXMm: round(zone.xMm + (zone.widthMm * at[0]) / 100, 2), centerYMm: round(zone.yMm + (zone.heightMm * at[1]) / 100, 2) };
+  return {
+    centerXMm: round(zone.xMm + (zone.widthMm * at[0]) / 100, 2),
+    centerYMm: round(zone.yMm + (zone.heightMm * at[1]) / 100, 2),
+  };
 }
 
 /** The placement as the customer laid it out, before the server fits any border. */
@@ -81,16 +104,39 @@ function draftPlacement(spec: PlacementSpec, zones: PlacementZone[]): DesignPlac
     const zone = find(zones, (candidate) => candidate.code === 'hem', 'hem zone');
     const motif = find(motifs, (candidate) => candidate.slug === spec.motif, `motif ${spec.motif}`);
     if (zone.hemOffsetMm === undefined) throw new Error('Seed data: the hem zone has no hem offset');
-    return { id: spec.id, kind: 'border', zone: 'hem', motif: spec.motif, run: spec.run, hemOffsetMm: zone.hemOffsetMm, threads: spec.threads ?? motif.threadCodes };
+    return {
+      id: spec.id,
+      kind: 'border',
+      zone: 'hem',
+      motif: spec.motif,
+      run: spec.run,
+      hemOffsetMm: zone.hemOffsetMm,
+      threads: spec.threads ?? motif.threadCodes,
+    };
   }
   const zone = find(zones, (candidate) => candidate.code === spec.zone, `zone ${spec.zone}`);
   const position = { zone: spec.zone, ...centreIn(zone, spec.at), rotationDeg: 0 };
   if (spec.kind === 'motif') {
     const motif = find(motifs, (candidate) => candidate.slug === spec.motif, `motif ${spec.motif}`);
-    return { id: spec.id, kind: 'motif', ...position, motif: spec.motif, scalePct: spec.scalePct, threads: spec.threads ?? motif.threadCodes };
+    return {
+      id: spec.id,
+      kind: 'motif',
+      ...position,
+      motif: spec.motif,
+      scalePct: spec.scalePct,
+      threads: spec.threads ?? motif.threadCodes,
+    };
   }
   if (spec.kind === 'lettering') {
-    return { id: spec.id, kind: 'lettering', ...position, text: spec.text, font: spec.font, letterHeightMm: spec.letterHeightMm, thread: spec.thread };
+    return {
+      id: spec.id,
+      kind: 'lettering',
+      ...position,
+      text: spec.text,
+      font: spec.font,
+      letterHeightMm: spec.letterHeightMm,
+      thread: spec.thread,
+    };
   }
   return { id: spec.id, kind: 'artwork', ...position, artworkUploadId: spec.artworkUploadId, widthMm: spec.widthMm };
 }
@@ -113,14 +159,37 @@ export function designFigures(spec: DesignChoice): DesignFigures {
   const zones = scaleZones(garment.zones, mockupScale(garment, size));
   const catalogue: QuoteCatalogue = {
     ...seededCatalogue,
-    garment: { id: garment.id, slug: garment.slug, name: garment.name, fabricType: garment.fabricType, isNapped: garment.isNapped, minAgeMonths: garment.ageMonths[0] },
-    size: { id: size.id, code: size.code, label: size.label, hemFrontMm: size.hem?.frontMm ?? null, hemCircumferenceMm: size.hem?.circumferenceMm ?? null, zones },
+    garment: {
+      id: garment.id,
+      slug: garment.slug,
+      name: garment.name,
+      fabricType: garment.fabricType,
+      isNapped: garment.isNapped,
+      minAgeMonths: garment.ageMonths[0],
+    },
+    size: {
+      id: size.id,
+      code: size.code,
+      label: size.label,
+      hemFrontMm: size.hem?.frontMm ?? null,
+      hemCircumferenceMm: size.hem?.circumferenceMm ?? null,
+      zones,
+    },
   };
-  const draft: DesignDocument = { version: 1, placements: spec.placements.map((placement) => draftPlacement(placement, zones)) };
+  const draft: DesignDocument = {
+    version: 1,
+    placements: spec.placements.map((placement) => draftPlacement(placement, zones)),
+  };
   const figured = figureDesign(catalogue, draft);
   if (!figured.ok) throw new Error(`Seed data: ${spec.garment} ${spec.size}: ${figured.error.message}`);
-  const restored = restoreDesign({ version: 1, placements: draft.placements.map((placement, i) => withFit(placement, figured.value.placements[i])) });
-  if (!restored.success) throw new Error(`Seed data: ${spec.garment} ${spec.size}: the design document is not valid: ${restored.error.message}`);
+  const restored = restoreDesign({
+    version: 1,
+    placements: draft.placements.map((placement, i) => withFit(placement, figured.value.placements[i])),
+  });
+  if (!restored.success)
+    throw new Error(
+      `Seed data: ${spec.garment} ${spec.size}: the design document is not valid: ${restored.error.message}`,
+    );
   return {
     garment,
     size,

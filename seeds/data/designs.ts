@@ -7,7 +7,16 @@ type AtPct = [number, number];
 export type PlacementSpec =
   | { id: string; kind: 'border'; motif: string; run: 'front' | 'circumference'; threads?: string[] }
   | { id: string; kind: 'motif'; zone: ZoneCode; motif: string; scalePct: number; at?: AtPct; threads?: string[] }
-  | { id: string; kind: 'lettering'; zone: ZoneCode; text: string; font: string; letterHeightMm: number; thread: string; at?: AtPct }
+  | {
+      id: string;
+      kind: 'lettering';
+      zone: ZoneCode;
+      text: string;
+      font: string;
+      letterHeightMm: number;
+      thread: string;
+      at?: AtPct;
+    }
   | { id: string; kind: 'artwork'; zone: ZoneCode; artworkUploadId: number; widthMm: number; at?: AtPct };
 
 export interface DesignSpec {
@@ -46,7 +55,15 @@ export const designs: DesignSpec[] = [
     name: "Clara's birthday dress",
     placements: [
       { id: 'hem', kind: 'border', motif: 'daisy-chain', run: 'circumference' },
-      { id: 'name', kind: 'lettering', zone: 'chest', text: 'Clara', font: 'breezy-script', letterHeightMm: 20, thread: 'WB-110' },
+      {
+        id: 'name',
+        kind: 'lettering',
+        zone: 'chest',
+        text: 'Clara',
+        font: 'breezy-script',
+        letterHeightMm: 20,
+        thread: 'WB-110',
+      },
     ],
     createdAt: '2026-11-26T02:10',
     updatedAt: '2026-11-27T01:45',
@@ -71,7 +88,16 @@ export const designs: DesignSpec[] = [
     name: "Mae's bunny bib",
     placements: [
       { id: 'bunny', kind: 'motif', zone: 'bib_centre', motif: 'sitting-bunny', scalePct: 100, at: [50, 38] },
-      { id: 'name', kind: 'lettering', zone: 'bib_centre', text: 'Mae', font: 'rounded-block', letterHeightMm: 14, thread: 'WB-108', at: [50, 88] },
+      {
+        id: 'name',
+        kind: 'lettering',
+        zone: 'bib_centre',
+        text: 'Mae',
+        font: 'rounded-block',
+        letterHeightMm: 14,
+        thread: 'WB-108',
+        at: [50, 88],
+      },
     ],
     createdAt: '2026-11-08T21:30',
     updatedAt: '2026-11-09T14:00',
@@ -93,7 +119,7 @@ export const designs: DesignSpec[] = [
     garment: 'bubble-romper',
     size: '12m',
     colour: 'Sky Wash',
-    name: "Sailboat rompers for the twins",
+    name: 'Sailboat rompers for the twins',
     placements: [{ id: 'hem', kind: 'border', motif: 'sailboats', run: 'front' }],
     createdAt: '2026-11-15T17:00',
     updatedAt: '2026-11-16T13:30',
@@ -106,8 +132,22 @@ export const designs: DesignSpec[] = [
     colour: 'Christening White',
     name: "Eliza's christening bishop",
     placements: [
-      { id: 'hem', kind: 'border', motif: 'daisy-chain', run: 'circumference', threads: ['WB-121', 'WB-101', 'WB-129'] },
-      { id: 'monogram', kind: 'lettering', zone: 'chest', text: 'EOK', font: 'heirloom-serif', letterHeightMm: 22, thread: 'WB-125' },
+      {
+        id: 'hem',
+        kind: 'border',
+        motif: 'daisy-chain',
+        run: 'circumference',
+        threads: ['WB-121', 'WB-101', 'WB-129'],
+      },
+      {
+        id: 'monogram',
+        kind: 'lettering',
+        zone: 'chest',
+        text: 'EOK',
+        font: 'heirloom-serif',
+        letterHeightMm: 22,
+        thread: 'WB-125',
+      },
     ],
     createdAt: '2026-11-20T15:40',
     updatedAt: '2026-11-22T14:00',
@@ -153,7 +193,15 @@ export const designs: DesignSpec[] = [
     colour: 'Cornflower',
     name: "Noah's bonnet",
     placements: [
-      { id: 'name', kind: 'lettering', zone: 'brim', text: 'Noah', font: 'rounded-block', letterHeightMm: 16, thread: 'WB-116' },
+      {
+        id: 'name',
+        kind: 'lettering',
+        zone: 'brim',
+        text: 'Noah',
+        font: 'rounded-block',
+        letterHeightMm: 16,
+        thread: 'WB-116',
+      },
     ],
     createdAt: '2026-11-27T22:00',
     updatedAt: '2026-11-27T22:35',

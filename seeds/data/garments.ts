@@ -45,7 +45,8 @@ export const garments: SeedGarment[] = [
     slug: 'smocked-yoke-dress',
     name: 'Smocked yoke dress',
     kind: 'dress',
-    description: 'Cotton batiste with a hand-smocked yoke, puff sleeves and a full gathered skirt: made for a hem border.',
+    description:
+      'Cotton batiste with a hand-smocked yoke, puff sleeves and a full gathered skirt: made for a hem border.',
     fabricType: 'woven',
     isNapped: false,
     ageMonths: [6, 48],
@@ -72,7 +73,8 @@ export const garments: SeedGarment[] = [
     slug: 'bubble-romper',
     name: 'Knit bubble romper',
     kind: 'romper',
-    description: 'Soft cotton interlock with short sleeves and a snap crotch; the border runs round the body above the leg band.',
+    description:
+      'Soft cotton interlock with short sleeves and a snap crotch; the border runs round the body above the leg band.',
     fabricType: 'knit',
     isNapped: false,
     ageMonths: [6, 24],
@@ -96,14 +98,18 @@ export const garments: SeedGarment[] = [
     slug: 'bishop-dress',
     name: 'Bishop dress',
     kind: 'bishop_dress',
-    description: 'Raglan-sleeved cotton lawn gathered at the neck with smocking rows; a classic for christenings and photos.',
+    description:
+      'Raglan-sleeved cotton lawn gathered at the neck with smocking rows; a classic for christenings and photos.',
     fabricType: 'woven',
     isNapped: false,
     ageMonths: [6, 36],
     mockupFile: 'bishop-dress.svg',
     referenceSizeCode: '12m',
     // The full skirt is drawn from the front, so its hem curves: the ends rise 10 mm above the middle (bishop-dress.svg).
-    zones: [{ ...hem(40, 350, 380), hemCurveMm: 10 }, { code: 'chest', label: 'Below the smocking', xMm: 180, yMm: 90, widthMm: 100, heightMm: 50 }],
+    zones: [
+      { ...hem(40, 350, 380), hemCurveMm: 10 },
+      { code: 'chest', label: 'Below the smocking', xMm: 180, yMm: 90, widthMm: 100, heightMm: 50 },
+    ],
     sizes: [
       { id: 301, code: '6m', label: '6 months', hem: { frontMm: 346, circumferenceMm: 692 } },
       { id: 302, code: '12m', label: '12 months', hem: { frontMm: 380, circumferenceMm: 760 } },

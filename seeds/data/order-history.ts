@@ -71,7 +71,12 @@ export function replayOrder(context: OrderContext): OrderHistory {
   let refunds = 0;
 
   /** Records an event; a step with a status in nextStatus also moves the order. */
-  const event = (type: string, when: Date, actor: number | null, extra: { note?: string; payload?: object; to?: OrderStatus } = {}) => {
+  const event = (
+    type: string,
+    when: Date,
+    actor: number | null,
+    extra: { note?: string; payload?: object; to?: OrderStatus } = {},
+  ) => {
     const from = status;
     const to = extra.to ?? nextStatus[type as OrderStep['type']];
     if (to) status = to;
@@ -151,7 +156,10 @@ export function replayOrder(context: OrderContext): OrderHistory {
       }
       case 'changes_requested': {
         const version = answerProof(when, 'changes_requested', step.pins);
-        event(step.type, when, userIds[customer], { note: step.note, payload: { proofVersion: version, pinCount: step.pins.length } });
+        event(step.type, when, userIds[customer], {
+          note: step.note,
+          payload: { proofVersion: version, pinCount: step.pins.length },
+        });
         break;
       }
       case 'proof_approved': {
@@ -171,7 +179,9 @@ export function replayOrder(context: OrderContext): OrderHistory {
         event(step.type, when, userIds[step.by]);
         break;
       case 'shipped':
-        event(step.type, when, userIds[step.by], { payload: { carrier: 'Parcel post', trackingNumber: step.trackingNumber } });
+        event(step.type, when, userIds[step.by], {
+          payload: { carrier: 'Parcel post', trackingNumber: step.trackingNumber },
+        });
         mail(when, 'order_shipped', `${order.number} is on its way`);
         break;
       case 'refunded': {
@@ -181,7 +191,11 @@ export function replayOrder(context: OrderContext): OrderHistory {
         paymentStatus = refundedCents === totalCents ? 'refunded' : 'partially_refunded';
         // A full refund closes the order; a partial one (goodwill, say) leaves it where it was.
         const to = paymentStatus === 'refunded' ? 'refunded' : undefined;
-        event(step.type, when, userIds[step.by], { note: step.note, payload: { refundId: `re_seed_${ref}_${refunds}`, amountCents }, ...(to && { to }) });
+        event(step.type, when, userIds[step.by], {
+          note: step.note,
+          payload: { refundId: `re_seed_${ref}_${refunds}`, amountCents },
+          ...(to && { to }),
+        });
         break;
       }
       case 'cancelled':

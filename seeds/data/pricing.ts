@@ -16,7 +16,8 @@ const garmentBaseCents: PricingRuleSet['garmentBaseCents'] = {
 // A garment or size added to the seeds without a price would only fail later, when a quote for it is priced.
 for (const garment of garments) {
   for (const size of garment.sizes) {
-    if (garmentBaseCents[garment.slug]?.[size.code] === undefined) throw new Error(`Seed data: no blank price for ${garment.slug} in size ${size.code}`);
+    if (garmentBaseCents[garment.slug]?.[size.code] === undefined)
+      throw new Error(`Seed data: no blank price for ${garment.slug} in size ${size.code}`);
   }
 }
 

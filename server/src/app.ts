@@ -116,8 +116,17 @@ export function createApp(deps: AppDeps): Express {
   app.use(securityHeaders(config));
 
   // Webhooks authenticate by signature, not by session or origin, and need the raw body.
-  const webhooks = createPaymentWebhookService({ db, stripe: deps.stripe, mailer: deps.mailer, appOrigin: config.appOrigin, now: deps.now });
-  app.use('/api/webhooks/stripe', createPaymentWebhookRouter({ stripe: deps.stripe, webhookSecret: config.stripe.webhookSecret, webhooks }));
+  const webhooks = createPaymentWebhookService({
+    db,
+    stripe: deps.stripe,
+    mailer: deps.mailer,
+    appOrigin: config.appOrigin,
+    now: deps.now,
+  });
+  app.use(
+    '/api/webhooks/stripe',
+    createPaymentWebhookRouter({ stripe: deps.stripe, webhookSecret: config.stripe.webhookSecret, webhooks }),
+  );
 
   app.use('/api', requireSameOrigin(config.appOrigin));
   app.use('/api', express.json({ limit: '1mb' }));
@@ -138,17 +147,46 @@ export function createApp(deps: AppDeps): Express {
   const storedQuotes = createStoredQuoteService({ db, quotes, now: deps.now });
   app.use('/api/quotes', createQuotesRouter({ quotes, storedQuotes }));
   const sharing = createDesignSharingService({ db });
-  app.use('/api/designs', createDesignsRouter({ designs: createDesignService({ db, quotes, now: deps.now }), sharing }));
+  app.use(
+    '/api/designs',
+    createDesignsRouter({ designs: createDesignService({ db, quotes, now: deps.now }), sharing }),
+  );
   app.use('/api/shared-designs', createSharedDesignsRouter({ sharing }));
-  app.use('/api/orders', createOrdersRouter({
-    checkout: createCheckoutService({ db, stripe: deps.stripe, mailer: deps.mailer, storedQuotes, appOrigin: config.appOrigin, now: deps.now }),
-    customerOrders: createCustomerOrderService({ db, mailer: deps.mailer, appOrigin: config.appOrigin, now: deps.now }),
-  }));
+  app.use(
+    '/api/orders',
+    createOrdersRouter({
+      checkout: createCheckoutService({
+        db,
+        stripe: deps.stripe,
+        mailer: deps.mailer,
+        storedQuotes,
+        appOrigin: config.appOrigin,
+        now: deps.now,
+      }),
+      customerOrders: createCustomerOrderService({
+        db,
+        mailer: deps.mailer,
+        appOrigin: config.appOrigin,
+        now: deps.now,
+      }),
+    }),
+  );
   app.use('/api/artwork', createArtworkRouter({ artwork, uploadMaxBytes: config.uploadMaxBytes }));
   app.use('/api/admin', requireRole('staff', 'owner'));
   app.use('/api/admin/overview', createAdminOverviewRouter({ overview: createOverviewService({ db, now: deps.now }) }));
   app.use('/api/admin/catalogue', createAdminCatalogueRouter({ db }));
-  app.use('/api/admin/orders', createStudioOrdersRouter({ db, stripe: deps.stripe, mailer: deps.mailer, now: deps.now, appOrigin: config.appOrigin, uploadMaxBytes: config.uploadMaxBytes, fonts }));
+  app.use(
+    '/api/admin/orders',
+    createStudioOrdersRouter({
+      db,
+      stripe: deps.stripe,
+      mailer: deps.mailer,
+      now: deps.now,
+      appOrigin: config.appOrigin,
+      uploadMaxBytes: config.uploadMaxBytes,
+      fonts,
+    }),
+  );
   app.use('/api/admin/orders', createAdminOrdersRouter({ db }));
   app.use('/api/admin/orders', createOrderArtworkRouter({ db }));
   app.use('/api/admin/orders', createProductionSheetRouter({ sheets: createProductionSheetService({ db, fonts }) }));
@@ -159,7 +197,10 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/admin/catalogue/hoops', createCatalogueHoopsRouter({ db }));
   app.use('/api/admin/pricing', createAdminPricingRouter({ pricing: createPricingService({ db, now: deps.now }) }));
   app.use('/api/admin/settings', createAdminSettingsRouter({ db, now: deps.now }));
-  app.use('/api/admin/users', createAdminUsersRouter({ people: createPeopleService({ db, ownerEmails: config.ownerEmails, now: deps.now }) }));
+  app.use(
+    '/api/admin/users',
+    createAdminUsersRouter({ people: createPeopleService({ db, ownerEmails: config.ownerEmails, now: deps.now }) }),
+  );
   app.use('/api/admin/outbox', createAdminOutboxRouter({ db }));
   app.use('/api', notFoundHandler);
 

@@ -46,7 +46,11 @@ const appSchema = databaseSchema.extend({
   STRIPE_API_URL: z.url().optional(),
   SMTP_URL: z.string().min(1).default('smtp://127.0.0.1:2525'),
   MAIL_FROM: z.string().default('Wren & Bobbin <studio@wrenandbobbin.test>'),
-  UPLOAD_MAX_BYTES: z.coerce.number().int().min(1024).default(5 * 1024 * 1024),
+  UPLOAD_MAX_BYTES: z.coerce
+    .number()
+    .int()
+    .min(1024)
+    .default(5 * 1024 * 1024),
 });
 
 export interface DatabaseConfig {
@@ -123,7 +127,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Readonly<AppCo
     staticDir: e.STATIC_DIR,
     ownerEmails: e.OWNER_EMAILS,
     database: toDatabaseConfig(e),
-    google: { clientId: e.GOOGLE_CLIENT_ID, clientSecret: e.GOOGLE_CLIENT_SECRET, providerBaseUrl: e.GOOGLE_OAUTH_BASE_URL },
+    google: {
+      clientId: e.GOOGLE_CLIENT_ID,
+      clientSecret: e.GOOGLE_CLIENT_SECRET,
+      providerBaseUrl: e.GOOGLE_OAUTH_BASE_URL,
+    },
     stripe: { secretKey: e.STRIPE_SECRET_KEY, webhookSecret: e.STRIPE_WEBHOOK_SECRET, apiUrl: e.STRIPE_API_URL },
     mail: { smtpUrl: e.SMTP_URL, from: e.MAIL_FROM },
     uploadMaxBytes: e.UPLOAD_MAX_BYTES,

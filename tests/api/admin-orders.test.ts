@@ -12,7 +12,9 @@ beforeAll(async () => {
 
 describe('GET /api/admin/orders/:number', () => {
   it('when staff open a seeded order, then its lines add up to the total and its history runs oldest first', async () => {
-    const { order, quote, events, items } = orderDetailResponse.parse((await staff.get('/api/admin/orders/WB-1004').expect(200)).body);
+    const { order, quote, events, items } = orderDetailResponse.parse(
+      (await staff.get('/api/admin/orders/WB-1004').expect(200)).body,
+    );
     expect(order.number).toBe('WB-1004');
     expect(items.length).toBeGreaterThan(0);
     expect(quote.lines.reduce((sum, line) => sum + line.amountCents, 0)).toBe(order.totalCents);

@@ -39,7 +39,9 @@ describe('GET /api/admin/outbox', () => {
 
   it('when a message is opened, then its text comes back; an unknown one is 404', async () => {
     const [latest] = outboxListResponse.parse((await staff.get('/api/admin/outbox').expect(200)).body).messages;
-    const { message } = outboxMessageResponse.parse((await staff.get(`/api/admin/outbox/${latest!.id}`).expect(200)).body);
+    const { message } = outboxMessageResponse.parse(
+      (await staff.get(`/api/admin/outbox/${latest!.id}`).expect(200)).body,
+    );
     expect(message).toMatchObject({ id: latest!.id, subject: latest!.subject });
     expect(message.textBody).toContain(latest!.orderNumber);
     await staff.get('/api/admin/outbox/99999').expect(404);

@@ -14,7 +14,9 @@ describe('GET /api/admin/overview', () => {
   it('when staff open Today, then each group lists the seeded orders that need that action', async () => {
     const body = adminOverviewResponse.parse((await staff.get('/api/admin/overview').expect(200)).body);
     expect(body.today).toBe('2026-12-01');
-    const numbers = Object.fromEntries(body.actions.map((group) => [group.kind, group.orders.map((order) => order.number)]));
+    const numbers = Object.fromEntries(
+      body.actions.map((group) => [group.kind, group.orders.map((order) => order.number)]),
+    );
     expect(numbers).toEqual({
       proofs_to_send: ['WB-1009', 'WB-1010'],
       changes_asked: ['WB-1007'],
@@ -23,13 +25,23 @@ describe('GET /api/admin/overview', () => {
       due_soon: ['WB-1006', 'WB-1010'],
       ready_to_ship: ['WB-1003'],
     });
-    expect(body.actions.find((group) => group.kind === 'due_soon')!.orders[0]).toMatchObject({ dueDate: '2026-12-04', isOverdue: false });
+    expect(body.actions.find((group) => group.kind === 'due_soon')!.orders[0]).toMatchObject({
+      dueDate: '2026-12-04',
+      isOverdue: false,
+    });
   });
 
   it('when the machine hours are booked by due week, then the sums match the quotes’ run minutes worked by hand', async () => {
     const { machineHours } = adminOverviewResponse.parse((await staff.get('/api/admin/overview').expect(200)).body);
     expect(machineHours.capacityHours).toBe(30);
-    expect(machineHours.weeks.map((week) => week.weekStart)).toEqual(['2026-11-30', '2026-12-07', '2026-12-14', '2026-12-21', '2026-12-28', '2027-01-04']);
+    expect(machineHours.weeks.map((week) => week.weekStart)).toEqual([
+      '2026-11-30',
+      '2026-12-07',
+      '2026-12-14',
+      '2026-12-21',
+      '2026-12-28',
+      '2027-01-04',
+    ]);
     // Week of 30 Nov: WB-1006 42.35 + WB-1010 79.25 = 121.60 min = 2.0267 h.
     // Week of 7 Dec: WB-1004 35.14 + WB-1008 63.27 + WB-1009 17.63 (placed Thu 26 Nov + 10 working days = Thu 10 Dec)
     // + WB-1013 66.45 (needed by Thu 10 Dec) = 182.49 min = 3.0415 h.
@@ -47,10 +59,20 @@ describe('GET /api/admin/overview', () => {
     expect(revenue.weeks).toHaveLength(8);
     const byWeek = Object.fromEntries(revenue.weeks.map((week) => [week.weekStart, week]));
     // Week of 9 Nov: 22.47 + 33.17 + 85.51 = 141.15 captured.
-    expect(byWeek['2026-11-09']).toEqual({ weekStart: '2026-11-09', capturedCents: 14_115, refundedCents: 0, netCents: 14_115 });
+    expect(byWeek['2026-11-09']).toEqual({
+      weekStart: '2026-11-09',
+      capturedCents: 14_115,
+      refundedCents: 0,
+      netCents: 14_115,
+    });
     // Week of 16 Nov: 84.58 + 74.90 + 87.33 (WB-1013, 19 Nov) = 246.81 captured; refunds 84.58 (WB-1005) + 5.00 (WB-1002) =
     // 89.58; net 157.23.
-    expect(byWeek['2026-11-16']).toEqual({ weekStart: '2026-11-16', capturedCents: 24_681, refundedCents: 8958, netCents: 15_723 });
+    expect(byWeek['2026-11-16']).toEqual({
+      weekStart: '2026-11-16',
+      capturedCents: 24_681,
+      refundedCents: 8958,
+      netCents: 15_723,
+    });
     expect(byWeek['2026-11-30']).toEqual({ weekStart: '2026-11-30', capturedCents: 0, refundedCents: 0, netCents: 0 });
   });
 

@@ -14,13 +14,25 @@ beforeAll(async () => {
   await harness.signIn(staff, 'tobias@wrenandbobbin.test');
 });
 
-const seeded: ShopSettings = { machineStitchesPerMinute: 650, minutesPerHooping: 4, minutesPerColourChange: 0.5, setupMinutes: 10, leadTimeDays: 10, machineHoursPerWeek: 30 };
+const seeded: ShopSettings = {
+  machineStitchesPerMinute: 650,
+  minutesPerHooping: 4,
+  minutesPerColourChange: 0.5,
+  setupMinutes: 10,
+  leadTimeDays: 10,
+  machineHoursPerWeek: 30,
+};
 
-const runTime = async () => quotePreviewResponse.parse((await harness.agent().post('/api/quotes/preview').send(daisyDressQuote).expect(200)).body).runMinutes;
+const runTime = async () =>
+  quotePreviewResponse.parse((await harness.agent().post('/api/quotes/preview').send(daisyDressQuote).expect(200)).body)
+    .runMinutes;
 
 describe('/api/admin/settings', () => {
   it('when staff read the settings, then they see the seeded values and may not edit them', async () => {
-    expect(shopSettingsResponse.parse((await staff.get('/api/admin/settings').expect(200)).body)).toEqual({ settings: seeded, canEdit: false });
+    expect(shopSettingsResponse.parse((await staff.get('/api/admin/settings').expect(200)).body)).toEqual({
+      settings: seeded,
+      canEdit: false,
+    });
     const res = await staff.put('/api/admin/settings').send(seeded).expect(403);
     expect(res.body.error.message).toBe('Only the studio owner can change the shop settings.');
   });
@@ -33,7 +45,16 @@ describe('/api/admin/settings', () => {
   });
 
   it('when the owner sends a zero speed, negative minutes and a 200-hour week, then it answers 400 naming each field', async () => {
-    const res = await owner.put('/api/admin/settings').send({ ...seeded, machineStitchesPerMinute: 0, minutesPerHooping: -1, machineHoursPerWeek: 200, leadTimeDays: 2.5 }).expect(400);
+    const res = await owner
+      .put('/api/admin/settings')
+      .send({
+        ...seeded,
+        machineStitchesPerMinute: 0,
+        minutesPerHooping: -1,
+        machineHoursPerWeek: 200,
+        leadTimeDays: 2.5,
+      })
+      .expect(400);
     expect(res.body.error.fields).toMatchObject({
       machineStitchesPerMinute: 'A machine sews at least 50 stitches a minute',
       minutesPerHooping: "Time per hooping can't be negative",
@@ -47,7 +68,9 @@ describe('/api/admin/settings', () => {
     const sewing = (estimate: typeof before) => estimate.items.find((item) => item.code === 'sewing')!;
     const hooping = (estimate: typeof before) => estimate.items.find((item) => item.code === 'hoopings')!;
     const changed = { ...seeded, machineStitchesPerMinute: 325, minutesPerHooping: 6 };
-    expect(shopSettingsResponse.parse((await owner.put('/api/admin/settings').send(changed).expect(200)).body).settings).toEqual(changed);
+    expect(
+      shopSettingsResponse.parse((await owner.put('/api/admin/settings').send(changed).expect(200)).body).settings,
+    ).toEqual(changed);
 
     const after = await runTime();
     // Half the speed doubles the sewing minutes (stitches ÷ stitches per minute); 4 hoopings × 6 min = 24 min.

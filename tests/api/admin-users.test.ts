@@ -42,7 +42,9 @@ describe('/api/admin/users', () => {
 
   it('when the owner grants staff to a customer, then their very next request is let into the studio; removing it shuts them out again', async () => {
     await dominic.get('/api/admin/overview').expect(403);
-    const granted = personResponse.parse((await owner.put(`/api/admin/users/${ids.dominic}/role`).send({ role: 'staff' }).expect(200)).body);
+    const granted = personResponse.parse(
+      (await owner.put(`/api/admin/users/${ids.dominic}/role`).send({ role: 'staff' }).expect(200)).body,
+    );
     expect(granted.person).toMatchObject({ name: 'Dominic Lark', role: 'staff' });
     await dominic.get('/api/admin/overview').expect(200);
     expect((await dominic.get('/api/me').expect(200)).body.user.role).toBe('staff');
@@ -52,8 +54,12 @@ describe('/api/admin/users', () => {
   });
 
   it('when the owner changes their own role or another owner’s, then it answers 409 with the reason', async () => {
-    expect((await owner.put(`/api/admin/users/${ids.marigold}/role`).send({ role: 'staff' }).expect(409)).body.error.message).toBe('You can’t change your own role.');
-    await harness.db('users').insert({ id: 6, email: 'second.owner@wrenandbobbin.test', name: 'Second Owner', role: 'owner' });
+    expect(
+      (await owner.put(`/api/admin/users/${ids.marigold}/role`).send({ role: 'staff' }).expect(409)).body.error.message,
+    ).toBe('You can’t change your own role.');
+    await harness
+      .db('users')
+      .insert({ id: 6, email: 'second.owner@wrenandbobbin.test', name: 'Second Owner', role: 'owner' });
     const res = await owner.put('/api/admin/users/6/role').send({ role: 'customer' }).expect(409);
     expect(res.body.error.message).toMatch(/Second Owner is an owner/);
     expect((await harness.db('users').where({ id: 6 }).first()).role).toBe('owner');
@@ -63,6 +69,8 @@ describe('/api/admin/users', () => {
     const res = await owner.put(`/api/admin/users/${ids.dominic}/role`).send({ role: 'owner' }).expect(400);
     expect(res.body.error.fields.role).toBe('Choose staff or customer');
     await owner.put('/api/admin/users/999/role').send({ role: 'staff' }).expect(404);
-    expect((await owner.put('/api/admin/users/x/role').send({ role: 'staff' }).expect(400)).body.error.fields.id).toMatch(/person id/);
+    expect(
+      (await owner.put('/api/admin/users/x/role').send({ role: 'staff' }).expect(400)).body.error.fields.id,
+    ).toMatch(/person id/);
   });
 });

@@ -18,13 +18,16 @@ const drawingWithScripts = `<?xml version="1.0"?>
   <path d="M110 20 L190 80" stroke="#2e241e" stroke-width="2" fill="none"/>
 </svg>`;
 
-const pngBytes = async (width: number, height: number) => new Jimp({ width, height, color: 0x3366ccff }).getBuffer(JimpMime.png);
+const pngBytes = async (width: number, height: number) =>
+  new Jimp({ width, height, color: 0x3366ccff }).getBuffer(JimpMime.png);
 /** The smallest GIF: a 1 × 1 transparent pixel. */
 const gifBytes = Buffer.from('R0lGODlhAQABAIAAAAAAAP///yH5BAEAAAAALAAAAAABAAEAAAIBRAA7', 'base64');
 
 type Agent = ApiAgent;
 const upload = (agent: Agent, bytes: Buffer | string, filename: string, contentType: string) =>
-  agent.post('/api/artwork').attach('file', Buffer.isBuffer(bytes) ? bytes : Buffer.from(bytes), { filename, contentType });
+  agent
+    .post('/api/artwork')
+    .attach('file', Buffer.isBuffer(bytes) ? bytes : Buffer.from(bytes), { filename, contentType });
 
 const pricing = publishedRuleSet.rules;
 const bishop = garments.find((garment) => garment.slug === 'bishop-dress')!;
@@ -37,7 +40,18 @@ const withArtwork = (artworkUploadId: number, widthMm: number): QuotePreviewRequ
   isRush: false,
   document: {
     version: 1,
-    placements: [{ id: 'drawing', kind: 'artwork', zone: 'chest', centerXMm: 209, centerYMm: 105, rotationDeg: 0, artworkUploadId, widthMm } satisfies DesignPlacement],
+    placements: [
+      {
+        id: 'drawing',
+        kind: 'artwork',
+        zone: 'chest',
+        centerXMm: 209,
+        centerYMm: 105,
+        rotationDeg: 0,
+        artworkUploadId,
+        widthMm,
+      } satisfies DesignPlacement,
+    ],
   },
 });
 
@@ -80,7 +94,10 @@ describe('POST /api/artwork', () => {
 
   it('when a GIF is sent, then it is refused as an unsupported type with a message for the field', async () => {
     const res = await upload(harness.agent(), gifBytes, 'party.png', 'image/png').expect(415);
-    expect(res.body.error).toMatchObject({ kind: 'unsupported-type', fields: { file: 'That file is a GIF file; please upload a SVG, PNG or JPEG file.' } });
+    expect(res.body.error).toMatchObject({
+      kind: 'unsupported-type',
+      fields: { file: 'That file is a GIF file; please upload a SVG, PNG or JPEG file.' },
+    });
   });
 
   it('when the file is larger than the upload limit, then it is refused as too large', async () => {
@@ -91,9 +108,12 @@ describe('POST /api/artwork', () => {
 
   it('when a visitor who has not signed in has uploaded 10 pictures, then the next is refused with a way to upload more', async () => {
     const visitor = harness.agent();
-    for (let n = 0; n < 10; n += 1) await upload(visitor, drawingWithScripts, `drawing-${n}.svg`, 'image/svg+xml').expect(201);
+    for (let n = 0; n < 10; n += 1)
+      await upload(visitor, drawingWithScripts, `drawing-${n}.svg`, 'image/svg+xml').expect(201);
     const res = await upload(visitor, drawingWithScripts, 'one-more.svg', 'image/svg+xml').expect(409);
-    expect(res.body.error.fields).toEqual({ file: 'You have uploaded 10 pictures already; sign in to upload more, and they come with you.' });
+    expect(res.body.error.fields).toEqual({
+      file: 'You have uploaded 10 pictures already; sign in to upload more, and they come with you.',
+    });
   });
 
   it('when no file is sent, then the field says to choose one', async () => {
@@ -121,7 +141,9 @@ describe('GET /api/artwork/:id', () => {
 
   it('when a visitor uploads and then signs in, then the upload is theirs on the account, and no other visitor sees it', async () => {
     const visitor = harness.agent();
-    const { artwork } = artworkUploadResponse.parse((await upload(visitor, drawingWithScripts, 'before-sign-in.svg', 'image/svg+xml').expect(201)).body);
+    const { artwork } = artworkUploadResponse.parse(
+      (await upload(visitor, drawingWithScripts, 'before-sign-in.svg', 'image/svg+xml').expect(201)).body,
+    );
     await visitor.get(`/api/artwork/${artwork.id}`).expect(200);
     await harness.agent().get(`/api/artwork/${artwork.id}`).expect(404);
 
@@ -140,46 +162,94 @@ describe('GET /api/artwork/:id', () => {
 describe('POST /api/quotes/preview with artwork', () => {
   it('when the design has an SVG upload, then its stitches are the engine’s estimate from the clean drawing at its width', async () => {
     const agent = harness.agent();
-    const { artwork } = artworkUploadResponse.parse((await upload(agent, drawingWithScripts, 'lily.svg', 'image/svg+xml').expect(201)).body);
-    const body = quotePreviewResponse.parse((await agent.post('/api/quotes/preview').send(withArtwork(artwork.id, 60)).expect(200)).body);
+    const { artwork } = artworkUploadResponse.parse(
+      (await upload(agent, drawingWithScripts, 'lily.svg', 'image/svg+xml').expect(201)).body,
+    );
+    const body = quotePreviewResponse.parse(
+      (await agent.post('/api/quotes/preview').send(withArtwork(artwork.id, 60)).expect(200)).body,
+    );
 
     const stored = await harness.db('artwork_uploads').where({ id: artwork.id }).first();
     const expected = estimateStitches({ kind: 'svg', svgText: stored.sanitized_svg, size: { widthMm: 60 } });
     if (!expected.ok) throw new Error(expected.reason);
     expect(expected.stitches).toBeGreaterThan(0);
-    expect(body.placements[0]).toMatchObject({ kind: 'artwork', stitches: expected.stitches, colourChanges: expected.colorChanges, hoopings: 1 });
+    expect(body.placements[0]).toMatchObject({
+      kind: 'artwork',
+      stitches: expected.stitches,
+      colourChanges: expected.colorChanges,
+      hoopings: 1,
+    });
     expect(body.placements[0].isPriceProvisional).toBeUndefined();
-    expect(body.quote.lines.find((line) => line.code === 'artwork-setup')).toMatchObject({ amountCents: pricing.artworkSetupCents });
+    expect(body.quote.lines.find((line) => line.code === 'artwork-setup')).toMatchObject({
+      amountCents: pricing.artworkSetupCents,
+    });
   });
 
   it('when the design has a raster upload, then it is priced with the setup line and flagged for the studio to confirm', async () => {
     const agent = harness.agent();
-    const { artwork } = artworkUploadResponse.parse((await upload(agent, await pngBytes(300, 150), 'scan.png', 'image/png').expect(201)).body);
-    const body = quotePreviewResponse.parse((await agent.post('/api/quotes/preview').send(withArtwork(artwork.id, 80)).expect(200)).body);
+    const { artwork } = artworkUploadResponse.parse(
+      (await upload(agent, await pngBytes(300, 150), 'scan.png', 'image/png').expect(201)).body,
+    );
+    const body = quotePreviewResponse.parse(
+      (await agent.post('/api/quotes/preview').send(withArtwork(artwork.id, 80)).expect(200)).body,
+    );
 
-    expect(body.placements[0]).toMatchObject({ kind: 'artwork', stitches: 0, widthMm: 80, heightMm: 40, isPriceProvisional: true });
-    expect(body.quote.lines.find((line) => line.code === 'artwork-setup')).toMatchObject({ label: 'Artwork setup: 1 design, once per order', amountCents: pricing.artworkSetupCents });
+    expect(body.placements[0]).toMatchObject({
+      kind: 'artwork',
+      stitches: 0,
+      widthMm: 80,
+      heightMm: 40,
+      isPriceProvisional: true,
+    });
+    expect(body.quote.lines.find((line) => line.code === 'artwork-setup')).toMatchObject({
+      label: 'Artwork setup: 1 design, once per order',
+      amountCents: pricing.artworkSetupCents,
+    });
     const stitching = body.quote.lines.find((line) => line.placementId === 'drawing')!;
-    expect(stitching).toMatchObject({ label: 'Your artwork: minimum charge until the studio counts the stitches × 1 garment', amountCents: pricing.minimumPerPlacementCents });
+    expect(stitching).toMatchObject({
+      label: 'Your artwork: minimum charge until the studio counts the stitches × 1 garment',
+      amountCents: pricing.minimumPerPlacementCents,
+    });
   });
 
   it('when the artwork is wider than the largest hoop can take, then the width field says so', async () => {
     const agent = harness.agent();
-    const { artwork } = artworkUploadResponse.parse((await upload(agent, await pngBytes(100, 100), 'square.png', 'image/png').expect(201)).body);
+    const { artwork } = artworkUploadResponse.parse(
+      (await upload(agent, await pngBytes(100, 100), 'square.png', 'image/png').expect(201)).body,
+    );
     const res = await agent.post('/api/quotes/preview').send(withArtwork(artwork.id, 250)).expect(400);
-    expect(res.body.error.fields['document.placements.0.widthMm']).toMatch(/^Your artwork at 250 mm wide comes to 250 × 250 mm, bigger than the 200 × 300 mm sewing field of our largest hoop/);
+    expect(res.body.error.fields['document.placements.0.widthMm']).toMatch(
+      /^Your artwork at 250 mm wide comes to 250 × 250 mm, bigger than the 200 × 300 mm sewing field of our largest hoop/,
+    );
   });
 
   it('when Harriet prices her seeded design with her granddaughter’s drawing again, then the server quotes what the seeds stored', async () => {
     const harriet = harness.agent();
     await harness.signIn(harriet, 'harriet@example.test');
-    const stored = await harness.db('quotes as q').join('designs as d', 'd.id', 'q.design_id').select('q.*', 'd.garment_id', 'd.garment_size_id', 'd.fabric_colour_id', 'd.document');
-    const withDrawing = stored.filter((quote) => quote.document.placements.some((placement: DesignPlacement) => placement.kind === 'artwork'));
+    const stored = await harness
+      .db('quotes as q')
+      .join('designs as d', 'd.id', 'q.design_id')
+      .select('q.*', 'd.garment_id', 'd.garment_size_id', 'd.fabric_colour_id', 'd.document');
+    const withDrawing = stored.filter((quote) =>
+      quote.document.placements.some((placement: DesignPlacement) => placement.kind === 'artwork'),
+    );
     expect(withDrawing.length).toBeGreaterThanOrEqual(1);
     for (const quote of withDrawing) {
-      const choice = { garmentId: quote.garment_id, sizeId: quote.garment_size_id, colourId: quote.fabric_colour_id, quantity: quote.quantity, isRush: Boolean(quote.is_rush), document: quote.document };
-      const body = quotePreviewResponse.parse((await harriet.post('/api/quotes/preview').send(choice).expect(200)).body);
-      expect({ lines: body.quote.lines, totalCents: body.quote.totalCents }).toEqual({ lines: quote.lines, totalCents: quote.total_cents });
+      const choice = {
+        garmentId: quote.garment_id,
+        sizeId: quote.garment_size_id,
+        colourId: quote.fabric_colour_id,
+        quantity: quote.quantity,
+        isRush: Boolean(quote.is_rush),
+        document: quote.document,
+      };
+      const body = quotePreviewResponse.parse(
+        (await harriet.post('/api/quotes/preview').send(choice).expect(200)).body,
+      );
+      expect({ lines: body.quote.lines, totalCents: body.quote.totalCents }).toEqual({
+        lines: quote.lines,
+        totalCents: quote.total_cents,
+      });
     }
   });
 
@@ -192,20 +262,30 @@ describe('POST /api/quotes/preview with artwork', () => {
     const priya = harness.agent();
     await harness.signIn(priya, 'priya@example.test');
     const refused = await priya.post('/api/designs').send(save).expect(400);
-    expect(refused.body.error.fields).toEqual({ 'document.placements.0.artworkUploadId': 'That artwork upload is not available; upload it again.' });
+    expect(refused.body.error.fields).toEqual({
+      'document.placements.0.artworkUploadId': 'That artwork upload is not available; upload it again.',
+    });
   });
 });
 
 describe('the catalogue the designer reads', () => {
   it('when anyone asks for the hoops, then they get each sewing field in mm, so the designer can keep items within the largest', async () => {
     const res = await harness.agent().get('/api/catalogue/hoops').expect(200);
-    expect(res.body.hoops).toContainEqual({ slug: 'large-200x300', name: 'Large 200 × 300 mm (8 × 12 in)', fieldWidthMm: 200, fieldHeightMm: 300 });
+    expect(res.body.hoops).toContainEqual({
+      slug: 'large-200x300',
+      name: 'Large 200 × 300 mm (8 × 12 in)',
+      fieldWidthMm: 200,
+      fieldHeightMm: 300,
+    });
   });
 
   it('when the bishop dress is listed, then its hem zone says how far the drawn hem curves, scaled with each size', async () => {
     const res = await harness.agent().get('/api/catalogue/garments').expect(200);
     const dress = res.body.garments.find((garment: { slug: string }) => garment.slug === 'bishop-dress');
-    const hemOf = (code: string) => dress.sizes.find((size: { code: string }) => size.code === code).zones.find((zone: { code: string }) => zone.code === 'hem');
+    const hemOf = (code: string) =>
+      dress.sizes
+        .find((size: { code: string }) => size.code === code)
+        .zones.find((zone: { code: string }) => zone.code === 'hem');
     expect(hemOf('12m').hemCurveMm).toBe(10);
     expect(hemOf('6m').hemCurveMm).toBeCloseTo((10 * 346) / 380, 2);
   });

@@ -50,7 +50,9 @@ describe('sign-in session', () => {
     const start = await agent.get('/api/auth/google').expect(302);
     const state = new URL(start.headers.location!).searchParams.get('state');
     const res = await agent.get(`/api/auth/google/callback?code=already-used&state=${state}`).expect(302);
-    expect(decodeURIComponent(res.headers.location!)).toBe('/sign-in?problem=Sign-in did not finish, so nothing changed. Please try again.');
+    expect(decodeURIComponent(res.headers.location!)).toBe(
+      '/sign-in?problem=Sign-in did not finish, so nothing changed. Please try again.',
+    );
   });
 
   it('when the callback carries a state this session never issued, then it is refused the same way', async () => {
@@ -114,7 +116,12 @@ describe('cross-site protection', () => {
 
 describe('bad input', () => {
   it('when the JSON body is malformed, then it answers 400 with a readable message', async () => {
-    const res = await harness.agent().post('/api/auth/sign-out').set('Content-Type', 'application/json').send('{"oops":').expect(400);
+    const res = await harness
+      .agent()
+      .post('/api/auth/sign-out')
+      .set('Content-Type', 'application/json')
+      .send('{"oops":')
+      .expect(400);
     expect(res.body.error.message).toMatch(/not valid JSON/);
   });
 

@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { fontListResponse, garmentListResponse, motifListResponse, threadListResponse } from '../../server/src/contracts/catalogue.ts';
+import {
+  fontListResponse,
+  garmentListResponse,
+  motifListResponse,
+  threadListResponse,
+} from '../../server/src/contracts/catalogue.ts';
 import { studioCatalogueResponse } from '../../server/src/contracts/admin-catalogue.ts';
 import { fitBorder } from '../../server/src/engine/index.ts';
 import { useApiHarness } from '../support/api-harness.ts';
@@ -38,7 +43,7 @@ describe('GET /api/catalogue/garments', () => {
     expect(dress.sizes.find((size) => size.code === '2T')!.mockupScale).toBe(1);
   });
 
-  it('when a garment is listed, then its mockup size is the drawing\'s viewBox in mm', async () => {
+  it("when a garment is listed, then its mockup size is the drawing's viewBox in mm", async () => {
     const { garments } = garmentListResponse.parse((await request(harness.app).get('/api/catalogue/garments')).body);
     const bib = garments.find((garment) => garment.kind === 'bib')!;
     expect(bib.mockupSvg).toContain('viewBox="0 0 240 300"');
@@ -47,12 +52,19 @@ describe('GET /api/catalogue/garments', () => {
 
   it('when a drawing has no viewBox, then its mockup size comes from its width and height in mm', async () => {
     const bib = await harness.db('garments').select('id', 'mockup_svg').where({ slug: 'terry-bib' }).first();
-    const withoutViewBox = (bib.mockup_svg as string).replace(/\sviewBox="[^"]*"/, '').replace('width="240mm"', 'width="241.5mm"');
+    const withoutViewBox = (bib.mockup_svg as string)
+      .replace(/\sviewBox="[^"]*"/, '')
+      .replace('width="240mm"', 'width="241.5mm"');
     await harness.db('garments').where({ id: bib.id }).update({ mockup_svg: withoutViewBox });
     try {
-      const { garments } = garmentListResponse.parse((await request(harness.app).get('/api/catalogue/garments').expect(200)).body);
+      const { garments } = garmentListResponse.parse(
+        (await request(harness.app).get('/api/catalogue/garments').expect(200)).body,
+      );
       const listed = garments.find((garment) => garment.id === bib.id)!;
-      expect({ widthMm: listed.mockupWidthMm, heightMm: listed.mockupHeightMm }).toEqual({ widthMm: 241.5, heightMm: 300 });
+      expect({ widthMm: listed.mockupWidthMm, heightMm: listed.mockupHeightMm }).toEqual({
+        widthMm: 241.5,
+        heightMm: 300,
+      });
     } finally {
       await harness.db('garments').where({ id: bib.id }).update({ mockup_svg: bib.mockup_svg });
     }
@@ -65,19 +77,32 @@ describe('GET /api/catalogue/motifs', () => {
     const { motifs } = motifListResponse.parse(res.body);
     expect(motifs.length).toBeGreaterThanOrEqual(6);
     expect(motifs[0]!.kind).toBe('border');
-    expect(motifs.findIndex((m) => m.kind === 'single')).toBeGreaterThan(motifs.findLastIndex((m) => m.kind === 'border'));
+    expect(motifs.findIndex((m) => m.kind === 'single')).toBeGreaterThan(
+      motifs.findLastIndex((m) => m.kind === 'border'),
+    );
     expect(motifs.every((m) => m.svg.startsWith('<svg') && m.minScalePct <= 100 && m.maxScalePct >= 100)).toBe(true);
   });
 
   it('when the 180 mm border meets the 692 mm hem of the seeded 6-month bishop dress, then 4 repeats of 173 mm fit', async () => {
     // The trade's worked case (common practice, no source): 692 mm loop, 180 mm motif allowed 90–110 % → 4 × 173 mm.
     const [garments, motifs] = await Promise.all([
-      request(harness.app).get('/api/catalogue/garments').then((r) => garmentListResponse.parse(r.body).garments),
-      request(harness.app).get('/api/catalogue/motifs').then((r) => motifListResponse.parse(r.body).motifs),
+      request(harness.app)
+        .get('/api/catalogue/garments')
+        .then((r) => garmentListResponse.parse(r.body).garments),
+      request(harness.app)
+        .get('/api/catalogue/motifs')
+        .then((r) => motifListResponse.parse(r.body).motifs),
     ]);
     const size = garments.flatMap((g) => g.sizes).find((s) => s.hemCircumferenceMm === 692)!;
     const motif = motifs.find((m) => m.widthMm === 180)!;
-    const fit = fitBorder({ runLengthMm: size.hemCircumferenceMm!, closed: true, motifWidthMm: motif.widthMm, gapMm: motif.gapMm, minScale: motif.minScalePct / 100, maxScale: motif.maxScalePct / 100 });
+    const fit = fitBorder({
+      runLengthMm: size.hemCircumferenceMm!,
+      closed: true,
+      motifWidthMm: motif.widthMm,
+      gapMm: motif.gapMm,
+      minScale: motif.minScalePct / 100,
+      maxScale: motif.maxScalePct / 100,
+    });
     expect(fit).toMatchObject({ ok: true, count: 4 });
     expect(fit.ok && fit.repeatWidthMm).toBeCloseTo(173, 6);
   });
@@ -93,7 +118,9 @@ describe('GET /api/catalogue/fonts', () => {
 
 describe('GET /api/catalogue/threads', () => {
   it('when anyone asks, then the whole active palette comes in display order', async () => {
-    const { threads } = threadListResponse.parse((await request(harness.app).get('/api/catalogue/threads').expect(200)).body);
+    const { threads } = threadListResponse.parse(
+      (await request(harness.app).get('/api/catalogue/threads').expect(200)).body,
+    );
     expect(threads.length).toBeGreaterThanOrEqual(30);
     expect(threads[0]).toEqual({ code: 'WB-101', name: 'Chalk White', hex: '#F7F5EE' });
     expect(threads.every((thread) => /^#[0-9A-F]{6}$/.test(thread.hex))).toBe(true);
@@ -102,7 +129,9 @@ describe('GET /api/catalogue/threads', () => {
   it('when the studio retires a thread, then it is no longer offered', async () => {
     await harness.db('threads').where({ code: 'WB-102' }).update({ is_active: false });
     try {
-      const { threads } = threadListResponse.parse((await request(harness.app).get('/api/catalogue/threads').expect(200)).body);
+      const { threads } = threadListResponse.parse(
+        (await request(harness.app).get('/api/catalogue/threads').expect(200)).body,
+      );
       expect(threads.map((thread) => thread.code)).not.toContain('WB-102');
       expect(threads.map((thread) => thread.code)).toContain('WB-101');
     } finally {
@@ -123,7 +152,9 @@ describe('GET /api/admin/catalogue', () => {
     await harness.signIn(agent, 'tobias@wrenandbobbin.test');
     const body = studioCatalogueResponse.parse((await agent.get('/api/admin/catalogue').expect(200)).body);
     expect(body.threads.length).toBeGreaterThanOrEqual(30);
-    expect(body.hoops.map((h) => `${h.fieldWidthMm}×${h.fieldHeightMm}`)).toEqual(expect.arrayContaining(['100×100', '120×180']));
+    expect(body.hoops.map((h) => `${h.fieldWidthMm}×${h.fieldHeightMm}`)).toEqual(
+      expect.arrayContaining(['100×100', '120×180']),
+    );
     expect(body.fonts.filter((f) => f.isActive).length).toBeGreaterThanOrEqual(3);
     for (const motif of body.motifs) {
       expect(motif.mix.run + motif.mix.satin + motif.mix.fill).toBe(motif.stitchCount);

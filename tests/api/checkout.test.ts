@@ -17,18 +17,40 @@ type Agent = ReturnType<PaymentHarness['agent']>;
 
 const priya = 'priya@example.test';
 const harriet = 'harriet@example.test';
-const shipTo = { name: 'Priya Castellanos', line1: '48 Larkspur Lane', city: 'Fernhollow', region: 'OR', postalCode: '97000', countryCode: 'us' };
+const shipTo = {
+  name: 'Priya Castellanos',
+  line1: '48 Larkspur Lane',
+  city: 'Fernhollow',
+  region: 'OR',
+  postalCode: '97000',
+  countryCode: 'us',
+};
 
 const signedIn = (email: string): Promise<Agent> => signedInAgent(harness, email);
 
 /** Priya's seeded design 1 (a bishop dress with a daisy border and a name), as the quote request for it. */
 async function designQuoteBody(agent: Agent, designId = 1, changes: { quantity?: number; isRush?: boolean } = {}) {
   const { design } = savedDesignResponse.parse((await agent.get(`/api/designs/${designId}`).expect(200)).body);
-  return { garmentId: design.garmentId, sizeId: design.sizeId, colourId: design.colourId, quantity: changes.quantity ?? 1, isRush: changes.isRush ?? false, document: design.document, designId };
+  return {
+    garmentId: design.garmentId,
+    sizeId: design.sizeId,
+    colourId: design.colourId,
+    quantity: changes.quantity ?? 1,
+    isRush: changes.isRush ?? false,
+    document: design.document,
+    designId,
+  };
 }
 
 async function storedQuote(agent: Agent, changes: { quantity?: number; isRush?: boolean } = {}) {
-  return storedQuoteResponse.parse((await agent.post('/api/quotes').send(await designQuoteBody(agent, 1, changes)).expect(201)).body);
+  return storedQuoteResponse.parse(
+    (
+      await agent
+        .post('/api/quotes')
+        .send(await designQuoteBody(agent, 1, changes))
+        .expect(201)
+    ).body,
+  );
 }
 
 // The harness clock reads Tuesday 2026-12-01 10:00 UTC, 04:00 in the shop's America/Chicago. The seeded lead time is
@@ -36,7 +58,14 @@ async function storedQuote(agent: Agent, changes: { quantity?: number; isRush?: 
 const regularDate = '2026-12-18';
 const rushOnlyDate = '2026-12-10';
 
-const orderBody = (quoteId: number, overrides: Partial<PlaceOrderRequest> = {}) => ({ quoteId, designId: 1, neededBy: regularDate, shipTo, note: 'For a christening on the 20th.', ...overrides });
+const orderBody = (quoteId: number, overrides: Partial<PlaceOrderRequest> = {}) => ({
+  quoteId,
+  designId: 1,
+  neededBy: regularDate,
+  shipTo,
+  note: 'For a christening on the 20th.',
+  ...overrides,
+});
 
 describe('POST /api/quotes', () => {
   it('when a visitor prices a design, then the quote is stored for 14 days with the ready dates, and their session can open it again', async () => {
@@ -45,11 +74,21 @@ describe('POST /api/quotes', () => {
     const res = await visitor.post('/api/quotes').send(body).expect(201);
     const quote = storedQuoteResponse.parse(res.body);
     expect(quote.expiresAt).toBe('2026-12-15T10:00:00.000Z');
-    expect(quote.readyDates).toEqual({ leadTimeDays: 10, earliestReadyDate: '2026-12-15', earliestRushDate: '2026-12-08' });
+    expect(quote.readyDates).toEqual({
+      leadTimeDays: 10,
+      earliestReadyDate: '2026-12-15',
+      earliestRushDate: '2026-12-08',
+    });
     expect(quote.quote.lines.reduce((sum, line) => sum + line.amountCents, 0)).toBe(quote.quote.totalCents);
 
     const row = await harness.db('quotes').where({ id: quote.quoteId }).first();
-    expect(row).toMatchObject({ customer_id: null, design_id: null, quantity: 1, total_cents: quote.quote.totalCents, stitch_count: expect.any(Number) });
+    expect(row).toMatchObject({
+      customer_id: null,
+      design_id: null,
+      quantity: 1,
+      total_cents: quote.quote.totalCents,
+      stitch_count: expect.any(Number),
+    });
     expect(row.hooping_count).toBeGreaterThanOrEqual(4);
 
     const again = storedQuoteResponse.parse((await visitor.get(`/api/quotes/${quote.quoteId}`).expect(200)).body);
@@ -74,9 +113,17 @@ describe('POST /api/quotes', () => {
 
   it('when the body carries a price of its own or a bad quantity, then it is 400 with the fields to fix', async () => {
     const body = await designQuoteBody(await signedIn(priya));
-    const res = await harness.agent().post('/api/quotes').send({ ...body, quantity: 0, totalCents: 1 }).expect(400);
+    const res = await harness
+      .agent()
+      .post('/api/quotes')
+      .send({ ...body, quantity: 0, totalCents: 1 })
+      .expect(400);
     expect(res.body.error.fields).toMatchObject({ '(request)': expect.stringMatching(/Leave out totalCents/) });
-    const bad = await harness.agent().post('/api/quotes').send({ ...body, designId: undefined, quantity: 0 }).expect(400);
+    const bad = await harness
+      .agent()
+      .post('/api/quotes')
+      .send({ ...body, designId: undefined, quantity: 0 })
+      .expect(400);
     expect(bad.body.error.fields).toEqual({ quantity: 'Order at least 1 garment' });
   });
 });
@@ -90,7 +137,12 @@ describe('POST /api/orders', () => {
     const agent = await signedIn(priya);
     const res = await agent
       .post('/api/orders')
-      .send({ quoteId: 1, designId: 1, neededBy: '2026-02-30', shipTo: { ...shipTo, line1: ' ', postalCode: '!', countryCode: 'USA' } })
+      .send({
+        quoteId: 1,
+        designId: 1,
+        neededBy: '2026-02-30',
+        shipTo: { ...shipTo, line1: ' ', postalCode: '!', countryCode: 'USA' },
+      })
       .expect(400);
     expect(res.body.error.fields).toEqual({
       neededBy: 'Choose a real date',
@@ -109,12 +161,23 @@ describe('POST /api/orders', () => {
     expect(Number(started.number.slice(3))).toBeGreaterThan(1012);
 
     const order = await harness.db('orders').where({ number: started.number }).first();
-    expect(order).toMatchObject({ status: 'awaiting_payment', payment_status: 'none', quote_id: quote.quoteId, total_cents: quote.quote.totalCents, placed_at: null, customer_note: 'For a christening on the 20th.' });
+    expect(order).toMatchObject({
+      status: 'awaiting_payment',
+      payment_status: 'none',
+      quote_id: quote.quoteId,
+      total_cents: quote.quote.totalCents,
+      placed_at: null,
+      customer_note: 'For a christening on the 20th.',
+    });
     expect(order.ship_to).toMatchObject({ countryCode: 'US', postalCode: '97000' });
     const item = await harness.db('order_items').where({ order_id: order.id }).first();
     expect(item).toMatchObject({ design_id: 1, quantity: 1, total_cents: quote.quote.subtotalCents });
     const payment = await harness.db('payments').where({ order_id: order.id }).first();
-    expect(payment).toMatchObject({ status: 'pending', amount_authorized_cents: 0, checkout_session_id: expect.stringMatching(/^cs_test_/) });
+    expect(payment).toMatchObject({
+      status: 'pending',
+      amount_authorized_cents: 0,
+      checkout_session_id: expect.stringMatching(/^cs_test_/),
+    });
 
     const session = harness.stripeState.checkoutSessions.get(payment.checkout_session_id)!;
     expect(started.checkoutUrl).toBe(session.session.url);
@@ -128,11 +191,23 @@ describe('POST /api/orders', () => {
   it('when the quote has expired, then it is 409 with the old and new totals and a new quote, which then orders', async () => {
     const agent = await signedIn(priya);
     const quote = await storedQuote(agent);
-    await harness.db('quotes').where({ id: quote.quoteId }).update({ expires_at: new Date('2026-11-30T00:00:00Z'), total_cents: quote.quote.totalCents + 500, subtotal_cents: quote.quote.subtotalCents + 500 });
+    await harness
+      .db('quotes')
+      .where({ id: quote.quoteId })
+      .update({
+        expires_at: new Date('2026-11-30T00:00:00Z'),
+        total_cents: quote.quote.totalCents + 500,
+        subtotal_cents: quote.quote.subtotalCents + 500,
+      });
     const res = await agent.post('/api/orders').send(orderBody(quote.quoteId)).expect(409);
     expect(res.body.error.message).toMatch(/worked out again with today's prices/);
     const details = res.body.error.details;
-    expect(details).toMatchObject({ reason: 'quote-expired', previousTotalCents: quote.quote.totalCents + 500, totalCents: quote.quote.totalCents, currency: 'USD' });
+    expect(details).toMatchObject({
+      reason: 'quote-expired',
+      previousTotalCents: quote.quote.totalCents + 500,
+      totalCents: quote.quote.totalCents,
+      currency: 'USD',
+    });
     expect(details.quoteId).toBeGreaterThan(quote.quoteId);
     await agent.post('/api/orders').send(orderBody(details.quoteId)).expect(201);
   });
@@ -140,17 +215,34 @@ describe('POST /api/orders', () => {
   it('when the date needed is inside the lead time, then it is 409 offering a rush quote, and too soon even for rush is refused on the date', async () => {
     const agent = await signedIn(priya);
     const quote = await storedQuote(agent);
-    const res = await agent.post('/api/orders').send(orderBody(quote.quoteId, { neededBy: rushOnlyDate })).expect(409);
+    const res = await agent
+      .post('/api/orders')
+      .send(orderBody(quote.quoteId, { neededBy: rushOnlyDate }))
+      .expect(409);
     const details = res.body.error.details;
-    expect(details).toMatchObject({ reason: 'rush-needed', isRush: true, previousTotalCents: quote.quote.totalCents, earliestReadyDate: '2026-12-15' });
+    expect(details).toMatchObject({
+      reason: 'rush-needed',
+      isRush: true,
+      previousTotalCents: quote.quote.totalCents,
+      earliestReadyDate: '2026-12-15',
+    });
     expect(details.totalCents).toBeGreaterThan(quote.quote.totalCents);
     const rushQuote = storedQuoteResponse.parse((await agent.get(`/api/quotes/${details.quoteId}`).expect(200)).body);
     expect(rushQuote.quote.lines.map((line) => line.code)).toContain('rush');
-    await agent.post('/api/orders').send(orderBody(details.quoteId, { neededBy: rushOnlyDate })).expect(201);
+    await agent
+      .post('/api/orders')
+      .send(orderBody(details.quoteId, { neededBy: rushOnlyDate }))
+      .expect(201);
 
-    const tooSoon = await agent.post('/api/orders').send(orderBody(details.quoteId, { neededBy: '2026-12-03' })).expect(409);
+    const tooSoon = await agent
+      .post('/api/orders')
+      .send(orderBody(details.quoteId, { neededBy: '2026-12-03' }))
+      .expect(409);
     expect(tooSoon.body.error.fields.neededBy).toMatch(/earliest is 2026-12-08/);
-    const past = await agent.post('/api/orders').send(orderBody(details.quoteId, { neededBy: '2026-11-20' })).expect(400);
+    const past = await agent
+      .post('/api/orders')
+      .send(orderBody(details.quoteId, { neededBy: '2026-11-20' }))
+      .expect(400);
     expect(past.body.error.fields).toEqual({ neededBy: 'Choose a date from today on' });
   });
 
@@ -158,8 +250,14 @@ describe('POST /api/orders', () => {
     const agent = await signedIn(priya);
     const quote = await storedQuote(agent);
     await (await signedIn(harriet)).post('/api/orders').send(orderBody(quote.quoteId)).expect(404);
-    await agent.post('/api/orders').send(orderBody(quote.quoteId, { designId: 5 })).expect(404);
-    const other = await agent.post('/api/orders').send(orderBody(quote.quoteId, { designId: 2 })).expect(409);
+    await agent
+      .post('/api/orders')
+      .send(orderBody(quote.quoteId, { designId: 5 }))
+      .expect(404);
+    const other = await agent
+      .post('/api/orders')
+      .send(orderBody(quote.quoteId, { designId: 2 }))
+      .expect(409);
     expect(other.body.error.message).toMatch(/another version of the design/);
   });
 });

@@ -17,15 +17,22 @@ type Agent = ReturnType<PaymentHarness['agent']>;
 
 const signedIn = (email: string): Promise<Agent> => signedInAgent(harness, email);
 
-const detail = async (agent: Agent, number: string) => customerOrderResponse.parse((await agent.get(`/api/orders/${number}`).expect(200)).body);
+const detail = async (agent: Agent, number: string) =>
+  customerOrderResponse.parse((await agent.get(`/api/orders/${number}`).expect(200)).body);
 
 // Seeded: Priya's orders are WB-1002 (shipped, part refunded), WB-1007 (changes asked), WB-1010 (card held) and
 // WB-1011 (cancelled); Harriet's WB-1008 waits on her answer to proof 2.
 describe('GET /api/orders', () => {
   it('when a customer lists their orders, then they see only their own, newest first', async () => {
-    const body = customerOrderListResponse.parse((await (await signedIn('priya@example.test')).get('/api/orders').expect(200)).body);
+    const body = customerOrderListResponse.parse(
+      (await (await signedIn('priya@example.test')).get('/api/orders').expect(200)).body,
+    );
     expect(body.orders.map((order) => order.number)).toEqual(['WB-1010', 'WB-1011', 'WB-1007', 'WB-1002']);
-    expect(body.orders.find((order) => order.number === 'WB-1010')).toMatchObject({ status: 'authorized', isWaitingOnCustomer: false, garmentName: expect.any(String) });
+    expect(body.orders.find((order) => order.number === 'WB-1010')).toMatchObject({
+      status: 'authorized',
+      isWaitingOnCustomer: false,
+      garmentName: expect.any(String),
+    });
   });
 
   it('when signed out, then it is 401', async () => {
@@ -40,15 +47,27 @@ describe('GET /api/orders/:number', () => {
     expect(order.order).toMatchObject({ number: 'WB-1002', status: 'shipped', paymentStatus: 'partially_refunded' });
     expect(order.quote.lines.reduce((sum, line) => sum + line.amountCents, 0)).toBe(order.order.totalCents);
     expect(order.quote.ruleSetVersion).toBeGreaterThanOrEqual(1);
-    expect(order.design).toMatchObject({ id: 3, garmentSlug: expect.any(String), colourHex: expect.stringMatching(/^#[0-9a-f]{6}$/i) });
+    expect(order.design).toMatchObject({
+      id: 3,
+      garmentSlug: expect.any(String),
+      colourHex: expect.stringMatching(/^#[0-9a-f]{6}$/i),
+    });
     expect(order.design.document.placements.length).toBeGreaterThan(0);
-    expect(order.payment).toMatchObject({ heldCents: 0, chargedCents: order.order.totalCents, refundedCents: 500, failureMessage: null });
+    expect(order.payment).toMatchObject({
+      heldCents: 0,
+      chargedCents: order.order.totalCents,
+      refundedCents: 500,
+      failureMessage: null,
+    });
     const titles = order.timeline.map((entry) => entry.title);
     expect(titles[0]).toBe('You placed the order');
     expect(titles).toContain('On its way (Parcel post SEEDPOST0002)');
     // The studio's own note about the late parcel stays in the studio; the refund's reason is the customer's to read.
     expect(order.timeline.some((entry) => entry.type === 'note_added')).toBe(false);
-    expect(order.timeline.find((entry) => entry.type === 'refunded')).toMatchObject({ title: '$5.00 refunded', note: 'Goodwill refund for the late delivery.' });
+    expect(order.timeline.find((entry) => entry.type === 'refunded')).toMatchObject({
+      title: '$5.00 refunded',
+      note: 'Goodwill refund for the late delivery.',
+    });
     expect(order.actions).toEqual([]);
   });
 
@@ -68,7 +87,15 @@ describe('proof answers', () => {
     const sent = await detail(agent, 'WB-1010');
     expect(sent.order.status).toBe('proof_sent');
     expect(sent.actions).toEqual(['request_changes', 'approve_proof', 'cancel']);
-    expect(sent.proofs).toEqual([expect.objectContaining({ version: 1, status: 'sent', source: 'render', isAnswerable: true, imageUrl: '/api/orders/WB-1010/proofs/1/image' })]);
+    expect(sent.proofs).toEqual([
+      expect.objectContaining({
+        version: 1,
+        status: 'sent',
+        source: 'render',
+        isAnswerable: true,
+        imageUrl: '/api/orders/WB-1010/proofs/1/image',
+      }),
+    ]);
 
     const image = await agent.get('/api/orders/WB-1010/proofs/1/image').expect(200);
     expect(image.headers['content-type']).toBe('image/png');
@@ -76,23 +103,46 @@ describe('proof answers', () => {
     await (await signedIn('tobias@wrenandbobbin.test')).get('/api/orders/WB-1010/proofs/1/image').expect(200);
 
     const pins = [{ xPct: 48.5, yPct: 81, comment: 'Could the daisies be a little smaller?' }];
-    await agent.post('/api/orders/WB-1010/proofs/1/change-request').send({ comment: 'Nearly there!', pins }).expect(200);
+    await agent
+      .post('/api/orders/WB-1010/proofs/1/change-request')
+      .send({ comment: 'Nearly there!', pins })
+      .expect(200);
     const asked = await detail(agent, 'WB-1010');
     expect(asked.order.status).toBe('changes_requested');
-    expect(asked.proofs[0]).toMatchObject({ status: 'changes_requested', customerComment: 'Nearly there!', pins, isAnswerable: false, respondedAt: '2026-12-01T10:00:00.000Z' });
+    expect(asked.proofs[0]).toMatchObject({
+      status: 'changes_requested',
+      customerComment: 'Nearly there!',
+      pins,
+      isAnswerable: false,
+      respondedAt: '2026-12-01T10:00:00.000Z',
+    });
     await agent.post('/api/orders/WB-1010/proofs/1/approval').send({}).expect(409);
 
-    expect(await sendTestProof(harness.db, { orderNumber: 'WB-1010', message: 'Smaller daisies, as you asked.', now: fixedNow() })).toBe(2);
+    expect(
+      await sendTestProof(harness.db, {
+        orderNumber: 'WB-1010',
+        message: 'Smaller daisies, as you asked.',
+        now: fixedNow(),
+      }),
+    ).toBe(2);
     await agent.post('/api/orders/WB-1010/proofs/1/approval').send({}).expect(409);
     await agent.post('/api/orders/WB-1010/proofs/3/approval').send({}).expect(404);
     await agent.post('/api/orders/WB-1010/proofs/2/approval').send({ comment: 'Perfect, thank you!' }).expect(200);
     const approved = await detail(agent, 'WB-1010');
     expect(approved.order.status).toBe('proof_approved');
     expect(approved.proofs.map((proof) => proof.status)).toEqual(['changes_requested', 'approved']);
-    expect(approved.timeline.map((entry) => entry.title).slice(-3)).toEqual(['You asked for changes to proof 1', 'Proof 2 is ready for you to look at', 'You approved proof 2']);
+    expect(approved.timeline.map((entry) => entry.title).slice(-3)).toEqual([
+      'You asked for changes to proof 1',
+      'Proof 2 is ready for you to look at',
+      'You approved proof 2',
+    ]);
     expect(approved.actions).toEqual(['cancel']);
 
-    const logged = await harness.db('email_log').where({ order_id: (await harness.db('orders').where({ number: 'WB-1010' }).first()).id }).whereIn('template', ['proof_approved', 'proof_approved_studio', 'changes_requested_studio']).orderBy('id');
+    const logged = await harness
+      .db('email_log')
+      .where({ order_id: (await harness.db('orders').where({ number: 'WB-1010' }).first()).id })
+      .whereIn('template', ['proof_approved', 'proof_approved_studio', 'changes_requested_studio'])
+      .orderBy('id');
     expect(logged.map((mail) => [mail.template, mail.to_email, mail.status])).toEqual([
       ['changes_requested_studio', 'studio@wrenandbobbin.test', 'sent'],
       ['proof_approved', 'priya@example.test', 'sent'],
@@ -103,14 +153,20 @@ describe('proof answers', () => {
 
   it('when the pins are off the picture, too many, or the change request says nothing, then it is 400 with the fields', async () => {
     const agent = await signedIn('harriet@example.test');
-    const off = await agent.post('/api/orders/WB-1008/proofs/2/change-request').send({ pins: [{ xPct: 120, yPct: 10, comment: 'here' }] }).expect(400);
+    const off = await agent
+      .post('/api/orders/WB-1008/proofs/2/change-request')
+      .send({ pins: [{ xPct: 120, yPct: 10, comment: 'here' }] })
+      .expect(400);
     expect(off.body.error.fields).toEqual({ 'pins.0.xPct': 'Place the pin on the picture' });
     const many = Array.from({ length: 21 }, () => ({ xPct: 10, yPct: 10, comment: 'here' }));
     const tooMany = await agent.post('/api/orders/WB-1008/proofs/2/change-request').send({ pins: many }).expect(400);
     expect(tooMany.body.error.fields.pins).toMatch(/at most 20 pins/);
     const empty = await agent.post('/api/orders/WB-1008/proofs/2/change-request').send({ comment: '  ' }).expect(400);
     expect(empty.body.error.fields).toEqual({ comment: 'Say what you would like changed' });
-    const long = await agent.post('/api/orders/WB-1008/proofs/2/change-request').send({ comment: 'x'.repeat(2001) }).expect(400);
+    const long = await agent
+      .post('/api/orders/WB-1008/proofs/2/change-request')
+      .send({ comment: 'x'.repeat(2001) })
+      .expect(400);
     expect(long.body.error.fields.comment).toMatch(/2000 characters/);
   });
 

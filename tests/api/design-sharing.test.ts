@@ -30,8 +30,12 @@ describe('anonymous access', () => {
 describe('POST /api/designs/:id/duplicate', () => {
   it('when Priya duplicates her own design, then a new design of hers holds the same garment and document, named as a copy', async () => {
     const priya = await signedIn('priya@example.test');
-    const original = savedDesignResponse.parse((await priya.get(`/api/designs/${priyasDesignId}`).expect(200)).body).design;
-    const copy = savedDesignResponse.parse((await priya.post(`/api/designs/${priyasDesignId}/duplicate`).expect(201)).body).design;
+    const original = savedDesignResponse.parse(
+      (await priya.get(`/api/designs/${priyasDesignId}`).expect(200)).body,
+    ).design;
+    const copy = savedDesignResponse.parse(
+      (await priya.post(`/api/designs/${priyasDesignId}/duplicate`).expect(201)).body,
+    ).design;
     expect(copy.id).not.toBe(original.id);
     expect(copy).toMatchObject({
       name: `${original.name} (copy)`,
@@ -49,15 +53,22 @@ describe('POST /api/designs/:id/duplicate', () => {
 
   it('when the design is part of an order, then the copy is a free design of its own that can be changed and deleted', async () => {
     const priya = await signedIn('priya@example.test');
-    const copy = savedDesignResponse.parse((await priya.post(`/api/designs/${priyasOrderedDesign.id}/duplicate`).expect(201)).body).design;
+    const copy = savedDesignResponse.parse(
+      (await priya.post(`/api/designs/${priyasOrderedDesign.id}/duplicate`).expect(201)).body,
+    ).design;
     await priya.patch(`/api/designs/${copy.id}`).send({ name: 'Try it in blue' }).expect(200);
     await priya.delete(`/api/designs/${copy.id}`).expect(204);
   });
 
-  it('when the name is already long, then the copy\'s name is shortened to fit 80 characters and still says it is a copy', async () => {
+  it("when the name is already long, then the copy's name is shortened to fit 80 characters and still says it is a copy", async () => {
     const priya = await signedIn('priya@example.test');
-    await priya.patch(`/api/designs/${priyasDesignId}`).send({ name: 'A'.repeat(80) }).expect(200);
-    const copy = savedDesignResponse.parse((await priya.post(`/api/designs/${priyasDesignId}/duplicate`).expect(201)).body).design;
+    await priya
+      .patch(`/api/designs/${priyasDesignId}`)
+      .send({ name: 'A'.repeat(80) })
+      .expect(200);
+    const copy = savedDesignResponse.parse(
+      (await priya.post(`/api/designs/${priyasDesignId}/duplicate`).expect(201)).body,
+    ).design;
     expect(copy.name).toBe(`${'A'.repeat(73)} (copy)`);
   });
 
@@ -81,7 +92,9 @@ describe('PATCH /api/designs/:id (rename)', () => {
   it('when Priya renames her ordered design, then only its name changes: the document stays as ordered', async () => {
     const priya = await signedIn('priya@example.test');
     const before = await designRow(priyasOrderedDesign.id);
-    const renamed = savedDesignResponse.parse((await priya.patch(`/api/designs/${priyasOrderedDesign.id}`).send({ name: '  Party dress  ' }).expect(200)).body).design;
+    const renamed = savedDesignResponse.parse(
+      (await priya.patch(`/api/designs/${priyasOrderedDesign.id}`).send({ name: '  Party dress  ' }).expect(200)).body,
+    ).design;
     expect(renamed.name).toBe('Party dress');
     const after = await designRow(priyasOrderedDesign.id);
     expect(after.document).toEqual(before.document);
@@ -89,9 +102,22 @@ describe('PATCH /api/designs/:id (rename)', () => {
 
   it('when the name is empty, too long or sent with other fields, then it is refused with a message for the field', async () => {
     const priya = await signedIn('priya@example.test');
-    expect(errorOf((await priya.patch(`/api/designs/${priyasDesignId}`).send({ name: '   ' }).expect(400)).body).fields).toEqual({ name: 'Give the design a name' });
-    expect(errorOf((await priya.patch(`/api/designs/${priyasDesignId}`).send({ name: 'x'.repeat(81) }).expect(400)).body).fields).toEqual({ name: 'Keep the name to 80 characters' });
-    const extra = errorOf((await priya.patch(`/api/designs/${priyasDesignId}`).send({ name: 'Ok', document: {} }).expect(400)).body);
+    expect(
+      errorOf((await priya.patch(`/api/designs/${priyasDesignId}`).send({ name: '   ' }).expect(400)).body).fields,
+    ).toEqual({ name: 'Give the design a name' });
+    expect(
+      errorOf(
+        (
+          await priya
+            .patch(`/api/designs/${priyasDesignId}`)
+            .send({ name: 'x'.repeat(81) })
+            .expect(400)
+        ).body,
+      ).fields,
+    ).toEqual({ name: 'Keep the name to 80 characters' });
+    const extra = errorOf(
+      (await priya.patch(`/api/designs/${priyasDesignId}`).send({ name: 'Ok', document: {} }).expect(400)).body,
+    );
     expect(extra.message).toMatch(/Leave out document/);
   });
 
@@ -107,9 +133,13 @@ describe('sharing a design by link', () => {
   it('when Priya shares her design, then the link opens it read-only for anyone, with no customer details, and again gives the same link', async () => {
     const priya = await signedIn('priya@example.test');
     const before = await designRow(priyasDesignId);
-    const { shareToken } = designShareResponse.parse((await priya.post(`/api/designs/${priyasDesignId}/share`).expect(200)).body);
+    const { shareToken } = designShareResponse.parse(
+      (await priya.post(`/api/designs/${priyasDesignId}/share`).expect(200)).body,
+    );
     expect(shareToken).toMatch(/^[A-Za-z0-9_-]{24}$/);
-    expect(designShareResponse.parse((await priya.post(`/api/designs/${priyasDesignId}/share`).expect(200)).body).shareToken).toBe(shareToken);
+    expect(
+      designShareResponse.parse((await priya.post(`/api/designs/${priyasDesignId}/share`).expect(200)).body).shareToken,
+    ).toBe(shareToken);
     // Sharing is not an edit: the list keeps the order of the customer's changes.
     expect((await designRow(priyasDesignId)).updated_at).toEqual(before.updated_at);
     const mine = savedDesignResponse.parse((await priya.get(`/api/designs/${priyasDesignId}`).expect(200)).body).design;
@@ -118,25 +148,39 @@ describe('sharing a design by link', () => {
     const visitor = harness.agent();
     const res = await visitor.get(`/api/shared-designs/${shareToken}`).expect(200);
     const { design } = sharedDesignResponse.parse(res.body);
-    expect(design).toEqual({ name: mine.name, garmentId: mine.garmentId, sizeId: mine.sizeId, colourId: mine.colourId, document: mine.document });
+    expect(design).toEqual({
+      name: mine.name,
+      garmentId: mine.garmentId,
+      sizeId: mine.sizeId,
+      colourId: mine.colourId,
+      document: mine.document,
+    });
     // Nothing that names or numbers the customer, nor the design's own id and dates.
     expect(Object.keys(res.body.design).sort()).toEqual(['colourId', 'document', 'garmentId', 'name', 'sizeId']);
     const priyaPerson = demoPeople.find((person) => person.email === 'priya@example.test')!;
     const text = JSON.stringify(res.body);
-    for (const secret of [priyaPerson.email, priyaPerson.name, priyaPerson.familyName, 'customer']) expect(text).not.toContain(secret);
+    for (const secret of [priyaPerson.email, priyaPerson.name, priyaPerson.familyName, 'customer'])
+      expect(text).not.toContain(secret);
   });
 
   it('when Priya stops sharing, then the link answers 404 for everyone, and sharing again makes a new link', async () => {
     const priya = await signedIn('priya@example.test');
-    const { shareToken } = designShareResponse.parse((await priya.post(`/api/designs/${priyasDesignId}/share`).expect(200)).body);
+    const { shareToken } = designShareResponse.parse(
+      (await priya.post(`/api/designs/${priyasDesignId}/share`).expect(200)).body,
+    );
     await priya.delete(`/api/designs/${priyasDesignId}/share`).expect(204);
     const gone = await harness.agent().get(`/api/shared-designs/${shareToken}`).expect(404);
-    expect(errorOf(gone.body)).toEqual({ kind: 'not-found', message: 'This link does not open a design: its owner may have stopped sharing it.' });
+    expect(errorOf(gone.body)).toEqual({
+      kind: 'not-found',
+      message: 'This link does not open a design: its owner may have stopped sharing it.',
+    });
     expect((await designRow(priyasDesignId)).share_token).toBeNull();
     // Switching off an unshared design is not an error.
     await priya.delete(`/api/designs/${priyasDesignId}/share`).expect(204);
 
-    const again = designShareResponse.parse((await priya.post(`/api/designs/${priyasDesignId}/share`).expect(200)).body).shareToken;
+    const again = designShareResponse.parse(
+      (await priya.post(`/api/designs/${priyasDesignId}/share`).expect(200)).body,
+    ).shareToken;
     expect(again).not.toBe(shareToken);
     await harness.agent().get(`/api/shared-designs/${shareToken}`).expect(404);
     await harness.agent().get(`/api/shared-designs/${again}`).expect(200);
@@ -144,14 +188,20 @@ describe('sharing a design by link', () => {
 
   it("when Priya shares or unshares Harriet's design, then it answers as a missing one and Harriet's design stays unshared", async () => {
     const priya = await signedIn('priya@example.test');
-    expect(errorOf((await priya.post(`/api/designs/${harrietsDesignId}/share`).expect(404)).body).message).toBe(`There is no design ${harrietsDesignId}.`);
-    expect(errorOf((await priya.delete(`/api/designs/${harrietsDesignId}/share`).expect(404)).body).message).toBe(`There is no design ${harrietsDesignId}.`);
+    expect(errorOf((await priya.post(`/api/designs/${harrietsDesignId}/share`).expect(404)).body).message).toBe(
+      `There is no design ${harrietsDesignId}.`,
+    );
+    expect(errorOf((await priya.delete(`/api/designs/${harrietsDesignId}/share`).expect(404)).body).message).toBe(
+      `There is no design ${harrietsDesignId}.`,
+    );
     expect((await designRow(harrietsDesignId)).share_token).toBeNull();
   });
 
-  it("when Harriet has shared her design, then Priya can view it by link but cannot stop sharing it or open it as her own", async () => {
+  it('when Harriet has shared her design, then Priya can view it by link but cannot stop sharing it or open it as her own', async () => {
     const harriet = await signedIn('harriet@example.test');
-    const { shareToken } = designShareResponse.parse((await harriet.post(`/api/designs/${harrietsDesignId}/share`).expect(200)).body);
+    const { shareToken } = designShareResponse.parse(
+      (await harriet.post(`/api/designs/${harrietsDesignId}/share`).expect(200)).body,
+    );
     const priya = await signedIn('priya@example.test');
     await priya.get(`/api/shared-designs/${shareToken}`).expect(200);
     await priya.delete(`/api/designs/${harrietsDesignId}/share`).expect(404);
@@ -161,14 +211,22 @@ describe('sharing a design by link', () => {
 
   it('when a link code is malformed or unknown, then it answers 400 or 404 without revealing anything', async () => {
     const visitor = harness.agent();
-    expect(errorOf((await visitor.get('/api/shared-designs/not%20a%20code').expect(400)).body).fields).toEqual({ token: 'must be the code from a shared link' });
-    expect(errorOf((await visitor.get(`/api/shared-designs/${'Z'.repeat(24)}`).expect(404)).body).kind).toBe('not-found');
+    expect(errorOf((await visitor.get('/api/shared-designs/not%20a%20code').expect(400)).body).fields).toEqual({
+      token: 'must be the code from a shared link',
+    });
+    expect(errorOf((await visitor.get(`/api/shared-designs/${'Z'.repeat(24)}`).expect(404)).body).kind).toBe(
+      'not-found',
+    );
   });
 
   it('when a shared design is deleted, then its link answers 404', async () => {
     const priya = await signedIn('priya@example.test');
-    const copy = savedDesignResponse.parse((await priya.post(`/api/designs/${priyasDesignId}/duplicate`).expect(201)).body).design;
-    const { shareToken } = designShareResponse.parse((await priya.post(`/api/designs/${copy.id}/share`).expect(200)).body);
+    const copy = savedDesignResponse.parse(
+      (await priya.post(`/api/designs/${priyasDesignId}/duplicate`).expect(201)).body,
+    ).design;
+    const { shareToken } = designShareResponse.parse(
+      (await priya.post(`/api/designs/${copy.id}/share`).expect(200)).body,
+    );
     await priya.delete(`/api/designs/${copy.id}`).expect(204);
     await harness.agent().get(`/api/shared-designs/${shareToken}`).expect(404);
   });

@@ -8,10 +8,12 @@ import { useApiHarness } from '../support/api-harness.ts';
 
 const harness = useApiHarness();
 
-const detailOf = async (slug: string) => garmentDetailResponse.parse((await request(harness.app).get(`/api/catalogue/garments/${slug}`).expect(200)).body).garment;
+const detailOf = async (slug: string) =>
+  garmentDetailResponse.parse((await request(harness.app).get(`/api/catalogue/garments/${slug}`).expect(200)).body)
+    .garment;
 
 describe('GET /api/catalogue/garments/:slug', () => {
-  it('when anyone asks for a garment, then it comes with a back drawing on the front drawing\'s viewBox and each size measured', async () => {
+  it("when anyone asks for a garment, then it comes with a back drawing on the front drawing's viewBox and each size measured", async () => {
     const bishop = await detailOf('bishop-dress');
     expect(bishop.mockupBackSvg).toContain('viewBox="0 0 460 470"');
     expect(bishop.mockupBackSvg).toContain('<title>Bishop dress, back</title>');
@@ -30,7 +32,9 @@ describe('GET /api/catalogue/garments/:slug', () => {
     const bonnet = await detailOf('sun-bonnet');
     expect(bonnet.sizes.every((size) => size.chestMm === null && size.lengthMm === null)).toBe(true);
     const bib = await detailOf('terry-bib');
-    expect(bib.sizes.map((size) => size.lengthMm)).toEqual([401, 402, 403, 404].map((id) => sizeMeasurements[id]!.lengthMm));
+    expect(bib.sizes.map((size) => size.lengthMm)).toEqual(
+      [401, 402, 403, 404].map((id) => sizeMeasurements[id]!.lengthMm),
+    );
     expect(bib.sizes.every((size) => size.chestMm === null)).toBe(true);
   });
 
@@ -38,7 +42,10 @@ describe('GET /api/catalogue/garments/:slug', () => {
     await harness.db('garments').where({ slug: 'sun-bonnet' }).update({ is_active: false });
     try {
       const res = await request(harness.app).get('/api/catalogue/garments/sun-bonnet').expect(404);
-      expect(apiErrorBody.parse(res.body).error).toEqual({ kind: 'not-found', message: 'There is no garment “sun-bonnet” on offer.' });
+      expect(apiErrorBody.parse(res.body).error).toEqual({
+        kind: 'not-found',
+        message: 'There is no garment “sun-bonnet” on offer.',
+      });
     } finally {
       await harness.db('garments').where({ slug: 'sun-bonnet' }).update({ is_active: true });
     }
@@ -50,7 +57,9 @@ describe('GET /api/catalogue/garments/:slug', () => {
 
 describe('GET /api/catalogue/motifs', () => {
   it('when anyone asks, then each motif carries its measured stitch count at 100 %', async () => {
-    const listed = motifListResponse.parse((await request(harness.app).get('/api/catalogue/motifs').expect(200)).body).motifs;
+    const listed = motifListResponse.parse(
+      (await request(harness.app).get('/api/catalogue/motifs').expect(200)).body,
+    ).motifs;
     for (const motif of listed) {
       const seeded = motifs.find((candidate) => candidate.slug === motif.slug)!;
       expect(motif.stitchCount, motif.slug).toBe(seeded.run + seeded.satin + seeded.fill);

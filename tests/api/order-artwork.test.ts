@@ -14,7 +14,12 @@ describe('the customer’s own pictures on an order, for the studio', () => {
     // WB-1009 places Harriet's granddaughter's sun drawing (upload 1) on the chest.
     const detail = orderDetailResponse.parse((await staff.get('/api/admin/orders/WB-1009').expect(200)).body);
     const [picture] = detail.items[0]!.artwork;
-    expect(picture).toMatchObject({ uploadId: 1, zone: 'chest', widthMm: 56, imageUrl: '/api/admin/orders/WB-1009/artwork/1/image' });
+    expect(picture).toMatchObject({
+      uploadId: 1,
+      zone: 'chest',
+      widthMm: 56,
+      imageUrl: '/api/admin/orders/WB-1009/artwork/1/image',
+    });
     const image = await staff.get(picture!.imageUrl).expect(200);
     expect(image.headers['content-type']).toMatch(/^image\/(svg\+xml|png)/);
     expect(image.headers['x-content-type-options']).toBe('nosniff');

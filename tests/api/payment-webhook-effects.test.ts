@@ -15,7 +15,14 @@ afterAll(async () => {
 });
 
 type Agent = ReturnType<PaymentHarness['agent']>;
-const shipTo = { name: 'Priya Castellanos', line1: '48 Larkspur Lane', city: 'Fernhollow', region: 'OR', postalCode: '97000', countryCode: 'US' };
+const shipTo = {
+  name: 'Priya Castellanos',
+  line1: '48 Larkspur Lane',
+  city: 'Fernhollow',
+  region: 'OR',
+  postalCode: '97000',
+  countryCode: 'US',
+};
 
 const priya = (): Promise<Agent> => signedInAgent(harness, 'priya@example.test');
 
@@ -23,19 +30,49 @@ const priya = (): Promise<Agent> => signedInAgent(harness, 'priya@example.test')
 async function placeOrder(agent: Agent) {
   const { design } = savedDesignResponse.parse((await agent.get('/api/designs/1').expect(200)).body);
   const quote = storedQuoteResponse.parse(
-    (await agent.post('/api/quotes').send({ garmentId: design.garmentId, sizeId: design.sizeId, colourId: design.colourId, quantity: 1, isRush: false, document: design.document, designId: 1 }).expect(201)).body,
+    (
+      await agent
+        .post('/api/quotes')
+        .send({
+          garmentId: design.garmentId,
+          sizeId: design.sizeId,
+          colourId: design.colourId,
+          quantity: 1,
+          isRush: false,
+          document: design.document,
+          designId: 1,
+        })
+        .expect(201)
+    ).body,
   );
-  const started = checkoutStartedResponse.parse((await agent.post('/api/orders').send({ quoteId: quote.quoteId, designId: 1, neededBy: '2026-12-18', shipTo }).expect(201)).body);
+  const started = checkoutStartedResponse.parse(
+    (
+      await agent
+        .post('/api/orders')
+        .send({ quoteId: quote.quoteId, designId: 1, neededBy: '2026-12-18', shipTo })
+        .expect(201)
+    ).body,
+  );
   return { ...started, totalCents: quote.quote.totalCents };
 }
 
 const orderRow = (number: string) => harness.db('orders').where({ number }).first();
-const paymentsOf = async (number: string) => harness.db('payments').where({ order_id: (await orderRow(number)).id }).orderBy('id');
-const detail = async (agent: Agent, number: string) => customerOrderResponse.parse((await agent.get(`/api/orders/${number}`).expect(200)).body);
+const paymentsOf = async (number: string) =>
+  harness
+    .db('payments')
+    .where({ order_id: (await orderRow(number)).id })
+    .orderBy('id');
+const detail = async (agent: Agent, number: string) =>
+  customerOrderResponse.parse((await agent.get(`/api/orders/${number}`).expect(200)).body);
 const lastEvent = (type: string) => harness.stripeState.events.findLast((event) => event.type === type)!;
 const stripeClient = () => {
   const { hostname, port } = new URL(harness.config.stripe.apiUrl!);
-  return new Stripe(harness.config.stripe.secretKey, { host: hostname, port: Number(port), protocol: 'http', maxNetworkRetries: 0 });
+  return new Stripe(harness.config.stripe.secretKey, {
+    host: hostname,
+    port: Number(port),
+    protocol: 'http',
+    maxNetworkRetries: 0,
+  });
 };
 
 describe('checkout.session.completed', () => {
@@ -49,7 +86,12 @@ describe('checkout.session.completed', () => {
     expect(row).toMatchObject({ status: 'authorized', payment_status: 'authorized' });
     expect(row.placed_at).not.toBeNull();
     const [payment] = await paymentsOf(order.number);
-    expect(payment).toMatchObject({ status: 'authorized', amount_authorized_cents: order.totalCents, amount_captured_cents: 0, payment_intent_id: expect.stringMatching(/^pi_test_/) });
+    expect(payment).toMatchObject({
+      status: 'authorized',
+      amount_authorized_cents: order.totalCents,
+      amount_captured_cents: 0,
+      payment_intent_id: expect.stringMatching(/^pi_test_/),
+    });
     // Online card authorizations lapse after 7 days (docs.stripe.com/payments/place-a-hold-on-a-payment-method).
     expect(payment.capture_before.getTime() - payment.authorized_at.getTime()).toBeGreaterThan(6.9 * 86_400_000);
     const mails = harness.mail.filter((mail) => mail.subject === `We have your order ${order.number}`);
@@ -61,7 +103,10 @@ describe('checkout.session.completed', () => {
     const events = await harness.db('order_events').where({ order_id: row.id, type: 'payment_authorized' });
     expect(events).toHaveLength(1);
     expect(harness.mail.filter((mail) => mail.subject === `We have your order ${order.number}`)).toHaveLength(1);
-    const processed = await harness.db('payment_webhook_events').where({ event_id: lastEvent('checkout.session.completed').id }).first();
+    const processed = await harness
+      .db('payment_webhook_events')
+      .where({ event_id: lastEvent('checkout.session.completed').id })
+      .first();
     expect(processed.processed_at).not.toBeNull();
 
     const page = await detail(agent, order.number);
@@ -75,12 +120,17 @@ describe('checkout.session.completed', () => {
     const order = await placeOrder(agent);
     await harness.pay(order.checkoutUrl);
     await harness.deliverNewEvents();
-    await harness.db('payments').where({ order_id: (await orderRow(order.number)).id }).update({ capture_before: new Date('2026-11-30T00:00:00Z') });
+    await harness
+      .db('payments')
+      .where({ order_id: (await orderRow(order.number)).id })
+      .update({ capture_before: new Date('2026-11-30T00:00:00Z') });
 
     const lapsed = await detail(agent, order.number);
     expect(lapsed.actions).toContain('pay');
     expect(lapsed.payment.failureMessage).toMatch(/hold on your card ran out/);
-    const retry = checkoutStartedResponse.parse((await agent.post(`/api/orders/${order.number}/payment`).expect(201)).body);
+    const retry = checkoutStartedResponse.parse(
+      (await agent.post(`/api/orders/${order.number}/payment`).expect(201)).body,
+    );
     await harness.pay(retry.checkoutUrl);
     await harness.deliverNewEvents();
 
@@ -112,7 +162,9 @@ describe('declined and abandoned payments', () => {
     expect(page.actions).toEqual(['pay', 'cancel']);
     expect(page.timeline.filter((entry) => entry.type === 'payment_failed')).toHaveLength(1);
 
-    const retry = checkoutStartedResponse.parse((await agent.post(`/api/orders/${order.number}/payment`).expect(201)).body);
+    const retry = checkoutStartedResponse.parse(
+      (await agent.post(`/api/orders/${order.number}/payment`).expect(201)).body,
+    );
     expect(retry.checkoutUrl).not.toBe(order.checkoutUrl);
   });
 
@@ -144,7 +196,14 @@ describe('declined and abandoned payments', () => {
     const agent = await priya();
     const order = await placeOrder(agent);
     const [payment] = await paymentsOf(order.number);
-    await harness.deliver({ id: `evt_expired_${payment.id}`, object: 'event', type: 'checkout.session.expired', data: { object: { id: payment.checkout_session_id, object: 'checkout.session', metadata: {} } } }).expect(200);
+    await harness
+      .deliver({
+        id: `evt_expired_${payment.id}`,
+        object: 'event',
+        type: 'checkout.session.expired',
+        data: { object: { id: payment.checkout_session_id, object: 'checkout.session', metadata: {} } },
+      })
+      .expect(200);
     expect((await paymentsOf(order.number))[0].status).toBe('failed');
     expect((await detail(agent, order.number)).payment.failureMessage).toMatch(/left open too long/);
   });
@@ -171,10 +230,17 @@ describe('events after the studio acts', () => {
     await harness.deliverNewEvents();
 
     const [payment] = await paymentsOf(order.number);
-    expect(payment).toMatchObject({ status: 'partially_refunded', amount_captured_cents: order.totalCents, amount_refunded_cents: 500 });
+    expect(payment).toMatchObject({
+      status: 'partially_refunded',
+      amount_captured_cents: order.totalCents,
+      amount_refunded_cents: 500,
+    });
     expect((await orderRow(order.number)).payment_status).toBe('partially_refunded');
     await harness.deliver({ ...lastEvent('payment_intent.succeeded'), id: 'evt_replayed_capture' }).expect(200);
-    expect((await paymentsOf(order.number))[0]).toMatchObject({ status: 'partially_refunded', amount_refunded_cents: 500 });
+    expect((await paymentsOf(order.number))[0]).toMatchObject({
+      status: 'partially_refunded',
+      amount_refunded_cents: 500,
+    });
   });
 
   it('when the customer cancels with a card held, then the hold is released at the provider, and its cancelled event is a no-op', async () => {
@@ -188,7 +254,12 @@ describe('events after the studio acts', () => {
     expect(harness.stripeState.paymentIntents.get(payment.payment_intent_id)!.status).toBe('canceled');
     await harness.deliverNewEvents();
     expect(await orderRow(order.number)).toMatchObject({ status: 'cancelled', payment_status: 'voided' });
-    expect(harness.mail.some((mail) => mail.subject === `${order.number} has been cancelled` && /hold on your card is released/.test(mail.text))).toBe(true);
+    expect(
+      harness.mail.some(
+        (mail) =>
+          mail.subject === `${order.number} has been cancelled` && /hold on your card is released/.test(mail.text),
+      ),
+    ).toBe(true);
     await agent.post(`/api/orders/${order.number}/cancel`).expect(409);
   });
 });

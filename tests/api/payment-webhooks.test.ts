@@ -13,7 +13,12 @@ function signedDelivery(payload: string, secret = harness.config.stripe.webhookS
 }
 
 describe('POST /api/webhooks/stripe', () => {
-  const event = JSON.stringify({ id: 'evt_test_hooks_1', object: 'event', type: 'payment_intent.succeeded', data: { object: {} } });
+  const event = JSON.stringify({
+    id: 'evt_test_hooks_1',
+    object: 'event',
+    type: 'payment_intent.succeeded',
+    data: { object: {} },
+  });
 
   it('when the signature is wrong, then the event is refused with 400 and not recorded', async () => {
     const res = await request(harness.app)
@@ -28,7 +33,11 @@ describe('POST /api/webhooks/stripe', () => {
   });
 
   it('when the signature header is missing, then it answers 400', async () => {
-    await request(harness.app).post('/api/webhooks/stripe').set('Content-Type', 'application/json').send(event).expect(400);
+    await request(harness.app)
+      .post('/api/webhooks/stripe')
+      .set('Content-Type', 'application/json')
+      .send(event)
+      .expect(400);
   });
 
   it('when a signed event arrives twice, then it is recorded once and the second delivery is acknowledged', async () => {

@@ -24,13 +24,18 @@ const binary = (res: request.Response, done: (error: Error | null, body: Buffer)
 };
 
 async function fetchPdf(number: string, paper: string): Promise<Buffer> {
-  const res = await staff.get(`${sheetPath(number)}.pdf?paper=${paper}`).buffer(true).parse(binary).expect(200);
+  const res = await staff
+    .get(`${sheetPath(number)}.pdf?paper=${paper}`)
+    .buffer(true)
+    .parse(binary)
+    .expect(200);
   expect(res.headers['content-type']).toBe('application/pdf');
   return res.body as Buffer;
 }
 
 const near = (actual: number, expected: number, tolerance = 0.01) => Math.abs(actual - expected) <= tolerance;
-const hasSquare = (page: PdfPage, sidePt: number) => page.paths.some((path) => near(path.widthPt, sidePt) && near(path.heightPt, sidePt));
+const hasSquare = (page: PdfPage, sidePt: number) =>
+  page.paths.some((path) => near(path.widthPt, sidePt) && near(path.heightPt, sidePt));
 
 describe('GET /api/admin/orders/:number/production-sheet', () => {
   let sheet: ProductionSheet;
@@ -41,13 +46,39 @@ describe('GET /api/admin/orders/:number/production-sheet', () => {
   it('when staff open the worked case, then the hooping plan is the engine’s: 4 hoopings of one 173 mm repeat in the 120 × 180 hoop, centre first', () => {
     const border = sheet.placements.find((placement) => placement.kind === 'border')!;
     expect(border.hoop?.slug).toBe('oblong-120x180');
-    expect(border.border).toMatchObject({ count: 4, repeatWidthMm: 173, pitchMm: 173, runLengthMm: 692, isClosed: true, perHooping: 1 });
+    expect(border.border).toMatchObject({
+      count: 4,
+      repeatWidthMm: 173,
+      pitchMm: 173,
+      runLengthMm: 692,
+      isClosed: true,
+      perHooping: 1,
+    });
     // The engine's own plan for the same figures: 692 / 4 = 173 mm, the first centre half a repeat from the start.
-    const engine = planHoopings({ count: 4, repeatWidthMm: 173, pitchMm: 173, motifHeightMm: 40 * (173 / 180), hoop: { fieldWidthMm: 120, fieldHeightMm: 180 }, firstCenterMm: 86.5 });
+    const engine = planHoopings({
+      count: 4,
+      repeatWidthMm: 173,
+      pitchMm: 173,
+      motifHeightMm: 40 * (173 / 180),
+      hoop: { fieldWidthMm: 120, fieldHeightMm: 180 },
+      firstCenterMm: 86.5,
+    });
     expect(engine.ok).toBe(true);
     if (!engine.ok) return;
-    expect(border.border!.hoopings.map((h) => ({ order: h.order, repeats: h.repeatNumbers.map((n) => n - 1), side: h.side, fromRowStartMm: h.fromRowStartMm }))).toEqual(
-      engine.hoopings.map((h) => ({ order: h.order, repeats: h.repeatIndices, side: h.side, fromRowStartMm: h.centerMm })),
+    expect(
+      border.border!.hoopings.map((h) => ({
+        order: h.order,
+        repeats: h.repeatNumbers.map((n) => n - 1),
+        side: h.side,
+        fromRowStartMm: h.fromRowStartMm,
+      })),
+    ).toEqual(
+      engine.hoopings.map((h) => ({
+        order: h.order,
+        repeats: h.repeatIndices,
+        side: h.side,
+        fromRowStartMm: h.centerMm,
+      })),
     );
     expect(border.border!.hoopings[0].side).toBe('center');
   });
@@ -69,7 +100,9 @@ describe('GET /api/admin/orders/:number/production-sheet', () => {
     expect(sheet.needle).toMatchObject({ size: '75/11', point: 'sharp' });
     expect(sheet.runMinutes.totalMinutes).toBeGreaterThan(0);
     // The engine's garmentCautions for the youngest wearer (6 months): secure thread ends, check local rules.
-    expect(sheet.cautions.map((caution) => caution.code)).toEqual(expect.arrayContaining(['caution.thread-ends', 'caution.local-rules']));
+    expect(sheet.cautions.map((caution) => caution.code)).toEqual(
+      expect.arrayContaining(['caution.thread-ends', 'caution.local-rules']),
+    );
     expect(sheet.templates.map((template) => template.placementId)).toEqual(['hem', 'lamb']);
     // Common practice, no source: the trade's worked case resizes a 180 mm motif to 173 mm for a 692 mm loop.
     expect(sheet.templates[0].artwork.widthMm).toBeCloseTo(173, 6);
@@ -96,7 +129,9 @@ describe('GET /api/admin/orders/:number/production-sheet', () => {
     await customer.get(sheetPath(WORKED_ORDER)).expect(403);
     await customer.get(`${sheetPath(WORKED_ORDER)}.pdf`).expect(403);
     await request(harness.app).get(sheetPath(WORKED_ORDER)).expect(401);
-    await request(harness.app).get(`${sheetPath(WORKED_ORDER)}.pdf?paper=a4`).expect(401);
+    await request(harness.app)
+      .get(`${sheetPath(WORKED_ORDER)}.pdf?paper=a4`)
+      .expect(401);
   });
 
   it('when the order is for two garments (WB-1004), then the order’s machine time counts both and the setup once', async () => {
@@ -107,7 +142,10 @@ describe('GET /api/admin/orders/:number/production-sheet', () => {
   });
 
   it('when every approved seeded order is opened, then each has a sheet', async () => {
-    const numbers = (await harness.db('orders').whereIn('status', ['proof_approved', 'in_production', 'stitched', 'shipped']).pluck('number')) as string[];
+    const numbers = (await harness
+      .db('orders')
+      .whereIn('status', ['proof_approved', 'in_production', 'stitched', 'shipped'])
+      .pluck('number')) as string[];
     expect(numbers.length).toBeGreaterThanOrEqual(5);
     for (const number of numbers) productionSheetResponse.parse((await staff.get(sheetPath(number)).expect(200)).body);
   });
@@ -162,6 +200,8 @@ describe('a production sheet for the customer’s own artwork', () => {
     const drawing = sheet.placements.find((placement) => placement.kind === 'artwork');
     expect(drawing).toBeDefined();
     expect(drawing!.stitches).toBeGreaterThan(0);
-    expect((await staff.get(`${sheetPath('WB-1009')}.pdf?paper=a4`).expect(200)).headers['content-type']).toMatch(/pdf/);
+    expect((await staff.get(`${sheetPath('WB-1009')}.pdf?paper=a4`).expect(200)).headers['content-type']).toMatch(
+      /pdf/,
+    );
   });
 });

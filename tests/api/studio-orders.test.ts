@@ -2,9 +2,18 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import type { Express } from 'express';
 import type Stripe from 'stripe';
-import { dueOrdersResponse, orderActionResponse, orderBoardResponse } from '../../server/src/contracts/studio-orders.ts';
+import {
+  dueOrdersResponse,
+  orderActionResponse,
+  orderBoardResponse,
+} from '../../server/src/contracts/studio-orders.ts';
 import { fixedNow, type ApiHarness } from '../support/api-harness.ts';
-import { approveLatestProofAsCustomer, holdCardAtFake, inAWeek, startStudioHarness } from '../support/studio-order-support.ts';
+import {
+  approveLatestProofAsCustomer,
+  holdCardAtFake,
+  inAWeek,
+  startStudioHarness,
+} from '../support/studio-order-support.ts';
 
 let studio: Awaited<ReturnType<typeof startStudioHarness>>;
 let harness: ApiHarness;
@@ -20,7 +29,8 @@ afterAll(async () => {
   await studio.close();
 });
 
-const board = async (query: string) => orderBoardResponse.parse((await staff.get(`/api/admin/orders${query}`).expect(200)).body);
+const board = async (query: string) =>
+  orderBoardResponse.parse((await staff.get(`/api/admin/orders${query}`).expect(200)).body);
 const numbers = (response: { rows: { number: string }[] }) => response.rows.map((row) => row.number);
 
 describe('GET /api/admin/orders (the board)', () => {
@@ -32,7 +42,12 @@ describe('GET /api/admin/orders (the board)', () => {
     expect(placed).toEqual([...placed].sort().reverse());
     expect(page.rows.at(-1)).toMatchObject({ number: 'WB-1012', status: 'awaiting_payment', placedAt: null });
     const clara = page.rows.find((row) => row.number === 'WB-1010')!;
-    expect(clara).toMatchObject({ status: 'authorized', paymentStatus: 'authorized', neededBy: '2026-12-06', currency: 'USD' });
+    expect(clara).toMatchObject({
+      status: 'authorized',
+      paymentStatus: 'authorized',
+      neededBy: '2026-12-06',
+      currency: 'USD',
+    });
     expect(clara.itemSummary).toMatch(/^\d+ × /);
     expect(clara.customer.email).toMatch(/@example\.test$/);
   });
@@ -46,7 +61,17 @@ describe('GET /api/admin/orders (the board)', () => {
   });
 
   it('when staff search, then order numbers match by their start and customers by their e-mail or any word of their name', async () => {
-    expect(numbers(await board('?q=WB-100&sort=number&dir=asc'))).toEqual(['WB-1001', 'WB-1002', 'WB-1003', 'WB-1004', 'WB-1005', 'WB-1006', 'WB-1007', 'WB-1008', 'WB-1009']);
+    expect(numbers(await board('?q=WB-100&sort=number&dir=asc'))).toEqual([
+      'WB-1001',
+      'WB-1002',
+      'WB-1003',
+      'WB-1004',
+      'WB-1005',
+      'WB-1006',
+      'WB-1007',
+      'WB-1008',
+      'WB-1009',
+    ]);
     expect(numbers(await board('?q=1007'))).toEqual(['WB-1007']);
     const bySurname = await board('?q=castell');
     expect(bySurname.total).toBeGreaterThan(0);
@@ -73,7 +98,11 @@ describe('GET /api/admin/orders (the board)', () => {
     expect(third.rows).toHaveLength(3);
     const totals = first.rows.map((row) => row.totalCents);
     expect(totals).toEqual([...totals].sort((a, b) => b - a));
-    const all = [...numbers(first), ...numbers(await board('?sort=total&dir=desc&pageSize=5&page=2')), ...numbers(third)];
+    const all = [
+      ...numbers(first),
+      ...numbers(await board('?sort=total&dir=desc&pageSize=5&page=2')),
+      ...numbers(third),
+    ];
     expect(new Set(all).size).toBe(13);
     const byStatus = await board('?sort=status&dir=asc&pageSize=100');
     expect(byStatus.rows[0]!.status).toBe('awaiting_payment');
@@ -108,9 +137,19 @@ describe('GET /api/admin/orders (the board)', () => {
 
 describe('GET /api/admin/orders/due (the calendar)', () => {
   it('when staff ask for December, then open orders due in it come soonest first, with overdue ones before them', async () => {
-    const due = dueOrdersResponse.parse((await staff.get('/api/admin/orders/due?from=2026-12-01&to=2026-12-31').expect(200)).body);
+    const due = dueOrdersResponse.parse(
+      (await staff.get('/api/admin/orders/due?from=2026-12-01&to=2026-12-31').expect(200)).body,
+    );
     expect(due.today).toBe('2026-12-01');
-    expect(due.orders.map((order) => order.number)).toEqual(['WB-1009', 'WB-1003', 'WB-1010', 'WB-1013', 'WB-1004', 'WB-1008', 'WB-1007']);
+    expect(due.orders.map((order) => order.number)).toEqual([
+      'WB-1009',
+      'WB-1003',
+      'WB-1010',
+      'WB-1013',
+      'WB-1004',
+      'WB-1008',
+      'WB-1007',
+    ]);
     expect(due.orders[0]!.isOverdue).toBe(true);
     expect(due.orders.every((order) => !['shipped', 'cancelled', 'refunded'].includes(order.status))).toBe(true);
   });
@@ -124,41 +163,88 @@ describe('GET /api/admin/orders/due (the calendar)', () => {
 
 describe('the studio moves an order along', () => {
   it('when staff proof, charge, stitch, ship and refund an order, then each step moves it and the customer hears of each', async () => {
-    await staff.post('/api/admin/orders/WB-1009/proofs').send({ source: 'render', message: 'Your sun, drawn on the romper.' }).expect(201);
+    await staff
+      .post('/api/admin/orders/WB-1009/proofs')
+      .send({ source: 'render', message: 'Your sun, drawn on the romper.' })
+      .expect(201);
     await approveLatestProofAsCustomer(harness.db, 'WB-1009', fixedNow());
     await holdCardAtFake(harness.db, stripe, 'WB-1009', inAWeek);
     const charged = orderActionResponse.parse((await staff.post('/api/admin/orders/WB-1009/capture').expect(200)).body);
     expect(charged.status).toBe('in_production');
 
     expect((await staff.post('/api/admin/orders/WB-1009/stitched').expect(200)).body.status).toBe('stitched');
-    const shipped = await staff.post('/api/admin/orders/WB-1009/shipped').send({ trackingNumber: 'LOCAL 0042' }).expect(200);
+    const shipped = await staff
+      .post('/api/admin/orders/WB-1009/shipped')
+      .send({ trackingNumber: 'LOCAL 0042' })
+      .expect(200);
     expect(shipped.body.status).toBe('shipped');
 
-    const partial = orderActionResponse.parse((await staff.post('/api/admin/orders/WB-1009/refunds').send({ amountCents: 500, reason: 'The parcel was late.' }).expect(200)).body);
+    const partial = orderActionResponse.parse(
+      (
+        await staff
+          .post('/api/admin/orders/WB-1009/refunds')
+          .send({ amountCents: 500, reason: 'The parcel was late.' })
+          .expect(200)
+      ).body,
+    );
     expect(partial).toMatchObject({ status: 'shipped', paymentStatus: 'partially_refunded', refundedCents: 500 });
-    const tooMuch = await staff.post('/api/admin/orders/WB-1009/refunds').send({ amountCents: charged.capturedCents, reason: 'All of it' }).expect(400);
+    const tooMuch = await staff
+      .post('/api/admin/orders/WB-1009/refunds')
+      .send({ amountCents: charged.capturedCents, reason: 'All of it' })
+      .expect(400);
     expect(tooMuch.body.error.fields.amountCents).toMatch(/at most/);
-    const rest = orderActionResponse.parse((await staff.post('/api/admin/orders/WB-1009/refunds').send({ reason: 'The romper was stitched on the wrong size.' }).expect(200)).body);
+    const rest = orderActionResponse.parse(
+      (
+        await staff
+          .post('/api/admin/orders/WB-1009/refunds')
+          .send({ reason: 'The romper was stitched on the wrong size.' })
+          .expect(200)
+      ).body,
+    );
     expect(rest).toMatchObject({ status: 'refunded', paymentStatus: 'refunded', refundedCents: charged.capturedCents });
 
     const order = await harness.db('orders').where({ number: 'WB-1009' }).first('id');
-    const templates = (await harness.db('email_log').where({ order_id: order.id }).orderBy('id').pluck('template')) as string[];
+    const templates = (await harness
+      .db('email_log')
+      .where({ order_id: order.id })
+      .orderBy('id')
+      .pluck('template')) as string[];
     expect(templates.slice(-4)).toEqual(['proof_ready', 'order_shipped', 'refund_issued', 'refund_issued']);
-    const shippedMail = await harness.db('email_log').where({ order_id: order.id, template: 'order_shipped' }).first('text_body');
+    const shippedMail = await harness
+      .db('email_log')
+      .where({ order_id: order.id, template: 'order_shipped' })
+      .first('text_body');
     expect(shippedMail.text_body).toContain('LOCAL 0042');
     const refunds = [...fake.state.refunds.values()].map((refund) => refund.amount);
     expect(refunds).toEqual([500, charged.capturedCents - 500]);
-    const types = (await harness.db('order_events').where({ order_id: order.id }).orderBy('id').pluck('type')) as string[];
-    expect(types.slice(-6)).toEqual(['proof_approved', 'payment_captured', 'stitched', 'shipped', 'refunded', 'refunded']);
+    const types = (await harness
+      .db('order_events')
+      .where({ order_id: order.id })
+      .orderBy('id')
+      .pluck('type')) as string[];
+    expect(types.slice(-6)).toEqual([
+      'proof_approved',
+      'payment_captured',
+      'stitched',
+      'shipped',
+      'refunded',
+      'refunded',
+    ]);
   });
 
   it('when staff cancel an order with a held card, then the hold is released, the order is cancelled and the customer told', async () => {
     const intentId = await holdCardAtFake(harness.db, stripe, 'WB-1010', inAWeek);
-    const res = await staff.post('/api/admin/orders/WB-1010/cancel').send({ reason: 'The party was called off.' }).expect(200);
+    const res = await staff
+      .post('/api/admin/orders/WB-1010/cancel')
+      .send({ reason: 'The party was called off.' })
+      .expect(200);
     expect(orderActionResponse.parse(res.body)).toMatchObject({ status: 'cancelled', paymentStatus: 'voided' });
     expect(fake.state.paymentIntents.get(intentId)!.status).toBe('canceled');
     const order = await harness.db('orders').where({ number: 'WB-1010' }).first('id');
-    const mail = await harness.db('email_log').where({ order_id: order.id, template: 'order_cancelled' }).first('text_body');
+    const mail = await harness
+      .db('email_log')
+      .where({ order_id: order.id, template: 'order_cancelled' })
+      .first('text_body');
     expect(mail.text_body).toContain('The party was called off.');
     expect(mail.text_body).toContain('hold on your card has been released');
   });
@@ -169,7 +255,11 @@ describe('the studio moves an order along', () => {
       ['/api/admin/orders/WB-1004/shipped', {}, /Only a stitched order can be shipped/],
       ['/api/admin/orders/WB-1004/cancel', { reason: 'Changed mind' }, /refund it instead of cancelling/],
       ['/api/admin/orders/WB-1008/refunds', { reason: 'Why not' }, /cancel it to release the card/],
-      ['/api/admin/orders/WB-1011/cancel', { reason: 'Again' }, /This order is cancelled; nothing more can be done to it/],
+      [
+        '/api/admin/orders/WB-1011/cancel',
+        { reason: 'Again' },
+        /This order is cancelled; nothing more can be done to it/,
+      ],
       ['/api/admin/orders/WB-1005/refunds', { reason: 'Again' }, /This order is refunded/],
     ];
     for (const [path, body, reason] of cases) {
@@ -197,7 +287,9 @@ function adminRoutes(app: Express): { method: string; path: string }[] {
   const walk = (stack: Layer[], prefix: string) => {
     for (const layer of stack) {
       const path = typeof layer.rawPath === 'string' && layer.rawPath !== '/' ? layer.rawPath : '';
-      if (layer.route) for (const method of Object.keys(layer.route.methods)) found.push({ method, path: layer.route.path === '/' ? prefix : prefix + layer.route.path });
+      if (layer.route)
+        for (const method of Object.keys(layer.route.methods))
+          found.push({ method, path: layer.route.path === '/' ? prefix : prefix + layer.route.path });
       else if (layer.handle.stack) walk(layer.handle.stack, prefix + path);
     }
   };
@@ -206,20 +298,44 @@ function adminRoutes(app: Express): { method: string; path: string }[] {
 }
 
 describe('who may use the studio’s routes', () => {
-  const sample = (path: string) => path.replace(':number', 'WB-1004').replace(/:[a-zA-Z]+/g, '1').replace(/\{?\/?\*[a-zA-Z]+\}?/g, '/x');
+  const sample = (path: string) =>
+    path
+      .replace(':number', 'WB-1004')
+      .replace(/:[a-zA-Z]+/g, '1')
+      .replace(/\{?\/?\*[a-zA-Z]+\}?/g, '/x');
 
   it('when a customer or a signed-out visitor calls any admin route, then every one is refused (403 and 401) and nothing changes', async () => {
     const routes = adminRoutes(harness.app);
-    const mine = ['get /api/admin/orders', 'get /api/admin/orders/due', 'post /api/admin/orders/:number/proofs', 'get /api/admin/orders/:number/proofs/preview', 'get /api/admin/orders/:number/proofs/:version/image', 'post /api/admin/orders/:number/capture', 'post /api/admin/orders/:number/cancel', 'post /api/admin/orders/:number/refunds', 'post /api/admin/orders/:number/stitched', 'post /api/admin/orders/:number/shipped', 'get /api/admin/orders/:number'];
+    const mine = [
+      'get /api/admin/orders',
+      'get /api/admin/orders/due',
+      'post /api/admin/orders/:number/proofs',
+      'get /api/admin/orders/:number/proofs/preview',
+      'get /api/admin/orders/:number/proofs/:version/image',
+      'post /api/admin/orders/:number/capture',
+      'post /api/admin/orders/:number/cancel',
+      'post /api/admin/orders/:number/refunds',
+      'post /api/admin/orders/:number/stitched',
+      'post /api/admin/orders/:number/shipped',
+      'get /api/admin/orders/:number',
+    ];
     expect(routes.map((route) => `${route.method} ${route.path}`)).toEqual(expect.arrayContaining(mine));
     const customer = harness.agent();
     await harness.signIn(customer, 'harriet@example.test');
     const before = await harness.db('orders').select('number', 'status', 'payment_status').orderBy('id');
     for (const { method, path } of routes) {
       const url = sample(path);
-      const send = (client: ReturnType<typeof request.agent>) => (client as unknown as Record<string, (url: string) => request.Test>)[method]!(url).send({ reason: 'x', source: 'render', message: 'x' });
+      const send = (client: ReturnType<typeof request.agent>) =>
+        (client as unknown as Record<string, (url: string) => request.Test>)[method]!(url).send({
+          reason: 'x',
+          source: 'render',
+          message: 'x',
+        });
       expect((await send(customer)).status, `${method} ${url} as a customer`).toBe(403);
-      expect((await send(request.agent(harness.app).set('Origin', harness.config.appOrigin))).status, `${method} ${url} signed out`).toBe(401);
+      expect(
+        (await send(request.agent(harness.app).set('Origin', harness.config.appOrigin))).status,
+        `${method} ${url} signed out`,
+      ).toBe(401);
     }
     expect(await harness.db('orders').select('number', 'status', 'payment_status').orderBy('id')).toEqual(before);
   });

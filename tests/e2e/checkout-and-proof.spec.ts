@@ -10,7 +10,10 @@ test.describe.configure({ mode: 'serial', timeout: 90_000 });
 
 const price = (page: Page) => page.getByRole('region', { name: 'Your price' });
 const onTheGarment = (page: Page) => page.getByRole('region', { name: 'On the garment' });
-const totalOf = async (page: Page) => (await price(page).getByRole('row', { name: /^Total/ }).textContent())!;
+const totalOf = async (page: Page) =>
+  (await price(page)
+    .getByRole('row', { name: /^Total/ })
+    .textContent())!;
 const screens = (name: string) => `test-results/screens/checkout-${name}.png`;
 
 /** A month ahead: well past the studio's lead time, so the order is not a rush. */
@@ -35,7 +38,9 @@ async function payWith(page: Page, cardNumber: string) {
 
 let orderNumber = '';
 
-test('when Priya designs a bishop dress, orders it and pays with the test card, then the order waits for its proof with the card held', async ({ page }) => {
+test('when Priya designs a bishop dress, orders it and pays with the test card, then the order waits for its proof with the card held', async ({
+  page,
+}) => {
   await page.goto('/design/bishop-dress');
   await page.getByText('Add a border', { exact: true }).click();
   await page.getByRole('radio', { name: /Front only/ }).check({ force: true });
@@ -45,7 +50,9 @@ test('when Priya designs a bishop dress, orders it and pays with the test card, 
   const frontTotal = await totalOf(page);
 
   // All the way round the 692 mm hem the border takes 4 repeats instead of 2 (common practice, no source: 4 × 173 mm).
-  await onTheGarment(page).getByRole('radio', { name: /All the way round/ }).check({ force: true });
+  await onTheGarment(page)
+    .getByRole('radio', { name: /All the way round/ })
+    .check({ force: true });
   await expect(onTheGarment(page)).toContainText('4 repeats all the way round');
   await expect(price(page).getByRole('row', { name: /^Total/ })).not.toHaveText(frontTotal);
   await page.getByText('Add a name', { exact: true }).click();
@@ -83,11 +90,16 @@ test('when Priya designs a bishop dress, orders it and pays with the test card, 
   await expect(page.getByRole('heading', { name: `Order ${orderNumber}` })).toBeVisible();
   await expect(page.getByText('Proof on its way')).toBeVisible();
   await expect(page.getByRole('region', { name: 'Payment' })).toContainText('is held on your card, not charged');
-  await expect(page.getByRole('list', { name: 'Where your order is' }).getByRole('listitem').nth(1)).toHaveAttribute('aria-current', 'step');
+  await expect(page.getByRole('list', { name: 'Where your order is' }).getByRole('listitem').nth(1)).toHaveAttribute(
+    'aria-current',
+    'step',
+  );
   await page.screenshot({ path: screens('order-authorized'), fullPage: true });
 });
 
-test('when the card is declined, then the payment page says so, nothing is charged, and another card from the order page goes through', async ({ page }) => {
+test('when the card is declined, then the payment page says so, nothing is charged, and another card from the order page goes through', async ({
+  page,
+}) => {
   await page.goto('/orders');
   await signInAs(page, 'Priya Castellanos');
   await page.goto('/design/bishop-dress');
@@ -102,7 +114,9 @@ test('when the card is declined, then the payment page says so, nothing is charg
   await yourOrder.getByText('18 months', { exact: true }).click();
   await expect(yourOrder.getByRole('radio', { name: '18 months' })).toBeChecked();
   await expect(page.getByText('Your design is carried to this size')).toBeVisible();
-  await expect(page.getByRole('complementary', { name: 'Your order' }).getByRole('cell', { name: /size 18 months/ })).toBeVisible();
+  await expect(
+    page.getByRole('complementary', { name: 'Your order' }).getByRole('cell', { name: /size 18 months/ }),
+  ).toBeVisible();
   await page.getByLabel('Needed by').fill(neededBy);
   await fillAddress(page);
   await page.getByRole('button', { name: 'Continue to payment' }).click();
@@ -137,7 +151,9 @@ test('when the card is declined, then the payment page says so, nothing is charg
   await expect(page.getByRole('region', { name: 'Payment' })).toContainText('is held on your card, not charged');
 });
 
-test('when the studio sends proofs, then Priya pins a change on the first, approves the second, and the e-mails arrive', async ({ page }) => {
+test('when the studio sends proofs, then Priya pins a change on the first, approves the second, and the e-mails arrive', async ({
+  page,
+}) => {
   test.skip(!orderNumber, 'needs the order placed by the first journey');
   const db = openDatabase(loadDatabaseConfig());
   try {
@@ -150,7 +166,9 @@ test('when the studio sends proofs, then Priya pins a change on the first, appro
 
     // Tap the picture near the hem to drop a pin there; a second pin is added from the keyboard.
     const picture = proof.getByRole('img', { name: /Proof version 1/ });
-    await expect.poll(() => picture.evaluate((image: HTMLImageElement) => image.complete && image.naturalWidth)).toBeGreaterThan(0);
+    await expect
+      .poll(() => picture.evaluate((image: HTMLImageElement) => image.complete && image.naturalWidth))
+      .toBeGreaterThan(0);
     const box = (await picture.boundingBox())!;
     await picture.click({ position: { x: box.width * 0.5, y: box.height * 0.82 } });
     await proof.getByLabel('What should change at pin 1?').fill('Could the daisies be a little smaller?');
@@ -162,7 +180,11 @@ test('when the studio sends proofs, then Priya pins a change on the first, appro
     await expect(page.getByText('Changes on their way')).toBeVisible();
     await expect(proof).toContainText('You asked for changes');
 
-    await sendTestProof(db, { orderNumber, message: 'Smaller daisies and more room above the name.', image: await proofPicture(0x6c8a66ff) });
+    await sendTestProof(db, {
+      orderNumber,
+      message: 'Smaller daisies and more room above the name.',
+      image: await proofPicture(0x6c8a66ff),
+    });
     await page.reload();
     await expect(proof.getByRole('button', { name: 'Version 2' })).toHaveAttribute('aria-pressed', 'true');
     await proof.getByRole('button', { name: 'Version 1' }).click();
@@ -173,17 +195,23 @@ test('when the studio sends proofs, then Priya pins a change on the first, appro
     await page.screenshot({ path: screens('proof-approved'), fullPage: true });
 
     const accessibility = await new AxeBuilder({ page }).analyze();
-    const serious = accessibility.violations.filter((violation) => violation.impact === 'serious' || violation.impact === 'critical');
+    const serious = accessibility.violations.filter(
+      (violation) => violation.impact === 'serious' || violation.impact === 'critical',
+    );
     expect(serious.map((violation) => `${violation.id}: ${violation.help}`)).toEqual([]);
 
     const inbox = process.env.FAKE_SMTP_HTTP_URL;
     if (inbox) {
       await expect
         .poll(async () => {
-          const messages = (await (await fetch(`${inbox}/messages?to=priya@example.test`)).json()) as { subject: string }[];
+          const messages = (await (await fetch(`${inbox}/messages?to=priya@example.test`)).json()) as {
+            subject: string;
+          }[];
           return messages.map((message) => message.subject);
         })
-        .toEqual(expect.arrayContaining([`We have your order ${orderNumber}`, `You approved the proof for ${orderNumber}`]));
+        .toEqual(
+          expect.arrayContaining([`We have your order ${orderNumber}`, `You approved the proof for ${orderNumber}`]),
+        );
     }
   } finally {
     await db.destroy();

@@ -4,14 +4,17 @@ const onTheGarment = (page: Page) => page.getByRole('region', { name: 'On the ga
 const price = (page: Page) => page.getByRole('region', { name: 'Your price' });
 
 /** A child's sunshine: a filled circle, rays as strokes, and a script that must never reach the page. */
-const sunshine = Buffer.from(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 120 120" onload="document.title='pwned'">
+const sunshine =
+  Buffer.from(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 120 120" onload="document.title='pwned'">
   <script>document.title = 'pwned'</script>
   <circle cx="60" cy="60" r="30" fill="#F6D44A"/>
   <path d="M60 6V22M60 98V114M6 60H22M98 60H114" stroke="#F2A93B" stroke-width="6" stroke-linecap="round" fill="none"/>
 </svg>`);
 const gif = Buffer.from('R0lGODlhAQABAIAAAAAAAP///yH5BAEAAAAALAAAAAABAAEAAAIBRAA7', 'base64');
 
-test('when a parent uploads a child’s drawing, then it uploads with a progress bar, goes on the garment, and the server prices it', async ({ page }) => {
+test('when a parent uploads a child’s drawing, then it uploads with a progress bar, goes on the garment, and the server prices it', async ({
+  page,
+}) => {
   await page.goto('/design/bishop-dress');
   await expect(page.getByRole('heading', { name: 'Design your bishop dress' })).toBeVisible();
   await page.getByText('Add your own picture', { exact: true }).click();
@@ -37,8 +40,13 @@ test('when a parent uploads a child’s drawing, then it uploads with a progress
 
   await page.getByRole('button', { name: 'Put it on the garment' }).click();
   const artwork = onTheGarment(page).getByRole('listitem').filter({ hasText: 'Your own artwork' });
-  await expect(onTheGarment(page).getByRole('button', { name: /^Your own artwork/ })).toHaveAttribute('aria-expanded', 'true');
-  await expect(artwork.getByRole('status')).toHaveText('In “Below the smocking”: centred side to side, centred top to bottom.');
+  await expect(onTheGarment(page).getByRole('button', { name: /^Your own artwork/ })).toHaveAttribute(
+    'aria-expanded',
+    'true',
+  );
+  await expect(artwork.getByRole('status')).toHaveText(
+    'In “Below the smocking”: centred side to side, centred top to bottom.',
+  );
   await expect(artwork).toContainText('a drawing, so we can count its stitches straight away');
 
   // The server counts the drawing's stitches and adds the one-off setup.
@@ -53,13 +61,17 @@ test('when a parent uploads a child’s drawing, then it uploads with a progress
   await width.fill('40');
   await width.press('Enter');
   await expect(artwork.getByRole('slider', { name: /^Width/ })).toHaveAttribute('aria-valuetext', /^40 mm/);
-  await expect(price(page).getByRole('cell', { name: /^Your artwork: [\d,]+ stitches × 1 garment$/ })).not.toHaveText(before!);
+  await expect(price(page).getByRole('cell', { name: /^Your artwork: [\d,]+ stitches × 1 garment$/ })).not.toHaveText(
+    before!,
+  );
 
   // The script in the file never ran: it was removed before the file was stored.
   expect(await page.title()).not.toBe('pwned');
 });
 
-test('when a parent matches a colour of their own for a name, then the nearest threads are offered by ΔE and one is chosen', async ({ page }) => {
+test('when a parent matches a colour of their own for a name, then the nearest threads are offered by ΔE and one is chosen', async ({
+  page,
+}) => {
   await page.goto('/design/bishop-dress');
   await page.getByText('Add a name', { exact: true }).click();
   await page.getByRole('textbox', { name: 'Name or words' }).fill('Ada');
@@ -80,7 +92,9 @@ test('when a parent matches a colour of their own for a name, then the nearest t
   await expect(price(page).getByRole('cell', { name: /^Lettering “Ada”/ })).toBeVisible();
 });
 
-test('when a border goes round the bishop dress’s curved hem, then its repeats follow the curve, and one more or fewer says what it would do', async ({ page }) => {
+test('when a border goes round the bishop dress’s curved hem, then its repeats follow the curve, and one more or fewer says what it would do', async ({
+  page,
+}) => {
   await page.setViewportSize({ width: 390, height: 844 });
   await page.goto('/design/bishop-dress');
   await page.getByText('Add a border', { exact: true }).click();

@@ -5,9 +5,15 @@ const onTheGarment = (page: Page) => page.getByRole('region', { name: 'On the ga
 const price = (page: Page) => page.getByRole('region', { name: 'Your price' });
 const canvas = (page: Page) => page.getByRole('group', { name: /^The bishop dress in size/ });
 
-test('when a parent designs the bishop dress, then the server prices it as it changes, and it saves and reopens', async ({ page }) => {
+test('when a parent designs the bishop dress, then the server prices it as it changes, and it saves and reopens', async ({
+  page,
+}) => {
   await page.goto('/');
-  await page.getByRole('link').filter({ hasText: /bishop dress/i }).first().click();
+  await page
+    .getByRole('link')
+    .filter({ hasText: /bishop dress/i })
+    .first()
+    .click();
   await page.getByRole('link', { name: 'Design this garment' }).click();
   await expect(page.getByRole('heading', { name: 'Design your bishop dress' })).toBeVisible();
   await expect(page.getByRole('radio', { name: '6 months' })).toBeChecked();
@@ -17,10 +23,17 @@ test('when a parent designs the bishop dress, then the server prices it as it ch
   await page.getByText('Add a border', { exact: true }).click();
   const daisy = page.getByRole('radio', { name: /Daisy and leaf chain/ });
   await daisy.check({ force: true });
-  await expect(page.getByRole('group', { name: 'Choose a border' })).toContainText('4 repeats all the way round, each 173 mm · 6 ¹³⁄₁₆ in (96.1 % of its drawn size)');
+  await expect(page.getByRole('group', { name: 'Choose a border' })).toContainText(
+    '4 repeats all the way round, each 173 mm · 6 ¹³⁄₁₆ in (96.1 % of its drawn size)',
+  );
   await page.getByRole('button', { name: 'Add this border' }).click();
-  await expect(onTheGarment(page).getByRole('button', { name: /^Border: Daisy and leaf chain/ })).toHaveAttribute('aria-expanded', 'true');
-  await expect(onTheGarment(page)).toContainText('4 repeats all the way round, each 173 mm · 6 ¹³⁄₁₆ in (96.1 % of its drawn size)');
+  await expect(onTheGarment(page).getByRole('button', { name: /^Border: Daisy and leaf chain/ })).toHaveAttribute(
+    'aria-expanded',
+    'true',
+  );
+  await expect(onTheGarment(page)).toContainText(
+    '4 repeats all the way round, each 173 mm · 6 ¹³⁄₁₆ in (96.1 % of its drawn size)',
+  );
   // Every figure is the server's: the total, and re-hooping as its own line.
   await expect(price(page).getByRole('row', { name: /^Total \$\d+\.\d\d$/ })).toBeVisible();
   await expect(price(page).getByRole('cell', { name: /^Re-hooping: 3 extra hoopings/ })).toBeVisible();
@@ -30,9 +43,13 @@ test('when a parent designs the bishop dress, then the server prices it as it ch
   await page.getByRole('textbox', { name: 'Name or words' }).fill('Eliza');
   await page.getByRole('button', { name: 'Add the name' }).click();
   const name = onTheGarment(page).getByRole('listitem').filter({ hasText: 'Name “Eliza”' });
-  await expect(name.getByRole('status')).toHaveText('In “Below the smocking”: centred side to side, centred top to bottom.');
+  await expect(name.getByRole('status')).toHaveText(
+    'In “Below the smocking”: centred side to side, centred top to bottom.',
+  );
   await expect(price(page).getByRole('cell', { name: /^Lettering “Eliza”/ })).toBeVisible();
-  const total = await price(page).getByRole('row', { name: /^Total/ }).textContent();
+  const total = await price(page)
+    .getByRole('row', { name: /^Total/ })
+    .textContent();
 
   // Nudge from the keyboard on the canvas, then undo the last step: the model moves, the price stays the server's.
   await canvas(page).focus();
@@ -48,7 +65,8 @@ test('when a parent designs the bishop dress, then the server prices it as it ch
   // Drag the name far to the left: it stops at its zone's edge, and the whole drag is one step to undo. The 6-month
   // mockup is 418.8 × 427.9 mm and the name's zone is centred at (209.4, 104.7) mm (seeds/data/garments.ts).
   const surface = await canvas(page).locator('canvas').last().boundingBox();
-  const at = (xMm: number, yMm: number) => [surface!.x + (xMm / 418.83) * surface!.width, surface!.y + (yMm / 427.94) * surface!.height] as const;
+  const at = (xMm: number, yMm: number) =>
+    [surface!.x + (xMm / 418.83) * surface!.width, surface!.y + (yMm / 427.94) * surface!.height] as const;
   await page.mouse.move(...at(209.4 + 4, 104.7));
   await page.mouse.down();
   for (const step of [10, 30, 60]) await page.mouse.move(...at(209.4 + 4 - step, 104.7));
@@ -64,7 +82,9 @@ test('when a parent designs the bishop dress, then the server prices it as it ch
   await signInAs(page, 'Priya Castellanos', /sign in to save/i);
   await expect(page.getByRole('heading', { name: 'Design your bishop dress' })).toBeVisible();
   await expect(onTheGarment(page).getByRole('listitem')).toHaveCount(2);
-  await onTheGarment(page).getByRole('button', { name: /^Name “Eliza”/ }).click();
+  await onTheGarment(page)
+    .getByRole('button', { name: /^Name “Eliza”/ })
+    .click();
   await expect(name.getByRole('status')).toContainText('4 mm right of centre');
   await page.getByRole('textbox', { name: 'Name this design' }).fill('Eliza’s christening bishop');
   await page.getByRole('button', { name: 'Save design' }).click();
@@ -76,13 +96,17 @@ test('when a parent designs the bishop dress, then the server prices it as it ch
   await page.reload();
   await expect(page.getByText('Saved as “Eliza’s christening bishop”')).toBeVisible();
   await expect(onTheGarment(page).getByRole('button', { name: /^Border: Daisy and leaf chain/ })).toBeVisible();
-  await onTheGarment(page).getByRole('button', { name: /^Name “Eliza”/ }).click();
+  await onTheGarment(page)
+    .getByRole('button', { name: /^Name “Eliza”/ })
+    .click();
   await expect(name.getByRole('status')).toContainText('4 mm right of centre');
   await expect(page.getByRole('button', { name: 'Save changes' })).toBeDisabled();
   await expect(price(page).getByRole('row', { name: /^Total/ })).toHaveText(total!);
 });
 
-test('when a border does not fit the chosen size, then the designer gives the engine’s reason and the price the server’s', async ({ page }) => {
+test('when a border does not fit the chosen size, then the designer gives the engine’s reason and the price the server’s', async ({
+  page,
+}) => {
   await page.goto('/design/bishop-dress');
   await page.getByText('Add a border', { exact: true }).click();
   await page.getByRole('radio', { name: /Front only/ }).check({ force: true });
@@ -90,10 +114,14 @@ test('when a border does not fit the chosen size, then the designer gives the en
   await page.getByRole('button', { name: 'Add this border' }).click();
   await page.getByRole('radio', { name: '18 months' }).check({ force: true });
   await expect(onTheGarment(page)).toContainText("Doesn't fit this size:");
-  await expect(price(page).getByRole('alert')).toContainText("The Daisy and leaf chain doesn't fit along the front hem in size 18 months");
+  await expect(price(page).getByRole('alert')).toContainText(
+    "The Daisy and leaf chain doesn't fit along the front hem in size 18 months",
+  );
 });
 
-test('when the designer opens on a phone, then the garment fits the screen, the total rides beside it, and nothing runs off the side', async ({ page }) => {
+test('when the designer opens on a phone, then the garment fits the screen, the total rides beside it, and nothing runs off the side', async ({
+  page,
+}) => {
   const refused: string[] = [];
   page.on('console', (message) => {
     if (message.type() === 'error' && /Content Security Policy/i.test(message.text())) refused.push(message.text());

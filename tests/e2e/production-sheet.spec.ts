@@ -4,7 +4,9 @@ import { expect, test } from '@playwright/test';
 import { signInAs } from './support/sign-in.ts';
 import { readPdfPages } from '../support/pdf-geometry.ts';
 
-test('when staff open an approved order’s production sheet, then they see the hooping plan and the PDF downloads', async ({ page }) => {
+test('when staff open an approved order’s production sheet, then they see the hooping plan and the PDF downloads', async ({
+  page,
+}) => {
   // One journey with an accessibility audit, a download and a print: slow on a shared two-core machine.
   test.setTimeout(90_000);
   await page.goto('/admin/orders/WB-1013');
@@ -21,7 +23,11 @@ test('when staff open an approved order’s production sheet, then they see the 
   await expect(page.getByText('WB-118').first()).toBeVisible();
   await page.screenshot({ path: 'test-results/screens/production-sheet.png', fullPage: true });
   const audit = await new AxeBuilder({ page }).include('main').analyze();
-  expect(audit.violations.map((violation) => `${violation.id}: ${violation.nodes.map((node) => node.target.join(' ')).join(', ')}`)).toEqual([]);
+  expect(
+    audit.violations.map(
+      (violation) => `${violation.id}: ${violation.nodes.map((node) => node.target.join(' ')).join(', ')}`,
+    ),
+  ).toEqual([]);
 
   // The template is drawn at true size: its SVG is sized in CSS millimetres, 173 mm repeat inside a 188 mm template.
   const template = page.getByRole('img', { name: /one repeat per hooping, at true size/ });
@@ -36,7 +42,13 @@ test('when staff open an approved order’s production sheet, then they see the 
   expect(bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
 
   // Printing the page itself: the print CSS asks for the chosen paper through a named @page.
-  const printed = await readPdfPages(await page.pdf({ path: 'test-results/screens/production-sheet-printed.pdf', preferCSSPageSize: true, printBackground: true }));
+  const printed = await readPdfPages(
+    await page.pdf({
+      path: 'test-results/screens/production-sheet-printed.pdf',
+      preferCSSPageSize: true,
+      printBackground: true,
+    }),
+  );
   expect(printed.length).toBeGreaterThanOrEqual(3);
   // A4 is 595.28 × 841.89 PDF units (ISO 216; ISO 32000-1 §8.3.2.3); Chromium rounds its page box slightly.
   expect(Math.abs(printed[0].view[2] - 595.28)).toBeLessThan(1);

@@ -4,7 +4,9 @@ import { signInAs } from './support/sign-in.ts';
 
 test.describe.configure({ mode: 'serial' });
 
-test('when a customer signs in, then the shop greets them by name and the studio app refuses them', async ({ page }) => {
+test('when a customer signs in, then the shop greets them by name and the studio app refuses them', async ({
+  page,
+}) => {
   await page.goto('/');
   await expect(page.getByRole('heading', { name: /choose a garment/i })).toBeVisible();
   await signInAs(page, 'Priya Castellanos');
@@ -21,7 +23,9 @@ test('when a customer signs in, then the shop greets them by name and the studio
   await expect(page.getByRole('link', { name: 'Sign in' })).toBeVisible();
 });
 
-test('when the owner signs in to the studio app, then the home shows the orders, and the session survives a server restart', async ({ page }) => {
+test('when the owner signs in to the studio app, then the home shows the orders, and the session survives a server restart', async ({
+  page,
+}) => {
   await page.goto('/admin/');
   await expect(page.getByRole('heading', { name: 'Studio sign-in' })).toBeVisible();
   await signInAs(page, 'Marigold Ashby', /sign in with google/i);
@@ -48,7 +52,8 @@ test('when the pages load, then nothing is fetched from any host but this one', 
   const foreign: string[] = [];
   page.on('request', (request) => {
     const url = new URL(request.url());
-    if (!['127.0.0.1', 'localhost'].includes(url.hostname) && url.protocol !== 'data:' && url.protocol !== 'blob:') foreign.push(request.url());
+    if (!['127.0.0.1', 'localhost'].includes(url.hostname) && url.protocol !== 'data:' && url.protocol !== 'blob:')
+      foreign.push(request.url());
   });
   const cspErrors: string[] = [];
   page.on('console', (message) => {
@@ -56,17 +61,27 @@ test('when the pages load, then nothing is fetched from any host but this one', 
   });
   await page.goto('/');
   await expect(page.getByRole('heading', { name: /choose a garment/i })).toBeVisible();
-  await page.getByRole('link').filter({ hasText: /bishop dress/i }).first().click();
+  await page
+    .getByRole('link')
+    .filter({ hasText: /bishop dress/i })
+    .first()
+    .click();
   await expect(page.getByRole('heading', { name: /borders all the way round/i })).toBeVisible();
   await page.goto('/admin/');
   await expect(page.getByRole('heading', { name: 'Studio sign-in' })).toBeVisible();
   // Wait for the face to arrive before asking: a check right after first paint can race the font file.
-  expect(await page.evaluate(async () => (await document.fonts.load('500 16px Poppins'), document.fonts.check('500 16px Poppins')))).toBe(true);
+  expect(
+    await page.evaluate(
+      async () => (await document.fonts.load('500 16px Poppins'), document.fonts.check('500 16px Poppins')),
+    ),
+  ).toBe(true);
   expect(foreign).toEqual([]);
   expect(cspErrors).toEqual([]);
 });
 
-test('when a keyboard user arrives on a phone-width screen, then the first Tab offers a skip to the page and the garments stack in one column', async ({ page }) => {
+test('when a keyboard user arrives on a phone-width screen, then the first Tab offers a skip to the page and the garments stack in one column', async ({
+  page,
+}) => {
   await page.setViewportSize({ width: 390, height: 844 });
   await page.goto('/');
   await expect(page.getByRole('heading', { name: /choose a garment/i })).toBeVisible();

@@ -9,14 +9,24 @@ async function blockingViolations(page: Page) {
   const { violations } = await new AxeBuilder({ page }).analyze();
   return violations
     .filter((violation) => BLOCKING.has(violation.impact ?? ''))
-    .map((violation) => ({ rule: violation.id, impact: violation.impact, help: violation.help, targets: violation.nodes.map((node) => node.target.join(' ')) }));
+    .map((violation) => ({
+      rule: violation.id,
+      impact: violation.impact,
+      help: violation.help,
+      targets: violation.nodes.map((node) => node.target.join(' ')),
+    }));
 }
 
 const pages: { name: string; path: string; ready: (page: Page) => Promise<void> }[] = [
   {
     name: 'the catalogue (home)',
     path: '/',
-    ready: (page) => expect(page.getByRole('region', { name: 'Borders, motifs and lettering' }).getByRole('heading', { name: 'Daisy and leaf chain' })).toBeVisible(),
+    ready: (page) =>
+      expect(
+        page
+          .getByRole('region', { name: 'Borders, motifs and lettering' })
+          .getByRole('heading', { name: 'Daisy and leaf chain' }),
+      ).toBeVisible(),
   },
   {
     name: 'a garment page',
@@ -38,7 +48,9 @@ const pages: { name: string; path: string; ready: (page: Page) => Promise<void> 
 
 for (const { name, path, ready } of pages) {
   for (const width of [1280, 390]) {
-    test(`when axe checks ${name} at ${width} px, then it finds no serious or critical violations and nothing runs off the side`, async ({ page }) => {
+    test(`when axe checks ${name} at ${width} px, then it finds no serious or critical violations and nothing runs off the side`, async ({
+      page,
+    }) => {
       await page.setViewportSize({ width, height: 900 });
       await page.goto(path);
       await ready(page);
@@ -48,10 +60,14 @@ for (const { name, path, ready } of pages) {
   }
 }
 
-test('when axe checks My designs with a share link and a delete question open, then it finds no serious or critical violations', async ({ page }) => {
+test('when axe checks My designs with a share link and a delete question open, then it finds no serious or critical violations', async ({
+  page,
+}) => {
   await page.goto('/designs');
   await signInAs(page, 'Priya Castellanos');
-  const card = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: "Clara's birthday dress" }) });
+  const card = page
+    .getByRole('listitem')
+    .filter({ has: page.getByRole('heading', { name: "Clara's birthday dress" }) });
   await card.getByRole('button', { name: 'Share' }).click();
   await card.getByRole('button', { name: 'Make a share link' }).click();
   await expect(card.getByRole('textbox', { name: /Anyone with this link/ })).toBeVisible();

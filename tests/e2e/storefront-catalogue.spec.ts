@@ -6,16 +6,23 @@ const embroidery = (page: Page) => page.getByRole('region', { name: 'Borders, mo
 const section = (page: Page, name: RegExp) => embroidery(page).getByRole('region', { name });
 /** Taps the kind's chip (the visible label of its radio), as a finger would. */
 async function chooseKind(page: Page, kind: string) {
-  await embroidery(page).getByRole('search', { name: 'Filter the embroidery' }).getByText(kind, { exact: true }).click();
+  await embroidery(page)
+    .getByRole('search', { name: 'Filter the embroidery' })
+    .getByText(kind, { exact: true })
+    .click();
   await expect(embroidery(page).getByRole('radio', { name: kind })).toBeChecked();
 }
 
-test('when a parent filters the embroidery by garment and kind, then the address keeps the filter and the fonts show in their own face', async ({ page }) => {
+test('when a parent filters the embroidery by garment and kind, then the address keeps the filter and the fonts show in their own face', async ({
+  page,
+}) => {
   await page.goto('/');
   await expect(section(page, /^Borders/).getByRole('heading', { name: 'Daisy and leaf chain' })).toBeVisible();
   await expect(section(page, /^Single motifs/).getByRole('heading', { name: 'Sitting bunny' })).toBeVisible();
   // Finished size and stitch count, from the catalogue (seeds/data/motifs.ts: 460 + 3,420 + 500 stitches).
-  const daisy = section(page, /^Borders/).getByRole('listitem').filter({ hasText: 'Daisy and leaf chain' });
+  const daisy = section(page, /^Borders/)
+    .getByRole('listitem')
+    .filter({ hasText: 'Daisy and leaf chain' });
   await expect(daisy).toContainText('180 mm · 7 ¹⁄₁₆ in wide × 40 mm · 1 ⁹⁄₁₆ in tall');
   await expect(daisy).toContainText('about 4,380 in 3 thread colours');
 
@@ -26,7 +33,11 @@ test('when a parent filters the embroidery by garment and kind, then the address
   await chooseKind(page, 'Single motifs');
   await expect(page).toHaveURL(/\?garment=terry-bib&kind=single$/);
   await expect(section(page, /^Borders/)).toHaveCount(0);
-  await expect(section(page, /^Single motifs/).getByRole('listitem').first()).toBeVisible();
+  await expect(
+    section(page, /^Single motifs/)
+      .getByRole('listitem')
+      .first(),
+  ).toBeVisible();
   await page.screenshot({ path: screens('catalogue-bib-single-motifs'), fullPage: true });
 
   // The filter lives in the address: a reload or a shared link shows the same.
@@ -38,7 +49,10 @@ test('when a parent filters the embroidery by garment and kind, then the address
   const sample = lettering.getByRole('listitem').filter({ hasText: 'Breezy Script' }).getByText('Theodora');
   await expect(sample).toHaveCSS('font-family', /Pacifico/);
   // The browser fetches each face because text is set in it here; the retired font's face is declared but never fetched.
-  const loadedFamilies = () => page.evaluate(() => [...document.fonts].filter((face) => face.status === 'loaded').map((face) => face.family.replaceAll('"', '')));
+  const loadedFamilies = () =>
+    page.evaluate(() =>
+      [...document.fonts].filter((face) => face.status === 'loaded').map((face) => face.family.replaceAll('"', '')),
+    );
   await expect.poll(loadedFamilies).toEqual(expect.arrayContaining(['Pacifico', 'Fredoka', 'Playfair Display']));
   expect(await loadedFamilies()).not.toContain('Great Vibes');
   await page.screenshot({ path: screens('catalogue-lettering'), fullPage: true });
@@ -48,9 +62,15 @@ test('when a parent filters the embroidery by garment and kind, then the address
   await expect(page).toHaveURL(/\/$/);
 });
 
-test('when a parent opens a garment, then it shows from the front and the back, with every size measured in mm and inches', async ({ page }) => {
+test('when a parent opens a garment, then it shows from the front and the back, with every size measured in mm and inches', async ({
+  page,
+}) => {
   await page.goto('/');
-  await page.getByRole('link').filter({ hasText: /bishop dress/i }).first().click();
+  await page
+    .getByRole('link')
+    .filter({ hasText: /bishop dress/i })
+    .first()
+    .click();
   await expect(page.getByRole('heading', { name: 'Bishop dress', level: 1 })).toBeVisible();
   for (const side of ['front', 'back']) {
     const view = page.getByRole('img', { name: `The bishop dress from the ${side}` });
@@ -61,7 +81,9 @@ test('when a parent opens a garment, then it shows from the front and the back, 
   await expect(sizes.getByRole('row', { name: /^6 months \(chosen\)/ })).toContainText('470 mm · 18 ¹⁄₂ in');
   await page.getByRole('radio', { name: '2T' }).check({ force: true });
   await expect(sizes.getByRole('row', { name: /^2T \(chosen\)/ })).toContainText('880 mm · 34 ⁵⁄₈ in');
-  await expect(page.getByRole('region', { name: 'Single motifs that suit it' }).getByRole('heading', { name: 'Sitting bunny' })).toBeVisible();
+  await expect(
+    page.getByRole('region', { name: 'Single motifs that suit it' }).getByRole('heading', { name: 'Sitting bunny' }),
+  ).toBeVisible();
   await page.screenshot({ path: screens('garment-front-and-back'), fullPage: true });
 
   // At phone width the views sit side by side and nothing runs off the side (the size table scrolls in its box).
@@ -71,22 +93,29 @@ test('when a parent opens a garment, then it shows from the front and the back, 
   await page.screenshot({ path: screens('garment-phone'), fullPage: true });
 });
 
-test('when a parent saves a design, then they duplicate it, share a link, and the link opens read-only for someone signed out', async ({ page }) => {
+test('when a parent saves a design, then they duplicate it, share a link, and the link opens read-only for someone signed out', async ({
+  page,
+}) => {
   await page.goto('/design/bishop-dress');
   await page.getByText('Add a name', { exact: true }).click();
   await page.getByRole('textbox', { name: 'Name or words' }).fill('Wren');
   await page.getByRole('button', { name: 'Add the name' }).click();
   // Saving needs an account: the design waits in the tab while the visitor signs in and comes back to it.
   await signInAs(page, 'Priya Castellanos', /sign in to save/i);
-  await expect(page.getByRole('region', { name: 'On the garment' }).getByRole('button', { name: /^Name “Wren”/ })).toBeVisible();
+  await expect(
+    page.getByRole('region', { name: 'On the garment' }).getByRole('button', { name: /^Name “Wren”/ }),
+  ).toBeVisible();
   await page.getByRole('textbox', { name: 'Name this design' }).fill('Wren for the photos');
   await page.getByRole('button', { name: 'Save design' }).click();
   await expect(page.getByRole('region', { name: 'Keep this design' }).getByRole('status')).toHaveText('✓ Saved');
 
   await page.getByRole('link', { name: 'My designs' }).click();
   await expect(page.getByRole('heading', { name: 'My designs', level: 1 })).toBeVisible();
-  const card = (name: string) => page.getByRole('listitem').filter({ has: page.getByRole('heading', { name, exact: true }) });
-  await expect(card('Wren for the photos').getByRole('img', { name: 'Wren for the photos on the bishop dress' })).toBeVisible();
+  const card = (name: string) =>
+    page.getByRole('listitem').filter({ has: page.getByRole('heading', { name, exact: true }) });
+  await expect(
+    card('Wren for the photos').getByRole('img', { name: 'Wren for the photos on the bishop dress' }),
+  ).toBeVisible();
 
   await card('Wren for the photos').getByRole('button', { name: 'Duplicate' }).click();
   await expect(page.getByRole('status').filter({ hasText: 'Copied as “Wren for the photos (copy)”' })).toBeVisible();

@@ -6,7 +6,9 @@ test.describe.configure({ mode: 'serial' });
 
 const tulipSvg = readFileSync(new URL('./fixtures/tulip-sprig.svg', import.meta.url));
 
-test('when staff upload a motif SVG, then they see the sanitized drawing and the estimate, save it, and the shop offers it', async ({ page }) => {
+test('when staff upload a motif SVG, then they see the sanitized drawing and the estimate, save it, and the shop offers it', async ({
+  page,
+}) => {
   await page.setViewportSize({ width: 1280, height: 900 });
   await page.goto('/admin/catalogue');
   await signInAs(page, 'Tobias Fenwick', /sign in with google/i);
@@ -17,7 +19,9 @@ test('when staff upload a motif SVG, then they see the sanitized drawing and the
   await page.getByRole('button', { name: 'Add motif' }).click();
   const dialog = page.getByRole('dialog', { name: 'Add a motif' });
   await expect(dialog).toBeVisible();
-  await dialog.getByLabel('Artwork (SVG)').setInputFiles({ name: 'tulip-sprig.svg', mimeType: 'image/svg+xml', buffer: tulipSvg });
+  await dialog
+    .getByLabel('Artwork (SVG)')
+    .setInputFiles({ name: 'tulip-sprig.svg', mimeType: 'image/svg+xml', buffer: tulipSvg });
 
   const progress = dialog.getByRole('progressbar', { name: 'Artwork upload' });
   await expect(progress).toHaveAttribute('aria-valuenow', '100');
@@ -44,7 +48,9 @@ test('when staff upload a motif SVG, then they see the sanitized drawing and the
   expect(tulip.svg).not.toContain('script');
 });
 
-test('when staff retire a thread at phone width, then they confirm first and it is marked retired', async ({ page }) => {
+test('when staff retire a thread at phone width, then they confirm first and it is marked retired', async ({
+  page,
+}) => {
   await page.setViewportSize({ width: 390, height: 844 });
   await page.goto('/admin/catalogue');
   await signInAs(page, 'Tobias Fenwick', /sign in with google/i);
@@ -64,7 +70,9 @@ test('when staff retire a thread at phone width, then they confirm first and it 
   await expect(page.getByRole('button', { name: `Retire ${label}` })).toBeVisible();
 });
 
-test('when staff add a hoop under a short name already taken, then the server’s message shows beside that field, and a new name saves', async ({ page }) => {
+test('when staff add a hoop under a short name already taken, then the server’s message shows beside that field, and a new name saves', async ({
+  page,
+}) => {
   await page.goto('/admin/catalogue#hoops');
   await signInAs(page, 'Tobias Fenwick', /sign in with google/i);
   await page.getByRole('button', { name: 'Add hoop' }).click();

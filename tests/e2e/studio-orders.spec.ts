@@ -13,7 +13,9 @@ let db: Db;
 /** WCAG 2 A and AA rules checked by axe-core over the page's main area. */
 async function accessibilityProblems(page: Page): Promise<string[]> {
   const { violations } = await new AxeBuilder({ page }).include('main').withTags(['wcag2a', 'wcag2aa']).analyze();
-  return violations.map((violation) => `${violation.id}: ${violation.nodes.map((node) => node.target.join(' ')).join(', ')}`);
+  return violations.map(
+    (violation) => `${violation.id}: ${violation.nodes.map((node) => node.target.join(' ')).join(', ')}`,
+  );
 }
 
 test.beforeAll(async () => {
@@ -26,7 +28,9 @@ test.afterAll(async () => {
   await db.destroy();
 });
 
-test('when staff proof an order and the customer approves, then approve & charge puts it on the machine', async ({ page }) => {
+test('when staff proof an order and the customer approves, then approve & charge puts it on the machine', async ({
+  page,
+}) => {
   // The server draws the proof twice (preview, then the proof itself): about a second each on an idle machine.
   test.setTimeout(90_000);
   await page.goto('/admin/orders');
@@ -34,7 +38,10 @@ test('when staff proof an order and the customer approves, then approve & charge
   await expect(page.getByRole('heading', { name: 'Orders' })).toBeVisible();
 
   // The board filters by status: only orders with a proof to send.
-  await page.getByRole('group', { name: 'Show orders that are' }).getByRole('button', { name: 'Proof to send' }).click();
+  await page
+    .getByRole('group', { name: 'Show orders that are' })
+    .getByRole('button', { name: 'Proof to send' })
+    .click();
   await expect(page).toHaveURL(/status=authorized/);
   const table = page.getByRole('table');
   await expect(table.getByRole('link', { name: 'WB-1010' })).toBeVisible();
@@ -45,7 +52,9 @@ test('when staff proof an order and the customer approves, then approve & charge
   await table.getByRole('link', { name: 'WB-1010' }).click();
   await expect(page.getByRole('heading', { name: 'Order WB-1010' })).toBeVisible();
   await page.getByRole('button', { name: 'Preview the drawing' }).click();
-  await expect(page.getByRole('img', { name: 'Preview of the drawing the customer would get' })).toBeVisible({ timeout: 30_000 });
+  await expect(page.getByRole('img', { name: 'Preview of the drawing the customer would get' })).toBeVisible({
+    timeout: 30_000,
+  });
   await page.getByRole('button', { name: 'Send proof' }).click();
   await expect(page.getByRole('status').filter({ hasText: 'Proof 1 is on its way' })).toBeVisible({ timeout: 30_000 });
   await expect(page.getByRole('img', { name: /Proof 1, the design drawn on the garment/ })).toBeVisible();
@@ -67,7 +76,9 @@ test('when staff proof an order and the customer approves, then approve & charge
   await expect(page.getByRole('button', { name: 'On the machine' })).toHaveAttribute('aria-pressed', 'true');
 });
 
-test('when staff look at due dates or use a phone, then the calendar marks rush orders and the board becomes cards', async ({ page }) => {
+test('when staff look at due dates or use a phone, then the calendar marks rush orders and the board becomes cards', async ({
+  page,
+}) => {
   await page.goto('/admin/orders');
   await signInAs(page, 'Tobias Fenwick', /sign in with google/i);
   await page.getByRole('button', { name: 'Due dates' }).click();

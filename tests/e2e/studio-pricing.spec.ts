@@ -11,7 +11,9 @@ const shots = 'test-results/screens';
 async function accessibilityProblems(page: Page): Promise<string[]> {
   // The outbox's sandboxed frame runs no scripts, so axe could only wait for it: it is left out.
   const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa']).exclude('iframe').analyze();
-  return results.violations.flatMap((violation) => violation.nodes.map((node) => `${violation.id}: ${node.target.join(' ')}`));
+  return results.violations.flatMap((violation) =>
+    violation.nodes.map((node) => `${violation.id}: ${node.target.join(' ')}`),
+  );
 }
 
 async function signInAsOwner(page: Page): Promise<void> {
@@ -19,7 +21,9 @@ async function signInAsOwner(page: Page): Promise<void> {
   await signInAs(page, 'Marigold Ashby', /sign in with google/i);
 }
 
-test('when the owner opens Today, then the day’s work, machine hours against capacity and weekly takings are shown, also at phone width', async ({ page }) => {
+test('when the owner opens Today, then the day’s work, machine hours against capacity and weekly takings are shown, also at phone width', async ({
+  page,
+}) => {
   await signInAsOwner(page);
   await expect(page.getByRole('heading', { name: 'Proofs to send' })).toBeVisible();
   await expect(page.getByRole('heading', { name: 'Stitched, ready to ship' })).toBeVisible();
@@ -41,7 +45,9 @@ test('when the owner opens Today, then the day’s work, machine hours against c
   await page.screenshot({ path: `${shots}/studio-today-phone.png`, fullPage: true });
 });
 
-test('when the owner raises the stitch rate in the draft, then the three sample quotes change, and publishing makes it the price list', async ({ page }) => {
+test('when the owner raises the stitch rate in the draft, then the three sample quotes change, and publishing makes it the price list', async ({
+  page,
+}) => {
   await signInAsOwner(page);
   await page.getByRole('navigation', { name: 'Studio sections' }).getByRole('link', { name: 'Pricing' }).click();
   await expect(page.getByRole('heading', { name: /Version 2 · draft/ })).toBeVisible();
@@ -71,7 +77,9 @@ test('when the owner raises the stitch rate in the draft, then the three sample 
   await page.screenshot({ path: `${shots}/studio-pricing-published.png`, fullPage: true });
 });
 
-test('when the owner adds a customer to the studio team, then the change shows at once, and taking it back restores them', async ({ page }) => {
+test('when the owner adds a customer to the studio team, then the change shows at once, and taking it back restores them', async ({
+  page,
+}) => {
   await signInAsOwner(page);
   await page.getByRole('link', { name: 'People' }).click();
   const dominic = page.getByRole('row', { name: /Dominic Lark/ });
@@ -109,7 +117,9 @@ test('when the owner opens the outbox, then a message reads in full and a failed
   await page.screenshot({ path: `${shots}/studio-outbox-failed.png`, fullPage: true });
 });
 
-test('when the owner lowers the weekly machine hours in Settings, then Today draws the capacity line there', async ({ page }) => {
+test('when the owner lowers the weekly machine hours in Settings, then Today draws the capacity line there', async ({
+  page,
+}) => {
   await signInAsOwner(page);
   await page.getByRole('link', { name: 'Settings' }).click();
   const hoursField = page.getByLabel('Machine hours a week');
@@ -123,7 +133,9 @@ test('when the owner lowers the weekly machine hours in Settings, then Today dra
   await page.screenshot({ path: `${shots}/studio-settings.png`, fullPage: true });
 
   await page.getByRole('link', { name: 'Today' }).click();
-  await expect(page.getByRole('region', { name: 'Machine hours booked' }).locator('figcaption')).toContainText('of 2 h');
+  await expect(page.getByRole('region', { name: 'Machine hours booked' }).locator('figcaption')).toContainText(
+    'of 2 h',
+  );
   // Later journeys expect the seeded capacity.
   await page.getByRole('link', { name: 'Settings' }).click();
   await page.getByLabel('Machine hours a week').fill('30');

@@ -19,7 +19,9 @@ async function personPage(browser: Browser, path: string, person: string, startL
   return page;
 }
 
-test('when a grandparent orders a bordered dress, then the studio proofs it, she approves, and the studio charges and prints the sheet', async ({ browser }) => {
+test('when a grandparent orders a bordered dress, then the studio proofs it, she approves, and the studio charges and prints the sheet', async ({
+  browser,
+}) => {
   // The storefront: a daisy border all the way round the 6-month bishop dress and a name, saved and ordered.
   const harriet = await personPage(browser, '/design/bishop-dress', 'Harriet');
   await harriet.getByText('Add a border', { exact: true }).click();
@@ -31,7 +33,9 @@ test('when a grandparent orders a bordered dress, then the studio proofs it, she
   await harriet.getByText('Add a name', { exact: true }).click();
   await harriet.getByRole('textbox', { name: 'Name or words' }).fill('Maisie');
   await harriet.getByRole('button', { name: 'Add the name' }).click();
-  await expect(harriet.getByRole('region', { name: 'Your price' }).getByRole('cell', { name: /^Lettering “Maisie”/ })).toBeVisible();
+  await expect(
+    harriet.getByRole('region', { name: 'Your price' }).getByRole('cell', { name: /^Lettering “Maisie”/ }),
+  ).toBeVisible();
   await harriet.getByRole('textbox', { name: 'Name this design' }).fill('Maisie’s daisy dress');
   await harriet.getByRole('button', { name: 'Save and order' }).click();
 
@@ -60,9 +64,13 @@ test('when a grandparent orders a bordered dress, then the studio proofs it, she
   await expect(row).toBeVisible();
   await row.click();
   await expect(tobias.getByRole('heading', { name: `Order ${number}` })).toBeVisible();
-  await tobias.getByLabel('Note to the customer').fill('Here is Maisie’s dress, drawn to scale with the daisies round the hem.');
+  await tobias
+    .getByLabel('Note to the customer')
+    .fill('Here is Maisie’s dress, drawn to scale with the daisies round the hem.');
   await tobias.getByRole('button', { name: 'Send proof' }).click();
-  await expect(tobias.getByRole('status').filter({ hasText: 'Proof 1 is on its way' })).toBeVisible({ timeout: 30_000 });
+  await expect(tobias.getByRole('status').filter({ hasText: 'Proof 1 is on its way' })).toBeVisible({
+    timeout: 30_000,
+  });
   await tobias.screenshot({ path: shots('proof-sent'), fullPage: true });
 
   // The customer: the proof is on her order page; she approves it.

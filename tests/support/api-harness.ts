@@ -37,10 +37,22 @@ export const fixedNow = () => new Date('2026-12-01T10:00:00Z');
 export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {}): Promise<ApiHarness> {
   const google = await startGoogleOAuthFake({
     port: 0,
-    identities: demoPeople.map(({ sub, email, name, givenName, familyName }) => ({ sub, email, name, givenName, familyName })),
+    identities: demoPeople.map(({ sub, email, name, givenName, familyName }) => ({
+      sub,
+      email,
+      name,
+      givenName,
+      familyName,
+    })),
   });
   const stack = localStack('test');
-  const config = loadConfig({ ...process.env, ...stack.env, GOOGLE_OAUTH_BASE_URL: google.url, STATIC_DIR: '/nonexistent', ...options.env });
+  const config = loadConfig({
+    ...process.env,
+    ...stack.env,
+    GOOGLE_OAUTH_BASE_URL: google.url,
+    STATIC_DIR: '/nonexistent',
+    ...options.env,
+  });
   const db = openDatabase(config.database);
   await db.migrate.latest();
   await db.seed.run();
@@ -56,7 +68,10 @@ export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {})
     const authorizeUrl = new URL(start.headers.location!);
     const person = demoPeople.find((p) => p.email === email);
     // The stand-in's page posts the chosen identity back to itself and redirects with a code.
-    const form = new URLSearchParams({ ...Object.fromEntries(authorizeUrl.searchParams), ...(person ? { identity: person.sub } : { email }) });
+    const form = new URLSearchParams({
+      ...Object.fromEntries(authorizeUrl.searchParams),
+      ...(person ? { identity: person.sub } : { email }),
+    });
     const decision = await fetch(new URL('/authorize', google.url), { method: 'POST', body: form, redirect: 'manual' });
     const callback = new URL(decision.headers.get('location')!);
     await client.get(`${callback.pathname}${callback.search}`).expect(302);

@@ -26,18 +26,27 @@ export interface PaymentHarness extends ApiHarness {
 export async function startPaymentHarness(): Promise<PaymentHarness> {
   const stripe = await startStripeFake({ port: 0, apiKey: STRIPE_KEY, webhookSecret: WEBHOOK_SECRET });
   const smtp = await startSmtpFake({ smtpPort: 0, httpPort: 0 });
-  const harness = await startApiHarness({ env: { STRIPE_API_URL: stripe.url, STRIPE_SECRET_KEY: STRIPE_KEY, STRIPE_WEBHOOK_SECRET: WEBHOOK_SECRET, SMTP_URL: smtp.smtpUrl } });
+  const harness = await startApiHarness({
+    env: {
+      STRIPE_API_URL: stripe.url,
+      STRIPE_SECRET_KEY: STRIPE_KEY,
+      STRIPE_WEBHOOK_SECRET: WEBHOOK_SECRET,
+      SMTP_URL: smtp.smtpUrl,
+    },
+  });
   const signer = new Stripe('sk_test_signer_only');
   let delivered = 0;
   const deliver = (event: unknown) => {
     const payload = JSON.stringify(event, null, 2);
-    return harness
-      .agent()
-      .post('/api/webhooks/stripe')
-      .set('Content-Type', 'application/json')
-      // Header format and HMAC scheme as in Stripe's signature guide, made by the official SDK's own helper.
-      .set('Stripe-Signature', signer.webhooks.generateTestHeaderString({ payload, secret: WEBHOOK_SECRET }))
-      .send(payload);
+    return (
+      harness
+        .agent()
+        .post('/api/webhooks/stripe')
+        .set('Content-Type', 'application/json')
+        // Header format and HMAC scheme as in Stripe's signature guide, made by the official SDK's own helper.
+        .set('Stripe-Signature', signer.webhooks.generateTestHeaderString({ payload, secret: WEBHOOK_SECRET }))
+        .send(payload)
+    );
   };
   return {
     ...harness,
@@ -45,7 +54,12 @@ export async function startPaymentHarness(): Promise<PaymentHarness> {
     mail: smtp.messages,
     deliver,
     async pay(checkoutUrl, cardNumber = '4242 4242 4242 4242') {
-      const form = new URLSearchParams({ card_number: cardNumber, expiry: '12/30', cvc: '123', name: 'Priya Castellanos' });
+      const form = new URLSearchParams({
+        card_number: cardNumber,
+        expiry: '12/30',
+        cvc: '123',
+        name: 'Priya Castellanos',
+      });
       const response = await fetch(checkoutUrl, { method: 'POST', body: form, redirect: 'manual' });
       await response.arrayBuffer();
       return response.status;

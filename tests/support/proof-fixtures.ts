@@ -14,16 +14,29 @@ export async function proofPicture(bandColour = 0xb5533cff): Promise<Buffer> {
   return image.getBuffer('image/png');
 }
 
-export async function sendTestProof(db: Db, opts: { orderNumber: string; staffEmail?: string; message?: string; image?: Buffer | null; now?: Date }): Promise<number> {
+export async function sendTestProof(
+  db: Db,
+  opts: { orderNumber: string; staffEmail?: string; message?: string; image?: Buffer | null; now?: Date },
+): Promise<number> {
   const now = opts.now ?? new Date();
-  const staff = await db('users').select('id', 'role').where({ email: opts.staffEmail ?? 'marigold@wrenandbobbin.test' }).first();
+  const staff = await db('users')
+    .select('id', 'role')
+    .where({ email: opts.staffEmail ?? 'marigold@wrenandbobbin.test' })
+    .first();
   const order = await db('orders').select('id').where({ number: opts.orderNumber }).first();
   if (!staff || !order) throw new Error(`No staff member or order ${opts.orderNumber} to send a proof for.`);
   const image = opts.image === undefined ? await proofPicture() : opts.image;
   return db.transaction(async (trx) => {
     const previous = await trx('proofs').where({ order_id: order.id }).max({ version: 'version' }).first();
     const version = Number(previous?.version ?? 0) + 1;
-    const moved = await moveOrder(trx, { orderId: order.id, action: 'send_proof', actor: staff.role, actorUserId: staff.id, payload: { proofVersion: version }, now });
+    const moved = await moveOrder(trx, {
+      orderId: order.id,
+      action: 'send_proof',
+      actor: staff.role,
+      actorUserId: staff.id,
+      payload: { proofVersion: version },
+      now,
+    });
     if (!moved.ok) throw new Error(`The proof could not be sent: ${moved.error.message}`);
     await trx('proofs').where({ order_id: order.id, status: 'sent' }).update({ status: 'superseded', updated_at: now });
     await trx('proofs').insert({

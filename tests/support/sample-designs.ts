@@ -12,5 +12,18 @@ export const daisyDressQuote: QuotePreviewRequest = {
   colourId: bishop.colours[0].id,
   quantity: 1,
   isRush: false,
-  document: { version: 1, placements: [{ id: 'hem', kind: 'border', zone: 'hem', motif: 'daisy-chain', run: 'circumference', hemOffsetMm: 44.45, threads: daisy.threadCodes }] },
+  document: {
+    version: 1,
+    placements: [
+      {
+        id: 'hem',
+        kind: 'border',
+        zone: 'hem',
+        motif: 'daisy-chain',
+        run: 'circumference',
+        hemOffsetMm: 44.45,
+        threads: daisy.threadCodes,
+      },
+    ],
+  },
 };

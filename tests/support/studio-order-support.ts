@@ -20,7 +20,12 @@ export function stripeAt(fakeUrl: string, apiKey: string): Stripe {
  * studio's money moves reach a real PaymentIntent at the stand-in.
  */
 export async function startStudioHarness(apiKey: string) {
-  const fake = await startStripeFake({ port: 0, apiKey, webhookSecret: 'whsec_unused_here', now: () => fixedNow().getTime() });
+  const fake = await startStripeFake({
+    port: 0,
+    apiKey,
+    webhookSecret: 'whsec_unused_here',
+    now: () => fixedNow().getTime(),
+  });
   const harness = await startApiHarness({ env: { STRIPE_API_URL: fake.url, STRIPE_SECRET_KEY: apiKey } });
   const staff = harness.agent();
   await harness.signIn(staff, 'tobias@wrenandbobbin.test');
@@ -47,7 +52,16 @@ export async function holdCardAtFake(db: Db, stripe: Stripe, number: string, cap
   const order = await db('orders').where({ number }).first('id', 'total_cents', 'currency');
   const session = await stripe.checkout.sessions.create({
     mode: 'payment',
-    line_items: [{ price_data: { currency: order.currency.toLowerCase(), unit_amount: Number(order.total_cents), product_data: { name: `Order ${number}` } }, quantity: 1 }],
+    line_items: [
+      {
+        price_data: {
+          currency: order.currency.toLowerCase(),
+          unit_amount: Number(order.total_cents),
+          product_data: { name: `Order ${number}` },
+        },
+        quantity: 1,
+      },
+    ],
     success_url: 'http://127.0.0.1/done',
     cancel_url: 'http://127.0.0.1/cancelled',
     metadata: { orderId: String(order.id) },
@@ -61,15 +75,17 @@ export async function holdCardAtFake(db: Db, stripe: Stripe, number: string, cap
   if (paid.status >= 400) throw new Error(`The stand-in refused the test card: ${paid.status}`);
   const paymentIntentId = (await stripe.checkout.sessions.retrieve(session.id)).payment_intent as string;
   const payment = await db('payments').where({ order_id: order.id }).orderBy('id', 'desc').first('id');
-  await db('payments').where({ id: payment.id }).update({
-    checkout_session_id: session.id,
-    payment_intent_id: paymentIntentId,
-    status: 'authorized',
-    amount_authorized_cents: Number(order.total_cents),
-    amount_captured_cents: 0,
-    amount_refunded_cents: 0,
-    capture_before: captureBefore,
-  });
+  await db('payments')
+    .where({ id: payment.id })
+    .update({
+      checkout_session_id: session.id,
+      payment_intent_id: paymentIntentId,
+      status: 'authorized',
+      amount_authorized_cents: Number(order.total_cents),
+      amount_captured_cents: 0,
+      amount_refunded_cents: 0,
+      capture_before: captureBefore,
+    });
   await db('orders').where({ id: order.id }).update({ payment_status: 'authorized' });
   return paymentIntentId;
 }
@@ -78,7 +94,13 @@ export async function holdCardAtFake(db: Db, stripe: Stripe, number: string, cap
 export async function approveLatestProofAsCustomer(db: Db, number: string, now: Date): Promise<void> {
   await db.transaction(async (trx) => {
     const order = await trx('orders').where({ number }).first('id', 'customer_id');
-    const moved = await moveOrder(trx, { orderId: order.id, action: 'approve_proof', actor: 'customer', actorUserId: order.customer_id, now });
+    const moved = await moveOrder(trx, {
+      orderId: order.id,
+      action: 'approve_proof',
+      actor: 'customer',
+      actorUserId: order.customer_id,
+      now,
+    });
     if (!moved.ok) throw new Error(`Could not approve the proof of ${number}: ${moved.error.message}`);
     const proof = await trx('proofs').where({ order_id: order.id }).orderBy('version', 'desc').first('id', 'version');
     await trx('proofs').where({ id: proof.id }).update({ status: 'approved', responded_at: now });

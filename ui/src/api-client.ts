@@ -26,13 +26,20 @@ interface RequestOptions {
  * The one way the apps talk to the API: same-origin fetch with the session cookie, the response parsed with the
  * contract's schema, and error bodies turned into ApiError.
  */
-export async function apiRequest<T>(path: string, schema: z.ZodType<T> | null, options: RequestOptions = {}): Promise<T> {
+export async function apiRequest<T>(
+  path: string,
+  schema: z.ZodType<T> | null,
+  options: RequestOptions = {},
+): Promise<T> {
   let response: Response;
   try {
     response = await fetch(`/api${path}`, {
       method: options.method ?? 'GET',
       credentials: 'same-origin',
-      headers: options.body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
+      headers:
+        options.body === undefined
+          ? { Accept: 'application/json' }
+          : { Accept: 'application/json', 'Content-Type': 'application/json' },
       body: options.body === undefined ? undefined : JSON.stringify(options.body),
       signal: options.signal,
     });

@@ -6,7 +6,8 @@ export function createQueryClient(): QueryClient {
   return new QueryClient({
     defaultOptions: {
       queries: {
-        retry: (count, error) => count < 2 && (!(error instanceof ApiError) || error.kind === 'network' || error.kind === 'server'),
+        retry: (count, error) =>
+          count < 2 && (!(error instanceof ApiError) || error.kind === 'network' || error.kind === 'server'),
         refetchOnWindowFocus: false,
       },
     },

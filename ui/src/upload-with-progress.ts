@@ -21,7 +21,12 @@ interface UploadOptions {
  * XMLHttpRequest rather than fetch because only XHR reports upload progress; errors become the same ApiError the
  * JSON client throws, so forms show them alike.
  */
-export function uploadWithProgress<T>(path: string, file: Blob, schema: z.ZodType<T>, options: UploadOptions = {}): Promise<T> {
+export function uploadWithProgress<T>(
+  path: string,
+  file: Blob,
+  schema: z.ZodType<T>,
+  options: UploadOptions = {},
+): Promise<T> {
   const form = new FormData();
   for (const [name, value] of Object.entries(options.fields ?? {})) form.append(name, value);
   form.append('file', file, file instanceof File ? file.name : 'upload');
@@ -33,9 +38,15 @@ export function uploadWithProgress<T>(path: string, file: Blob, schema: z.ZodTyp
     xhr.setRequestHeader('Accept', 'application/json');
     xhr.upload.addEventListener('progress', (event) => {
       if (!event.lengthComputable) return;
-      options.onProgress?.({ sentBytes: event.loaded, totalBytes: event.total, fraction: event.total ? event.loaded / event.total : 1 });
+      options.onProgress?.({
+        sentBytes: event.loaded,
+        totalBytes: event.total,
+        fraction: event.total ? event.loaded / event.total : 1,
+      });
     });
-    xhr.upload.addEventListener('load', () => options.onProgress?.({ sentBytes: file.size, totalBytes: file.size, fraction: 1 }));
+    xhr.upload.addEventListener('load', () =>
+      options.onProgress?.({ sentBytes: file.size, totalBytes: file.size, fraction: 1 }),
+    );
     xhr.addEventListener('load', () => {
       let body: unknown = null;
       try {
@@ -50,10 +61,13 @@ export function uploadWithProgress<T>(path: string, file: Blob, schema: z.ZodTyp
         return;
       }
       const error = apiErrorBody.safeParse(body);
-      if (error.success) reject(new ApiError(error.data.error.kind, error.data.error.message, xhr.status, error.data.error.fields));
+      if (error.success)
+        reject(new ApiError(error.data.error.kind, error.data.error.message, xhr.status, error.data.error.fields));
       else reject(new ApiError('server', `The shop answered with an unexpected error (${xhr.status}).`, xhr.status));
     });
-    xhr.addEventListener('error', () => reject(new ApiError('network', 'We could not reach the shop. Check your connection and try again.', 0)));
+    xhr.addEventListener('error', () =>
+      reject(new ApiError('network', 'We could not reach the shop. Check your connection and try again.', 0)),
+    );
     xhr.addEventListener('abort', () => reject(new ApiError('network', 'The upload was stopped.', 0)));
     options.signal?.addEventListener('abort', () => xhr.abort());
     xhr.send(form);

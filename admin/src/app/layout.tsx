@@ -27,7 +27,12 @@ function SignedInAs() {
         <strong className="font-semibold">{me.data.name}</strong>
         <span className="ml-2 rounded-full bg-sage-50 px-2 py-0.5 text-xs text-sage-700">{me.data.role}</span>
       </span>
-      <Button tone="quiet" className="min-h-9 px-3 py-1 text-sm" onClick={() => signOut.mutate()} disabled={signOut.isPending}>
+      <Button
+        tone="quiet"
+        className="min-h-9 px-3 py-1 text-sm"
+        onClick={() => signOut.mutate()}
+        disabled={signOut.isPending}
+      >
         Sign out
       </Button>
     </div>
@@ -45,14 +50,25 @@ export function StudioLayout() {
           <div className="flex flex-wrap items-center gap-x-6 gap-y-2">
             <span className="flex items-center gap-2">
               <HoopMark className="h-8 w-8" />
-              <span className="font-semibold">Hoopwright <span className="font-normal text-linen-300">studio</span></span>
+              <span className="font-semibold">
+                Hoopwright <span className="font-normal text-linen-300">studio</span>
+              </span>
             </span>
             <nav aria-label="Studio sections" className="flex flex-wrap gap-1 text-sm">
-              {sections.filter((section) => isOwner || !section.isOwnerOnly).map((section) => (
-                <NavLink key={section.href} to={section.href} end className={({ isActive }) => `rounded-full px-3 py-1.5 ${isActive ? 'bg-linen-100 text-walnut-900' : 'hover:bg-walnut-700'}`}>
-                  {section.label}
-                </NavLink>
-              ))}
+              {sections
+                .filter((section) => isOwner || !section.isOwnerOnly)
+                .map((section) => (
+                  <NavLink
+                    key={section.href}
+                    to={section.href}
+                    end
+                    className={({ isActive }) =>
+                      `rounded-full px-3 py-1.5 ${isActive ? 'bg-linen-100 text-walnut-900' : 'hover:bg-walnut-700'}`
+                    }
+                  >
+                    {section.label}
+                  </NavLink>
+                ))}
             </nav>
           </div>
           <SignedInAs />

@@ -4,7 +4,10 @@ export const paths = {
   catalogue: { path: '/catalogue', href: () => '/catalogue' },
   orders: { path: '/orders', href: () => '/orders' },
   order: { path: '/orders/:number', href: (number: string) => `/orders/${encodeURIComponent(number)}` },
-  productionSheet: { path: '/orders/:number/production', href: (number: string) => `/orders/${encodeURIComponent(number)}/production` },
+  productionSheet: {
+    path: '/orders/:number/production',
+    href: (number: string) => `/orders/${encodeURIComponent(number)}/production`,
+  },
   pricing: { path: '/pricing', href: () => '/pricing' },
   settings: { path: '/settings', href: () => '/settings' },
   people: { path: '/people', href: () => '/people' },

@@ -24,7 +24,10 @@ export const hexColour = z
 
 /** A length on the garment or in the hoop, mm. */
 export const lengthMm = (label: string, maxMm = 2000) =>
-  z.number({ error: `Enter ${label} in millimetres` }).positive(`${label[0]!.toUpperCase()}${label.slice(1)} must be more than 0 mm`).max(maxMm, `Keep ${label} at or under ${maxMm} mm`);
+  z
+    .number({ error: `Enter ${label} in millimetres` })
+    .positive(`${label[0]!.toUpperCase()}${label.slice(1)} must be more than 0 mm`)
+    .max(maxMm, `Keep ${label} at or under ${maxMm} mm`);
 
 export const sortOrder = z.number().int('Use a whole number').min(0).max(100_000).optional();
 

@@ -8,7 +8,11 @@ export const zoneCodes = ['hem', 'chest', 'collar', 'bib_centre', 'brim'] as con
 
 /** Longest mockup drawing accepted, in characters: a flat outline of a garment is a few kilobytes. */
 const MAX_MOCKUP_SVG_LENGTH = 500_000;
-const ageMonths = z.number({ error: 'Enter an age in months' }).int('Use whole months').min(0, 'Use 0 or more months').max(216, 'Keep it at or under 216 months');
+const ageMonths = z
+  .number({ error: 'Enter an age in months' })
+  .int('Use whole months')
+  .min(0, 'Use 0 or more months')
+  .max(216, 'Keep it at or under 216 months');
 
 const garmentFields = {
   name: catalogueName,
@@ -22,16 +26,24 @@ const garmentFields = {
   sortOrder,
 };
 
-const agesInOrder = (garment: { minAgeMonths: number; maxAgeMonths: number }) => garment.minAgeMonths <= garment.maxAgeMonths;
+const agesInOrder = (garment: { minAgeMonths: number; maxAgeMonths: number }) =>
+  garment.minAgeMonths <= garment.maxAgeMonths;
 const agesMessage = { message: 'The oldest age must be at least the youngest', path: ['maxAgeMonths'] };
 /** The flat front drawing at the reference size, viewBox in millimetres; sanitized by the server before it is kept. */
-const mockupSvg = z.string().min(1, 'Choose the garment drawing (SVG)').max(MAX_MOCKUP_SVG_LENGTH, 'The drawing is too large; simplify it below 500 kB');
+const mockupSvg = z
+  .string()
+  .min(1, 'Choose the garment drawing (SVG)')
+  .max(MAX_MOCKUP_SVG_LENGTH, 'The drawing is too large; simplify it below 500 kB');
 
-export const createGarmentRequest = z.object({ slug: catalogueSlug, ...garmentFields, mockupSvg }).refine(agesInOrder, agesMessage);
+export const createGarmentRequest = z
+  .object({ slug: catalogueSlug, ...garmentFields, mockupSvg })
+  .refine(agesInOrder, agesMessage);
 export type CreateGarmentRequest = z.infer<typeof createGarmentRequest>;
 
 /** The slug stays (it is the storefront address); the drawing is replaced only when sent. */
-export const updateGarmentRequest = z.object({ ...garmentFields, mockupSvg: mockupSvg.optional() }).refine(agesInOrder, agesMessage);
+export const updateGarmentRequest = z
+  .object({ ...garmentFields, mockupSvg: mockupSvg.optional() })
+  .refine(agesInOrder, agesMessage);
 export type UpdateGarmentRequest = z.infer<typeof updateGarmentRequest>;
 
 export const zoneInput = z.object({
@@ -52,30 +64,58 @@ export const garmentSizeRequest = z
     /** Hem run at the guide line, front panel and whole way round; both null for garments without a hem border. */
     hemFrontMm: lengthMm('the front hem').nullable(),
     hemCircumferenceMm: lengthMm('the hem all round', 4000).nullable(),
-    mockupScale: z.number({ error: 'Enter the drawing scale' }).positive('The scale must be more than 0').max(10, 'Keep the scale at or under 10'),
+    mockupScale: z
+      .number({ error: 'Enter the drawing scale' })
+      .positive('The scale must be more than 0')
+      .max(10, 'Keep the scale at or under 10'),
     zones: z.array(zoneInput).min(1, 'Add at least one place for embroidery').max(10, 'Use at most 10 places'),
     sortOrder,
   })
   .superRefine((size, ctx) => {
     if ((size.hemFrontMm === null) !== (size.hemCircumferenceMm === null)) {
-      ctx.addIssue({ code: 'custom', path: ['hemCircumferenceMm'], message: 'Give both hem lengths, or neither for a garment without a hem border' });
-    } else if (size.hemFrontMm !== null && size.hemCircumferenceMm !== null && size.hemFrontMm > size.hemCircumferenceMm) {
-      ctx.addIssue({ code: 'custom', path: ['hemCircumferenceMm'], message: 'The hem all round cannot be shorter than the front hem' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['hemCircumferenceMm'],
+        message: 'Give both hem lengths, or neither for a garment without a hem border',
+      });
+    } else if (
+      size.hemFrontMm !== null &&
+      size.hemCircumferenceMm !== null &&
+      size.hemFrontMm > size.hemCircumferenceMm
+    ) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['hemCircumferenceMm'],
+        message: 'The hem all round cannot be shorter than the front hem',
+      });
     }
     size.zones.forEach((zone, index) => {
       if (zone.code === 'hem' && zone.hemOffsetMm === undefined) {
-        ctx.addIssue({ code: 'custom', path: ['zones', index, 'hemOffsetMm'], message: 'Say how far above the hem the border sits' });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['zones', index, 'hemOffsetMm'],
+          message: 'Say how far above the hem the border sits',
+        });
       }
     });
     const seen = new Set<string>();
     size.zones.forEach((zone, index) => {
-      if (seen.has(zone.code)) ctx.addIssue({ code: 'custom', path: ['zones', index, 'code'], message: 'Each place may appear once per size' });
+      if (seen.has(zone.code))
+        ctx.addIssue({
+          code: 'custom',
+          path: ['zones', index, 'code'],
+          message: 'Each place may appear once per size',
+        });
       seen.add(zone.code);
     });
   });
 export type GarmentSizeRequest = z.infer<typeof garmentSizeRequest>;
 
-export const fabricColourRequest = z.object({ name: catalogueName.max(80, 'Keep the name under 80 characters'), hex: hexColour, sortOrder });
+export const fabricColourRequest = z.object({
+  name: catalogueName.max(80, 'Keep the name under 80 characters'),
+  hex: hexColour,
+  sortOrder,
+});
 export type FabricColourRequest = z.infer<typeof fabricColourRequest>;
 
 export const garmentPartParams = z.object({

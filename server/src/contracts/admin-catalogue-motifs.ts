@@ -25,7 +25,10 @@ export type MotifEstimate = z.infer<typeof motifEstimate>;
 
 /** Optional form field of the preview upload: the width to stitch a drawing at when it does not say its size. */
 export const motifPreviewFields = z.object({
-  widthMm: z.preprocess((value) => (value === '' || value === undefined ? undefined : Number(value)), lengthMm('the width', 1000).optional()),
+  widthMm: z.preprocess(
+    (value) => (value === '' || value === undefined ? undefined : Number(value)),
+    lengthMm('the width', 1000).optional(),
+  ),
 });
 
 export const motifPreviewResponse = z.object({
@@ -47,10 +50,16 @@ const scalePct = z.number({ error: 'Enter a percentage' }).int('Use a whole perc
 const motifFields = z.object({
   name: catalogueName,
   kind: motifKind,
-  svg: z.string().min(1, 'Upload the artwork').max(MAX_MOTIF_SVG_LENGTH, 'The artwork is too large; simplify it below 900 kB'),
+  svg: z
+    .string()
+    .min(1, 'Upload the artwork')
+    .max(MAX_MOTIF_SVG_LENGTH, 'The artwork is too large; simplify it below 900 kB'),
   widthMm: lengthMm('the width', 1000),
   heightMm: lengthMm('the height', 1000),
-  gapMm: z.number({ error: 'Enter the gap in mm' }).min(-100, 'Overlap at most 100 mm').max(100, 'Keep the gap at or under 100 mm'),
+  gapMm: z
+    .number({ error: 'Enter the gap in mm' })
+    .min(-100, 'Overlap at most 100 mm')
+    .max(100, 'Keep the gap at or under 100 mm'),
   minScalePct: scalePct.min(1, 'Use at least 1 %').max(100, 'The smallest size cannot be above 100 %'),
   maxScalePct: scalePct.min(100, 'The largest size cannot be below 100 %').max(500, 'Keep it at or under 500 %'),
   threadCodes: z.array(threadCodeField).min(1, 'Choose a thread for each colour').max(20, 'Use at most 20 colours'),
@@ -58,14 +67,23 @@ const motifFields = z.object({
    * The count from the studio's own digitizing at 100 %. When given, quotes use it instead of the estimate; without
    * a mix, the estimate's share of running, satin and fill is applied to it.
    */
-  measured: z.object({ stitchCount: z.number().int('Use whole stitches').min(1, 'Enter at least 1 stitch').max(2_000_000), mix: stitchMix.optional() }).nullable(),
+  measured: z
+    .object({
+      stitchCount: z.number().int('Use whole stitches').min(1, 'Enter at least 1 stitch').max(2_000_000),
+      mix: stitchMix.optional(),
+    })
+    .nullable(),
   sortOrder,
 });
 
 function mixAddsUp(motif: z.infer<typeof motifFields>, ctx: z.RefinementCtx): void {
   const mix = motif.measured?.mix;
   if (mix && mix.run + mix.satin + mix.fill !== motif.measured!.stitchCount) {
-    ctx.addIssue({ code: 'custom', path: ['measured', 'mix'], message: 'Running, satin and fill must add up to the measured count' });
+    ctx.addIssue({
+      code: 'custom',
+      path: ['measured', 'mix'],
+      message: 'Running, satin and fill must add up to the measured count',
+    });
   }
 }
 

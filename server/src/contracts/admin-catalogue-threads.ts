@@ -5,7 +5,10 @@ import { catalogueName, hexColour, sortOrder } from './admin-catalogue-common.ts
 export const threadCodeField = z
   .string()
   .trim()
-  .regex(/^[A-Za-z0-9][A-Za-z0-9 ._-]{0,19}$/, 'Use up to 20 letters, digits, spaces, “.”, “_” or “-”, starting with a letter or digit');
+  .regex(
+    /^[A-Za-z0-9][A-Za-z0-9 ._-]{0,19}$/,
+    'Use up to 20 letters, digits, spaces, “.”, “_” or “-”, starting with a letter or digit',
+  );
 
 /** CIELAB under D65, as stored for thread matching; worked out from the hex colour when left out. */
 export const threadLab = z.object({
@@ -14,7 +17,12 @@ export const threadLab = z.object({
   b: z.number().min(-200).max(200),
 });
 
-const threadFields = { name: catalogueName.max(80, 'Keep the name under 80 characters'), hex: hexColour, lab: threadLab.optional(), sortOrder };
+const threadFields = {
+  name: catalogueName.max(80, 'Keep the name under 80 characters'),
+  hex: hexColour,
+  lab: threadLab.optional(),
+  sortOrder,
+};
 
 export const createThreadRequest = z.object({ code: threadCodeField, ...threadFields });
 export type CreateThreadRequest = z.infer<typeof createThreadRequest>;

@@ -23,7 +23,14 @@ export const studioThread = threadColour.extend({
 });
 export type StudioThread = z.infer<typeof studioThread>;
 
-export const studioHoop = z.object({ id: z.number().int(), slug: z.string(), name: z.string(), fieldWidthMm: z.number(), fieldHeightMm: z.number(), isActive: z.boolean() });
+export const studioHoop = z.object({
+  id: z.number().int(),
+  slug: z.string(),
+  name: z.string(),
+  fieldWidthMm: z.number(),
+  fieldHeightMm: z.number(),
+  isActive: z.boolean(),
+});
 export type StudioHoop = z.infer<typeof studioHoop>;
 
 export const studioFont = letteringFont.extend({ isActive: z.boolean(), fontsourcePackage: z.string() });

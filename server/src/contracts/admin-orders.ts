@@ -40,10 +40,15 @@ export const orderDetailResponse = z.object({
       totalCents: z.number().int(),
       designName: z.string(),
       /** The customer's own pictures on the design, for the studio to digitize: where each is and its picture's address. */
-      artwork: z.array(z.object({ uploadId: z.number().int(), zone: z.string(), widthMm: z.number(), imageUrl: z.string() })),
+      artwork: z.array(
+        z.object({ uploadId: z.number().int(), zone: z.string(), widthMm: z.number(), imageUrl: z.string() }),
+      ),
     }),
   ),
-  quote: z.object({ ruleSetVersion: z.number().int(), lines: z.array(z.object({ code: z.string(), label: z.string(), amountCents: z.number().int() })) }),
+  quote: z.object({
+    ruleSetVersion: z.number().int(),
+    lines: z.array(z.object({ code: z.string(), label: z.string(), amountCents: z.number().int() })),
+  }),
   payments: z.array(
     z.object({
       status: z.string(),
@@ -75,9 +80,13 @@ export const orderDetailResponse = z.object({
 export type OrderDetailResponse = z.infer<typeof orderDetailResponse>;
 
 /** Where the studio opens a customer's uploaded picture that an order stitches. */
-export const orderArtworkImagePath = (number: string, uploadId: number) => `/api/admin/orders/${encodeURIComponent(number)}/artwork/${uploadId}/image`;
+export const orderArtworkImagePath = (number: string, uploadId: number) =>
+  `/api/admin/orders/${encodeURIComponent(number)}/artwork/${uploadId}/image`;
 
 export const orderArtworkParams = z.object({
   number: orderNumberParams.shape.number,
-  uploadId: z.string().regex(/^[1-9]\d{0,9}$/, 'must be an upload number').transform(Number),
+  uploadId: z
+    .string()
+    .regex(/^[1-9]\d{0,9}$/, 'must be an upload number')
+    .transform(Number),
 });

@@ -6,7 +6,12 @@ export type MailStatus = z.infer<typeof mailStatus>;
 export const outboxPageSize = 20;
 
 export const outboxQuery = z.object({
-  page: z.coerce.number({ error: 'Use a whole page number' }).int('Use a whole page number').min(1, 'Pages start at 1').max(10_000, 'That page is too far').default(1),
+  page: z.coerce
+    .number({ error: 'Use a whole page number' })
+    .int('Use a whole page number')
+    .min(1, 'Pages start at 1')
+    .max(10_000, 'That page is too far')
+    .default(1),
   order: z
     .string()
     .trim()
@@ -37,9 +42,19 @@ export const outboxListResponse = z.object({
 });
 export type OutboxListResponse = z.infer<typeof outboxListResponse>;
 
-export const outboxIdParams = z.object({ id: z.coerce.number({ error: 'Use a message id such as 4' }).int('Use a message id such as 4').min(1, 'Use a message id such as 4') });
+export const outboxIdParams = z.object({
+  id: z.coerce
+    .number({ error: 'Use a message id such as 4' })
+    .int('Use a message id such as 4')
+    .min(1, 'Use a message id such as 4'),
+});
 
 export const outboxMessageResponse = z.object({
-  message: outboxEntry.extend({ textBody: z.string().nullable(), htmlBody: z.string().nullable(), providerMessageId: z.string().nullable(), updatedAt: z.string() }),
+  message: outboxEntry.extend({
+    textBody: z.string().nullable(),
+    htmlBody: z.string().nullable(),
+    providerMessageId: z.string().nullable(),
+    updatedAt: z.string(),
+  }),
 });
 export type OutboxMessageResponse = z.infer<typeof outboxMessageResponse>;

@@ -19,13 +19,24 @@ export const recentOrder = z.object({
 export const actionOrder = recentOrder.extend({ dueDate: z.string().nullable(), isOverdue: z.boolean() });
 export type ActionOrder = z.infer<typeof actionOrder>;
 
-export const actionGroupKinds = ['proofs_to_send', 'changes_asked', 'awaiting_charge', 'due_soon', 'ready_to_ship'] as const;
+export const actionGroupKinds = [
+  'proofs_to_send',
+  'changes_asked',
+  'awaiting_charge',
+  'due_soon',
+  'ready_to_ship',
+] as const;
 export type ActionGroupKind = (typeof actionGroupKinds)[number];
 
 export const actionGroup = z.object({ kind: z.enum(actionGroupKinds), orders: z.array(actionOrder) });
 
 export const machineWeek = z.object({ weekStart: z.string(), bookedHours: z.number(), orderCount: z.number().int() });
-export const revenueWeek = z.object({ weekStart: z.string(), capturedCents: z.number().int(), refundedCents: z.number().int(), netCents: z.number().int() });
+export const revenueWeek = z.object({
+  weekStart: z.string(),
+  capturedCents: z.number().int(),
+  refundedCents: z.number().int(),
+  netCents: z.number().int(),
+});
 
 export const adminOverviewResponse = z.object({
   shopName: z.string(),

@@ -1,9 +1,18 @@
 import { z } from 'zod';
 
 const capital = (what: string) => what[0]!.toUpperCase() + what.slice(1);
-const cents = (what: string) => z.number({ error: `Enter ${what} in whole cents` }).int(`Enter ${what} in whole cents`).min(0, `${capital(what)} can't be negative`).max(10_000_000, `${capital(what)} must be under $100,000`);
+const cents = (what: string) =>
+  z
+    .number({ error: `Enter ${what} in whole cents` })
+    .int(`Enter ${what} in whole cents`)
+    .min(0, `${capital(what)} can't be negative`)
+    .max(10_000_000, `${capital(what)} must be under $100,000`);
 const basisPoints = (what: string, min: number, max: number) =>
-  z.number({ error: `Enter ${what}` }).int(`Enter ${what} to two decimal places`).min(min, `${capital(what)} must be at least ${min / 100} %`).max(max, `${capital(what)} must be at most ${max / 100} %`);
+  z
+    .number({ error: `Enter ${what}` })
+    .int(`Enter ${what} to two decimal places`)
+    .min(min, `${capital(what)} must be at least ${min / 100} %`)
+    .max(max, `${capital(what)} must be at most ${max / 100} %`);
 
 /**
  * Everything a price list holds except its version, which the server assigns. The engine's checkPricingRuleSet
@@ -17,13 +26,32 @@ export const pricingRules = z.object({
   extraHoopingCents: cents('the re-hooping fee'),
   colorChangeCents: cents('the colour change fee'),
   artworkSetupCents: cents('the artwork setup fee'),
-  lettering: z.object({ centsPerThousandStitches: cents('the lettering rate'), minimumCents: cents('the lettering minimum') }),
+  lettering: z.object({
+    centsPerThousandStitches: cents('the lettering rate'),
+    minimumCents: cents('the lettering minimum'),
+  }),
   /** 15,000 = × 1.5. */
-  rushMultiplierBp: z.number({ error: 'Enter the rush surcharge' }).int('Enter the rush surcharge to two decimal places').min(10_000, 'The rush surcharge can’t be below 0 %').max(40_000, 'The rush surcharge must be at most 300 %'),
+  rushMultiplierBp: z
+    .number({ error: 'Enter the rush surcharge' })
+    .int('Enter the rush surcharge to two decimal places')
+    .min(10_000, 'The rush surcharge can’t be below 0 %')
+    .max(40_000, 'The rush surcharge must be at most 300 %'),
   quantityBreaks: z
-    .array(z.object({ minQty: z.number().int('Use a whole number of garments').min(2, 'A break starts at 2 garments or more').max(10_000, 'Use at most 10,000 garments'), discountBp: basisPoints('the discount', 1, 9_000) }))
+    .array(
+      z.object({
+        minQty: z
+          .number()
+          .int('Use a whole number of garments')
+          .min(2, 'A break starts at 2 garments or more')
+          .max(10_000, 'Use at most 10,000 garments'),
+        discountBp: basisPoints('the discount', 1, 9_000),
+      }),
+    )
     .max(10, 'Use at most 10 quantity breaks')
-    .refine((breaks) => new Set(breaks.map((b) => b.minQty)).size === breaks.length, 'Two breaks start at the same quantity'),
+    .refine(
+      (breaks) => new Set(breaks.map((b) => b.minQty)).size === breaks.length,
+      'Two breaks start at the same quantity',
+    ),
   taxRateBp: basisPoints('the tax rate', 0, 5_000),
 });
 export type PricingRules = z.infer<typeof pricingRules>;
@@ -51,7 +79,12 @@ export type RuleSetListResponse = z.infer<typeof ruleSetListResponse>;
 export const ruleSetDetailResponse = z.object({ ruleSet: ruleSetSummary.extend({ rules: pricingRules }) });
 export type RuleSetDetailResponse = z.infer<typeof ruleSetDetailResponse>;
 
-export const ruleSetIdParams = z.object({ id: z.coerce.number({ error: 'Use a price list id such as 2' }).int('Use a price list id such as 2').min(1, 'Use a price list id such as 2') });
+export const ruleSetIdParams = z.object({
+  id: z.coerce
+    .number({ error: 'Use a price list id such as 2' })
+    .int('Use a price list id such as 2')
+    .min(1, 'Use a price list id such as 2'),
+});
 
 export const updateDraftRequest = z.object({
   rules: pricingRules,
@@ -63,7 +96,13 @@ export const pricingPreviewRequest = z.object({ rules: pricingRules });
 export type PricingPreviewRequest = z.infer<typeof pricingPreviewRequest>;
 
 const pricedSide = z.discriminatedUnion('ok', [
-  z.object({ ok: z.literal(true), totalCents: z.number().int(), subtotalCents: z.number().int(), taxCents: z.number().int(), lines: z.array(z.object({ code: z.string(), label: z.string(), amountCents: z.number().int() })) }),
+  z.object({
+    ok: z.literal(true),
+    totalCents: z.number().int(),
+    subtotalCents: z.number().int(),
+    taxCents: z.number().int(),
+    lines: z.array(z.object({ code: z.string(), label: z.string(), amountCents: z.number().int() })),
+  }),
   z.object({ ok: z.literal(false), reason: z.string() }),
 ]);
 

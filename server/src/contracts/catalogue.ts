@@ -52,13 +52,21 @@ export const garmentListResponse = z.object({ garments: z.array(garmentSummary) 
 export type GarmentListResponse = z.infer<typeof garmentListResponse>;
 
 /** A size on the garment's own page: its measurements too, mm (null where one does not apply, as a bonnet's chest). */
-export const garmentSizeDetail = garmentSize.extend({ chestMm: z.number().nullable(), lengthMm: z.number().nullable() });
+export const garmentSizeDetail = garmentSize.extend({
+  chestMm: z.number().nullable(),
+  lengthMm: z.number().nullable(),
+});
 
 /** One garment for its product page: the list's summary plus the back drawing (same viewBox) and measured sizes. */
-export const garmentDetail = garmentSummary.extend({ mockupBackSvg: z.string().nullable(), sizes: z.array(garmentSizeDetail) });
+export const garmentDetail = garmentSummary.extend({
+  mockupBackSvg: z.string().nullable(),
+  sizes: z.array(garmentSizeDetail),
+});
 export type GarmentDetail = z.infer<typeof garmentDetail>;
 
-export const garmentSlugParams = z.object({ slug: z.string().regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, 'must be a garment name from the catalogue') });
+export const garmentSlugParams = z.object({
+  slug: z.string().regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, 'must be a garment name from the catalogue'),
+});
 export const garmentDetailResponse = z.object({ garment: garmentDetail });
 
 export const motifKind = z.enum(['border', 'single']);
@@ -104,6 +112,11 @@ export type ThreadColourSummary = z.infer<typeof threadColour>;
 export const threadListResponse = z.object({ threads: z.array(threadColour) });
 
 /** A hoop the studio stitches with; the sewing field is the area the machine reaches, mm. */
-export const hoopSummary = z.object({ slug: z.string(), name: z.string(), fieldWidthMm: z.number(), fieldHeightMm: z.number() });
+export const hoopSummary = z.object({
+  slug: z.string(),
+  name: z.string(),
+  fieldWidthMm: z.number(),
+  fieldHeightMm: z.number(),
+});
 export type HoopSummary = z.infer<typeof hoopSummary>;
 export const hoopListResponse = z.object({ hoops: z.array(hoopSummary) });

@@ -20,7 +20,8 @@ const MAX_REQUESTED_REPEATS = 200;
 export function strictObjectErrors(what: string) {
   return {
     error: (issue: z.core.$ZodRawIssue) => {
-      if (issue.code === 'unrecognized_keys') return `Leave out ${issue.keys.join(', ')}: the server works out prices, stitch counts and hoopings itself`;
+      if (issue.code === 'unrecognized_keys')
+        return `Leave out ${issue.keys.join(', ')}: the server works out prices, stitch counts and hoopings itself`;
       return issue.code === 'invalid_type' ? `Send ${what}` : undefined;
     },
   };
@@ -28,7 +29,10 @@ export function strictObjectErrors(what: string) {
 
 const placementId = z.string().regex(/^[A-Za-z0-9_-]{1,40}$/, 'Use 1 to 40 letters, digits, “-” or “_”');
 /** Catalogue slugs (motifs, fonts, hoops): lower-case words joined by hyphens. */
-const catalogueSlug = z.string().max(80).regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, 'Choose one from the catalogue');
+const catalogueSlug = z
+  .string()
+  .max(80)
+  .regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, 'Choose one from the catalogue');
 const zoneCode = z.string().regex(/^[a-z][a-z0-9_]{0,39}$/, 'Choose a place on the garment');
 /** A thread's code in the shop's palette, such as "WB-118". */
 const threadCode = z.string().regex(/^[A-Za-z0-9][A-Za-z0-9 ._-]{0,19}$/, 'Choose a thread from the palette');
@@ -49,74 +53,105 @@ const itemPosition = {
  * `count` is the number of repeats the customer asks for; without it the server picks the count that needs the
  * least resizing. `scalePct` and `hoop` record the fit the customer last saw; the server recomputes both.
  */
-const borderPlacement = z.strictObject({
-  id: placementId,
-  kind: z.literal('border'),
-  zone: z.literal('hem'),
-  motif: catalogueSlug,
-  run: z.enum(['front', 'circumference']),
-  count: z.number().int().min(1, 'Ask for at least 1 repeat').max(MAX_REQUESTED_REPEATS, `Ask for at most ${MAX_REQUESTED_REPEATS} repeats`).optional(),
-  scalePct: z.number().min(1).max(400).optional(),
-  /** The border's centre line above the hem edge, mm. */
-  hemOffsetMm: z.number().min(0).max(500),
-  hoop: catalogueSlug.optional(),
-  /** One per colour of the motif, in stitching order. */
-  threads: threadCodes,
-}, strictObjectErrors('the border'));
+const borderPlacement = z.strictObject(
+  {
+    id: placementId,
+    kind: z.literal('border'),
+    zone: z.literal('hem'),
+    motif: catalogueSlug,
+    run: z.enum(['front', 'circumference']),
+    count: z
+      .number()
+      .int()
+      .min(1, 'Ask for at least 1 repeat')
+      .max(MAX_REQUESTED_REPEATS, `Ask for at most ${MAX_REQUESTED_REPEATS} repeats`)
+      .optional(),
+    scalePct: z.number().min(1).max(400).optional(),
+    /** The border's centre line above the hem edge, mm. */
+    hemOffsetMm: z.number().min(0).max(500),
+    hoop: catalogueSlug.optional(),
+    /** One per colour of the motif, in stitching order. */
+    threads: threadCodes,
+  },
+  strictObjectErrors('the border'),
+);
 
 /** A single catalogue motif at a scale (100 = as digitized). */
-const motifPlacement = z.strictObject({
-  id: placementId,
-  kind: z.literal('motif'),
-  ...itemPosition,
-  motif: catalogueSlug,
-  scalePct: z.number().min(1, 'Use a size from 1 % to 400 %').max(400, 'Use a size from 1 % to 400 %'),
-  threads: threadCodes,
-}, strictObjectErrors('the motif'));
+const motifPlacement = z.strictObject(
+  {
+    id: placementId,
+    kind: z.literal('motif'),
+    ...itemPosition,
+    motif: catalogueSlug,
+    scalePct: z.number().min(1, 'Use a size from 1 % to 400 %').max(400, 'Use a size from 1 % to 400 %'),
+    threads: threadCodes,
+  },
+  strictObjectErrors('the motif'),
+);
 
 /** Text in one of the shop's lettering fonts, sized by the height of a capital H, in one thread. */
-const letteringPlacement = z.strictObject({
-  id: placementId,
-  kind: z.literal('lettering'),
-  ...itemPosition,
-  text: z
-    .string()
-    .refine((text) => text.trim() !== '', 'Type the lettering')
-    .refine((text) => [...text].length <= MAX_LETTERING_LENGTH, `Keep the lettering to ${MAX_LETTERING_LENGTH} characters or fewer`)
-    .refine((text) => !/\p{Cc}/u.test(text), 'Lettering is one line of text'),
-  font: catalogueSlug,
-  letterHeightMm: z.number().min(5, 'Letters must be at least 5 mm tall').max(100, 'Letters can be at most 100 mm tall'),
-  thread: threadCode,
-}, strictObjectErrors('the lettering'));
+const letteringPlacement = z.strictObject(
+  {
+    id: placementId,
+    kind: z.literal('lettering'),
+    ...itemPosition,
+    text: z
+      .string()
+      .refine((text) => text.trim() !== '', 'Type the lettering')
+      .refine(
+        (text) => [...text].length <= MAX_LETTERING_LENGTH,
+        `Keep the lettering to ${MAX_LETTERING_LENGTH} characters or fewer`,
+      )
+      .refine((text) => !/\p{Cc}/u.test(text), 'Lettering is one line of text'),
+    font: catalogueSlug,
+    letterHeightMm: z
+      .number()
+      .min(5, 'Letters must be at least 5 mm tall')
+      .max(100, 'Letters can be at most 100 mm tall'),
+    thread: threadCode,
+  },
+  strictObjectErrors('the lettering'),
+);
 
 /** The customer's own artwork (an upload), drawn widthMm wide with its height in proportion. */
-const artworkPlacement = z.strictObject({
-  id: placementId,
-  kind: z.literal('artwork'),
-  ...itemPosition,
-  artworkUploadId: z.number().int().positive(),
-  widthMm: z.number().min(5, 'Make the artwork at least 5 mm wide').max(400, 'Make the artwork at most 400 mm wide'),
-}, strictObjectErrors('the artwork'));
+const artworkPlacement = z.strictObject(
+  {
+    id: placementId,
+    kind: z.literal('artwork'),
+    ...itemPosition,
+    artworkUploadId: z.number().int().positive(),
+    widthMm: z.number().min(5, 'Make the artwork at least 5 mm wide').max(400, 'Make the artwork at most 400 mm wide'),
+  },
+  strictObjectErrors('the artwork'),
+);
 
-const designPlacement = z.discriminatedUnion('kind', [borderPlacement, motifPlacement, letteringPlacement, artworkPlacement], {
-  error: 'Choose a border, a motif, lettering or artwork',
-});
+const designPlacement = z.discriminatedUnion(
+  'kind',
+  [borderPlacement, motifPlacement, letteringPlacement, artworkPlacement],
+  {
+    error: 'Choose a border, a motif, lettering or artwork',
+  },
+);
 
 /** Version 1 of the design document, as designs.document stores it. */
-export const designDocument = z.strictObject({
-  version: z.literal(1),
-  placements: z
-    .array(designPlacement)
-    .max(MAX_PLACEMENTS, `A design can have at most ${MAX_PLACEMENTS} placements`)
-    .superRefine((placements, context) => {
-      // Quote lines and production sheets name placements by id, so two with one id could not be told apart.
-      const seen = new Set<string>();
-      placements.forEach((placement, index) => {
-        if (seen.has(placement.id)) context.addIssue({ code: 'custom', path: [index, 'id'], message: 'Another placement already has this id' });
-        seen.add(placement.id);
-      });
-    }),
-}, strictObjectErrors('the design'));
+export const designDocument = z.strictObject(
+  {
+    version: z.literal(1),
+    placements: z
+      .array(designPlacement)
+      .max(MAX_PLACEMENTS, `A design can have at most ${MAX_PLACEMENTS} placements`)
+      .superRefine((placements, context) => {
+        // Quote lines and production sheets name placements by id, so two with one id could not be told apart.
+        const seen = new Set<string>();
+        placements.forEach((placement, index) => {
+          if (seen.has(placement.id))
+            context.addIssue({ code: 'custom', path: [index, 'id'], message: 'Another placement already has this id' });
+          seen.add(placement.id);
+        });
+      }),
+  },
+  strictObjectErrors('the design'),
+);
 
 export type BorderPlacement = z.infer<typeof borderPlacement>;
 export type MotifPlacement = z.infer<typeof motifPlacement>;

@@ -54,7 +54,11 @@ export type ShipTo = z.infer<typeof shipTo>;
 const calendarDate = z
   .string({ error: 'Choose the date you need it by' })
   .regex(/^\d{4}-\d{2}-\d{2}$/, 'Choose the date you need it by')
-  .refine((value) => !Number.isNaN(Date.parse(`${value}T00:00:00Z`)) && new Date(`${value}T00:00:00Z`).toISOString().startsWith(value), 'Choose a real date');
+  .refine(
+    (value) =>
+      !Number.isNaN(Date.parse(`${value}T00:00:00Z`)) && new Date(`${value}T00:00:00Z`).toISOString().startsWith(value),
+    'Choose a real date',
+  );
 
 const positiveId = (message: string) => z.number({ error: message }).int(message).positive(message);
 
@@ -85,8 +89,14 @@ export const proofParams = orderNumberParam.extend({
 
 /** A point on the proof image, as percentages of its width and height from the top left. */
 export const proofPin = z.strictObject({
-  xPct: z.number({ error: 'Place the pin on the picture' }).min(0, 'Place the pin on the picture').max(100, 'Place the pin on the picture'),
-  yPct: z.number({ error: 'Place the pin on the picture' }).min(0, 'Place the pin on the picture').max(100, 'Place the pin on the picture'),
+  xPct: z
+    .number({ error: 'Place the pin on the picture' })
+    .min(0, 'Place the pin on the picture')
+    .max(100, 'Place the pin on the picture'),
+  yPct: z
+    .number({ error: 'Place the pin on the picture' })
+    .min(0, 'Place the pin on the picture')
+    .max(100, 'Place the pin on the picture'),
   comment: text('what to change here', MAX_PIN_COMMENT),
 });
 export type ProofPin = z.infer<typeof proofPin>;
@@ -94,7 +104,10 @@ export type ProofPin = z.infer<typeof proofPin>;
 /** The customer's answer to a proof: approval may say something; a change request says what to change. */
 export const proofAnswerRequest = z.strictObject({
   comment: optionalText('your comment', MAX_PROOF_COMMENT),
-  pins: z.array(proofPin).max(MAX_PROOF_PINS, `Drop at most ${MAX_PROOF_PINS} pins; put the rest in your comment`).default([]),
+  pins: z
+    .array(proofPin)
+    .max(MAX_PROOF_PINS, `Drop at most ${MAX_PROOF_PINS} pins; put the rest in your comment`)
+    .default([]),
 });
 export type ProofAnswerRequest = z.input<typeof proofAnswerRequest>;
 

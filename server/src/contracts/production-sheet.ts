@@ -111,9 +111,20 @@ export const productionSheetResponse = z.object({
     quantity: z.number().int(),
     designName: z.string(),
   }),
-  garment: z.object({ name: z.string(), sizeLabel: z.string(), colourName: z.string(), colourHex: z.string(), fabricType: z.string() }),
+  garment: z.object({
+    name: z.string(),
+    sizeLabel: z.string(),
+    colourName: z.string(),
+    colourHex: z.string(),
+    fabricType: z.string(),
+  }),
   placements: z.array(sheetPlacement),
-  totals: z.object({ stitches: z.number().int(), colourChanges: z.number().int(), hoopings: z.number().int(), trims: z.number().int() }),
+  totals: z.object({
+    stitches: z.number().int(),
+    colourChanges: z.number().int(),
+    hoopings: z.number().int(),
+    trims: z.number().int(),
+  }),
   stabilizer: z.object({
     backing: z.enum(['water-soluble-adhesive', 'tearaway', 'cutaway-adhesive', 'cutaway', 'no-show-mesh']),
     topping: z.enum(['water-soluble']).nullable(),
@@ -128,7 +139,13 @@ export const productionSheetResponse = z.object({
   runMinutes: z.object({
     totalMinutes: z.number(),
     orderMinutes: z.number(),
-    items: z.array(z.object({ code: z.enum(['sewing', 'color-changes', 'trims', 'hoopings', 'setup']), label: z.string(), minutes: z.number() })),
+    items: z.array(
+      z.object({
+        code: z.enum(['sewing', 'color-changes', 'trims', 'hoopings', 'setup']),
+        label: z.string(),
+        minutes: z.number(),
+      }),
+    ),
   }),
   cautions: z.array(guidanceMessage),
   templates: z.array(placementTemplate),

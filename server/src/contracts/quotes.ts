@@ -4,7 +4,11 @@ import { designDocument, strictObjectErrors } from './designs.ts';
 /** Garments one quote may price: more is a wholesale order the studio quotes by hand. */
 const MAX_QUOTE_QUANTITY = 50;
 
-const catalogueId = (what: string) => z.number({ error: `Choose a ${what}` }).int(`Choose a ${what}`).positive(`Choose a ${what}`);
+const catalogueId = (what: string) =>
+  z
+    .number({ error: `Choose a ${what}` })
+    .int(`Choose a ${what}`)
+    .positive(`Choose a ${what}`);
 
 /** A design to price, without saving it; strict, like the design document. */
 export const quotePreviewRequest = z.strictObject(
@@ -26,7 +30,17 @@ export type QuotePreviewRequest = z.infer<typeof quotePreviewRequest>;
 
 /** One priced line; amounts are whole cents for the whole quantity, negative for discounts. */
 const quoteLine = z.object({
-  code: z.enum(['garment', 'stitching', 'lettering', 'extra-hoopings', 'color-changes', 'quantity-discount', 'rush', 'artwork-setup', 'tax']),
+  code: z.enum([
+    'garment',
+    'stitching',
+    'lettering',
+    'extra-hoopings',
+    'color-changes',
+    'quantity-discount',
+    'rush',
+    'artwork-setup',
+    'tax',
+  ]),
   label: z.string(),
   amountCents: z.number().int(),
   /** Set on stitching and lettering lines: the design placement they price. */
@@ -90,7 +104,13 @@ export const quotePreviewResponse = z.object({
   /** Machine and hands-on time for one garment, minutes, with the job's setup counted once. */
   runMinutes: z.object({
     totalMinutes: z.number(),
-    items: z.array(z.object({ code: z.enum(['sewing', 'color-changes', 'trims', 'hoopings', 'setup']), label: z.string(), minutes: z.number() })),
+    items: z.array(
+      z.object({
+        code: z.enum(['sewing', 'color-changes', 'trims', 'hoopings', 'setup']),
+        label: z.string(),
+        minutes: z.number(),
+      }),
+    ),
   }),
   stabilizer: z.object({
     backing: z.enum(['water-soluble-adhesive', 'tearaway', 'cutaway-adhesive', 'cutaway', 'no-show-mesh']),

@@ -1,7 +1,11 @@
 import { z } from 'zod';
 import { designDocument, strictObjectErrors } from './designs.ts';
 
-const catalogueId = (what: string) => z.number({ error: `Choose a ${what}` }).int(`Choose a ${what}`).positive(`Choose a ${what}`);
+const catalogueId = (what: string) =>
+  z
+    .number({ error: `Choose a ${what}` })
+    .int(`Choose a ${what}`)
+    .positive(`Choose a ${what}`);
 
 export const designIdParams = z.object({
   id: z

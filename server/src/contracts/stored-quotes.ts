@@ -5,7 +5,11 @@ const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/);
 
 /** A quote to keep: the same design to price as a preview, plus the customer's saved design it prices, if any. */
 export const createQuoteRequest = quotePreviewRequest.extend({
-  designId: z.number({ error: 'Choose one of your saved designs' }).int('Choose one of your saved designs').positive('Choose one of your saved designs').optional(),
+  designId: z
+    .number({ error: 'Choose one of your saved designs' })
+    .int('Choose one of your saved designs')
+    .positive('Choose one of your saved designs')
+    .optional(),
 });
 export type CreateQuoteRequest = z.infer<typeof createQuoteRequest>;
 

@@ -6,7 +6,10 @@ import { orderStatus, orderStatuses, paymentStatus } from './order-status.ts';
  * requests and answers of sending a proof, charging, cancelling, refunding, marking stitched and shipping.
  */
 
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'use a date like 2026-12-24').refine((value) => !Number.isNaN(Date.parse(value)), 'is not a real date');
+const isoDate = z
+  .string()
+  .regex(/^\d{4}-\d{2}-\d{2}$/, 'use a date like 2026-12-24')
+  .refine((value) => !Number.isNaN(Date.parse(value)), 'is not a real date');
 
 export const boardSortKeys = ['placed', 'due', 'total', 'status', 'number'] as const;
 export type BoardSortKey = (typeof boardSortKeys)[number];
@@ -14,7 +17,12 @@ export type BoardSortKey = (typeof boardSortKeys)[number];
 /** `status=a,b` or `status=a&status=b`: several statuses at once. */
 const statusList = z
   .union([z.string(), z.array(z.string())])
-  .transform((value) => (Array.isArray(value) ? value : [value]).flatMap((part) => part.split(',')).map((part) => part.trim()).filter(Boolean))
+  .transform((value) =>
+    (Array.isArray(value) ? value : [value])
+      .flatMap((part) => part.split(','))
+      .map((part) => part.trim())
+      .filter(Boolean),
+  )
   .pipe(z.array(z.enum(orderStatuses, { error: `choose from ${orderStatuses.join(', ')}` })).max(orderStatuses.length));
 
 export const orderBoardQuery = z
@@ -22,14 +30,31 @@ export const orderBoardQuery = z
     status: statusList.optional(),
     dueFrom: isoDate.optional(),
     dueTo: isoDate.optional(),
-    customer: z.coerce.number({ error: 'must be a customer id' }).int('must be a customer id').positive('must be a customer id').optional(),
+    customer: z.coerce
+      .number({ error: 'must be a customer id' })
+      .int('must be a customer id')
+      .positive('must be a customer id')
+      .optional(),
     q: z.string().trim().max(100, 'keep the search under 100 characters').optional(),
     sort: z.enum(boardSortKeys, { error: `sort by ${boardSortKeys.join(', ')}` }).default('placed'),
     dir: z.enum(['asc', 'desc'], { error: 'use asc or desc' }).default('desc'),
-    page: z.coerce.number({ error: 'must be a page number' }).int('must be a whole number').min(1, 'pages start at 1').max(10_000, 'is past the last page').default(1),
-    pageSize: z.coerce.number({ error: 'must be a number' }).int('must be a whole number').min(1, 'show at least 1').max(100, 'show at most 100').default(25),
+    page: z.coerce
+      .number({ error: 'must be a page number' })
+      .int('must be a whole number')
+      .min(1, 'pages start at 1')
+      .max(10_000, 'is past the last page')
+      .default(1),
+    pageSize: z.coerce
+      .number({ error: 'must be a number' })
+      .int('must be a whole number')
+      .min(1, 'show at least 1')
+      .max(100, 'show at most 100')
+      .default(25),
   })
-  .refine((query) => !query.dueFrom || !query.dueTo || query.dueFrom <= query.dueTo, { path: ['dueTo'], message: 'must be on or after the first due date' });
+  .refine((query) => !query.dueFrom || !query.dueTo || query.dueFrom <= query.dueTo, {
+    path: ['dueTo'],
+    message: 'must be on or after the first due date',
+  });
 export type OrderBoardQuery = z.infer<typeof orderBoardQuery>;
 
 export const boardOrder = z.object({
@@ -78,13 +103,18 @@ export const dueOrdersResponse = z.object({
 });
 export type DueOrdersResponse = z.infer<typeof dueOrdersResponse>;
 
-const message = z.string().trim().min(1, 'write a short note for the customer').max(2000, 'keep the note under 2,000 characters');
+const message = z
+  .string()
+  .trim()
+  .min(1, 'write a short note for the customer')
+  .max(2000, 'keep the note under 2,000 characters');
 
 /** JSON for a render; multipart (`file` + these fields) for a photo of a test stitch-out. */
-export const sendProofRequest = z.discriminatedUnion('source', [
-  z.object({ source: z.literal('render'), message }),
-  z.object({ source: z.literal('photo'), message }),
-], { error: 'choose render or photo' });
+export const sendProofRequest = z.discriminatedUnion(
+  'source',
+  [z.object({ source: z.literal('render'), message }), z.object({ source: z.literal('photo'), message })],
+  { error: 'choose render or photo' },
+);
 export type SendProofRequest = z.infer<typeof sendProofRequest>;
 
 export const sentProofResponse = z.object({
@@ -96,30 +126,48 @@ export const sentProofResponse = z.object({
 export type SentProofResponse = z.infer<typeof sentProofResponse>;
 
 /** Where the studio app loads a proof's picture. */
-export const proofImagePath = (number: string, version: number) => `/api/admin/orders/${encodeURIComponent(number)}/proofs/${version}/image`;
+export const proofImagePath = (number: string, version: number) =>
+  `/api/admin/orders/${encodeURIComponent(number)}/proofs/${version}/image`;
 
 /** The drawing a render proof would send, made afresh and not kept. */
 export const proofPreviewPath = (number: string) => `/api/admin/orders/${encodeURIComponent(number)}/proofs/preview`;
 
 export const proofImageParams = z.object({
   number: z.string().regex(/^[A-Z]{2}-\d{1,10}$/, 'must look like WB-1001'),
-  version: z.coerce.number({ error: 'must be a version number' }).int('must be a version number').min(1, 'versions start at 1').max(1000, 'is not a version of this proof'),
+  version: z.coerce
+    .number({ error: 'must be a version number' })
+    .int('must be a version number')
+    .min(1, 'versions start at 1')
+    .max(1000, 'is not a version of this proof'),
 });
 
 export const cancelOrderRequest = z.object({
-  reason: z.string().trim().min(1, 'say why the order is cancelled').max(1000, 'keep the reason under 1,000 characters'),
+  reason: z
+    .string()
+    .trim()
+    .min(1, 'say why the order is cancelled')
+    .max(1000, 'keep the reason under 1,000 characters'),
 });
 export type CancelOrderRequest = z.infer<typeof cancelOrderRequest>;
 
 export const refundOrderRequest = z.object({
   /** Leave out for a full refund of what is left. */
-  amountCents: z.number({ error: 'must be an amount in cents' }).int('must be whole cents').positive('must be more than 0').optional(),
+  amountCents: z
+    .number({ error: 'must be an amount in cents' })
+    .int('must be whole cents')
+    .positive('must be more than 0')
+    .optional(),
   reason: z.string().trim().min(1, 'say why the money goes back').max(1000, 'keep the reason under 1,000 characters'),
 });
 export type RefundOrderRequest = z.infer<typeof refundOrderRequest>;
 
 export const shipOrderRequest = z.object({
-  trackingNumber: z.string().trim().max(60, 'keep the tracking number under 60 characters').regex(/^[A-Za-z0-9 -]*$/, 'use letters, digits, spaces and dashes').optional(),
+  trackingNumber: z
+    .string()
+    .trim()
+    .max(60, 'keep the tracking number under 60 characters')
+    .regex(/^[A-Za-z0-9 -]*$/, 'use letters, digits, spaces and dashes')
+    .optional(),
 });
 export type ShipOrderRequest = z.infer<typeof shipOrderRequest>;
 

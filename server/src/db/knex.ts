@@ -23,7 +23,10 @@ export function knexSettings(db: DatabaseConfig): Knex.Config {
       min: 0,
       max: db.poolMax,
       // Column defaults (CURRENT_TIMESTAMP) must agree with the UTC values the app writes, whatever the server's zone.
-      afterCreate(connection: { query(sql: string, done: (error: Error | null) => void): void }, done: (error: Error | null, connection: unknown) => void) {
+      afterCreate(
+        connection: { query(sql: string, done: (error: Error | null) => void): void },
+        done: (error: Error | null, connection: unknown) => void,
+      ) {
         connection.query("SET time_zone = '+00:00'", (error) => done(error, connection));
       },
     },

@@ -20,7 +20,10 @@ export interface DensityThresholds {
  * stitches per cm² (0.2 mm rows × 4 mm stitches), so below 25 (about a fifth covered) a design is open and airy,
  * and above 80 (about two thirds covered) it is dense.
  */
-export const DEFAULT_DENSITY_THRESHOLDS: Readonly<DensityThresholds> = Object.freeze({ airyBelowStitchesPerCm2: 25, denseAboveStitchesPerCm2: 80 });
+export const DEFAULT_DENSITY_THRESHOLDS: Readonly<DensityThresholds> = Object.freeze({
+  airyBelowStitchesPerCm2: 25,
+  denseAboveStitchesPerCm2: 80,
+});
 
 export interface StabilizerInput {
   stitches: number;
@@ -83,21 +86,34 @@ export function adviseStabilizer(input: StabilizerInput): EngineResult<Stabilize
   if (!isRecord(input)) return fail('The stabilizer advice needs the design and the fabric.');
   const { stitches, widthMm, heightMm, fabric, isNapped } = input;
   if (!isWholeNumber(stitches)) return fail('The stitch count must be a whole number, 0 or more.');
-  if (!isPositiveNumber(widthMm) || !isPositiveNumber(heightMm)) return fail('The design width and height must be positive numbers of millimetres.');
-  if (fabric !== 'woven' && fabric !== 'knit' && fabric !== 'sheer') return fail('The fabric must be woven, knit or sheer.');
+  if (!isPositiveNumber(widthMm) || !isPositiveNumber(heightMm))
+    return fail('The design width and height must be positive numbers of millimetres.');
+  if (fabric !== 'woven' && fabric !== 'knit' && fabric !== 'sheer')
+    return fail('The fabric must be woven, knit or sheer.');
   if (typeof isNapped !== 'boolean') return fail('Say whether the fabric has a nap or pile.');
-  if (input.thresholds !== undefined && !isRecord(input.thresholds)) return fail('The density thresholds must be an object.');
+  if (input.thresholds !== undefined && !isRecord(input.thresholds))
+    return fail('The density thresholds must be an object.');
   const thresholds = { ...DEFAULT_DENSITY_THRESHOLDS, ...input.thresholds };
-  if (!isPositiveNumber(thresholds.airyBelowStitchesPerCm2) || !isPositiveNumber(thresholds.denseAboveStitchesPerCm2) || thresholds.airyBelowStitchesPerCm2 > thresholds.denseAboveStitchesPerCm2) {
+  if (
+    !isPositiveNumber(thresholds.airyBelowStitchesPerCm2) ||
+    !isPositiveNumber(thresholds.denseAboveStitchesPerCm2) ||
+    thresholds.airyBelowStitchesPerCm2 > thresholds.denseAboveStitchesPerCm2
+  ) {
     return fail('The density thresholds must be positive, with the airy limit below the dense one.');
   }
 
   const densityStitchesPerCm2 = stitches / ((widthMm * heightMm) / MM2_PER_CM2);
   if (!Number.isFinite(densityStitchesPerCm2)) return fail('The design is too small to measure its density.');
   const density: DesignDensity =
-    densityStitchesPerCm2 < thresholds.airyBelowStitchesPerCm2 ? 'airy' : densityStitchesPerCm2 > thresholds.denseAboveStitchesPerCm2 ? 'dense' : 'medium';
+    densityStitchesPerCm2 < thresholds.airyBelowStitchesPerCm2
+      ? 'airy'
+      : densityStitchesPerCm2 > thresholds.denseAboveStitchesPerCm2
+        ? 'dense'
+        : 'medium';
   const backing = chooseBacking(fabric, density);
-  const messages: GuidanceMessage[] = [{ code: `stabilizer.${backing}`, severity: 'info', ...BACKING_MESSAGES[backing] }];
+  const messages: GuidanceMessage[] = [
+    { code: `stabilizer.${backing}`, severity: 'info', ...BACKING_MESSAGES[backing] },
+  ];
   if (fabric === 'sheer' && density === 'dense') {
     messages.push({
       code: 'stabilizer.dense-on-sheer',

@@ -1,4 +1,13 @@
-import { converter, differenceCiede2000, formatHex, modeHsl, modeLab65, modeRgb, parse as parseColor, useMode } from 'culori/fn';
+import {
+  converter,
+  differenceCiede2000,
+  formatHex,
+  modeHsl,
+  modeLab65,
+  modeRgb,
+  parse as parseColor,
+  useMode,
+} from 'culori/fn';
 import { isFiniteNumber, isRecord } from './input-checks.ts';
 
 // culori's tree-shakeable build: only the colour spaces used here are registered, which keeps about 35 kB of
@@ -25,7 +34,10 @@ const toLab65 = converter('lab65');
  */
 export function colorDifferenceCiede2000(first: LabColor, second: LabColor): number {
   if (!isLab(first) || !isLab(second)) return Number.NaN;
-  return ciede2000({ mode: 'lab65', l: first.l, a: first.a, b: first.b }, { mode: 'lab65', l: second.l, a: second.a, b: second.b });
+  return ciede2000(
+    { mode: 'lab65', l: first.l, a: first.a, b: first.b },
+    { mode: 'lab65', l: second.l, a: second.a, b: second.b },
+  );
 }
 
 /** A `#rgb` or `#rrggbb` sRGB colour in D65 Lab, or `undefined` when the text is not such a hex colour. */

@@ -17,13 +17,20 @@ export interface BorderStitchInput {
  * colour jumps from repeat to repeat, one trim per further repeat. Both are common practice, no source.
  */
 export function estimateBorderStitches(input: BorderStitchInput): EngineResult<StitchEstimate> {
-  if (!isRecord(input) || !isRecord(input.repeat) || !isRecord(input.fit)) return fail('The border estimate needs one repeat\'s estimate and the border fit.');
+  if (!isRecord(input) || !isRecord(input.repeat) || !isRecord(input.fit))
+    return fail("The border estimate needs one repeat's estimate and the border fit.");
   const { repeat, fit, hoopings } = input;
   if (!isWholeNumber(fit.count, 1) || !isPositiveNumber(fit.pitchMm) || !isPositiveNumber(fit.repeatWidthMm)) {
     return fail('The border fit must have a whole repeat count and positive pitch and width.');
   }
-  if (!isWholeNumber(hoopings, 1) || hoopings > fit.count) return fail('The number of hoopings must be a whole number from 1 to the number of repeats.');
-  if (!isWholeNumber(repeat.stitches) || !isWholeNumber(repeat.colorChanges) || !isWholeNumber(repeat.trims) || !isRecord(repeat.byType)) {
+  if (!isWholeNumber(hoopings, 1) || hoopings > fit.count)
+    return fail('The number of hoopings must be a whole number from 1 to the number of repeats.');
+  if (
+    !isWholeNumber(repeat.stitches) ||
+    !isWholeNumber(repeat.colorChanges) ||
+    !isWholeNumber(repeat.trims) ||
+    !isRecord(repeat.byType)
+  ) {
     return fail('The repeat estimate is incomplete.');
   }
   const colours = repeat.colorChanges + 1;

@@ -24,7 +24,8 @@ export interface CatalogueMotif {
  * area): common practice, no source. The measured count already holds its underlay, so `byType.underlay` is 0.
  */
 export function estimateCatalogueStitches(motif: CatalogueMotif, scale: number): EngineResult<StitchEstimate> {
-  if (!isRecord(motif) || !isRecord(motif.mix)) return fail('The motif record is missing its stitch count or stitch mix.');
+  if (!isRecord(motif) || !isRecord(motif.mix))
+    return fail('The motif record is missing its stitch count or stitch mix.');
   const { stitchCount, mix, colorChanges, widthMm, heightMm } = motif;
   const trims = motif.trims ?? 0;
   if (!isWholeNumber(stitchCount) || !isWholeNumber(colorChanges) || !isWholeNumber(trims)) {
@@ -35,7 +36,8 @@ export function estimateCatalogueStitches(motif: CatalogueMotif, scale: number):
   }
   const weight = mix.run + mix.satin + mix.fill;
   if (!(weight > 0) || !Number.isFinite(weight)) return fail('The stitch mix must give at least one type a share.');
-  if (!isPositiveNumber(widthMm) || !isPositiveNumber(heightMm)) return fail('The motif size must be positive numbers of millimetres.');
+  if (!isPositiveNumber(widthMm) || !isPositiveNumber(heightMm))
+    return fail('The motif size must be positive numbers of millimetres.');
   if (!isPositiveNumber(scale)) return fail('The scale must be a positive number (1 = 100 %).');
 
   const byType = {
@@ -46,5 +48,14 @@ export function estimateCatalogueStitches(motif: CatalogueMotif, scale: number):
   };
   const stitches = byType.run + byType.satin + byType.fill;
   if (!Number.isSafeInteger(stitches)) return fail('The motif at this scale has more stitches than can be counted.');
-  return { ok: true, stitches, colorChanges, trims, byType, widthMm: widthMm * scale, heightMm: heightMm * scale, notes: [] };
+  return {
+    ok: true,
+    stitches,
+    colorChanges,
+    trims,
+    byType,
+    widthMm: widthMm * scale,
+    heightMm: heightMm * scale,
+    notes: [],
+  };
 }

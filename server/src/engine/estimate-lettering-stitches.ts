@@ -1,7 +1,15 @@
 import { fail, type EngineResult } from './engine-result.ts';
 import { isPositiveNumber, isRecord } from './input-checks.ts';
 import { formatNumber } from './wording.ts';
-import { extentOf, filledArea, flattenOutline, polylineLength, unionExtent, type Extent, type OutlineCommand } from './outline-geometry.ts';
+import {
+  extentOf,
+  filledArea,
+  flattenOutline,
+  polylineLength,
+  unionExtent,
+  type Extent,
+  type OutlineCommand,
+} from './outline-geometry.ts';
 import { stitchFilledShape, tallyTotal } from './shape-stitches.ts';
 import { summariseParts, type StitchEstimate, type StitchedPart } from './stitch-estimate.ts';
 import type { StitchSettings } from './stitch-settings.ts';
@@ -12,7 +20,12 @@ import type { StitchSettings } from './stitch-settings.ts';
  * engine stays free of file access and runs in the browser too.
  */
 export interface GlyphOutlineSource {
-  getPaths(text: string, x: number, y: number, fontSize: number): ReadonlyArray<{ commands: readonly OutlineCommand[] }>;
+  getPaths(
+    text: string,
+    x: number,
+    y: number,
+    fontSize: number,
+  ): ReadonlyArray<{ commands: readonly OutlineCommand[] }>;
 }
 
 /** Letter height is measured on this glyph: the trade sizes lettering by its capitals (common practice, no source). */
@@ -36,13 +49,15 @@ export function estimateLetteringStitches(
   settings: StitchSettings,
 ): EngineResult<StitchEstimate> {
   if (typeof text !== 'string' || text.trim() === '') return fail('There is no text to stitch.');
-  if ([...text].length > MAX_LETTERING_CHARACTERS) return fail(`Lettering is limited to ${MAX_LETTERING_CHARACTERS} characters.`);
+  if ([...text].length > MAX_LETTERING_CHARACTERS)
+    return fail(`Lettering is limited to ${MAX_LETTERING_CHARACTERS} characters.`);
   if (!isPositiveNumber(letterHeightMm)) return fail('The letter height must be a positive number of millimetres.');
   if (!isRecord(font) || typeof font.getPaths !== 'function') return fail('No font was given for the lettering.');
   try {
     const reference = extentOf(flattenOutline(font.getPaths(HEIGHT_REFERENCE_GLYPH, 0, 0, 1)[0]?.commands ?? [], 1e-4));
     const capHeight = reference ? reference.maxY - reference.minY : 0;
-    if (!(capHeight > 0)) return fail(`This font has no capital ${HEIGHT_REFERENCE_GLYPH} to measure the letter height by.`);
+    if (!(capHeight > 0))
+      return fail(`This font has no capital ${HEIGHT_REFERENCE_GLYPH} to measure the letter height by.`);
     const fontSize = letterHeightMm / capHeight;
 
     const parts: StitchedPart[] = [];
@@ -61,6 +76,8 @@ export function estimateLetteringStitches(
     return { ok: true, ...estimate };
   } catch (error) {
     // The font is the caller's object; a failure inside it must not take the quote down.
-    return fail(`The font could not draw this text at ${formatNumber(letterHeightMm)} mm (${error instanceof Error ? error.message : 'unknown error'}).`);
+    return fail(
+      `The font could not draw this text at ${formatNumber(letterHeightMm)} mm (${error instanceof Error ? error.message : 'unknown error'}).`,
+    );
   }
 }

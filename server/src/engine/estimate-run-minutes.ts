@@ -58,19 +58,35 @@ export function estimateRunMinutes(input: RunTimeInput): EngineResult<RunTimeEst
   if (!isRecord(input)) return fail('The run-time estimate needs stitches, colour changes and hoopings.');
   const { stitches, colorChanges, hoopings } = input;
   const trims = input.trims ?? 0;
-  if (!isWholeNumber(stitches) || !isWholeNumber(colorChanges) || !isWholeNumber(trims) || !isWholeNumber(hoopings, 1)) {
-    return fail('Stitches, colour changes and trims must be whole numbers, 0 or more, and there must be at least one hooping.');
+  if (
+    !isWholeNumber(stitches) ||
+    !isWholeNumber(colorChanges) ||
+    !isWholeNumber(trims) ||
+    !isWholeNumber(hoopings, 1)
+  ) {
+    return fail(
+      'Stitches, colour changes and trims must be whole numbers, 0 or more, and there must be at least one hooping.',
+    );
   }
   if (input.machine !== undefined && !isRecord(input.machine)) return fail('The machine settings must be an object.');
   const machine = { ...DEFAULT_MACHINE_SETTINGS, ...input.machine };
-  if (!isPositiveNumber(machine.stitchesPerMinute)) return fail('The machine speed must be a positive number of stitches per minute.');
+  if (!isPositiveNumber(machine.stitchesPerMinute))
+    return fail('The machine speed must be a positive number of stitches per minute.');
   const { minutesPerColorChange, minutesPerTrim, minutesPerHooping, setupMinutes } = machine;
   if (![minutesPerColorChange, minutesPerTrim, minutesPerHooping, setupMinutes].every(isNonNegativeNumber)) {
     return fail('Times per colour change, trim and hooping, and setup time, must be zero or more minutes.');
   }
   const items: RunTimeItem[] = [
-    { code: 'sewing', label: `Sewing ${formatCount(stitches, 'stitch', 'stitches')} at ${formatCount(machine.stitchesPerMinute, 'stitch', 'stitches')} a minute`, minutes: stitches / machine.stitchesPerMinute },
-    { code: 'color-changes', label: formatCount(colorChanges, 'colour change'), minutes: colorChanges * minutesPerColorChange },
+    {
+      code: 'sewing',
+      label: `Sewing ${formatCount(stitches, 'stitch', 'stitches')} at ${formatCount(machine.stitchesPerMinute, 'stitch', 'stitches')} a minute`,
+      minutes: stitches / machine.stitchesPerMinute,
+    },
+    {
+      code: 'color-changes',
+      label: formatCount(colorChanges, 'colour change'),
+      minutes: colorChanges * minutesPerColorChange,
+    },
     { code: 'trims', label: formatCount(trims, 'trim'), minutes: trims * minutesPerTrim },
     { code: 'hoopings', label: formatCount(hoopings, 'hooping'), minutes: hoopings * minutesPerHooping },
     { code: 'setup', label: 'Setup', minutes: setupMinutes },

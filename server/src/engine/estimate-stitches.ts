@@ -23,7 +23,10 @@ export type StitchSource =
  * `settings` overrides the published defaults (`DEFAULT_STITCH_SETTINGS`, lengths in mm); catalogue motifs do
  * not use them, as their count is measured.
  */
-export function estimateStitches(source: StitchSource, settings?: Partial<StitchSettings>): EngineResult<StitchEstimate> {
+export function estimateStitches(
+  source: StitchSource,
+  settings?: Partial<StitchSettings>,
+): EngineResult<StitchEstimate> {
   if (!isRecord(source)) return fail('Nothing was given to estimate.');
   const resolved = resolveStitchSettings(settings);
   if ('reason' in resolved) return resolved;

@@ -20,7 +20,11 @@ export type SvgSize = { mmPerUnit: number } | { widthMm: number };
  * stroke (see `stitchFilledShape`, `stitchStroke`); elements are sewn in document order, one colour block per
  * run of one colour.
  */
-export function estimateSvgStitches(svgText: string, size: SvgSize | undefined, settings: StitchSettings): EngineResult<StitchEstimate> {
+export function estimateSvgStitches(
+  svgText: string,
+  size: SvgSize | undefined,
+  settings: StitchSettings,
+): EngineResult<StitchEstimate> {
   const drawing = readSvgDrawing(svgText);
   if ('reason' in drawing) return drawing;
   const mmPerUnit = resolveMmPerUnit(drawing, size);
@@ -61,23 +65,33 @@ export function estimateSvgStitches(svgText: string, size: SvgSize | undefined, 
 export function resolveMmPerUnit(drawing: SvgDrawing, size: SvgSize | undefined): number | Failure {
   if (size !== undefined) {
     if (isRecord(size) && 'mmPerUnit' in size) {
-      return isPositiveNumber(size.mmPerUnit) ? size.mmPerUnit : fail('Millimetres per unit must be a positive number.');
+      return isPositiveNumber(size.mmPerUnit)
+        ? size.mmPerUnit
+        : fail('Millimetres per unit must be a positive number.');
     }
-    if (!isRecord(size) || !isPositiveNumber(size.widthMm)) return fail('The artwork size must give a positive width in millimetres or millimetres per unit.');
+    if (!isRecord(size) || !isPositiveNumber(size.widthMm))
+      return fail('The artwork size must give a positive width in millimetres or millimetres per unit.');
     const widthMm = parseSvgLengthMm(drawing.width);
     const canvasUnits = drawing.viewBox?.[2] ?? (widthMm === undefined ? undefined : widthMm / MM_PER_CSS_PX);
-    return canvasUnits === undefined ? fail('The artwork has no viewBox or width, so it cannot be stretched to a width.') : size.widthMm / canvasUnits;
+    return canvasUnits === undefined
+      ? fail('The artwork has no viewBox or width, so it cannot be stretched to a width.')
+      : size.widthMm / canvasUnits;
   }
   const widthMm = parseSvgLengthMm(drawing.width);
   const heightMm = parseSvgLengthMm(drawing.height);
   if (!drawing.viewBox) return MM_PER_CSS_PX;
   // With a viewBox the drawing keeps its proportions inside width × height (preserveAspectRatio "meet").
-  const scales = [widthMm === undefined ? undefined : widthMm / drawing.viewBox[2], heightMm === undefined ? undefined : heightMm / drawing.viewBox[3]];
+  const scales = [
+    widthMm === undefined ? undefined : widthMm / drawing.viewBox[2],
+    heightMm === undefined ? undefined : heightMm / drawing.viewBox[3],
+  ];
   const known = scales.filter((scale): scale is number => scale !== undefined);
   if (known.length === 0) return fail('The artwork does not say how big it is: give its width in millimetres.');
   return Math.min(...known);
 }
 
 function padded(extent: Extent | undefined, byMm: number): Extent | undefined {
-  return extent && { minX: extent.minX - byMm, minY: extent.minY - byMm, maxX: extent.maxX + byMm, maxY: extent.maxY + byMm };
+  return (
+    extent && { minX: extent.minX - byMm, minY: extent.minY - byMm, maxX: extent.maxX + byMm, maxY: extent.maxY + byMm }
+  );
 }

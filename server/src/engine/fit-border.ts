@@ -87,17 +87,30 @@ function readLayout(input: BorderFitInput): Layout | BorderFitFailure {
   const { runLengthMm, closed, motifWidthMm, minScale, maxScale } = input;
   const gapMm = input.gapMm ?? 0;
   const endMarginMm = input.endMarginMm ?? 0;
-  if (!isPositiveNumber(runLengthMm)) return { ok: false, reason: 'The run length must be a positive number of millimetres.' };
-  if (typeof closed !== 'boolean') return { ok: false, reason: 'Say whether the border is a closed loop or an open run.' };
-  if (!isPositiveNumber(motifWidthMm)) return { ok: false, reason: 'The motif width must be a positive number of millimetres.' };
+  if (!isPositiveNumber(runLengthMm))
+    return { ok: false, reason: 'The run length must be a positive number of millimetres.' };
+  if (typeof closed !== 'boolean')
+    return { ok: false, reason: 'Say whether the border is a closed loop or an open run.' };
+  if (!isPositiveNumber(motifWidthMm))
+    return { ok: false, reason: 'The motif width must be a positive number of millimetres.' };
   if (!isFiniteNumber(gapMm)) return { ok: false, reason: 'The gap between repeats must be a number of millimetres.' };
-  if (motifWidthMm + gapMm <= 0) return { ok: false, reason: 'The overlap is as wide as the motif, so the repeats would not advance.' };
-  if (!isPositiveNumber(minScale) || !isPositiveNumber(maxScale)) return { ok: false, reason: 'The scale limits must be positive numbers.' };
-  if (minScale > maxScale) return { ok: false, reason: `The minimum scale (${formatPercent(minScale)}) is above the maximum (${formatPercent(maxScale)}).` };
-  if (!isNonNegativeNumber(endMarginMm)) return { ok: false, reason: 'The end margin must be zero or a positive number of millimetres.' };
+  if (motifWidthMm + gapMm <= 0)
+    return { ok: false, reason: 'The overlap is as wide as the motif, so the repeats would not advance.' };
+  if (!isPositiveNumber(minScale) || !isPositiveNumber(maxScale))
+    return { ok: false, reason: 'The scale limits must be positive numbers.' };
+  if (minScale > maxScale)
+    return {
+      ok: false,
+      reason: `The minimum scale (${formatPercent(minScale)}) is above the maximum (${formatPercent(maxScale)}).`,
+    };
+  if (!isNonNegativeNumber(endMarginMm))
+    return { ok: false, reason: 'The end margin must be zero or a positive number of millimetres.' };
   const spanMm = closed ? runLengthMm : runLengthMm - 2 * endMarginMm;
   if (spanMm <= 0) {
-    return { ok: false, reason: `End margins of 2 × ${formatNumber(endMarginMm)} mm leave no room on a ${formatNumber(runLengthMm)} mm run.` };
+    return {
+      ok: false,
+      reason: `End margins of 2 × ${formatNumber(endMarginMm)} mm leave no room on a ${formatNumber(runLengthMm)} mm run.`,
+    };
   }
   return { closed, motifWidthMm, gapMm, spanMm, minScale, maxScale, endMarginMm: closed ? 0 : endMarginMm };
 }
@@ -121,7 +134,8 @@ function idealCount(layout: Layout): number {
 /** Counts whose scale lies within the limits; `lowest > highest` when there is none. */
 function feasibleCounts(layout: Layout): { lowest: number; highest: number } {
   const pitch = layout.motifWidthMm + layout.gapMm;
-  const countAt = (scale: number) => (layout.closed ? layout.spanMm / (scale * pitch) : (layout.spanMm / scale + layout.gapMm) / pitch);
+  const countAt = (scale: number) =>
+    layout.closed ? layout.spanMm / (scale * pitch) : (layout.spanMm / scale + layout.gapMm) / pitch;
   const lowest = Math.max(1, Math.ceil(countAt(layout.maxScale) * (1 - SCALE_SLACK)));
   const highest = Math.floor(countAt(layout.minScale) * (1 + SCALE_SLACK));
   return { lowest, highest };
@@ -140,7 +154,10 @@ function bestCount(layout: Layout, candidates: number[]): number {
 }
 
 function tooManyRepeats(): BorderFitFailure {
-  return { ok: false, reason: `This would need more than ${MAX_BORDER_REPEATS} repeats; check the run length and motif width.` };
+  return {
+    ok: false,
+    reason: `This would need more than ${MAX_BORDER_REPEATS} repeats; check the run length and motif width.`,
+  };
 }
 
 function placeRepeats(layout: Layout, count: number): EngineResult<BorderFit, BorderFitFailure> {
@@ -153,7 +170,8 @@ function placeRepeats(layout: Layout, count: number): EngineResult<BorderFit, Bo
 }
 
 function fitRequestedCount(layout: Layout, count: unknown): EngineResult<BorderFit, BorderFitFailure> {
-  if (!Number.isSafeInteger(count) || (count as number) < 1) return { ok: false, reason: 'The number of repeats must be a whole number, 1 or more.' };
+  if (!Number.isSafeInteger(count) || (count as number) < 1)
+    return { ok: false, reason: 'The number of repeats must be a whole number, 1 or more.' };
   const n = count as number;
   if (n > MAX_BORDER_REPEATS) return tooManyRepeats();
   const scale = scaleFor(layout, n);
@@ -172,7 +190,11 @@ function fitRequestedCount(layout: Layout, count: unknown): EngineResult<BorderF
 function explainNoFit(layout: Layout, fewer: number): BorderFitFailure {
   const nearest = closestInfeasible(layout, fewer);
   if (fewer < 1) {
-    return { ok: false, reason: `The run is too short: one repeat needs ${limitWording(layout, scaleFor(layout, 1))}.`, nearest };
+    return {
+      ok: false,
+      reason: `The run is too short: one repeat needs ${limitWording(layout, scaleFor(layout, 1))}.`,
+      nearest,
+    };
   }
   return {
     ok: false,

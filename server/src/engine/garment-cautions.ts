@@ -26,8 +26,13 @@ export interface GarmentCautionInput {
 export function garmentCautions(input: GarmentCautionInput): EngineResult<{ messages: GuidanceMessage[] }> {
   if (!isRecord(input)) return fail('The garment details are missing.');
   const { wearerAgeMonths, hasDetachableEmbellishments, isSleepwear, hasHoodOrNeckDrawstring } = input;
-  if (wearerAgeMonths !== undefined && !isNonNegativeNumber(wearerAgeMonths)) return fail('The age must be a number of months, 0 or more.');
-  if (typeof hasDetachableEmbellishments !== 'boolean' || typeof isSleepwear !== 'boolean' || typeof hasHoodOrNeckDrawstring !== 'boolean') {
+  if (wearerAgeMonths !== undefined && !isNonNegativeNumber(wearerAgeMonths))
+    return fail('The age must be a number of months, 0 or more.');
+  if (
+    typeof hasDetachableEmbellishments !== 'boolean' ||
+    typeof isSleepwear !== 'boolean' ||
+    typeof hasHoodOrNeckDrawstring !== 'boolean'
+  ) {
     return fail('Say whether the garment has detachable trims, is sleepwear, and has a hood or neck drawstring.');
   }
   const isUnderThree = wearerAgeMonths !== undefined && wearerAgeMonths < SMALL_PARTS_AGE_LIMIT_MONTHS;

@@ -53,10 +53,19 @@ export function layoutHemBorder(input: {
   const repeats = fit.centersMm
     .map((runMm) => {
       const centerXMm = middleXMm - frontMm / 2 + (runMm - frontStartMm);
-      return { centerXMm, centerYMm: centerYMm - curve.riseMm(centerXMm), widthMm: fit.repeatWidthMm, heightMm, rotationDeg: curve.slopeDeg(centerXMm) };
+      return {
+        centerXMm,
+        centerYMm: centerYMm - curve.riseMm(centerXMm),
+        widthMm: fit.repeatWidthMm,
+        heightMm,
+        rotationDeg: curve.slopeDeg(centerXMm),
+      };
     })
     .filter((repeat) => Math.abs(repeat.centerXMm - middleXMm) < (frontMm + repeat.widthMm) / 2);
-  return { band: { leftMm: middleXMm - frontMm / 2, widthMm: frontMm, centerYMm, heightMm: heightMm + curve.totalRiseMm }, repeats };
+  return {
+    band: { leftMm: middleXMm - frontMm / 2, widthMm: frontMm, centerYMm, heightMm: heightMm + curve.totalRiseMm },
+    repeats,
+  };
 }
 
 /**
@@ -74,6 +83,7 @@ export function hemCurve(zone: HemZone) {
     totalRiseMm: riseAtEndsMm,
     riseMm: (xMm: number) => riseAtEndsMm * across(xMm) ** 2,
     // The edge's y on screen is bottom − rise·u², so its slope dy/dx is −2·rise·u / halfWidth.
-    slopeDeg: (xMm: number) => (riseAtEndsMm === 0 ? 0 : (Math.atan((-2 * riseAtEndsMm * across(xMm)) / halfWidthMm) * 180) / Math.PI),
+    slopeDeg: (xMm: number) =>
+      riseAtEndsMm === 0 ? 0 : (Math.atan((-2 * riseAtEndsMm * across(xMm)) / halfWidthMm) * 180) / Math.PI,
   };
 }

@@ -28,7 +28,13 @@ export { estimateBorderStitches } from './estimate-border-stitches.ts';
 export type { BorderStitchInput } from './estimate-border-stitches.ts';
 
 export { DEFAULT_MACHINE_SETTINGS, estimateRunMinutes } from './estimate-run-minutes.ts';
-export type { MachineSettings, RunTimeEstimate, RunTimeInput, RunTimeItem, RunTimeItemCode } from './estimate-run-minutes.ts';
+export type {
+  MachineSettings,
+  RunTimeEstimate,
+  RunTimeInput,
+  RunTimeItem,
+  RunTimeItemCode,
+} from './estimate-run-minutes.ts';
 
 export { checkPricingRuleSet } from './pricing-rules.ts';
 export type { PricingRuleSet, QuantityBreak } from './pricing-rules.ts';
@@ -42,7 +48,14 @@ export type { ThreadColor, ThreadMatch } from './nearest-threads.ts';
 
 export type { GuidanceMessage, GuidanceSeverity } from './guidance.ts';
 export { adviseStabilizer, DEFAULT_DENSITY_THRESHOLDS } from './advise-stabilizer.ts';
-export type { DensityThresholds, DesignDensity, FabricConstruction, StabilizerAdvice, StabilizerInput, StabilizerKind } from './advise-stabilizer.ts';
+export type {
+  DensityThresholds,
+  DesignDensity,
+  FabricConstruction,
+  StabilizerAdvice,
+  StabilizerInput,
+  StabilizerKind,
+} from './advise-stabilizer.ts';
 export { garmentCautions } from './garment-cautions.ts';
 export type { GarmentCautionInput } from './garment-cautions.ts';
 export { layoutHemBorder } from './hem-border-layout.ts';

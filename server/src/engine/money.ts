@@ -13,7 +13,9 @@ export function divideRoundHalfUp(numerator: bigint, denominator: bigint): bigin
 
 /** The value as a number when it is a safe integer, else `undefined` (the amount is too large to hold exactly). */
 export function toSafeCents(value: bigint): number | undefined {
-  return value <= BigInt(Number.MAX_SAFE_INTEGER) && value >= -BigInt(Number.MAX_SAFE_INTEGER) ? Number(value) : undefined;
+  return value <= BigInt(Number.MAX_SAFE_INTEGER) && value >= -BigInt(Number.MAX_SAFE_INTEGER)
+    ? Number(value)
+    : undefined;
 }
 
 /** Basis points in one whole: 10,000 bp = 100 %. */

@@ -60,7 +60,10 @@ export function flattenOutline(commands: readonly OutlineCommand[], toleranceMm:
       y = command.y;
     } else if (command.type === 'C') {
       const points = begin();
-      const bend = Math.max(Math.hypot(x - 2 * command.x1 + command.x2, y - 2 * command.y1 + command.y2), Math.hypot(command.x1 - 2 * command.x2 + command.x, command.y1 - 2 * command.y2 + command.y));
+      const bend = Math.max(
+        Math.hypot(x - 2 * command.x1 + command.x2, y - 2 * command.y1 + command.y2),
+        Math.hypot(command.x1 - 2 * command.x2 + command.x, command.y1 - 2 * command.y2 + command.y),
+      );
       const pieces = pieceCount((0.75 * bend) / toleranceMm);
       for (let i = 1; i <= pieces; i += 1) {
         const t = i / pieces;
@@ -69,17 +72,25 @@ export function flattenOutline(commands: readonly OutlineCommand[], toleranceMm:
         const b = 3 * u * u * t;
         const c = 3 * u * t * t;
         const d = t * t * t;
-        points.push(a * x + b * command.x1 + c * command.x2 + d * command.x, a * y + b * command.y1 + c * command.y2 + d * command.y);
+        points.push(
+          a * x + b * command.x1 + c * command.x2 + d * command.x,
+          a * y + b * command.y1 + c * command.y2 + d * command.y,
+        );
       }
       x = command.x;
       y = command.y;
     } else if (command.type === 'Q') {
       const points = begin();
-      const pieces = pieceCount((0.25 * Math.hypot(x - 2 * command.x1 + command.x, y - 2 * command.y1 + command.y)) / toleranceMm);
+      const pieces = pieceCount(
+        (0.25 * Math.hypot(x - 2 * command.x1 + command.x, y - 2 * command.y1 + command.y)) / toleranceMm,
+      );
       for (let i = 1; i <= pieces; i += 1) {
         const t = i / pieces;
         const u = 1 - t;
-        points.push(u * u * x + 2 * u * t * command.x1 + t * t * command.x, u * u * y + 2 * u * t * command.y1 + t * t * command.y);
+        points.push(
+          u * u * x + 2 * u * t * command.x1 + t * t * command.x,
+          u * u * y + 2 * u * t * command.y1 + t * t * command.y,
+        );
       }
       x = command.x;
       y = command.y;
@@ -181,5 +192,10 @@ export function extentOf(polylines: readonly Polyline[]): Extent | undefined {
 /** Merges extents, skipping missing ones. */
 export function unionExtent(a: Extent | undefined, b: Extent | undefined): Extent | undefined {
   if (!a || !b) return a ?? b;
-  return { minX: Math.min(a.minX, b.minX), minY: Math.min(a.minY, b.minY), maxX: Math.max(a.maxX, b.maxX), maxY: Math.max(a.maxY, b.maxY) };
+  return {
+    minX: Math.min(a.minX, b.minX),
+    minY: Math.min(a.minY, b.minY),
+    maxX: Math.max(a.maxX, b.maxX),
+    maxY: Math.max(a.maxY, b.maxY),
+  };
 }

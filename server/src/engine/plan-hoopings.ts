@@ -59,18 +59,23 @@ export function planHoopings(input: HoopingPlanInput): EngineResult<HoopingPlan>
   const { count, repeatWidthMm, pitchMm, motifHeightMm } = input;
   const { fieldWidthMm, fieldHeightMm } = input.hoop;
   const clearanceMm = input.clearanceMm ?? 0;
-  if (!isWholeNumber(count, 1) || count > MAX_BORDER_REPEATS) return fail(`The number of repeats must be a whole number from 1 to ${MAX_BORDER_REPEATS}.`);
+  if (!isWholeNumber(count, 1) || count > MAX_BORDER_REPEATS)
+    return fail(`The number of repeats must be a whole number from 1 to ${MAX_BORDER_REPEATS}.`);
   if (!isPositiveNumber(repeatWidthMm) || !isPositiveNumber(pitchMm) || !isPositiveNumber(motifHeightMm)) {
     return fail('The repeat width, pitch and motif height must be positive numbers of millimetres.');
   }
-  if (!isPositiveNumber(fieldWidthMm) || !isPositiveNumber(fieldHeightMm)) return fail('The hoop sewing field must have a positive width and height in millimetres.');
+  if (!isPositiveNumber(fieldWidthMm) || !isPositiveNumber(fieldHeightMm))
+    return fail('The hoop sewing field must have a positive width and height in millimetres.');
   if (!isNonNegativeNumber(clearanceMm)) return fail('The clearance must be zero or a positive number of millimetres.');
   const firstCenterMm = input.firstCenterMm ?? repeatWidthMm / 2;
-  if (!isNonNegativeNumber(firstCenterMm)) return fail('The first repeat centre must be zero or a positive number of millimetres.');
+  if (!isNonNegativeNumber(firstCenterMm))
+    return fail('The first repeat centre must be zero or a positive number of millimetres.');
 
   const row = orientRow(motifHeightMm, fieldWidthMm, fieldHeightMm);
   if (!row) {
-    return fail(`The motif is ${formatNumber(motifHeightMm)} mm tall, more than either side of this hoop's ${formatNumber(fieldWidthMm)} × ${formatNumber(fieldHeightMm)} mm sewing field.`);
+    return fail(
+      `The motif is ${formatNumber(motifHeightMm)} mm tall, more than either side of this hoop's ${formatNumber(fieldWidthMm)} × ${formatNumber(fieldHeightMm)} mm sewing field.`,
+    );
   }
   const usableMm = row.lengthMm - 2 * clearanceMm;
   if (repeatWidthMm > usableMm + FIT_SLACK_MM) {
@@ -96,7 +101,11 @@ export function planHoopings(input: HoopingPlanInput): EngineResult<HoopingPlan>
 }
 
 /** The row runs along the longer side when the motif's height fits across the shorter one, else the other way. */
-function orientRow(motifHeightMm: number, widthMm: number, heightMm: number): { lengthMm: number; rotated: boolean } | undefined {
+function orientRow(
+  motifHeightMm: number,
+  widthMm: number,
+  heightMm: number,
+): { lengthMm: number; rotated: boolean } | undefined {
   const longMm = Math.max(widthMm, heightMm);
   const shortMm = Math.min(widthMm, heightMm);
   if (motifHeightMm <= shortMm + FIT_SLACK_MM) return { lengthMm: longMm, rotated: heightMm > widthMm };
@@ -111,7 +120,9 @@ function orientRow(motifHeightMm: number, widthMm: number, heightMm: number): { 
 function splitEvenly(count: number, runCount: number): number[][] {
   const base = Math.floor(count / runCount);
   const middle = (runCount - 1) / 2;
-  const byCloseness = Array.from({ length: runCount }, (_, j) => j).sort((a, b) => Math.abs(a - middle) - Math.abs(b - middle) || a - b);
+  const byCloseness = Array.from({ length: runCount }, (_, j) => j).sort(
+    (a, b) => Math.abs(a - middle) - Math.abs(b - middle) || a - b,
+  );
   const sizes = new Array<number>(runCount).fill(base);
   for (const j of byCloseness.slice(0, count % runCount)) sizes[j] += 1;
   let next = 0;

@@ -41,32 +41,53 @@ export interface PricingRuleSet {
   taxRateBp: number;
 }
 
-const CENT_FIELDS = ['centsPerThousandStitches', 'minimumPerPlacementCents', 'extraHoopingCents', 'colorChangeCents', 'artworkSetupCents'] as const;
+const CENT_FIELDS = [
+  'centsPerThousandStitches',
+  'minimumPerPlacementCents',
+  'extraHoopingCents',
+  'colorChangeCents',
+  'artworkSetupCents',
+] as const;
 
 /** Checks a rule set before use: whole, non-negative amounts, a currency code, sane multipliers and breaks. */
 export function checkPricingRuleSet(ruleSet: PricingRuleSet): EngineResult<object> {
   if (!isRecord(ruleSet)) return fail('The price list is missing.');
   if (!isWholeNumber(ruleSet.version, 1)) return fail('The price list version must be a whole number, 1 or more.');
-  if (typeof ruleSet.currency !== 'string' || !/^[A-Z]{3}$/.test(ruleSet.currency)) return fail('The currency must be a three-letter ISO 4217 code such as USD.');
+  if (typeof ruleSet.currency !== 'string' || !/^[A-Z]{3}$/.test(ruleSet.currency))
+    return fail('The currency must be a three-letter ISO 4217 code such as USD.');
   if (!isRecord(ruleSet.garmentBaseCents)) return fail('The price list has no garment prices by garment and size.');
   for (const [garment, sizes] of Object.entries(ruleSet.garmentBaseCents)) {
     if (!isRecord(sizes)) return fail(`The garment prices for ${garment} must be listed by size code.`);
     for (const [size, cents] of Object.entries(sizes)) {
-      if (!isWholeNumber(cents)) return fail(`The garment price for ${garment} in size ${size} must be whole cents, 0 or more.`);
+      if (!isWholeNumber(cents))
+        return fail(`The garment price for ${garment} in size ${size} must be whole cents, 0 or more.`);
     }
   }
   for (const field of CENT_FIELDS) {
     if (!isWholeNumber(ruleSet[field])) return fail(`The price list's ${field} must be whole cents, 0 or more.`);
   }
-  if (!isRecord(ruleSet.lettering) || !isWholeNumber(ruleSet.lettering.centsPerThousandStitches) || !isWholeNumber(ruleSet.lettering.minimumCents)) {
+  if (
+    !isRecord(ruleSet.lettering) ||
+    !isWholeNumber(ruleSet.lettering.centsPerThousandStitches) ||
+    !isWholeNumber(ruleSet.lettering.minimumCents)
+  ) {
     return fail('The lettering rate and minimum must be whole cents, 0 or more.');
   }
-  if (!isWholeNumber(ruleSet.rushMultiplierBp, 10_000)) return fail('The rush multiplier must be at least 10,000 basis points (× 1).');
-  if (!isWholeNumber(ruleSet.taxRateBp) || ruleSet.taxRateBp > 10_000) return fail('The tax rate must be 0 to 10,000 basis points.');
+  if (!isWholeNumber(ruleSet.rushMultiplierBp, 10_000))
+    return fail('The rush multiplier must be at least 10,000 basis points (× 1).');
+  if (!isWholeNumber(ruleSet.taxRateBp) || ruleSet.taxRateBp > 10_000)
+    return fail('The tax rate must be 0 to 10,000 basis points.');
   if (!Array.isArray(ruleSet.quantityBreaks)) return fail('The quantity breaks must be a list.');
   for (const bracket of ruleSet.quantityBreaks) {
-    if (!isRecord(bracket) || !isWholeNumber(bracket.minQty, 1) || !isWholeNumber(bracket.discountBp) || bracket.discountBp > 10_000) {
-      return fail('Each quantity break needs a minimum quantity of 1 or more and a discount of 0 to 10,000 basis points.');
+    if (
+      !isRecord(bracket) ||
+      !isWholeNumber(bracket.minQty, 1) ||
+      !isWholeNumber(bracket.discountBp) ||
+      bracket.discountBp > 10_000
+    ) {
+      return fail(
+        'Each quantity break needs a minimum quantity of 1 or more and a discount of 0 to 10,000 basis points.',
+      );
     }
   }
   return { ok: true };

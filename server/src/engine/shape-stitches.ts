@@ -63,7 +63,8 @@ export function stitchFilledShape(areaMm2: number, perimeterMm: number, settings
  */
 export function stitchStroke(lengthMm: number, widthMm: number, passes: number, settings: StitchSettings): StitchTally {
   if (!(lengthMm > 0)) return EMPTY_TALLY;
-  if (widthMm < settings.satinMinStrokeWidthMm) return { ...EMPTY_TALLY, run: wholeStitches(lengthMm / settings.runStitchLengthMm) * passes };
+  if (widthMm < settings.satinMinStrokeWidthMm)
+    return { ...EMPTY_TALLY, run: wholeStitches(lengthMm / settings.runStitchLengthMm) * passes };
   if (widthMm < settings.satinMaxWidthMm) return satinColumn(lengthMm, settings);
   return stitchFilledShape(lengthMm * widthMm, 2 * (lengthMm + widthMm), settings);
 }

@@ -27,7 +27,11 @@ export interface StitchedPart {
  * Adds up parts in stitching order: each run of one colour is a colour block, blocks after the first are colour
  * changes, and each further object inside a block needs a trim (common practice, no source).
  */
-export function summariseParts(parts: readonly StitchedPart[], extent: Extent | undefined, notes: string[]): StitchEstimate {
+export function summariseParts(
+  parts: readonly StitchedPart[],
+  extent: Extent | undefined,
+  notes: string[],
+): StitchEstimate {
   let byType: StitchTally = { ...EMPTY_TALLY };
   let blocks = 0;
   let previous: string | undefined;

@@ -69,7 +69,8 @@ export function resolveStitchSettings(overrides: Partial<StitchSettings> | undef
   if (!isRecord(overrides)) return fail('The stitch settings must be an object of millimetre values.');
   const settings = { ...DEFAULT_STITCH_SETTINGS, ...overrides };
   for (const key of Object.keys(DEFAULT_STITCH_SETTINGS) as (keyof StitchSettings)[]) {
-    if (!isPositiveNumber(settings[key])) return fail(`The stitch setting "${key}" must be a positive number of millimetres.`);
+    if (!isPositiveNumber(settings[key]))
+      return fail(`The stitch setting "${key}" must be a positive number of millimetres.`);
   }
   return settings;
 }

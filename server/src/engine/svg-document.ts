@@ -53,7 +53,15 @@ const SKIPPED_WITH_NOTE: Readonly<Record<string, string>> = {
 };
 
 /** SVG's initial values: black fill, no stroke, 1 unit stroke width (SVG 2 §13, "Painting"). */
-const INITIAL_STYLE: Style = { fill: '#000000', stroke: null, strokeWidth: 1, fillRule: 'nonzero', runPasses: 1, color: '#000000', isHidden: false };
+const INITIAL_STYLE: Style = {
+  fill: '#000000',
+  stroke: null,
+  strokeWidth: 1,
+  fillRule: 'nonzero',
+  runPasses: 1,
+  color: '#000000',
+  isHidden: false,
+};
 
 /**
  * Reads SVG text into the shapes to stitch, without a DOM (fast-xml-parser), honouring nested `<g transform>`,
@@ -65,7 +73,13 @@ export function readSvgDrawing(svgText: string): SvgDrawing | Failure {
   let nodes: unknown;
   try {
     // processEntities off: SVG artwork needs no entities, and expanding them is how XML bombs work.
-    nodes = new XMLParser({ preserveOrder: true, ignoreAttributes: false, attributeNamePrefix: '', processEntities: false, parseAttributeValue: false }).parse(svgText);
+    nodes = new XMLParser({
+      preserveOrder: true,
+      ignoreAttributes: false,
+      attributeNamePrefix: '',
+      processEntities: false,
+      parseAttributeValue: false,
+    }).parse(svgText);
   } catch (error) {
     return fail(`The artwork is not readable SVG (${error instanceof Error ? error.message : 'unknown XML error'}).`);
   }
@@ -83,7 +97,13 @@ export function readSvgDrawing(svgText: string): SvgDrawing | Failure {
   return drawing;
 }
 
-function walk(node: XmlNode, inherited: Style, transform: string, out: SvgDrawable[], skipped: Map<string, number>): void {
+function walk(
+  node: XmlNode,
+  inherited: Style,
+  transform: string,
+  out: SvgDrawable[],
+  skipped: Map<string, number>,
+): void {
   const tag = tagOf(node);
   if (tag === undefined) return;
   if (Object.hasOwn(SKIPPED_WITH_NOTE, tag)) {
@@ -104,7 +124,15 @@ function walk(node: XmlNode, inherited: Style, transform: string, out: SvgDrawab
   // A line has no inside, so it can only be stroked.
   const fill = tag === 'line' ? null : style.fill;
   if (pathData && (fill || style.stroke)) {
-    out.push({ pathData, transform: fullTransform, fill, stroke: style.stroke, strokeWidth: style.strokeWidth, fillRule: style.fillRule, runPasses: style.runPasses });
+    out.push({
+      pathData,
+      transform: fullTransform,
+      fill,
+      stroke: style.stroke,
+      strokeWidth: style.strokeWidth,
+      fillRule: style.fillRule,
+      runPasses: style.runPasses,
+    });
   }
 }
 
@@ -116,7 +144,11 @@ function resolveStyle(inherited: Style, attributes: Readonly<Record<string, stri
   }
   for (const declaration of (attributes.style ?? '').split(';')) {
     const colon = declaration.indexOf(':');
-    if (colon > 0) declared[declaration.slice(0, colon).trim().toLowerCase()] = declaration.slice(colon + 1).replace(/!important/i, '').trim();
+    if (colon > 0)
+      declared[declaration.slice(0, colon).trim().toLowerCase()] = declaration
+        .slice(colon + 1)
+        .replace(/!important/i, '')
+        .trim();
   }
   const style = { ...inherited };
   if (declared.color !== undefined && declared.color !== 'inherit') style.color = declared.color;
@@ -124,10 +156,12 @@ function resolveStyle(inherited: Style, attributes: Readonly<Record<string, stri
   if (declared.stroke !== undefined) style.stroke = paint(declared.stroke, inherited.stroke, style.color);
   const strokeWidth = Number.parseFloat(declared['stroke-width'] ?? '');
   if (Number.isFinite(strokeWidth) && strokeWidth >= 0) style.strokeWidth = strokeWidth;
-  if (declared['fill-rule'] === 'evenodd' || declared['fill-rule'] === 'nonzero') style.fillRule = declared['fill-rule'];
+  if (declared['fill-rule'] === 'evenodd' || declared['fill-rule'] === 'nonzero')
+    style.fillRule = declared['fill-rule'];
   const stitch = attributes['data-stitch']?.trim().toLowerCase() ?? '';
   if (Object.hasOwn(RUN_PASSES, stitch)) style.runPasses = RUN_PASSES[stitch];
-  style.isHidden = declared.display === 'none' || declared.visibility === 'hidden' || declared.visibility === 'collapse';
+  style.isHidden =
+    declared.display === 'none' || declared.visibility === 'hidden' || declared.visibility === 'collapse';
   return style;
 }
 
@@ -142,7 +176,10 @@ function paint(value: string, inherited: string | null, currentColor: string): s
 }
 
 function parseViewBox(value: string | undefined): [number, number, number, number] | undefined {
-  const numbers = (value ?? '').trim().split(/[\s,]+/).map(Number);
+  const numbers = (value ?? '')
+    .trim()
+    .split(/[\s,]+/)
+    .map(Number);
   if (numbers.length !== 4 || !numbers.every(Number.isFinite) || numbers[2] <= 0 || numbers[3] <= 0) return undefined;
   return [numbers[0], numbers[1], numbers[2], numbers[3]];
 }
@@ -164,7 +201,10 @@ function childrenOf(node: XmlNode): unknown[] {
 
 function hasText(node: XmlNode): boolean {
   const children = node[Object.keys(node).find((name) => name !== ':@') ?? ''];
-  return Array.isArray(children) && children.some((child) => typeof child?.['#text'] === 'string' && child['#text'].trim() !== '');
+  return (
+    Array.isArray(children) &&
+    children.some((child) => typeof child?.['#text'] === 'string' && child['#text'].trim() !== '')
+  );
 }
 
 function attributesOf(node: XmlNode): Readonly<Record<string, string>> {

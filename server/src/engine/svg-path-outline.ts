@@ -12,7 +12,12 @@ export interface MeasuredOutline {
  * SVG path data under a transform list, flattened to millimetres (svgpath parses it, applies the transforms, and
  * turns arcs and shorthand curves into plain Béziers). `undefined` when nothing measurable is left.
  */
-export function measureSvgOutline(pathData: string, transform: string, mmPerUnit: number, toleranceMm: number): MeasuredOutline | undefined {
+export function measureSvgOutline(
+  pathData: string,
+  transform: string,
+  mmPerUnit: number,
+  toleranceMm: number,
+): MeasuredOutline | undefined {
   const parsed = svgpath(pathData);
   // svgpath keeps what it read before a syntax error (its `err`, missing from its typings), as SVG renderers
   // draw a path up to its first error.
@@ -29,12 +34,22 @@ export function measureSvgOutline(pathData: string, transform: string, mmPerUnit
       if (type === 'M' || type === 'L') commands.push({ type, x: segment[1], y: segment[2] });
       else if (type === 'H') commands.push({ type: 'L', x: segment[1], y });
       else if (type === 'V') commands.push({ type: 'L', x, y: segment[1] });
-      else if (type === 'C') commands.push({ type, x1: segment[1], y1: segment[2], x2: segment[3], y2: segment[4], x: segment[5], y: segment[6] });
+      else if (type === 'C')
+        commands.push({
+          type,
+          x1: segment[1],
+          y1: segment[2],
+          x2: segment[3],
+          y2: segment[4],
+          x: segment[5],
+          y: segment[6],
+        });
       else if (type === 'Q') commands.push({ type, x1: segment[1], y1: segment[2], x: segment[3], y: segment[4] });
       else if (type === 'Z' || type === 'z') commands.push({ type: 'Z' });
     });
   const polylines = flattenOutline(commands, toleranceMm);
-  if (polylines.length === 0 || !polylines.every((polyline) => polyline.points.every(Number.isFinite))) return undefined;
+  if (polylines.length === 0 || !polylines.every((polyline) => polyline.points.every(Number.isFinite)))
+    return undefined;
   return { polylines, strokeScale: transformScale(transform), hasSyntaxError };
 }
 
@@ -46,6 +61,7 @@ function transformScale(transform: string): number {
     .iterate((segment) => {
       corners.push(segment[1] as number, segment[2] as number);
     });
-  const determinant = (corners[2] - corners[0]) * (corners[5] - corners[1]) - (corners[3] - corners[1]) * (corners[4] - corners[0]);
+  const determinant =
+    (corners[2] - corners[0]) * (corners[5] - corners[1]) - (corners[3] - corners[1]) * (corners[4] - corners[0]);
   return Math.sqrt(Math.abs(determinant)) || 0;
 }

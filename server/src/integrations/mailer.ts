@@ -19,7 +19,9 @@ export function createMailer(config: AppConfig): Mailer {
   const url = new URL(config.mail.smtpUrl);
   const isLocal = url.hostname === '127.0.0.1' || url.hostname === 'localhost';
   // The local capture server offers no TLS; real providers are reached over smtps:// or STARTTLS.
-  const transport = nodemailer.createTransport(isLocal ? { url: config.mail.smtpUrl, ignoreTLS: true } as never : config.mail.smtpUrl);
+  const transport = nodemailer.createTransport(
+    isLocal ? ({ url: config.mail.smtpUrl, ignoreTLS: true } as never) : config.mail.smtpUrl,
+  );
   return {
     async send(mail) {
       const info = await transport.sendMail({ from: config.mail.from, ...mail });

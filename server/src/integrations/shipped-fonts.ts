@@ -53,12 +53,18 @@ function readShippedFonts(): ShippedFont[] {
   if (!folder || !existsSync(folder)) return [];
   return readdirSync(folder)
     .map((name) => `@fontsource/${name}`)
-    .filter((fontsourcePackage) => !INTERFACE_FONT_PACKAGES.has(fontsourcePackage) && existsSync(join(folder, fontsourcePackage.slice(12), 'files')))
+    .filter(
+      (fontsourcePackage) =>
+        !INTERFACE_FONT_PACKAGES.has(fontsourcePackage) &&
+        existsSync(join(folder, fontsourcePackage.slice(12), 'files')),
+    )
     .sort()
     .flatMap((fontsourcePackage) => readShippedFont(fontsourcePackage) ?? []);
 }
 
 /** The shipped font in that package, or undefined when the app does not ship it (or cannot open it). */
 export function findShippedFont(fontsourcePackage: string): ShippedFont | undefined {
-  return INTERFACE_FONT_PACKAGES.has(fontsourcePackage) ? undefined : listShippedFonts().find((font) => font.fontsourcePackage === fontsourcePackage);
+  return INTERFACE_FONT_PACKAGES.has(fontsourcePackage)
+    ? undefined
+    : listShippedFonts().find((font) => font.fontsourcePackage === fontsourcePackage);
 }

@@ -9,7 +9,9 @@ export function accessLog(log: (line: string) => void): RequestHandler {
     const startedAt = process.hrtime.bigint();
     res.on('finish', () => {
       const ms = Number(process.hrtime.bigint() - startedAt) / 1e6;
-      log(`[${res.locals.requestId}] ${req.method} ${req.originalUrl.split('?')[0]} ${res.statusCode} ${ms.toFixed(1)}ms`);
+      log(
+        `[${res.locals.requestId}] ${req.method} ${req.originalUrl.split('?')[0]} ${res.statusCode} ${ms.toFixed(1)}ms`,
+      );
     });
     next();
   };

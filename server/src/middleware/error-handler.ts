@@ -38,7 +38,9 @@ export function createErrorHandler(log: (line: string) => void): ErrorRequestHan
       });
       return;
     }
-    log(`[${res.locals.requestId ?? '-'}] ${req.method} ${req.originalUrl} failed: ${(error as Error)?.stack ?? error}`);
+    log(
+      `[${res.locals.requestId ?? '-'}] ${req.method} ${req.originalUrl} failed: ${(error as Error)?.stack ?? error}`,
+    );
     res.status(500).json({
       error: { kind: 'server', message: 'Something went wrong on our side. Please try again in a moment.' },
     });

@@ -6,5 +6,7 @@ import type { RequestHandler } from 'express';
  * which the error handler answers with 413). Text fields of the same form land in req.body.
  */
 export function singleUpload(maxBytes: number): RequestHandler {
-  return multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1, fields: 20 } }).single('file');
+  return multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1, fields: 20 } }).single(
+    'file',
+  );
 }

@@ -12,7 +12,9 @@ export function describeIssues(error: z.ZodError): { message: string; fields: Re
     fields[key] ??= issue.message;
   }
   const first = Object.entries(fields)[0];
-  const message = first ? `Please check ${first[0] === '(request)' ? 'the request' : `“${first[0]}”`}: ${first[1]}.` : 'The request is not valid.';
+  const message = first
+    ? `Please check ${first[0] === '(request)' ? 'the request' : `“${first[0]}”`}: ${first[1]}.`
+    : 'The request is not valid.';
   return { message, fields };
 }
 

@@ -22,18 +22,26 @@ function AccountArea() {
   }
   return (
     <div className="flex items-center gap-3">
-      <Link to={paths.designs.href()} className="inline-flex min-h-11 items-center whitespace-nowrap text-sm font-medium text-walnut-700 underline-offset-4 hover:text-madder-600 hover:underline">
+      <Link
+        to={paths.designs.href()}
+        className="inline-flex min-h-11 items-center whitespace-nowrap text-sm font-medium text-walnut-700 underline-offset-4 hover:text-madder-600 hover:underline"
+      >
         <span className="hidden sm:inline">My designs</span>
         <span className="sm:hidden">Designs</span>
       </Link>
-      <Link to={paths.orders.href()} className="inline-flex min-h-11 items-center whitespace-nowrap text-sm font-medium text-walnut-700 underline-offset-4 hover:text-madder-600 hover:underline">
+      <Link
+        to={paths.orders.href()}
+        className="inline-flex min-h-11 items-center whitespace-nowrap text-sm font-medium text-walnut-700 underline-offset-4 hover:text-madder-600 hover:underline"
+      >
         <span className="hidden sm:inline">My orders</span>
         <span className="sm:hidden">Orders</span>
       </Link>
       <span className="hidden text-sm sm:inline">
         Signed in as <strong className="font-semibold">{me.data.name}</strong>
       </span>
-      <span className="text-sm sm:hidden" aria-label={`Signed in as ${me.data.name}`}>{me.data.name.split(' ')[0]}</span>
+      <span className="text-sm sm:hidden" aria-label={`Signed in as ${me.data.name}`}>
+        {me.data.name.split(' ')[0]}
+      </span>
       <Button tone="quiet" onClick={() => signOut.mutate()} disabled={signOut.isPending}>
         Sign out
       </Button>

@@ -13,8 +13,17 @@ import { NotFoundPage } from './routes/not-found.tsx';
  * A page loaded only when someone opens it, so the catalogue's first download stays small: the designer brings the
  * canvas library and lettering fonts, checkout the form library.
  */
-function lazyPage<Module, Name extends keyof Module>(path: string, load: () => Promise<Module>, name: Name & (Module[Name] extends ComponentType ? unknown : never), waiting: string) {
-  return { path, lazy: () => load().then((module) => ({ Component: module[name] as ComponentType })), hydrateFallbackElement: <Loading label={waiting} /> };
+function lazyPage<Module, Name extends keyof Module>(
+  path: string,
+  load: () => Promise<Module>,
+  name: Name & (Module[Name] extends ComponentType ? unknown : never),
+  waiting: string,
+) {
+  return {
+    path,
+    lazy: () => load().then((module) => ({ Component: module[name] as ComponentType })),
+    hydrateFallbackElement: <Loading label={waiting} />,
+  };
 }
 
 export const router = createBrowserRouter([
@@ -34,7 +43,12 @@ export const router = createBrowserRouter([
           lazyPage(paths.orders.path, () => import('./routes/orders.tsx'), 'OrdersPage', 'Fetching your orders…'),
           lazyPage(paths.order.path, () => import('./routes/order.tsx'), 'OrderPage', 'Fetching your order…'),
           lazyPage(paths.designs.path, () => import('./routes/designs.tsx'), 'DesignsPage', 'Fetching your designs…'),
-          lazyPage(paths.shared.path, () => import('./routes/shared-design.tsx'), 'SharedDesignPage', 'Opening the shared design…'),
+          lazyPage(
+            paths.shared.path,
+            () => import('./routes/shared-design.tsx'),
+            'SharedDesignPage',
+            'Opening the shared design…',
+          ),
           { path: '*', element: <NotFoundPage /> },
         ],
       },

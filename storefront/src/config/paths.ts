@@ -5,7 +5,8 @@ export const paths = {
   /** The designer; `designId` opens one of the customer's saved designs. */
   design: {
     path: '/design/:slug',
-    href: (slug: string, designId?: number) => `/design/${encodeURIComponent(slug)}${designId === undefined ? '' : `?design=${designId}`}`,
+    href: (slug: string, designId?: number) =>
+      `/design/${encodeURIComponent(slug)}${designId === undefined ? '' : `?design=${designId}`}`,
   },
   signIn: { path: '/sign-in', href: () => '/sign-in' },
   /** Ordering one of the customer's saved designs: quantity, date, address, then the card page. */

@@ -7,7 +7,9 @@ import { svgDataUrl } from '@ui/svg-data-url.ts';
  */
 export function dyedMockupSrc(mockupSvg: string, colourHex: string | undefined): string {
   const dyed = colourHex
-    ? mockupSvg.replace(/<svg\b[^>]*>/, (root) => root.replace(/\scolor="[^"]*"/, '').replace(/^<svg/, `<svg color="${colourHex}"`))
+    ? mockupSvg.replace(/<svg\b[^>]*>/, (root) =>
+        root.replace(/\scolor="[^"]*"/, '').replace(/^<svg/, `<svg color="${colourHex}"`),
+      )
     : mockupSvg;
   return svgDataUrl(dyed);
 }

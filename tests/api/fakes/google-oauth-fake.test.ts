@@ -3,8 +3,20 @@ import { startGoogleOAuthFake } from '../../../fakes/google-oauth/server.ts';
 
 // The authorization-code flow as RFC 6749 §4.1 describes it, with the token and userinfo shapes that
 // passport-google-oauth20 expects (../shared/docs/stack-notes.md §4).
-const maren = { sub: '100000000000000000101', email: 'maren@wren-bobbin.test', name: 'Maren Threadgill', givenName: 'Maren', familyName: 'Threadgill' };
-const osric = { sub: '100000000000000000102', email: 'osric@wren-bobbin.test', name: 'Osric Pell', givenName: 'Osric', familyName: 'Pell' };
+const maren = {
+  sub: '100000000000000000101',
+  email: 'maren@wren-bobbin.test',
+  name: 'Maren Threadgill',
+  givenName: 'Maren',
+  familyName: 'Threadgill',
+};
+const osric = {
+  sub: '100000000000000000102',
+  email: 'osric@wren-bobbin.test',
+  name: 'Osric Pell',
+  givenName: 'Osric',
+  familyName: 'Pell',
+};
 const client = { client_id: 'hoopwright-test', redirect_uri: 'http://127.0.0.1:3999/api/auth/google/callback' };
 
 let fake: Awaited<ReturnType<typeof startGoogleOAuthFake>>;
@@ -15,7 +27,9 @@ afterAll(() => fake.close());
 
 function authorizeParams(extra: Record<string, string | undefined> = {}): Record<string, string> {
   const params = { response_type: 'code', ...client, scope: 'openid email profile', state: 'st-123', ...extra };
-  return Object.fromEntries(Object.entries(params).filter((entry): entry is [string, string] => entry[1] !== undefined));
+  return Object.fromEntries(
+    Object.entries(params).filter((entry): entry is [string, string] => entry[1] !== undefined),
+  );
 }
 
 async function choose(choice: Record<string, string>, extra: Record<string, string> = {}): Promise<URL> {
@@ -48,7 +62,9 @@ describe('GET /authorize', () => {
     expect(response.status).toBe(200);
     expect(page).toContain('Local sign-in stand-in');
     for (const person of [maren, osric]) {
-      expect(page).toMatch(new RegExp(`<button[^>]*name="identity" value="${person.sub}">[\\s\\S]*?${person.name}[\\s\\S]*?</button>`));
+      expect(page).toMatch(
+        new RegExp(`<button[^>]*name="identity" value="${person.sub}">[\\s\\S]*?${person.name}[\\s\\S]*?</button>`),
+      );
     }
     expect(page).toMatch(/<input id="email" name="email" type="email"/);
     expect(page).toContain('<input type="hidden" name="state" value="st-123">');
@@ -63,7 +79,9 @@ describe('GET /authorize', () => {
   });
 
   it('when values in the request carry markup, then the page shows them escaped', async () => {
-    const response = await fetch(`${fake.url}/authorize?${new URLSearchParams(authorizeParams({ state: '"><script>alert(1)</script>' }))}`);
+    const response = await fetch(
+      `${fake.url}/authorize?${new URLSearchParams(authorizeParams({ state: '"><script>alert(1)</script>' }))}`,
+    );
     const page = await response.text();
     expect(page).not.toContain('<script>');
     expect(page).toContain('value="&quot;&gt;&lt;script&gt;alert(1)&lt;/script&gt;"');
@@ -75,16 +93,21 @@ describe('GET /authorize', () => {
     ['redirect_uri is not http(s)', { redirect_uri: 'javascript:alert(1)' }, 'redirect_uri must be an http(s) URL.'],
     ['client_id is empty', { client_id: '' }, 'client_id is empty.'],
   ])('when %s, then it answers 400 with a readable page and no redirect', async (_case, override, message) => {
-    const response = await fetch(`${fake.url}/authorize?${new URLSearchParams(authorizeParams(override))}`, { redirect: 'manual' });
+    const response = await fetch(`${fake.url}/authorize?${new URLSearchParams(authorizeParams(override))}`, {
+      redirect: 'manual',
+    });
     expect(response.status).toBe(400);
     expect(response.headers.get('content-type')).toContain('text/html');
     expect(await response.text()).toContain(message);
   });
 
   it('when response_type is not code, then it sends the client an unsupported_response_type error', async () => {
-    const response = await fetch(`${fake.url}/authorize?${new URLSearchParams(authorizeParams({ response_type: 'token' }))}`, {
-      redirect: 'manual',
-    });
+    const response = await fetch(
+      `${fake.url}/authorize?${new URLSearchParams(authorizeParams({ response_type: 'token' }))}`,
+      {
+        redirect: 'manual',
+      },
+    );
     const location = new URL(response.headers.get('location')!);
     expect(response.status).toBe(302);
     expect(location.searchParams.get('error')).toBe('unsupported_response_type');
@@ -113,7 +136,9 @@ describe('the authorization-code exchange', () => {
       email_verified: true,
       picture: expect.stringMatching(/^data:image\/svg\+xml;base64,/),
     });
-    const viaHeader = await fetch(`${fake.url}/userinfo`, { headers: { Authorization: `Bearer ${token.body.access_token}` } });
+    const viaHeader = await fetch(`${fake.url}/userinfo`, {
+      headers: { Authorization: `Bearer ${token.body.access_token}` },
+    });
     expect((await viaHeader.json()).sub).toBe(maren.sub);
   });
 
@@ -127,11 +152,18 @@ describe('the authorization-code exchange', () => {
     }
     expect(people[0].sub).toMatch(/^\d{21}$/);
     expect(people[1].sub).toBe(people[0].sub);
-    expect(people[0]).toMatchObject({ email: 'juniper.ashgrove@example.test', name: 'Juniper Ashgrove', given_name: 'Juniper', family_name: 'Ashgrove' });
+    expect(people[0]).toMatchObject({
+      email: 'juniper.ashgrove@example.test',
+      name: 'Juniper Ashgrove',
+      given_name: 'Juniper',
+      family_name: 'Ashgrove',
+    });
   });
 
-  it('when a listed person\'s e-mail is typed, then it signs in as that listed person', async () => {
-    const token = await exchange((await choose({ email: osric.email, name: 'Someone Else' })).searchParams.get('code')!);
+  it("when a listed person's e-mail is typed, then it signs in as that listed person", async () => {
+    const token = await exchange(
+      (await choose({ email: osric.email, name: 'Someone Else' })).searchParams.get('code')!,
+    );
     expect((await userinfo(token.body.access_token)).body.sub).toBe(osric.sub);
   });
 
@@ -160,7 +192,13 @@ describe('the authorization-code exchange', () => {
     const code = (await choose({ identity: osric.sub })).searchParams.get('code')!;
     const response = await fetch(`${fake.url}/token`, {
       method: 'POST',
-      body: new URLSearchParams({ grant_type: 'authorization_code', code, client_id: client.client_id, client_secret: 's', redirect_uri: 'http://127.0.0.1:1/other' }),
+      body: new URLSearchParams({
+        grant_type: 'authorization_code',
+        code,
+        client_id: client.client_id,
+        client_secret: 's',
+        redirect_uri: 'http://127.0.0.1:1/other',
+      }),
     });
     expect(response.status).toBe(400);
     expect((await response.json()).error).toBe('invalid_grant');
@@ -176,7 +214,7 @@ describe('the authorization-code exchange', () => {
     expect((await response.json()).error).toBe('invalid_client');
   });
 
-  it('when userinfo gets a bad token, then it answers 401 in Google\'s error shape', async () => {
+  it("when userinfo gets a bad token, then it answers 401 in Google's error shape", async () => {
     expect(await userinfo('token-nope')).toEqual({
       status: 401,
       body: { error: { code: 401, message: expect.any(String), status: 'UNAUTHENTICATED' } },

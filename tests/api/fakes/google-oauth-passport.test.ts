@@ -8,7 +8,13 @@ import { startGoogleOAuthFake } from '../../../fakes/google-oauth/server.ts';
 
 // The real passport-google-oauth20 strategy pointed at the fake with authorizationURL, tokenURL and userProfileURL,
 // as ../shared/docs/stack-notes.md §4 verified; a `/userinfo` path selects the strategy's OpenID profile parser.
-const wren = { sub: '100000000000000000201', email: 'wren@wren-bobbin.test', name: 'Wren Hollis', givenName: 'Wren', familyName: 'Hollis' };
+const wren = {
+  sub: '100000000000000000201',
+  email: 'wren@wren-bobbin.test',
+  name: 'Wren Hollis',
+  givenName: 'Wren',
+  familyName: 'Hollis',
+};
 const callbackURL = 'http://127.0.0.1:3999/auth/google/callback';
 
 let fake: Awaited<ReturnType<typeof startGoogleOAuthFake>>;
@@ -28,7 +34,12 @@ beforeAll(async () => {
         tokenURL: `${fake.url}/token`,
         userProfileURL: `${fake.url}/userinfo`,
       },
-      (_accessToken: string, _refreshToken: string, profile: Profile, done: (error: unknown, user?: Express.User) => void) =>
+      (
+        _accessToken: string,
+        _refreshToken: string,
+        profile: Profile,
+        done: (error: unknown, user?: Express.User) => void,
+      ) =>
         done(null, { id: profile.id, name: profile.displayName, emails: profile.emails, provider: profile.provider }),
     ),
   );
@@ -39,9 +50,13 @@ beforeAll(async () => {
   app.use(session({ secret: 'fake-oauth-test-secret', resave: false, saveUninitialized: false }));
   app.use(authenticator.session());
   app.get('/auth/google', authenticator.authenticate('google', { scope: ['openid', 'email', 'profile'] }));
-  app.get('/auth/google/callback', authenticator.authenticate('google', { failureRedirect: '/failed' }), (_req, res) => {
-    res.redirect('/me');
-  });
+  app.get(
+    '/auth/google/callback',
+    authenticator.authenticate('google', { failureRedirect: '/failed' }),
+    (_req, res) => {
+      res.redirect('/me');
+    },
+  );
   app.get('/me', (req, res) => {
     if (req.user) res.json(req.user);
     else res.status(401).json({ error: 'signed out' });

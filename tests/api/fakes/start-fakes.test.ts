@@ -1,7 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import { startFakes } from '../../../fakes/index.ts';
 
-const identities = [{ sub: '100000000000000000301', email: 'ida@wren-bobbin.test', name: 'Ida Marchetti', givenName: 'Ida', familyName: 'Marchetti' }];
+const identities = [
+  {
+    sub: '100000000000000000301',
+    email: 'ida@wren-bobbin.test',
+    name: 'Ida Marchetti',
+    givenName: 'Ida',
+    familyName: 'Marchetti',
+  },
+];
 const config = {
   googlePort: 0,
   stripePort: 0,
@@ -28,7 +36,9 @@ describe('startFakes', () => {
   it('when one fake cannot bind its port, then the start fails and the others are stopped', async () => {
     const first = await startFakes(config);
     const taken = Number(new URL(first.urls.stripe).port);
-    await expect(startFakes({ ...config, stripePort: taken })).rejects.toThrow(/Could not start the local fakes: .*EADDRINUSE/);
+    await expect(startFakes({ ...config, stripePort: taken })).rejects.toThrow(
+      /Could not start the local fakes: .*EADDRINUSE/,
+    );
     await first.close();
   });
 

@@ -19,7 +19,13 @@ let stripe: Stripe;
 
 beforeAll(async () => {
   receiver = await startWebhookReceiver({ secret: WEBHOOK_SECRET, nowMs: () => FIXED_NOW_MS });
-  fake = await startStripeFake({ port: 0, apiKey: API_KEY, webhookSecret: WEBHOOK_SECRET, webhookUrl: receiver.url, now: () => FIXED_NOW_MS });
+  fake = await startStripeFake({
+    port: 0,
+    apiKey: API_KEY,
+    webhookSecret: WEBHOOK_SECRET,
+    webhookUrl: receiver.url,
+    now: () => FIXED_NOW_MS,
+  });
   stripe = stripeClientFor(fake.url);
 });
 afterAll(async () => {
@@ -81,11 +87,23 @@ describe('Checkout with manual capture through the official SDK', () => {
     expect(captured).toMatchObject({ status: 'succeeded', amount_received: 5000, amount_capturable: 0 });
     const again = await stripe.paymentIntents.capture(intent.id).catch((error: unknown) => error);
     expect(again).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
-    expect(again).toMatchObject({ statusCode: 400, type: 'StripeInvalidRequestError', code: 'payment_intent_unexpected_state' });
+    expect(again).toMatchObject({
+      statusCode: 400,
+      type: 'StripeInvalidRequestError',
+      code: 'payment_intent_unexpected_state',
+    });
 
     const partial = await stripe.refunds.create({ payment_intent: intent.id, amount: 2000 });
-    expect(partial).toMatchObject({ id: 're_test_000001', object: 'refund', status: 'succeeded', amount: 2000, charge: 'ch_test_000001' });
-    const tooMuch = await stripe.refunds.create({ payment_intent: intent.id, amount: 3001 }).catch((error: unknown) => error);
+    expect(partial).toMatchObject({
+      id: 're_test_000001',
+      object: 'refund',
+      status: 'succeeded',
+      amount: 2000,
+      charge: 'ch_test_000001',
+    });
+    const tooMuch = await stripe.refunds
+      .create({ payment_intent: intent.id, amount: 3001 })
+      .catch((error: unknown) => error);
     expect(tooMuch).toMatchObject({ statusCode: 400, code: 'amount_too_large' });
     expect((await stripe.refunds.create({ payment_intent: intent.id })).amount).toBe(3000);
 
@@ -111,20 +129,31 @@ describe('Checkout with manual capture through the official SDK', () => {
   it('when an authorized payment is cancelled, then the hold is released and capture is refused', async () => {
     const intent = (await paidSession()).payment_intent as Stripe.PaymentIntent;
     const cancelled = await stripe.paymentIntents.cancel(intent.id, { cancellation_reason: 'requested_by_customer' });
-    expect(cancelled).toMatchObject({ status: 'canceled', amount_capturable: 0, cancellation_reason: 'requested_by_customer' });
+    expect(cancelled).toMatchObject({
+      status: 'canceled',
+      amount_capturable: 0,
+      cancellation_reason: 'requested_by_customer',
+    });
     const capture = await stripe.paymentIntents.capture(intent.id).catch((error: unknown) => error);
     expect(capture).toMatchObject({ statusCode: 400, code: 'payment_intent_unexpected_state' });
     const refund = await stripe.refunds.create({ payment_intent: intent.id }).catch((error: unknown) => error);
     expect(refund).toMatchObject({ statusCode: 400, code: 'charge_not_refundable' });
     await vi.waitFor(() => expect(settled()).toBe(true));
-    expect(receiver.events.at(-1)).toMatchObject({ type: 'payment_intent.canceled', data: { object: { id: intent.id } } });
+    expect(receiver.events.at(-1)).toMatchObject({
+      type: 'payment_intent.canceled',
+      data: { object: { id: intent.id } },
+    });
   });
 
   it('when the session uses automatic capture, then payment succeeds at once', async () => {
     const { payment_intent_data: _manual, ...automatic } = orderSeven;
     const session = await paidSession(automatic);
     expect(session.payment_status).toBe('paid');
-    expect(session.payment_intent).toMatchObject({ status: 'succeeded', amount_received: 6400, capture_method: 'automatic' });
+    expect(session.payment_intent).toMatchObject({
+      status: 'succeeded',
+      amount_received: 6400,
+      capture_method: 'automatic',
+    });
     await vi.waitFor(() => expect(settled()).toBe(true));
     expect(receiver.events.at(-1)?.type).toBe('payment_intent.succeeded');
   });
@@ -132,7 +161,9 @@ describe('Checkout with manual capture through the official SDK', () => {
 
 describe('the API edges', () => {
   it('when the API key is wrong, then the SDK raises an authentication error', async () => {
-    const error = await stripeClientFor(fake.url, 'sk_test_someone_else_entirely').paymentIntents.retrieve('pi_test_000001').catch((e: unknown) => e);
+    const error = await stripeClientFor(fake.url, 'sk_test_someone_else_entirely')
+      .paymentIntents.retrieve('pi_test_000001')
+      .catch((e: unknown) => e);
     expect(error).toBeInstanceOf(Stripe.errors.StripeAuthenticationError);
     expect(error).toMatchObject({ statusCode: 401 });
   });
@@ -140,7 +171,11 @@ describe('the API edges', () => {
   it('when an id is unknown, then it answers 404 resource_missing', async () => {
     const error = await stripe.paymentIntents.retrieve('pi_test_999999').catch((e: unknown) => e);
     expect(error).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
-    expect(error).toMatchObject({ statusCode: 404, code: 'resource_missing', message: "No such payment_intent: 'pi_test_999999'" });
+    expect(error).toMatchObject({
+      statusCode: 404,
+      code: 'resource_missing',
+      message: "No such payment_intent: 'pi_test_999999'",
+    });
   });
 
   it('when a required parameter is missing or malformed, then it names the param in bracket notation', async () => {
@@ -154,7 +189,9 @@ describe('the API edges', () => {
       .create({ ...orderSeven, line_items: [{ ...orderSeven.line_items[0], quantity: 0 }] })
       .catch((e: unknown) => e);
     expect(badAmount).toMatchObject({ statusCode: 400, param: 'line_items[0][quantity]' });
-    const badExpand = await stripe.checkout.sessions.retrieve('cs_test_000001', { expand: ['customer'] }).catch((e: unknown) => e);
+    const badExpand = await stripe.checkout.sessions
+      .retrieve('cs_test_000001', { expand: ['customer'] })
+      .catch((e: unknown) => e);
     expect(badExpand).toMatchObject({ statusCode: 400, param: 'expand' });
   });
 

@@ -28,7 +28,16 @@ export async function startWebhookReceiver(opts: { secret: string; failFirst?: n
       return;
     }
     try {
-      events.push(verifier.webhooks.constructEvent(req.body, req.get('stripe-signature') ?? '', opts.secret, undefined, undefined, opts.nowMs?.()));
+      events.push(
+        verifier.webhooks.constructEvent(
+          req.body,
+          req.get('stripe-signature') ?? '',
+          opts.secret,
+          undefined,
+          undefined,
+          opts.nowMs?.(),
+        ),
+      );
       res.json({ received: true });
     } catch (error) {
       rejections.push((error as Error).message);
@@ -42,7 +51,10 @@ export async function startWebhookReceiver(opts: { secret: string; failFirst?: n
 export const orderSeven = {
   mode: 'payment',
   line_items: [
-    { price_data: { currency: 'usd', unit_amount: 2400, product_data: { name: 'Smocked romper, size 2T' } }, quantity: 2 },
+    {
+      price_data: { currency: 'usd', unit_amount: 2400, product_data: { name: 'Smocked romper, size 2T' } },
+      quantity: 2,
+    },
     { price_data: { currency: 'usd', unit_amount: 1600, product_data: { name: 'Monogram, 3 letters' } }, quantity: 1 },
   ],
   success_url: 'http://127.0.0.1:3999/checkout/done?session={CHECKOUT_SESSION_ID}',
@@ -57,5 +69,9 @@ export const testCard = { card_number: '4242 4242 4242 4242', expiry: '12/30', c
 
 /** Submits the hosted payment form as a browser would. */
 export function submitPaymentForm(sessionUrl: string, fields: Partial<typeof testCard> = {}): Promise<Response> {
-  return fetch(sessionUrl, { method: 'POST', body: new URLSearchParams({ ...testCard, ...fields }), redirect: 'manual' });
+  return fetch(sessionUrl, {
+    method: 'POST',
+    body: new URLSearchParams({ ...testCard, ...fields }),
+    redirect: 'manual',
+  });
 }

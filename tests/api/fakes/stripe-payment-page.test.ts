@@ -1,7 +1,14 @@
 import type Stripe from 'stripe';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startStripeFake } from '../../../fakes/stripe/server.ts';
-import { API_KEY, FIXED_NOW_MS, WEBHOOK_SECRET, orderSeven, stripeClientFor, submitPaymentForm } from './stripe-fake-helpers.ts';
+import {
+  API_KEY,
+  FIXED_NOW_MS,
+  WEBHOOK_SECRET,
+  orderSeven,
+  stripeClientFor,
+  submitPaymentForm,
+} from './stripe-fake-helpers.ts';
 
 // Stripe test card numbers and form rules: docs.stripe.com/testing (via ../shared/reference/trade-facts.md):
 // 4242 4242 4242 4242 succeeds, 4000 0000 0000 0002 is a generic decline, 4000 0000 0000 9995 insufficient funds;
@@ -29,7 +36,8 @@ describe('GET /pay/:sessionId', () => {
     expect(response.headers.get('content-security-policy')).toMatch(/^default-src 'none'; style-src 'sha256-/);
     expect(page).toContain('Monogram, 3 letters × 1');
     expect(page).toContain('Pay $64.00');
-    for (const label of ['Card number', 'Expiry (MM/YY)', 'CVC', 'Name on card']) expect(page).toContain(`>${label}</label>`);
+    for (const label of ['Card number', 'Expiry (MM/YY)', 'CVC', 'Name on card'])
+      expect(page).toContain(`>${label}</label>`);
     expect(page).toContain('href="http://127.0.0.1:3999/checkout/cancelled"');
     expect(page).not.toMatch(/(src|href)="https?:\/\/(?!127\.0\.0\.1:3999)/);
   });
@@ -37,7 +45,12 @@ describe('GET /pay/:sessionId', () => {
   it('when a product name carries markup, then the page shows it escaped', async () => {
     const session = await openSession({
       ...orderSeven,
-      line_items: [{ price_data: { currency: 'jpy', unit_amount: 500, product_data: { name: '<img src=x onerror=alert(1)>' } }, quantity: 1 }],
+      line_items: [
+        {
+          price_data: { currency: 'jpy', unit_amount: 500, product_data: { name: '<img src=x onerror=alert(1)>' } },
+          quantity: 1,
+        },
+      ],
     });
     const page = await (await fetch(session.url!)).text();
     expect(page).not.toContain('<img');
@@ -67,7 +80,15 @@ describe('POST /pay/:sessionId', () => {
     expect((await stripe.checkout.sessions.retrieve(session.id)).status).toBe('open');
     expect(fake.state.paymentIntents.size).toBe(0);
     // As Stripe does, the decline is announced on the session's intent, with the session's metadata.
-    expect(fake.state.events.at(-1)).toMatchObject({ type: 'payment_intent.payment_failed', data: { object: { status: 'requires_payment_method', last_payment_error: { code: 'card_declined', message: expect.stringContaining(message) } } } });
+    expect(fake.state.events.at(-1)).toMatchObject({
+      type: 'payment_intent.payment_failed',
+      data: {
+        object: {
+          status: 'requires_payment_method',
+          last_payment_error: { code: 'card_declined', message: expect.stringContaining(message) },
+        },
+      },
+    });
   });
 
   it.each([
@@ -90,7 +111,9 @@ describe('POST /pay/:sessionId', () => {
 
   it('when the card expires this very month, then it is still accepted', async () => {
     const session = await openSession();
-    expect((await submitPaymentForm(session.url!, { expiry: '12/26', card_number: '4242424242424242' })).status).toBe(303);
+    expect((await submitPaymentForm(session.url!, { expiry: '12/26', card_number: '4242424242424242' })).status).toBe(
+      303,
+    );
   });
 
   it('when a paid session is submitted again, then nothing more is charged', async () => {

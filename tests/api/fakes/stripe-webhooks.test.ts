@@ -2,7 +2,14 @@ import Stripe from 'stripe';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { startStripeFake } from '../../../fakes/stripe/server.ts';
 import { signWebhookPayload } from '../../../fakes/stripe/webhook-signature.ts';
-import { API_KEY, WEBHOOK_SECRET, orderSeven, startWebhookReceiver, stripeClientFor, submitPaymentForm } from './stripe-fake-helpers.ts';
+import {
+  API_KEY,
+  WEBHOOK_SECRET,
+  orderSeven,
+  startWebhookReceiver,
+  stripeClientFor,
+  submitPaymentForm,
+} from './stripe-fake-helpers.ts';
 
 // Signature scheme, default tolerance and test vector: ../shared/reference/trade-facts.md "Payments (Stripe)"
 // (stripe-node 23.1.0 source; docs.stripe.com/webhooks/signatures).
@@ -20,7 +27,12 @@ afterEach(async () => {
 
 /** A fake on the real clock (the receiver checks signature age against Date.now) with a paid manual-capture session. */
 async function startWithPaidSession(receiverUrl: string) {
-  const fake = await startStripeFake({ port: 0, apiKey: API_KEY, webhookSecret: WEBHOOK_SECRET, webhookUrl: receiverUrl });
+  const fake = await startStripeFake({
+    port: 0,
+    apiKey: API_KEY,
+    webhookSecret: WEBHOOK_SECRET,
+    webhookUrl: receiverUrl,
+  });
   cleanups.push(fake.close);
   const session = await stripeClientFor(fake.url).checkout.sessions.create(orderSeven);
   expect((await submitPaymentForm(session.url!)).status).toBe(303);
@@ -37,13 +49,26 @@ describe('webhook signatures', () => {
   it('when the published test vector is signed, then the header matches it and the SDK helper', () => {
     const header = signWebhookPayload(VECTOR.payload, VECTOR.secret, VECTOR.timestamp);
     expect(header).toBe(`t=${VECTOR.timestamp},v1=${VECTOR.v1}`);
-    expect(Stripe.webhooks.generateTestHeaderString({ payload: VECTOR.payload, secret: VECTOR.secret, timestamp: VECTOR.timestamp })).toBe(header);
+    expect(
+      Stripe.webhooks.generateTestHeaderString({
+        payload: VECTOR.payload,
+        secret: VECTOR.secret,
+        timestamp: VECTOR.timestamp,
+      }),
+    ).toBe(header);
   });
 
   it('when the SDK verifies the vector, then it is accepted at 299 s of age and refused at 301 s', () => {
     const header = signWebhookPayload(VECTOR.payload, VECTOR.secret, VECTOR.timestamp);
     const verifyAt = (ageSeconds: number) => () =>
-      Stripe.webhooks.constructEvent(VECTOR.payload, header, VECTOR.secret, undefined, undefined, (VECTOR.timestamp + ageSeconds) * 1000);
+      Stripe.webhooks.constructEvent(
+        VECTOR.payload,
+        header,
+        VECTOR.secret,
+        undefined,
+        undefined,
+        (VECTOR.timestamp + ageSeconds) * 1000,
+      );
     expect(verifyAt(299)().id).toBe('evt_test_webhook');
     expect(verifyAt(301)).toThrow(/tolerance/);
   });
@@ -51,7 +76,9 @@ describe('webhook signatures', () => {
   it('when the receiver holds another secret, then it refuses the delivery and the fake records the failure', async () => {
     const receiver = await startReceiver({ secret: 'whsec_not_the_same' });
     const fake = await startWithPaidSession(receiver.url);
-    await vi.waitFor(() => expect(fake.state.deliveries.every((d) => d.status === 'failed')).toBe(true), { timeout: 5_000 });
+    await vi.waitFor(() => expect(fake.state.deliveries.every((d) => d.status === 'failed')).toBe(true), {
+      timeout: 5_000,
+    });
     expect(fake.state.deliveries[0]).toMatchObject({ statusCode: 400, attempts: 4 });
     expect(receiver.rejections[0]).toContain('No signatures found matching the expected signature');
   });
@@ -62,7 +89,12 @@ describe('webhook delivery', () => {
     const receiver = await startReceiver({ failFirst: 2 });
     const fake = await startWithPaidSession(receiver.url);
     await vi.waitFor(() => expect(receiver.events).toHaveLength(2), { timeout: 5_000 });
-    expect(fake.state.deliveries[0]).toMatchObject({ type: 'checkout.session.completed', status: 'delivered', statusCode: 200, attempts: 3 });
+    expect(fake.state.deliveries[0]).toMatchObject({
+      type: 'checkout.session.completed',
+      status: 'delivered',
+      statusCode: 200,
+      attempts: 3,
+    });
     expect(fake.state.deliveries[1]).toMatchObject({ type: 'payment_intent.amount_capturable_updated', attempts: 1 });
   });
 
@@ -71,7 +103,9 @@ describe('webhook delivery', () => {
     await receiver.close();
     cleanups.pop();
     const fake = await startWithPaidSession(receiver.url);
-    await vi.waitFor(() => expect(fake.state.deliveries.every((d) => d.status === 'failed')).toBe(true), { timeout: 8_000 });
+    await vi.waitFor(() => expect(fake.state.deliveries.every((d) => d.status === 'failed')).toBe(true), {
+      timeout: 8_000,
+    });
     expect(fake.state.deliveries[0]).toMatchObject({ statusCode: null, attempts: 4, lastError: expect.any(String) });
   });
 
@@ -102,7 +136,12 @@ describe('webhook delivery', () => {
 
   it('when the webhook URL is not on loopback, then the fake refuses to start', async () => {
     await expect(
-      startStripeFake({ port: 0, apiKey: API_KEY, webhookSecret: WEBHOOK_SECRET, webhookUrl: 'https://hooks.example.com/stripe' }),
+      startStripeFake({
+        port: 0,
+        apiKey: API_KEY,
+        webhookSecret: WEBHOOK_SECRET,
+        webhookUrl: 'https://hooks.example.com/stripe',
+      }),
     ).rejects.toThrow(/loopback only/);
   });
 });

@@ -13,7 +13,9 @@ let db: Db;
 /** CHECKSUM TABLE of every seeded table: equal sums mean equal rows. */
 async function checksums(): Promise<Record<string, string>> {
   const [rows] = await db.raw(`CHECKSUM TABLE ${seededTables.map((table) => `\`${table}\``).join(', ')}`);
-  return Object.fromEntries((rows as { Table: string; Checksum: string | number }[]).map((row) => [row.Table, String(row.Checksum)]));
+  return Object.fromEntries(
+    (rows as { Table: string; Checksum: string | number }[]).map((row) => [row.Table, String(row.Checksum)]),
+  );
 }
 
 async function count(table: string, where: Record<string, unknown> = {}): Promise<number> {
@@ -48,9 +50,18 @@ describe('schema and demo seeds', () => {
     const sizesPerGarment = await db('garment_sizes').select('garment_id').count({ n: '*' }).groupBy('garment_id');
     expect(sizesPerGarment.every((row) => Number(row.n) >= 4)).toBe(true);
     const statuses = (await db('orders').distinct('status')).map((row) => row.status).sort();
-    expect(statuses).toEqual(
-      ['authorized', 'awaiting_payment', 'cancelled', 'changes_requested', 'in_production', 'proof_approved', 'proof_sent', 'refunded', 'shipped', 'stitched'],
-    );
+    expect(statuses).toEqual([
+      'authorized',
+      'awaiting_payment',
+      'cancelled',
+      'changes_requested',
+      'in_production',
+      'proof_approved',
+      'proof_sent',
+      'refunded',
+      'shipped',
+      'stitched',
+    ]);
   });
 
   it('when the worked case is seeded, then the 180 mm daisy chain sits 4 times round the 692 mm bishop hem', async () => {
@@ -63,15 +74,21 @@ describe('schema and demo seeds', () => {
 
   it('when an order item names an order that does not exist, then the foreign key refuses it', async () => {
     const item = await db('order_items').first();
-    await expect(db('order_items').insert({ ...item, id: undefined, order_id: 999_999 })).rejects.toMatchObject({ code: 'ER_NO_REFERENCED_ROW_2' });
+    await expect(db('order_items').insert({ ...item, id: undefined, order_id: 999_999 })).rejects.toMatchObject({
+      code: 'ER_NO_REFERENCED_ROW_2',
+    });
   });
 
   it('when a garment still has designs, then it cannot be deleted', async () => {
-    await expect(db('garments').where({ slug: 'bishop-dress' }).del()).rejects.toMatchObject({ code: 'ER_ROW_IS_REFERENCED_2' });
+    await expect(db('garments').where({ slug: 'bishop-dress' }).del()).rejects.toMatchObject({
+      code: 'ER_ROW_IS_REFERENCED_2',
+    });
   });
 
   it('when a second user takes an e-mail already in use, in other capitals, then the unique key refuses it', async () => {
-    await expect(db('users').insert({ email: demoPeople[0].email.toUpperCase(), name: 'Someone Else' })).rejects.toMatchObject({ code: 'ER_DUP_ENTRY' });
+    await expect(
+      db('users').insert({ email: demoPeople[0].email.toUpperCase(), name: 'Someone Else' }),
+    ).rejects.toMatchObject({ code: 'ER_DUP_ENTRY' });
   });
 
   it('when a motif has a smaller maximum scale than its minimum, then the check constraint refuses it', async () => {

@@ -32,14 +32,23 @@ describe('calendarRange', () => {
   });
 
   it('on a Sunday, still shows the week that ends that day', () => {
-    expect(calendarRange(Date.parse('2026-12-06T08:00:00Z'), 1)).toMatchObject({ from: '2026-11-30', to: '2026-12-06' });
+    expect(calendarRange(Date.parse('2026-12-06T08:00:00Z'), 1)).toMatchObject({
+      from: '2026-11-30',
+      to: '2026-12-06',
+    });
   });
 });
 
 describe('boardSearch', () => {
   it('leaves the defaults out and round-trips through the contract', () => {
     expect(boardSearch(orderBoardQuery.parse({}))).toBe('');
-    const query = orderBoardQuery.parse({ status: 'authorized,proof_sent', q: 'castell', sort: 'due', dir: 'asc', page: '2' });
+    const query = orderBoardQuery.parse({
+      status: 'authorized,proof_sent',
+      q: 'castell',
+      sort: 'due',
+      dir: 'asc',
+      page: '2',
+    });
     const search = boardSearch(query);
     expect(search).toBe('status=authorized%2Cproof_sent&q=castell&sort=due&dir=asc&page=2');
     expect(orderBoardQuery.parse(Object.fromEntries(new URLSearchParams(search)))).toEqual(query);

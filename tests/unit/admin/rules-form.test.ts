@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { pricingRules } from '../../../server/src/contracts/admin-pricing.ts';
-import { fromRulesForm, garmentLabel, isComplete, toRulesForm } from '../../../admin/src/features/pricing/model/rules-form.ts';
+import {
+  fromRulesForm,
+  garmentLabel,
+  isComplete,
+  toRulesForm,
+} from '../../../admin/src/features/pricing/model/rules-form.ts';
 import { pricingRuleSets } from '../../../seeds/data/pricing.ts';
 
 const { version: _version, ...seededRules } = pricingRuleSets[1]!.rules;

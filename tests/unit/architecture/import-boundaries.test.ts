@@ -14,12 +14,19 @@ function sourceFiles(dir: string): string[] {
     .map((entry) => relative(root, join(entry.parentPath, entry.name)));
 }
 
-const aliases: Record<string, string> = { '@server/': 'server/src/', '@ui/': 'ui/src/', '@store/': 'storefront/src/', '@admin/': 'admin/src/' };
+const aliases: Record<string, string> = {
+  '@server/': 'server/src/',
+  '@ui/': 'ui/src/',
+  '@store/': 'storefront/src/',
+  '@admin/': 'admin/src/',
+};
 
 /** Every module a file imports, as a path from the project root (packages are left out). */
 function importsOf(file: string): string[] {
   const text = readFileSync(join(root, file), 'utf8');
-  const specifiers = [...text.matchAll(/(?:import|export)\s[^'"]*?from\s+['"]([^'"]+)['"]|import\s+['"]([^'"]+)['"]/g)].map((m) => m[1] ?? m[2]!);
+  const specifiers = [
+    ...text.matchAll(/(?:import|export)\s[^'"]*?from\s+['"]([^'"]+)['"]|import\s+['"]([^'"]+)['"]/g),
+  ].map((m) => m[1] ?? m[2]!);
   return specifiers.flatMap((spec) => {
     const alias = Object.keys(aliases).find((prefix) => spec.startsWith(prefix));
     if (alias) return [aliases[alias] + spec.slice(alias.length)];
@@ -54,7 +61,8 @@ describe('import boundaries', () => {
   });
 
   it('when a feature imports, then never another feature', () => {
-    const featureOf = (path: string) => /^(storefront|admin)\/src\/features\/([^/]+)\//.exec(path)?.slice(1, 3).join('/');
+    const featureOf = (path: string) =>
+      /^(storefront|admin)\/src\/features\/([^/]+)\//.exec(path)?.slice(1, 3).join('/');
     const offending = appFiles.flatMap((file) => {
       const own = featureOf(file);
       if (!own) return [];

@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { readCatalogueFilter, showsKind, writeCatalogueFilter } from '../../../storefront/src/features/catalogue/model/catalogue-filter.ts';
+import {
+  readCatalogueFilter,
+  showsKind,
+  writeCatalogueFilter,
+} from '../../../storefront/src/features/catalogue/model/catalogue-filter.ts';
 
 describe('readCatalogueFilter', () => {
   it.each([
@@ -29,7 +33,15 @@ describe('writeCatalogueFilter', () => {
 
 describe('showsKind', () => {
   it('when no kind is chosen, then every section shows; otherwise only the chosen one', () => {
-    expect(['border', 'single', 'lettering'].map((kind) => showsKind({}, kind as 'border'))).toEqual([true, true, true]);
-    expect(['border', 'single', 'lettering'].map((kind) => showsKind({ kind: 'single' }, kind as 'border'))).toEqual([false, true, false]);
+    expect(['border', 'single', 'lettering'].map((kind) => showsKind({}, kind as 'border'))).toEqual([
+      true,
+      true,
+      true,
+    ]);
+    expect(['border', 'single', 'lettering'].map((kind) => showsKind({ kind: 'single' }, kind as 'border'))).toEqual([
+      false,
+      true,
+      false,
+    ]);
   });
 });

@@ -34,7 +34,9 @@ describe('the customer’s own artwork', () => {
     // The 6-month chest zone is 91.05 × 45.53 mm; a 2:1 drawing fills its height at 91.05 mm wide, so it stops at 91.0.
     const history = run(withDrawing(), 'update-artwork', { id: 'artwork', widthMm: 150 });
     expect(only(history, 'artwork')).toMatchObject({ widthMm: 91 });
-    expect(only(run(history, 'update-artwork', { id: 'artwork', widthMm: 1 }), 'artwork')).toMatchObject({ widthMm: 5 });
+    expect(only(run(history, 'update-artwork', { id: 'artwork', widthMm: 1 }), 'artwork')).toMatchObject({
+      widthMm: 5,
+    });
   });
 
   it('when a square scan goes on the wide hem, then the hem’s height limits it, and the largest hoop would limit a wider zone', () => {
@@ -58,7 +60,9 @@ describe('turning, centring and snapping', () => {
     let history = withBunny();
     history = press(press(press(history, 'r'), 'r'), 'R', { shift: true });
     expect(only(history, 'motif')).toMatchObject({ rotationDeg: 15 });
-    expect(only(run(history, 'rotate-placement', { id: 'motif', toDeg: 270 }), 'motif')).toMatchObject({ rotationDeg: -90 });
+    expect(only(run(history, 'rotate-placement', { id: 'motif', toDeg: 270 }), 'motif')).toMatchObject({
+      rotationDeg: -90,
+    });
   });
 
   it('when a border is asked to turn, then nothing changes: it follows the hem', () => {
@@ -69,7 +73,11 @@ describe('turning, centring and snapping', () => {
   it('when an item is dragged to within 3 mm of its zone’s centre line, then it lands on the line; 4 mm away it does not', () => {
     const chest = zone(0, 'chest');
     const middle = chest.xMm + chest.widthMm / 2;
-    const near = run(withBunny(), 'move-placement', { id: 'motif', centerXMm: middle + 2.9, centerYMm: chest.yMm + 20 });
+    const near = run(withBunny(), 'move-placement', {
+      id: 'motif',
+      centerXMm: middle + 2.9,
+      centerYMm: chest.yMm + 20,
+    });
     expect(only(near, 'motif')).toMatchObject({ centerXMm: Math.round(middle * 100) / 100 });
     const far = run(withBunny(), 'move-placement', { id: 'motif', centerXMm: middle + 4, centerYMm: chest.yMm + 20 });
     expect((only(far, 'motif') as { centerXMm: number }).centerXMm).toBeCloseTo(middle + 4, 2);
@@ -79,13 +87,19 @@ describe('turning, centring and snapping', () => {
     const chest = zone(0, 'chest');
     let history = run(withBunny(), 'nudge-placement', { id: 'motif', dxMm: 10, dyMm: 0 });
     history = press(history, 'c');
-    expect(only(history, 'motif')).toMatchObject({ centerXMm: Math.round((chest.xMm + chest.widthMm / 2) * 100) / 100 });
+    expect(only(history, 'motif')).toMatchObject({
+      centerXMm: Math.round((chest.xMm + chest.widthMm / 2) * 100) / 100,
+    });
   });
 });
 
 describe('thread colours', () => {
   it('when the second colour of the border is set, then only that thread changes', () => {
-    const history = run(run(freshHistory(), 'add-border', { motif: 'daisy-chain', run: 'front' }), 'set-thread-colour', { id: 'border', index: 1, thread: 'WB-140' });
+    const history = run(
+      run(freshHistory(), 'add-border', { motif: 'daisy-chain', run: 'front' }),
+      'set-thread-colour',
+      { id: 'border', index: 1, thread: 'WB-140' },
+    );
     expect(only(history, 'border')).toMatchObject({ threads: ['WB-118', 'WB-140', 'WB-103'] });
   });
 
@@ -95,7 +109,16 @@ describe('thread colours', () => {
   });
 
   it('when a name’s thread is set, then the lettering takes it', () => {
-    const history = run(run(freshHistory(), 'add-lettering', { text: 'Ada', font: 'breezy-script', letterHeightMm: 20, thread: 'WB-110' }), 'set-thread-colour', { id: 'name', index: 0, thread: 'WB-118' });
+    const history = run(
+      run(freshHistory(), 'add-lettering', {
+        text: 'Ada',
+        font: 'breezy-script',
+        letterHeightMm: 20,
+        thread: 'WB-110',
+      }),
+      'set-thread-colour',
+      { id: 'name', index: 0, thread: 'WB-118' },
+    );
     expect(only(history, 'name')).toMatchObject({ thread: 'WB-118' });
   });
 

@@ -26,7 +26,10 @@ describe('border layout', () => {
     const hem = zone(0, 'hem');
     const middleXMm = hem.xMm + hem.widthMm / 2;
     // Repeats start at the back seam, so the front's middle is where the second and third repeats meet.
-    expect(layout.repeats.map((repeat) => repeat.centerXMm - middleXMm)).toEqual([expect.closeTo(-86.5, 9), expect.closeTo(86.5, 9)]);
+    expect(layout.repeats.map((repeat) => repeat.centerXMm - middleXMm)).toEqual([
+      expect.closeTo(-86.5, 9),
+      expect.closeTo(86.5, 9),
+    ]);
     expect(layout.repeats[0]!.centerYMm).toBeCloseTo(hem.yMm + hem.heightMm - 44.45, 9);
     expect(layout.repeats[0]!.heightMm).toBeCloseTo(40 * (173 / 180), 9);
     expect(layout.band.widthMm).toBe(346);
@@ -65,7 +68,10 @@ describe('border layout on a curved hem', () => {
     ...setting,
     garment: {
       ...setting.garment,
-      sizes: setting.garment.sizes.map((size) => ({ ...size, zones: size.zones.map((candidate) => (candidate.code === 'hem' ? { ...candidate, hemCurveMm: 10 } : candidate)) })),
+      sizes: setting.garment.sizes.map((size) => ({
+        ...size,
+        zones: size.zones.map((candidate) => (candidate.code === 'hem' ? { ...candidate, hemCurveMm: 10 } : candidate)),
+      })),
     },
   };
 

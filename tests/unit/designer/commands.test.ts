@@ -4,7 +4,8 @@ import { MAX_PLACEMENTS } from '../../../storefront/src/features/designer/model/
 import { freshHistory, only, placementsOf, press, run } from './support/run.ts';
 import { zone } from './support/bishop-dress-setting.ts';
 
-const withName = (text = 'Eliza') => run(freshHistory(), 'add-lettering', { text, font: 'breezy-script', letterHeightMm: 20, thread: 'WB-110' });
+const withName = (text = 'Eliza') =>
+  run(freshHistory(), 'add-lettering', { text, font: 'breezy-script', letterHeightMm: 20, thread: 'WB-110' });
 
 describe('adding placements', () => {
   it('when a name is added, then it sits in the middle of the first zone that is not the hem, selected, in one undo step', () => {
@@ -23,14 +24,34 @@ describe('adding placements', () => {
   });
 
   it('when a second name is added, then it gets its own id', () => {
-    const history = run(withName(), 'add-lettering', { text: 'Rose', font: 'breezy-script', letterHeightMm: 12, thread: 'WB-110' });
+    const history = run(withName(), 'add-lettering', {
+      text: 'Rose',
+      font: 'breezy-script',
+      letterHeightMm: 12,
+      thread: 'WB-110',
+    });
     expect(placementsOf(history).map((placement) => placement.id)).toEqual(['name', 'name-2']);
   });
 
   it('when the lettering is blank, too long or the letters too tall for the font, then the contract is kept', () => {
-    expect(run(freshHistory(), 'add-lettering', { text: '  ', font: 'breezy-script', letterHeightMm: 20, thread: 'WB-110' }).past).toHaveLength(0);
-    expect(run(freshHistory(), 'add-lettering', { text: 'x'.repeat(41), font: 'breezy-script', letterHeightMm: 20, thread: 'WB-110' }).past).toHaveLength(0);
-    const tall = run(freshHistory(), 'add-lettering', { text: 'Eli', font: 'breezy-script', letterHeightMm: 90, thread: 'WB-110' });
+    expect(
+      run(freshHistory(), 'add-lettering', { text: '  ', font: 'breezy-script', letterHeightMm: 20, thread: 'WB-110' })
+        .past,
+    ).toHaveLength(0);
+    expect(
+      run(freshHistory(), 'add-lettering', {
+        text: 'x'.repeat(41),
+        font: 'breezy-script',
+        letterHeightMm: 20,
+        thread: 'WB-110',
+      }).past,
+    ).toHaveLength(0);
+    const tall = run(freshHistory(), 'add-lettering', {
+      text: 'Eli',
+      font: 'breezy-script',
+      letterHeightMm: 90,
+      thread: 'WB-110',
+    });
     expect(only(tall, 'name')).toMatchObject({ letterHeightMm: 60 });
   });
 
@@ -55,7 +76,8 @@ describe('adding placements', () => {
 
   it('when the design already holds the most placements the contract allows, then nothing more is added', () => {
     let history = freshHistory();
-    for (let i = 0; i < MAX_PLACEMENTS + 2; i += 1) history = run(history, 'add-motif', { motif: 'sitting-bunny', scalePct: 80 });
+    for (let i = 0; i < MAX_PLACEMENTS + 2; i += 1)
+      history = run(history, 'add-motif', { motif: 'sitting-bunny', scalePct: 80 });
     expect(placementsOf(history)).toHaveLength(MAX_PLACEMENTS);
   });
 });
@@ -113,7 +135,9 @@ describe('moving placements', () => {
     expect(only(history, 'border')).toMatchObject({ hemOffsetMm: 45.45 });
     for (let i = 0; i < 20; i += 1) history = press(history, 'ArrowUp', { shift: true });
     const hem = zone(0, 'hem');
-    expect(only(history, 'border')).toMatchObject({ hemOffsetMm: Math.round((hem.heightMm - (40 * 173) / 180 / 2) * 100) / 100 });
+    expect(only(history, 'border')).toMatchObject({
+      hemOffsetMm: Math.round((hem.heightMm - (40 * 173) / 180 / 2) * 100) / 100,
+    });
   });
 });
 
@@ -124,11 +148,19 @@ describe('keeping items inside their zone', () => {
     history = run(history, 'update-lettering', { id: 'name', letterHeightMm: 24 });
     const chest = zone(0, 'chest');
     const widthMm = 5 * 24 * 0.6;
-    expect(only(history, 'name')).toMatchObject({ letterHeightMm: 24, centerXMm: Math.round((chest.xMm + chest.widthMm - widthMm / 2) * 100) / 100 });
+    expect(only(history, 'name')).toMatchObject({
+      letterHeightMm: 24,
+      centerXMm: Math.round((chest.xMm + chest.widthMm - widthMm / 2) * 100) / 100,
+    });
   });
 
   it('when an item is bigger than its zone, then it is centred in it', () => {
-    const history = run(freshHistory(), 'add-lettering', { text: 'Elizabeth Rose', font: 'breezy-script', letterHeightMm: 30, thread: 'WB-110' });
+    const history = run(freshHistory(), 'add-lettering', {
+      text: 'Elizabeth Rose',
+      font: 'breezy-script',
+      letterHeightMm: 30,
+      thread: 'WB-110',
+    });
     const chest = zone(0, 'chest');
     expect(only(history, 'name')).toMatchObject({ centerXMm: Math.round((chest.xMm + chest.widthMm / 2) * 100) / 100 });
   });
@@ -136,7 +168,11 @@ describe('keeping items inside their zone', () => {
   it('when a name moves to another zone, then it starts from that zone’s middle', () => {
     const history = run(withName(), 'update-lettering', { id: 'name', zone: 'hem' });
     const hem = zone(0, 'hem');
-    expect(only(history, 'name')).toMatchObject({ zone: 'hem', centerXMm: expect.closeTo(hem.xMm + hem.widthMm / 2, 1), centerYMm: expect.closeTo(hem.yMm + hem.heightMm / 2, 1) });
+    expect(only(history, 'name')).toMatchObject({
+      zone: 'hem',
+      centerXMm: expect.closeTo(hem.xMm + hem.widthMm / 2, 1),
+      centerYMm: expect.closeTo(hem.yMm + hem.heightMm / 2, 1),
+    });
   });
 });
 
@@ -193,7 +229,10 @@ describe('size and colour', () => {
     history = run(history, 'change-size', { sizeId: 302 });
     expect(history.present.sizeId).toBe(302);
     const chest = zone(1, 'chest');
-    expect(only(history, 'name')).toMatchObject({ centerXMm: expect.closeTo(chest.xMm + chest.widthMm / 2, 1), centerYMm: expect.closeTo(chest.yMm + chest.heightMm / 2, 1) });
+    expect(only(history, 'name')).toMatchObject({
+      centerXMm: expect.closeTo(chest.xMm + chest.widthMm / 2, 1),
+      centerYMm: expect.closeTo(chest.yMm + chest.heightMm / 2, 1),
+    });
     expect(only(history, 'border')).not.toHaveProperty('count');
     history = run(history, 'undo', undefined);
     expect(history.present.sizeId).toBe(301);

@@ -3,7 +3,9 @@ import { draftOf, restoreDraft } from '../../../storefront/src/features/designer
 import { bishopDress } from './support/bishop-dress-setting.ts';
 import { freshHistory, run } from './support/run.ts';
 
-const designed = () => run(freshHistory(), 'add-lettering', { text: 'Eliza', font: 'breezy-script', letterHeightMm: 20, thread: 'WB-110' }).present;
+const designed = () =>
+  run(freshHistory(), 'add-lettering', { text: 'Eliza', font: 'breezy-script', letterHeightMm: 20, thread: 'WB-110' })
+    .present;
 
 describe('the draft kept through sign-in', () => {
   it('when a kept draft comes back, then it is the same design, with nothing selected', () => {

@@ -11,7 +11,9 @@ import { setting, zone } from './support/bishop-dress-setting.ts';
 
 afterEach(cleanup);
 // user-event walks radio groups with CSS.escape, which jsdom does not provide.
-globalThis.CSS ??= { escape: (value: string) => value.replace(/[^\w-]/g, (character) => `\\${character}`) } as typeof CSS;
+globalThis.CSS ??= {
+  escape: (value: string) => value.replace(/[^\w-]/g, (character) => `\\${character}`),
+} as typeof CSS;
 
 /** The list beside the canvas, working on the real designer state and commands, for the 6-month bishop dress. */
 function Designer({ document }: { document: DesignDocument }) {
@@ -25,9 +27,28 @@ function Designer({ document }: { document: DesignDocument }) {
 
 const chest = zone(0, 'chest');
 const middle = { centerXMm: chest.xMm + chest.widthMm / 2, centerYMm: chest.yMm + chest.heightMm / 2 };
-const bunnyAt = (scalePct: number): DesignDocument => ({ version: 1, placements: [{ id: 'motif', kind: 'motif', zone: 'chest', ...middle, rotationDeg: 0, motif: 'sitting-bunny', scalePct, threads: ['WB-118'] }] });
+const bunnyAt = (scalePct: number): DesignDocument => ({
+  version: 1,
+  placements: [
+    {
+      id: 'motif',
+      kind: 'motif',
+      zone: 'chest',
+      ...middle,
+      rotationDeg: 0,
+      motif: 'sitting-bunny',
+      scalePct,
+      threads: ['WB-118'],
+    },
+  ],
+});
 const bunny = bunnyAt(80);
-const drawing: DesignDocument = { version: 1, placements: [{ id: 'artwork', kind: 'artwork', zone: 'chest', ...middle, rotationDeg: 0, artworkUploadId: 41, widthMm: 40 }] };
+const drawing: DesignDocument = {
+  version: 1,
+  placements: [
+    { id: 'artwork', kind: 'artwork', zone: 'chest', ...middle, rotationDeg: 0, artworkUploadId: 41, widthMm: 40 },
+  ],
+};
 
 /** Moves the focus with Tab until it reaches the element, as a keyboard user would, and fails if it never does. */
 async function tabTo(user: ReturnType<typeof userEvent.setup>, element: HTMLElement) {
@@ -45,7 +66,11 @@ describe('the placement list, by keyboard alone', () => {
 
     await tabTo(user, within(list()).getByRole('button', { name: /^Sitting bunny/ }));
     await user.keyboard('{Enter}');
-    expect(within(list()).getByRole('button', { name: /^Sitting bunny/ }).getAttribute('aria-expanded')).toBe('true');
+    expect(
+      within(list())
+        .getByRole('button', { name: /^Sitting bunny/ })
+        .getAttribute('aria-expanded'),
+    ).toBe('true');
     expect(where()).toBe('In “Below the smocking”: centred side to side, centred top to bottom.');
 
     // The bunny is taller than the zone, so it stays centred top to bottom; side to side it moves.
@@ -109,7 +134,11 @@ describe('the placement list, by keyboard alone', () => {
     const width = within(list()).getByRole('spinbutton', { name: 'Width in mm' });
     await tabTo(user, width);
     await user.keyboard('{Control>}a{/Control}72{Enter}');
-    expect(within(list()).getByRole('slider', { name: /^Width/ }).getAttribute('aria-valuetext')).toBe('72 mm · 2 ¹³⁄₁₆ in wide');
+    expect(
+      within(list())
+        .getByRole('slider', { name: /^Width/ })
+        .getAttribute('aria-valuetext'),
+    ).toBe('72 mm · 2 ¹³⁄₁₆ in wide');
     await user.keyboard('{Control>}a{/Control}500{Enter}');
     // The 6-month chest zone is 91.05 × 45.53 mm: a drawing twice as wide as tall stops at 91 mm.
     expect((width as HTMLInputElement).value).toBe('91');

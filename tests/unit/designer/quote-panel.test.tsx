@@ -12,7 +12,21 @@ const requestFor = (widthMm: number): QuotePreviewRequest => ({
   sizeId: 301,
   quantity: 1,
   isRush: false,
-  document: { version: 1, placements: [{ id: 'drawing', kind: 'artwork', zone: 'chest', centerXMm: 209, centerYMm: 105, rotationDeg: 0, artworkUploadId: 41, widthMm }] },
+  document: {
+    version: 1,
+    placements: [
+      {
+        id: 'drawing',
+        kind: 'artwork',
+        zone: 'chest',
+        centerXMm: 209,
+        centerYMm: 105,
+        rotationDeg: 0,
+        artworkUploadId: 41,
+        widthMm,
+      },
+    ],
+  },
 });
 
 function answer(totalCents: number, overrides: Partial<QuotePreviewResponse> = {}): QuotePreviewResponse {
@@ -20,7 +34,12 @@ function answer(totalCents: number, overrides: Partial<QuotePreviewResponse> = {
     quote: {
       lines: [
         { code: 'garment', label: 'Bishop dress, size 6 months × 1 garment', amountCents: 3400 },
-        { code: 'stitching', label: 'Your artwork: 4,210 stitches × 1 garment', amountCents: totalCents - 3400 - 2500, placementId: 'drawing' },
+        {
+          code: 'stitching',
+          label: 'Your artwork: 4,210 stitches × 1 garment',
+          amountCents: totalCents - 3400 - 2500,
+          placementId: 'drawing',
+        },
         { code: 'artwork-setup', label: 'Artwork setup: 1 design, once per order', amountCents: 2500 },
       ],
       subtotalCents: totalCents,
@@ -29,15 +48,35 @@ function answer(totalCents: number, overrides: Partial<QuotePreviewResponse> = {
       currency: 'USD',
       ruleSetVersion: 1,
     },
-    placements: [{ id: 'drawing', label: 'Your artwork', kind: 'artwork', stitches: 4210, colourChanges: 2, hoopings: 1, widthMm: 60, heightMm: 30 }],
+    placements: [
+      {
+        id: 'drawing',
+        label: 'Your artwork',
+        kind: 'artwork',
+        stitches: 4210,
+        colourChanges: 2,
+        hoopings: 1,
+        widthMm: 60,
+        heightMm: 30,
+      },
+    ],
     runMinutes: { totalMinutes: 20, items: [] },
     stabilizer: { backing: 'cutaway', topping: null, density: 'medium', messages: [] },
-    cautions: [{ code: 'caution.small-parts', severity: 'warning', title: 'Nothing that can come off', text: 'For a child under 3, add nothing that can detach.', appliesWhen: 'under 3' }],
+    cautions: [
+      {
+        code: 'caution.small-parts',
+        severity: 'warning',
+        title: 'Nothing that can come off',
+        text: 'For a child under 3, add nothing that can detach.',
+        appliesWhen: 'under 3',
+      },
+    ],
     ...overrides,
   };
 }
 
-const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+const json = (status: number, body: unknown) =>
+  new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
 
 let fetchMock: ReturnType<typeof vi.fn>;
 beforeEach(() => {
@@ -63,7 +102,11 @@ describe('the quote panel', () => {
     fetchMock.mockResolvedValueOnce(json(200, answer(7400)));
     renderPanel(requestFor(60));
     const table = await within(panel()).findByRole('table', { name: 'How the price is made up' });
-    expect(within(table).getAllByRole('row').map((row) => row.textContent)).toEqual([
+    expect(
+      within(table)
+        .getAllByRole('row')
+        .map((row) => row.textContent),
+    ).toEqual([
       'Bishop dress, size 6 months × 1 garment$34.00',
       'Your artwork: 4,210 stitches × 1 garment$15.00',
       'Artwork setup: 1 design, once per order$25.00',
@@ -96,20 +139,42 @@ describe('the quote panel', () => {
 
   it('when the server refuses the design, then its reason shows in place of the price', async () => {
     fetchMock.mockResolvedValueOnce(
-      json(400, { error: { kind: 'invalid', message: 'Your artwork at 250 mm wide comes to 250 × 250 mm, bigger than the 200 × 300 mm sewing field of our largest hoop; make it smaller.' } }),
+      json(400, {
+        error: {
+          kind: 'invalid',
+          message:
+            'Your artwork at 250 mm wide comes to 250 × 250 mm, bigger than the 200 × 300 mm sewing field of our largest hoop; make it smaller.',
+        },
+      }),
     );
     renderPanel(requestFor(250));
-    expect((await within(panel()).findByRole('alert')).textContent).toContain('bigger than the 200 × 300 mm sewing field of our largest hoop');
+    expect((await within(panel()).findByRole('alert')).textContent).toContain(
+      'bigger than the 200 × 300 mm sewing field of our largest hoop',
+    );
     expect(within(panel()).queryByRole('table')).toBeNull();
   });
 
   it('when a picture still has to be digitized, then the panel says the studio will confirm the price', async () => {
     const provisional = answer(5700, {
-      placements: [{ id: 'drawing', label: 'Your artwork', kind: 'artwork', stitches: 0, colourChanges: 0, hoopings: 1, widthMm: 60, heightMm: 60, isPriceProvisional: true }],
+      placements: [
+        {
+          id: 'drawing',
+          label: 'Your artwork',
+          kind: 'artwork',
+          stitches: 0,
+          colourChanges: 0,
+          hoopings: 1,
+          widthMm: 60,
+          heightMm: 60,
+          isPriceProvisional: true,
+        },
+      ],
     });
     fetchMock.mockResolvedValueOnce(json(200, provisional));
     renderPanel(requestFor(60));
-    expect(await within(panel()).findByText(/The studio will confirm the price after digitizing your picture/)).toBeTruthy();
+    expect(
+      await within(panel()).findByText(/The studio will confirm the price after digitizing your picture/),
+    ).toBeTruthy();
     expect(panel().textContent).toContain('Your artwork: stitches counted once the studio has digitized it, 1 hooping');
   });
 

@@ -1,9 +1,20 @@
 import { describe, expect, it } from 'vitest';
-import { fitView, mm, pointToMm, pointToPx, px, toMm, toPx } from '../../../storefront/src/features/designer/model/view.ts';
+import {
+  fitView,
+  mm,
+  pointToMm,
+  pointToPx,
+  px,
+  toMm,
+  toPx,
+} from '../../../storefront/src/features/designer/model/view.ts';
 
 describe('design view', () => {
   it('when the 6-month bishop dress (418.8 × 427.9 mm) is fitted to a 600 × 900 px box, then the width decides the scale', () => {
-    const view = fitView({ widthMm: mm(460 * (346 / 380)), heightMm: mm(470 * (346 / 380)) }, { widthPx: px(600), heightPx: px(900) });
+    const view = fitView(
+      { widthMm: mm(460 * (346 / 380)), heightMm: mm(470 * (346 / 380)) },
+      { widthPx: px(600), heightPx: px(900) },
+    );
     expect(view.pxPerMm).toBeCloseTo(600 / 418.84, 3);
     expect(view.widthPx).toBe(600);
     expect(view.heightPx).toBe(Math.floor(470 * (346 / 380) * view.pxPerMm));

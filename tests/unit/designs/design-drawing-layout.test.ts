@@ -1,16 +1,39 @@
 import { describe, expect, it } from 'vitest';
 import type { DesignDocument } from '../../../server/src/contracts/designs.ts';
-import { drawingOf, layoutDesignDrawing, type DrawingCatalogue } from '../../../storefront/src/features/designs/model/design-drawing-layout.ts';
-import { bishopDress, breezyScript, daisyChain, sittingBunny, sixMonths } from '../designer/support/bishop-dress-setting.ts';
+import {
+  drawingOf,
+  layoutDesignDrawing,
+  type DrawingCatalogue,
+} from '../../../storefront/src/features/designs/model/design-drawing-layout.ts';
+import {
+  bishopDress,
+  breezyScript,
+  daisyChain,
+  sittingBunny,
+  sixMonths,
+} from '../designer/support/bishop-dress-setting.ts';
 
 const threads = [
   { code: 'WB-118', name: 'Leaf', hex: '#5A8A3C' },
   { code: 'WB-110', name: 'Rose', hex: '#C0506A' },
 ];
-const catalogue: DrawingCatalogue = { garment: bishopDress, motifs: [daisyChain, sittingBunny], fonts: [breezyScript], threads };
+const catalogue: DrawingCatalogue = {
+  garment: bishopDress,
+  motifs: [daisyChain, sittingBunny],
+  fonts: [breezyScript],
+  threads,
+};
 
 const documentOf = (...placements: DesignDocument['placements']): DesignDocument => ({ version: 1, placements });
-const daisyLoop: DesignDocument['placements'][number] = { id: 'hem', kind: 'border', zone: 'hem', motif: 'daisy-chain', run: 'circumference', hemOffsetMm: 44.45, threads: ['WB-118', 'WB-404'] };
+const daisyLoop: DesignDocument['placements'][number] = {
+  id: 'hem',
+  kind: 'border',
+  zone: 'hem',
+  motif: 'daisy-chain',
+  run: 'circumference',
+  hemOffsetMm: 44.45,
+  threads: ['WB-118', 'WB-404'],
+};
 
 describe('layoutDesignDrawing', () => {
   it('when a border runs all the way round, then only the repeats on the front panel are drawn, on the centre line above the hem', () => {
@@ -39,13 +62,56 @@ describe('layoutDesignDrawing', () => {
       catalogue,
       sixMonths.id,
       documentOf(
-        { id: 'bunny', kind: 'motif', zone: 'chest', centerXMm: 200, centerYMm: 100, rotationDeg: 10, motif: 'sitting-bunny', scalePct: 50, threads: ['WB-118'] },
-        { id: 'name', kind: 'lettering', zone: 'chest', centerXMm: 210, centerYMm: 110, rotationDeg: 0, text: 'Mae', font: 'breezy-script', letterHeightMm: 20, thread: 'WB-110' },
+        {
+          id: 'bunny',
+          kind: 'motif',
+          zone: 'chest',
+          centerXMm: 200,
+          centerYMm: 100,
+          rotationDeg: 10,
+          motif: 'sitting-bunny',
+          scalePct: 50,
+          threads: ['WB-118'],
+        },
+        {
+          id: 'name',
+          kind: 'lettering',
+          zone: 'chest',
+          centerXMm: 210,
+          centerYMm: 110,
+          rotationDeg: 0,
+          text: 'Mae',
+          font: 'breezy-script',
+          letterHeightMm: 20,
+          thread: 'WB-110',
+        },
       ),
     )!;
     expect(layout.placements).toEqual([
-      { kind: 'motif', id: 'bunny', label: 'Motif: Sitting bunny', svg: sittingBunny.svg, threadHexes: ['#5A8A3C'], widthMm: 18, heightMm: 35.5, centerXMm: 200, centerYMm: 100, rotationDeg: 10 },
-      { kind: 'lettering', id: 'name', label: 'Name “Mae” in Breezy Script', text: 'Mae', fontFamily: 'Pacifico', letterHeightMm: 20, hex: '#C0506A', centerXMm: 210, centerYMm: 110, rotationDeg: 0 },
+      {
+        kind: 'motif',
+        id: 'bunny',
+        label: 'Motif: Sitting bunny',
+        svg: sittingBunny.svg,
+        threadHexes: ['#5A8A3C'],
+        widthMm: 18,
+        heightMm: 35.5,
+        centerXMm: 200,
+        centerYMm: 100,
+        rotationDeg: 10,
+      },
+      {
+        kind: 'lettering',
+        id: 'name',
+        label: 'Name “Mae” in Breezy Script',
+        text: 'Mae',
+        fontFamily: 'Pacifico',
+        letterHeightMm: 20,
+        hex: '#C0506A',
+        centerXMm: 210,
+        centerYMm: 110,
+        rotationDeg: 0,
+      },
     ]);
   });
 
@@ -55,8 +121,29 @@ describe('layoutDesignDrawing', () => {
       bishopDress.sizes[2]!.id,
       documentOf(
         daisyLoop,
-        { id: 'gone', kind: 'motif', zone: 'chest', centerXMm: 1, centerYMm: 1, rotationDeg: 0, motif: 'retired-owl', scalePct: 100, threads: ['WB-118'] },
-        { id: 'font', kind: 'lettering', zone: 'chest', centerXMm: 1, centerYMm: 1, rotationDeg: 0, text: 'Bo', font: 'retired-face', letterHeightMm: 10, thread: 'WB-110' },
+        {
+          id: 'gone',
+          kind: 'motif',
+          zone: 'chest',
+          centerXMm: 1,
+          centerYMm: 1,
+          rotationDeg: 0,
+          motif: 'retired-owl',
+          scalePct: 100,
+          threads: ['WB-118'],
+        },
+        {
+          id: 'font',
+          kind: 'lettering',
+          zone: 'chest',
+          centerXMm: 1,
+          centerYMm: 1,
+          rotationDeg: 0,
+          text: 'Bo',
+          font: 'retired-face',
+          letterHeightMm: 10,
+          thread: 'WB-110',
+        },
       ),
     )!;
     expect(layout.placements.map((placement) => [placement.kind, placement.label])).toEqual([
@@ -72,9 +159,14 @@ describe('layoutDesignDrawing', () => {
 });
 
 describe('drawingOf', () => {
-  it('when the design\'s garment is in the lists, then it comes with its drawing; otherwise neither', () => {
+  it("when the design's garment is in the lists, then it comes with its drawing; otherwise neither", () => {
     const lists = { garments: [bishopDress], motifs: catalogue.motifs, fonts: catalogue.fonts, threads };
-    expect(drawingOf(lists, { garmentId: bishopDress.id, sizeId: sixMonths.id, document: documentOf() })).toMatchObject({ garment: bishopDress, layout: { placements: [] } });
-    expect(drawingOf(lists, { garmentId: 42, sizeId: sixMonths.id, document: documentOf() })).toEqual({ garment: undefined, layout: undefined });
+    expect(drawingOf(lists, { garmentId: bishopDress.id, sizeId: sixMonths.id, document: documentOf() })).toMatchObject(
+      { garment: bishopDress, layout: { placements: [] } },
+    );
+    expect(drawingOf(lists, { garmentId: 42, sizeId: sixMonths.id, document: documentOf() })).toEqual({
+      garment: undefined,
+      layout: undefined,
+    });
   });
 });

@@ -1,25 +1,42 @@
 import { describe, expect, it } from 'vitest';
-import { estimateStitches, MAX_LETTERING_CHARACTERS, type GlyphOutlineSource } from '../../../server/src/engine/index.ts';
+import {
+  estimateStitches,
+  MAX_LETTERING_CHARACTERS,
+  type GlyphOutlineSource,
+} from '../../../server/src/engine/index.ts';
 import { loadFontkitOutlines, loadOpentypeFont, loadShippedFont, SHIPPED_FONTS } from './support/load-font.ts';
 
 describe('estimateStitches: lettering', () => {
-  it.each(SHIPPED_FONTS)('when "Amelia" is set in %s at 20 mm, then it is satin lettering of a plausible size', (name) => {
-    const estimate = estimateStitches({ kind: 'lettering', text: 'Amelia', font: loadShippedFont(name), letterHeightMm: 20 });
-    expect(estimate.ok).toBe(true);
-    if (!estimate.ok) return;
-    expect(estimate.byType.satin).toBeGreaterThan(0);
-    expect(estimate.byType.run).toBe(0);
-    expect(estimate.colorChanges).toBe(0);
-    // Six letters sized by a 20 mm capital H: wider than tall, and about as tall as the H (script capitals vary).
-    expect(estimate.widthMm).toBeGreaterThan(40);
-    expect(estimate.widthMm).toBeLessThan(120);
-    expect(estimate.heightMm).toBeGreaterThan(14);
-    expect(estimate.heightMm).toBeLessThan(35);
-    expect(estimate.stitches).toBe(estimate.byType.satin + estimate.byType.fill + estimate.byType.underlay);
-  });
+  it.each(SHIPPED_FONTS)(
+    'when "Amelia" is set in %s at 20 mm, then it is satin lettering of a plausible size',
+    (name) => {
+      const estimate = estimateStitches({
+        kind: 'lettering',
+        text: 'Amelia',
+        font: loadShippedFont(name),
+        letterHeightMm: 20,
+      });
+      expect(estimate.ok).toBe(true);
+      if (!estimate.ok) return;
+      expect(estimate.byType.satin).toBeGreaterThan(0);
+      expect(estimate.byType.run).toBe(0);
+      expect(estimate.colorChanges).toBe(0);
+      // Six letters sized by a 20 mm capital H: wider than tall, and about as tall as the H (script capitals vary).
+      expect(estimate.widthMm).toBeGreaterThan(40);
+      expect(estimate.widthMm).toBeLessThan(120);
+      expect(estimate.heightMm).toBeGreaterThan(14);
+      expect(estimate.heightMm).toBeLessThan(35);
+      expect(estimate.stitches).toBe(estimate.byType.satin + estimate.byType.fill + estimate.byType.underlay);
+    },
+  );
 
   it('when the capital H is measured, then its stitched height is the letter height asked for', () => {
-    const estimate = estimateStitches({ kind: 'lettering', text: 'H', font: loadShippedFont('poppins'), letterHeightMm: 25 });
+    const estimate = estimateStitches({
+      kind: 'lettering',
+      text: 'H',
+      font: loadShippedFont('poppins'),
+      letterHeightMm: 25,
+    });
     expect(estimate.ok && estimate.heightMm).toBeCloseTo(25, 3);
   });
 
@@ -33,14 +50,24 @@ describe('estimateStitches: lettering', () => {
   });
 
   it('when letters are very tall, then their wide strokes become fill', () => {
-    const estimate = estimateStitches({ kind: 'lettering', text: 'O', font: loadShippedFont('poppins'), letterHeightMm: 120 });
+    const estimate = estimateStitches({
+      kind: 'lettering',
+      text: 'O',
+      font: loadShippedFont('poppins'),
+      letterHeightMm: 120,
+    });
     expect(estimate.ok && estimate.byType.fill).toBeGreaterThan(0);
   });
 
   it('an opentype.js Font is accepted as it is, and agrees with a fontkit layout of the same font', () => {
     const font: GlyphOutlineSource = loadOpentypeFont('poppins');
     const viaOpentype = estimateStitches({ kind: 'lettering', text: 'Olivia', font, letterHeightMm: 18 });
-    const viaFontkit = estimateStitches({ kind: 'lettering', text: 'Olivia', font: loadFontkitOutlines('poppins'), letterHeightMm: 18 });
+    const viaFontkit = estimateStitches({
+      kind: 'lettering',
+      text: 'Olivia',
+      font: loadFontkitOutlines('poppins'),
+      letterHeightMm: 18,
+    });
     if (!viaOpentype.ok || !viaFontkit.ok) throw new Error('estimate failed');
     expect(Math.abs(viaOpentype.stitches - viaFontkit.stitches) / viaFontkit.stitches).toBeLessThan(0.01);
   });

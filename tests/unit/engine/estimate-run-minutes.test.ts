@@ -3,7 +3,13 @@ import { DEFAULT_MACHINE_SETTINGS, estimateRunMinutes } from '../../../server/sr
 
 describe('estimateRunMinutes', () => {
   it('when a job is itemized, then sewing, stops, hoopings and setup add up to the total', () => {
-    const machine = { stitchesPerMinute: 700, minutesPerColorChange: 1, minutesPerTrim: 0.25, minutesPerHooping: 5, setupMinutes: 10 };
+    const machine = {
+      stitchesPerMinute: 700,
+      minutesPerColorChange: 1,
+      minutesPerTrim: 0.25,
+      minutesPerHooping: 5,
+      setupMinutes: 10,
+    };
     const estimate = estimateRunMinutes({ stitches: 14_000, colorChanges: 6, trims: 8, hoopings: 4, machine });
     expect(estimate.ok).toBe(true);
     if (!estimate.ok) return;
@@ -22,7 +28,10 @@ describe('estimateRunMinutes', () => {
   it('when no machine is given, then the documented defaults apply', () => {
     const estimate = estimateRunMinutes({ stitches: 7000, colorChanges: 0, hoopings: 1 });
     const { stitchesPerMinute, minutesPerHooping, setupMinutes } = DEFAULT_MACHINE_SETTINGS;
-    expect(estimate.ok && estimate.totalMinutes).toBeCloseTo(7000 / stitchesPerMinute + minutesPerHooping + setupMinutes, 12);
+    expect(estimate.ok && estimate.totalMinutes).toBeCloseTo(
+      7000 / stitchesPerMinute + minutesPerHooping + setupMinutes,
+      12,
+    );
   });
 
   it.each([

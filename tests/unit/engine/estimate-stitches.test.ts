@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_STITCH_SETTINGS, estimateBorderStitches, estimateStitches, MM_PER_INCH, type StitchEstimate } from '../../../server/src/engine/index.ts';
+import {
+  DEFAULT_STITCH_SETTINGS,
+  estimateBorderStitches,
+  estimateStitches,
+  MM_PER_INCH,
+  type StitchEstimate,
+} from '../../../server/src/engine/index.ts';
 
 function svg(body: string, root = 'width="100mm" height="100mm" viewBox="0 0 100 100"'): string {
   return `<svg xmlns="http://www.w3.org/2000/svg" ${root}>${body}</svg>`;
@@ -12,7 +18,13 @@ function estimateSvg(svgText: string): StitchEstimate {
 }
 
 describe('estimateStitches: catalogue motifs', () => {
-  const motif = { stitchCount: 10_000, mix: { run: 20, satin: 30, fill: 50 }, colorChanges: 3, widthMm: 80, heightMm: 60 };
+  const motif = {
+    stitchCount: 10_000,
+    mix: { run: 20, satin: 30, fill: 50 },
+    colorChanges: 3,
+    widthMm: 80,
+    heightMm: 60,
+  };
 
   it('when a motif is stitched at 100 %, then the measured count and mix come back unchanged', () => {
     expect(estimateStitches({ kind: 'catalogue', motif, scale: 1 })).toMatchObject({
@@ -27,7 +39,13 @@ describe('estimateStitches: catalogue motifs', () => {
 
   it('when a motif is halved, then running and satin stitches halve and fill stitches quarter (length vs area rule)', () => {
     const half = estimateStitches({ kind: 'catalogue', motif, scale: 0.5 });
-    expect(half).toMatchObject({ ok: true, byType: { run: 1000, satin: 1500, fill: 1250 }, stitches: 3750, widthMm: 40, heightMm: 30 });
+    expect(half).toMatchObject({
+      ok: true,
+      byType: { run: 1000, satin: 1500, fill: 1250 },
+      stitches: 3750,
+      widthMm: 40,
+      heightMm: 30,
+    });
   });
 
   it.each([
@@ -42,7 +60,9 @@ describe('estimateStitches: catalogue motifs', () => {
 
 describe('estimateStitches: SVG artwork', () => {
   it('a filled 1 in × 1 in square gives 710–1,030 top stitches per in² (seminar table, chholderby.com "Estimating Stitches")', () => {
-    const estimate = estimateSvg(svg('<rect width="1" height="1" fill="#204080"/>', 'width="1in" height="1in" viewBox="0 0 1 1"'));
+    const estimate = estimateSvg(
+      svg('<rect width="1" height="1" fill="#204080"/>', 'width="1in" height="1in" viewBox="0 0 1 1"'),
+    );
     // 645.16 mm² / (0.2 mm rows × 4 mm stitches) = 806.45 → 807, before underlay.
     expect(estimate.byType.fill).toBe(807);
     expect(estimate.byType.fill).toBeGreaterThanOrEqual(710);
@@ -56,7 +76,9 @@ describe('estimateStitches: SVG artwork', () => {
     'a 10 mm satin column %s mm wide is within 10 %% of 44–50 stitches per cm (seminar table, chholderby.com "Estimating Stitches")',
     (widthMm) => {
       const asShape = estimateSvg(svg(`<rect x="10" y="10" width="10" height="${widthMm}" fill="#d04040"/>`));
-      const asStroke = estimateSvg(svg(`<line x1="10" y1="10" x2="20" y2="10" stroke="#d04040" stroke-width="${widthMm}"/>`));
+      const asStroke = estimateSvg(
+        svg(`<line x1="10" y1="10" x2="20" y2="10" stroke="#d04040" stroke-width="${widthMm}"/>`),
+      );
       for (const estimate of [asShape, asStroke]) {
         const columnLengthCm = 1;
         const perCm = estimate.byType.satin / columnLengthCm;
@@ -70,29 +92,43 @@ describe('estimateStitches: SVG artwork', () => {
   it('when a thin stroke is drawn, then it is running stitch at 2.5 mm; data-stitch="triple" triples it', () => {
     const single = estimateSvg(svg('<path d="M0 50 H100" stroke="#000" stroke-width="0.3" fill="none"/>'));
     expect(single.byType).toEqual({ run: 40, satin: 0, fill: 0, underlay: 0 });
-    const triple = estimateSvg(svg('<g data-stitch="triple"><path d="M0 50 H100" stroke="#000" stroke-width="0.3" fill="none"/></g>'));
+    const triple = estimateSvg(
+      svg('<g data-stitch="triple"><path d="M0 50 H100" stroke="#000" stroke-width="0.3" fill="none"/></g>'),
+    );
     expect(triple.byType.run).toBe(120);
-    const bean = estimateSvg(svg('<polyline points="0,0 60,80" data-stitch="bean" stroke="#000" fill="none" stroke-width="0.3"/>'));
+    const bean = estimateSvg(
+      svg('<polyline points="0,0 60,80" data-stitch="bean" stroke="#000" fill="none" stroke-width="0.3"/>'),
+    );
     expect(bean.byType.run).toBe(120);
   });
 
   it('when a group transform scales the artwork, then lengths and stroke widths scale with it', () => {
-    const scaled = estimateSvg(svg('<g transform="translate(5 5) scale(2)"><path d="M0 0 H25" stroke="#000" stroke-width="0.6" fill="none"/></g>'));
+    const scaled = estimateSvg(
+      svg(
+        '<g transform="translate(5 5) scale(2)"><path d="M0 0 H25" stroke="#000" stroke-width="0.6" fill="none"/></g>',
+      ),
+    );
     // 50 mm long, 1.2 mm wide after the scale: a satin column, 50 / 0.4 × 2 = 250.
     expect(scaled.byType.satin).toBe(250);
-    const rotated = estimateSvg(svg('<g transform="rotate(30 50 50)"><path d="M0 50 H100" stroke="#000" stroke-width="0.3" fill="none"/></g>'));
+    const rotated = estimateSvg(
+      svg('<g transform="rotate(30 50 50)"><path d="M0 50 H100" stroke="#000" stroke-width="0.3" fill="none"/></g>'),
+    );
     expect(rotated.byType.run).toBe(40);
   });
 
   it('when style="" and attributes disagree, then the style declaration wins', () => {
-    const estimate = estimateSvg(svg('<rect width="50" height="50" fill="red" style="fill: none; stroke: #123456; stroke-width: 0.2"/>'));
+    const estimate = estimateSvg(
+      svg('<rect width="50" height="50" fill="red" style="fill: none; stroke: #123456; stroke-width: 0.2"/>'),
+    );
     expect(estimate.byType.fill).toBe(0);
     expect(estimate.byType.run).toBe(Math.ceil(200 / DEFAULT_STITCH_SETTINGS.runStitchLengthMm));
   });
 
   it('when shapes share a colour in a row, then they form one colour block with trims between them', () => {
     const estimate = estimateSvg(
-      svg('<circle cx="20" cy="20" r="10" fill="#ff0000"/><circle cx="50" cy="20" r="10" fill="red"/><ellipse cx="80" cy="20" rx="10" ry="5" fill="#0000ff"/>'),
+      svg(
+        '<circle cx="20" cy="20" r="10" fill="#ff0000"/><circle cx="50" cy="20" r="10" fill="red"/><ellipse cx="80" cy="20" rx="10" ry="5" fill="#0000ff"/>',
+      ),
     );
     expect(estimate.colorChanges).toBe(1);
     expect(estimate.trims).toBe(1);
@@ -100,25 +136,43 @@ describe('estimateStitches: SVG artwork', () => {
 
   it('when shapes are hidden or in <defs>, then they are not stitched; text and images are noted, not guessed', () => {
     const estimate = estimateSvg(
-      svg('<defs><rect width="90" height="90"/></defs><rect width="90" height="90" display="none"/><text x="5" y="5">Hi</text><image href="x.png"/><rect width="10" height="1"/>'),
+      svg(
+        '<defs><rect width="90" height="90"/></defs><rect width="90" height="90" display="none"/><text x="5" y="5">Hi</text><image href="x.png"/><rect width="10" height="1"/>',
+      ),
     );
     expect(estimate.stitches).toBe(estimateSvg(svg('<rect width="10" height="1"/>')).stitches);
-    expect(estimate.notes).toEqual([expect.stringMatching(/^1 × text was skipped/), expect.stringMatching(/^1 × a picture/)]);
+    expect(estimate.notes).toEqual([
+      expect.stringMatching(/^1 × text was skipped/),
+      expect.stringMatching(/^1 × a picture/),
+    ]);
   });
 
   it('when a size is given, then it overrides the file: widthMm stretches the viewBox, mmPerUnit scales user units', () => {
     const file = svg('<path d="M0 5 H10" stroke="#000" stroke-width="0.01" fill="none"/>', 'viewBox="0 0 10 10"');
-    expect(estimateStitches({ kind: 'svg', svgText: file, size: { widthMm: 100 } })).toMatchObject({ ok: true, byType: { run: 40 } });
-    expect(estimateStitches({ kind: 'svg', svgText: file, size: { mmPerUnit: 5 } })).toMatchObject({ ok: true, byType: { run: 20 } });
+    expect(estimateStitches({ kind: 'svg', svgText: file, size: { widthMm: 100 } })).toMatchObject({
+      ok: true,
+      byType: { run: 40 },
+    });
+    expect(estimateStitches({ kind: 'svg', svgText: file, size: { mmPerUnit: 5 } })).toMatchObject({
+      ok: true,
+      byType: { run: 20 },
+    });
   });
 
   it('when the file has a viewBox but no size, then it asks for one', () => {
-    const result = estimateStitches({ kind: 'svg', svgText: svg('<rect width="5" height="5"/>', 'viewBox="0 0 10 10"') });
-    expect(result).toEqual({ ok: false, reason: 'The artwork does not say how big it is: give its width in millimetres.' });
+    const result = estimateStitches({
+      kind: 'svg',
+      svgText: svg('<rect width="5" height="5"/>', 'viewBox="0 0 10 10"'),
+    });
+    expect(result).toEqual({
+      ok: false,
+      reason: 'The artwork does not say how big it is: give its width in millimetres.',
+    });
   });
 
   it('when a shape with a hole is filled under evenodd, then the hole is not stitched', () => {
-    const ring = (rule: string) => estimateSvg(svg(`<path fill-rule="${rule}" d="M0 0H60V60H0Z M20 20H40V40H20Z"/>`)).byType.fill;
+    const ring = (rule: string) =>
+      estimateSvg(svg(`<path fill-rule="${rule}" d="M0 0H60V60H0Z M20 20H40V40H20Z"/>`)).byType.fill;
     expect(ring('evenodd')).toBe(Math.ceil((3600 - 400) / 0.8));
     expect(ring('nonzero')).toBe(Math.ceil(3600 / 0.8));
   });
@@ -140,20 +194,41 @@ describe('estimateStitches: SVG artwork', () => {
 });
 
 describe('estimateBorderStitches', () => {
-  const repeat: StitchEstimate = { stitches: 1000, colorChanges: 2, trims: 1, byType: { run: 100, satin: 600, fill: 300, underlay: 0 }, widthMm: 60, heightMm: 40, notes: [] };
+  const repeat: StitchEstimate = {
+    stitches: 1000,
+    colorChanges: 2,
+    trims: 1,
+    byType: { run: 100, satin: 600, fill: 300, underlay: 0 },
+    widthMm: 60,
+    heightMm: 40,
+    notes: [],
+  };
 
   it('when 6 repeats of a 3-colour motif are sewn in 3 hoopings, then colours restart each hooping', () => {
     const border = estimateBorderStitches({ repeat, fit: { count: 6, pitchMm: 62, repeatWidthMm: 60 }, hoopings: 3 });
     // 3 hoopings × 2 changes inside + 2 changes back to the first colour; 3 colours × (6 − 3) jumps + 6 × 1 trims.
-    expect(border).toMatchObject({ ok: true, stitches: 6000, colorChanges: 8, trims: 15, widthMm: 5 * 62 + 60, heightMm: 40 });
+    expect(border).toMatchObject({
+      ok: true,
+      stitches: 6000,
+      colorChanges: 8,
+      trims: 15,
+      widthMm: 5 * 62 + 60,
+      heightMm: 40,
+    });
   });
 
   it('when the motif has one colour, then no colour changes are added between hoopings', () => {
-    const border = estimateBorderStitches({ repeat: { ...repeat, colorChanges: 0 }, fit: { count: 4, pitchMm: 60, repeatWidthMm: 60 }, hoopings: 4 });
+    const border = estimateBorderStitches({
+      repeat: { ...repeat, colorChanges: 0 },
+      fit: { count: 4, pitchMm: 60, repeatWidthMm: 60 },
+      hoopings: 4,
+    });
     expect(border).toMatchObject({ ok: true, colorChanges: 0 });
   });
 
   it('when there are more hoopings than repeats, then it fails', () => {
-    expect(estimateBorderStitches({ repeat, fit: { count: 2, pitchMm: 60, repeatWidthMm: 60 }, hoopings: 3 }).ok).toBe(false);
+    expect(estimateBorderStitches({ repeat, fit: { count: 2, pitchMm: 60, repeatWidthMm: 60 }, hoopings: 3 }).ok).toBe(
+      false,
+    );
   });
 });

@@ -19,7 +19,15 @@ describe('fitBorder', () => {
   });
 
   it('when an open run has end margins and gaps, then the repeats span the run less both margins, centred', () => {
-    const fit = fitBorder({ runLengthMm: 400, closed: false, motifWidthMm: 50, gapMm: 10, minScale: 0.8, maxScale: 1.2, endMarginMm: 20 });
+    const fit = fitBorder({
+      runLengthMm: 400,
+      closed: false,
+      motifWidthMm: 50,
+      gapMm: 10,
+      minScale: 0.8,
+      maxScale: 1.2,
+      endMarginMm: 20,
+    });
     expect(fit.ok).toBe(true);
     if (!fit.ok) return;
     // 360 mm for n·50 + (n−1)·10: n = 6 needs 360/350 = 102.9 %, n = 7 needs 360/410 = 87.8 %.
@@ -77,7 +85,10 @@ describe('fitBorder', () => {
     ['a count below 1', { ...hemLoop, count: 0 }],
     ['a fractional count', { ...hemLoop, count: 2.5 }],
     ['an overlap as wide as the motif', { ...hemLoop, gapMm: -180 }],
-    ['margins longer than the run', { runLengthMm: 30, closed: false, motifWidthMm: 10, minScale: 0.9, maxScale: 1.1, endMarginMm: 20 }],
+    [
+      'margins longer than the run',
+      { runLengthMm: 30, closed: false, motifWidthMm: 10, minScale: 0.9, maxScale: 1.1, endMarginMm: 20 },
+    ],
     ['far too many repeats', { runLengthMm: 1e9, closed: true, motifWidthMm: 1, minScale: 0.9, maxScale: 1.1 }],
   ])('when given %s, then it fails with a reason instead of throwing', (_, input) => {
     const fit = fitBorder(input as BorderFitInput);
@@ -107,7 +118,9 @@ describe('fitBorder', () => {
           const start = fit.centersMm[0] - fit.repeatWidthMm / 2;
           const end = fit.centersMm[fit.count - 1] + fit.repeatWidthMm / 2;
           expect(start).toBeGreaterThanOrEqual(margin - tolerance);
-          expect(input.closed ? fit.count * fit.pitchMm : end).toBeLessThanOrEqual(input.runLengthMm - margin + tolerance);
+          expect(input.closed ? fit.count * fit.pitchMm : end).toBeLessThanOrEqual(
+            input.runLengthMm - margin + tolerance,
+          );
           expect(input.closed ? fit.count * fit.pitchMm : end - start).toBeCloseTo(input.runLengthMm - 2 * margin, 6);
           expect(fit.scale).toBeGreaterThanOrEqual(input.minScale * (1 - 1e-9));
           expect(fit.scale).toBeLessThanOrEqual(input.maxScale * (1 + 1e-9));

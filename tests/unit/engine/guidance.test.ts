@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { adviseStabilizer, garmentCautions, type GuidanceMessage, type StabilizerInput } from '../../../server/src/engine/index.ts';
+import {
+  adviseStabilizer,
+  garmentCautions,
+  type GuidanceMessage,
+  type StabilizerInput,
+} from '../../../server/src/engine/index.ts';
 
 // 50 × 40 mm = 20 cm²: 300 stitches is 15 per cm² (airy), 1,000 is 50 (medium), 2,400 is 120 (dense).
 const design = { widthMm: 50, heightMm: 40, isNapped: false };
@@ -34,24 +39,45 @@ describe('adviseStabilizer', () => {
   });
 
   it('when the fabric is napped or the wearer is a baby, then topping and a soft back cover are added', () => {
-    const advice = adviseStabilizer({ ...design, stitches: 1000, fabric: 'knit', isNapped: true, isForBabyOrToddler: true });
+    const advice = adviseStabilizer({
+      ...design,
+      stitches: 1000,
+      fabric: 'knit',
+      isNapped: true,
+      isForBabyOrToddler: true,
+    });
     expect(advice.ok).toBe(true);
     if (!advice.ok) return;
     expect(advice.densityStitchesPerCm2).toBe(50);
     expect(advice.topping).toBe('water-soluble');
-    expect(advice.messages.map((m) => m.code)).toEqual(['stabilizer.cutaway', 'stabilizer.water-soluble-topping', 'stabilizer.soft-back-cover']);
+    expect(advice.messages.map((m) => m.code)).toEqual([
+      'stabilizer.cutaway',
+      'stabilizer.water-soluble-topping',
+      'stabilizer.soft-back-cover',
+    ]);
     expectPlainGuidance(advice.messages);
   });
 
   it('when a dense design goes on sheer fabric, then a caution is added', () => {
     const advice = adviseStabilizer({ ...design, stitches: 2400, fabric: 'sheer' });
-    expect(advice.ok && advice.messages.map((m) => [m.code, m.severity])).toContainEqual(['stabilizer.dense-on-sheer', 'caution']);
+    expect(advice.ok && advice.messages.map((m) => [m.code, m.severity])).toContainEqual([
+      'stabilizer.dense-on-sheer',
+      'caution',
+    ]);
   });
 
   it.each([
     ['an unknown fabric', { ...design, stitches: 100, fabric: 'felt' }],
     ['a zero-width design', { ...design, widthMm: 0, stitches: 100, fabric: 'woven' }],
-    ['crossed thresholds', { ...design, stitches: 100, fabric: 'woven', thresholds: { airyBelowStitchesPerCm2: 90, denseAboveStitchesPerCm2: 20 } }],
+    [
+      'crossed thresholds',
+      {
+        ...design,
+        stitches: 100,
+        fabric: 'woven',
+        thresholds: { airyBelowStitchesPerCm2: 90, denseAboveStitchesPerCm2: 20 },
+      },
+    ],
   ])('when given %s, then it fails with a reason', (_, input) => {
     expect(adviseStabilizer(input as StabilizerInput).ok).toBe(false);
   });

@@ -7,7 +7,12 @@ const sharmaPairs = readFileSync(new URL('./fixtures/ciede2000-sharma-2005.tsv',
   .split('\n')
   .filter((line) => line.trim() !== '' && !line.startsWith('#') && !line.startsWith('pair'))
   .map((line) => line.split('\t').map(Number))
-  .map(([pair, l1, a1, b1, l2, a2, b2, deltaE]) => ({ pair, first: { l: l1, a: a1, b: b1 }, second: { l: l2, a: a2, b: b2 }, deltaE }));
+  .map(([pair, l1, a1, b1, l2, a2, b2, deltaE]) => ({
+    pair,
+    first: { l: l1, a: a1, b: b1 },
+    second: { l: l2, a: a2, b: b2 },
+    deltaE,
+  }));
 
 const palette = [
   { code: 'T-101', name: 'Snow', hex: '#ffffff' },

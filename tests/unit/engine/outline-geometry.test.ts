@@ -23,9 +23,12 @@ describe('units', () => {
     expect(parseSvgLengthMm('96')).toBeCloseTo(25.4, 12);
   });
 
-  it.each(['50%', '2em', '-3mm', '0', 'wide', '5constructor', undefined])('when a length is %s, then it has no absolute size', (value) => {
-    expect(parseSvgLengthMm(value)).toBeUndefined();
-  });
+  it.each(['50%', '2em', '-3mm', '0', 'wide', '5constructor', undefined])(
+    'when a length is %s, then it has no absolute size',
+    (value) => {
+      expect(parseSvgLengthMm(value)).toBeUndefined();
+    },
+  );
 });
 
 describe('outline geometry', () => {
@@ -41,7 +44,10 @@ describe('outline geometry', () => {
     ['quadratics', 'M0 0 Q30 40 60 0 T120 0 q15 25 30 0'],
     ['arcs', 'M10 50 A40 25 0 0 1 90 50 a20 20 0 1 0 40 0 A15 30 30 0 1 150 40'],
     ['a circle of 3 mm radius', 'M13 10 A3 3 0 0 1 7 10 A3 3 0 0 1 13 10 Z'],
-    ['a mix with relative commands', 'm20 20 l40 5 c10 0 20 10 20 20 q0 20 -20 20 a10 10 0 0 1 -20 0 z m70 0 h30 v30 h-30 z'],
+    [
+      'a mix with relative commands',
+      'm20 20 l40 5 c10 0 20 10 20 20 q0 20 -20 20 a10 10 0 0 1 -20 0 z m70 0 h30 v30 h-30 z',
+    ],
   ])('path length of %s is within 0.1 %% of svg-path-properties', (_, pathData) => {
     // svg-path-properties 1.3.0 is the independent reference implementation (it integrates curve lengths).
     const expected = new svgPathProperties(pathData).getTotalLength();
@@ -55,8 +61,14 @@ describe('outline geometry', () => {
     expect(filledArea(outlineOf(`${outer} M10 10 H30 V30 H10 Z`), 'nonzero')).toBeCloseTo(1600, 9);
     expect(filledArea(outlineOf(`${outer} M10 10 H30 V30 H10 Z`), 'evenodd')).toBeCloseTo(1600 - 400, 9);
     // An island inside the hole is painted again under both rules.
-    expect(filledArea(outlineOf(`${outer} M10 10 V30 H30 V10 Z M15 15 H25 V25 H15 Z`), 'nonzero')).toBeCloseTo(1600 - 400 + 100, 9);
-    expect(filledArea(outlineOf(`${outer} M10 10 H30 V30 H10 Z M15 15 H25 V25 H15 Z`), 'evenodd')).toBeCloseTo(1600 - 400 + 100, 9);
+    expect(filledArea(outlineOf(`${outer} M10 10 V30 H30 V10 Z M15 15 H25 V25 H15 Z`), 'nonzero')).toBeCloseTo(
+      1600 - 400 + 100,
+      9,
+    );
+    expect(filledArea(outlineOf(`${outer} M10 10 H30 V30 H10 Z M15 15 H25 V25 H15 Z`), 'evenodd')).toBeCloseTo(
+      1600 - 400 + 100,
+      9,
+    );
   });
 
   it('when two separate shapes wind in opposite directions, then both are filled', () => {

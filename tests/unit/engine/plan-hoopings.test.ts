@@ -15,7 +15,14 @@ describe('planHoopings', () => {
     // Worked case from issue 3 (common practice of the trade), continuing the 692 mm hem loop.
     const fit = fitBorder({ runLengthMm: 692, closed: true, motifWidthMm: 180, minScale: 0.9, maxScale: 1.1 });
     if (!fit.ok) throw new Error(fit.reason);
-    const plan = planHoopings({ count: fit.count, repeatWidthMm: fit.repeatWidthMm, pitchMm: fit.pitchMm, motifHeightMm: 60, hoop: hoop5x7, firstCenterMm: fit.centersMm[0] });
+    const plan = planHoopings({
+      count: fit.count,
+      repeatWidthMm: fit.repeatWidthMm,
+      pitchMm: fit.pitchMm,
+      motifHeightMm: 60,
+      hoop: hoop5x7,
+      firstCenterMm: fit.centersMm[0],
+    });
     expect(plan.ok).toBe(true);
     if (!plan.ok) return;
     expect(plan.perHooping).toBe(1);
@@ -34,10 +41,24 @@ describe('planHoopings', () => {
 
   it('when several repeats fit one hooping, then runs are as even as possible and stitched centre, left, right', () => {
     // 10 repeats of 40 mm at a 45 mm pitch in a 200 mm row: (200 − 40) / 45 + 1 = 4 per hooping, 3 hoopings.
-    const plan = planHoopings({ count: 10, repeatWidthMm: 40, pitchMm: 45, motifHeightMm: 30, hoop: { fieldWidthMm: 200, fieldHeightMm: 140 } });
+    const plan = planHoopings({
+      count: 10,
+      repeatWidthMm: 40,
+      pitchMm: 45,
+      motifHeightMm: 30,
+      hoop: { fieldWidthMm: 200, fieldHeightMm: 140 },
+    });
     expect(plan.ok && plan.perHooping).toBe(4);
     expect(plan.ok && plan.rotated).toBe(false);
-    expect(orderOf({ count: 10, repeatWidthMm: 40, pitchMm: 45, motifHeightMm: 30, hoop: { fieldWidthMm: 200, fieldHeightMm: 140 } })).toEqual([
+    expect(
+      orderOf({
+        count: 10,
+        repeatWidthMm: 40,
+        pitchMm: 45,
+        motifHeightMm: 30,
+        hoop: { fieldWidthMm: 200, fieldHeightMm: 140 },
+      }),
+    ).toEqual([
       [3, 4, 5, 6],
       [0, 1, 2],
       [7, 8, 9],
@@ -45,7 +66,13 @@ describe('planHoopings', () => {
   });
 
   it('when an odd number of hoopings is needed, then the middle hooping goes first and sides alternate left first', () => {
-    expect(orderOf({ count: 5, repeatWidthMm: 100, pitchMm: 100, motifHeightMm: 50, hoop: hoop5x7 })).toEqual([[2], [1], [3], [0], [4]]);
+    expect(orderOf({ count: 5, repeatWidthMm: 100, pitchMm: 100, motifHeightMm: 50, hoop: hoop5x7 })).toEqual([
+      [2],
+      [1],
+      [3],
+      [0],
+      [4],
+    ]);
   });
 
   it('when clearance is kept at the ends, then fewer repeats fit a hooping', () => {
@@ -61,8 +88,16 @@ describe('planHoopings', () => {
   });
 
   it.each([
-    ['a motif taller than the field', { count: 2, repeatWidthMm: 50, pitchMm: 50, motifHeightMm: 200, hoop: hoop5x7 }, /200 mm tall/],
-    ['a repeat wider than the field', { count: 2, repeatWidthMm: 190, pitchMm: 190, motifHeightMm: 50, hoop: hoop5x7 }, /190 mm wide/],
+    [
+      'a motif taller than the field',
+      { count: 2, repeatWidthMm: 50, pitchMm: 50, motifHeightMm: 200, hoop: hoop5x7 },
+      /200 mm tall/,
+    ],
+    [
+      'a repeat wider than the field',
+      { count: 2, repeatWidthMm: 190, pitchMm: 190, motifHeightMm: 50, hoop: hoop5x7 },
+      /190 mm wide/,
+    ],
     ['a zero count', { count: 0, repeatWidthMm: 50, pitchMm: 50, motifHeightMm: 50, hoop: hoop5x7 }, /whole number/],
     ['no hoop', { count: 2, repeatWidthMm: 50, pitchMm: 50, motifHeightMm: 50 }, /hoop/],
   ])('when given %s, then it fails with a reason', (_, input, reason) => {
@@ -79,7 +114,14 @@ describe('planHoopings', () => {
         fc.double({ min: 0.5, max: 1.5, noNaN: true }),
         fc.double({ min: 0, max: 10, noNaN: true }),
         (count, repeatWidthMm, pitchFactor, clearanceMm) => {
-          const input = { count, repeatWidthMm, pitchMm: repeatWidthMm * pitchFactor, motifHeightMm: 40, hoop: { fieldWidthMm: 180, fieldHeightMm: 130 }, clearanceMm };
+          const input = {
+            count,
+            repeatWidthMm,
+            pitchMm: repeatWidthMm * pitchFactor,
+            motifHeightMm: 40,
+            hoop: { fieldWidthMm: 180, fieldHeightMm: 130 },
+            clearanceMm,
+          };
           const plan = planHoopings(input);
           if (!plan.ok) return;
           expect(plan.perHooping * plan.hoopings.length).toBeGreaterThanOrEqual(count);

@@ -1,6 +1,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { checkPricingRuleSet, priceQuote, type PricingRuleSet, type QuoteInput, type QuotePlacement } from '../../../server/src/engine/index.ts';
+import {
+  checkPricingRuleSet,
+  priceQuote,
+  type PricingRuleSet,
+  type QuoteInput,
+  type QuotePlacement,
+} from '../../../server/src/engine/index.ts';
 
 // Worked arithmetic, not market rates (trade-facts: no neutral published rate exists).
 const ruleSet: PricingRuleSet = {
@@ -14,17 +20,59 @@ const ruleSet: PricingRuleSet = {
   artworkSetupCents: 2500,
   lettering: { centsPerThousandStitches: 120, minimumCents: 600 },
   rushMultiplierBp: 15_000,
-  quantityBreaks: [{ minQty: 6, discountBp: 1000 }, { minQty: 3, discountBp: 500 }],
+  quantityBreaks: [
+    { minQty: 6, discountBp: 1000 },
+    { minQty: 3, discountBp: 500 },
+  ],
   taxRateBp: 825,
 };
 
-const border: QuotePlacement = { id: 'hem', label: 'Hem border', kind: 'stitching', stitches: 12_345, hoopings: 4, colorChanges: 5, hasCustomerArtwork: false };
-const name: QuotePlacement = { id: 'name', label: 'Name', kind: 'lettering', stitches: 1187, hoopings: 1, colorChanges: 0, hasCustomerArtwork: false };
-const upload: QuotePlacement = { id: 'pocket', label: 'Pocket art', kind: 'stitching', stitches: 3001, hoopings: 1, colorChanges: 2, hasCustomerArtwork: true };
+const border: QuotePlacement = {
+  id: 'hem',
+  label: 'Hem border',
+  kind: 'stitching',
+  stitches: 12_345,
+  hoopings: 4,
+  colorChanges: 5,
+  hasCustomerArtwork: false,
+};
+const name: QuotePlacement = {
+  id: 'name',
+  label: 'Name',
+  kind: 'lettering',
+  stitches: 1187,
+  hoopings: 1,
+  colorChanges: 0,
+  hasCustomerArtwork: false,
+};
+const upload: QuotePlacement = {
+  id: 'pocket',
+  label: 'Pocket art',
+  kind: 'stitching',
+  stitches: 3001,
+  hoopings: 1,
+  colorChanges: 2,
+  hasCustomerArtwork: true,
+};
 const dress = { slug: 'smocked-dress', name: 'Smocked dress' };
-const order: QuoteInput = { ruleSet, garment: dress, sizeCode: '4', quantity: 3, placements: [border, name, upload], isRush: true };
+const order: QuoteInput = {
+  ruleSet,
+  garment: dress,
+  sizeCode: '4',
+  quantity: 3,
+  placements: [border, name, upload],
+  isRush: true,
+};
 
-const flatRules: PricingRuleSet = { ...ruleSet, minimumPerPlacementCents: 0, extraHoopingCents: 0, colorChangeCents: 0, quantityBreaks: [], rushMultiplierBp: 10_000, taxRateBp: 0 };
+const flatRules: PricingRuleSet = {
+  ...ruleSet,
+  minimumPerPlacementCents: 0,
+  extraHoopingCents: 0,
+  colorChangeCents: 0,
+  quantityBreaks: [],
+  rushMultiplierBp: 10_000,
+  taxRateBp: 0,
+};
 
 describe('priceQuote', () => {
   it('when a rush order of 3 has a border, a name and customer artwork, then every line follows the worked arithmetic', () => {
@@ -43,13 +91,28 @@ describe('priceQuote', () => {
       ['artwork-setup', 2500], // once per order
       ['tax', 1723], // 8.25 % of 20,887 = 1,723.1775
     ]);
-    expect(quote).toMatchObject({ subtotalCents: 20_887, taxCents: 1723, totalCents: 22_610, currency: 'USD', ruleSetVersion: 3 });
+    expect(quote).toMatchObject({
+      subtotalCents: 20_887,
+      taxCents: 1723,
+      totalCents: 22_610,
+      currency: 'USD',
+      ruleSetVersion: 3,
+    });
     expect(quote.lines[0]).toMatchObject({ code: 'garment', label: 'Smocked dress, size 4 × 3 garments' });
     expect(quote.lines[1]).toMatchObject({ placementId: 'hem', label: 'Hem border: 12,345 stitches × 3 garments' });
   });
 
   it('when a picture’s stitches are not yet counted, then its line charges the minimum and says so, and the setup applies', () => {
-    const scan: QuotePlacement = { id: 'scan', label: 'Your artwork', kind: 'stitching', stitches: 0, hoopings: 1, colorChanges: 0, hasCustomerArtwork: true, isStitchCountPending: true };
+    const scan: QuotePlacement = {
+      id: 'scan',
+      label: 'Your artwork',
+      kind: 'stitching',
+      stitches: 0,
+      hoopings: 1,
+      colorChanges: 0,
+      hasCustomerArtwork: true,
+      isStitchCountPending: true,
+    };
     const quote = priceQuote({ ...order, quantity: 1, isRush: false, placements: [scan] });
     if (!quote.ok) throw new Error(quote.reason);
     expect(quote.lines.map(({ code, label, amountCents }) => [code, label, amountCents])).toEqual([
@@ -63,15 +126,37 @@ describe('priceQuote', () => {
   it('when two garments share a size code, then each is priced from its own list and named on the garment line', () => {
     const bib = priceQuote({ ...order, garment: { slug: 'bib', name: 'Terry bib' }, quantity: 1 });
     const frock = priceQuote({ ...order, quantity: 1 });
-    expect(bib.ok && bib.lines[0]).toEqual({ code: 'garment', label: 'Terry bib, size 4 × 1 garment', amountCents: 800 });
+    expect(bib.ok && bib.lines[0]).toEqual({
+      code: 'garment',
+      label: 'Terry bib, size 4 × 1 garment',
+      amountCents: 800,
+    });
     expect(frock.ok && frock.lines[0].amountCents).toBe(2000);
-    const labelled = priceQuote({ ...order, ruleSet: { ...ruleSet, garmentBaseCents: { 'bishop-dress': { '6m': 3800 } } }, garment: { slug: 'bishop-dress', name: 'Bishop dress' }, sizeCode: '6m', sizeLabel: '6 months', quantity: 1 });
-    expect(labelled.ok && labelled.lines[0]).toEqual({ code: 'garment', label: 'Bishop dress, size 6 months × 1 garment', amountCents: 3800 });
+    const labelled = priceQuote({
+      ...order,
+      ruleSet: { ...ruleSet, garmentBaseCents: { 'bishop-dress': { '6m': 3800 } } },
+      garment: { slug: 'bishop-dress', name: 'Bishop dress' },
+      sizeCode: '6m',
+      sizeLabel: '6 months',
+      quantity: 1,
+    });
+    expect(labelled.ok && labelled.lines[0]).toEqual({
+      code: 'garment',
+      label: 'Bishop dress, size 6 months × 1 garment',
+      amountCents: 3800,
+    });
   });
 
   it('when a line ends on exactly half a cent, then it rounds up; just under half rounds down', () => {
     const at = (stitches: number) => {
-      const quote = priceQuote({ ruleSet: { ...flatRules, centsPerThousandStitches: 5 }, garment: dress, sizeCode: '2T', quantity: 1, placements: [{ ...border, stitches }], isRush: false });
+      const quote = priceQuote({
+        ruleSet: { ...flatRules, centsPerThousandStitches: 5 },
+        garment: dress,
+        sizeCode: '2T',
+        quantity: 1,
+        placements: [{ ...border, stitches }],
+        isRush: false,
+      });
       return quote.ok ? quote.lines[1].amountCents : Number.NaN;
     };
     expect(at(1100)).toBe(6); // 5.5 ¢
@@ -80,7 +165,14 @@ describe('priceQuote', () => {
   });
 
   it('when tax or a discount lands on half a cent, then its magnitude rounds up', () => {
-    const taxed = priceQuote({ ruleSet: { ...flatRules, garmentBaseCents: { 'smocked-dress': { '4': 200 } }, taxRateBp: 825 }, garment: dress, sizeCode: '4', quantity: 1, placements: [], isRush: false });
+    const taxed = priceQuote({
+      ruleSet: { ...flatRules, garmentBaseCents: { 'smocked-dress': { '4': 200 } }, taxRateBp: 825 },
+      garment: dress,
+      sizeCode: '4',
+      quantity: 1,
+      placements: [],
+      isRush: false,
+    });
     expect(taxed.ok && taxed.taxCents).toBe(17); // 16.5 ¢
     const discounted = priceQuote({
       ruleSet: { ...flatRules, centsPerThousandStitches: 10, quantityBreaks: [{ minQty: 1, discountBp: 500 }] },
@@ -95,17 +187,39 @@ describe('priceQuote', () => {
 
   it('when the quantity reaches a higher break, then the larger discount applies', () => {
     const six = priceQuote({ ...order, quantity: 6, isRush: false });
-    expect(six.ok && six.lines.find((line) => line.code === 'quantity-discount')?.label).toBe('Quantity discount: 10 % off embroidery for 6 or more');
+    expect(six.ok && six.lines.find((line) => line.code === 'quantity-discount')?.label).toBe(
+      'Quantity discount: 10 % off embroidery for 6 or more',
+    );
   });
 
   it.each([
     ['an unknown size', { ...order, sizeCode: 'XXL' }, 'Price list 3 has no price for the Smocked dress in size XXL.'],
-    ['an unknown garment', { ...order, garment: { slug: 'bishop-dress', name: 'Bishop dress' } }, 'Price list 3 has no price for the Bishop dress in size 4.'],
-    ['an inherited key as the garment', { ...order, garment: { slug: 'constructor', name: 'Constructor' } }, /no price for the Constructor in size 4/],
-    ['an inherited key as the size', { ...order, sizeCode: 'toString' }, /no price for the Smocked dress in size toString/],
+    [
+      'an unknown garment',
+      { ...order, garment: { slug: 'bishop-dress', name: 'Bishop dress' } },
+      'Price list 3 has no price for the Bishop dress in size 4.',
+    ],
+    [
+      'an inherited key as the garment',
+      { ...order, garment: { slug: 'constructor', name: 'Constructor' } },
+      /no price for the Constructor in size 4/,
+    ],
+    [
+      'an inherited key as the size',
+      { ...order, sizeCode: 'toString' },
+      /no price for the Smocked dress in size toString/,
+    ],
     ['no garment', { ...order, garment: undefined }, 'Choose a garment.'],
-    ['garment prices not listed by size', { ...order, ruleSet: { ...ruleSet, garmentBaseCents: { bib: 800 } } }, 'The garment prices for bib must be listed by size code.'],
-    ['a fractional garment price', { ...order, ruleSet: { ...ruleSet, garmentBaseCents: { bib: { '4': 7.5 } } } }, 'The garment price for bib in size 4 must be whole cents, 0 or more.'],
+    [
+      'garment prices not listed by size',
+      { ...order, ruleSet: { ...ruleSet, garmentBaseCents: { bib: 800 } } },
+      'The garment prices for bib must be listed by size code.',
+    ],
+    [
+      'a fractional garment price',
+      { ...order, ruleSet: { ...ruleSet, garmentBaseCents: { bib: { '4': 7.5 } } } },
+      'The garment price for bib in size 4 must be whole cents, 0 or more.',
+    ],
     ['a lower-case currency', { ...order, ruleSet: { ...ruleSet, currency: 'usd' } }, /ISO 4217/],
     ['a rush multiplier below 1', { ...order, ruleSet: { ...ruleSet, rushMultiplierBp: 9000 } }, /rush/],
     ['fractional cents', { ...order, ruleSet: { ...ruleSet, colorChangeCents: 2.5 } }, /colorChangeCents/],
@@ -128,7 +242,10 @@ describe('priceQuote', () => {
   const arbitraryRules = fc.record({
     version: fc.integer({ min: 1, max: 99 }),
     currency: fc.constantFrom('USD', 'EUR', 'GBP', 'JPY'),
-    garmentBaseCents: fc.record({ dress: fc.record({ M: cents(10_000), L: cents(10_000) }), bib: fc.record({ M: cents(10_000) }) }),
+    garmentBaseCents: fc.record({
+      dress: fc.record({ M: cents(10_000), L: cents(10_000) }),
+      bib: fc.record({ M: cents(10_000) }),
+    }),
     centsPerThousandStitches: cents(500),
     minimumPerPlacementCents: cents(2000),
     extraHoopingCents: cents(1000),
@@ -136,7 +253,10 @@ describe('priceQuote', () => {
     artworkSetupCents: cents(10_000),
     lettering: fc.record({ centsPerThousandStitches: cents(500), minimumCents: cents(2000) }),
     rushMultiplierBp: fc.integer({ min: 10_000, max: 30_000 }),
-    quantityBreaks: fc.array(fc.record({ minQty: fc.integer({ min: 1, max: 50 }), discountBp: fc.integer({ min: 0, max: 10_000 }) }), { maxLength: 4 }),
+    quantityBreaks: fc.array(
+      fc.record({ minQty: fc.integer({ min: 1, max: 50 }), discountBp: fc.integer({ min: 0, max: 10_000 }) }),
+      { maxLength: 4 },
+    ),
     taxRateBp: fc.integer({ min: 0, max: 2500 }),
   });
   const arbitraryPlacement = fc.record({
@@ -176,7 +296,9 @@ describe('priceQuote', () => {
     fc.assert(
       fc.property(arbitraryOrder, fc.nat({ max: 4 }), fc.integer({ min: 1, max: 100_000 }), (input, pick, extra) => {
         const index = pick % input.placements.length;
-        const more = input.placements.map((placement, i) => (i === index ? { ...placement, stitches: placement.stitches + extra } : placement));
+        const more = input.placements.map((placement, i) =>
+          i === index ? { ...placement, stitches: placement.stitches + extra } : placement,
+        );
         const before = priceQuote(input);
         const after = priceQuote({ ...input, placements: more });
         if (!before.ok || !after.ok) throw new Error('quote failed');

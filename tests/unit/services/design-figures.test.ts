@@ -18,7 +18,16 @@ const daisyChain: CatalogueMotifEntry = {
   minScalePct: 90,
   maxScalePct: 110,
 };
-const littleLamb: CatalogueMotifEntry = { ...daisyChain, slug: 'little-lamb', name: 'Little lamb', kind: 'single', widthMm: 62, heightMm: 43, minScalePct: 85, maxScalePct: 115 };
+const littleLamb: CatalogueMotifEntry = {
+  ...daisyChain,
+  slug: 'little-lamb',
+  name: 'Little lamb',
+  kind: 'single',
+  widthMm: 62,
+  heightMm: 43,
+  minScalePct: 85,
+  maxScalePct: 115,
+};
 
 /** Hoops out of area order, so the test shows the smallest workable one is chosen, not the first listed. */
 const hoops = [
@@ -29,7 +38,14 @@ const hoops = [
 
 function catalogueWith(changes: Partial<QuoteCatalogue> = {}): QuoteCatalogue {
   return {
-    garment: { id: 3, slug: 'bishop-dress', name: 'Bishop dress', fabricType: 'woven', isNapped: false, minAgeMonths: 6 },
+    garment: {
+      id: 3,
+      slug: 'bishop-dress',
+      name: 'Bishop dress',
+      fabricType: 'woven',
+      isNapped: false,
+      minAgeMonths: 6,
+    },
     size: {
       id: 301,
       code: '6m',
@@ -42,7 +58,18 @@ function catalogueWith(changes: Partial<QuoteCatalogue> = {}): QuoteCatalogue {
       ],
     },
     motifs: new Map([daisyChain, littleLamb].map((motif) => [motif.slug, motif])),
-    fonts: new Map([['rounded-block', { slug: 'rounded-block', name: 'Rounded Block', minHeightMm: 8, maxHeightMm: 60, outlines: loadShippedFont('fredoka') }]]),
+    fonts: new Map([
+      [
+        'rounded-block',
+        {
+          slug: 'rounded-block',
+          name: 'Rounded Block',
+          minHeightMm: 8,
+          maxHeightMm: 60,
+          outlines: loadShippedFont('fredoka'),
+        },
+      ],
+    ]),
     hoops,
     machine: { stitchesPerMinute: 650, minutesPerColorChange: 0.5, minutesPerHooping: 4, setupMinutes: 10 },
     ...changes,
@@ -85,7 +112,15 @@ describe('figureDesign', () => {
     expect(hem.hoopings).toBe(4);
     expect(hem.estimate.widthMm).toBeCloseTo(692, 9);
     expect(figured.value.quotePlacements).toEqual([
-      { id: 'hem', label: 'Hem border: Daisy chain', kind: 'stitching', stitches: hem.estimate.stitches, hoopings: 4, colorChanges: hem.estimate.colorChanges, hasCustomerArtwork: false },
+      {
+        id: 'hem',
+        label: 'Hem border: Daisy chain',
+        kind: 'stitching',
+        stitches: hem.estimate.stitches,
+        hoopings: 4,
+        colorChanges: hem.estimate.colorChanges,
+        hasCustomerArtwork: false,
+      },
     ]);
   });
 
@@ -95,7 +130,9 @@ describe('figureDesign', () => {
       ok: false,
       error: {
         kind: 'invalid',
-        message: expect.stringMatching(/^The Daisy chain doesn't fit round the hem in size 6 months: 3 repeats would need 128\.1 % — above the 110 % maximum for this motif\. 4 repeats would fit\.$/),
+        message: expect.stringMatching(
+          /^The Daisy chain doesn't fit round the hem in size 6 months: 3 repeats would need 128\.1 % — above the 110 % maximum for this motif\. 4 repeats would fit\.$/,
+        ),
         fields: { 'document.placements.0.count': expect.any(String) },
       },
     });
@@ -106,7 +143,8 @@ describe('figureDesign', () => {
     const figured = figureDesign(catalogueWith({ size }), design(border({ run: 'front' })));
     expect(!figured.ok && figured.error).toEqual({
       kind: 'invalid',
-      message: "The Daisy chain doesn't fit along the front hem in size 6 months: 1 repeat need 138.9 % and 2 repeats need 69.4 %; this motif allows 90 % to 110 %.",
+      message:
+        "The Daisy chain doesn't fit along the front hem in size 6 months: 1 repeat need 138.9 % and 2 repeats need 69.4 %; this motif allows 90 % to 110 %.",
       fields: { 'document.placements.0.motif': expect.any(String) },
     });
   });
@@ -114,7 +152,9 @@ describe('figureDesign', () => {
   it('when the garment has no hem, then a border is refused at its zone', () => {
     const size = { ...catalogueWith().size, hemFrontMm: null, hemCircumferenceMm: null };
     const figured = figureDesign(catalogueWith({ size }), design(border()));
-    expect(!figured.ok && figured.error.fields).toEqual({ 'document.placements.0.zone': 'The Bishop dress has no hem to take a border.' });
+    expect(!figured.ok && figured.error.fields).toEqual({
+      'document.placements.0.zone': 'The Bishop dress has no hem to take a border.',
+    });
   });
 
   it('when lettering is added, then it is one hooping priced as lettering, with its stitched size', () => {
@@ -132,7 +172,8 @@ describe('figureDesign', () => {
   it('when lettering is outside the font’s heights or larger than every hoop, then it is refused at the letter height', () => {
     const tooSmall = figureDesign(catalogueWith(), design(lettering('Noah', 6)));
     expect(!tooSmall.ok && tooSmall.error.fields).toEqual({
-      'document.placements.0.letterHeightMm': 'Rounded Block sews cleanly from 8 to 60 mm tall; choose a letter height in that range.',
+      'document.placements.0.letterHeightMm':
+        'Rounded Block sews cleanly from 8 to 60 mm tall; choose a letter height in that range.',
     });
     const tooWide = figureDesign(catalogueWith(), design(lettering('Alexandra Rose', 60)));
     expect(!tooWide.ok && tooWide.error.fields?.['document.placements.0.letterHeightMm']).toMatch(
@@ -147,28 +188,57 @@ describe('figureDesign', () => {
       error: {
         kind: 'invalid',
         message: 'There is no motif “dancing-hippos” in the catalogue; choose another.',
-        fields: { 'document.placements.1.motif': 'There is no motif “dancing-hippos” in the catalogue; choose another.' },
+        fields: {
+          'document.placements.1.motif': 'There is no motif “dancing-hippos” in the catalogue; choose another.',
+        },
       },
     });
   });
 
   it('when several placements are wrong, then each is named at its own field', () => {
-    const lamb: DesignPlacement = { id: 'lamb', kind: 'motif', zone: 'pocket', centerXMm: 50, centerYMm: 50, rotationDeg: 0, motif: 'little-lamb', scalePct: 100, threads: ['WB-127'] };
-    const figured = figureDesign(catalogueWith(), design(border({ motif: 'little-lamb' }), lamb, { ...lamb, id: 'lamb-2', zone: 'chest', scalePct: 150 }));
+    const lamb: DesignPlacement = {
+      id: 'lamb',
+      kind: 'motif',
+      zone: 'pocket',
+      centerXMm: 50,
+      centerYMm: 50,
+      rotationDeg: 0,
+      motif: 'little-lamb',
+      scalePct: 100,
+      threads: ['WB-127'],
+    };
+    const figured = figureDesign(
+      catalogueWith(),
+      design(border({ motif: 'little-lamb' }), lamb, { ...lamb, id: 'lamb-2', zone: 'chest', scalePct: 150 }),
+    );
     expect(!figured.ok && figured.error.fields).toEqual({
-      'document.placements.0.motif': 'The Little lamb is a single motif, not a border; place it on the garment instead.',
-      'document.placements.1.zone': 'The Bishop dress has no place called “pocket”; choose Hem border or Below the smocking.',
-      'document.placements.2.scalePct': 'The Little lamb can be stitched from 85 % to 115 % of its size; choose a size in that range.',
+      'document.placements.0.motif':
+        'The Little lamb is a single motif, not a border; place it on the garment instead.',
+      'document.placements.1.zone':
+        'The Bishop dress has no place called “pocket”; choose Hem border or Below the smocking.',
+      'document.placements.2.scalePct':
+        'The Little lamb can be stitched from 85 % to 115 % of its size; choose a size in that range.',
     });
   });
 
   it('when a motif has fewer threads than colours, then it is refused at its threads', () => {
     const figured = figureDesign(catalogueWith(), design(border({ threads: ['WB-118'] })));
-    expect(!figured.ok && figured.error.fields).toEqual({ 'document.placements.0.threads': 'The Daisy chain is sewn in 3 colours; choose a thread for each.' });
+    expect(!figured.ok && figured.error.fields).toEqual({
+      'document.placements.0.threads': 'The Daisy chain is sewn in 3 colours; choose a thread for each.',
+    });
   });
 
   it('when the design has the customer’s own artwork and uploads are not supported, then it says they are coming soon', () => {
-    const artwork: DesignPlacement = { id: 'sun', kind: 'artwork', zone: 'chest', centerXMm: 50, centerYMm: 50, rotationDeg: 0, artworkUploadId: 1, widthMm: 56 };
+    const artwork: DesignPlacement = {
+      id: 'sun',
+      kind: 'artwork',
+      zone: 'chest',
+      centerXMm: 50,
+      centerYMm: 50,
+      rotationDeg: 0,
+      artworkUploadId: 1,
+      widthMm: 56,
+    };
     const figured = figureDesign(catalogueWith(), design(artwork));
     expect(!figured.ok && figured.error).toEqual({
       kind: 'invalid',
@@ -178,26 +248,63 @@ describe('figureDesign', () => {
   });
 
   it('when uploads are given, then artwork is estimated from its SVG and carries the setup fee', () => {
-    const svgText = '<svg xmlns="http://www.w3.org/2000/svg" width="40mm" height="40mm" viewBox="0 0 40 40"><circle cx="20" cy="20" r="18" fill="#fc0"/></svg>';
-    const artwork: DesignPlacement = { id: 'sun', kind: 'artwork', zone: 'chest', centerXMm: 50, centerYMm: 50, rotationDeg: 0, artworkUploadId: 1, widthMm: 56 };
+    const svgText =
+      '<svg xmlns="http://www.w3.org/2000/svg" width="40mm" height="40mm" viewBox="0 0 40 40"><circle cx="20" cy="20" r="18" fill="#fc0"/></svg>';
+    const artwork: DesignPlacement = {
+      id: 'sun',
+      kind: 'artwork',
+      zone: 'chest',
+      centerXMm: 50,
+      centerYMm: 50,
+      rotationDeg: 0,
+      artworkUploadId: 1,
+      widthMm: 56,
+    };
     const figured = figureDesign(catalogueWith({ artworkUploads: new Map([[1, { svgText }]]) }), design(artwork));
     if (!figured.ok) throw new Error(figured.error.message);
-    expect(figured.value.quotePlacements[0]).toMatchObject({ label: 'Your artwork', kind: 'stitching', hoopings: 1, hasCustomerArtwork: true });
+    expect(figured.value.quotePlacements[0]).toMatchObject({
+      label: 'Your artwork',
+      kind: 'stitching',
+      hoopings: 1,
+      hasCustomerArtwork: true,
+    });
     // The drawing is set 56 mm wide, so the 36 mm circle of its 40 mm view box stitches 36 × 56 ÷ 40 = 50.4 mm.
     expect(figured.value.placements[0].estimate.widthMm).toBeCloseTo(50.4, 1);
   });
 
   it('when the upload is a photo or scan, then it has no stitch count yet, keeps its proportions, and its price is marked provisional', () => {
-    const artwork: DesignPlacement = { id: 'scan', kind: 'artwork', zone: 'chest', centerXMm: 50, centerYMm: 50, rotationDeg: 0, artworkUploadId: 2, widthMm: 60 };
-    const figured = figureDesign(catalogueWith({ artworkUploads: new Map([[2, { rasterSizePx: { widthPx: 900, heightPx: 600 } }]]) }), design(artwork));
+    const artwork: DesignPlacement = {
+      id: 'scan',
+      kind: 'artwork',
+      zone: 'chest',
+      centerXMm: 50,
+      centerYMm: 50,
+      rotationDeg: 0,
+      artworkUploadId: 2,
+      widthMm: 60,
+    };
+    const figured = figureDesign(
+      catalogueWith({ artworkUploads: new Map([[2, { rasterSizePx: { widthPx: 900, heightPx: 600 } }]]) }),
+      design(artwork),
+    );
     if (!figured.ok) throw new Error(figured.error.message);
-    expect(figured.value.placements[0]).toMatchObject({ isPriceProvisional: true, hasCustomerArtwork: true, estimate: { stitches: 0, widthMm: 60, heightMm: 40 } });
-    expect(figured.value.quotePlacements[0]).toMatchObject({ stitches: 0, hasCustomerArtwork: true, isStitchCountPending: true });
+    expect(figured.value.placements[0]).toMatchObject({
+      isPriceProvisional: true,
+      hasCustomerArtwork: true,
+      estimate: { stitches: 0, widthMm: 60, heightMm: 40 },
+    });
+    expect(figured.value.quotePlacements[0]).toMatchObject({
+      stitches: 0,
+      hasCustomerArtwork: true,
+      isStitchCountPending: true,
+    });
   });
 
   it('when a design has nothing on it, then there is nothing to price', () => {
     const figured = figureDesign(catalogueWith(), design());
-    expect(!figured.ok && figured.error.fields).toEqual({ 'document.placements': 'Add a border, a name or a motif so there is embroidery to price.' });
+    expect(!figured.ok && figured.error.fields).toEqual({
+      'document.placements': 'Add a border, a name or a motif so there is embroidery to price.',
+    });
   });
 
   it('when the garment is knit, napped and for babies, then the advice is cut-away with a topping and a soft back, and the cautions start under 3', () => {
@@ -206,7 +313,11 @@ describe('figureDesign', () => {
     if (!figured.ok) throw new Error(figured.error.message);
     const { stabilizer, cautions } = figured.value;
     expect(stabilizer).toMatchObject({ backing: 'cutaway', topping: 'water-soluble' });
-    expect(stabilizer.messages.map((m) => m.code)).toEqual(['stabilizer.cutaway', 'stabilizer.water-soluble-topping', 'stabilizer.soft-back-cover']);
+    expect(stabilizer.messages.map((m) => m.code)).toEqual([
+      'stabilizer.cutaway',
+      'stabilizer.water-soluble-topping',
+      'stabilizer.soft-back-cover',
+    ]);
     expect(cautions.map((m) => m.code)).toEqual(['caution.thread-ends', 'caution.local-rules']);
   });
 
@@ -218,6 +329,9 @@ describe('figureDesign', () => {
     expect(minutesOf('sewing')).toBeCloseTo(totals.stitches / 650, 9);
     expect(minutesOf('hoopings')).toBe(16);
     expect(minutesOf('setup')).toBe(10);
-    expect(runMinutes.totalMinutes).toBeCloseTo(runMinutes.items.reduce((sum, item) => sum + item.minutes, 0), 9);
+    expect(runMinutes.totalMinutes).toBeCloseTo(
+      runMinutes.items.reduce((sum, item) => sum + item.minutes, 0),
+      9,
+    );
   });
 });

@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { orderStatuses, type OrderStatus } from '../../../server/src/contracts/order-status.ts';
-import { availableOrderActions, finalStatuses, orderActions, planOrderMove, type OrderAction, type OrderActor } from '../../../server/src/modules/orders/order-flow.ts';
+import {
+  availableOrderActions,
+  finalStatuses,
+  orderActions,
+  planOrderMove,
+  type OrderAction,
+  type OrderActor,
+} from '../../../server/src/modules/orders/order-flow.ts';
 
 const actors: OrderActor[] = ['customer', 'staff', 'owner', 'system'];
 
@@ -56,7 +63,8 @@ describe('the order state machine', () => {
   }
 
   it('when an order is cancelled or refunded, then no one can move it again', () => {
-    for (const status of finalStatuses) for (const actor of actors) expect(availableOrderActions(status, actor)).toEqual([]);
+    for (const status of finalStatuses)
+      for (const actor of actors) expect(availableOrderActions(status, actor)).toEqual([]);
   });
 
   it('when the studio looks at an approved proof, then charging and cancelling are its choices', () => {
@@ -65,6 +73,9 @@ describe('the order state machine', () => {
   });
 
   it('when a customer tries to cancel after the charge, then the reason says to ask for a refund instead', () => {
-    expect(planOrderMove('in_production', 'cancel', 'staff')).toMatchObject({ ok: false, reason: expect.stringContaining('refund') });
+    expect(planOrderMove('in_production', 'cancel', 'staff')).toMatchObject({
+      ok: false,
+      reason: expect.stringContaining('refund'),
+    });
   });
 });

@@ -2,7 +2,12 @@ import { describe, expect, it } from 'vitest';
 import { figureDesign } from '../../../server/src/modules/quotes/design-figures.ts';
 import { sheetBorderPlan } from '../../../server/src/modules/production/production-sheet-hoopings.ts';
 import { formatLengthPlain } from '../../../server/src/modules/production/production-sheet-pdf-kit.ts';
-import { templateArea, tileName, tileTemplate, TILE_OVERLAP_MM } from '../../../server/src/modules/production/production-sheet-pdf-templates.ts';
+import {
+  templateArea,
+  tileName,
+  tileTemplate,
+  TILE_OVERLAP_MM,
+} from '../../../server/src/modules/production/production-sheet-pdf-templates.ts';
 import type { QuoteCatalogue } from '../../../server/src/modules/quotes/quote-catalogue.ts';
 import { letteringOutline } from '../../../server/src/modules/production/production-sheet-outlines.ts';
 import { itemTemplate } from '../../../server/src/modules/production/production-sheet-templates.ts';
@@ -10,8 +15,18 @@ import type { SheetPlacement } from '../../../server/src/contracts/production-sh
 import { loadShippedFont } from '../engine/support/load-font.ts';
 
 const daisyChain = {
-  slug: 'daisy-chain', name: 'Daisy chain', kind: 'border' as const, widthMm: 180, heightMm: 40, gapMm: 0,
-  run: 460, satin: 3420, fill: 500, colourCount: 3, minScalePct: 90, maxScalePct: 110,
+  slug: 'daisy-chain',
+  name: 'Daisy chain',
+  kind: 'border' as const,
+  widthMm: 180,
+  heightMm: 40,
+  gapMm: 0,
+  run: 460,
+  satin: 3420,
+  fill: 500,
+  colourCount: 3,
+  minScalePct: 90,
+  maxScalePct: 110,
 };
 const catalogue: QuoteCatalogue = {
   garment: { id: 3, slug: 'bishop-dress', name: 'Bishop dress', fabricType: 'woven', isNapped: false, minAgeMonths: 6 },
@@ -25,7 +40,17 @@ const catalogue: QuoteCatalogue = {
 function planFor(run: 'front' | 'circumference') {
   const figured = figureDesign(catalogue, {
     version: 1,
-    placements: [{ id: 'hem', kind: 'border', zone: 'hem', motif: 'daisy-chain', run, hemOffsetMm: 44.45, threads: ['WB-118', 'WB-101', 'WB-103'] }],
+    placements: [
+      {
+        id: 'hem',
+        kind: 'border',
+        zone: 'hem',
+        motif: 'daisy-chain',
+        run,
+        hemOffsetMm: 44.45,
+        threads: ['WB-118', 'WB-101', 'WB-103'],
+      },
+    ],
   });
   if (!figured.ok) throw new Error(figured.error.message);
   return sheetBorderPlan(figured.value.placements[0].border!, 40 * (173 / 180), 44.45);

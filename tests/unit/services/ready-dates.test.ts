@@ -17,7 +17,11 @@ describe('ready dates', () => {
   });
 
   it('when the lead time is 10 working days, then a rush takes half of it, rounded up', () => {
-    expect(workOutReadyDates('2026-12-01', 10)).toEqual({ leadTimeDays: 10, earliestReadyDate: '2026-12-15', earliestRushDate: '2026-12-08' });
+    expect(workOutReadyDates('2026-12-01', 10)).toEqual({
+      leadTimeDays: 10,
+      earliestReadyDate: '2026-12-15',
+      earliestRushDate: '2026-12-08',
+    });
     expect(workOutReadyDates('2026-12-01', 7).earliestRushDate).toBe('2026-12-07');
   });
 

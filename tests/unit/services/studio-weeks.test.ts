@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { bookMachineHours, dueDateOf, sumRevenueByWeek, weekStartOf } from '../../../server/src/modules/studio/studio-weeks.ts';
+import {
+  bookMachineHours,
+  dueDateOf,
+  sumRevenueByWeek,
+  weekStartOf,
+} from '../../../server/src/modules/studio/studio-weeks.ts';
 
 // 2 December 2026 is a Wednesday (checked against a printed 2026 calendar: 1 Dec is a Tuesday).
 const wednesday = new Date('2026-12-02T15:00:00Z');

@@ -16,7 +16,11 @@ export function ErrorNotice({ message, onRetry }: { message: string; onRetry?: (
     <div role="alert" className="rounded-card border border-madder-500/40 bg-madder-50 p-5 text-madder-700">
       <p>{message}</p>
       {onRetry && (
-        <button type="button" onClick={onRetry} className="mt-3 rounded-full bg-madder-600 px-4 py-2 text-sm font-medium text-white hover:bg-madder-700">
+        <button
+          type="button"
+          onClick={onRetry}
+          className="mt-3 rounded-full bg-madder-600 px-4 py-2 text-sm font-medium text-white hover:bg-madder-700"
+        >
           Try again
         </button>
       )}

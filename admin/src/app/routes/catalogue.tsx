@@ -63,7 +63,15 @@ function formTitle(open: OpenForm): string {
 }
 
 /** Edit and retire, for one row of a list. */
-function RowActions({ kind, row, onEdit }: { kind: CatalogueKind; row: { id: number; name: string; isActive: boolean }; onEdit: () => void }) {
+function RowActions({
+  kind,
+  row,
+  onEdit,
+}: {
+  kind: CatalogueKind;
+  row: { id: number; name: string; isActive: boolean };
+  onEdit: () => void;
+}) {
   return (
     <>
       <button type="button" className={smallButtonClassName} aria-label={`Edit ${row.name}`} onClick={onEdit}>
@@ -87,14 +95,24 @@ export function CataloguePage() {
         <h1 className="text-2xl font-semibold">Catalogue</h1>
         <nav aria-label="Catalogue sections" className="flex flex-wrap gap-1 text-sm">
           {sections.map((section) => (
-            <a key={section.id} href={`#${section.id}`} className="rounded-full border border-linen-300 bg-white px-3 py-1.5 hover:bg-linen-100">
+            <a
+              key={section.id}
+              href={`#${section.id}`}
+              className="rounded-full border border-linen-300 bg-white px-3 py-1.5 hover:bg-linen-100"
+            >
               {section.label}
             </a>
           ))}
         </nav>
       </div>
 
-      <CataloguePanel id="garments" title="Garments" note="Retired garments leave the shop; designs and orders made on them keep them." addLabel="Add garment" onAdd={() => setOpen({ form: 'new-garment' })}>
+      <CataloguePanel
+        id="garments"
+        title="Garments"
+        note="Retired garments leave the shop; designs and orders made on them keep them."
+        addLabel="Add garment"
+        onAdd={() => setOpen({ form: 'new-garment' })}
+      >
         {garments.isPending ? (
           <Loading label="Opening the garments…" />
         ) : garments.isError ? (
@@ -134,32 +152,56 @@ export function CataloguePage() {
             )}
           </CataloguePanel>
           <div className="grid gap-6 lg:grid-cols-2">
-            <CataloguePanel id="lettering" title="Lettering" note="Only fonts shipped with the shop can be offered." addLabel="Add font" onAdd={() => setOpen({ form: 'font' })}>
+            <CataloguePanel
+              id="lettering"
+              title="Lettering"
+              note="Only fonts shipped with the shop can be offered."
+              addLabel="Add font"
+              onAdd={() => setOpen({ form: 'font' })}
+            >
               {catalogue.data.fonts.length ? (
                 <LetteringSamples
                   fonts={catalogue.data.fonts}
-                  renderActions={(font) => <RowActions kind="fonts" row={font} onEdit={() => setOpen({ form: 'font', font })} />}
+                  renderActions={(font) => (
+                    <RowActions kind="fonts" row={font} onEdit={() => setOpen({ form: 'font', font })} />
+                  )}
                 />
               ) : (
                 <EmptyState title="No lettering fonts yet." />
               )}
             </CataloguePanel>
-            <CataloguePanel id="hoops" title="Hoops" note="Sewing fields, drawn to the same scale." addLabel="Add hoop" onAdd={() => setOpen({ form: 'hoop' })}>
+            <CataloguePanel
+              id="hoops"
+              title="Hoops"
+              note="Sewing fields, drawn to the same scale."
+              addLabel="Add hoop"
+              onAdd={() => setOpen({ form: 'hoop' })}
+            >
               {catalogue.data.hoops.length ? (
                 <HoopFields
                   hoops={catalogue.data.hoops}
-                  renderActions={(hoop) => <RowActions kind="hoops" row={hoop} onEdit={() => setOpen({ form: 'hoop', hoop })} />}
+                  renderActions={(hoop) => (
+                    <RowActions kind="hoops" row={hoop} onEdit={() => setOpen({ form: 'hoop', hoop })} />
+                  )}
                 />
               ) : (
                 <EmptyState title="No hoops yet." />
               )}
             </CataloguePanel>
           </div>
-          <CataloguePanel id="threads" title="Thread palette" note={`${threads.filter((t) => t.isActive).length} colours on the shelf.`} addLabel="Add thread" onAdd={() => setOpen({ form: 'thread' })}>
+          <CataloguePanel
+            id="threads"
+            title="Thread palette"
+            note={`${threads.filter((t) => t.isActive).length} colours on the shelf.`}
+            addLabel="Add thread"
+            onAdd={() => setOpen({ form: 'thread' })}
+          >
             {threads.length ? (
               <ThreadPalette
                 threads={threads}
-                renderActions={(thread) => <RowActions kind="threads" row={thread} onEdit={() => setOpen({ form: 'thread', thread })} />}
+                renderActions={(thread) => (
+                  <RowActions kind="threads" row={thread} onEdit={() => setOpen({ form: 'thread', thread })} />
+                )}
               />
             ) : (
               <EmptyState title="No threads yet." />

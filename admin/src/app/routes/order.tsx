@@ -31,18 +31,39 @@ export function OrderPage() {
   return (
     <div className="grid gap-6">
       <div>
-        <Link to={paths.home.href()} className="text-sm text-walnut-500 hover:text-madder-600">← Today</Link>
-        <Link to={paths.orders.href()} className="ml-4 text-sm text-walnut-500 hover:text-madder-600">All orders</Link>
+        <Link to={paths.home.href()} className="text-sm text-walnut-500 hover:text-madder-600">
+          ← Today
+        </Link>
+        <Link to={paths.orders.href()} className="ml-4 text-sm text-walnut-500 hover:text-madder-600">
+          All orders
+        </Link>
         <div className="mt-1 flex flex-wrap items-baseline gap-x-4 gap-y-1">
           <h1 className="text-2xl font-semibold">Order {order.number}</h1>
-          <span className="rounded-full bg-sage-50 px-3 py-1 text-sm font-medium text-sage-700">{statusLabels[order.status]}</span>
-          <Link to={paths.productionSheet.href(order.number)} className="text-sm font-medium text-madder-600 underline hover:text-madder-700">Production sheet</Link>
+          <span className="rounded-full bg-sage-50 px-3 py-1 text-sm font-medium text-sage-700">
+            {statusLabels[order.status]}
+          </span>
+          <Link
+            to={paths.productionSheet.href(order.number)}
+            className="text-sm font-medium text-madder-600 underline hover:text-madder-700"
+          >
+            Production sheet
+          </Link>
         </div>
         <p className="mt-1 text-walnut-700">
-          {order.customer.name} · <a className="underline" href={`mailto:${order.customer.email}`}>{order.customer.email}</a>
-          {order.neededBy && <> · needed by <strong>{day.format(new Date(`${order.neededBy}T12:00:00Z`))}</strong></>}
+          {order.customer.name} ·{' '}
+          <a className="underline" href={`mailto:${order.customer.email}`}>
+            {order.customer.email}
+          </a>
+          {order.neededBy && (
+            <>
+              {' '}
+              · needed by <strong>{day.format(new Date(`${order.neededBy}T12:00:00Z`))}</strong>
+            </>
+          )}
         </p>
-        {order.customerNote && <p className="mt-2 max-w-2xl rounded-lg bg-saffron-100 p-3 text-sm">“{order.customerNote}”</p>}
+        {order.customerNote && (
+          <p className="mt-2 max-w-2xl rounded-lg bg-saffron-100 p-3 text-sm">“{order.customerNote}”</p>
+        )}
       </div>
       <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
         <div className="grid min-w-0 content-start gap-6">
@@ -55,12 +76,24 @@ export function OrderPage() {
                 <li key={item.id} className="flex justify-between gap-3 border-b border-linen-200 pb-2 last:border-0">
                   <span>
                     <span className="font-medium">{item.designName}</span>
-                    <span className="block text-walnut-500">{item.description} × {item.quantity}</span>
+                    <span className="block text-walnut-500">
+                      {item.description} × {item.quantity}
+                    </span>
                     {item.artwork.length > 0 && (
                       <span className="mt-2 flex flex-wrap gap-3">
                         {item.artwork.map((picture) => (
-                          <a key={picture.uploadId} href={picture.imageUrl} target="_blank" rel="noreferrer" className="grid w-28 gap-1 text-xs text-madder-600 hover:underline">
-                            <img src={picture.imageUrl} alt={`The customer's picture for the ${picture.zone}, ${picture.widthMm} mm wide`} className="h-24 w-28 rounded-md border border-linen-300 bg-white object-contain p-1" />
+                          <a
+                            key={picture.uploadId}
+                            href={picture.imageUrl}
+                            target="_blank"
+                            rel="noreferrer"
+                            className="grid w-28 gap-1 text-xs text-madder-600 hover:underline"
+                          >
+                            <img
+                              src={picture.imageUrl}
+                              alt={`The customer's picture for the ${picture.zone}, ${picture.widthMm} mm wide`}
+                              className="h-24 w-28 rounded-md border border-linen-300 bg-white object-contain p-1"
+                            />
                             Their picture · {picture.zone}, {picture.widthMm} mm wide (to digitize)
                           </a>
                         ))}
@@ -79,7 +112,9 @@ export function OrderPage() {
         <div className="grid min-w-0 content-start gap-6">
           <Panel title="Proofs">
             <div className="grid gap-4">
-              {studioActions.includes('send_proof') && <SendProofForm number={order.number} versionCount={proofs.length} />}
+              {studioActions.includes('send_proof') && (
+                <SendProofForm number={order.number} versionCount={proofs.length} />
+              )}
               <ProofVersions proofs={proofs} />
             </div>
           </Panel>

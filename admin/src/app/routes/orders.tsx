@@ -8,12 +8,21 @@ import { useBoardQuery } from '../../features/orders/hooks/use-board-query.ts';
 
 function ViewSwitch({ view, onChange }: { view: 'list' | 'calendar'; onChange: (view: 'list' | 'calendar') => void }) {
   const option = (value: 'list' | 'calendar', label: string) => (
-    <button type="button" aria-pressed={view === value} onClick={() => onChange(value)} className={`min-h-10 rounded-full px-4 text-sm ${view === value ? 'bg-walnut-900 text-linen-100' : 'text-walnut-700 hover:bg-linen-100'}`}>
+    <button
+      type="button"
+      aria-pressed={view === value}
+      onClick={() => onChange(value)}
+      className={`min-h-10 rounded-full px-4 text-sm ${view === value ? 'bg-walnut-900 text-linen-100' : 'text-walnut-700 hover:bg-linen-100'}`}
+    >
       {label}
     </button>
   );
   return (
-    <div role="group" aria-label="Show the orders as" className="flex gap-1 rounded-full border border-linen-300 bg-white p-1">
+    <div
+      role="group"
+      aria-label="Show the orders as"
+      className="flex gap-1 rounded-full border border-linen-300 bg-white p-1"
+    >
       {option('list', 'List')}
       {option('calendar', 'Due dates')}
     </div>
@@ -42,16 +51,32 @@ export function OrdersPage() {
           ) : board.isError ? (
             <ErrorNotice message={board.error.message} onRetry={() => void board.refetch()} />
           ) : board.data.total === 0 ? (
-            <EmptyState title="No orders match.">Try fewer status chips, a wider date range or another search.</EmptyState>
+            <EmptyState title="No orders match.">
+              Try fewer status chips, a wider date range or another search.
+            </EmptyState>
           ) : (
-            <div className={`grid gap-4 transition-opacity ${board.isPlaceholderData ? 'opacity-60' : ''}`} aria-busy={board.isFetching}>
+            <div
+              className={`grid gap-4 transition-opacity ${board.isPlaceholderData ? 'opacity-60' : ''}`}
+              aria-busy={board.isFetching}
+            >
               {query.customer && board.data.rows[0] && (
                 <p className="flex flex-wrap items-center gap-2 text-sm">
                   Only the orders of <strong>{board.data.rows[0].customer.name}</strong>
-                  <button type="button" onClick={() => update({ customer: undefined })} className="rounded-full border border-linen-300 px-3 py-1 hover:bg-linen-100">Show every customer</button>
+                  <button
+                    type="button"
+                    onClick={() => update({ customer: undefined })}
+                    className="rounded-full border border-linen-300 px-3 py-1 hover:bg-linen-100"
+                  >
+                    Show every customer
+                  </button>
                 </p>
               )}
-              <OrderBoardTable rows={board.data.rows} query={query} onSort={(sort, dir) => update({ sort, dir })} onCustomer={(customer) => update({ customer })} />
+              <OrderBoardTable
+                rows={board.data.rows}
+                query={query}
+                onSort={(sort, dir) => update({ sort, dir })}
+                onCustomer={(customer) => update({ customer })}
+              />
               <BoardPager query={query} total={board.data.total} onChange={update} />
             </div>
           )}

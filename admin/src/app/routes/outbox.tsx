@@ -48,19 +48,41 @@ export function OutboxPage() {
             }}
           >
             <div className="grid gap-1">
-              <label htmlFor="outbox-order" className="text-sm font-medium text-walnut-700">Order</label>
-              <input id="outbox-order" value={orderDraft} onChange={(event) => setOrderDraft(event.target.value)} placeholder="WB-1003" className="min-h-10 w-32 rounded-lg border border-linen-300 px-3" />
+              <label htmlFor="outbox-order" className="text-sm font-medium text-walnut-700">
+                Order
+              </label>
+              <input
+                id="outbox-order"
+                value={orderDraft}
+                onChange={(event) => setOrderDraft(event.target.value)}
+                placeholder="WB-1003"
+                className="min-h-10 w-32 rounded-lg border border-linen-300 px-3"
+              />
             </div>
             <div className="grid gap-1">
-              <label htmlFor="outbox-status" className="text-sm font-medium text-walnut-700">Status</label>
-              <select id="outbox-status" value={status ?? ''} onChange={(event) => setFilter({ status: event.target.value || undefined })} className="min-h-10 rounded-lg border border-linen-300 bg-white px-2">
+              <label htmlFor="outbox-status" className="text-sm font-medium text-walnut-700">
+                Status
+              </label>
+              <select
+                id="outbox-status"
+                value={status ?? ''}
+                onChange={(event) => setFilter({ status: event.target.value || undefined })}
+                className="min-h-10 rounded-lg border border-linen-300 bg-white px-2"
+              >
                 <option value="">Any</option>
                 {mailStatus.options.map((option) => (
-                  <option key={option} value={option}>{mailStatusLabel(option)}</option>
+                  <option key={option} value={option}>
+                    {mailStatusLabel(option)}
+                  </option>
                 ))}
               </select>
             </div>
-            <button type="submit" className="min-h-10 rounded-full border border-linen-300 px-4 text-sm hover:bg-linen-100">Filter</button>
+            <button
+              type="submit"
+              className="min-h-10 rounded-full border border-linen-300 px-4 text-sm hover:bg-linen-100"
+            >
+              Filter
+            </button>
           </form>
           {outbox.isPending ? (
             <Loading label="Opening the outbox…" />
@@ -75,17 +97,35 @@ export function OutboxPage() {
                 <OutboxList messages={outbox.data.messages} hrefOf={hrefOf} openId={openId} />
               </div>
               <nav aria-label="Outbox pages" className="mt-3 flex items-center justify-between text-sm">
-                <button type="button" disabled={page <= 1} onClick={() => setFilter({ page: String(page - 1) })} className="min-h-10 rounded-full border border-linen-300 px-4 disabled:opacity-50">Newer</button>
+                <button
+                  type="button"
+                  disabled={page <= 1}
+                  onClick={() => setFilter({ page: String(page - 1) })}
+                  className="min-h-10 rounded-full border border-linen-300 px-4 disabled:opacity-50"
+                >
+                  Newer
+                </button>
                 <span>
                   Page {page} of {pageCount} · {outbox.data.total} {outbox.data.total === 1 ? 'message' : 'messages'}
                 </span>
-                <button type="button" disabled={page >= pageCount} onClick={() => setFilter({ page: String(page + 1) })} className="min-h-10 rounded-full border border-linen-300 px-4 disabled:opacity-50">Older</button>
+                <button
+                  type="button"
+                  disabled={page >= pageCount}
+                  onClick={() => setFilter({ page: String(page + 1) })}
+                  className="min-h-10 rounded-full border border-linen-300 px-4 disabled:opacity-50"
+                >
+                  Older
+                </button>
               </nav>
             </>
           )}
         </section>
         <section aria-label="Message" className="min-w-0 rounded-card border border-linen-200 bg-white p-5">
-          {openId && Number.isInteger(openId) ? <OutboxMessage key={openId} id={openId} /> : <EmptyState title="Choose a message to read it." />}
+          {openId && Number.isInteger(openId) ? (
+            <OutboxMessage key={openId} id={openId} />
+          ) : (
+            <EmptyState title="Choose a message to read it." />
+          )}
         </section>
       </div>
     </div>

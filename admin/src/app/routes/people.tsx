@@ -16,11 +16,22 @@ export function PeoplePage() {
     <div className="grid min-w-0 gap-6">
       <div>
         <h1 className="text-2xl font-semibold">People</h1>
-        <p className="text-sm text-walnut-500">Add someone to the studio team to let them into this app; the change applies on their next click.</p>
+        <p className="text-sm text-walnut-500">
+          Add someone to the studio team to let them into this app; the change applies on their next click.
+        </p>
       </div>
       <section className="min-w-0 rounded-card border border-linen-200 bg-white p-5">
-        <label htmlFor="people-search" className="text-sm font-medium text-walnut-700">Find a person</label>
-        <input id="people-search" type="search" value={search} onChange={(event) => setSearch(event.target.value)} placeholder="Name or e-mail" className="mb-4 mt-1 block min-h-10 w-full max-w-sm rounded-lg border border-linen-300 px-3" />
+        <label htmlFor="people-search" className="text-sm font-medium text-walnut-700">
+          Find a person
+        </label>
+        <input
+          id="people-search"
+          type="search"
+          value={search}
+          onChange={(event) => setSearch(event.target.value)}
+          placeholder="Name or e-mail"
+          className="mb-4 mt-1 block min-h-10 w-full max-w-sm rounded-lg border border-linen-300 px-3"
+        />
         {people.isPending ? (
           <Loading label="Finding people…" />
         ) : people.isError ? (

@@ -13,7 +13,8 @@ export function PricingPage() {
   const startDraft = useStartDraft();
   const ruleSets = list.data?.ruleSets ?? [];
   // The draft when there is one, else the published list.
-  const selectedId = chosenId ?? (ruleSets.find((r) => r.status === 'draft') ?? ruleSets.find((r) => r.status === 'published'))?.id;
+  const selectedId =
+    chosenId ?? (ruleSets.find((r) => r.status === 'draft') ?? ruleSets.find((r) => r.status === 'published'))?.id;
   const detail = useRuleSet(selectedId);
 
   if (list.isPending) return <Loading label="Opening the price lists…" />;
@@ -26,7 +27,9 @@ export function PricingPage() {
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div>
           <h1 className="text-2xl font-semibold">Pricing</h1>
-          <p className="text-sm text-walnut-500">Price lists are versions: change a draft, see what it does to real quotes, then publish it.</p>
+          <p className="text-sm text-walnut-500">
+            Price lists are versions: change a draft, see what it does to real quotes, then publish it.
+          </p>
         </div>
         {canEdit && !hasDraft && (
           <Button
@@ -40,7 +43,11 @@ export function PricingPage() {
       {startDraft.isError && <ErrorNotice message={startDraft.error.message} />}
       <section className="min-w-0 rounded-card border border-linen-200 bg-white p-5">
         <h2 className="mb-3 text-lg font-semibold">Versions</h2>
-        {ruleSets.length === 0 ? <EmptyState title="No price lists yet." /> : <RuleSetTable ruleSets={ruleSets} selectedId={selectedId} onSelect={setChosenId} />}
+        {ruleSets.length === 0 ? (
+          <EmptyState title="No price lists yet." />
+        ) : (
+          <RuleSetTable ruleSets={ruleSets} selectedId={selectedId} onSelect={setChosenId} />
+        )}
       </section>
       {selectedId !== undefined && (
         <section className="min-w-0 rounded-card border border-linen-200 bg-white p-5">
@@ -51,10 +58,15 @@ export function PricingPage() {
           ) : (
             <>
               <h2 className="mb-4 text-lg font-semibold">
-                Version {detail.data.ruleSet.version} <span className="font-normal text-walnut-500">· {detail.data.ruleSet.status}</span>
+                Version {detail.data.ruleSet.version}{' '}
+                <span className="font-normal text-walnut-500">· {detail.data.ruleSet.status}</span>
               </h2>
               {/* Keyed by id and status, so the form starts afresh on another version or once a draft is published. */}
-              <RuleSetEditor key={`${detail.data.ruleSet.id}-${detail.data.ruleSet.status}`} ruleSet={detail.data.ruleSet} canEdit={canEdit} />
+              <RuleSetEditor
+                key={`${detail.data.ruleSet.id}-${detail.data.ruleSet.status}`}
+                ruleSet={detail.data.ruleSet}
+                canEdit={canEdit}
+              />
             </>
           )}
         </section>

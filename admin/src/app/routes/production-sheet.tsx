@@ -5,7 +5,10 @@ import { ApiError } from '@ui/api-client.ts';
 import { Button, ButtonLink } from '@ui/components/button.tsx';
 import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
 import { formatLength } from '@ui/format.ts';
-import { productionSheetPdfHref, useProductionSheet } from '../../features/production-sheet/api/get-production-sheet.ts';
+import {
+  productionSheetPdfHref,
+  useProductionSheet,
+} from '../../features/production-sheet/api/get-production-sheet.ts';
 import { HemPlanPicture } from '../../features/production-sheet/components/hem-plan-picture.tsx';
 import { ThreadSequence } from '../../features/production-sheet/components/thread-sequence.tsx';
 import { CheckSquare, TrueSizeTemplate } from '../../features/production-sheet/components/true-size-template.tsx';
@@ -22,7 +25,13 @@ const papers: { value: PaperSize; label: string }[] = [
 const printableWidthMm: Record<PaperSize, number> = { letter: 195.9, a4: 190 };
 const printableHeightMm: Record<PaperSize, number> = { letter: 259.4, a4: 277 };
 
-const day = new Intl.DateTimeFormat('en-US', { weekday: 'short', month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
+const day = new Intl.DateTimeFormat('en-US', {
+  weekday: 'short',
+  month: 'short',
+  day: 'numeric',
+  year: 'numeric',
+  timeZone: 'UTC',
+});
 const mm1 = (mm: number) => `${Number(Math.abs(mm).toFixed(1))} mm`;
 /** The inch half of formatLength ("3 ⅜ in"), for figures shown in mm to a tenth. */
 const inchesOf = (mm: number) => formatLength(Math.abs(mm)).split(' · ')[1];
@@ -51,7 +60,8 @@ export function ProductionSheetPage() {
   );
   if (sheet.isPending) return <Loading label={`Preparing the production sheet for ${number}…`} />;
   if (sheet.isError) {
-    const isExpected = sheet.error instanceof ApiError && (sheet.error.kind === 'conflict' || sheet.error.kind === 'not-found');
+    const isExpected =
+      sheet.error instanceof ApiError && (sheet.error.kind === 'conflict' || sheet.error.kind === 'not-found');
     return (
       <div className="grid gap-4">
         {back}
@@ -74,19 +84,38 @@ export function ProductionSheetPage() {
         {back}
         <div className="flex flex-wrap items-baseline gap-x-4 gap-y-1">
           <h1 className="text-2xl font-semibold">Production sheet · {data.order.number}</h1>
-          <span className="rounded-full bg-sage-50 px-3 py-1 text-sm font-medium text-sage-700">{statusLabels[data.order.status]}</span>
+          <span className="rounded-full bg-sage-50 px-3 py-1 text-sm font-medium text-sage-700">
+            {statusLabels[data.order.status]}
+          </span>
         </div>
         <p className="text-walnut-700">
           {data.order.designName} for {data.order.customerName}
-          {data.order.neededBy && <> · needed by <strong>{day.format(new Date(`${data.order.neededBy}T12:00:00Z`))}</strong></>}
+          {data.order.neededBy && (
+            <>
+              {' '}
+              · needed by <strong>{day.format(new Date(`${data.order.neededBy}T12:00:00Z`))}</strong>
+            </>
+          )}
         </p>
-        {data.order.customerNote && <p className="max-w-2xl rounded-lg bg-saffron-100 p-3 text-sm">“{data.order.customerNote}”</p>}
+        {data.order.customerNote && (
+          <p className="max-w-2xl rounded-lg bg-saffron-100 p-3 text-sm">“{data.order.customerNote}”</p>
+        )}
         <div className="screen-only flex flex-wrap items-center gap-3">
           <fieldset className="flex items-center gap-1 rounded-full border border-linen-300 bg-white p-1">
             <legend className="sr-only">Paper size</legend>
             {papers.map((option) => (
-              <label key={option.value} className={`cursor-pointer rounded-full px-4 py-1.5 text-sm has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-saffron-500 ${paper === option.value ? 'bg-walnut-900 text-linen-100' : ''}`}>
-                <input type="radio" name="paper" value={option.value} checked={paper === option.value} onChange={() => setPaper(option.value)} className="sr-only" />
+              <label
+                key={option.value}
+                className={`cursor-pointer rounded-full px-4 py-1.5 text-sm has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-saffron-500 ${paper === option.value ? 'bg-walnut-900 text-linen-100' : ''}`}
+              >
+                <input
+                  type="radio"
+                  name="paper"
+                  value={option.value}
+                  checked={paper === option.value}
+                  onChange={() => setPaper(option.value)}
+                  className="sr-only"
+                />
                 {option.label}
               </label>
             ))}
@@ -101,15 +130,19 @@ export function ProductionSheetPage() {
       </div>
 
       <Garment sheet={data} />
-      {data.placements.map((placement) => placement.border && <HoopingPlan key={placement.id} placement={placement} border={placement.border} />)}
+      {data.placements.map(
+        (placement) =>
+          placement.border && <HoopingPlan key={placement.id} placement={placement} border={placement.border} />,
+      )}
       <Section title="Placements and threads">
         <div className="grid gap-5 md:grid-cols-2">
           {data.placements.map((placement) => (
             <div key={placement.id} className="grid content-start gap-2">
               <h3 className="font-semibold">{placement.label}</h3>
               <p className="text-sm text-walnut-500">
-                {formatLength(placement.widthMm)} × {formatLength(placement.heightMm)} · {placement.stitches.toLocaleString('en-US')} stitches ·{' '}
-                {placement.colourChanges} colour changes · {placement.hoopings} hooping{placement.hoopings === 1 ? '' : 's'}
+                {formatLength(placement.widthMm)} × {formatLength(placement.heightMm)} ·{' '}
+                {placement.stitches.toLocaleString('en-US')} stitches · {placement.colourChanges} colour changes ·{' '}
+                {placement.hoopings} hooping{placement.hoopings === 1 ? '' : 's'}
                 {placement.hoop && <> · {placement.hoop.name}</>}
               </p>
               <ThreadSequence threads={placement.threads} />
@@ -129,12 +162,17 @@ export function ProductionSheetPage() {
         </ul>
       </Section>
       {data.templates.map((template) => (
-        <section key={template.id} className="sheet-template grid min-w-0 gap-3 rounded-card border border-linen-200 bg-white p-5">
+        <section
+          key={template.id}
+          className="sheet-template grid min-w-0 gap-3 rounded-card border border-linen-200 bg-white p-5"
+        >
           <div>
             <h2 className="text-lg font-semibold">Template · {template.title}</h2>
             <p className="text-sm text-walnut-500">{template.subtitle}</p>
             {(template.widthMm > printableWidthMm[paper] || template.heightMm > printableHeightMm[paper]) && (
-              <p className="screen-only text-xs text-walnut-500">Larger than the paper: print it from the PDF, which splits it into overlapping tiles.</p>
+              <p className="screen-only text-xs text-walnut-500">
+                Larger than the paper: print it from the PDF, which splits it into overlapping tiles.
+              </p>
             )}
           </div>
           <div className="template-frame overflow-x-auto">
@@ -152,7 +190,11 @@ function Garment({ sheet }: { sheet: ProductionSheet }) {
   return (
     <Section title="Garment">
       <div className="flex items-center gap-4">
-        <span aria-hidden="true" className="print-colour inline-block h-12 w-12 shrink-0 rounded-lg border border-walnut-700" style={{ backgroundColor: garment.colourHex }} />
+        <span
+          aria-hidden="true"
+          className="print-colour inline-block h-12 w-12 shrink-0 rounded-lg border border-walnut-700"
+          style={{ backgroundColor: garment.colourHex }}
+        />
         <p>
           <strong className="font-semibold">{garment.name}</strong> · size {garment.sizeLabel} · {garment.colourName}
           <span className="block text-sm text-walnut-500">
@@ -164,17 +206,27 @@ function Garment({ sheet }: { sheet: ProductionSheet }) {
   );
 }
 
-function HoopingPlan({ placement, border }: { placement: SheetPlacement; border: NonNullable<SheetPlacement['border']> }) {
+function HoopingPlan({
+  placement,
+  border,
+}: {
+  placement: SheetPlacement;
+  border: NonNullable<SheetPlacement['border']>;
+}) {
   return (
     <Section title={`Hooping plan · ${placement.label}`}>
       <p className="mb-3 text-sm text-walnut-700">
-        {border.count} repeats of {formatLength(border.repeatWidthMm)} at {border.scalePct} % {border.isClosed ? 'round the' : 'along the front of the'}{' '}
-        {formatLength(border.runLengthMm)} hem: {border.hoopings.length} hoopings in the {placement.hoop?.name ?? 'hoop'}
-        {border.isRotated && ' (design turned 90° in the hoop)'}. Mark the centre front and a guide line {formatLength(border.hemOffsetMm)} above the hem
-        edge, stitch hooping 1 first, then work outwards.
+        {border.count} repeats of {formatLength(border.repeatWidthMm)} at {border.scalePct} %{' '}
+        {border.isClosed ? 'round the' : 'along the front of the'} {formatLength(border.runLengthMm)} hem:{' '}
+        {border.hoopings.length} hoopings in the {placement.hoop?.name ?? 'hoop'}
+        {border.isRotated && ' (design turned 90° in the hoop)'}. Mark the centre front and a guide line{' '}
+        {formatLength(border.hemOffsetMm)} above the hem edge, stitch hooping 1 first, then work outwards.
       </p>
       <HemPlanPicture border={border} />
-      <p className="mt-1 text-xs text-walnut-500">Circled numbers are the stitching order; figures below them are mm from the centre mark (minus: left as you face the front).</p>
+      <p className="mt-1 text-xs text-walnut-500">
+        Circled numbers are the stitching order; figures below them are mm from the centre mark (minus: left as you face
+        the front).
+      </p>
       <ol className="mt-3 grid gap-1 text-sm">
         {border.hoopings.map((hooping) => (
           <li key={hooping.order} className="flex flex-wrap gap-x-2">
@@ -199,7 +251,10 @@ function Materials({ sheet }: { sheet: ProductionSheet }) {
       <dl className="grid gap-3 text-sm sm:grid-cols-[10rem_1fr]">
         <dt className="font-semibold">Backing</dt>
         <dd>
-          {stabilizer.backingName} <span className="text-walnut-500">(a {stabilizer.density} design, {stabilizer.densityStitchesPerCm2.toFixed(0)} stitches per cm²)</span>
+          {stabilizer.backingName}{' '}
+          <span className="text-walnut-500">
+            (a {stabilizer.density} design, {stabilizer.densityStitchesPerCm2.toFixed(0)} stitches per cm²)
+          </span>
           <ul className="mt-1 grid gap-1 text-walnut-700">
             {stabilizer.messages.map((message) => (
               <li key={message.code}>
@@ -216,8 +271,14 @@ function Materials({ sheet }: { sheet: ProductionSheet }) {
         </dd>
         <dt className="font-semibold">Machine time</dt>
         <dd>
-          About {minutes(runMinutes.totalMinutes)} per garment with setup ({totals.stitches.toLocaleString('en-US')} stitches, {totals.colourChanges} colour
-          changes, {totals.hoopings} hoopings){order.quantity > 1 && <>; all {order.quantity}: about {minutes(runMinutes.orderMinutes)}</>}.
+          About {minutes(runMinutes.totalMinutes)} per garment with setup ({totals.stitches.toLocaleString('en-US')}{' '}
+          stitches, {totals.colourChanges} colour changes, {totals.hoopings} hoopings)
+          {order.quantity > 1 && (
+            <>
+              ; all {order.quantity}: about {minutes(runMinutes.orderMinutes)}
+            </>
+          )}
+          .
           <ul className="mt-1 grid gap-0.5 text-walnut-500">
             {runMinutes.items.map((item) => (
               <li key={item.code}>

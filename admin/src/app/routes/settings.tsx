@@ -13,11 +13,17 @@ export function SettingsPage() {
     <div className="grid min-w-0 max-w-3xl gap-6">
       <div>
         <h1 className="text-2xl font-semibold">Settings</h1>
-        <p className="text-sm text-walnut-500">How fast the studio works: machine time on every quote, due dates and the capacity chart come from here.</p>
+        <p className="text-sm text-walnut-500">
+          How fast the studio works: machine time on every quote, due dates and the capacity chart come from here.
+        </p>
       </div>
       <section className="rounded-card border border-linen-200 bg-white p-5">
         {/* Capacity and lead time feed Today's figures, so they are fetched afresh after a save. */}
-        <SettingsForm settings={settings.data.settings} canEdit={settings.data.canEdit} onSaved={() => void queryClient.invalidateQueries({ queryKey: overviewQuery().queryKey })} />
+        <SettingsForm
+          settings={settings.data.settings}
+          canEdit={settings.data.canEdit}
+          onSaved={() => void queryClient.invalidateQueries({ queryKey: overviewQuery().queryKey })}
+        />
       </section>
     </div>
   );

@@ -8,8 +8,12 @@ import { StatusStrip } from '../../features/overview/components/status-strip.tsx
 import { ActionGroups } from '../../features/overview/components/action-groups.tsx';
 
 // The charting library is most of the studio app's weight, so the charts load in their own chunk.
-const MachineHoursChart = lazy(() => import('../../features/overview/components/machine-hours-chart.tsx').then((m) => ({ default: m.MachineHoursChart })));
-const RevenueChart = lazy(() => import('../../features/overview/components/revenue-chart.tsx').then((m) => ({ default: m.RevenueChart })));
+const MachineHoursChart = lazy(() =>
+  import('../../features/overview/components/machine-hours-chart.tsx').then((m) => ({ default: m.MachineHoursChart })),
+);
+const RevenueChart = lazy(() =>
+  import('../../features/overview/components/revenue-chart.tsx').then((m) => ({ default: m.RevenueChart })),
+);
 import { statusLabels } from '../../lib/order-status-labels.ts';
 
 const dateFormat = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric' });
@@ -23,22 +27,34 @@ export function TodayPage() {
     <div className="grid min-w-0 gap-6">
       <div>
         <h1 className="text-2xl font-semibold">{shopName}</h1>
-        <p className="text-sm text-walnut-500">Today, {dateFormat.format(new Date(`${today}T12:00:00Z`))}: what needs a hand</p>
+        <p className="text-sm text-walnut-500">
+          Today, {dateFormat.format(new Date(`${today}T12:00:00Z`))}: what needs a hand
+        </p>
       </div>
       <ActionGroups groups={actions} orderHref={paths.order.href} />
       <div className="grid min-w-0 gap-6 lg:grid-cols-2">
-        <section aria-labelledby="machine-hours-heading" className="min-w-0 rounded-card border border-linen-200 bg-white p-5">
-          <h2 id="machine-hours-heading" className="text-lg font-semibold">Machine hours booked</h2>
+        <section
+          aria-labelledby="machine-hours-heading"
+          className="min-w-0 rounded-card border border-linen-200 bg-white p-5"
+        >
+          <h2 id="machine-hours-heading" className="text-lg font-semibold">
+            Machine hours booked
+          </h2>
           <p className="mb-3 text-sm text-walnut-500">
-            Orders not yet stitched, in the week they are due (the customer’s date, or {machineHours.leadTimeDays} working days after ordering),
-            against {machineHours.capacityHours} h a week.
+            Orders not yet stitched, in the week they are due (the customer’s date, or {machineHours.leadTimeDays}{' '}
+            working days after ordering), against {machineHours.capacityHours} h a week.
           </p>
           <Suspense fallback={<Loading label="Drawing the chart…" />}>
             <MachineHoursChart machineHours={machineHours} />
           </Suspense>
         </section>
-        <section aria-labelledby="revenue-heading" className="min-w-0 rounded-card border border-linen-200 bg-white p-5">
-          <h2 id="revenue-heading" className="text-lg font-semibold">Takings by week</h2>
+        <section
+          aria-labelledby="revenue-heading"
+          className="min-w-0 rounded-card border border-linen-200 bg-white p-5"
+        >
+          <h2 id="revenue-heading" className="text-lg font-semibold">
+            Takings by week
+          </h2>
           <p className="mb-3 text-sm text-walnut-500">Cards charged, less refunds, in the week the money moved.</p>
           <Suspense fallback={<Loading label="Drawing the chart…" />}>
             <RevenueChart revenue={revenue} />
@@ -71,11 +87,18 @@ export function TodayPage() {
                   {recentOrders.map((order) => (
                     <tr key={order.id} className="border-t border-linen-200">
                       <td className="py-2 font-medium">
-                        <Link to={paths.order.href(order.number)} className="text-madder-700 underline-offset-2 hover:underline">{order.number}</Link>
+                        <Link
+                          to={paths.order.href(order.number)}
+                          className="text-madder-700 underline-offset-2 hover:underline"
+                        >
+                          {order.number}
+                        </Link>
                       </td>
                       <td className="py-2">{order.customerName}</td>
                       <td className="py-2">{statusLabels[order.status]}</td>
-                      <td className="py-2">{order.neededBy ? dateFormat.format(new Date(`${order.neededBy}T12:00:00Z`)) : '—'}</td>
+                      <td className="py-2">
+                        {order.neededBy ? dateFormat.format(new Date(`${order.neededBy}T12:00:00Z`)) : '—'}
+                      </td>
                       <td className="py-2 text-right tabular-nums">{formatMoney(order.totalCents, order.currency)}</td>
                     </tr>
                   ))}

@@ -27,11 +27,21 @@ export interface ArtworkWrite {
   createdAt: Date;
 }
 
-const metaColumns = (db: Db) => ['id', 'original_name', 'byte_size', 'width_px', 'height_px', 'created_at', db.raw('sanitized_svg IS NOT NULL AS is_svg')];
+const metaColumns = (db: Db) => [
+  'id',
+  'original_name',
+  'byte_size',
+  'width_px',
+  'height_px',
+  'created_at',
+  db.raw('sanitized_svg IS NOT NULL AS is_svg'),
+];
 
 /** Rows the owner may see: an account's own, or a visitor's unclaimed ones. */
 function ownedBy(query: Knex.QueryBuilder, owner: ArtworkOwner): Knex.QueryBuilder {
-  return 'userId' in owner ? query.where({ owner_user_id: owner.userId }) : query.whereNull('owner_user_id').andWhere({ session_key: owner.sessionKey });
+  return 'userId' in owner
+    ? query.where({ owner_user_id: owner.userId })
+    : query.whereNull('owner_user_id').andWhere({ session_key: owner.sessionKey });
 }
 
 function toMeta(row: Record<string, unknown>): ArtworkMeta {
@@ -69,7 +79,11 @@ export async function findOwnedArtwork(db: Db, owner: ArtworkOwner, id: number):
   return row ? toMeta(row) : undefined;
 }
 
-export async function findOwnedArtworkImage(db: Db, owner: ArtworkOwner, id: number): Promise<ArtworkImage | undefined> {
+export async function findOwnedArtworkImage(
+  db: Db,
+  owner: ArtworkOwner,
+  id: number,
+): Promise<ArtworkImage | undefined> {
   const row = await ownedBy(db('artwork_uploads').select('sanitized_svg', 'png').where({ id }), owner).first();
   if (!row) return undefined;
   return row.sanitized_svg !== null ? { kind: 'svg', svg: row.sanitized_svg } : { kind: 'raster', png: row.png };
@@ -83,7 +97,10 @@ export async function countOwnedArtwork(db: Db, owner: ArtworkOwner): Promise<nu
 /** The owner's uploads, newest first. */
 export async function listOwnedArtwork(db: Db, owner: ArtworkOwner, limit: number): Promise<ArtworkMeta[]> {
   const rows = await ownedBy(db('artwork_uploads').select(metaColumns(db)), owner)
-    .orderBy([{ column: 'created_at', order: 'desc' }, { column: 'id', order: 'desc' }])
+    .orderBy([
+      { column: 'created_at', order: 'desc' },
+      { column: 'id', order: 'desc' },
+    ])
     .limit(limit);
   return rows.map(toMeta);
 }
@@ -91,7 +108,10 @@ export async function listOwnedArtwork(db: Db, owner: ArtworkOwner, limit: numbe
 /** What a quote needs of the uploads a design names: an SVG's text, or a raster's proportions. Others' are left out. */
 export async function loadOwnedArtworkForQuote(db: Db, owner: ArtworkOwner, ids: number[]) {
   if (ids.length === 0) return [];
-  const rows: Record<string, unknown>[] = await ownedBy(db('artwork_uploads').select('id', 'sanitized_svg', 'width_px', 'height_px').whereIn('id', ids), owner);
+  const rows: Record<string, unknown>[] = await ownedBy(
+    db('artwork_uploads').select('id', 'sanitized_svg', 'width_px', 'height_px').whereIn('id', ids),
+    owner,
+  );
   return rows.map((row) => ({
     id: Number(row.id),
     svgText: (row.sanitized_svg as string | null) ?? null,
@@ -102,5 +122,8 @@ export async function loadOwnedArtworkForQuote(db: Db, owner: ArtworkOwner, ids:
 
 /** Hands a visitor's unclaimed uploads to the account they have just signed in to; returns how many. */
 export async function claimSessionArtwork(db: Db, sessionKey: string, userId: number): Promise<number> {
-  return db('artwork_uploads').whereNull('owner_user_id').andWhere({ session_key: sessionKey }).update({ owner_user_id: userId, session_key: null });
+  return db('artwork_uploads')
+    .whereNull('owner_user_id')
+    .andWhere({ session_key: sessionKey })
+    .update({ owner_user_id: userId, session_key: null });
 }

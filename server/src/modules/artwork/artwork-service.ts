@@ -38,7 +38,10 @@ const MAX_NAME_LENGTH = 255;
 export function createArtworkService(deps: { db: Db; now: () => Date }) {
   const { db } = deps;
 
-  async function upload(owner: ArtworkOwner, file: { buffer: Buffer; originalName: string } | undefined): Promise<Result<{ artwork: ArtworkUpload }>> {
+  async function upload(
+    owner: ArtworkOwner,
+    file: { buffer: Buffer; originalName: string } | undefined,
+  ): Promise<Result<{ artwork: ArtworkUpload }>> {
     if (!file) return failure('invalid', 'Choose a picture to upload.', { file: 'Choose a picture to upload.' });
     const isVisitor = 'sessionKey' in owner;
     if ((await countOwnedArtwork(db, owner)) >= (isVisitor ? MAX_VISITOR_UPLOADS : MAX_ACCOUNT_UPLOADS)) {
@@ -51,7 +54,10 @@ export function createArtworkService(deps: { db: Db; now: () => Date }) {
     const inspected = await inspectUpload(file.buffer, ['svg', 'png', 'jpeg']);
     if (!inspected.ok) return { ok: false, error: { ...inspected.error, fields: { file: inspected.error.message } } };
     const clean = inspected.value;
-    const image: ArtworkImage = clean.kind === 'svg' ? { kind: 'svg', svg: withIntrinsicSize(clean.svg, clean.widthPx, clean.heightPx) } : { kind: 'raster', png: clean.png };
+    const image: ArtworkImage =
+      clean.kind === 'svg'
+        ? { kind: 'svg', svg: withIntrinsicSize(clean.svg, clean.widthPx, clean.heightPx) }
+        : { kind: 'raster', png: clean.png };
     const id = await insertArtwork(db, owner, {
       originalName: nameOf(file.originalName),
       // What is stored, not what was sent: rasters are kept as PNG whatever they came as.
@@ -104,7 +110,11 @@ function nameOf(raw: string): string {
  * coordinates, so stitch estimates are unchanged.
  */
 export function withIntrinsicSize(svg: string, widthPx: number, heightPx: number): string {
-  return svg.replace(/<svg\b[^>]*>/i, (root) => root.replace(/\s(?:width|height)\s*=\s*("[^"]*"|'[^']*')/gi, '').replace(/^<svg\b/i, `<svg width="${widthPx}" height="${heightPx}"`));
+  return svg.replace(/<svg\b[^>]*>/i, (root) =>
+    root
+      .replace(/\s(?:width|height)\s*=\s*("[^"]*"|'[^']*')/gi, '')
+      .replace(/^<svg\b/i, `<svg width="${widthPx}" height="${heightPx}"`),
+  );
 }
 
 export const artworkImageUrl = (id: number) => `/api/artwork/${id}/image`;

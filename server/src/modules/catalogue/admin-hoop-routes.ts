@@ -6,7 +6,11 @@ import { sendResult } from '../../middleware/send-result.ts';
 import { createCatalogueRow, type RowWording } from './catalogue-rows.ts';
 import { mountEditAndRetireRoutes } from './admin-row-routes.ts';
 
-const wording: RowWording = { noun: 'hoop', uniqueField: 'slug', duplicateMessage: 'Another hoop already uses this short name' };
+const wording: RowWording = {
+  noun: 'hoop',
+  uniqueField: 'slug',
+  duplicateMessage: 'Another hoop already uses this short name',
+};
 
 const toRow = (hoop: UpdateHoopRequest) => ({
   name: hoop.name,
@@ -19,7 +23,11 @@ const toRow = (hoop: UpdateHoopRequest) => ({
 export function createCatalogueHoopsRouter(deps: { db: Db }): Router {
   const router = Router();
   router.post('/', validate(createHoopRequest), async (req, res) => {
-    sendResult(res, await createCatalogueRow(deps.db, 'hoops', { slug: req.body.slug, ...toRow(req.body) }, wording), 201);
+    sendResult(
+      res,
+      await createCatalogueRow(deps.db, 'hoops', { slug: req.body.slug, ...toRow(req.body) }, wording),
+      201,
+    );
   });
   mountEditAndRetireRoutes(router, deps.db, { table: 'hoops', wording, updateRequest: updateHoopRequest, toRow });
   return router;

@@ -19,7 +19,8 @@ export function createCatalogueMotifsRouter(deps: { db: Db; uploadMaxBytes: numb
   const motifs = createCatalogueMotifService(deps);
 
   router.post('/preview', singleUpload(deps.uploadMaxBytes), validate(motifPreviewFields), async (req, res) => {
-    if (!req.file) return sendResult(res, failure('invalid', 'Choose an SVG file to upload.', { file: 'Choose an SVG file' }));
+    if (!req.file)
+      return sendResult(res, failure('invalid', 'Choose an SVG file to upload.', { file: 'Choose an SVG file' }));
     sendResult(res, await motifs.preview(req.file.buffer, req.body.widthMm));
   });
   router.post('/', validate(createMotifRequest), async (req, res) => {

@@ -22,14 +22,20 @@ interface EditableRows<U> {
 export function mountEditAndRetireRoutes<U>(router: Router, db: Db, rows: EditableRows<U>): void {
   const byId = validate(catalogueIdParams, 'params');
   router.put('/:id', byId, validate(rows.updateRequest), async (req, res) => {
-    sendResult(res, await editCatalogueRow(db, rows.table, { id: res.locals.params.id }, rows.toRow(req.body), rows.wording));
+    sendResult(
+      res,
+      await editCatalogueRow(db, rows.table, { id: res.locals.params.id }, rows.toRow(req.body), rows.wording),
+    );
   });
   mountRetireRoutes(router, db, rows.table, rows.wording);
 }
 
 /** `POST /:id/retire` hides the row from customers; `POST /:id/reactivate` offers it again. */
 export function mountRetireRoutes(router: Router, db: Db, table: CatalogueTable, wording: RowWording): void {
-  for (const [action, isActive] of [['retire', false], ['reactivate', true]] as const) {
+  for (const [action, isActive] of [
+    ['retire', false],
+    ['reactivate', true],
+  ] as const) {
     router.post(`/:id/${action}`, validate(catalogueIdParams, 'params'), async (_req, res) => {
       sendResult(res, await setCatalogueRowActive(db, table, res.locals.params.id, isActive, wording));
     });

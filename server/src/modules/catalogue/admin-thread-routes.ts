@@ -1,13 +1,21 @@
 import { Router } from 'express';
 import type { Db } from '../../db/knex.ts';
-import { createThreadRequest, updateThreadRequest, type UpdateThreadRequest } from '../../contracts/admin-catalogue-threads.ts';
+import {
+  createThreadRequest,
+  updateThreadRequest,
+  type UpdateThreadRequest,
+} from '../../contracts/admin-catalogue-threads.ts';
 import { hexToLab } from '../../engine/index.ts';
 import { validate } from '../../middleware/validate.ts';
 import { sendResult } from '../../middleware/send-result.ts';
 import { createCatalogueRow, type RowWording } from './catalogue-rows.ts';
 import { mountEditAndRetireRoutes } from './admin-row-routes.ts';
 
-const wording: RowWording = { noun: 'thread', uniqueField: 'code', duplicateMessage: 'Another thread already has this code' };
+const wording: RowWording = {
+  noun: 'thread',
+  uniqueField: 'code',
+  duplicateMessage: 'Another thread already has this code',
+};
 
 /** The row to store; CIELAB is worked out from the hex colour (culori, D65) unless the studio measured its own. */
 function toRow(thread: UpdateThreadRequest) {
@@ -27,7 +35,11 @@ function toRow(thread: UpdateThreadRequest) {
 export function createCatalogueThreadsRouter(deps: { db: Db }): Router {
   const router = Router();
   router.post('/', validate(createThreadRequest), async (req, res) => {
-    sendResult(res, await createCatalogueRow(deps.db, 'threads', { code: req.body.code, ...toRow(req.body) }, wording), 201);
+    sendResult(
+      res,
+      await createCatalogueRow(deps.db, 'threads', { code: req.body.code, ...toRow(req.body) }, wording),
+      201,
+    );
   });
   mountEditAndRetireRoutes(router, deps.db, { table: 'threads', wording, updateRequest: updateThreadRequest, toRow });
   return router;

@@ -1,7 +1,8 @@
 import type { Db } from '../../db/knex.ts';
 
 /** The catalogue tables the studio edits row by row. */
-export type CatalogueTable = 'garments' | 'garment_sizes' | 'fabric_colours' | 'motifs' | 'lettering_fonts' | 'threads' | 'hoops';
+export type CatalogueTable =
+  'garments' | 'garment_sizes' | 'fabric_colours' | 'motifs' | 'lettering_fonts' | 'threads' | 'hoops';
 
 /** What became of a write; `duplicate` is a unique key already taken, `in-use` a row other records still point at. */
 export type RowWrite = { outcome: 'written'; id: number } | { outcome: 'missing' | 'duplicate' | 'in-use' };
@@ -27,7 +28,12 @@ export async function insertCatalogueRow(db: Db, table: CatalogueTable, row: Row
 }
 
 /** Updates the one row matching `where` (its id plus, for sizes and colours, the garment it belongs to). */
-export async function updateCatalogueRow(db: Db, table: CatalogueTable, where: Row & { id: number }, row: Row): Promise<RowWrite> {
+export async function updateCatalogueRow(
+  db: Db,
+  table: CatalogueTable,
+  where: Row & { id: number },
+  row: Row,
+): Promise<RowWrite> {
   return db.transaction(async (trx) => {
     if (!(await trx(table).where(where).forUpdate().first('id'))) return { outcome: 'missing' };
     try {
@@ -41,7 +47,11 @@ export async function updateCatalogueRow(db: Db, table: CatalogueTable, where: R
 }
 
 /** Deletes the row unless a foreign key still holds it (designs and orders keep their garment, size and colour). */
-export async function deleteCatalogueRow(db: Db, table: CatalogueTable, where: Row & { id: number }): Promise<RowWrite> {
+export async function deleteCatalogueRow(
+  db: Db,
+  table: CatalogueTable,
+  where: Row & { id: number },
+): Promise<RowWrite> {
   try {
     const deleted = await db(table).where(where).delete();
     return deleted === 0 ? { outcome: 'missing' } : { outcome: 'written', id: where.id };

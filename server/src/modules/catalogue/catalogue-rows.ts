@@ -5,7 +5,13 @@
  * and colours may be deleted, and only while no design or order points at them (the database's RESTRICT keys).
  */
 import type { Db } from '../../db/knex.ts';
-import { deleteCatalogueRow, insertCatalogueRow, updateCatalogueRow, type CatalogueTable, type RowWrite } from './catalogue-row-repo.ts';
+import {
+  deleteCatalogueRow,
+  insertCatalogueRow,
+  updateCatalogueRow,
+  type CatalogueTable,
+  type RowWrite,
+} from './catalogue-row-repo.ts';
 import type { CatalogueRowRef } from '../../contracts/admin-catalogue-common.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 
@@ -37,7 +43,12 @@ async function isActiveOf(db: Db, table: CatalogueTable, id: number): Promise<bo
   return Boolean(row?.is_active ?? true);
 }
 
-export async function createCatalogueRow(db: Db, table: CatalogueTable, row: Record<string, unknown>, wording: RowWording): Promise<Result<CatalogueRowRef>> {
+export async function createCatalogueRow(
+  db: Db,
+  table: CatalogueTable,
+  row: Record<string, unknown>,
+  wording: RowWording,
+): Promise<Result<CatalogueRowRef>> {
   return toResult(await insertCatalogueRow(db, table, row), wording, row.is_active !== false);
 }
 
@@ -49,14 +60,31 @@ export async function editCatalogueRow(
   wording: RowWording,
 ): Promise<Result<CatalogueRowRef>> {
   const write = await updateCatalogueRow(db, table, where, row);
-  return toResult(write, wording, write.outcome === 'written' && table !== 'garment_sizes' && table !== 'fabric_colours' ? await isActiveOf(db, table, where.id) : true);
+  return toResult(
+    write,
+    wording,
+    write.outcome === 'written' && table !== 'garment_sizes' && table !== 'fabric_colours'
+      ? await isActiveOf(db, table, where.id)
+      : true,
+  );
 }
 
 /** Retires (hides from customers) or brings back a row; what already uses it keeps working either way. */
-export async function setCatalogueRowActive(db: Db, table: CatalogueTable, id: number, isActive: boolean, wording: RowWording): Promise<Result<CatalogueRowRef>> {
+export async function setCatalogueRowActive(
+  db: Db,
+  table: CatalogueTable,
+  id: number,
+  isActive: boolean,
+  wording: RowWording,
+): Promise<Result<CatalogueRowRef>> {
   return toResult(await updateCatalogueRow(db, table, { id }, { is_active: isActive }), wording, isActive);
 }
 
-export async function removeCatalogueRow(db: Db, table: CatalogueTable, where: Record<string, unknown> & { id: number }, wording: RowWording): Promise<Result<CatalogueRowRef>> {
+export async function removeCatalogueRow(
+  db: Db,
+  table: CatalogueTable,
+  where: Record<string, unknown> & { id: number },
+  wording: RowWording,
+): Promise<Result<CatalogueRowRef>> {
   return toResult(await deleteCatalogueRow(db, table, where), wording, false);
 }

@@ -27,9 +27,12 @@ export function mockupSizeMm(svg: string, slug: string): { widthMm: number; heig
     const match = pattern.exec(tag);
     return (match?.[1] ?? match?.[2] ?? '').trim();
   };
-  const box = valueOf(VIEW_BOX).split(/[\s,]+/).map(Number);
+  const box = valueOf(VIEW_BOX)
+    .split(/[\s,]+/)
+    .map(Number);
   const [, , boxWidth = NaN, boxHeight = NaN] = box;
-  if (box.length === 4 && box.every(Number.isFinite) && boxWidth > 0 && boxHeight > 0) return { widthMm: boxWidth, heightMm: boxHeight };
+  if (box.length === 4 && box.every(Number.isFinite) && boxWidth > 0 && boxHeight > 0)
+    return { widthMm: boxWidth, heightMm: boxHeight };
   const widthMm = Number(MM_LENGTH.exec(valueOf(WIDTH))?.[1] ?? NaN);
   const heightMm = Number(MM_LENGTH.exec(valueOf(HEIGHT))?.[1] ?? NaN);
   if (widthMm > 0 && heightMm > 0) return { widthMm, heightMm };
@@ -39,15 +42,31 @@ export function mockupSizeMm(svg: string, slug: string): { widthMm: number; heig
 type Row = Record<string, any>;
 
 /** Active garments (one, when a slug is given; retired ones too when asked) with their size and colour rows, in display order. */
-async function readActiveGarments(db: Db, extra: { garmentColumns: string[]; sizeColumns: string[]; slug?: string; includeRetired?: boolean }) {
+async function readActiveGarments(
+  db: Db,
+  extra: { garmentColumns: string[]; sizeColumns: string[]; slug?: string; includeRetired?: boolean },
+) {
   const garments: Row[] = await db('garments')
     .select('id', 'slug', 'name', 'kind', 'description', 'fabric_type', 'mockup_svg', ...extra.garmentColumns)
-    .where({ ...(extra.includeRetired ? {} : { is_active: true }), ...(extra.slug === undefined ? {} : { slug: extra.slug }) })
+    .where({
+      ...(extra.includeRetired ? {} : { is_active: true }),
+      ...(extra.slug === undefined ? {} : { slug: extra.slug }),
+    })
     .orderBy([{ column: 'sort_order' }, { column: 'id' }]);
   const ids = garments.map((g) => g.id as number);
   const [sizes, colours]: Row[][] = await Promise.all([
     db('garment_sizes')
-      .select('id', 'garment_id', 'code', 'label', 'hem_front_mm', 'hem_circumference_mm', 'mockup_scale', 'placement_zones', ...extra.sizeColumns)
+      .select(
+        'id',
+        'garment_id',
+        'code',
+        'label',
+        'hem_front_mm',
+        'hem_circumference_mm',
+        'mockup_scale',
+        'placement_zones',
+        ...extra.sizeColumns,
+      )
       .whereIn('garment_id', ids)
       .orderBy([{ column: 'sort_order' }, { column: 'id' }]),
     db('fabric_colours')
@@ -55,7 +74,11 @@ async function readActiveGarments(db: Db, extra: { garmentColumns: string[]; siz
       .whereIn('garment_id', ids)
       .orderBy([{ column: 'sort_order' }, { column: 'id' }]),
   ]);
-  return garments.map((g) => ({ row: g, sizes: sizes.filter((s) => s.garment_id === g.id), colours: colours.filter((c) => c.garment_id === g.id) }));
+  return garments.map((g) => ({
+    row: g,
+    sizes: sizes.filter((s) => s.garment_id === g.id),
+    colours: colours.filter((c) => c.garment_id === g.id),
+  }));
 }
 
 // mysql2 returns DECIMAL columns as strings; JSON columns arrive parsed, and are checked because the storefront
@@ -91,14 +114,25 @@ function toGarmentSummary({ row: g, sizes, colours }: { row: Row; sizes: Row[]; 
  * Active garments with their sizes (mockup scale and placement zones) and fabric colours, in display order. The
  * studio's catalogue asks for the retired ones too (`includeRetired`).
  */
-export async function listActiveGarments(db: Db, options: { includeRetired?: boolean } = {}): Promise<GarmentSummary[]> {
-  const garments = await readActiveGarments(db, { garmentColumns: [], sizeColumns: [], includeRetired: options.includeRetired });
+export async function listActiveGarments(
+  db: Db,
+  options: { includeRetired?: boolean } = {},
+): Promise<GarmentSummary[]> {
+  const garments = await readActiveGarments(db, {
+    garmentColumns: [],
+    sizeColumns: [],
+    includeRetired: options.includeRetired,
+  });
   return garments.map(toGarmentSummary);
 }
 
 /** One active garment for its product page, with its back drawing and each size's measurements; undefined if not on offer. */
 export async function findActiveGarmentDetail(db: Db, slug: string): Promise<GarmentDetail | undefined> {
-  const [garment] = await readActiveGarments(db, { garmentColumns: ['mockup_back_svg'], sizeColumns: ['chest_mm', 'length_mm'], slug });
+  const [garment] = await readActiveGarments(db, {
+    garmentColumns: ['mockup_back_svg'],
+    sizeColumns: ['chest_mm', 'length_mm'],
+    slug,
+  });
   if (!garment) return undefined;
   const summary = toGarmentSummary(garment);
   return {

@@ -15,14 +15,27 @@ import { failure, ok, type Result } from '../../contracts/result.ts';
 import { inspectUpload } from '../../integrations/inspect-upload.ts';
 import { createCatalogueRow, editCatalogueRow, removeCatalogueRow, type RowWording } from './catalogue-rows.ts';
 
-export const garmentWording: RowWording = { noun: 'garment', uniqueField: 'slug', duplicateMessage: 'Another garment already uses this web address name' };
-const sizeWording: RowWording = { noun: 'size', uniqueField: 'code', duplicateMessage: 'This garment already has a size with this code' };
-const colourWording: RowWording = { noun: 'fabric colour', uniqueField: 'name', duplicateMessage: 'This garment already has a colour with this name' };
+export const garmentWording: RowWording = {
+  noun: 'garment',
+  uniqueField: 'slug',
+  duplicateMessage: 'Another garment already uses this web address name',
+};
+const sizeWording: RowWording = {
+  noun: 'size',
+  uniqueField: 'code',
+  duplicateMessage: 'This garment already has a size with this code',
+};
+const colourWording: RowWording = {
+  noun: 'fabric colour',
+  uniqueField: 'name',
+  duplicateMessage: 'This garment already has a colour with this name',
+};
 
 /** The drawing sanitized like any upload, and only if the storefront can size it (a viewBox or width/height in mm). */
 async function cleanMockup(svg: string): Promise<Result<string>> {
   const inspected = await inspectUpload(Buffer.from(svg, 'utf8'), ['svg']);
-  if (!inspected.ok) return failure(inspected.error.kind, inspected.error.message, { mockupSvg: inspected.error.message });
+  if (!inspected.ok)
+    return failure(inspected.error.kind, inspected.error.message, { mockupSvg: inspected.error.message });
   if (inspected.value.kind !== 'svg') throw new Error('inspectUpload answered a raster for an SVG-only check');
   try {
     mockupSizeMm(inspected.value.svg, 'new');
@@ -59,7 +72,11 @@ function sizeRow(size: GarmentSizeRequest) {
 }
 
 function colourRow(colour: FabricColourRequest) {
-  return { name: colour.name, hex: colour.hex, ...(colour.sortOrder === undefined ? {} : { sort_order: colour.sortOrder }) };
+  return {
+    name: colour.name,
+    hex: colour.hex,
+    ...(colour.sortOrder === undefined ? {} : { sort_order: colour.sortOrder }),
+  };
 }
 
 /** The parts of a garment, each in its own table under the garment. */
@@ -69,7 +86,13 @@ interface PartRequest {
   colours: FabricColourRequest;
 }
 
-const parts: { [P in GarmentPart]: { table: 'garment_sizes' | 'fabric_colours'; wording: RowWording; toRow: (request: PartRequest[P]) => Record<string, unknown> } } = {
+const parts: {
+  [P in GarmentPart]: {
+    table: 'garment_sizes' | 'fabric_colours';
+    wording: RowWording;
+    toRow: (request: PartRequest[P]) => Record<string, unknown>;
+  };
+} = {
   sizes: { table: 'garment_sizes', wording: sizeWording, toRow: sizeRow },
   colours: { table: 'fabric_colours', wording: colourWording, toRow: colourRow },
 };
@@ -87,23 +110,54 @@ export function createCatalogueGarmentService(deps: { db: Db }) {
   async function create(request: CreateGarmentRequest): Promise<Result<CatalogueRowRef>> {
     const mockup = await cleanMockup(request.mockupSvg);
     if (!mockup.ok) return mockup;
-    return createCatalogueRow(db, 'garments', { slug: request.slug, ...garmentRow(request), mockup_svg: mockup.value, is_active: true }, garmentWording);
+    return createCatalogueRow(
+      db,
+      'garments',
+      { slug: request.slug, ...garmentRow(request), mockup_svg: mockup.value, is_active: true },
+      garmentWording,
+    );
   }
 
   async function update(id: number, request: UpdateGarmentRequest): Promise<Result<CatalogueRowRef>> {
     const mockup = request.mockupSvg === undefined ? undefined : await cleanMockup(request.mockupSvg);
     if (mockup && !mockup.ok) return mockup;
-    return editCatalogueRow(db, 'garments', { id }, { ...garmentRow(request), ...(mockup ? { mockup_svg: mockup.value } : {}) }, garmentWording);
+    return editCatalogueRow(
+      db,
+      'garments',
+      { id },
+      { ...garmentRow(request), ...(mockup ? { mockup_svg: mockup.value } : {}) },
+      garmentWording,
+    );
   }
 
   /** Adds a size or a colour to a garment. */
-  async function addPart<P extends GarmentPart>(part: P, garmentId: number, request: PartRequest[P]): Promise<Result<CatalogueRowRef>> {
+  async function addPart<P extends GarmentPart>(
+    part: P,
+    garmentId: number,
+    request: PartRequest[P],
+  ): Promise<Result<CatalogueRowRef>> {
     if (!(await garmentExists(db, garmentId))) return noSuchGarment();
-    return createCatalogueRow(db, parts[part].table, { garment_id: garmentId, ...parts[part].toRow(request) }, parts[part].wording);
+    return createCatalogueRow(
+      db,
+      parts[part].table,
+      { garment_id: garmentId, ...parts[part].toRow(request) },
+      parts[part].wording,
+    );
   }
 
-  async function updatePart<P extends GarmentPart>(part: P, garmentId: number, partId: number, request: PartRequest[P]): Promise<Result<CatalogueRowRef>> {
-    return editCatalogueRow(db, parts[part].table, { id: partId, garment_id: garmentId }, parts[part].toRow(request), parts[part].wording);
+  async function updatePart<P extends GarmentPart>(
+    part: P,
+    garmentId: number,
+    partId: number,
+    request: PartRequest[P],
+  ): Promise<Result<CatalogueRowRef>> {
+    return editCatalogueRow(
+      db,
+      parts[part].table,
+      { id: partId, garment_id: garmentId },
+      parts[part].toRow(request),
+      parts[part].wording,
+    );
   }
 
   /** Deletes a size or colour of the garment; one a design or order uses answers `conflict` and stays. */

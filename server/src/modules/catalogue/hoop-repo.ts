@@ -8,5 +8,10 @@ export async function listActiveHoops(db: Db): Promise<HoopSummary[]> {
     .where({ is_active: true })
     .orderBy([{ column: 'sort_order' }, { column: 'id' }]);
   // mysql2 returns DECIMAL columns as strings.
-  return rows.map((row) => ({ slug: row.slug, name: row.name, fieldWidthMm: Number(row.field_width_mm), fieldHeightMm: Number(row.field_height_mm) }));
+  return rows.map((row) => ({
+    slug: row.slug,
+    name: row.name,
+    fieldWidthMm: Number(row.field_width_mm),
+    fieldHeightMm: Number(row.field_height_mm),
+  }));
 }

@@ -25,7 +25,21 @@ export function toMotifSummary(row: Record<string, any>): MotifSummary {
 /** Active motifs, borders first, in the shop's display order. */
 export async function listActiveMotifs(db: Db): Promise<MotifSummary[]> {
   const rows = await db('motifs')
-    .select('id', 'slug', 'name', 'kind', 'svg', 'width_mm', 'height_mm', 'gap_mm', 'min_scale_pct', 'max_scale_pct', 'colour_count', 'stitch_count', 'default_thread_codes')
+    .select(
+      'id',
+      'slug',
+      'name',
+      'kind',
+      'svg',
+      'width_mm',
+      'height_mm',
+      'gap_mm',
+      'min_scale_pct',
+      'max_scale_pct',
+      'colour_count',
+      'stitch_count',
+      'default_thread_codes',
+    )
     .where({ is_active: true })
     .orderBy([{ column: 'kind' }, { column: 'sort_order' }, { column: 'id' }]);
   return rows.map(toMotifSummary);

@@ -6,7 +6,12 @@
 import type { Db } from '../../db/knex.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import type { CatalogueRowRef } from '../../contracts/admin-catalogue-common.ts';
-import type { CreateMotifRequest, MotifEstimate, MotifPreviewResponse, UpdateMotifRequest } from '../../contracts/admin-catalogue-motifs.ts';
+import type {
+  CreateMotifRequest,
+  MotifEstimate,
+  MotifPreviewResponse,
+  UpdateMotifRequest,
+} from '../../contracts/admin-catalogue-motifs.ts';
 import {
   apportionStitches,
   estimateStitches,
@@ -20,7 +25,11 @@ import {
 import { inspectUpload } from '../../integrations/inspect-upload.ts';
 import { createCatalogueRow, editCatalogueRow, type RowWording } from './catalogue-rows.ts';
 
-const wording: RowWording = { noun: 'motif', uniqueField: 'slug', duplicateMessage: 'Another motif already uses this short name' };
+const wording: RowWording = {
+  noun: 'motif',
+  uniqueField: 'slug',
+  duplicateMessage: 'Another motif already uses this short name',
+};
 
 /** The uploaded bytes as clean SVG text, or why not (415 for another type of file, 400 for a broken one). */
 async function cleanSvg(bytes: Buffer): Promise<Result<string>> {
@@ -31,12 +40,21 @@ async function cleanSvg(bytes: Buffer): Promise<Result<string>> {
 }
 
 /** The engine's estimate at a size, in the motif table's columns; a reason in words when it cannot be made. */
-function estimateAt(svg: string, size: SvgSize | undefined): { estimate: MotifEstimate; mix: MotifStitchMix } | { reason: string } {
+function estimateAt(
+  svg: string,
+  size: SvgSize | undefined,
+): { estimate: MotifEstimate; mix: MotifStitchMix } | { reason: string } {
   const estimate = estimateStitches({ kind: 'svg', svgText: svg, size });
   if (!estimate.ok) return { reason: estimate.reason };
   const { underlay, ...top } = estimate.byType;
   return {
-    estimate: { stitchCount: estimate.stitches, mix: top, underlay, colourChanges: estimate.colorChanges, notes: estimate.notes },
+    estimate: {
+      stitchCount: estimate.stitches,
+      mix: top,
+      underlay,
+      colourChanges: estimate.colorChanges,
+      notes: estimate.notes,
+    },
     mix: foldUnderlay(estimate.byType),
   };
 }
@@ -45,7 +63,10 @@ export function createCatalogueMotifService(deps: { db: Db }) {
   const { db } = deps;
 
   async function activeThreads() {
-    return db('threads').select('code', 'name', 'hex').where({ is_active: true }).orderBy([{ column: 'sort_order' }, { column: 'id' }]);
+    return db('threads')
+      .select('code', 'name', 'hex')
+      .where({ is_active: true })
+      .orderBy([{ column: 'sort_order' }, { column: 'id' }]);
   }
 
   /**
@@ -77,7 +98,9 @@ export function createCatalogueMotifService(deps: { db: Db }) {
     const svg = await cleanSvg(Buffer.from(request.svg, 'utf8'));
     if (!svg.ok) return failure(svg.error.kind, svg.error.message, { svg: svg.error.message });
 
-    const known = new Set((await db('threads').select('code').whereIn('code', request.threadCodes)).map((row) => row.code as string));
+    const known = new Set(
+      (await db('threads').select('code').whereIn('code', request.threadCodes)).map((row) => row.code as string),
+    );
     const unknownAt = request.threadCodes.findIndex((code) => !known.has(code));
     if (unknownAt >= 0) {
       const message = `There is no thread ${request.threadCodes[unknownAt]} on the shelf`;
@@ -88,7 +111,9 @@ export function createCatalogueMotifService(deps: { db: Db }) {
     const estimatedMix = 'mix' in estimated && estimated.estimate.stitchCount > 0 ? estimated.mix : undefined;
     let used: MotifStitchMix;
     if (request.measured) {
-      const split = request.measured.mix ? undefined : apportionStitches(request.measured.stitchCount, estimatedMix ?? { run: 0, satin: 0, fill: 0 });
+      const split = request.measured.mix
+        ? undefined
+        : apportionStitches(request.measured.stitchCount, estimatedMix ?? { run: 0, satin: 0, fill: 0 });
       if (split && !split.ok) return failure('invalid', `${split.reason}`, { 'measured.mix': split.reason });
       used = request.measured.mix ?? (split as { mix: MotifStitchMix }).mix;
     } else if (estimatedMix) {
@@ -124,7 +149,12 @@ export function createCatalogueMotifService(deps: { db: Db }) {
   async function create(request: CreateMotifRequest, createdByUserId: number): Promise<Result<CatalogueRowRef>> {
     const row = await toRow(request);
     if (!row.ok) return row;
-    return createCatalogueRow(db, 'motifs', { slug: request.slug, ...row.value, is_active: true, created_by_user_id: createdByUserId }, wording);
+    return createCatalogueRow(
+      db,
+      'motifs',
+      { slug: request.slug, ...row.value, is_active: true, created_by_user_id: createdByUserId },
+      wording,
+    );
   }
 
   async function update(id: number, request: UpdateMotifRequest): Promise<Result<CatalogueRowRef>> {

@@ -6,7 +6,15 @@ import { listActiveMotifs } from './motif-repo.ts';
 import { listActiveLetteringFonts } from './lettering-font-repo.ts';
 import { listActiveThreads } from './thread-repo.ts';
 import { listActiveHoops } from './hoop-repo.ts';
-import { garmentSlugParams, type fontListResponse, type garmentDetailResponse, type GarmentListResponse, type hoopListResponse, type MotifListResponse, type threadListResponse } from '../../contracts/catalogue.ts';
+import {
+  garmentSlugParams,
+  type fontListResponse,
+  type garmentDetailResponse,
+  type GarmentListResponse,
+  type hoopListResponse,
+  type MotifListResponse,
+  type threadListResponse,
+} from '../../contracts/catalogue.ts';
 import { validate } from '../../middleware/validate.ts';
 import { HttpError } from '../../middleware/http-error.ts';
 

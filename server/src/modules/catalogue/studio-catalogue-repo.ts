@@ -8,10 +8,14 @@ const ordered = [{ column: 'sort_order' }, { column: 'id' }];
 /** Everything the studio stitches with, active or not: motifs with their measured figures, threads, hoops, fonts. */
 export async function readStudioCatalogue(db: Db): Promise<StudioCatalogueResponse> {
   const [motifs, threads, hoops, fonts] = await Promise.all([
-    db('motifs').select('*').orderBy([{ column: 'kind' }, ...ordered]),
+    db('motifs')
+      .select('*')
+      .orderBy([{ column: 'kind' }, ...ordered]),
     db('threads').select('id', 'code', 'name', 'hex', 'lab_l', 'lab_a', 'lab_b', 'is_active').orderBy(ordered),
     db('hoops').select('id', 'slug', 'name', 'field_width_mm', 'field_height_mm', 'is_active').orderBy(ordered),
-    db('lettering_fonts').select([...letteringFontColumns, 'fontsource_package', 'is_active']).orderBy(ordered),
+    db('lettering_fonts')
+      .select([...letteringFontColumns, 'fontsource_package', 'is_active'])
+      .orderBy(ordered),
   ]);
   // mysql2 returns DECIMAL columns as strings and booleans as 0/1; JSON columns arrive parsed.
   return {
@@ -22,7 +26,9 @@ export async function readStudioCatalogue(db: Db): Promise<StudioCatalogueRespon
       isActive: Boolean(m.is_active),
       stitchCountSource: m.stitch_count_source,
       estimatedMix:
-        m.estimated_run_stitches === null ? null : { run: m.estimated_run_stitches, satin: m.estimated_satin_stitches, fill: m.estimated_fill_stitches },
+        m.estimated_run_stitches === null
+          ? null
+          : { run: m.estimated_run_stitches, satin: m.estimated_satin_stitches, fill: m.estimated_fill_stitches },
     })),
     threads: threads.map((t) => ({
       id: t.id,
@@ -40,6 +46,10 @@ export async function readStudioCatalogue(db: Db): Promise<StudioCatalogueRespon
       fieldHeightMm: Number(h.field_height_mm),
       isActive: Boolean(h.is_active),
     })),
-    fonts: fonts.map((f) => ({ ...toLetteringFont(f), fontsourcePackage: f.fontsource_package, isActive: Boolean(f.is_active) })),
+    fonts: fonts.map((f) => ({
+      ...toLetteringFont(f),
+      fontsourcePackage: f.fontsource_package,
+      isActive: Boolean(f.is_active),
+    })),
   };
 }

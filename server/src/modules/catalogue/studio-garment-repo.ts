@@ -13,7 +13,9 @@ export async function listStudioGarments(db: Db): Promise<StudioGarment[]> {
     db('garments').select('id', 'is_active', 'is_napped', 'min_age_months', 'max_age_months', 'sort_order'),
     db('garment_sizes').select('id', 'sort_order'),
     db('fabric_colours').select('id', 'sort_order'),
-    db('designs').distinct('garment_size_id as id').union((q) => q.from('order_items').distinct('garment_size_id as id')),
+    db('designs')
+      .distinct('garment_size_id as id')
+      .union((q) => q.from('order_items').distinct('garment_size_id as id')),
     db('designs').distinct('fabric_colour_id as id'),
   ]);
   const garmentById = new Map(garments.map((g) => [g.id as number, g]));
@@ -30,8 +32,16 @@ export async function listStudioGarments(db: Db): Promise<StudioGarment[]> {
       minAgeMonths: g.min_age_months,
       maxAgeMonths: g.max_age_months,
       sortOrder: g.sort_order,
-      sizes: summary.sizes.map((size) => ({ ...size, sortOrder: sizeOrder.get(size.id) ?? 0, isInUse: usedSizes.has(size.id) })),
-      colours: summary.colours.map((colour) => ({ ...colour, sortOrder: colourOrder.get(colour.id) ?? 0, isInUse: usedColours.has(colour.id) })),
+      sizes: summary.sizes.map((size) => ({
+        ...size,
+        sortOrder: sizeOrder.get(size.id) ?? 0,
+        isInUse: usedSizes.has(size.id),
+      })),
+      colours: summary.colours.map((colour) => ({
+        ...colour,
+        sortOrder: colourOrder.get(colour.id) ?? 0,
+        isInUse: usedColours.has(colour.id),
+      })),
     };
   });
 }

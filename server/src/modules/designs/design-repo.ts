@@ -31,7 +31,17 @@ export interface DesignWrite {
   savedAt: Date;
 }
 
-export const storedColumns = ['id', 'name', 'garment_id', 'garment_size_id', 'fabric_colour_id', 'document', 'share_token', 'created_at', 'updated_at'];
+export const storedColumns = [
+  'id',
+  'name',
+  'garment_id',
+  'garment_size_id',
+  'fabric_colour_id',
+  'document',
+  'share_token',
+  'created_at',
+  'updated_at',
+];
 
 // mysql2 reads DATETIME as a Date (the pool runs in UTC) and JSON columns arrive parsed.
 export function toStoredDesign(row: Record<string, unknown>): StoredDesign {
@@ -66,7 +76,10 @@ export async function listCustomerDesigns(db: Db, customerId: number): Promise<S
   const rows = await db('designs')
     .select(storedColumns)
     .where({ customer_id: customerId })
-    .orderBy([{ column: 'updated_at', order: 'desc' }, { column: 'id', order: 'desc' }]);
+    .orderBy([
+      { column: 'updated_at', order: 'desc' },
+      { column: 'id', order: 'desc' },
+    ]);
   return rows.map(toStoredDesign);
 }
 

@@ -13,7 +13,12 @@ import {
 } from './design-repo.ts';
 import { renameOwnedDesign } from './design-share-repo.ts';
 import { restoreDesign } from '../../contracts/designs.ts';
-import type { SaveDesignRequest, SavedDesign, savedDesignListResponse, savedDesignResponse } from '../../contracts/saved-designs.ts';
+import type {
+  SaveDesignRequest,
+  SavedDesign,
+  savedDesignListResponse,
+  savedDesignResponse,
+} from '../../contracts/saved-designs.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import type { QuoteService } from '../quotes/quote-service.ts';
 
@@ -53,14 +58,21 @@ export function createDesignService(deps: { db: Db; quotes: QuoteService; now: (
    * alike whether or not the id is this customer's, so they reveal nothing about other people's designs. A design
    * an order stitches is kept as it was ordered: the studio proofs and makes exactly that.
    */
-  async function update(customerId: number, id: number, request: SaveDesignRequest): Promise<Result<SavedDesignResponse>> {
+  async function update(
+    customerId: number,
+    id: number,
+    request: SaveDesignRequest,
+  ): Promise<Result<SavedDesignResponse>> {
     const priceable = await checkPriceable(customerId, request);
     if (!priceable.ok) return priceable;
     const updated = await db.transaction(async (trx): Promise<Result<void>> => {
       if (!(await lockOwnedDesign(trx, { id, customerId }))) return noSuchDesign(id);
       const orderNumber = await findOrderNumberOfDesign(trx, id);
       if (orderNumber) {
-        return failure('conflict', `This design is part of order ${orderNumber}, which is made exactly as ordered. Save your changes as a new design instead.`);
+        return failure(
+          'conflict',
+          `This design is part of order ${orderNumber}, which is made exactly as ordered. Save your changes as a new design instead.`,
+        );
       }
       await updateOwnedDesign(trx, { id, customerId }, toWrite(request, deps.now()));
       return ok(undefined);
@@ -87,14 +99,17 @@ export function createDesignService(deps: { db: Db; quotes: QuoteService; now: (
    * field messages. The engine's refusals are already `invalid`, keyed by the same `document.…` paths.
    */
   async function checkPriceable(customerId: number, request: SaveDesignRequest): Promise<Result<void>> {
-    const quoted = await deps.quotes.preview({
-      garmentId: request.garmentId,
-      sizeId: request.sizeId,
-      colourId: request.colourId,
-      quantity: 1,
-      isRush: false,
-      document: request.document,
-    }, { userId: customerId });
+    const quoted = await deps.quotes.preview(
+      {
+        garmentId: request.garmentId,
+        sizeId: request.sizeId,
+        colourId: request.colourId,
+        quantity: 1,
+        isRush: false,
+        document: request.document,
+      },
+      { userId: customerId },
+    );
     if (quoted.ok) return ok(undefined);
     if (quoted.error.kind === 'not-found') return failure('invalid', quoted.error.message, quoted.error.fields);
     return quoted;
@@ -135,7 +150,14 @@ function copyNameOf(name: string): string {
 }
 
 function toWrite(request: SaveDesignRequest, savedAt: Date): DesignWrite {
-  return { garmentId: request.garmentId, sizeId: request.sizeId, colourId: request.colourId, name: request.name, document: request.document, savedAt };
+  return {
+    garmentId: request.garmentId,
+    sizeId: request.sizeId,
+    colourId: request.colourId,
+    name: request.name,
+    document: request.document,
+    savedAt,
+  };
 }
 
 /** A stored design as the customer gets it; its document passes restoreDesign, and one that fails it is a bug. */

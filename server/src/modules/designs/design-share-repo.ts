@@ -9,7 +9,11 @@ export async function findDesignByShareToken(db: Db, shareToken: string): Promis
 
 /** The customer's design's link code (null when not shared), or undefined when they have no such design. */
 export async function findOwnedShareToken(db: Db, key: OwnedDesignKey): Promise<string | null | undefined> {
-  const row = await db('designs').select('share_token').where({ id: key.id, customer_id: key.customerId }).forUpdate().first();
+  const row = await db('designs')
+    .select('share_token')
+    .where({ id: key.id, customer_id: key.customerId })
+    .forUpdate()
+    .first();
   return row ? ((row.share_token as string | null) ?? null) : undefined;
 }
 
@@ -26,6 +30,8 @@ export async function setOwnedShareToken(db: Db, key: OwnedDesignKey, shareToken
 
 /** Renames the customer's design; false when they have no such design. */
 export async function renameOwnedDesign(db: Db, key: OwnedDesignKey, name: string, renamedAt: Date): Promise<boolean> {
-  const matched = await db('designs').where({ id: key.id, customer_id: key.customerId }).update({ name, updated_at: renamedAt });
+  const matched = await db('designs')
+    .where({ id: key.id, customer_id: key.customerId })
+    .update({ name, updated_at: renamedAt });
   return matched > 0;
 }

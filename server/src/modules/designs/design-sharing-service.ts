@@ -39,7 +39,8 @@ export function createDesignSharingService(deps: { db: Db; newShareToken?: () =>
   /** What a shared link shows: the garment choices and the document, restored, without the owner or any ids of theirs. */
   async function viewShared(shareToken: string): Promise<Result<SharedDesignResponse>> {
     const stored = await findDesignByShareToken(db, shareToken);
-    if (!stored) return failure('not-found', 'This link does not open a design: its owner may have stopped sharing it.');
+    if (!stored)
+      return failure('not-found', 'This link does not open a design: its owner may have stopped sharing it.');
     const restored = restoreDesign(stored.document);
     if (!restored.success) throw new Error(`Shared design ${stored.id} no longer restores: ${restored.error.message}`);
     const { name, garmentId, sizeId, colourId } = stored;

@@ -12,7 +12,10 @@ export interface LoggedMail extends OutgoingMail {
  * Call it after the transaction that caused it commits: a failed send is logged as failed and never undoes the
  * order's move. Returns the log row's id.
  */
-export async function sendLoggedMail(deps: { db: Db; mailer: Mailer; now: () => Date }, mail: LoggedMail): Promise<{ id: number; sent: boolean }> {
+export async function sendLoggedMail(
+  deps: { db: Db; mailer: Mailer; now: () => Date },
+  mail: LoggedMail,
+): Promise<{ id: number; sent: boolean }> {
   const { template, orderId, ...message } = mail;
   const [id] = await deps.db('email_log').insert({
     to_email: message.to,
@@ -27,10 +30,20 @@ export async function sendLoggedMail(deps: { db: Db; mailer: Mailer; now: () => 
   });
   try {
     const { messageId } = await deps.mailer.send(message);
-    await deps.db('email_log').where({ id }).update({ status: 'sent', provider_message_id: messageId, updated_at: deps.now() });
+    await deps
+      .db('email_log')
+      .where({ id })
+      .update({ status: 'sent', provider_message_id: messageId, updated_at: deps.now() });
     return { id: id!, sent: true };
   } catch (error) {
-    await deps.db('email_log').where({ id }).update({ status: 'failed', error: String((error as Error)?.message ?? error).slice(0, 2000), updated_at: deps.now() });
+    await deps
+      .db('email_log')
+      .where({ id })
+      .update({
+        status: 'failed',
+        error: String((error as Error)?.message ?? error).slice(0, 2000),
+        updated_at: deps.now(),
+      });
     return { id: id!, sent: false };
   }
 }

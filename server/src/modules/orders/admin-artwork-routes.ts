@@ -18,7 +18,9 @@ export function createOrderArtworkRouter(deps: { db: Db }): Router {
     const { number, uploadId } = res.locals.params as z.infer<typeof orderArtworkParams>;
     const order = await readOrderArtworkOwner(deps.db, number);
     if (!order) throw new HttpError('not-found', `There is no order ${number}.`);
-    const image = order.uploadIds.includes(uploadId) ? await findOwnedArtworkImage(deps.db, { userId: order.customerId }, uploadId) : undefined;
+    const image = order.uploadIds.includes(uploadId)
+      ? await findOwnedArtworkImage(deps.db, { userId: order.customerId }, uploadId)
+      : undefined;
     if (!image) throw new HttpError('not-found', `Order ${number} has no uploaded picture ${uploadId}.`);
     sendArtworkImage(res, image);
   });

@@ -14,8 +14,13 @@ export function createAdminOrdersRouter(deps: { db: Db }): Router {
     const detail = await readOrderDetail(deps.db, number);
     if (!detail) throw new HttpError('not-found', `There is no order ${number}.`);
     // The studio's buttons follow the state machine; staff and owner may make the same moves.
-    const studioActions = availableOrderActions(detail.order.status, 'staff').filter((action) => action !== 'authorize' && action !== 'request_changes' && action !== 'approve_proof');
-    res.json({ ...detail, studioActions: studioActions as OrderDetailResponse['studioActions'] } satisfies OrderDetailResponse);
+    const studioActions = availableOrderActions(detail.order.status, 'staff').filter(
+      (action) => action !== 'authorize' && action !== 'request_changes' && action !== 'approve_proof',
+    );
+    res.json({
+      ...detail,
+      studioActions: studioActions as OrderDetailResponse['studioActions'],
+    } satisfies OrderDetailResponse);
   });
   return router;
 }

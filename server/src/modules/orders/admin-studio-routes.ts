@@ -39,7 +39,8 @@ export interface StudioOrdersDeps {
 /** The signed-in studio member; the /api/admin guard has already refused anyone else. */
 function actorOf(req: Request): StudioActor {
   const user = currentUserOf(req);
-  if (!user || user.role === 'customer') throw new HttpError('forbidden', 'This part of Hoopwright is for the studio team only.');
+  if (!user || user.role === 'customer')
+    throw new HttpError('forbidden', 'This part of Hoopwright is for the studio team only.');
   return { userId: user.id, role: user.role };
 }
 
@@ -53,10 +54,12 @@ export function createStudioOrdersRouter(deps: StudioOrdersDeps): Router {
   const production = createOrderProductionSteps(deps);
   const proofs = createProofService(deps);
   const today = () => deps.now().toISOString().slice(0, 10);
-  const numberOf = (res: { locals: Record<string, unknown> }) => (res.locals.params as z.infer<typeof orderNumberParams>).number;
+  const numberOf = (res: { locals: Record<string, unknown> }) =>
+    (res.locals.params as z.infer<typeof orderNumberParams>).number;
   // A photo comes as multipart with its fields; a render request is plain JSON.
   const photoUpload = singleUpload(deps.uploadMaxBytes);
-  const optionalPhoto: RequestHandler = (req, res, next) => (req.is('multipart/form-data') ? photoUpload(req, res, next) : next());
+  const optionalPhoto: RequestHandler = (req, res, next) =>
+    req.is('multipart/form-data') ? photoUpload(req, res, next) : next();
 
   router.get('/', validate(orderBoardQuery, 'query'), async (_req, res) => {
     res.json(await listBoardOrders(deps.db, res.locals.query as OrderBoardQuery, today()));
@@ -67,9 +70,15 @@ export function createStudioOrdersRouter(deps: StudioOrdersDeps): Router {
     res.json({ ...range, today: today(), orders: await listDueOrders(deps.db, range, today()) });
   });
 
-  router.post('/:number/proofs', validate(orderNumberParams, 'params'), optionalPhoto, validate(sendProofRequest), async (req, res) => {
-    sendResult(res, await proofs.send(numberOf(res), req.body, req.file?.buffer, actorOf(req)), 201);
-  });
+  router.post(
+    '/:number/proofs',
+    validate(orderNumberParams, 'params'),
+    optionalPhoto,
+    validate(sendProofRequest),
+    async (req, res) => {
+      sendResult(res, await proofs.send(numberOf(res), req.body, req.file?.buffer, actorOf(req)), 201);
+    },
+  );
 
   router.get('/:number/proofs/preview', validate(orderNumberParams, 'params'), async (_req, res) => {
     const image = await proofs.preview(numberOf(res));
@@ -88,21 +97,36 @@ export function createStudioOrdersRouter(deps: StudioOrdersDeps): Router {
     sendResult(res, await payments.capture(numberOf(res), actorOf(req)));
   });
 
-  router.post('/:number/cancel', validate(orderNumberParams, 'params'), validate(cancelOrderRequest), async (req, res) => {
-    sendResult(res, await payments.cancel(numberOf(res), req.body, actorOf(req)));
-  });
+  router.post(
+    '/:number/cancel',
+    validate(orderNumberParams, 'params'),
+    validate(cancelOrderRequest),
+    async (req, res) => {
+      sendResult(res, await payments.cancel(numberOf(res), req.body, actorOf(req)));
+    },
+  );
 
-  router.post('/:number/refunds', validate(orderNumberParams, 'params'), validate(refundOrderRequest), async (req, res) => {
-    sendResult(res, await payments.refund(numberOf(res), req.body, actorOf(req)));
-  });
+  router.post(
+    '/:number/refunds',
+    validate(orderNumberParams, 'params'),
+    validate(refundOrderRequest),
+    async (req, res) => {
+      sendResult(res, await payments.refund(numberOf(res), req.body, actorOf(req)));
+    },
+  );
 
   router.post('/:number/stitched', validate(orderNumberParams, 'params'), async (req, res) => {
     sendResult(res, await production.markStitched(numberOf(res), actorOf(req)));
   });
 
-  router.post('/:number/shipped', validate(orderNumberParams, 'params'), validate(shipOrderRequest), async (req, res) => {
-    sendResult(res, await production.ship(numberOf(res), req.body, actorOf(req)));
-  });
+  router.post(
+    '/:number/shipped',
+    validate(orderNumberParams, 'params'),
+    validate(shipOrderRequest),
+    async (req, res) => {
+      sendResult(res, await production.ship(numberOf(res), req.body, actorOf(req)));
+    },
+  );
 
   return router;
 }

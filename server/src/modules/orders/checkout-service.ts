@@ -65,9 +65,15 @@ export function createCheckoutService(deps: CheckoutDeps) {
    */
   async function place(customer: CurrentUser, request: PlaceOrderRequest): Promise<Result<CheckoutStartedResponse>> {
     const quote = await findQuote(db, request.quoteId);
-    if (!quote || quote.customerId !== customer.id) return failure('not-found', `There is no quote ${request.quoteId}.`, { quoteId: 'Price your design again before ordering' });
+    if (!quote || quote.customerId !== customer.id)
+      return failure('not-found', `There is no quote ${request.quoteId}.`, {
+        quoteId: 'Price your design again before ordering',
+      });
     const design = await findOwnedDesign(db, { id: request.designId, customerId: customer.id });
-    if (!design) return failure('not-found', `There is no design ${request.designId}.`, { designId: 'Choose one of your saved designs' });
+    if (!design)
+      return failure('not-found', `There is no design ${request.designId}.`, {
+        designId: 'Choose one of your saved designs',
+      });
     const restored = restoreDesign(design.document);
     const isSameDesign =
       (quote.designId === null || quote.designId === design.id) &&
@@ -76,13 +82,18 @@ export function createCheckoutService(deps: CheckoutDeps) {
       restored.success &&
       isDeepStrictEqual(quote.input.document, restored.data);
     if (!isSameDesign) {
-      return failure('conflict', 'This price was worked out for another version of the design or another size. Price the design again to order it.', { quoteId: 'Price your design again before ordering' });
+      return failure(
+        'conflict',
+        'This price was worked out for another version of the design or another size. Price the design again to order it.',
+        { quoteId: 'Price your design again before ordering' },
+      );
     }
 
     const dates = await deps.storedQuotes.readyDatesToday();
     const shop = await readShopSchedule(db);
     const today = shopToday(deps.now(), shop.timezone);
-    if (request.neededBy < today) return failure('invalid', 'Choose a date from today on.', { neededBy: 'Choose a date from today on' });
+    if (request.neededBy < today)
+      return failure('invalid', 'Choose a date from today on.', { neededBy: 'Choose a date from today on' });
     if (request.neededBy < dates.earliestRushDate) {
       const message = `We can't have it ready by then, even as a rush. The earliest is ${dates.earliestRushDate}.`;
       return failure('conflict', message, { neededBy: message }, { reason: 'too-soon', ...dates });
@@ -113,14 +124,24 @@ export function createCheckoutService(deps: CheckoutDeps) {
       return { orderId, number, paymentId };
     });
     const checkoutUrl = await startPayment(
-      { id: created.orderId, number: created.number, totalCents: quote.totalCents, currency: quote.currency, description, customerEmail: customer.email },
+      {
+        id: created.orderId,
+        number: created.number,
+        totalCents: quote.totalCents,
+        currency: quote.currency,
+        description,
+        customerEmail: customer.email,
+      },
       created.paymentId,
     );
     return ok({ number: created.number, checkoutUrl });
   }
 
   /** Prices the quote again (with rush when the date needs it) and answers with the change for the customer to confirm. */
-  async function repriced(quote: StoredQuote, why: { needsRush: boolean; hasExpired: boolean; dates: Awaited<ReturnType<StoredQuoteService['readyDatesToday']>> }): Promise<Result<never>> {
+  async function repriced(
+    quote: StoredQuote,
+    why: { needsRush: boolean; hasExpired: boolean; dates: Awaited<ReturnType<StoredQuoteService['readyDatesToday']>> },
+  ): Promise<Result<never>> {
     const fresh = await deps.storedQuotes.reprice(quote, why.needsRush ? { isRush: true } : {});
     if (!fresh.ok) return fresh;
     const was = formatMoneyText(quote.totalCents, quote.currency);
@@ -158,7 +179,12 @@ export function createCheckoutService(deps: CheckoutDeps) {
     const order = await findCustomerOrder(db, customer.id, number);
     if (!order) return failure('not-found', `There is no order ${number}.`);
     if (!isPaymentNeeded(order, await listPayments(db, order.id), deps.now())) {
-      return failure('conflict', order.status === 'cancelled' ? 'This order is cancelled.' : 'Your card is already held for this order; there is nothing to pay now.');
+      return failure(
+        'conflict',
+        order.status === 'cancelled'
+          ? 'This order is cancelled.'
+          : 'Your card is already held for this order; there is nothing to pay now.',
+      );
     }
     const paymentId = await insertPendingPayment(db, order, deps.now());
     const description = (await readOrderDescription(db, order.id)) ?? order.number;
@@ -172,20 +198,40 @@ export function createCheckoutService(deps: CheckoutDeps) {
     if (!order) return failure('not-found', `There is no order ${number}.`);
     const now = deps.now();
     const moved = await db.transaction(async (trx) => {
-      const move = await moveOrder(trx, { orderId: order.id, action: 'cancel', actor: 'customer', actorUserId: customer.id, note: 'Cancelled by the customer.', now });
+      const move = await moveOrder(trx, {
+        orderId: order.id,
+        action: 'cancel',
+        actor: 'customer',
+        actorUserId: customer.id,
+        note: 'Cancelled by the customer.',
+        now,
+      });
       if (!move.ok) return move;
       const held = (await listPayments(trx, order.id)).filter((p) => p.status === 'authorized' && p.paymentIntentId);
       for (const payment of held) {
         await releaseHold(deps.stripe, payment.paymentIntentId!);
         await updatePayment(trx, payment.id, { status: 'voided' }, now);
-        await insertOrderNote(trx, { orderId: order.id, type: 'payment_voided', actorUserId: null, payload: { paymentIntentId: payment.paymentIntentId }, at: now });
+        await insertOrderNote(trx, {
+          orderId: order.id,
+          type: 'payment_voided',
+          actorUserId: null,
+          payload: { paymentIntentId: payment.paymentIntentId },
+          at: now,
+        });
       }
       await syncOrderPaymentStatus(trx, order.id, now);
       return ok({ wasHeld: held.length > 0 });
     });
     if (!moved.ok) return moved;
     const shop = await readShopSchedule(db);
-    await sendLoggedMail(mailDeps, orderCancelledMail({ appOrigin: deps.appOrigin, shopName: shop.name, number, orderId: order.id }, customer.email, moved.value.wasHeld));
+    await sendLoggedMail(
+      mailDeps,
+      orderCancelledMail(
+        { appOrigin: deps.appOrigin, shopName: shop.name, number, orderId: order.id },
+        customer.email,
+        moved.value.wasHeld,
+      ),
+    );
     return ok({ number });
   }
 

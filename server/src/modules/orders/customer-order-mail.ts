@@ -12,9 +12,21 @@ interface MailContext {
   orderId: number;
 }
 
-function compose(context: MailContext, to: string, template: string, subject: string, paragraphs: string[]): LoggedMail {
+function compose(
+  context: MailContext,
+  to: string,
+  template: string,
+  subject: string,
+  paragraphs: string[],
+): LoggedMail {
   const link = orderPageUrl(context.appOrigin, context.number);
-  return { to, subject, ...mailBodies([...paragraphs, `See your order: ${link}`, `— ${context.shopName}`]), template, orderId: context.orderId };
+  return {
+    to,
+    subject,
+    ...mailBodies([...paragraphs, `See your order: ${link}`, `— ${context.shopName}`]),
+    template,
+    orderId: context.orderId,
+  };
 }
 
 export function orderPlacedMail(context: MailContext, to: string, totalText: string): LoggedMail {
@@ -32,13 +44,25 @@ export function proofApprovedMail(context: MailContext, to: string, version: num
   ]);
 }
 
-export function proofAnsweredStudioMail(context: MailContext, to: string, answer: { version: number; isApproved: boolean; comment: string | null; pinCount: number }): LoggedMail {
+export function proofAnsweredStudioMail(
+  context: MailContext,
+  to: string,
+  answer: { version: number; isApproved: boolean; comment: string | null; pinCount: number },
+): LoggedMail {
   const what = answer.isApproved ? 'approved' : 'asked for changes to';
-  return compose(context, to, answer.isApproved ? 'proof_approved_studio' : 'changes_requested_studio', `${context.number}: the customer ${what} proof ${answer.version}`, [
-    `The customer ${what} proof version ${answer.version} of ${context.number}.`,
-    ...(answer.comment ? [`Their comment: “${answer.comment}”`] : []),
-    ...(answer.pinCount > 0 ? [`They pinned ${answer.pinCount} ${answer.pinCount === 1 ? 'comment' : 'comments'} to the picture.`] : []),
-  ]);
+  return compose(
+    context,
+    to,
+    answer.isApproved ? 'proof_approved_studio' : 'changes_requested_studio',
+    `${context.number}: the customer ${what} proof ${answer.version}`,
+    [
+      `The customer ${what} proof version ${answer.version} of ${context.number}.`,
+      ...(answer.comment ? [`Their comment: “${answer.comment}”`] : []),
+      ...(answer.pinCount > 0
+        ? [`They pinned ${answer.pinCount} ${answer.pinCount === 1 ? 'comment' : 'comments'} to the picture.`]
+        : []),
+    ],
+  );
 }
 
 export function orderCancelledMail(context: MailContext, to: string, wasHeld: boolean): LoggedMail {

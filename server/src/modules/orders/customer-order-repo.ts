@@ -60,7 +60,10 @@ function toRow(row: Record<string, unknown>): CustomerOrderRow {
 
 /** The customer's orders, newest first; the first item of each (orders have one). */
 export async function listCustomerOrders(db: Db, customerId: number): Promise<CustomerOrderRow[]> {
-  const rows = await ordersOf(db, customerId).orderBy([{ column: 'o.created_at', order: 'desc' }, { column: 'o.id', order: 'desc' }]);
+  const rows = await ordersOf(db, customerId).orderBy([
+    { column: 'o.created_at', order: 'desc' },
+    { column: 'o.id', order: 'desc' },
+  ]);
   const seen = new Set<number>();
   return rows.filter((row) => !seen.has(row.id) && seen.add(row.id)).map(toRow);
 }
@@ -75,29 +78,84 @@ export async function ordersWithProofWaiting(db: Db, orderIds: number[]): Promis
 export interface CustomerOrderDetailRows {
   order: CustomerOrderRow;
   quote: { ruleSetVersion: number; isRush: boolean; lines: { code: string; label: string; amountCents: number }[] };
-  design: { id: number; name: string; garmentId: number; garmentSlug: string; garmentName: string; sizeId: number; sizeLabel: string; colourId: number; colourName: string; colourHex: string; document: unknown };
-  proofs: { version: number; status: 'sent' | 'approved' | 'changes_requested' | 'superseded'; message: string | null; source: 'render' | 'photo'; sentAt: string; respondedAt: string | null; customerComment: string | null; pins: { xPct: number; yPct: number; comment: string }[]; hasImage: boolean }[];
+  design: {
+    id: number;
+    name: string;
+    garmentId: number;
+    garmentSlug: string;
+    garmentName: string;
+    sizeId: number;
+    sizeLabel: string;
+    colourId: number;
+    colourName: string;
+    colourHex: string;
+    document: unknown;
+  };
+  proofs: {
+    version: number;
+    status: 'sent' | 'approved' | 'changes_requested' | 'superseded';
+    message: string | null;
+    source: 'render' | 'photo';
+    sentAt: string;
+    respondedAt: string | null;
+    customerComment: string | null;
+    pins: { xPct: number; yPct: number; comment: string }[];
+    hasImage: boolean;
+  }[];
   events: StoredOrderEvent[];
 }
 
 /** One of the customer's orders with its quote, design, proofs and history; undefined when it is not theirs. */
-export async function readCustomerOrder(db: Db, customerId: number, number: string): Promise<CustomerOrderDetailRows | undefined> {
+export async function readCustomerOrder(
+  db: Db,
+  customerId: number,
+  number: string,
+): Promise<CustomerOrderDetailRows | undefined> {
   const row = await ordersOf(db, customerId).where('o.number', number).orderBy('i.id').first();
   if (!row) return undefined;
   const [quote, design, proofs, events] = await Promise.all([
-    db('quotes as q').join('pricing_rule_sets as r', 'r.id', 'q.pricing_rule_set_id').select('q.lines', 'q.is_rush', 'r.version').where('q.id', row.quote_id).first(),
+    db('quotes as q')
+      .join('pricing_rule_sets as r', 'r.id', 'q.pricing_rule_set_id')
+      .select('q.lines', 'q.is_rush', 'r.version')
+      .where('q.id', row.quote_id)
+      .first(),
     db('designs as d')
       .join('garments as g', 'g.id', 'd.garment_id')
       .join('garment_sizes as s', 's.id', 'd.garment_size_id')
       .join('fabric_colours as c', 'c.id', 'd.fabric_colour_id')
-      .select('d.id', 'd.name', 'd.document', 'g.id as garment_id', 'g.slug', 'g.name as garment_name', 's.id as size_id', 's.label as size_label', 'c.id as colour_id', 'c.name as colour_name', 'c.hex')
+      .select(
+        'd.id',
+        'd.name',
+        'd.document',
+        'g.id as garment_id',
+        'g.slug',
+        'g.name as garment_name',
+        's.id as size_id',
+        's.label as size_label',
+        'c.id as colour_id',
+        'c.name as colour_name',
+        'c.hex',
+      )
       .where('d.id', row.design_id)
       .first(),
     db('proofs')
-      .select('version', 'status', 'message', 'source', 'created_at', 'responded_at', 'customer_comment', 'comment_pins', db.raw('image_png IS NOT NULL AS has_image'))
+      .select(
+        'version',
+        'status',
+        'message',
+        'source',
+        'created_at',
+        'responded_at',
+        'customer_comment',
+        'comment_pins',
+        db.raw('image_png IS NOT NULL AS has_image'),
+      )
       .where({ order_id: row.id })
       .orderBy('version'),
-    db('order_events').select('id', 'type', 'note', 'payload', 'created_at').where({ order_id: row.id }).orderBy([{ column: 'created_at' }, { column: 'id' }]),
+    db('order_events')
+      .select('id', 'type', 'note', 'payload', 'created_at')
+      .where({ order_id: row.id })
+      .orderBy([{ column: 'created_at' }, { column: 'id' }]),
   ]);
   return {
     order: toRow(row),
@@ -126,29 +184,57 @@ export async function readCustomerOrder(db: Db, customerId: number, number: stri
       pins: p.comment_pins ?? [],
       hasImage: Boolean(p.has_image),
     })),
-    events: events.map((e) => ({ id: e.id, type: e.type, note: e.note, payload: e.payload, createdAt: iso(e.created_at)! })),
+    events: events.map((e) => ({
+      id: e.id,
+      type: e.type,
+      note: e.note,
+      payload: e.payload,
+      createdAt: iso(e.created_at)!,
+    })),
   };
 }
 
 /** The proof picture of an order; `customerId` null lets the studio read any order's. */
-export async function readProofImage(db: Db, number: string, version: number, customerId: number | null): Promise<Buffer | undefined> {
-  const query = db('proofs as p').join('orders as o', 'o.id', 'p.order_id').select('p.image_png').where({ 'o.number': number, 'p.version': version });
+export async function readProofImage(
+  db: Db,
+  number: string,
+  version: number,
+  customerId: number | null,
+): Promise<Buffer | undefined> {
+  const query = db('proofs as p')
+    .join('orders as o', 'o.id', 'p.order_id')
+    .select('p.image_png')
+    .where({ 'o.number': number, 'p.version': version });
   if (customerId !== null) query.where('o.customer_id', customerId);
   const row = await query.first();
   return row?.image_png ?? undefined;
 }
 
 /** The order's latest proof, locked for an answer. */
-export async function lockLatestProof(trx: Db, orderId: number): Promise<{ id: number; version: number; status: string } | undefined> {
-  return trx('proofs').select('id', 'version', 'status').where({ order_id: orderId }).orderBy('version', 'desc').forUpdate().first();
+export async function lockLatestProof(
+  trx: Db,
+  orderId: number,
+): Promise<{ id: number; version: number; status: string } | undefined> {
+  return trx('proofs')
+    .select('id', 'version', 'status')
+    .where({ order_id: orderId })
+    .orderBy('version', 'desc')
+    .forUpdate()
+    .first();
 }
 
-export async function recordProofAnswer(trx: Db, proofId: number, answer: { status: 'approved' | 'changes_requested'; comment: string | null; pins: object[]; at: Date }): Promise<void> {
-  await trx('proofs').where({ id: proofId }).update({
-    status: answer.status,
-    customer_comment: answer.comment,
-    comment_pins: JSON.stringify(answer.pins),
-    responded_at: answer.at,
-    updated_at: answer.at,
-  });
+export async function recordProofAnswer(
+  trx: Db,
+  proofId: number,
+  answer: { status: 'approved' | 'changes_requested'; comment: string | null; pins: object[]; at: Date },
+): Promise<void> {
+  await trx('proofs')
+    .where({ id: proofId })
+    .update({
+      status: answer.status,
+      customer_comment: answer.comment,
+      comment_pins: JSON.stringify(answer.pins),
+      responded_at: answer.at,
+      updated_at: answer.at,
+    });
 }

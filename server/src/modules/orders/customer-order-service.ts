@@ -1,10 +1,22 @@
 import type { Db } from '../../db/knex.ts';
 import type { Mailer } from '../../integrations/mailer.ts';
-import { listCustomerOrders, lockLatestProof, ordersWithProofWaiting, readCustomerOrder, readProofImage, recordProofAnswer } from './customer-order-repo.ts';
+import {
+  listCustomerOrders,
+  lockLatestProof,
+  ordersWithProofWaiting,
+  readCustomerOrder,
+  readProofImage,
+  recordProofAnswer,
+} from './customer-order-repo.ts';
 import { findCustomerOrder, listPayments, type PaymentRecord } from './order-repo.ts';
 import { readShopSchedule } from '../settings/shop-settings-repo.ts';
 import { restoreDesign } from '../../contracts/designs.ts';
-import type { CustomerOrderAction, CustomerOrderResponse, customerOrderListResponse, proofAnswerRequest } from '../../contracts/orders.ts';
+import type {
+  CustomerOrderAction,
+  CustomerOrderResponse,
+  customerOrderListResponse,
+  proofAnswerRequest,
+} from '../../contracts/orders.ts';
 import type { CurrentUser } from '../../contracts/users.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import type { z } from 'zod';
@@ -23,7 +35,10 @@ export function createCustomerOrderService(deps: { db: Db; mailer: Mailer; appOr
 
   async function list(customerId: number): Promise<Result<z.infer<typeof customerOrderListResponse>>> {
     const orders = await listCustomerOrders(db, customerId);
-    const proofWaiting = await ordersWithProofWaiting(db, orders.map((o) => o.id));
+    const proofWaiting = await ordersWithProofWaiting(
+      db,
+      orders.map((o) => o.id),
+    );
     return ok({
       orders: orders.map((o) => ({
         number: o.number,
@@ -53,10 +68,19 @@ export function createCustomerOrderService(deps: { db: Db; mailer: Mailer; appOr
     const latestSent = detail.proofs.findLast((p) => p.status === 'sent');
     const latestVersion = detail.proofs.at(-1)?.version;
     const needsPayment = isPaymentNeeded(order, payments, now);
-    const flowActions = availableOrderActions(order.status, 'customer').filter((action) => action === 'cancel' || latestSent !== undefined);
-    const actions: CustomerOrderAction[] = [...(needsPayment ? (['pay'] as const) : []), ...(flowActions as CustomerOrderAction[])];
+    const flowActions = availableOrderActions(order.status, 'customer').filter(
+      (action) => action === 'cancel' || latestSent !== undefined,
+    );
+    const actions: CustomerOrderAction[] = [
+      ...(needsPayment ? (['pay'] as const) : []),
+      ...(flowActions as CustomerOrderAction[]),
+    ];
     return ok({
-      order: { ...withoutId(order), isRush: detail.quote.isRush, isWaitingOnCustomer: needsPayment || latestSent !== undefined },
+      order: {
+        ...withoutId(order),
+        isRush: detail.quote.isRush,
+        isWaitingOnCustomer: needsPayment || latestSent !== undefined,
+      },
       quote: { ruleSetVersion: detail.quote.ruleSetVersion, lines: detail.quote.lines },
       design: { ...detail.design, document: restored.data },
       payment: paymentSummary(payments, detail.events, needsPayment, now),
@@ -80,17 +104,30 @@ export function createCustomerOrderService(deps: { db: Db; mailer: Mailer; appOr
    * The customer's answer to the latest proof: approval lets the studio charge the card and start; a change
    * request sends the studio back to the design. Only the latest version, while unanswered, can be answered.
    */
-  async function answerProof(customer: CurrentUser, number: string, version: number, isApproved: boolean, answer: ProofAnswer): Promise<Result<{ number: string; version: number }>> {
+  async function answerProof(
+    customer: CurrentUser,
+    number: string,
+    version: number,
+    isApproved: boolean,
+    answer: ProofAnswer,
+  ): Promise<Result<{ number: string; version: number }>> {
     if (!isApproved && !answer.comment && answer.pins.length === 0) {
-      return failure('invalid', 'Say what you would like changed, in a comment or with a pin on the picture.', { comment: 'Say what you would like changed' });
+      return failure('invalid', 'Say what you would like changed, in a comment or with a pin on the picture.', {
+        comment: 'Say what you would like changed',
+      });
     }
     const order = await findCustomerOrder(db, customer.id, number);
     if (!order) return noSuchOrder(number);
     const now = deps.now();
     const done = await db.transaction(async (trx): Promise<Result<void>> => {
       const latest = await lockLatestProof(trx, order.id);
-      if (!latest || version > latest.version) return failure('not-found', `There is no proof ${version} for ${number}.`);
-      if (version !== latest.version) return failure('conflict', `Proof ${version} has been replaced by version ${latest.version}; answer the latest one.`);
+      if (!latest || version > latest.version)
+        return failure('not-found', `There is no proof ${version} for ${number}.`);
+      if (version !== latest.version)
+        return failure(
+          'conflict',
+          `Proof ${version} has been replaced by version ${latest.version}; answer the latest one.`,
+        );
       if (latest.status !== 'sent') return failure('conflict', `You have already answered proof ${version}.`);
       const moved = await moveOrder(trx, {
         orderId: order.id,
@@ -102,7 +139,12 @@ export function createCustomerOrderService(deps: { db: Db; mailer: Mailer; appOr
         now,
       });
       if (!moved.ok) return moved;
-      await recordProofAnswer(trx, latest.id, { status: isApproved ? 'approved' : 'changes_requested', comment: answer.comment ?? null, pins: answer.pins, at: now });
+      await recordProofAnswer(trx, latest.id, {
+        status: isApproved ? 'approved' : 'changes_requested',
+        comment: answer.comment ?? null,
+        pins: answer.pins,
+        at: now,
+      });
       return ok(undefined);
     });
     if (!done.ok) return done;
@@ -111,7 +153,15 @@ export function createCustomerOrderService(deps: { db: Db; mailer: Mailer; appOr
     const context = { appOrigin: deps.appOrigin, shopName: shop.name, number, orderId: order.id };
     const mailDeps = { db, mailer: deps.mailer, now: deps.now };
     if (isApproved) await sendLoggedMail(mailDeps, proofApprovedMail(context, customer.email, version));
-    await sendLoggedMail(mailDeps, proofAnsweredStudioMail(context, shop.contactEmail, { version, isApproved, comment: answer.comment ?? null, pinCount: answer.pins.length }));
+    await sendLoggedMail(
+      mailDeps,
+      proofAnsweredStudioMail(context, shop.contactEmail, {
+        version,
+        isApproved,
+        comment: answer.comment ?? null,
+        pinCount: answer.pins.length,
+      }),
+    );
     return ok({ number, version });
   }
 
@@ -129,19 +179,32 @@ function noSuchOrder(number: string): Result<never> {
 }
 
 /** Held, charged and refunded amounts over every attempt, and why the latest attempt failed if it did. */
-function paymentSummary(payments: PaymentRecord[], events: { type: string; note: string | null }[], needsPayment: boolean, now: Date): CustomerOrderResponse['payment'] {
+function paymentSummary(
+  payments: PaymentRecord[],
+  events: { type: string; note: string | null }[],
+  needsPayment: boolean,
+  now: Date,
+): CustomerOrderResponse['payment'] {
   const held = payments.filter((p) => p.status === 'authorized' && (p.captureBefore === null || p.captureBefore > now));
   const latest = payments.at(-1);
   const failedNote = events.findLast((e) => e.type === 'payment_failed')?.note;
   const hasLapsed = !held.length && payments.some((p) => p.status === 'authorized');
   let failureMessage: string | null = null;
-  if (needsPayment && latest?.status === 'failed') failureMessage = failedNote ?? 'We could not open the payment page. Please try again.';
-  else if (needsPayment && hasLapsed) failureMessage = 'The hold on your card ran out before we could charge it. Please pay again to keep your order going.';
+  if (needsPayment && latest?.status === 'failed')
+    failureMessage = failedNote ?? 'We could not open the payment page. Please try again.';
+  else if (needsPayment && hasLapsed)
+    failureMessage =
+      'The hold on your card ran out before we could charge it. Please pay again to keep your order going.';
   return {
     heldCents: held.reduce((sum, p) => sum + p.authorizedCents, 0),
     chargedCents: payments.reduce((sum, p) => sum + p.capturedCents, 0),
     refundedCents: payments.reduce((sum, p) => sum + p.refundedCents, 0),
-    holdExpiresAt: held.map((p) => p.captureBefore).filter((d): d is Date => d !== null).sort((a, b) => a.getTime() - b.getTime())[0]?.toISOString() ?? null,
+    holdExpiresAt:
+      held
+        .map((p) => p.captureBefore)
+        .filter((d): d is Date => d !== null)
+        .sort((a, b) => a.getTime() - b.getTime())[0]
+        ?.toISOString() ?? null,
     failureMessage,
   };
 }

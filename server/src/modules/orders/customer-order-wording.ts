@@ -39,7 +39,9 @@ function titleOf(event: StoredOrderEvent, currency: string): string | undefined 
     case 'stitched':
       return 'Stitched and checked';
     case 'shipped':
-      return typeof p.trackingNumber === 'string' ? `On its way (${p.carrier ?? 'tracking'} ${p.trackingNumber})` : 'On its way';
+      return typeof p.trackingNumber === 'string'
+        ? `On its way (${p.carrier ?? 'tracking'} ${p.trackingNumber})`
+        : 'On its way';
     case 'cancelled':
       return 'Order cancelled';
     case 'refunded':
@@ -54,6 +56,16 @@ function titleOf(event: StoredOrderEvent, currency: string): string | undefined 
 export function customerTimeline(events: StoredOrderEvent[], currency: string) {
   return events.flatMap((event) => {
     const title = titleOf(event, currency);
-    return title ? [{ id: event.id, type: event.type, title, note: notesShown.has(event.type) ? event.note : null, at: event.createdAt }] : [];
+    return title
+      ? [
+          {
+            id: event.id,
+            type: event.type,
+            title,
+            note: notesShown.has(event.type) ? event.note : null,
+            at: event.createdAt,
+          },
+        ]
+      : [];
   });
 }

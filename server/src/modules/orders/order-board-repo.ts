@@ -1,7 +1,13 @@
 import type { Knex } from 'knex';
 import type { Db } from '../../db/knex.ts';
 import type { OrderStatus } from '../../contracts/order-status.ts';
-import type { BoardOrder, BoardSortKey, DueOrdersQuery, OrderBoardQuery, OrderBoardResponse } from '../../contracts/studio-orders.ts';
+import type {
+  BoardOrder,
+  BoardSortKey,
+  DueOrdersQuery,
+  OrderBoardQuery,
+  OrderBoardResponse,
+} from '../../contracts/studio-orders.ts';
 
 /** Orders past these statuses are no longer the studio's to make, so they are never overdue. */
 const closedStatuses: readonly OrderStatus[] = ['shipped', 'cancelled', 'refunded'];
@@ -19,7 +25,8 @@ const sortColumns: Record<BoardSortKey, string> = {
 /** Most customers a name search reaches: a search that matches more than this is too broad to read anyway. */
 const MAX_MATCHED_CUSTOMERS = 500;
 
-const isoDay = (value: Date | string | null): string | null => (value === null ? null : new Date(value).toISOString().slice(0, 10));
+const isoDay = (value: Date | string | null): string | null =>
+  value === null ? null : new Date(value).toISOString().slice(0, 10);
 
 type Condition = (query: Knex.QueryBuilder) => void;
 
@@ -43,17 +50,25 @@ async function searchCondition(db: Db, q: string): Promise<Condition> {
   const customers = () => db('users').where('role', 'customer').limit(MAX_MATCHED_CUSTOMERS);
   const byName =
     longWords.length > 0
-      ? customers().whereRaw('MATCH(name) AGAINST (? IN BOOLEAN MODE)', [longWords.map((word) => `+${word}*`).join(' ')])
+      ? customers().whereRaw('MATCH(name) AGAINST (? IN BOOLEAN MODE)', [
+          longWords.map((word) => `+${word}*`).join(' '),
+        ])
       : words.length > 0
         ? customers().where('name', 'like', `${escaped}%`)
         : undefined;
-  const found = await Promise.all([customers().where('email', 'like', `${escaped}%`).pluck('id'), byName?.pluck('id') ?? []]);
+  const found = await Promise.all([
+    customers().where('email', 'like', `${escaped}%`).pluck('id'),
+    byName?.pluck('id') ?? [],
+  ]);
   const ids = [...new Set(found.flat() as number[])];
   return (query) => query.whereIn('o.customer_id', ids.length > 0 ? ids : [0]);
 }
 
 /** The board's filters on `orders as o`; the search is worked out first, as it may read the users table. */
-async function boardFilters(db: Db, filters: Omit<OrderBoardQuery, 'sort' | 'dir' | 'page' | 'pageSize'>): Promise<Condition> {
+async function boardFilters(
+  db: Db,
+  filters: Omit<OrderBoardQuery, 'sort' | 'dir' | 'page' | 'pageSize'>,
+): Promise<Condition> {
   const search = filters.q ? await searchCondition(db, filters.q) : undefined;
   return (query) => {
     if (filters.status && filters.status.length > 0) query.whereIn('o.status', filters.status);
@@ -83,11 +98,16 @@ const boardColumns = [
 async function boardRows(db: Db, ids: number[], today: string): Promise<BoardOrder[]> {
   if (ids.length === 0) return [];
   const [rows, items] = await Promise.all([
-    db('orders as o').join('users as u', 'u.id', 'o.customer_id').join('quotes as q', 'q.id', 'o.quote_id').whereIn('o.id', ids).select(boardColumns),
+    db('orders as o')
+      .join('users as u', 'u.id', 'o.customer_id')
+      .join('quotes as q', 'q.id', 'o.quote_id')
+      .whereIn('o.id', ids)
+      .select(boardColumns),
     db('order_items').whereIn('order_id', ids).orderBy('id').select('order_id', 'quantity', 'description'),
   ]);
   const summaries = new Map<number, string[]>();
-  for (const item of items) summaries.set(item.order_id, [...(summaries.get(item.order_id) ?? []), `${item.quantity} × ${item.description}`]);
+  for (const item of items)
+    summaries.set(item.order_id, [...(summaries.get(item.order_id) ?? []), `${item.quantity} × ${item.description}`]);
   const byId = new Map(rows.map((row) => [row.id as number, row]));
   return ids.map((id) => {
     const row = byId.get(id)!;
@@ -117,24 +137,40 @@ export async function listBoardOrders(db: Db, query: OrderBoardQuery, today: str
   const { sort, dir, page, pageSize, ...filters } = query;
   const filter = await boardFilters(db, filters);
   const column = sortColumns[sort];
-  const ordered = db('orders as o').modify(filter).select('o.id').limit(pageSize).offset((page - 1) * pageSize);
+  const ordered = db('orders as o')
+    .modify(filter)
+    .select('o.id')
+    .limit(pageSize)
+    .offset((page - 1) * pageSize);
   // Orders without a date sort after those with one, whichever way the list runs. Descending, MariaDB puts NULL
   // last by itself, so the sort can read its index backwards; only ascending needs the extra (unindexed) key.
   if ((sort === 'due' || sort === 'placed') && dir === 'asc') ordered.orderByRaw(`${column} IS NULL`);
   // Within a status, newest first or last as the list runs: the (status, placed_at) index holds that order.
   const tieBreaks = sort === 'status' ? ['o.placed_at', 'o.id'] : ['o.id'];
   ordered.orderBy([column, ...tieBreaks].map((key) => ({ column: key, order: dir })));
-  const [ids, [{ total }]] = await Promise.all([ordered.pluck('o.id') as Promise<number[]>, db('orders as o').modify(filter).count({ total: '*' })]);
+  const [ids, [{ total }]] = await Promise.all([
+    ordered.pluck('o.id') as Promise<number[]>,
+    db('orders as o').modify(filter).count({ total: '*' }),
+  ]);
   return { rows: await boardRows(db, ids, today), total: Number(total), page, pageSize };
 }
 
 /** Open orders due in the range, and open orders already overdue, soonest first: the calendar's days. */
 export async function listDueOrders(db: Db, range: DueOrdersQuery, today: string): Promise<BoardOrder[]> {
-  const open = ['authorized', 'proof_sent', 'changes_requested', 'proof_approved', 'in_production', 'stitched'] as const;
+  const open = [
+    'authorized',
+    'proof_sent',
+    'changes_requested',
+    'proof_approved',
+    'in_production',
+    'stitched',
+  ] as const;
   const ids = (await db('orders as o')
     .whereIn('o.status', open)
     .where((when) => {
-      when.whereBetween('o.needed_by', [range.from, range.to]).orWhere('o.needed_by', '<', today < range.from ? today : range.from);
+      when
+        .whereBetween('o.needed_by', [range.from, range.to])
+        .orWhere('o.needed_by', '<', today < range.from ? today : range.from);
     })
     .orderBy([{ column: 'o.needed_by' }, { column: 'o.id' }])
     .limit(2000)

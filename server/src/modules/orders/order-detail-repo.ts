@@ -7,20 +7,46 @@ import { restoreDesign } from '../../contracts/designs.ts';
 const iso = (value: Date | string | null): string | null => (value === null ? null : new Date(value).toISOString());
 
 /** One order with everything the studio reads on its page: items, priced lines, payments, proofs and history. */
-export async function readOrderDetail(db: Db, number: string): Promise<Omit<OrderDetailResponse, 'studioActions'> | undefined> {
+export async function readOrderDetail(
+  db: Db,
+  number: string,
+): Promise<Omit<OrderDetailResponse, 'studioActions'> | undefined> {
   const order = await db('orders as o')
     .join('users as u', 'u.id', 'o.customer_id')
     .join('quotes as q', 'q.id', 'o.quote_id')
     .join('pricing_rule_sets as r', 'r.id', 'q.pricing_rule_set_id')
-    .select('o.*', 'u.name as customer_name', 'u.email as customer_email', 'q.lines as quote_lines', 'r.version as rule_set_version')
+    .select(
+      'o.*',
+      'u.name as customer_name',
+      'u.email as customer_email',
+      'q.lines as quote_lines',
+      'r.version as rule_set_version',
+    )
     .where('o.number', number)
     .first();
   if (!order) return undefined;
   const [items, payments, proofs, events] = await Promise.all([
-    db('order_items as i').join('designs as d', 'd.id', 'i.design_id').select('i.id', 'i.description', 'i.quantity', 'i.total_cents', 'd.name as design_name', 'd.document').where('i.order_id', order.id).orderBy('i.id'),
-    db('payments').select('status', 'amount_authorized_cents', 'amount_captured_cents', 'amount_refunded_cents', 'capture_before').where({ order_id: order.id }).orderBy('id'),
+    db('order_items as i')
+      .join('designs as d', 'd.id', 'i.design_id')
+      .select('i.id', 'i.description', 'i.quantity', 'i.total_cents', 'd.name as design_name', 'd.document')
+      .where('i.order_id', order.id)
+      .orderBy('i.id'),
+    db('payments')
+      .select('status', 'amount_authorized_cents', 'amount_captured_cents', 'amount_refunded_cents', 'capture_before')
+      .where({ order_id: order.id })
+      .orderBy('id'),
     db('proofs')
-      .select('version', 'status', 'message', 'created_at', 'responded_at', 'source', 'customer_comment', 'comment_pins', db.raw('image_png IS NOT NULL as has_image'))
+      .select(
+        'version',
+        'status',
+        'message',
+        'created_at',
+        'responded_at',
+        'source',
+        'customer_comment',
+        'comment_pins',
+        db.raw('image_png IS NOT NULL as has_image'),
+      )
       .where({ order_id: order.id })
       .orderBy('version'),
     db('order_events as e')
@@ -50,7 +76,10 @@ export async function readOrderDetail(db: Db, number: string): Promise<Omit<Orde
       quantity: i.quantity,
       totalCents: Number(i.total_cents),
       designName: i.design_name,
-      artwork: artworkOn(i.document).map((placement) => ({ ...placement, imageUrl: orderArtworkImagePath(order.number, placement.uploadId) })),
+      artwork: artworkOn(i.document).map((placement) => ({
+        ...placement,
+        imageUrl: orderArtworkImagePath(order.number, placement.uploadId),
+      })),
     })),
     quote: { ruleSetVersion: order.rule_set_version, lines: order.quote_lines },
     payments: payments.map((p) => ({
@@ -88,13 +117,25 @@ export function artworkOn(document: unknown): { uploadId: number; zone: string; 
   const restored = restoreDesign(document);
   if (!restored.success) return [];
   return restored.data.placements.flatMap((placement) =>
-    placement.kind === 'artwork' ? [{ uploadId: placement.artworkUploadId, zone: placement.zone, widthMm: placement.widthMm }] : [],
+    placement.kind === 'artwork'
+      ? [{ uploadId: placement.artworkUploadId, zone: placement.zone, widthMm: placement.widthMm }]
+      : [],
   );
 }
 
 /** The order's customer and the uploads its designs place, so only those pictures can be opened from the order. */
-export async function readOrderArtworkOwner(db: Db, number: string): Promise<{ customerId: number; uploadIds: number[] } | undefined> {
-  const rows = await db('orders as o').join('order_items as i', 'i.order_id', 'o.id').join('designs as d', 'd.id', 'i.design_id').select('o.customer_id', 'd.document').where('o.number', number);
+export async function readOrderArtworkOwner(
+  db: Db,
+  number: string,
+): Promise<{ customerId: number; uploadIds: number[] } | undefined> {
+  const rows = await db('orders as o')
+    .join('order_items as i', 'i.order_id', 'o.id')
+    .join('designs as d', 'd.id', 'i.design_id')
+    .select('o.customer_id', 'd.document')
+    .where('o.number', number);
   if (rows.length === 0) return undefined;
-  return { customerId: rows[0].customer_id, uploadIds: rows.flatMap((row) => artworkOn(row.document).map((placement) => placement.uploadId)) };
+  return {
+    customerId: rows[0].customer_id,
+    uploadIds: rows.flatMap((row) => artworkOn(row.document).map((placement) => placement.uploadId)),
+  };
 }

@@ -39,7 +39,12 @@ const studio = ['staff', 'owner'] as const;
  */
 export const orderMoves: Readonly<Record<OrderAction, Move>> = {
   authorize: { from: ['awaiting_payment'], to: 'authorized', by: ['system'], event: 'payment_authorized' },
-  send_proof: { from: ['authorized', 'proof_sent', 'changes_requested'], to: 'proof_sent', by: studio, event: 'proof_sent' },
+  send_proof: {
+    from: ['authorized', 'proof_sent', 'changes_requested'],
+    to: 'proof_sent',
+    by: studio,
+    event: 'proof_sent',
+  },
   request_changes: { from: ['proof_sent'], to: 'changes_requested', by: ['customer'], event: 'changes_requested' },
   approve_proof: { from: ['proof_sent'], to: 'proof_approved', by: ['customer'], event: 'proof_approved' },
   start_production: { from: ['proof_approved'], to: 'in_production', by: studio, event: 'payment_captured' },
@@ -59,7 +64,8 @@ export const finalStatuses: readonly OrderStatus[] = ['cancelled', 'refunded'];
 
 /** Why an order in `from` cannot take `action`, in words for the person who tried. */
 function refusal(action: OrderAction, from: OrderStatus): string {
-  if (finalStatuses.includes(from)) return `This order is ${from === 'cancelled' ? 'cancelled' : 'refunded'}; nothing more can be done to it.`;
+  if (finalStatuses.includes(from))
+    return `This order is ${from === 'cancelled' ? 'cancelled' : 'refunded'}; nothing more can be done to it.`;
   switch (action) {
     case 'authorize':
       return 'The card is already held for this order.';
@@ -85,13 +91,19 @@ function refusal(action: OrderAction, from: OrderStatus): string {
   }
 }
 
-export type PlannedMove = { ok: true; to: OrderStatus; event: string } | { ok: false; reason: string; kind: 'conflict' | 'forbidden' };
+export type PlannedMove =
+  { ok: true; to: OrderStatus; event: string } | { ok: false; reason: string; kind: 'conflict' | 'forbidden' };
 
 /** Where `action` takes an order in `from` when `actor` asks, or why it may not. */
 export function planOrderMove(from: OrderStatus, action: OrderAction, actor: OrderActor): PlannedMove {
   const move = orderMoves[action];
   if (!move.by.includes(actor)) {
-    const who = move.by.includes('customer') && !move.by.includes('staff') ? 'the customer' : move.by.includes('staff') ? 'the studio' : 'a confirmed payment';
+    const who =
+      move.by.includes('customer') && !move.by.includes('staff')
+        ? 'the customer'
+        : move.by.includes('staff')
+          ? 'the studio'
+          : 'a confirmed payment';
     return { ok: false, kind: 'forbidden', reason: `Only ${who} can do that.` };
   }
   if (!move.from.includes(from)) return { ok: false, kind: 'conflict', reason: refusal(action, from) };

@@ -11,11 +11,24 @@ import type { StudioActor } from '../payments/order-payment-service.ts';
 import { orderShippedMail } from './studio-order-mail.ts';
 
 export function createOrderProductionSteps(deps: { db: Db; mailer: Mailer; now: () => Date; appOrigin: string }) {
-  async function step(number: string, action: Extract<OrderAction, 'mark_stitched' | 'ship'>, actor: StudioActor, payload?: object) {
+  async function step(
+    number: string,
+    action: Extract<OrderAction, 'mark_stitched' | 'ship'>,
+    actor: StudioActor,
+    payload?: object,
+  ) {
     return deps.db.transaction(async (trx) => {
       const order = await findStudioOrder(trx, number);
-      if (!order) return { order, result: failure('not-found', `There is no order ${number}.`) as Result<OrderActionResponse> };
-      const moved = await moveOrder(trx, { orderId: order.id, action, actor: actor.role, actorUserId: actor.userId, payload, now: deps.now() });
+      if (!order)
+        return { order, result: failure('not-found', `There is no order ${number}.`) as Result<OrderActionResponse> };
+      const moved = await moveOrder(trx, {
+        orderId: order.id,
+        action,
+        actor: actor.role,
+        actorUserId: actor.userId,
+        payload,
+        now: deps.now(),
+      });
       if (!moved.ok) return { order, result: moved as Result<OrderActionResponse> };
       return { order, result: ok(await readOrderStanding(trx, order.id)) };
     });
@@ -27,7 +40,10 @@ export function createOrderProductionSteps(deps: { db: Db; mailer: Mailer; now: 
     },
     async ship(number: string, request: ShipOrderRequest, actor: StudioActor): Promise<Result<OrderActionResponse>> {
       const trackingNumber = request.trackingNumber || undefined;
-      const { order, result } = await step(number, 'ship', actor, { carrier: 'Parcel post', trackingNumber: trackingNumber ?? null });
+      const { order, result } = await step(number, 'ship', actor, {
+        carrier: 'Parcel post',
+        trackingNumber: trackingNumber ?? null,
+      });
       if (result.ok && order) await sendLoggedMail(deps, orderShippedMail(order, deps.appOrigin, trackingNumber));
       return result;
     },

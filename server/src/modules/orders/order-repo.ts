@@ -6,7 +6,8 @@ import type { ShipTo } from '../../contracts/orders.ts';
 const FIRST_ORDER_NUMBER = 1001;
 const ORDER_NUMBER_PREFIX = 'WB';
 
-export type PaymentRowStatus = 'pending' | 'authorized' | 'captured' | 'partially_refunded' | 'refunded' | 'voided' | 'failed';
+export type PaymentRowStatus =
+  'pending' | 'authorized' | 'captured' | 'partially_refunded' | 'refunded' | 'voided' | 'failed';
 
 /** An order as checkout and the payment webhooks handle it. */
 export interface OrderRecord {
@@ -108,7 +109,14 @@ export async function insertOrder(trx: Db, write: OrderWrite): Promise<number> {
     description: write.item.description,
     ...stamps,
   });
-  await trx('order_events').insert({ order_id: orderId, actor_user_id: write.customerId, type: 'order_created', from_status: null, to_status: 'awaiting_payment', created_at: write.createdAt });
+  await trx('order_events').insert({
+    order_id: orderId,
+    actor_user_id: write.customerId,
+    type: 'order_created',
+    from_status: null,
+    to_status: 'awaiting_payment',
+    created_at: write.createdAt,
+  });
   return orderId as number;
 }
 
@@ -124,8 +132,18 @@ export async function findOrderById(db: Db, id: number): Promise<OrderRecord | u
 }
 
 /** A new checkout attempt for the order, pending until the card is held. */
-export async function insertPendingPayment(trx: Db, order: Pick<OrderRecord, 'id' | 'currency'>, now: Date): Promise<number> {
-  const [id] = await trx('payments').insert({ order_id: order.id, status: 'pending', currency: order.currency, created_at: now, updated_at: now });
+export async function insertPendingPayment(
+  trx: Db,
+  order: Pick<OrderRecord, 'id' | 'currency'>,
+  now: Date,
+): Promise<number> {
+  const [id] = await trx('payments').insert({
+    order_id: order.id,
+    status: 'pending',
+    currency: order.currency,
+    created_at: now,
+    updated_at: now,
+  });
   return id as number;
 }
 
@@ -135,8 +153,14 @@ export async function listPayments(db: Db, orderId: number): Promise<PaymentReco
 }
 
 /** The payment by the provider's ids, locked for the caller's transaction. */
-export async function lockPaymentBy(trx: Db, key: { checkoutSessionId: string } | { paymentIntentId: string }): Promise<PaymentRecord | undefined> {
-  const where = 'checkoutSessionId' in key ? { checkout_session_id: key.checkoutSessionId } : { payment_intent_id: key.paymentIntentId };
+export async function lockPaymentBy(
+  trx: Db,
+  key: { checkoutSessionId: string } | { paymentIntentId: string },
+): Promise<PaymentRecord | undefined> {
+  const where =
+    'checkoutSessionId' in key
+      ? { checkout_session_id: key.checkoutSessionId }
+      : { payment_intent_id: key.paymentIntentId };
   // An event without the id it should carry matches no payment.
   if (typeof Object.values(where)[0] !== 'string') return undefined;
   const row = await trx('payments').select('*').where(where).forUpdate().first();
@@ -145,12 +169,19 @@ export async function lockPaymentBy(trx: Db, key: { checkoutSessionId: string } 
 
 /** The order's latest checkout attempt still waiting for a card, locked. */
 export async function lockLatestPendingPayment(trx: Db, orderId: number): Promise<PaymentRecord | undefined> {
-  const row = await trx('payments').select('*').where({ order_id: orderId, status: 'pending' }).orderBy('id', 'desc').forUpdate().first();
+  const row = await trx('payments')
+    .select('*')
+    .where({ order_id: orderId, status: 'pending' })
+    .orderBy('id', 'desc')
+    .forUpdate()
+    .first();
   return row ? toPayment(row) : undefined;
 }
 
 export async function updatePayment(db: Db, id: number, changes: Record<string, unknown>, now: Date): Promise<void> {
-  await db('payments').where({ id }).update({ ...changes, updated_at: now });
+  await db('payments')
+    .where({ id })
+    .update({ ...changes, updated_at: now });
 }
 
 /**
@@ -158,12 +189,29 @@ export async function updatePayment(db: Db, id: number, changes: Record<string, 
  * failed attempts leave it as it was).
  */
 export async function syncOrderPaymentStatus(trx: Db, orderId: number, now: Date): Promise<void> {
-  const latest = await trx('payments').select('status').where({ order_id: orderId }).whereNotIn('status', ['pending', 'failed']).orderBy('id', 'desc').first();
-  await trx('orders').where({ id: orderId }).update({ payment_status: latest?.status ?? 'none', updated_at: now });
+  const latest = await trx('payments')
+    .select('status')
+    .where({ order_id: orderId })
+    .whereNotIn('status', ['pending', 'failed'])
+    .orderBy('id', 'desc')
+    .first();
+  await trx('orders')
+    .where({ id: orderId })
+    .update({ payment_status: latest?.status ?? 'none', updated_at: now });
 }
 
 /** An order event that is not a status move: a payment attempt, a hold released, a new hold. */
-export async function insertOrderNote(trx: Db, event: { orderId: number; type: string; actorUserId: number | null; note?: string | null; payload?: object; at: Date }): Promise<void> {
+export async function insertOrderNote(
+  trx: Db,
+  event: {
+    orderId: number;
+    type: string;
+    actorUserId: number | null;
+    note?: string | null;
+    payload?: object;
+    at: Date;
+  },
+): Promise<void> {
   await trx('order_events').insert({
     order_id: event.orderId,
     actor_user_id: event.actorUserId,
@@ -175,7 +223,10 @@ export async function insertOrderNote(trx: Db, event: { orderId: number; type: s
 }
 
 /** How an order line names its design: "Clara's bishop: Bishop dress, 6 months, Christening White". */
-export async function describeDesignForOrder(db: Db, design: { name: string; garmentId: number; sizeId: number; colourId: number }): Promise<string> {
+export async function describeDesignForOrder(
+  db: Db,
+  design: { name: string; garmentId: number; sizeId: number; colourId: number },
+): Promise<string> {
   const row = await db('garments as g')
     .join('garment_sizes as s', 's.garment_id', 'g.id')
     .join('fabric_colours as c', 'c.garment_id', 'g.id')
@@ -193,7 +244,11 @@ export async function readOrderDescription(db: Db, orderId: number): Promise<str
 
 /** Where the order's e-mails go. */
 export async function findCustomerEmail(db: Db, orderId: number): Promise<string> {
-  const row = await db('orders as o').join('users as u', 'u.id', 'o.customer_id').select('u.email').where('o.id', orderId).first();
+  const row = await db('orders as o')
+    .join('users as u', 'u.id', 'o.customer_id')
+    .select('u.email')
+    .where('o.id', orderId)
+    .first();
   if (!row) throw new Error(`Order ${orderId} has no customer.`);
   return row.email;
 }

@@ -44,13 +44,23 @@ export function createOrdersRouter(deps: { checkout: CheckoutService; customerOr
     if (!image.ok) return sendResult(res, image);
     res.set('Cache-Control', 'private, max-age=300').type('png').send(image.value);
   });
-  router.post('/:number/proofs/:version/approval', validate(proofParams, 'params'), validate(proofAnswerRequest), async (req, res) => {
-    const { number, version } = res.locals.params as ProofParams;
-    sendResult(res, await deps.customerOrders.answerProof(userOf(req), number, version, true, req.body));
-  });
-  router.post('/:number/proofs/:version/change-request', validate(proofParams, 'params'), validate(proofAnswerRequest), async (req, res) => {
-    const { number, version } = res.locals.params as ProofParams;
-    sendResult(res, await deps.customerOrders.answerProof(userOf(req), number, version, false, req.body));
-  });
+  router.post(
+    '/:number/proofs/:version/approval',
+    validate(proofParams, 'params'),
+    validate(proofAnswerRequest),
+    async (req, res) => {
+      const { number, version } = res.locals.params as ProofParams;
+      sendResult(res, await deps.customerOrders.answerProof(userOf(req), number, version, true, req.body));
+    },
+  );
+  router.post(
+    '/:number/proofs/:version/change-request',
+    validate(proofParams, 'params'),
+    validate(proofAnswerRequest),
+    async (req, res) => {
+      const { number, version } = res.locals.params as ProofParams;
+      sendResult(res, await deps.customerOrders.answerProof(userOf(req), number, version, false, req.body));
+    },
+  );
   return router;
 }

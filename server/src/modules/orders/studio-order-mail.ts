@@ -19,10 +19,20 @@ export interface MailOrder {
 const firstName = (name: string) => name.split(/\s+/)[0] || name;
 
 function compose(order: MailOrder, template: string, subject: string, paragraphs: string[]): LoggedMail {
-  return { to: order.customerEmail, subject, ...mailBodies([`Hello ${firstName(order.customerName)},`, ...paragraphs, `— ${order.shopName}`]), template, orderId: order.id };
+  return {
+    to: order.customerEmail,
+    subject,
+    ...mailBodies([`Hello ${firstName(order.customerName)},`, ...paragraphs, `— ${order.shopName}`]),
+    template,
+    orderId: order.id,
+  };
 }
 
-export function proofReadyMail(order: MailOrder, appOrigin: string, proof: { version: number; message: string }): LoggedMail {
+export function proofReadyMail(
+  order: MailOrder,
+  appOrigin: string,
+  proof: { version: number; message: string },
+): LoggedMail {
   return compose(order, 'proof_ready', `Your proof for ${order.number} is ready`, [
     proof.message,
     `Look at proof ${proof.version} and approve it, or point at anything you would like changed: ${orderPageUrl(appOrigin, order.number)}`,
@@ -38,15 +48,26 @@ export function payAgainMail(order: MailOrder, appOrigin: string): LoggedMail {
   ]);
 }
 
-export function orderCancelledMail(order: MailOrder, appOrigin: string, reason: string, wasCardReleased: boolean): LoggedMail {
+export function orderCancelledMail(
+  order: MailOrder,
+  appOrigin: string,
+  reason: string,
+  wasCardReleased: boolean,
+): LoggedMail {
   return compose(order, 'order_cancelled', `${order.number} has been cancelled`, [
     `We have cancelled order ${order.number}: ${reason}`,
-    wasCardReleased ? 'The hold on your card has been released, so nothing was charged.' : 'Nothing was charged for this order.',
+    wasCardReleased
+      ? 'The hold on your card has been released, so nothing was charged.'
+      : 'Nothing was charged for this order.',
     `Your order page: ${orderPageUrl(appOrigin, order.number)}`,
   ]);
 }
 
-export function refundIssuedMail(order: MailOrder, appOrigin: string, refund: { amountCents: number; isFull: boolean; reason: string }): LoggedMail {
+export function refundIssuedMail(
+  order: MailOrder,
+  appOrigin: string,
+  refund: { amountCents: number; isFull: boolean; reason: string },
+): LoggedMail {
   const amount = formatMoneyText(refund.amountCents, order.currency);
   return compose(order, 'refund_issued', `A refund of ${amount} for ${order.number}`, [
     `We have refunded ${amount}${refund.isFull ? ', the whole order,' : ''} to your card: ${refund.reason}`,
@@ -58,7 +79,9 @@ export function refundIssuedMail(order: MailOrder, appOrigin: string, refund: { 
 export function orderShippedMail(order: MailOrder, appOrigin: string, trackingNumber: string | undefined): LoggedMail {
   return compose(order, 'order_shipped', `${order.number} is on its way`, [
     'Your embroidered order has been packed and posted.',
-    trackingNumber ? `Tracking number: ${trackingNumber}` : 'The parcel has no tracking number; it usually arrives within a week.',
+    trackingNumber
+      ? `Tracking number: ${trackingNumber}`
+      : 'The parcel has no tracking number; it usually arrives within a week.',
     `Your order page: ${orderPageUrl(appOrigin, order.number)}`,
   ]);
 }

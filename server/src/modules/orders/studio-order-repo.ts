@@ -28,13 +28,27 @@ export interface OrderPayment {
   captureBefore: Date | null;
 }
 
-export async function findStudioOrder(db: Db | Knex.Transaction, number: string, options: { lock?: boolean } = {}): Promise<StudioOrder | undefined> {
+export async function findStudioOrder(
+  db: Db | Knex.Transaction,
+  number: string,
+  options: { lock?: boolean } = {},
+): Promise<StudioOrder | undefined> {
   const query = db('orders as o')
     .join('users as u', 'u.id', 'o.customer_id')
     // The single settings row (id 1) names the studio.
     .join('shop_settings as s', 's.id', db.raw('1'))
     .where('o.number', number)
-    .first('o.id', 'o.number', 'o.status', 'o.payment_status', 'o.total_cents', 'o.currency', 'u.name as customer_name', 'u.email as customer_email', 's.name as shop_name');
+    .first(
+      'o.id',
+      'o.number',
+      'o.status',
+      'o.payment_status',
+      'o.total_cents',
+      'o.currency',
+      'u.name as customer_name',
+      'u.email as customer_email',
+      's.name as shop_name',
+    );
   // Locks the order row (and the customer's, which nothing else writes in these flows).
   if (options.lock) query.forUpdate();
   const row = await query;
@@ -96,7 +110,14 @@ export async function updatePayment(
 /** An order event that records what happened without moving the order (a lapsed hold, a partial refund). */
 export async function recordOrderEvent(
   trx: Knex.Transaction,
-  event: { orderId: number; type: string; actorUserId: number | null; note?: string | null; payload?: object; now: Date },
+  event: {
+    orderId: number;
+    type: string;
+    actorUserId: number | null;
+    note?: string | null;
+    payload?: object;
+    now: Date;
+  },
 ): Promise<void> {
   await trx('order_events').insert({
     order_id: event.orderId,
@@ -113,7 +134,10 @@ export async function recordOrderEvent(
 /** Where the order stands after an action, read inside the action's transaction. */
 export async function readOrderStanding(trx: Knex.Transaction | Db, orderId: number): Promise<OrderActionResponse> {
   const order = await trx('orders').where({ id: orderId }).first('number', 'status', 'payment_status');
-  const payment = await trx('payments').where({ order_id: orderId }).orderBy('id', 'desc').first('amount_captured_cents', 'amount_refunded_cents');
+  const payment = await trx('payments')
+    .where({ order_id: orderId })
+    .orderBy('id', 'desc')
+    .first('amount_captured_cents', 'amount_refunded_cents');
   return {
     number: order.number,
     status: order.status,

@@ -16,7 +16,12 @@ export interface CheckoutSessionOrder {
  * lead back to the order's page, which waits there for the webhook. The payment row's id keys the request, so a
  * retried call cannot open two sessions for one attempt.
  */
-export async function openCheckoutSession(stripe: Stripe, appOrigin: string, order: CheckoutSessionOrder, paymentId: number): Promise<{ id: string; url: string }> {
+export async function openCheckoutSession(
+  stripe: Stripe,
+  appOrigin: string,
+  order: CheckoutSessionOrder,
+  paymentId: number,
+): Promise<{ id: string; url: string }> {
   const metadata = { orderId: String(order.id), orderNumber: order.number, paymentId: String(paymentId) };
   const orderPage = orderPageUrl(appOrigin, order.number);
   const session = await stripe.checkout.sessions.create(
@@ -25,7 +30,11 @@ export async function openCheckoutSession(stripe: Stripe, appOrigin: string, ord
       line_items: [
         {
           // One line for the whole order: the total already holds tax, and the quote's lines stay the record.
-          price_data: { currency: order.currency.toLowerCase(), unit_amount: order.totalCents, product_data: { name: `Order ${order.number}: ${order.description}`.slice(0, 250) } },
+          price_data: {
+            currency: order.currency.toLowerCase(),
+            unit_amount: order.totalCents,
+            product_data: { name: `Order ${order.number}: ${order.description}`.slice(0, 250) },
+          },
           quantity: 1,
         },
       ],

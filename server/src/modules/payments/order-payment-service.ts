@@ -12,7 +12,14 @@ import type { Db } from '../../db/knex.ts';
 import type { Mailer } from '../../integrations/mailer.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import type { CancelOrderRequest, OrderActionResponse, RefundOrderRequest } from '../../contracts/studio-orders.ts';
-import { findStudioOrder, lockLivePayment, readOrderStanding, recordOrderEvent, updatePayment, type StudioOrder } from '../orders/studio-order-repo.ts';
+import {
+  findStudioOrder,
+  lockLivePayment,
+  readOrderStanding,
+  recordOrderEvent,
+  updatePayment,
+  type StudioOrder,
+} from '../orders/studio-order-repo.ts';
 import { sendLoggedMail, type LoggedMail } from '../mail/order-mail.ts';
 import { planOrderMove } from '../orders/order-flow.ts';
 import { moveOrder } from '../orders/order-transitions.ts';
@@ -34,7 +41,8 @@ export interface StudioActor {
 
 type Outcome = { result: Result<OrderActionResponse>; mail?: LoggedMail };
 
-const isStripeError = (error: unknown): error is Stripe.errors.StripeError => error instanceof Stripe.errors.StripeError;
+const isStripeError = (error: unknown): error is Stripe.errors.StripeError =>
+  error instanceof Stripe.errors.StripeError;
 
 export function createOrderPaymentService(deps: OrderPaymentDeps) {
   const { db, stripe } = deps;
@@ -45,11 +53,26 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
   }
 
   /** The hold ran out: the payment is voided, the order keeps its approved proof and waits for a new card. */
-  async function markLapsed(trx: Knex.Transaction, order: StudioOrder, paymentId: number, actor: StudioActor, now: Date): Promise<Outcome> {
+  async function markLapsed(
+    trx: Knex.Transaction,
+    order: StudioOrder,
+    paymentId: number,
+    actor: StudioActor,
+    now: Date,
+  ): Promise<Outcome> {
     await updatePayment(trx, order.id, paymentId, { status: 'voided' });
-    await recordOrderEvent(trx, { orderId: order.id, type: 'authorization_lapsed', actorUserId: actor.userId, payload: { paymentId }, now });
+    await recordOrderEvent(trx, {
+      orderId: order.id,
+      type: 'authorization_lapsed',
+      actorUserId: actor.userId,
+      payload: { paymentId },
+      now,
+    });
     return {
-      result: failure('conflict', 'The hold on the customer’s card has run out, so nothing could be charged. We have e-mailed them a link to confirm their card again; charge the order once they have.'),
+      result: failure(
+        'conflict',
+        'The hold on the customer’s card has run out, so nothing could be charged. We have e-mailed them a link to confirm their card again; charge the order once they have.',
+      ),
       mail: payAgainMail(order, deps.appOrigin),
     };
   }
@@ -67,19 +90,30 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
       if (!planned.ok) return { result: failure(planned.kind, planned.reason) };
       const payment = await lockLivePayment(trx, order.id);
       if (!payment || payment.status !== 'authorized' || !payment.paymentIntentId) {
-        return { result: failure('conflict', 'No card is held for this order, so there is nothing to charge. The customer needs to pay again first.') };
+        return {
+          result: failure(
+            'conflict',
+            'No card is held for this order, so there is nothing to charge. The customer needs to pay again first.',
+          ),
+        };
       }
-      if (payment.captureBefore && payment.captureBefore.getTime() <= now.getTime()) return markLapsed(trx, order, payment.id, actor, now);
+      if (payment.captureBefore && payment.captureBefore.getTime() <= now.getTime())
+        return markLapsed(trx, order, payment.id, actor, now);
 
       let capturedCents: number;
       try {
-        const intent = await stripe.paymentIntents.capture(payment.paymentIntentId, {}, { idempotencyKey: `capture-order-${order.id}-${payment.id}` });
+        const intent = await stripe.paymentIntents.capture(
+          payment.paymentIntentId,
+          {},
+          { idempotencyKey: `capture-order-${order.id}-${payment.id}` },
+        );
         capturedCents = intent.amount_received;
       } catch (error) {
         if (!isStripeError(error) || error.type !== 'StripeInvalidRequestError') throw error;
         const intent = await stripe.paymentIntents.retrieve(payment.paymentIntentId);
         if (intent.status === 'canceled') return markLapsed(trx, order, payment.id, actor, now);
-        if (intent.status !== 'succeeded') return { result: failure('payment-failed', `The card could not be charged: ${error.message}`) };
+        if (intent.status !== 'succeeded')
+          return { result: failure('payment-failed', `The card could not be charged: ${error.message}`) };
         // Charged by an earlier attempt whose answer was lost: record that charge, never make a second one.
         capturedCents = intent.amount_received;
       }
@@ -99,7 +133,11 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
   }
 
   /** Cancels an order before the charge, releasing a held card. */
-  async function cancel(number: string, request: CancelOrderRequest, actor: StudioActor): Promise<Result<OrderActionResponse>> {
+  async function cancel(
+    number: string,
+    request: CancelOrderRequest,
+    actor: StudioActor,
+  ): Promise<Result<OrderActionResponse>> {
     const outcome = await db.transaction(async (trx): Promise<Outcome> => {
       const now = deps.now();
       const order = await findStudioOrder(trx, number, { lock: true });
@@ -110,24 +148,53 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
       let wasCardReleased = false;
       if (payment?.status === 'authorized' && payment.paymentIntentId) {
         try {
-          await stripe.paymentIntents.cancel(payment.paymentIntentId, { cancellation_reason: 'requested_by_customer' }, { idempotencyKey: `cancel-order-${order.id}-${payment.id}` });
+          await stripe.paymentIntents.cancel(
+            payment.paymentIntentId,
+            { cancellation_reason: 'requested_by_customer' },
+            { idempotencyKey: `cancel-order-${order.id}-${payment.id}` },
+          );
         } catch (error) {
           // A hold that already lapsed has nothing left to release; anything else is not ours to ignore.
-          if (!isStripeError(error) || error.type !== 'StripeInvalidRequestError' || (await stripe.paymentIntents.retrieve(payment.paymentIntentId)).status !== 'canceled') throw error;
+          if (
+            !isStripeError(error) ||
+            error.type !== 'StripeInvalidRequestError' ||
+            (await stripe.paymentIntents.retrieve(payment.paymentIntentId)).status !== 'canceled'
+          )
+            throw error;
         }
         await updatePayment(trx, order.id, payment.id, { status: 'voided' });
-        await recordOrderEvent(trx, { orderId: order.id, type: 'payment_voided', actorUserId: actor.userId, payload: { paymentIntentId: payment.paymentIntentId }, now });
+        await recordOrderEvent(trx, {
+          orderId: order.id,
+          type: 'payment_voided',
+          actorUserId: actor.userId,
+          payload: { paymentIntentId: payment.paymentIntentId },
+          now,
+        });
         wasCardReleased = true;
       }
-      const moved = await moveOrder(trx, { orderId: order.id, action: 'cancel', actor: actor.role, actorUserId: actor.userId, note: request.reason, now });
+      const moved = await moveOrder(trx, {
+        orderId: order.id,
+        action: 'cancel',
+        actor: actor.role,
+        actorUserId: actor.userId,
+        note: request.reason,
+        now,
+      });
       if (!moved.ok) throw new Error(`The order moved while it was locked: ${moved.error.message}`);
-      return { result: ok(await readOrderStanding(trx, order.id)), mail: orderCancelledMail(order, deps.appOrigin, request.reason, wasCardReleased) };
+      return {
+        result: ok(await readOrderStanding(trx, order.id)),
+        mail: orderCancelledMail(order, deps.appOrigin, request.reason, wasCardReleased),
+      };
     });
     return finish(outcome);
   }
 
   /** Gives back part or all of what was charged; giving back the rest closes the order as refunded. */
-  async function refund(number: string, request: RefundOrderRequest, actor: StudioActor): Promise<Result<OrderActionResponse>> {
+  async function refund(
+    number: string,
+    request: RefundOrderRequest,
+    actor: StudioActor,
+  ): Promise<Result<OrderActionResponse>> {
     const outcome = await db.transaction(async (trx): Promise<Outcome> => {
       const now = deps.now();
       const order = await findStudioOrder(trx, number, { lock: true });
@@ -142,24 +209,52 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
       const amountCents = request.amountCents ?? refundableCents;
       if (amountCents > refundableCents) {
         const most = formatMoneyText(refundableCents, order.currency);
-        return { result: failure('invalid', `At most ${most} can be refunded.`, { amountCents: `Refund at most ${most}` }) };
+        return {
+          result: failure('invalid', `At most ${most} can be refunded.`, { amountCents: `Refund at most ${most}` }),
+        };
       }
       // Keyed by what had been refunded before, so a retry of this refund replays while a later one is new.
       const stripeRefund = await stripe.refunds.create(
-        { payment_intent: payment.paymentIntentId, amount: amountCents, reason: 'requested_by_customer', metadata: { orderNumber: order.number } },
+        {
+          payment_intent: payment.paymentIntentId,
+          amount: amountCents,
+          reason: 'requested_by_customer',
+          metadata: { orderNumber: order.number },
+        },
         { idempotencyKey: `refund-order-${order.id}-${payment.id}-${payment.refundedCents}-${amountCents}` },
       );
       const refundedCents = payment.refundedCents + amountCents;
       const isFull = refundedCents === payment.capturedCents;
-      await updatePayment(trx, order.id, payment.id, { status: isFull ? 'refunded' : 'partially_refunded', refundedCents });
+      await updatePayment(trx, order.id, payment.id, {
+        status: isFull ? 'refunded' : 'partially_refunded',
+        refundedCents,
+      });
       const payload = { refundId: stripeRefund.id, amountCents };
       if (isFull) {
-        const moved = await moveOrder(trx, { orderId: order.id, action: 'refund', actor: actor.role, actorUserId: actor.userId, note: request.reason, payload, now });
+        const moved = await moveOrder(trx, {
+          orderId: order.id,
+          action: 'refund',
+          actor: actor.role,
+          actorUserId: actor.userId,
+          note: request.reason,
+          payload,
+          now,
+        });
         if (!moved.ok) throw new Error(`The order moved while it was locked: ${moved.error.message}`);
       } else {
-        await recordOrderEvent(trx, { orderId: order.id, type: 'refunded', actorUserId: actor.userId, note: request.reason, payload, now });
+        await recordOrderEvent(trx, {
+          orderId: order.id,
+          type: 'refunded',
+          actorUserId: actor.userId,
+          note: request.reason,
+          payload,
+          now,
+        });
       }
-      return { result: ok(await readOrderStanding(trx, order.id)), mail: refundIssuedMail(order, deps.appOrigin, { amountCents, isFull, reason: request.reason }) };
+      return {
+        result: ok(await readOrderStanding(trx, order.id)),
+        mail: refundIssuedMail(order, deps.appOrigin, { amountCents, isFull, reason: request.reason }),
+      };
     });
     return finish(outcome);
   }

@@ -32,15 +32,29 @@ const GENERIC_DECLINE = 'Your card was not accepted, so nothing was charged.';
  * redelivery of an event already applied changes nothing, and one that failed half-way is applied afresh the
  * next time the provider sends it. The provider promises no order, so each handler reads the state it changes.
  */
-export function createPaymentWebhookService(deps: { db: Db; stripe: Stripe; mailer: Mailer; appOrigin: string; now: () => Date }) {
+export function createPaymentWebhookService(deps: {
+  db: Db;
+  stripe: Stripe;
+  mailer: Mailer;
+  appOrigin: string;
+  now: () => Date;
+}) {
   const { db } = deps;
 
   async function receive(event: Stripe.Event, rawPayload: string): Promise<{ isDuplicate: boolean }> {
     // The PaymentIntent's own status is what counts, so it is read before the transaction opens.
-    const intent = event.type === 'checkout.session.completed' ? await intentOf(event.data.object as Stripe.Checkout.Session) : undefined;
+    const intent =
+      event.type === 'checkout.session.completed'
+        ? await intentOf(event.data.object as Stripe.Checkout.Session)
+        : undefined;
     const outcome = await db.transaction(async (trx) => {
       const now = deps.now();
-      const isNew = await recordWebhookEvent(trx, { id: event.id, type: event.type, payload: rawPayload, receivedAt: now });
+      const isNew = await recordWebhookEvent(trx, {
+        id: event.id,
+        type: event.type,
+        payload: rawPayload,
+        receivedAt: now,
+      });
       if (!isNew) return { isDuplicate: true, effect: undefined };
       const effect = await apply(trx, event, intent, now);
       await markWebhookEventProcessed(trx, event.id, now);
@@ -55,32 +69,64 @@ export function createPaymentWebhookService(deps: { db: Db; stripe: Stripe; mail
     return id ? deps.stripe.paymentIntents.retrieve(id, { expand: ['latest_charge'] }) : undefined;
   }
 
-  async function apply(trx: Knex.Transaction, event: Stripe.Event, intent: Stripe.PaymentIntent | undefined, now: Date): Promise<Effect> {
+  async function apply(
+    trx: Knex.Transaction,
+    event: Stripe.Event,
+    intent: Stripe.PaymentIntent | undefined,
+    now: Date,
+  ): Promise<Effect> {
     switch (event.type) {
       case 'checkout.session.completed':
         return sessionCompleted(trx, event.data.object, intent, now);
       case 'checkout.session.expired':
-        return attemptFailed(trx, await lockPaymentBy(trx, { checkoutSessionId: event.data.object.id }), 'The payment page was left open too long, so nothing was charged.', now);
+        return attemptFailed(
+          trx,
+          await lockPaymentBy(trx, { checkoutSessionId: event.data.object.id }),
+          'The payment page was left open too long, so nothing was charged.',
+          now,
+        );
       case 'payment_intent.payment_failed': {
         const pi = event.data.object;
-        const payment = (await lockPaymentBy(trx, { paymentIntentId: pi.id })) ?? (await pendingPaymentOfOrder(trx, pi.metadata));
+        const payment =
+          (await lockPaymentBy(trx, { paymentIntentId: pi.id })) ?? (await pendingPaymentOfOrder(trx, pi.metadata));
         return attemptFailed(trx, payment, pi.last_payment_error?.message ?? GENERIC_DECLINE, now);
       }
       case 'payment_intent.canceled':
-        return bringInLine(trx, event.data.object.id, (p) => (p.status === 'authorized' ? { status: 'voided' } : undefined), now);
+        return bringInLine(
+          trx,
+          event.data.object.id,
+          (p) => (p.status === 'authorized' ? { status: 'voided' } : undefined),
+          now,
+        );
       case 'payment_intent.succeeded': {
         const pi = event.data.object;
-        return bringInLine(trx, pi.id, (p) => (p.status === 'authorized' ? { status: 'captured', amount_captured_cents: pi.amount_received, captured_at: now } : undefined), now);
+        return bringInLine(
+          trx,
+          pi.id,
+          (p) =>
+            p.status === 'authorized'
+              ? { status: 'captured', amount_captured_cents: pi.amount_received, captured_at: now }
+              : undefined,
+          now,
+        );
       }
       case 'charge.refunded': {
         const charge = event.data.object;
         const intentId = typeof charge.payment_intent === 'string' ? charge.payment_intent : charge.payment_intent?.id;
         if (!intentId) return undefined;
-        return bringInLine(trx, intentId, (p) => {
-          if (charge.amount_refunded <= p.refundedCents) return undefined;
-          const isWhole = charge.amount_refunded >= p.capturedCents;
-          return { amount_refunded_cents: Math.min(charge.amount_refunded, p.capturedCents), status: isWhole ? 'refunded' : 'partially_refunded' };
-        }, now);
+        return bringInLine(
+          trx,
+          intentId,
+          (p) => {
+            if (charge.amount_refunded <= p.refundedCents) return undefined;
+            const isWhole = charge.amount_refunded >= p.capturedCents;
+            return {
+              amount_refunded_cents: Math.min(charge.amount_refunded, p.capturedCents),
+              status: isWhole ? 'refunded' : 'partially_refunded',
+            };
+          },
+          now,
+        );
       }
       default:
         return undefined;
@@ -88,8 +134,15 @@ export function createPaymentWebhookService(deps: { db: Db; stripe: Stripe; mail
   }
 
   /** The card is held: the payment is authorized and a waiting order is placed; a later hold is simply recorded. */
-  async function sessionCompleted(trx: Knex.Transaction, session: Stripe.Checkout.Session, intent: Stripe.PaymentIntent | undefined, now: Date): Promise<Effect> {
-    const payment = (await lockPaymentBy(trx, { checkoutSessionId: session.id })) ?? (await pendingPaymentOfOrder(trx, session.metadata));
+  async function sessionCompleted(
+    trx: Knex.Transaction,
+    session: Stripe.Checkout.Session,
+    intent: Stripe.PaymentIntent | undefined,
+    now: Date,
+  ): Promise<Effect> {
+    const payment =
+      (await lockPaymentBy(trx, { checkoutSessionId: session.id })) ??
+      (await pendingPaymentOfOrder(trx, session.metadata));
     // A declined card fails the attempt, yet the customer may try another card on the same page and succeed.
     if (!payment || !['pending', 'failed'].includes(payment.status)) return undefined;
     if (!intent || intent.status !== 'requires_capture') {
@@ -97,48 +150,92 @@ export function createPaymentWebhookService(deps: { db: Db; stripe: Stripe; mail
     }
     const charge = typeof intent.latest_charge === 'object' ? intent.latest_charge : null;
     const captureBefore = charge?.payment_method_details?.card?.capture_before;
-    await updatePayment(trx, payment.id, {
-      status: 'authorized',
-      checkout_session_id: session.id,
-      payment_intent_id: intent.id,
-      amount_authorized_cents: intent.amount_capturable,
-      capture_before: captureBefore ? new Date(captureBefore * 1000) : null,
-      authorized_at: now,
-    }, now);
+    await updatePayment(
+      trx,
+      payment.id,
+      {
+        status: 'authorized',
+        checkout_session_id: session.id,
+        payment_intent_id: intent.id,
+        amount_authorized_cents: intent.amount_capturable,
+        capture_before: captureBefore ? new Date(captureBefore * 1000) : null,
+        authorized_at: now,
+      },
+      now,
+    );
     const order = await findOrderById(trx, payment.orderId);
     if (!order) throw new Error(`Payment ${payment.id} belongs to no order.`);
     const payload = { paymentIntentId: intent.id, amountCents: intent.amount_capturable };
     if (order.status === 'awaiting_payment') {
-      const moved = await moveOrder(trx, { orderId: order.id, action: 'authorize', actor: 'system', actorUserId: null, payload, now });
+      const moved = await moveOrder(trx, {
+        orderId: order.id,
+        action: 'authorize',
+        actor: 'system',
+        actorUserId: null,
+        payload,
+        now,
+      });
       if (!moved.ok) throw new Error(`Order ${order.number} could not take its payment: ${moved.error.message}`);
     } else {
       // A second payment after a lapsed hold: the order is already under way, so only the new hold is noted.
-      await insertOrderNote(trx, { orderId: order.id, type: 'payment_authorized', actorUserId: null, payload, at: now });
+      await insertOrderNote(trx, {
+        orderId: order.id,
+        type: 'payment_authorized',
+        actorUserId: null,
+        payload,
+        at: now,
+      });
     }
     if (finalStatuses.includes(order.status)) {
       // The order was cancelled while the payment page was open: the new hold is let go at once.
       await deps.stripe.paymentIntents.cancel(intent.id, { cancellation_reason: 'abandoned' });
       await updatePayment(trx, payment.id, { status: 'voided' }, now);
-      await insertOrderNote(trx, { orderId: order.id, type: 'payment_voided', actorUserId: null, payload: { paymentIntentId: intent.id }, at: now });
+      await insertOrderNote(trx, {
+        orderId: order.id,
+        type: 'payment_voided',
+        actorUserId: null,
+        payload: { paymentIntentId: intent.id },
+        at: now,
+      });
     }
     await syncOrderPaymentStatus(trx, order.id, now);
     if (order.status !== 'awaiting_payment') return undefined;
     const customerEmail = await findCustomerEmail(trx, order.id);
     const shop = await readShopSchedule(trx);
-    const mail: LoggedMail = orderPlacedMail({ appOrigin: deps.appOrigin, shopName: shop.name, number: order.number, orderId: order.id }, customerEmail, formatMoneyText(intent.amount_capturable, order.currency));
+    const mail: LoggedMail = orderPlacedMail(
+      { appOrigin: deps.appOrigin, shopName: shop.name, number: order.number, orderId: order.id },
+      customerEmail,
+      formatMoneyText(intent.amount_capturable, order.currency),
+    );
     return { after: () => sendLoggedMail({ db, mailer: deps.mailer, now: deps.now }, mail) };
   }
 
   /** A declined card or an abandoned page: the attempt failed, the order keeps waiting for payment. */
-  async function attemptFailed(trx: Knex.Transaction, payment: PaymentRecord | undefined, message: string, now: Date): Promise<Effect> {
+  async function attemptFailed(
+    trx: Knex.Transaction,
+    payment: PaymentRecord | undefined,
+    message: string,
+    now: Date,
+  ): Promise<Effect> {
     if (!payment || payment.status !== 'pending') return undefined;
     await updatePayment(trx, payment.id, { status: 'failed' }, now);
-    await insertOrderNote(trx, { orderId: payment.orderId, type: 'payment_failed', actorUserId: null, note: message, at: now });
+    await insertOrderNote(trx, {
+      orderId: payment.orderId,
+      type: 'payment_failed',
+      actorUserId: null,
+      note: message,
+      at: now,
+    });
     return undefined;
   }
 
   /** Brings a payment row in line with the provider; the studio's own calls usually got there first. */
-  async function bringInLine(trx: Knex.Transaction, paymentIntentId: string, change: (payment: PaymentRecord) => Record<string, unknown> | undefined, now: Date): Promise<Effect> {
+  async function bringInLine(
+    trx: Knex.Transaction,
+    paymentIntentId: string,
+    change: (payment: PaymentRecord) => Record<string, unknown> | undefined,
+    now: Date,
+  ): Promise<Effect> {
     const payment = await lockPaymentBy(trx, { paymentIntentId });
     const changes = payment && change(payment);
     if (!payment || !changes) return undefined;
@@ -151,7 +248,10 @@ export function createPaymentWebhookService(deps: { db: Db; stripe: Stripe; mail
 }
 
 /** The pending attempt of the order named in the metadata, when the provider's ids are not on the row yet. */
-async function pendingPaymentOfOrder(trx: Knex.Transaction, metadata: Stripe.Metadata | null | undefined): Promise<PaymentRecord | undefined> {
+async function pendingPaymentOfOrder(
+  trx: Knex.Transaction,
+  metadata: Stripe.Metadata | null | undefined,
+): Promise<PaymentRecord | undefined> {
   const orderId = Number(metadata?.orderId);
   return Number.isInteger(orderId) && orderId > 0 ? lockLatestPendingPayment(trx, orderId) : undefined;
 }

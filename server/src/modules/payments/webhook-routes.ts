@@ -8,7 +8,11 @@ import type { PaymentWebhookService } from './payment-webhook-service.ts';
  * router is mounted before the JSON parser. Each event id is recorded and applied once; redeliveries are acknowledged
  * only. A failure while applying answers 500, so the provider sends the event again.
  */
-export function createPaymentWebhookRouter(deps: { stripe: Stripe; webhookSecret: string; webhooks: PaymentWebhookService }): Router {
+export function createPaymentWebhookRouter(deps: {
+  stripe: Stripe;
+  webhookSecret: string;
+  webhooks: PaymentWebhookService;
+}): Router {
   const router = Router();
   router.post('/', express.raw({ type: '*/*', limit: '1mb' }), async (req, res) => {
     const signature = req.get('stripe-signature');

@@ -29,7 +29,10 @@ function problemMessage(info: unknown): string {
  * Sign-in with Google (or the local stand-in), and sign-out. `claimArtwork` hands what a visitor uploaded before
  * signing in to their account.
  */
-export function createAuthRouter(deps: { log: (line: string) => void; claimArtwork: (sessionKey: string, userId: number) => Promise<void> }): Router {
+export function createAuthRouter(deps: {
+  log: (line: string) => void;
+  claimArtwork: (sessionKey: string, userId: number) => Promise<void>;
+}): Router {
   const router = Router();
 
   router.get('/google', validate(startQuery, 'query'), (req, res, next) => {

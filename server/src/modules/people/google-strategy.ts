@@ -28,7 +28,10 @@ export function createGoogleStrategy(config: AppConfig, users: UserService): Goo
           isEmailVerified: (email as { verified?: boolean | string } | undefined)?.verified !== false,
           name: profile.displayName,
         })
-        .then((result) => (result.ok ? done(null, result.value as Express.User) : done(null, false, result.error as never)), done);
+        .then(
+          (result) => (result.ok ? done(null, result.value as Express.User) : done(null, false, result.error as never)),
+          done,
+        );
     },
   );
 }

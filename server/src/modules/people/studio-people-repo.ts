@@ -9,14 +9,24 @@ export interface PersonRow {
   joinedAt: string;
 }
 
-const toPerson = (row: Record<string, any>): PersonRow => ({ id: row.id, name: row.name, email: row.email, role: row.role, joinedAt: new Date(row.created_at).toISOString() });
+const toPerson = (row: Record<string, any>): PersonRow => ({
+  id: row.id,
+  name: row.name,
+  email: row.email,
+  role: row.role,
+  joinedAt: new Date(row.created_at).toISOString(),
+});
 const columns = ['id', 'name', 'email', 'role', 'created_at'];
 /** Enough for a small studio's customers; the search narrows it. */
 const listLimit = 200;
 
 /** Owners, then staff, then customers, each by name; `search` matches part of a name or e-mail address. */
 export async function listPeople(db: Db, search: string | undefined): Promise<PersonRow[]> {
-  const query = db('users').select(columns).orderByRaw("FIELD(role, 'owner', 'staff', 'customer')").orderBy('name').limit(listLimit);
+  const query = db('users')
+    .select(columns)
+    .orderByRaw("FIELD(role, 'owner', 'staff', 'customer')")
+    .orderBy('name')
+    .limit(listLimit);
   if (search) {
     const pattern = `%${search.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
     query.where((where) => where.where('name', 'like', pattern).orWhere('email', 'like', pattern));

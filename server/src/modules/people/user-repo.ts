@@ -35,7 +35,12 @@ export async function insertUser(
   db: Db,
   user: { googleSub: string; email: string; name: string; role: Role },
 ): Promise<number> {
-  const [id] = await db('users').insert({ google_sub: user.googleSub, email: user.email, name: user.name, role: user.role });
+  const [id] = await db('users').insert({
+    google_sub: user.googleSub,
+    email: user.email,
+    name: user.name,
+    role: user.role,
+  });
   return id;
 }
 

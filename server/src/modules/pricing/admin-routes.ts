@@ -24,11 +24,22 @@ export function createAdminPricingRouter(deps: { pricing: PricingService }): Rou
   router.get('/:id', validate(ruleSetIdParams, 'params'), async (_req, res) => {
     sendResult(res, await deps.pricing.get(idOf(res.locals)));
   });
-  router.put('/:id', requireOwner('change the price list'), validate(ruleSetIdParams, 'params'), validate(updateDraftRequest), async (req, res) => {
-    sendResult(res, await deps.pricing.updateDraft(idOf(res.locals), req.body));
-  });
-  router.post('/:id/publish', requireOwner('publish a price list'), validate(ruleSetIdParams, 'params'), async (_req, res) => {
-    sendResult(res, await deps.pricing.publish(idOf(res.locals)));
-  });
+  router.put(
+    '/:id',
+    requireOwner('change the price list'),
+    validate(ruleSetIdParams, 'params'),
+    validate(updateDraftRequest),
+    async (req, res) => {
+      sendResult(res, await deps.pricing.updateDraft(idOf(res.locals), req.body));
+    },
+  );
+  router.post(
+    '/:id/publish',
+    requireOwner('publish a price list'),
+    validate(ruleSetIdParams, 'params'),
+    async (_req, res) => {
+      sendResult(res, await deps.pricing.publish(idOf(res.locals)));
+    },
+  );
   return router;
 }

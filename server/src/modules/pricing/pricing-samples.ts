@@ -66,11 +66,22 @@ function priceWith(ruleSet: PricingRuleSet, sample: SampleQuote, labels: Garment
     isRush: sample.input.isRush,
   });
   if (!quote.ok) return { ok: false, reason: quote.reason };
-  return { ok: true, totalCents: quote.totalCents, subtotalCents: quote.subtotalCents, taxCents: quote.taxCents, lines: quote.lines.map(({ code, label, amountCents }) => ({ code, label, amountCents })) };
+  return {
+    ok: true,
+    totalCents: quote.totalCents,
+    subtotalCents: quote.subtotalCents,
+    taxCents: quote.taxCents,
+    lines: quote.lines.map(({ code, label, amountCents }) => ({ code, label, amountCents })),
+  };
 }
 
 /** One sample priced with the published list and with the draft, side by side. */
-export function compareSample(sample: SampleQuote, published: PricingRuleSet, draft: PricingRuleSet, labels: GarmentLabels): SamplePreview {
+export function compareSample(
+  sample: SampleQuote,
+  published: PricingRuleSet,
+  draft: PricingRuleSet,
+  labels: GarmentLabels,
+): SamplePreview {
   const garment = labels.get(sample.input.garment);
   const before = priceWith(published, sample, labels);
   const after = priceWith(draft, sample, labels);

@@ -1,6 +1,12 @@
 import type { Db } from '../../db/knex.ts';
 import { checkPricingRuleSet, type PricingRuleSet } from '../../engine/index.ts';
-import type { PricingPreviewResponse, PricingRules, RuleSetDetailResponse, RuleSetListResponse, UpdateDraftRequest } from '../../contracts/admin-pricing.ts';
+import type {
+  PricingPreviewResponse,
+  PricingRules,
+  RuleSetDetailResponse,
+  RuleSetListResponse,
+  UpdateDraftRequest,
+} from '../../contracts/admin-pricing.ts';
 import type { CurrentUser } from '../../contracts/users.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import {
@@ -51,11 +57,19 @@ export function createPricingService(deps: { db: Db; now: () => Date }) {
     const id = await db.transaction(async (trx) => {
       const all = await lockRuleSets(trx);
       const draft = all.find((ruleSet) => ruleSet.status === 'draft');
-      if (draft) return failure('conflict', `Version ${draft.version} is already a draft: edit that one, or publish it first.`);
+      if (draft)
+        return failure('conflict', `Version ${draft.version} is already a draft: edit that one, or publish it first.`);
       const published = all.find((ruleSet) => ruleSet.status === 'published');
       if (!published) return failure('conflict', 'There is no published price list to start a draft from.');
       const version = Math.max(...all.map((ruleSet) => ruleSet.version)) + 1;
-      return ok(await insertDraft(trx, { rules: { ...published.rules, version }, notes: null, createdByUserId: user.id, now: deps.now() }));
+      return ok(
+        await insertDraft(trx, {
+          rules: { ...published.rules, version },
+          notes: null,
+          createdByUserId: user.id,
+          now: deps.now(),
+        }),
+      );
     });
     return id.ok ? get(id.value) : id;
   }
@@ -64,7 +78,11 @@ export function createPricingService(deps: { db: Db; now: () => Date }) {
     const saved = await db.transaction(async (trx) => {
       const target = (await lockRuleSets(trx)).find((ruleSet) => ruleSet.id === id);
       if (!target) return failure('not-found', `There is no price list ${id}.`);
-      if (target.status !== 'draft') return failure('conflict', `Version ${target.version} is ${target.status}; only a draft can be changed. Start a new draft instead.`);
+      if (target.status !== 'draft')
+        return failure(
+          'conflict',
+          `Version ${target.version} is ${target.status}; only a draft can be changed. Start a new draft instead.`,
+        );
       const checked = checkRules(withVersion(request.rules, target.version));
       if (!checked.ok) return checked;
       await updateDraftRules(trx, id, { rules: checked.value, notes: request.notes || null, now: deps.now() });
@@ -77,7 +95,8 @@ export function createPricingService(deps: { db: Db; now: () => Date }) {
     const published = await db.transaction(async (trx) => {
       const target = (await lockRuleSets(trx)).find((ruleSet) => ruleSet.id === id);
       if (!target) return failure('not-found', `There is no price list ${id}.`);
-      if (target.status !== 'draft') return failure('conflict', `Version ${target.version} is ${target.status}; only a draft can be published.`);
+      if (target.status !== 'draft')
+        return failure('conflict', `Version ${target.version} is ${target.status}; only a draft can be published.`);
       const checked = checkRules(target.rules);
       if (!checked.ok) return checked;
       await publishDraft(trx, id, deps.now());

@@ -13,17 +13,22 @@ export function createProductionSheetRouter(deps: { sheets: ProductionSheetServi
     const { number } = res.locals.params as z.infer<typeof orderNumberParams>;
     sendResult(res, await deps.sheets.get(number));
   });
-  router.get('/:number/production-sheet.pdf', validate(orderNumberParams, 'params'), validate(productionSheetPdfQuery, 'query'), async (_req, res) => {
-    const { number } = res.locals.params as z.infer<typeof orderNumberParams>;
-    const { paper } = res.locals.query as z.infer<typeof productionSheetPdfQuery>;
-    const pdf = await deps.sheets.pdf(number, paper);
-    if (!pdf.ok) {
-      sendResult(res, pdf);
-      return;
-    }
-    res.type('application/pdf');
-    res.set('Content-Disposition', `attachment; filename="production-sheet-${number}-${paper}.pdf"`);
-    res.send(pdf.value);
-  });
+  router.get(
+    '/:number/production-sheet.pdf',
+    validate(orderNumberParams, 'params'),
+    validate(productionSheetPdfQuery, 'query'),
+    async (_req, res) => {
+      const { number } = res.locals.params as z.infer<typeof orderNumberParams>;
+      const { paper } = res.locals.query as z.infer<typeof productionSheetPdfQuery>;
+      const pdf = await deps.sheets.pdf(number, paper);
+      if (!pdf.ok) {
+        sendResult(res, pdf);
+        return;
+      }
+      res.type('application/pdf');
+      res.set('Content-Disposition', `attachment; filename="production-sheet-${number}-${paper}.pdf"`);
+      res.send(pdf.value);
+    },
+  );
   return router;
 }

@@ -77,18 +77,32 @@ export function assembleSheet(sources: SheetSources): Result<ProductionSheet> {
     },
     placements,
     totals,
-    stabilizer: { ...figures.stabilizer, backingName: BACKING_NAMES[figures.stabilizer.backing], toppingName: toppingName(figures.stabilizer.topping) },
+    stabilizer: {
+      ...figures.stabilizer,
+      backingName: BACKING_NAMES[figures.stabilizer.backing],
+      toppingName: toppingName(figures.stabilizer.topping),
+    },
     needle: adviseNeedle(catalogue.garment.fabricType, catalogue.garment.isNapped),
-    runMinutes: { totalMinutes: figures.runMinutes.totalMinutes, orderMinutes: orderRun.totalMinutes, items: figures.runMinutes.items },
+    runMinutes: {
+      totalMinutes: figures.runMinutes.totalMinutes,
+      orderMinutes: orderRun.totalMinutes,
+      items: figures.runMinutes.items,
+    },
     cautions: figures.cautions,
     templates,
   });
 }
 
-function toSheetPlacement(sources: SheetSources, placement: DesignPlacement, figured: PlacementFigures): SheetPlacement {
+function toSheetPlacement(
+  sources: SheetSources,
+  placement: DesignPlacement,
+  figured: PlacementFigures,
+): SheetPlacement {
   const { estimate } = figured;
-  const codes = placement.kind === 'lettering' ? [placement.thread] : placement.kind === 'artwork' ? [] : placement.threads;
-  const hoop = figured.border?.hoop ?? smallestHoopHolding(sources.catalogue.hoops, estimate.widthMm, estimate.heightMm) ?? null;
+  const codes =
+    placement.kind === 'lettering' ? [placement.thread] : placement.kind === 'artwork' ? [] : placement.threads;
+  const hoop =
+    figured.border?.hoop ?? smallestHoopHolding(sources.catalogue.hoops, estimate.widthMm, estimate.heightMm) ?? null;
   let border: SheetPlacement['border'] = null;
   const motif = placement.kind === 'border' ? sources.catalogue.motifs.get(placement.motif) : undefined;
   if (figured.border && placement.kind === 'border' && motif) {
@@ -108,20 +122,33 @@ function toSheetPlacement(sources: SheetSources, placement: DesignPlacement, fig
     hoop,
     threads: codes.map((code, i) => {
       const thread = sources.threads.get(code);
-      return { order: i + 1, code, name: thread?.name ?? 'Not in the palette any more', hex: thread?.hex ?? UNKNOWN_THREAD_HEX };
+      return {
+        order: i + 1,
+        code,
+        name: thread?.name ?? 'Not in the palette any more',
+        hex: thread?.hex ?? UNKNOWN_THREAD_HEX,
+      };
     }),
     border,
   };
 }
 
 /** The outline a template draws; customer artwork has none yet (the server does not store uploads for orders). */
-function artworkOf(sources: SheetSources, placement: DesignPlacement, sheetPlacement: SheetPlacement): ArtworkOutline | undefined {
+function artworkOf(
+  sources: SheetSources,
+  placement: DesignPlacement,
+  sheetPlacement: SheetPlacement,
+): ArtworkOutline | undefined {
   if (placement.kind === 'border' || placement.kind === 'motif') {
     const motif = sources.catalogue.motifs.get(placement.motif);
     const svg = sources.artwork.get(placement.motif);
     if (!motif || !svg) return undefined;
     // A border's exact scale, not the rounded percentage, so the outline is as wide as the repeat.
-    const scale = sheetPlacement.border ? sheetPlacement.border.repeatWidthMm / motif.widthMm : placement.kind === 'motif' ? placement.scalePct / 100 : 1;
+    const scale = sheetPlacement.border
+      ? sheetPlacement.border.repeatWidthMm / motif.widthMm
+      : placement.kind === 'motif'
+        ? placement.scalePct / 100
+        : 1;
     return motifOutline(svg, motif, scale);
   }
   if (placement.kind === 'lettering') {

@@ -9,7 +9,11 @@ type BorderFigures = NonNullable<PlacementFigures['border']>;
  * centres), which is the garment's centre front: the engine centres an open row on the front hem, and a loop's
  * two ends meet at the back. Negative is left of the mark as you face the front, positive right.
  */
-export function sheetBorderPlan(border: BorderFigures, repeatHeightMm: number, hemOffsetMm: number): NonNullable<SheetPlacement['border']> {
+export function sheetBorderPlan(
+  border: BorderFigures,
+  repeatHeightMm: number,
+  hemOffsetMm: number,
+): NonNullable<SheetPlacement['border']> {
   const { plan, count, pitchMm } = border;
   const first = plan.hoopings[0];
   const firstMidIndex = (first.repeatIndices[0] + first.repeatIndices[first.repeatIndices.length - 1]) / 2;

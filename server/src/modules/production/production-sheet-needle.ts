@@ -8,10 +8,18 @@ import type { ProductionSheet } from '../../contracts/production-sheet.ts';
  */
 export function adviseNeedle(fabric: FabricConstruction, isNapped: boolean): ProductionSheet['needle'] {
   if (fabric === 'knit') {
-    return { size: '75/11', point: 'ballpoint', note: 'A ballpoint slips between the knit loops, so the fabric does not run or get holes.' };
+    return {
+      size: '75/11',
+      point: 'ballpoint',
+      note: 'A ballpoint slips between the knit loops, so the fabric does not run or get holes.',
+    };
   }
   if (fabric === 'sheer') {
-    return { size: '65/9', point: 'sharp', note: 'A fine sharp needle leaves small holes in sheer fabric; go slower and keep the stitches light.' };
+    return {
+      size: '65/9',
+      point: 'sharp',
+      note: 'A fine sharp needle leaves small holes in sheer fabric; go slower and keep the stitches light.',
+    };
   }
   return {
     size: '75/11',

@@ -34,13 +34,23 @@ const FLATTEN_TOLERANCE = 1e-4;
  * A motif's artwork at `scale` (1 = the catalogue size `widthMm` × `heightMm`): every shape of its SVG with the
  * transforms above it applied, the viewBox origin moved to 0,0 and user units turned into mm.
  */
-export function motifOutline(svgText: string, motif: { widthMm: number; heightMm: number }, scale: number): ArtworkOutline | undefined {
+export function motifOutline(
+  svgText: string,
+  motif: { widthMm: number; heightMm: number },
+  scale: number,
+): ArtworkOutline | undefined {
   const drawing = readSvgDrawing(svgText);
   if ('reason' in drawing) return undefined;
   const [minX, minY, viewWidth] = drawing.viewBox ?? [0, 0, parseSvgLengthMm(drawing.width) ?? motif.widthMm];
   const mmPerUnit = (motif.widthMm / viewWidth) * scale;
   const outlines = drawing.drawables.map((drawable) => ({
-    d: svgpath(drawable.pathData).transform(drawable.transform).translate(-minX, -minY).scale(mmPerUnit).abs().round(DECIMALS).toString(),
+    d: svgpath(drawable.pathData)
+      .transform(drawable.transform)
+      .translate(-minX, -minY)
+      .scale(mmPerUnit)
+      .abs()
+      .round(DECIMALS)
+      .toString(),
     hex: drawable.fill ?? drawable.stroke ?? INK,
     isFilled: drawable.fill !== null,
   }));
@@ -48,8 +58,15 @@ export function motifOutline(svgText: string, motif: { widthMm: number; heightMm
 }
 
 /** Lettering outlines with the capital H `letterHeightMm` tall, as the engine sizes lettering for its estimate. */
-export function letteringOutline(font: GlyphOutlineSource, text: string, letterHeightMm: number, hex: string): ArtworkOutline | undefined {
-  const reference = extentOf(flattenOutline(font.getPaths(HEIGHT_REFERENCE_GLYPH, 0, 0, 1)[0]?.commands ?? [], FLATTEN_TOLERANCE));
+export function letteringOutline(
+  font: GlyphOutlineSource,
+  text: string,
+  letterHeightMm: number,
+  hex: string,
+): ArtworkOutline | undefined {
+  const reference = extentOf(
+    flattenOutline(font.getPaths(HEIGHT_REFERENCE_GLYPH, 0, 0, 1)[0]?.commands ?? [], FLATTEN_TOLERANCE),
+  );
   const capHeight = reference ? reference.maxY - reference.minY : 0;
   if (!(capHeight > 0)) return undefined;
   const commands = font.getPaths(text, 0, 0, letterHeightMm / capHeight).flatMap((glyph) => glyph.commands);
@@ -64,7 +81,10 @@ export function letteringOutline(font: GlyphOutlineSource, text: string, letterH
 
 /** Moves every piece of an artwork outline by (xMm, yMm), for placing it inside a template. */
 export function placeOutlines(outlines: readonly Outline[], xMm: number, yMm: number): Outline[] {
-  return outlines.map((outline) => ({ ...outline, d: svgpath(outline.d).translate(xMm, yMm).round(DECIMALS).toString() }));
+  return outlines.map((outline) => ({
+    ...outline,
+    d: svgpath(outline.d).translate(xMm, yMm).round(DECIMALS).toString(),
+  }));
 }
 
 function commandsToPathData(commands: readonly OutlineCommand[], origin: Extent): string {

@@ -32,7 +32,8 @@ export const FONT = 'Poppins';
 export const FONT_BOLD = 'Poppins-SemiBold';
 
 const requireFromHere = createRequire(import.meta.url);
-const fontFile = (weight: number) => readFileSync(requireFromHere.resolve(`@fontsource/poppins/files/poppins-latin-${weight}-normal.woff`));
+const fontFile = (weight: number) =>
+  readFileSync(requireFromHere.resolve(`@fontsource/poppins/files/poppins-latin-${weight}-normal.woff`));
 let fonts: { regular: Buffer; semiBold: Buffer } | undefined;
 
 export type Pdf = InstanceType<typeof PDFDocument>;
@@ -40,7 +41,12 @@ export type Pdf = InstanceType<typeof PDFDocument>;
 /** A new document on this paper with the interface font embedded (a subset, as pdfkit does). */
 export function createSheetDocument(paper: PaperSize, title: string): Pdf {
   fonts ??= { regular: fontFile(400), semiBold: fontFile(600) };
-  const doc = new PDFDocument({ size: PDFKIT_SIZE[paper], margin: 0, autoFirstPage: false, info: { Title: title, Creator: 'Hoopwright' } });
+  const doc = new PDFDocument({
+    size: PDFKIT_SIZE[paper],
+    margin: 0,
+    autoFirstPage: false,
+    info: { Title: title, Creator: 'Hoopwright' },
+  });
   doc.registerFont(FONT, fonts.regular);
   doc.registerFont(FONT_BOLD, fonts.semiBold);
   return doc;
@@ -63,6 +69,7 @@ export function finishDocument(doc: Pdf): Promise<Buffer> {
  */
 export function formatLengthPlain(mm: number, decimals = 1): string {
   const { whole, numerator, denominator } = toInchFraction(mm);
-  const inches = numerator === 0 ? `${whole}` : whole === 0 ? `${numerator}/${denominator}` : `${whole} ${numerator}/${denominator}`;
+  const inches =
+    numerator === 0 ? `${whole}` : whole === 0 ? `${numerator}/${denominator}` : `${whole} ${numerator}/${denominator}`;
   return `${Number(Math.abs(mm).toFixed(decimals))} mm (${inches} in)`;
 }

@@ -4,7 +4,20 @@
  */
 import svgpath from 'svgpath';
 import type { PaperSize, PlacementTemplate } from '../../contracts/production-sheet.ts';
-import { ACCENT, FONT, FONT_BOLD, GUIDE, INK, MARGIN_MM, PAPER_MM, SOFT_INK, formatLengthPlain, pt, PT_PER_MM, type Pdf } from './production-sheet-pdf-kit.ts';
+import {
+  ACCENT,
+  FONT,
+  FONT_BOLD,
+  GUIDE,
+  INK,
+  MARGIN_MM,
+  PAPER_MM,
+  SOFT_INK,
+  formatLengthPlain,
+  pt,
+  PT_PER_MM,
+  type Pdf,
+} from './production-sheet-pdf-kit.ts';
 
 /** The check square's side: long enough to show a scaling error of 1 % (0.5 mm) on an ordinary ruler. */
 export const CHECK_SQUARE_MM = 50;
@@ -35,7 +48,10 @@ export function templateArea(paper: PaperSize): { widthMm: number; heightMm: num
 }
 
 /** Splits a template into tiles no larger than the area, overlapping by TILE_OVERLAP_MM; one tile when it fits. */
-export function tileTemplate(template: Pick<PlacementTemplate, 'widthMm' | 'heightMm'>, area: { widthMm: number; heightMm: number }): TemplateTile[] {
+export function tileTemplate(
+  template: Pick<PlacementTemplate, 'widthMm' | 'heightMm'>,
+  area: { widthMm: number; heightMm: number },
+): TemplateTile[] {
   const cut = (lengthMm: number, windowMm: number) => {
     const count = lengthMm <= windowMm ? 1 : Math.ceil((lengthMm - TILE_OVERLAP_MM) / (windowMm - TILE_OVERLAP_MM));
     return Array.from({ length: count }, (_, i) => {
@@ -46,15 +62,30 @@ export function tileTemplate(template: Pick<PlacementTemplate, 'widthMm' | 'heig
   const columns = cut(template.widthMm, area.widthMm);
   const rows = cut(template.heightMm, area.heightMm);
   return rows.flatMap((r, row) =>
-    columns.map((c, column) => ({ xMm: c.startMm, yMm: r.startMm, widthMm: c.lengthMm, heightMm: r.lengthMm, row, column, rows: rows.length, columns: columns.length })),
+    columns.map((c, column) => ({
+      xMm: c.startMm,
+      yMm: r.startMm,
+      widthMm: c.lengthMm,
+      heightMm: r.lengthMm,
+      row,
+      column,
+      rows: rows.length,
+      columns: columns.length,
+    })),
   );
 }
 
 /** "A1": rows are letters, columns numbers. */
-export const tileName = (tile: Pick<TemplateTile, 'row' | 'column'>) => `${String.fromCharCode(65 + tile.row)}${tile.column + 1}`;
+export const tileName = (tile: Pick<TemplateTile, 'row' | 'column'>) =>
+  `${String.fromCharCode(65 + tile.row)}${tile.column + 1}`;
 
 /** Adds the pages of every template, tile by tile. */
-export function addTemplatePages(doc: Pdf, paper: PaperSize, orderNumber: string, templates: readonly PlacementTemplate[]): void {
+export function addTemplatePages(
+  doc: Pdf,
+  paper: PaperSize,
+  orderNumber: string,
+  templates: readonly PlacementTemplate[],
+): void {
   const area = templateArea(paper);
   for (const template of templates) {
     for (const tile of tileTemplate(template, area)) {
@@ -69,7 +100,15 @@ export function addTemplatePages(doc: Pdf, paper: PaperSize, orderNumber: string
 function drawHeader(doc: Pdf, orderNumber: string, template: PlacementTemplate, tile: TemplateTile): void {
   const x = pt(MARGIN_MM);
   const width = doc.page.width - 2 * x;
-  doc.fillColor(INK).font(FONT_BOLD).fontSize(11).text(`${orderNumber} · Template · ${template.title}`, x, pt(MARGIN_MM), { width, lineBreak: false, ellipsis: true });
+  doc
+    .fillColor(INK)
+    .font(FONT_BOLD)
+    .fontSize(11)
+    .text(`${orderNumber} · Template · ${template.title}`, x, pt(MARGIN_MM), {
+      width,
+      lineBreak: false,
+      ellipsis: true,
+    });
   const isTiled = tile.rows * tile.columns > 1;
   const tiling = isTiled
     ? `Tile ${tileName(tile)} of ${tile.rows} down × ${tile.columns} across: overlap the tiles by ${TILE_OVERLAP_MM} mm so the crosses meet, then tape.`
@@ -90,30 +129,69 @@ function drawTile(doc: Pdf, template: PlacementTemplate, tile: TemplateTile, ori
   doc.rect(origin.x, origin.y, pt(tile.widthMm), pt(tile.heightMm)).clip();
 
   const { field, centre } = template;
-  doc.lineWidth(0.75).dash(6, { space: 3 }).rect(X(field.xMm), Y(field.yMm), pt(field.widthMm), pt(field.heightMm)).stroke(ACCENT).undash();
-  doc.fillColor(ACCENT).font(FONT).fontSize(7).text('sewing field', X(field.xMm) + 3, Y(field.yMm) + 3, { lineBreak: false });
+  doc
+    .lineWidth(0.75)
+    .dash(6, { space: 3 })
+    .rect(X(field.xMm), Y(field.yMm), pt(field.widthMm), pt(field.heightMm))
+    .stroke(ACCENT)
+    .undash();
+  doc
+    .fillColor(ACCENT)
+    .font(FONT)
+    .fontSize(7)
+    .text('sewing field', X(field.xMm) + 3, Y(field.yMm) + 3, { lineBreak: false });
 
   for (const outline of template.outlines) {
-    doc.path(svgpath(outline.d).translate(-tile.xMm, -tile.yMm).scale(PT_PER_MM).translate(origin.x, origin.y).toString()).lineWidth(0.5).stroke(INK);
+    doc
+      .path(
+        svgpath(outline.d).translate(-tile.xMm, -tile.yMm).scale(PT_PER_MM).translate(origin.x, origin.y).toString(),
+      )
+      .lineWidth(0.5)
+      .stroke(INK);
   }
 
   if (template.guideLineYMm !== null) {
-    doc.lineWidth(0.5).dash(2, { space: 2 }).moveTo(X(field.xMm), Y(template.guideLineYMm)).lineTo(X(field.xMm + field.widthMm), Y(template.guideLineYMm)).stroke(GUIDE).undash();
+    doc
+      .lineWidth(0.5)
+      .dash(2, { space: 2 })
+      .moveTo(X(field.xMm), Y(template.guideLineYMm))
+      .lineTo(X(field.xMm + field.widthMm), Y(template.guideLineYMm))
+      .stroke(GUIDE)
+      .undash();
   }
   if (template.hemLineYMm !== null) {
-    doc.lineWidth(1).moveTo(X(field.xMm), Y(template.hemLineYMm)).lineTo(X(field.xMm + field.widthMm), Y(template.hemLineYMm)).stroke(INK);
-    doc.fillColor(INK).fontSize(7).text('hem edge', X(field.xMm) + 3, Y(template.hemLineYMm) + 2, { lineBreak: false });
+    doc
+      .lineWidth(1)
+      .moveTo(X(field.xMm), Y(template.hemLineYMm))
+      .lineTo(X(field.xMm + field.widthMm), Y(template.hemLineYMm))
+      .stroke(INK);
+    doc
+      .fillColor(INK)
+      .fontSize(7)
+      .text('hem edge', X(field.xMm) + 3, Y(template.hemLineYMm) + 2, { lineBreak: false });
   }
   const { artwork } = template;
   for (const xMm of template.joinMarksXMm) {
     // A filled triangle above and below the motif where a repeat meets the next: line the next hooping up here.
-    for (const [tipMm, sign] of [[artwork.yMm - 1, -1], [artwork.yMm + artwork.heightMm + 1, 1]] as const) {
-      doc.polygon([X(xMm), Y(tipMm)], [X(xMm) - 3, Y(tipMm) + sign * 6], [X(xMm) + 3, Y(tipMm) + sign * 6]).fill(ACCENT);
+    for (const [tipMm, sign] of [
+      [artwork.yMm - 1, -1],
+      [artwork.yMm + artwork.heightMm + 1, 1],
+    ] as const) {
+      doc
+        .polygon([X(xMm), Y(tipMm)], [X(xMm) - 3, Y(tipMm) + sign * 6], [X(xMm) + 3, Y(tipMm) + sign * 6])
+        .fill(ACCENT);
     }
   }
 
-  doc.lineWidth(0.75).moveTo(X(centre.xMm - CROSSHAIR_ARM_MM), Y(centre.yMm)).lineTo(X(centre.xMm + CROSSHAIR_ARM_MM), Y(centre.yMm)).stroke(ACCENT);
-  doc.moveTo(X(centre.xMm), Y(centre.yMm - CROSSHAIR_ARM_MM)).lineTo(X(centre.xMm), Y(centre.yMm + CROSSHAIR_ARM_MM)).stroke(ACCENT);
+  doc
+    .lineWidth(0.75)
+    .moveTo(X(centre.xMm - CROSSHAIR_ARM_MM), Y(centre.yMm))
+    .lineTo(X(centre.xMm + CROSSHAIR_ARM_MM), Y(centre.yMm))
+    .stroke(ACCENT);
+  doc
+    .moveTo(X(centre.xMm), Y(centre.yMm - CROSSHAIR_ARM_MM))
+    .lineTo(X(centre.xMm), Y(centre.yMm + CROSSHAIR_ARM_MM))
+    .stroke(ACCENT);
   doc.circle(X(centre.xMm), Y(centre.yMm), pt(2)).stroke(ACCENT);
 
   drawOverlapMarks(doc, tile, X, Y);
@@ -125,16 +203,39 @@ function drawOverlapMarks(doc: Pdf, tile: TemplateTile, X: (mm: number) => numbe
   const right = tile.xMm + tile.widthMm;
   const bottom = tile.yMm + tile.heightMm;
   const cross = (xMm: number, yMm: number) => {
-    doc.lineWidth(0.5).moveTo(X(xMm) - 6, Y(yMm)).lineTo(X(xMm) + 6, Y(yMm)).moveTo(X(xMm), Y(yMm) - 6).lineTo(X(xMm), Y(yMm) + 6).stroke(INK);
+    doc
+      .lineWidth(0.5)
+      .moveTo(X(xMm) - 6, Y(yMm))
+      .lineTo(X(xMm) + 6, Y(yMm))
+      .moveTo(X(xMm), Y(yMm) - 6)
+      .lineTo(X(xMm), Y(yMm) + 6)
+      .stroke(INK);
   };
-  const stripsX = [tile.column > 0 ? tile.xMm : null, tile.column < tile.columns - 1 ? right - TILE_OVERLAP_MM : null].filter((x) => x !== null);
+  const stripsX = [
+    tile.column > 0 ? tile.xMm : null,
+    tile.column < tile.columns - 1 ? right - TILE_OVERLAP_MM : null,
+  ].filter((x) => x !== null);
   for (const stripX of stripsX) {
-    doc.lineWidth(0.5).dash(3, { space: 3 }).moveTo(X(stripX + TILE_OVERLAP_MM / 2), Y(tile.yMm)).lineTo(X(stripX + TILE_OVERLAP_MM / 2), Y(bottom)).stroke(SOFT_INK).undash();
+    doc
+      .lineWidth(0.5)
+      .dash(3, { space: 3 })
+      .moveTo(X(stripX + TILE_OVERLAP_MM / 2), Y(tile.yMm))
+      .lineTo(X(stripX + TILE_OVERLAP_MM / 2), Y(bottom))
+      .stroke(SOFT_INK)
+      .undash();
     for (const share of [0.25, 0.75]) cross(stripX + TILE_OVERLAP_MM / 2, tile.yMm + tile.heightMm * share);
   }
-  const stripsY = [tile.row > 0 ? tile.yMm : null, tile.row < tile.rows - 1 ? bottom - TILE_OVERLAP_MM : null].filter((y) => y !== null);
+  const stripsY = [tile.row > 0 ? tile.yMm : null, tile.row < tile.rows - 1 ? bottom - TILE_OVERLAP_MM : null].filter(
+    (y) => y !== null,
+  );
   for (const stripY of stripsY) {
-    doc.lineWidth(0.5).dash(3, { space: 3 }).moveTo(X(tile.xMm), Y(stripY + TILE_OVERLAP_MM / 2)).lineTo(X(right), Y(stripY + TILE_OVERLAP_MM / 2)).stroke(SOFT_INK).undash();
+    doc
+      .lineWidth(0.5)
+      .dash(3, { space: 3 })
+      .moveTo(X(tile.xMm), Y(stripY + TILE_OVERLAP_MM / 2))
+      .lineTo(X(right), Y(stripY + TILE_OVERLAP_MM / 2))
+      .stroke(SOFT_INK)
+      .undash();
     for (const share of [0.25, 0.75]) cross(tile.xMm + tile.widthMm * share, stripY + TILE_OVERLAP_MM / 2);
   }
 }
@@ -146,7 +247,11 @@ function drawCheckSquare(doc: Pdf, paper: PaperSize): void {
   doc.lineWidth(0.5).rect(pt(xMm), pt(yMm), pt(CHECK_SQUARE_MM), pt(CHECK_SQUARE_MM)).stroke(INK);
   const textX = pt(xMm + CHECK_SQUARE_MM + 5);
   const width = doc.page.width - textX - pt(MARGIN_MM);
-  doc.fillColor(INK).font(FONT_BOLD).fontSize(9).text(`Check square: ${formatLengthPlain(CHECK_SQUARE_MM, 0)} each side`, textX, pt(yMm), { width });
+  doc
+    .fillColor(INK)
+    .font(FONT_BOLD)
+    .fontSize(9)
+    .text(`Check square: ${formatLengthPlain(CHECK_SQUARE_MM, 0)} each side`, textX, pt(yMm), { width });
   doc
     .font(FONT)
     .fontSize(8)

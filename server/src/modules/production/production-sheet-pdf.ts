@@ -47,7 +47,10 @@ class SummaryWriter {
   write(): void {
     const { order } = this.sheet;
     this.text(`Production sheet · ${order.number}`, { size: 16, bold: true });
-    this.text(`${order.designName} for ${order.customerName}${order.neededBy ? ` · needed by ${order.neededBy}` : ''}`, { size: 10, colour: SOFT_INK });
+    this.text(
+      `${order.designName} for ${order.customerName}${order.neededBy ? ` · needed by ${order.neededBy}` : ''}`,
+      { size: 10, colour: SOFT_INK },
+    );
     if (order.customerNote) this.text(`Customer's note: "${order.customerNote}"`, { size: 9, colour: SOFT_INK });
     this.gap(4);
     this.garmentLine();
@@ -71,14 +74,28 @@ class SummaryWriter {
     const { garment, order } = this.sheet;
     this.ensure(24);
     this.doc.rect(this.left, this.y, 18, 18).fillAndStroke(garment.colourHex, INK);
-    this.doc.fillColor(INK).font(FONT_BOLD).fontSize(11).text(`${garment.name} · size ${garment.sizeLabel} · ${garment.colourName}`, this.left + 26, this.y + 1, { width: this.width - 26 });
-    this.doc.font(FONT).fontSize(9).fillColor(SOFT_INK).text(`${garment.fabricType} fabric · ${order.quantity} to make`, this.left + 26, this.y + 14, { width: this.width - 26 });
+    this.doc
+      .fillColor(INK)
+      .font(FONT_BOLD)
+      .fontSize(11)
+      .text(`${garment.name} · size ${garment.sizeLabel} · ${garment.colourName}`, this.left + 26, this.y + 1, {
+        width: this.width - 26,
+      });
+    this.doc
+      .font(FONT)
+      .fontSize(9)
+      .fillColor(SOFT_INK)
+      .text(`${garment.fabricType} fabric · ${order.quantity} to make`, this.left + 26, this.y + 14, {
+        width: this.width - 26,
+      });
     this.y += 32;
   }
 
   private hoopingPlan(placement: SheetPlacement, border: NonNullable<SheetPlacement['border']>): void {
     this.heading(`Hooping plan · ${placement.label}`);
-    const loop = border.isClosed ? `round the ${formatLengthPlain(border.runLengthMm, 0)} hem loop` : `along the ${formatLengthPlain(border.runLengthMm, 0)} front hem`;
+    const loop = border.isClosed
+      ? `round the ${formatLengthPlain(border.runLengthMm, 0)} hem loop`
+      : `along the ${formatLengthPlain(border.runLengthMm, 0)} front hem`;
     this.text(
       `${border.count} repeats of ${formatLengthPlain(border.repeatWidthMm)} at ${border.scalePct} % ${loop}: ${border.hoopings.length} hoopings in the ` +
         `${placement.hoop?.name ?? 'hoop'}${border.isRotated ? ' (design turned 90° in the hoop)' : ''}. Mark the centre front and the guide line ` +
@@ -88,8 +105,14 @@ class SummaryWriter {
     this.gap(4);
     this.hemPicture(border);
     for (const hooping of border.hoopings) {
-      const repeats = hooping.repeatNumbers.length === 1 ? `repeat ${hooping.repeatNumbers[0]}` : `repeats ${hooping.repeatNumbers.join(', ')}`;
-      this.text(`${hooping.order}.  ${repeats}: hoop centre ${hoopingWhere(hooping.fromCentreMm, formatLengthPlain(Math.abs(hooping.fromCentreMm)))}`, { size: 9 });
+      const repeats =
+        hooping.repeatNumbers.length === 1
+          ? `repeat ${hooping.repeatNumbers[0]}`
+          : `repeats ${hooping.repeatNumbers.join(', ')}`;
+      this.text(
+        `${hooping.order}.  ${repeats}: hoop centre ${hoopingWhere(hooping.fromCentreMm, formatLengthPlain(Math.abs(hooping.fromCentreMm)))}`,
+        { size: 9 },
+      );
     }
     this.gap(6);
   }
@@ -104,8 +127,16 @@ class SummaryWriter {
     const x = (mm: number) => this.left + mm * scale;
     const groupMm = (n: number) => (n - 1) * border.pitchMm + border.repeatWidthMm;
     doc.rect(this.left, top, this.width, height).fill(PAPER_TINT);
-    doc.lineWidth(1.5).moveTo(this.left, top + height).lineTo(this.left + this.width, top + height).stroke(INK);
-    doc.fillColor(SOFT_INK).font(FONT).fontSize(7).text('hem edge', this.left, top + height + 2, { lineBreak: false });
+    doc
+      .lineWidth(1.5)
+      .moveTo(this.left, top + height)
+      .lineTo(this.left + this.width, top + height)
+      .stroke(INK);
+    doc
+      .fillColor(SOFT_INK)
+      .font(FONT)
+      .fontSize(7)
+      .text('hem edge', this.left, top + height + 2, { lineBreak: false });
     if (border.isClosed) {
       doc.text('back: the loop ends meet', this.left, this.y, { lineBreak: false });
       doc.text('back', this.left + this.width - 20, this.y, { lineBreak: false });
@@ -113,17 +144,44 @@ class SummaryWriter {
     for (const hooping of border.hoopings) {
       const widthMm = groupMm(hooping.repeatNumbers.length);
       const left = x(hooping.fromRowStartMm - widthMm / 2);
-      doc.rect(left + 1, top + 10, widthMm * scale - 2, height - 24).fillAndStroke(HOOPING_FILLS[(hooping.order - 1) % HOOPING_FILLS.length], INK);
+      doc
+        .rect(left + 1, top + 10, widthMm * scale - 2, height - 24)
+        .fillAndStroke(HOOPING_FILLS[(hooping.order - 1) % HOOPING_FILLS.length], INK);
       const cx = x(hooping.fromRowStartMm);
       doc.circle(cx, top + height / 2 - 2, 9).fillAndStroke('#ffffff', INK);
-      doc.fillColor(INK).font(FONT_BOLD).fontSize(10).text(String(hooping.order), cx - 9, top + height / 2 - 8, { width: 18, align: 'center', lineBreak: false });
-      doc.font(FONT).fontSize(7).fillColor(SOFT_INK).text(`${hooping.fromCentreMm > 0 ? '+' : ''}${Number(hooping.fromCentreMm.toFixed(1))}`, cx - 20, top + height - 12, { width: 40, align: 'center', lineBreak: false });
+      doc
+        .fillColor(INK)
+        .font(FONT_BOLD)
+        .fontSize(10)
+        .text(String(hooping.order), cx - 9, top + height / 2 - 8, { width: 18, align: 'center', lineBreak: false });
+      doc
+        .font(FONT)
+        .fontSize(7)
+        .fillColor(SOFT_INK)
+        .text(
+          `${hooping.fromCentreMm > 0 ? '+' : ''}${Number(hooping.fromCentreMm.toFixed(1))}`,
+          cx - 20,
+          top + height - 12,
+          { width: 40, align: 'center', lineBreak: false },
+        );
     }
     const centre = x(border.runLengthMm / 2);
-    doc.lineWidth(1).dash(3, { space: 2 }).moveTo(centre, top - 4).lineTo(centre, top + height).stroke(ACCENT).undash();
-    doc.fillColor(ACCENT).fontSize(7).text('centre mark (centre front)', centre - 50, this.y, { width: 100, align: 'center', lineBreak: false });
+    doc
+      .lineWidth(1)
+      .dash(3, { space: 2 })
+      .moveTo(centre, top - 4)
+      .lineTo(centre, top + height)
+      .stroke(ACCENT)
+      .undash();
+    doc
+      .fillColor(ACCENT)
+      .fontSize(7)
+      .text('centre mark (centre front)', centre - 50, this.y, { width: 100, align: 'center', lineBreak: false });
     this.y = top + height + 14;
-    this.text('Numbers in circles are the stitching order; figures under them are mm from the centre mark.', { size: 7.5, colour: SOFT_INK });
+    this.text('Numbers in circles are the stitching order; figures under them are mm from the centre mark.', {
+      size: 7.5,
+      colour: SOFT_INK,
+    });
     this.gap(3);
   }
 
@@ -139,7 +197,13 @@ class SummaryWriter {
     for (const thread of placement.threads) {
       this.ensure(16);
       this.doc.rect(this.left + 8, this.y + 1, 22, 11).fillAndStroke(thread.hex, INK);
-      this.doc.fillColor(INK).font(FONT).fontSize(8.5).text(`${thread.order}.  ${thread.code}  ${thread.name}  (${thread.hex})`, this.left + 36, this.y + 1.5, { width: this.width - 36 });
+      this.doc
+        .fillColor(INK)
+        .font(FONT)
+        .fontSize(8.5)
+        .text(`${thread.order}.  ${thread.code}  ${thread.name}  (${thread.hex})`, this.left + 36, this.y + 1.5, {
+          width: this.width - 36,
+        });
       this.y += 15;
     }
     this.gap(5);
@@ -148,16 +212,21 @@ class SummaryWriter {
   private materials(): void {
     const { stabilizer, needle, runMinutes, totals, order } = this.sheet;
     this.heading('Stabilizer, needle and machine time');
-    this.text(`Backing: ${stabilizer.backingName} (design ${stabilizer.density}, ${stabilizer.densityStitchesPerCm2.toFixed(0)} stitches per cm²).`, { size: 9 });
+    this.text(
+      `Backing: ${stabilizer.backingName} (design ${stabilizer.density}, ${stabilizer.densityStitchesPerCm2.toFixed(0)} stitches per cm²).`,
+      { size: 9 },
+    );
     this.text(`Topping: ${stabilizer.toppingName}.`, { size: 9 });
-    for (const message of stabilizer.messages) this.text(`${message.title}: ${message.text}`, { size: 8.5, colour: SOFT_INK });
+    for (const message of stabilizer.messages)
+      this.text(`${message.title}: ${message.text}`, { size: 8.5, colour: SOFT_INK });
     this.text(`Needle: ${needle.size} ${needle.point} (rule of thumb). ${needle.note}`, { size: 9 });
     this.text(
       `Per garment: ${totals.stitches.toLocaleString('en-US')} stitches, ${totals.colourChanges} colour changes, ${totals.hoopings} hoopings: about ${minutesText(runMinutes.totalMinutes)} with setup.` +
         (order.quantity > 1 ? ` All ${order.quantity}: about ${minutesText(runMinutes.orderMinutes)}.` : ''),
       { size: 9 },
     );
-    for (const item of runMinutes.items) this.text(`${item.label}: ${minutesText(item.minutes)}`, { size: 8.5, colour: SOFT_INK, indent: 8 });
+    for (const item of runMinutes.items)
+      this.text(`${item.label}: ${minutesText(item.minutes)}`, { size: 8.5, colour: SOFT_INK, indent: 8 });
     this.gap(6);
   }
 
@@ -165,7 +234,13 @@ class SummaryWriter {
     this.ensure(40);
     this.gap(4);
     this.text(title, { size: 12, bold: true });
-    this.doc.lineWidth(1).dash(4, { space: 3 }).moveTo(this.left, this.y).lineTo(this.left + this.width, this.y).stroke(ACCENT).undash();
+    this.doc
+      .lineWidth(1)
+      .dash(4, { space: 3 })
+      .moveTo(this.left, this.y)
+      .lineTo(this.left + this.width, this.y)
+      .stroke(ACCENT)
+      .undash();
     this.gap(5);
   }
 

@@ -41,10 +41,17 @@ export function createProductionSheetService(deps: { db: Db; fonts: LetteringFon
     const order = await readOrderToMake(db, number);
     if (!order) return failure('not-found', `There is no order ${number}.`);
     if (!APPROVED_STATUSES.has(order.status)) {
-      return failure('conflict', `Order ${number} ${NOT_YET[order.status]}. The production sheet is ready once the customer approves the proof.`);
+      return failure(
+        'conflict',
+        `Order ${number} ${NOT_YET[order.status]}. The production sheet is ready once the customer approves the proof.`,
+      );
     }
     const restored = restoreDesign(order.document);
-    if (!restored.success) return failure('conflict', `The design of order ${number} can't be read, so its sheet can't be made. Ask the developers to check it.`);
+    if (!restored.success)
+      return failure(
+        'conflict',
+        `The design of order ${number} can't be read, so its sheet can't be made. Ask the developers to check it.`,
+      );
     return sheetFor(order, restored.data);
   }
 
@@ -55,18 +62,33 @@ export function createProductionSheetService(deps: { db: Db; fonts: LetteringFon
   }
 
   async function sheetFor(order: OrderToMake, document: DesignDocument): Promise<Result<ProductionSheet>> {
-    const record = await loadQuoteCatalogue(db, { garmentId: order.garmentId, sizeId: order.sizeId, colourId: order.colourId, ...slugsNamedIn(document) });
-    if (!record.ok) return failure('conflict', `Order ${order.number} can't be figured from the catalogue: ${record.error.message}`);
+    const record = await loadQuoteCatalogue(db, {
+      garmentId: order.garmentId,
+      sizeId: order.sizeId,
+      colourId: order.colourId,
+      ...slugsNamedIn(document),
+    });
+    if (!record.ok)
+      return failure('conflict', `Order ${order.number} can't be figured from the catalogue: ${record.error.message}`);
     // The customer's own uploads are stitched as they were priced: the order's customer owns them.
-    const artworkIds = document.placements.flatMap((placement) => (placement.kind === 'artwork' ? [placement.artworkUploadId] : []));
+    const artworkIds = document.placements.flatMap((placement) =>
+      placement.kind === 'artwork' ? [placement.artworkUploadId] : [],
+    );
     const uploads = await loadOwnedArtworkForQuote(db, { userId: order.customerId }, artworkIds);
     const catalogue = toQuoteCatalogue(record.value, deps.fonts, artworkCatalogueOf(uploads));
     const figured = figureDesign(catalogue, document);
-    if (!figured.ok) return failure('conflict', `Order ${order.number} can't be figured from today’s catalogue: ${figured.error.message}`);
+    if (!figured.ok)
+      return failure(
+        'conflict',
+        `Order ${order.number} can't be figured from today’s catalogue: ${figured.error.message}`,
+      );
     const threadCodes = document.placements.flatMap((placement) =>
       placement.kind === 'lettering' ? [placement.thread] : placement.kind === 'artwork' ? [] : placement.threads,
     );
-    const [threads, artwork] = await Promise.all([readThreadsByCode(db, threadCodes), readMotifArtwork(db, slugsNamedIn(document).motifSlugs)]);
+    const [threads, artwork] = await Promise.all([
+      readThreadsByCode(db, threadCodes),
+      readMotifArtwork(db, slugsNamedIn(document).motifSlugs),
+    ]);
     return assembleSheet({ order, document, catalogue, figures: figured.value, threads, artwork });
   }
 

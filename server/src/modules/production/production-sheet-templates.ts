@@ -17,9 +17,15 @@ const mm1 = (value: number) => `${Number(value.toFixed(1))} mm`;
  * Templates for a border: one per distinct number of repeats in a hooping (usually all hoopings hold the same,
  * so one template serves them all). The row runs across the template, along the field's side the engine chose.
  */
-export function borderTemplates(placement: SheetPlacement, border: Border, hoop: Hoop, artwork: ArtworkOutline): PlacementTemplate[] {
+export function borderTemplates(
+  placement: SheetPlacement,
+  border: Border,
+  hoop: Hoop,
+  artwork: ArtworkOutline,
+): PlacementTemplate[] {
   const bySize = new Map<number, number[]>();
-  for (const hooping of border.hoopings) bySize.set(hooping.repeatNumbers.length, [...(bySize.get(hooping.repeatNumbers.length) ?? []), hooping.order]);
+  for (const hooping of border.hoopings)
+    bySize.set(hooping.repeatNumbers.length, [...(bySize.get(hooping.repeatNumbers.length) ?? []), hooping.order]);
   const longMm = Math.max(hoop.fieldWidthMm, hoop.fieldHeightMm);
   const shortMm = Math.min(hoop.fieldWidthMm, hoop.fieldHeightMm);
   // As planHoopings orients the row: along the long side when the motif's height fits across the short one.
@@ -29,9 +35,16 @@ export function borderTemplates(placement: SheetPlacement, border: Border, hoop:
     const field = { xMm: PADDING_MM, yMm: PADDING_MM, widthMm: rowMm, heightMm: acrossMm };
     const centre = { xMm: field.xMm + rowMm / 2, yMm: field.yMm + acrossMm / 2 };
     const groupWidthMm = (repeats - 1) * border.pitchMm + border.repeatWidthMm;
-    const box = { xMm: centre.xMm - groupWidthMm / 2, yMm: centre.yMm - border.repeatHeightMm / 2, widthMm: groupWidthMm, heightMm: border.repeatHeightMm };
+    const box = {
+      xMm: centre.xMm - groupWidthMm / 2,
+      yMm: centre.yMm - border.repeatHeightMm / 2,
+      widthMm: groupWidthMm,
+      heightMm: border.repeatHeightMm,
+    };
     const starts = Array.from({ length: repeats }, (_, k) => box.xMm + k * border.pitchMm);
-    const joins = new Set(starts.flatMap((start) => [start, start + border.repeatWidthMm]).map((x) => Number(x.toFixed(3))));
+    const joins = new Set(
+      starts.flatMap((start) => [start, start + border.repeatWidthMm]).map((x) => Number(x.toFixed(3))),
+    );
     const hemLineYMm = centre.yMm + border.hemOffsetMm;
     const hoopings = orders.length === 1 ? `hooping ${orders[0]}` : `hoopings ${orders.join(', ')}`;
     return {
@@ -55,10 +68,17 @@ export function borderTemplates(placement: SheetPlacement, border: Border, hoop:
 /** A single motif or lettering centred in its hoop's field, turned to fit when it only fits the other way. */
 export function itemTemplate(placement: SheetPlacement, hoop: Hoop, artwork: ArtworkOutline): PlacementTemplate {
   const fitsAsIs = artwork.widthMm <= hoop.fieldWidthMm && artwork.heightMm <= hoop.fieldHeightMm;
-  const [fieldWidthMm, fieldHeightMm] = fitsAsIs ? [hoop.fieldWidthMm, hoop.fieldHeightMm] : [hoop.fieldHeightMm, hoop.fieldWidthMm];
+  const [fieldWidthMm, fieldHeightMm] = fitsAsIs
+    ? [hoop.fieldWidthMm, hoop.fieldHeightMm]
+    : [hoop.fieldHeightMm, hoop.fieldWidthMm];
   const field = { xMm: PADDING_MM, yMm: PADDING_MM, widthMm: fieldWidthMm, heightMm: fieldHeightMm };
   const centre = { xMm: field.xMm + fieldWidthMm / 2, yMm: field.yMm + fieldHeightMm / 2 };
-  const box = { xMm: centre.xMm - artwork.widthMm / 2, yMm: centre.yMm - artwork.heightMm / 2, widthMm: artwork.widthMm, heightMm: artwork.heightMm };
+  const box = {
+    xMm: centre.xMm - artwork.widthMm / 2,
+    yMm: centre.yMm - artwork.heightMm / 2,
+    widthMm: artwork.widthMm,
+    heightMm: artwork.heightMm,
+  };
   return {
     id: placement.id,
     placementId: placement.id,

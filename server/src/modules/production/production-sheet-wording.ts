@@ -9,7 +9,8 @@ export const BACKING_NAMES: Readonly<Record<StabilizerKind, string>> = {
   'no-show-mesh': 'no-show mesh cutaway',
 };
 
-export const toppingName = (topping: 'water-soluble' | null) => (topping === 'water-soluble' ? 'water-soluble film on top' : 'none needed');
+export const toppingName = (topping: 'water-soluble' | null) =>
+  topping === 'water-soluble' ? 'water-soluble film on top' : 'none needed';
 
 /** Where a hoop centre goes, from its signed distance to the centre mark and that distance already formatted. */
 export function hoopingWhere(fromCentreMm: number, distance: string): string {

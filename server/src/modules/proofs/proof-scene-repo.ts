@@ -46,17 +46,31 @@ export async function loadProofScene(db: Db, orderId: number): Promise<ProofScen
     .join('fabric_colours as c', 'c.id', 'd.fabric_colour_id')
     .where('i.order_id', orderId)
     .orderBy('i.id')
-    .first('d.document', 'g.slug', 'g.mockup_svg', 's.mockup_scale', 's.hem_front_mm', 's.hem_circumference_mm', 's.placement_zones', 'c.hex');
+    .first(
+      'd.document',
+      'g.slug',
+      'g.mockup_svg',
+      's.mockup_scale',
+      's.hem_front_mm',
+      's.hem_circumference_mm',
+      's.placement_zones',
+      'c.hex',
+    );
   if (!row) return undefined;
   const document = designDocument.parse(typeof row.document === 'string' ? JSON.parse(row.document) : row.document);
   const motifSlugs = document.placements.flatMap((p) => (p.kind === 'border' || p.kind === 'motif' ? [p.motif] : []));
   const fontSlugs = document.placements.flatMap((p) => (p.kind === 'lettering' ? [p.font] : []));
   const uploadIds = document.placements.flatMap((p) => (p.kind === 'artwork' ? [p.artworkUploadId] : []));
   const [motifs, threads, fonts, uploads] = await Promise.all([
-    db('motifs').whereIn('slug', motifSlugs).select('slug', 'svg', 'width_mm', 'height_mm', 'gap_mm', 'min_scale_pct', 'max_scale_pct'),
+    db('motifs')
+      .whereIn('slug', motifSlugs)
+      .select('slug', 'svg', 'width_mm', 'height_mm', 'gap_mm', 'min_scale_pct', 'max_scale_pct'),
     db('threads').select('code', 'hex'),
     db('lettering_fonts').whereIn('slug', fontSlugs).select('slug', 'fontsource_package', 'file_name'),
-    db('artwork_uploads').whereIn('id', uploadIds).whereNotNull('sanitized_svg').select('id', 'sanitized_svg', 'width_px', 'height_px'),
+    db('artwork_uploads')
+      .whereIn('id', uploadIds)
+      .whereNotNull('sanitized_svg')
+      .select('id', 'sanitized_svg', 'width_px', 'height_px'),
   ]);
   const reference = mockupSizeMm(row.mockup_svg, row.slug);
   const scale = Number(row.mockup_scale);
@@ -72,7 +86,14 @@ export async function loadProofScene(db: Db, orderId: number): Promise<ProofScen
     motifs: new Map(
       motifs.map((m) => [
         m.slug,
-        { svg: m.svg, widthMm: Number(m.width_mm), heightMm: Number(m.height_mm), gapMm: Number(m.gap_mm), minScalePct: Number(m.min_scale_pct), maxScalePct: Number(m.max_scale_pct) },
+        {
+          svg: m.svg,
+          widthMm: Number(m.width_mm),
+          heightMm: Number(m.height_mm),
+          gapMm: Number(m.gap_mm),
+          minScalePct: Number(m.min_scale_pct),
+          maxScalePct: Number(m.max_scale_pct),
+        },
       ]),
     ),
     threadHexes: new Map(threads.map((t) => [t.code, t.hex])),

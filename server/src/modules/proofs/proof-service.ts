@@ -18,7 +18,13 @@ import type { StudioActor } from '../payments/order-payment-service.ts';
 import { renderProof } from './proof-render.ts';
 import { proofReadyMail } from '../orders/studio-order-mail.ts';
 
-export function createProofService(deps: { db: Db; mailer: Mailer; now: () => Date; appOrigin: string; fonts: LetteringFontLoader }) {
+export function createProofService(deps: {
+  db: Db;
+  mailer: Mailer;
+  now: () => Date;
+  appOrigin: string;
+  fonts: LetteringFontLoader;
+}) {
   const { db } = deps;
 
   async function drawing(orderId: number): Promise<Result<Buffer>> {
@@ -27,12 +33,19 @@ export function createProofService(deps: { db: Db; mailer: Mailer; now: () => Da
     return ok((await renderProof(scene, deps.fonts)).png);
   }
 
-  async function pictureFor(orderId: number, request: SendProofRequest, photo: Buffer | undefined): Promise<Result<Buffer>> {
+  async function pictureFor(
+    orderId: number,
+    request: SendProofRequest,
+    photo: Buffer | undefined,
+  ): Promise<Result<Buffer>> {
     if (request.source === 'render') return drawing(orderId);
-    if (!photo) return failure('invalid', 'Choose the photo of the stitch-out to send.', { file: 'Choose a PNG or JPEG photo' });
+    if (!photo)
+      return failure('invalid', 'Choose the photo of the stitch-out to send.', { file: 'Choose a PNG or JPEG photo' });
     const inspected = await inspectUpload(photo, ['png', 'jpeg']);
     if (!inspected.ok) return inspected;
-    return inspected.value.kind === 'svg' ? failure('unsupported-type', 'Please upload a PNG or JPEG photo.') : ok(inspected.value.png);
+    return inspected.value.kind === 'svg'
+      ? failure('unsupported-type', 'Please upload a PNG or JPEG photo.')
+      : ok(inspected.value.png);
   }
 
   /** The drawing a render proof would send now, for the studio to look at first; nothing is stored or sent. */
@@ -42,7 +55,12 @@ export function createProofService(deps: { db: Db; mailer: Mailer; now: () => Da
     return drawing(order.id);
   }
 
-  async function send(number: string, request: SendProofRequest, photo: Buffer | undefined, actor: StudioActor): Promise<Result<SentProofResponse>> {
+  async function send(
+    number: string,
+    request: SendProofRequest,
+    photo: Buffer | undefined,
+    actor: StudioActor,
+  ): Promise<Result<SentProofResponse>> {
     const order = await findStudioOrder(db, number);
     if (!order) return failure('not-found', `There is no order ${number}.`);
     // Checked before the picture is made, so a refused proof costs no rendering; moveOrder checks again under the lock.
@@ -55,9 +73,18 @@ export function createProofService(deps: { db: Db; mailer: Mailer; now: () => Da
       const now = deps.now();
       const latest = await trx('proofs').where({ order_id: order.id }).max({ version: 'version' }).first();
       const version = Number(latest?.version ?? 0) + 1;
-      const moved = await moveOrder(trx, { orderId: order.id, action: 'send_proof', actor: actor.role, actorUserId: actor.userId, payload: { proofVersion: version, source: request.source }, now });
+      const moved = await moveOrder(trx, {
+        orderId: order.id,
+        action: 'send_proof',
+        actor: actor.role,
+        actorUserId: actor.userId,
+        payload: { proofVersion: version, source: request.source },
+        now,
+      });
       if (!moved.ok) return moved;
-      await trx('proofs').where({ order_id: order.id, status: 'sent' }).update({ status: 'superseded', updated_at: now });
+      await trx('proofs')
+        .where({ order_id: order.id, status: 'sent' })
+        .update({ status: 'superseded', updated_at: now });
       await trx('proofs').insert({
         order_id: order.id,
         version,
@@ -70,15 +97,27 @@ export function createProofService(deps: { db: Db; mailer: Mailer; now: () => Da
         created_at: now,
         updated_at: now,
       });
-      return ok({ version, source: request.source, status: moved.value.to, imageUrl: proofImagePath(order.number, version) });
+      return ok({
+        version,
+        source: request.source,
+        status: moved.value.to,
+        imageUrl: proofImagePath(order.number, version),
+      });
     });
-    if (sent.ok) await sendLoggedMail(deps, proofReadyMail(order, deps.appOrigin, { version: sent.value.version, message: request.message }));
+    if (sent.ok)
+      await sendLoggedMail(
+        deps,
+        proofReadyMail(order, deps.appOrigin, { version: sent.value.version, message: request.message }),
+      );
     return sent;
   }
 
   /** The stored picture of one proof version; seeded history kept no pictures. */
   async function image(number: string, version: number): Promise<Result<Buffer>> {
-    const row = await db('proofs as p').join('orders as o', 'o.id', 'p.order_id').where({ 'o.number': number, 'p.version': version }).first('p.image_png');
+    const row = await db('proofs as p')
+      .join('orders as o', 'o.id', 'p.order_id')
+      .where({ 'o.number': number, 'p.version': version })
+      .first('p.image_png');
     if (!row) return failure('not-found', `Order ${number} has no proof ${version}.`);
     if (!row.image_png) return failure('not-found', `No picture was kept for proof ${version} of ${number}.`);
     return ok(row.image_png as Buffer);

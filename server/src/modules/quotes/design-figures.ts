@@ -47,14 +47,21 @@ export function figureDesign(catalogue: QuoteCatalogue, document: DesignDocument
   }
   const outcomes = document.placements.map((placement, index) => {
     const path = `document.placements.${index}`;
-    return placement.kind === 'border' ? figureBorder(catalogue, placement, path) : figureItem(catalogue, placement, path);
+    return placement.kind === 'border'
+      ? figureBorder(catalogue, placement, path)
+      : figureItem(catalogue, placement, path);
   });
   const refusals = outcomes.flatMap((outcome) => (outcome.ok ? [] : [outcome]));
   if (refusals.length > 0) {
-    return failure('invalid', refusals[0].message, Object.fromEntries(refusals.map((refusal) => [refusal.field, refusal.message])));
+    return failure(
+      'invalid',
+      refusals[0].message,
+      Object.fromEntries(refusals.map((refusal) => [refusal.field, refusal.message])),
+    );
   }
   const placements = outcomes.flatMap((outcome) => (outcome.ok ? [outcome.figures] : []));
-  const sum = (pick: (figures: PlacementFigures) => number) => placements.reduce((total, figures) => total + pick(figures), 0);
+  const sum = (pick: (figures: PlacementFigures) => number) =>
+    placements.reduce((total, figures) => total + pick(figures), 0);
   const totals = {
     stitches: sum((figures) => figures.estimate.stitches),
     colourChanges: sum((figures) => figures.estimate.colorChanges),
@@ -62,7 +69,13 @@ export function figureDesign(catalogue: QuoteCatalogue, document: DesignDocument
     trims: sum((figures) => figures.estimate.trims),
   };
 
-  const runMinutes = estimateRunMinutes({ stitches: totals.stitches, colorChanges: totals.colourChanges, hoopings: totals.hoopings, trims: totals.trims, machine: catalogue.machine });
+  const runMinutes = estimateRunMinutes({
+    stitches: totals.stitches,
+    colorChanges: totals.colourChanges,
+    hoopings: totals.hoopings,
+    trims: totals.trims,
+    machine: catalogue.machine,
+  });
   if (!runMinutes.ok) return failure('invalid', `The machine time can't be estimated: ${runMinutes.reason}`);
   const stabilizer = adviseDesignStabilizer(catalogue, placements, totals.stitches);
   if (!stabilizer.ok) return failure('invalid', `The stabilizer can't be chosen: ${stabilizer.reason}`);
@@ -108,7 +121,10 @@ export function figureDesign(catalogue: QuoteCatalogue, document: DesignDocument
  * width and a height, so the summed area goes in as the square of the same area.
  */
 function adviseDesignStabilizer(catalogue: QuoteCatalogue, placements: PlacementFigures[], stitches: number) {
-  const areaMm2 = placements.reduce((total, figures) => total + figures.estimate.widthMm * figures.estimate.heightMm, 0);
+  const areaMm2 = placements.reduce(
+    (total, figures) => total + figures.estimate.widthMm * figures.estimate.heightMm,
+    0,
+  );
   const sideMm = Math.sqrt(areaMm2);
   return adviseStabilizer({
     stitches,

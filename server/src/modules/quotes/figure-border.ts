@@ -1,4 +1,11 @@
-import { estimateBorderStitches, estimateStitches, fitMotifBorder, planHoopings, type BorderFit, type HoopingPlan } from '../../engine/index.ts';
+import {
+  estimateBorderStitches,
+  estimateStitches,
+  fitMotifBorder,
+  planHoopings,
+  type BorderFit,
+  type HoopingPlan,
+} from '../../engine/index.ts';
 import type { BorderPlacement } from '../../contracts/designs.ts';
 import type { CatalogueHoop, CatalogueMotifEntry, QuoteCatalogue } from './quote-catalogue.ts';
 import { byFieldArea, catalogueMotifFor, countOf, refuse, type PlacementOutcome } from './placement-outcome.ts';
@@ -11,10 +18,18 @@ import { byFieldArea, catalogueMotifFor, countOf, refuse, type PlacementOutcome 
 export function figureBorder(catalogue: QuoteCatalogue, placement: BorderPlacement, path: string): PlacementOutcome {
   const { garment, size } = catalogue;
   const motif = catalogue.motifs.get(placement.motif);
-  if (!motif) return refuse(`${path}.motif`, `There is no motif “${placement.motif}” in the catalogue; choose another.`);
-  if (motif.kind !== 'border') return refuse(`${path}.motif`, `The ${motif.name} is a single motif, not a border; place it on the garment instead.`);
+  if (!motif)
+    return refuse(`${path}.motif`, `There is no motif “${placement.motif}” in the catalogue; choose another.`);
+  if (motif.kind !== 'border')
+    return refuse(
+      `${path}.motif`,
+      `The ${motif.name} is a single motif, not a border; place it on the garment instead.`,
+    );
   if (placement.threads.length !== motif.colourCount) {
-    return refuse(`${path}.threads`, `The ${motif.name} is sewn in ${countOf(motif.colourCount, 'colour')}; choose a thread for each.`);
+    return refuse(
+      `${path}.threads`,
+      `The ${motif.name} is sewn in ${countOf(motif.colourCount, 'colour')}; choose a thread for each.`,
+    );
   }
   const isClosed = placement.run === 'circumference';
   const runLengthMm = isClosed ? size.hemCircumferenceMm : size.hemFrontMm;
@@ -25,7 +40,10 @@ export function figureBorder(catalogue: QuoteCatalogue, placement: BorderPlaceme
     const where = isClosed ? 'round the hem' : 'along the front hem';
     const isAsked = placement.count !== undefined;
     const hint = isAsked && fit.nearest?.isWithinLimits ? ` ${countOf(fit.nearest.count, 'repeat')} would fit.` : '';
-    return refuse(`${path}.${isAsked ? 'count' : 'motif'}`, `The ${motif.name} doesn't fit ${where} in size ${size.label}: ${fit.reason}${hint}`);
+    return refuse(
+      `${path}.${isAsked ? 'count' : 'motif'}`,
+      `The ${motif.name} doesn't fit ${where} in size ${size.label}: ${fit.reason}${hint}`,
+    );
   }
 
   const planned = planInBestHoop(catalogue.hoops, motif, fit);

@@ -1,7 +1,14 @@
 import { estimateStitches, type StitchEstimate } from '../../engine/index.ts';
 import type { ArtworkPlacement, LetteringPlacement, MotifPlacement } from '../../contracts/designs.ts';
 import type { QuoteCatalogue } from './quote-catalogue.ts';
-import { catalogueMotifFor, checkFitsAHoop, countOf, refuse, type PlacementFigures, type PlacementOutcome } from './placement-outcome.ts';
+import {
+  catalogueMotifFor,
+  checkFitsAHoop,
+  countOf,
+  refuse,
+  type PlacementFigures,
+  type PlacementOutcome,
+} from './placement-outcome.ts';
 
 type ItemPlacement = MotifPlacement | LetteringPlacement | ArtworkPlacement;
 
@@ -13,7 +20,10 @@ export function figureItem(catalogue: QuoteCatalogue, placement: ItemPlacement, 
   const { zones } = catalogue.size;
   if (!zones.some((zone) => zone.code === placement.zone)) {
     const choices = zones.map((zone) => zone.label).join(' or ');
-    return refuse(`${path}.zone`, `The ${catalogue.garment.name} has no place called “${placement.zone}”${choices ? `; choose ${choices}` : ''}.`);
+    return refuse(
+      `${path}.zone`,
+      `The ${catalogue.garment.name} has no place called “${placement.zone}”${choices ? `; choose ${choices}` : ''}.`,
+    );
   }
   if (placement.kind === 'motif') return figureMotif(catalogue, placement, path);
   if (placement.kind === 'lettering') return figureLettering(catalogue, placement, path);
@@ -22,28 +32,53 @@ export function figureItem(catalogue: QuoteCatalogue, placement: ItemPlacement, 
 
 function figureMotif(catalogue: QuoteCatalogue, placement: MotifPlacement, path: string): PlacementOutcome {
   const motif = catalogue.motifs.get(placement.motif);
-  if (!motif) return refuse(`${path}.motif`, `There is no motif “${placement.motif}” in the catalogue; choose another.`);
-  if (motif.kind !== 'single') return refuse(`${path}.motif`, `The ${motif.name} is a border; add it along the hem instead.`);
+  if (!motif)
+    return refuse(`${path}.motif`, `There is no motif “${placement.motif}” in the catalogue; choose another.`);
+  if (motif.kind !== 'single')
+    return refuse(`${path}.motif`, `The ${motif.name} is a border; add it along the hem instead.`);
   // A stitch file only resizes within narrow limits before the stitching looks wrong.
   if (placement.scalePct < motif.minScalePct || placement.scalePct > motif.maxScalePct) {
-    return refuse(`${path}.scalePct`, `The ${motif.name} can be stitched from ${motif.minScalePct} % to ${motif.maxScalePct} % of its size; choose a size in that range.`);
+    return refuse(
+      `${path}.scalePct`,
+      `The ${motif.name} can be stitched from ${motif.minScalePct} % to ${motif.maxScalePct} % of its size; choose a size in that range.`,
+    );
   }
   if (placement.threads.length !== motif.colourCount) {
-    return refuse(`${path}.threads`, `The ${motif.name} is sewn in ${countOf(motif.colourCount, 'colour')}; choose a thread for each.`);
+    return refuse(
+      `${path}.threads`,
+      `The ${motif.name} is sewn in ${countOf(motif.colourCount, 'colour')}; choose a thread for each.`,
+    );
   }
-  const estimate = estimateStitches({ kind: 'catalogue', motif: catalogueMotifFor(motif), scale: placement.scalePct / 100 });
+  const estimate = estimateStitches({
+    kind: 'catalogue',
+    motif: catalogueMotifFor(motif),
+    scale: placement.scalePct / 100,
+  });
   if (!estimate.ok) return refuse(`${path}.motif`, `The ${motif.name} can't be estimated: ${estimate.reason}`);
-  return oneHooping(catalogue, placement, estimate, { label: motif.name, what: `The ${motif.name} at ${placement.scalePct} %`, field: `${path}.scalePct` });
+  return oneHooping(catalogue, placement, estimate, {
+    label: motif.name,
+    what: `The ${motif.name} at ${placement.scalePct} %`,
+    field: `${path}.scalePct`,
+  });
 }
 
 function figureLettering(catalogue: QuoteCatalogue, placement: LetteringPlacement, path: string): PlacementOutcome {
   const font = catalogue.fonts.get(placement.font);
   if (!font) return refuse(`${path}.font`, `There is no lettering font “${placement.font}”; choose another.`);
   if (placement.letterHeightMm < font.minHeightMm || placement.letterHeightMm > font.maxHeightMm) {
-    return refuse(`${path}.letterHeightMm`, `${font.name} sews cleanly from ${font.minHeightMm} to ${font.maxHeightMm} mm tall; choose a letter height in that range.`);
+    return refuse(
+      `${path}.letterHeightMm`,
+      `${font.name} sews cleanly from ${font.minHeightMm} to ${font.maxHeightMm} mm tall; choose a letter height in that range.`,
+    );
   }
-  const estimate = estimateStitches({ kind: 'lettering', text: placement.text, font: font.outlines, letterHeightMm: placement.letterHeightMm });
-  if (!estimate.ok) return refuse(`${path}.text`, `“${placement.text}” can't be set in ${font.name}: ${estimate.reason}`);
+  const estimate = estimateStitches({
+    kind: 'lettering',
+    text: placement.text,
+    font: font.outlines,
+    letterHeightMm: placement.letterHeightMm,
+  });
+  if (!estimate.ok)
+    return refuse(`${path}.text`, `“${placement.text}” can't be set in ${font.name}: ${estimate.reason}`);
   return oneHooping(catalogue, placement, estimate, {
     label: `Lettering “${placement.text}”`,
     what: `“${placement.text}” at ${placement.letterHeightMm} mm`,
@@ -55,8 +90,15 @@ function figureArtwork(catalogue: QuoteCatalogue, placement: ArtworkPlacement, p
   if (!catalogue.artworkUploads) return refuse(path, 'Uploading your own artwork is coming soon.');
   const upload = catalogue.artworkUploads.get(placement.artworkUploadId);
   if (!upload) return refuse(`${path}.artworkUploadId`, 'That artwork upload is not available; upload it again.');
-  const wording = { label: 'Your artwork', what: `Your artwork at ${placement.widthMm} mm wide`, field: `${path}.widthMm` };
-  if ('rasterSizePx' in upload) return oneHooping(catalogue, placement, rasterPlaceholder(upload.rasterSizePx, placement.widthMm), wording, { isPriceProvisional: true });
+  const wording = {
+    label: 'Your artwork',
+    what: `Your artwork at ${placement.widthMm} mm wide`,
+    field: `${path}.widthMm`,
+  };
+  if ('rasterSizePx' in upload)
+    return oneHooping(catalogue, placement, rasterPlaceholder(upload.rasterSizePx, placement.widthMm), wording, {
+      isPriceProvisional: true,
+    });
   const estimate = estimateStitches({ kind: 'svg', svgText: upload.svgText, size: { widthMm: placement.widthMm } });
   if (!estimate.ok) return refuse(`${path}.artworkUploadId`, `Your artwork can't be estimated: ${estimate.reason}`);
   return oneHooping(catalogue, placement, estimate, wording);

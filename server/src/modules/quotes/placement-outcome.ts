@@ -60,17 +60,30 @@ const mm = (value: number) => `${Number(value.toFixed(1))}`;
  * and height are checked, not its turned outline: a turned item can be hooped at its angle (common practice, no
  * source). `what` names the item for the message: "The Little lamb at 115 %".
  */
-export function checkFitsAHoop(hoops: readonly CatalogueHoop[], what: string, estimate: StitchEstimate, field: string): PlacementOutcome | undefined {
+export function checkFitsAHoop(
+  hoops: readonly CatalogueHoop[],
+  what: string,
+  estimate: StitchEstimate,
+  field: string,
+): PlacementOutcome | undefined {
   const { widthMm, heightMm } = estimate;
   if (smallestHoopHolding(hoops, widthMm, heightMm)) return undefined;
   const largest = byFieldArea(hoops).at(-1);
-  const limit = largest ? `the ${mm(largest.fieldWidthMm)} × ${mm(largest.fieldHeightMm)} mm sewing field of our largest hoop` : 'any hoop the studio has';
+  const limit = largest
+    ? `the ${mm(largest.fieldWidthMm)} × ${mm(largest.fieldHeightMm)} mm sewing field of our largest hoop`
+    : 'any hoop the studio has';
   return refuse(field, `${what} comes to ${mm(widthMm)} × ${mm(heightMm)} mm, bigger than ${limit}; make it smaller.`);
 }
 
 /** The smallest hoop whose sewing field holds an item of this size either way round, as a single item is hooped. */
-export function smallestHoopHolding(hoops: readonly CatalogueHoop[], widthMm: number, heightMm: number): CatalogueHoop | undefined {
+export function smallestHoopHolding(
+  hoops: readonly CatalogueHoop[],
+  widthMm: number,
+  heightMm: number,
+): CatalogueHoop | undefined {
   return byFieldArea(hoops).find(
-    (hoop) => (widthMm <= hoop.fieldWidthMm && heightMm <= hoop.fieldHeightMm) || (widthMm <= hoop.fieldHeightMm && heightMm <= hoop.fieldWidthMm),
+    (hoop) =>
+      (widthMm <= hoop.fieldWidthMm && heightMm <= hoop.fieldHeightMm) ||
+      (widthMm <= hoop.fieldHeightMm && heightMm <= hoop.fieldWidthMm),
   );
 }

@@ -2,7 +2,15 @@ import type { Db } from '../../db/knex.ts';
 import type { PricingRuleSet } from '../../engine/index.ts';
 import type { LetteringFontFile } from '../../integrations/lettering-fonts.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
-import type { CatalogueFont, CatalogueGarment, CatalogueHoop, CatalogueMotifEntry, CatalogueSize, PlacementZone, ShopMachine } from './quote-catalogue.ts';
+import type {
+  CatalogueFont,
+  CatalogueGarment,
+  CatalogueHoop,
+  CatalogueMotifEntry,
+  CatalogueSize,
+  PlacementZone,
+  ShopMachine,
+} from './quote-catalogue.ts';
 
 /** Which catalogue rows a quote needs: the design names its motifs and fonts by slug. */
 interface QuoteCatalogueQuery {
@@ -37,14 +45,32 @@ const mmOrNull = (value: string | null) => (value === null ? null : Number(value
  */
 export async function loadQuoteCatalogue(db: Db, query: QuoteCatalogueQuery): Promise<Result<QuoteCatalogueRecord>> {
   const [garment, size, colour, motifs, fonts, hoops, shop, ruleSet] = await Promise.all([
-    db('garments').select('id', 'slug', 'name', 'fabric_type', 'is_napped', 'min_age_months').where({ id: query.garmentId, is_active: true }).first(),
+    db('garments')
+      .select('id', 'slug', 'name', 'fabric_type', 'is_napped', 'min_age_months')
+      .where({ id: query.garmentId, is_active: true })
+      .first(),
     db('garment_sizes')
       .select('id', 'code', 'label', 'hem_front_mm', 'hem_circumference_mm', 'placement_zones')
       .where({ id: query.sizeId, garment_id: query.garmentId })
       .first(),
-    query.colourId === undefined ? undefined : db('fabric_colours').select('id').where({ id: query.colourId, garment_id: query.garmentId }).first(),
+    query.colourId === undefined
+      ? undefined
+      : db('fabric_colours').select('id').where({ id: query.colourId, garment_id: query.garmentId }).first(),
     db('motifs')
-      .select('slug', 'name', 'kind', 'width_mm', 'height_mm', 'gap_mm', 'run_stitches', 'satin_stitches', 'fill_stitches', 'colour_count', 'min_scale_pct', 'max_scale_pct')
+      .select(
+        'slug',
+        'name',
+        'kind',
+        'width_mm',
+        'height_mm',
+        'gap_mm',
+        'run_stitches',
+        'satin_stitches',
+        'fill_stitches',
+        'colour_count',
+        'min_scale_pct',
+        'max_scale_pct',
+      )
       .whereIn('slug', query.motifSlugs)
       .where({ is_active: true }),
     db('lettering_fonts')
@@ -52,16 +78,26 @@ export async function loadQuoteCatalogue(db: Db, query: QuoteCatalogueQuery): Pr
       .whereIn('slug', query.fontSlugs)
       .where({ is_active: true }),
     db('hoops').select('slug', 'name', 'field_width_mm', 'field_height_mm').where({ is_active: true }).orderBy(ordered),
-    db('shop_settings').select('machine_stitches_per_minute', 'minutes_per_colour_change', 'minutes_per_hooping', 'setup_minutes').where({ id: 1 }).first(),
+    db('shop_settings')
+      .select('machine_stitches_per_minute', 'minutes_per_colour_change', 'minutes_per_hooping', 'setup_minutes')
+      .where({ id: 1 })
+      .first(),
     db('pricing_rule_sets').select('id', 'rules').where({ status: 'published' }).first(),
   ]);
-  if (!garment) return failure('not-found', 'That garment is not in the shop any more.', { garmentId: 'Choose another garment' });
-  if (!size) return failure('not-found', 'That size is not made in this garment.', { sizeId: 'Choose one of this garment’s sizes' });
+  if (!garment)
+    return failure('not-found', 'That garment is not in the shop any more.', { garmentId: 'Choose another garment' });
+  if (!size)
+    return failure('not-found', 'That size is not made in this garment.', {
+      sizeId: 'Choose one of this garment’s sizes',
+    });
   if (query.colourId !== undefined && !colour) {
-    return failure('not-found', 'That fabric colour is not made in this garment.', { colourId: 'Choose one of this garment’s colours' });
+    return failure('not-found', 'That fabric colour is not made in this garment.', {
+      colourId: 'Choose one of this garment’s colours',
+    });
   }
   if (!ruleSet) return failure('conflict', 'The studio has not published its prices yet, so designs cannot be priced.');
-  if (hoops.length === 0) return failure('conflict', 'The studio has no hoops set up yet, so designs cannot be priced.');
+  if (hoops.length === 0)
+    return failure('conflict', 'The studio has no hoops set up yet, so designs cannot be priced.');
   if (!shop) return failure('conflict', 'The studio has not set up its machine yet, so designs cannot be priced.');
 
   return ok({
@@ -103,7 +139,12 @@ export async function loadQuoteCatalogue(db: Db, query: QuoteCatalogueQuery): Pr
       minHeightMm: Number(f.min_height_mm),
       maxHeightMm: Number(f.max_height_mm),
     })),
-    hoops: hoops.map((h) => ({ slug: h.slug, name: h.name, fieldWidthMm: Number(h.field_width_mm), fieldHeightMm: Number(h.field_height_mm) })),
+    hoops: hoops.map((h) => ({
+      slug: h.slug,
+      name: h.name,
+      fieldWidthMm: Number(h.field_width_mm),
+      fieldHeightMm: Number(h.field_height_mm),
+    })),
     machine: {
       stitchesPerMinute: shop.machine_stitches_per_minute,
       minutesPerColorChange: Number(shop.minutes_per_colour_change),

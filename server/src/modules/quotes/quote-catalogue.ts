@@ -74,7 +74,10 @@ export interface CatalogueHoop {
 }
 
 /** The shop's machine settings that `estimateRunMinutes` reads; the time per trim keeps the engine's default. */
-export type ShopMachine = Pick<MachineSettings, 'stitchesPerMinute' | 'minutesPerColorChange' | 'minutesPerHooping' | 'setupMinutes'>;
+export type ShopMachine = Pick<
+  MachineSettings,
+  'stitchesPerMinute' | 'minutesPerColorChange' | 'minutesPerHooping' | 'setupMinutes'
+>;
 
 export interface QuoteCatalogue {
   garment: CatalogueGarment;

@@ -25,11 +25,20 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader })
   async function price(request: QuotePreviewRequest, owner?: ArtworkOwner): Promise<Result<PricedDesign>> {
     const { motifSlugs, fontSlugs, artworkIds } = namedIn(request.document);
     const [record, uploads] = await Promise.all([
-      loadQuoteCatalogue(deps.db, { garmentId: request.garmentId, sizeId: request.sizeId, colourId: request.colourId, motifSlugs, fontSlugs }),
+      loadQuoteCatalogue(deps.db, {
+        garmentId: request.garmentId,
+        sizeId: request.sizeId,
+        colourId: request.colourId,
+        motifSlugs,
+        fontSlugs,
+      }),
       owner ? loadOwnedArtworkForQuote(deps.db, owner, artworkIds) : [],
     ]);
     if (!record.ok) return record;
-    const figured = figureDesign(toQuoteCatalogue(record.value, deps.fonts, artworkCatalogueOf(uploads)), request.document);
+    const figured = figureDesign(
+      toQuoteCatalogue(record.value, deps.fonts, artworkCatalogueOf(uploads)),
+      request.document,
+    );
     if (!figured.ok) return figured;
     const figures = figured.value;
     const { garment, size, ruleSet } = record.value;
@@ -110,11 +119,15 @@ function namedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: s
 }
 
 /** Uploaded artwork as `figureDesign` takes it: an SVG's drawing to estimate, or a raster's size in pixels. */
-export function artworkCatalogueOf(uploads: Awaited<ReturnType<typeof loadOwnedArtworkForQuote>>): ReadonlyMap<number, CatalogueArtwork> {
+export function artworkCatalogueOf(
+  uploads: Awaited<ReturnType<typeof loadOwnedArtworkForQuote>>,
+): ReadonlyMap<number, CatalogueArtwork> {
   return new Map(
     uploads.map((upload): [number, CatalogueArtwork] => [
       upload.id,
-      upload.svgText !== null ? { svgText: upload.svgText } : { rasterSizePx: { widthPx: upload.widthPx, heightPx: upload.heightPx } },
+      upload.svgText !== null
+        ? { svgText: upload.svgText }
+        : { rasterSizePx: { widthPx: upload.widthPx, heightPx: upload.heightPx } },
     ]),
   );
 }
@@ -136,7 +149,10 @@ export function toQuoteCatalogue(
     size: record.size,
     motifs: new Map(record.motifs.map((motif) => [motif.slug, motif])),
     fonts: new Map(
-      record.fonts.map(({ fontsourcePackage, fileName, ...font }) => [font.slug, { ...font, outlines: fonts({ fontsourcePackage, fileName }) }]),
+      record.fonts.map(({ fontsourcePackage, fileName, ...font }) => [
+        font.slug,
+        { ...font, outlines: fonts({ fontsourcePackage, fileName }) },
+      ]),
     ),
     hoops: record.hoops,
     machine: record.machine,

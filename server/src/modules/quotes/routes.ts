@@ -19,7 +19,10 @@ declare module 'express-session' {
 /** A visitor's session remembers this many of its latest quotes. */
 const REMEMBERED_VISITOR_QUOTES = 20;
 
-const viewerOf = (req: Request) => ({ customerId: currentUserOf(req)?.id ?? null, sessionQuoteIds: req.session?.quoteIds ?? [] });
+const viewerOf = (req: Request) => ({
+  customerId: currentUserOf(req)?.id ?? null,
+  sessionQuoteIds: req.session?.quoteIds ?? [],
+});
 
 /** Quotes for anyone, signed in or not: a visitor prices a design before making an account. */
 export function createQuotesRouter(deps: { quotes: QuoteService; storedQuotes: StoredQuoteService }): Router {
@@ -30,7 +33,8 @@ export function createQuotesRouter(deps: { quotes: QuoteService; storedQuotes: S
   router.post('/', validate(createQuoteRequest), async (req, res) => {
     const viewer = viewerOf(req);
     const result = await deps.storedQuotes.create(req.body, viewer.customerId);
-    if (result.ok && viewer.customerId === null) req.session.quoteIds = [...viewer.sessionQuoteIds, result.value.quoteId].slice(-REMEMBERED_VISITOR_QUOTES);
+    if (result.ok && viewer.customerId === null)
+      req.session.quoteIds = [...viewer.sessionQuoteIds, result.value.quoteId].slice(-REMEMBERED_VISITOR_QUOTES);
     sendResult(res, result, 201);
   });
   // When an order placed today could be ready, for the designer's price panel (before any quote is stored).

@@ -1,7 +1,13 @@
 import type { Db } from '../../db/knex.ts';
 import { findOwnedDesign } from '../designs/design-repo.ts';
 import { readShopSchedule } from '../settings/shop-settings-repo.ts';
-import { findFabricColourName, findQuote, insertQuote, type StoredQuote, type StoredQuoteInput } from './stored-quote-repo.ts';
+import {
+  findFabricColourName,
+  findQuote,
+  insertQuote,
+  type StoredQuote,
+  type StoredQuoteInput,
+} from './stored-quote-repo.ts';
 import { estimateRunMinutes } from '../../engine/index.ts';
 import type { CreateQuoteRequest, StoredQuoteResponse } from '../../contracts/stored-quotes.ts';
 import type { QuotePreviewRequest } from '../../contracts/quotes.ts';
@@ -32,7 +38,10 @@ export function createStoredQuoteService(deps: { db: Db; quotes: QuoteService; n
     if (designId !== undefined) {
       if (customerId === null) return failure('unauthenticated', 'Sign in to price one of your saved designs.');
       const design = await findOwnedDesign(db, { id: designId, customerId });
-      if (!design) return failure('not-found', `There is no design ${designId}.`, { designId: 'Choose one of your saved designs' });
+      if (!design)
+        return failure('not-found', `There is no design ${designId}.`, {
+          designId: 'Choose one of your saved designs',
+        });
     }
     const stored = await store(pricing, { designId: designId ?? null, customerId });
     return stored.ok ? present(stored.value) : stored;
@@ -41,7 +50,9 @@ export function createStoredQuoteService(deps: { db: Db; quotes: QuoteService; n
   /** A quote for the customer who made it, or for the visitor's session that made it; anyone else's is missing. */
   async function get(id: number, viewer: QuoteViewer): Promise<Result<StoredQuoteResponse>> {
     const quote = await findQuote(db, id);
-    const isViewers = quote && (quote.customerId === null ? viewer.sessionQuoteIds.includes(id) : quote.customerId === viewer.customerId);
+    const isViewers =
+      quote &&
+      (quote.customerId === null ? viewer.sessionQuoteIds.includes(id) : quote.customerId === viewer.customerId);
     if (!quote || !isViewers) return failure('not-found', `There is no quote ${id}.`);
     return present(quote);
   }
@@ -65,9 +76,15 @@ export function createStoredQuoteService(deps: { db: Db; quotes: QuoteService; n
     );
   }
 
-  async function store(request: QuotePreviewRequest, owner: { designId: number | null; customerId: number | null }): Promise<Result<StoredQuote>> {
+  async function store(
+    request: QuotePreviewRequest,
+    owner: { designId: number | null; customerId: number | null },
+  ): Promise<Result<StoredQuote>> {
     // The customer's own uploads price with the design; a visitor's stored quote prices catalogue items only.
-    const priced = await deps.quotes.price(request, owner.customerId === null ? undefined : { userId: owner.customerId });
+    const priced = await deps.quotes.price(
+      request,
+      owner.customerId === null ? undefined : { userId: owner.customerId },
+    );
     if (!priced.ok) return priced;
     const { response, figures, catalogue } = priced.value;
     const { quote, ...shown } = response;
@@ -114,7 +131,8 @@ export function createStoredQuoteService(deps: { db: Db; quotes: QuoteService; n
   }
 
   async function present(quote: StoredQuote): Promise<Result<StoredQuoteResponse>> {
-    if (!quote.input.figures) return failure('not-found', `Quote ${quote.id} can't be shown again; price the design afresh.`);
+    if (!quote.input.figures)
+      return failure('not-found', `Quote ${quote.id} can't be shown again; price the design afresh.`);
     return ok({
       ...quote.input.figures,
       quote: quoteSummaryOf(quote),

@@ -12,7 +12,10 @@ export interface ShopSchedule {
 
 /** The single settings row; the seeds and the studio's setup always create it. */
 export async function readShopSchedule(db: Db): Promise<ShopSchedule> {
-  const row = await db('shop_settings').select('name', 'contact_email', 'timezone', 'lead_time_days').where({ id: 1 }).first();
+  const row = await db('shop_settings')
+    .select('name', 'contact_email', 'timezone', 'lead_time_days')
+    .where({ id: 1 })
+    .first();
   if (!row) throw new Error('shop_settings has no row 1; run the seeds or the studio setup.');
   return { name: row.name, contactEmail: row.contact_email, timezone: row.timezone, leadTimeDays: row.lead_time_days };
 }
@@ -20,7 +23,14 @@ export async function readShopSchedule(db: Db): Promise<ShopSchedule> {
 /** The studio's pace and capacity from the single shop_settings row; DECIMAL columns arrive as strings. */
 export async function readShopSettings(db: Db): Promise<ShopSettings | undefined> {
   const row = await db('shop_settings')
-    .select('machine_stitches_per_minute', 'minutes_per_hooping', 'minutes_per_colour_change', 'setup_minutes', 'lead_time_days', 'machine_hours_per_week')
+    .select(
+      'machine_stitches_per_minute',
+      'minutes_per_hooping',
+      'minutes_per_colour_change',
+      'setup_minutes',
+      'lead_time_days',
+      'machine_hours_per_week',
+    )
     .where({ id: 1 })
     .first();
   return (

@@ -24,7 +24,12 @@ export function createOverviewService(deps: { db: Db; now: () => Date }) {
   async function read(): Promise<AdminOverviewResponse> {
     const now = deps.now();
     const since = new Date(Date.parse(`${weekStartOf(now)}T00:00:00Z`) - (weeksBack - 1) * 7 * 86_400_000);
-    const [base, open, money, settings] = await Promise.all([readOrderOverview(deps.db, 12), readOpenOrders(deps.db), readMoneyMovements(deps.db, since), readCapacitySettings(deps.db)]);
+    const [base, open, money, settings] = await Promise.all([
+      readOrderOverview(deps.db, 12),
+      readOpenOrders(deps.db),
+      readMoneyMovements(deps.db, since),
+      readCapacitySettings(deps.db),
+    ]);
     const leadTimeDays = settings?.leadTimeDays ?? 10;
     const today = now.toISOString().slice(0, 10);
     const soon = new Date(now.getTime() + dueSoonDays * 86_400_000).toISOString().slice(0, 10);
@@ -45,7 +50,10 @@ export function createOverviewService(deps: { db: Db; now: () => Date }) {
       };
     };
     const actions = open.map(toAction);
-    const inStatus = (kind: keyof typeof statusOfGroup) => ({ kind, orders: actions.filter((order) => order.status === statusOfGroup[kind]) });
+    const inStatus = (kind: keyof typeof statusOfGroup) => ({
+      kind,
+      orders: actions.filter((order) => order.status === statusOfGroup[kind]),
+    });
     const dueSoon = actions
       .filter((order) => order.status !== 'stitched' && order.dueDate !== null && order.dueDate <= soon)
       .sort((a, b) => a.dueDate!.localeCompare(b.dueDate!));
@@ -64,9 +72,15 @@ export function createOverviewService(deps: { db: Db; now: () => Date }) {
         capacityHours: settings?.machineHoursPerWeek ?? 0,
         leadTimeDays,
         // Stitched work has left the machine, so only orders before that point book hours.
-        weeks: bookMachineHours(open.filter((order) => order.status !== 'stitched'), { now, weekCount: weeksAhead, leadTimeDays }),
+        weeks: bookMachineHours(
+          open.filter((order) => order.status !== 'stitched'),
+          { now, weekCount: weeksAhead, leadTimeDays },
+        ),
       },
-      revenue: { currency: settings?.currency ?? 'USD', weeks: sumRevenueByWeek(money.captures, money.refunds, { now, weekCount: weeksBack }) },
+      revenue: {
+        currency: settings?.currency ?? 'USD',
+        weeks: sumRevenueByWeek(money.captures, money.refunds, { now, weekCount: weeksBack }),
+      },
     };
   }
   return { read };

@@ -3,7 +3,14 @@ import type { OrderStatus } from '../../contracts/order-status.ts';
 import type { MoneyMovement } from './studio-weeks.ts';
 
 /** Statuses in which an order still needs the studio: from a held card to stitched and waiting to ship. */
-const openStatuses: OrderStatus[] = ['authorized', 'proof_sent', 'changes_requested', 'proof_approved', 'in_production', 'stitched'];
+const openStatuses: OrderStatus[] = [
+  'authorized',
+  'proof_sent',
+  'changes_requested',
+  'proof_approved',
+  'in_production',
+  'stitched',
+];
 
 export interface OpenOrderRow {
   id: number;
@@ -26,7 +33,17 @@ export async function readOpenOrders(db: Db): Promise<OpenOrderRow[]> {
   const rows = await db('orders as o')
     .join('users as u', 'u.id', 'o.customer_id')
     .join('quotes as q', 'q.id', 'o.quote_id')
-    .select('o.id', 'o.number', 'u.name as customer_name', 'o.status', 'o.total_cents', 'o.currency', 'o.needed_by', 'o.placed_at', 'q.run_minutes')
+    .select(
+      'o.id',
+      'o.number',
+      'u.name as customer_name',
+      'o.status',
+      'o.total_cents',
+      'o.currency',
+      'o.needed_by',
+      'o.placed_at',
+      'q.run_minutes',
+    )
     .whereIn('o.status', openStatuses)
     .orderBy([{ column: 'o.placed_at' }, { column: 'o.id' }]);
   return rows.map((row) => ({
@@ -46,22 +63,44 @@ export async function readOpenOrders(db: Db): Promise<OpenOrderRow[]> {
  * Captures (from the payments, at captured_at) and refunds (from the order events, which record each refund's
  * amount and time; a payment row only keeps the running total) since `since`.
  */
-export async function readMoneyMovements(db: Db, since: Date): Promise<{ captures: MoneyMovement[]; refunds: MoneyMovement[] }> {
+export async function readMoneyMovements(
+  db: Db,
+  since: Date,
+): Promise<{ captures: MoneyMovement[]; refunds: MoneyMovement[] }> {
   const [captures, refunds] = await Promise.all([
-    db('payments').select('captured_at', 'amount_captured_cents').whereNotNull('captured_at').where('captured_at', '>=', since),
+    db('payments')
+      .select('captured_at', 'amount_captured_cents')
+      .whereNotNull('captured_at')
+      .where('captured_at', '>=', since),
     db('order_events')
       .select('created_at', db.raw("JSON_VALUE(payload, '$.amountCents') as amount_cents"))
       .where({ type: 'refunded' })
       .where('created_at', '>=', since),
   ]);
   return {
-    captures: captures.map((row) => ({ at: new Date(row.captured_at), amountCents: Number(row.amount_captured_cents) })),
-    refunds: refunds.filter((row) => row.amount_cents !== null).map((row) => ({ at: new Date(row.created_at), amountCents: Number(row.amount_cents) })),
+    captures: captures.map((row) => ({
+      at: new Date(row.captured_at),
+      amountCents: Number(row.amount_captured_cents),
+    })),
+    refunds: refunds
+      .filter((row) => row.amount_cents !== null)
+      .map((row) => ({ at: new Date(row.created_at), amountCents: Number(row.amount_cents) })),
   };
 }
 
 /** The settings the weekly figures are worked out from. */
-export async function readCapacitySettings(db: Db): Promise<{ machineHoursPerWeek: number; leadTimeDays: number; currency: string } | undefined> {
-  const row = await db('shop_settings').select('machine_hours_per_week', 'lead_time_days', 'currency').where({ id: 1 }).first();
-  return row && { machineHoursPerWeek: Number(row.machine_hours_per_week), leadTimeDays: row.lead_time_days, currency: row.currency };
+export async function readCapacitySettings(
+  db: Db,
+): Promise<{ machineHoursPerWeek: number; leadTimeDays: number; currency: string } | undefined> {
+  const row = await db('shop_settings')
+    .select('machine_hours_per_week', 'lead_time_days', 'currency')
+    .where({ id: 1 })
+    .first();
+  return (
+    row && {
+      machineHoursPerWeek: Number(row.machine_hours_per_week),
+      leadTimeDays: row.lead_time_days,
+      currency: row.currency,
+    }
+  );
 }

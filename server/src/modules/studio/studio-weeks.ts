@@ -13,7 +13,8 @@ export function weekStartOf(date: Date): string {
   return new Date(midnight - daysSinceMonday * dayMs).toISOString().slice(0, 10);
 }
 
-const addWeeks = (weekStart: string, weeks: number) => new Date(Date.parse(`${weekStart}T00:00:00Z`) + weeks * 7 * dayMs).toISOString().slice(0, 10);
+const addWeeks = (weekStart: string, weeks: number) =>
+  new Date(Date.parse(`${weekStart}T00:00:00Z`) + weeks * 7 * dayMs).toISOString().slice(0, 10);
 
 /** An order still to be stitched, with its quote's machine minutes for the whole quantity. */
 export interface BookedOrder {
@@ -42,9 +43,16 @@ export interface MachineWeek {
  * `dueDateOf`). Work already overdue is counted in this week, because it still has to be stitched now; work due
  * after the last week is left out. Hours are rounded to 0.01 h only after summing minutes.
  */
-export function bookMachineHours(orders: readonly BookedOrder[], options: { now: Date; weekCount: number; leadTimeDays: number }): MachineWeek[] {
+export function bookMachineHours(
+  orders: readonly BookedOrder[],
+  options: { now: Date; weekCount: number; leadTimeDays: number },
+): MachineWeek[] {
   const first = weekStartOf(options.now);
-  const weeks = Array.from({ length: options.weekCount }, (_, i) => ({ weekStart: addWeeks(first, i), minutes: 0, orderCount: 0 }));
+  const weeks = Array.from({ length: options.weekCount }, (_, i) => ({
+    weekStart: addWeeks(first, i),
+    minutes: 0,
+    orderCount: 0,
+  }));
   for (const order of orders) {
     const due = dueDateOf(order, options.leadTimeDays);
     if (!due) continue;
@@ -54,7 +62,11 @@ export function bookMachineHours(orders: readonly BookedOrder[], options: { now:
     week.minutes += order.runMinutes;
     week.orderCount += 1;
   }
-  return weeks.map(({ weekStart, minutes, orderCount }) => ({ weekStart, bookedHours: Math.round((minutes / 60) * 100) / 100, orderCount }));
+  return weeks.map(({ weekStart, minutes, orderCount }) => ({
+    weekStart,
+    bookedHours: Math.round((minutes / 60) * 100) / 100,
+    orderCount,
+  }));
 }
 
 /** Money that moved at one instant: a capture, or a refund (a positive amount either way). */
@@ -72,9 +84,17 @@ export interface RevenueWeek {
 }
 
 /** Takings in each of the `weekCount` weeks up to and including this one: captured payments minus refunds. */
-export function sumRevenueByWeek(captures: readonly MoneyMovement[], refunds: readonly MoneyMovement[], options: { now: Date; weekCount: number }): RevenueWeek[] {
+export function sumRevenueByWeek(
+  captures: readonly MoneyMovement[],
+  refunds: readonly MoneyMovement[],
+  options: { now: Date; weekCount: number },
+): RevenueWeek[] {
   const last = weekStartOf(options.now);
-  const weeks = Array.from({ length: options.weekCount }, (_, i) => ({ weekStart: addWeeks(last, i - options.weekCount + 1), capturedCents: 0, refundedCents: 0 }));
+  const weeks = Array.from({ length: options.weekCount }, (_, i) => ({
+    weekStart: addWeeks(last, i - options.weekCount + 1),
+    capturedCents: 0,
+    refundedCents: 0,
+  }));
   const weekOf = (at: Date) => weeks.find((week) => week.weekStart === weekStartOf(at));
   for (const capture of captures) {
     const week = weekOf(capture.at);

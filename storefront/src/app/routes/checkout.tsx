@@ -36,7 +36,8 @@ interface Repriced {
 const localToday = () => new Date().toLocaleDateString('en-CA');
 
 function repricedOf(error: unknown): Repriced | undefined {
-  if (!(error instanceof ApiError) || error.kind !== 'conflict' || typeof error.details?.quoteId !== 'number') return undefined;
+  if (!(error instanceof ApiError) || error.kind !== 'conflict' || typeof error.details?.quoteId !== 'number')
+    return undefined;
   const { quoteId, previousTotalCents, totalCents, currency } = error.details as Omit<Repriced, 'message'>;
   return { quoteId, previousTotalCents, totalCents, currency, message: error.message };
 }
@@ -56,7 +57,14 @@ export function CheckoutPage() {
   const [resizeProblem, setResizeProblem] = useState<string>();
   const [isSavingDesign, setIsSavingDesign] = useState(false);
   const ordered = useMemo<OrderedDesign | undefined>(
-    () => saved.data && { id: saved.data.id, garmentId: saved.data.garmentId, colourId: saved.data.colourId, sizeId: resized?.sizeId ?? saved.data.sizeId, document: resized?.document ?? saved.data.document },
+    () =>
+      saved.data && {
+        id: saved.data.id,
+        garmentId: saved.data.garmentId,
+        colourId: saved.data.colourId,
+        sizeId: resized?.sizeId ?? saved.data.sizeId,
+        document: resized?.document ?? saved.data.document,
+      },
     [saved.data, resized],
   );
   const priced = useCheckoutQuote(ordered, quantity, false);
@@ -74,7 +82,9 @@ export function CheckoutPage() {
     return (
       <div className="mx-auto max-w-md space-y-4 text-center">
         <h1 className="text-2xl font-semibold">Sign in to order</h1>
-        <p className="text-walnut-700">Orders belong to an account, so we can send you the proof and keep you posted.</p>
+        <p className="text-walnut-700">
+          Orders belong to an account, so we can send you the proof and keep you posted.
+        </p>
         <ButtonLink href={signInHref(designId ? paths.checkout.href(designId) : paths.home.href())}>Sign in</ButtonLink>
       </div>
     );
@@ -94,13 +104,27 @@ export function CheckoutPage() {
     setResizeProblem(undefined);
     if (toSizeId === design.sizeId) return setResized(undefined);
     const { resizeDocument } = await import('../../features/designer/render/resize-document.ts');
-    const document = await resizeDocument({ garment, motifs: motifs.data, fonts: fonts.data, sizeId: design.sizeId, colourId: design.colourId, document: design.document, toSizeId });
+    const document = await resizeDocument({
+      garment,
+      motifs: motifs.data,
+      fonts: fonts.data,
+      sizeId: design.sizeId,
+      colourId: design.colourId,
+      document: design.document,
+      toSizeId,
+    });
     setResized({ sizeId: toSizeId, document });
   };
 
   /** Keeps the design in the size chosen here; a design an earlier order stitches is kept, so this one is saved anew. */
   const saveResized = async (): Promise<SavedDesign> => {
-    const request = { garmentId: design.garmentId, sizeId: resized!.sizeId, colourId: design.colourId, name: design.name, document: resized!.document };
+    const request = {
+      garmentId: design.garmentId,
+      sizeId: resized!.sizeId,
+      colourId: design.colourId,
+      name: design.name,
+      document: resized!.document,
+    };
     try {
       return await updateDesign({ id: design.id, request });
     } catch (error) {
@@ -120,7 +144,17 @@ export function CheckoutPage() {
         const kept = await saveResized();
         if (kept.id !== design.id) {
           designId = kept.id;
-          quoteId = (await createQuote({ designId, garmentId: kept.garmentId, sizeId: kept.sizeId, colourId: kept.colourId, document: kept.document, quantity, isRush })).quoteId;
+          quoteId = (
+            await createQuote({
+              designId,
+              garmentId: kept.garmentId,
+              sizeId: kept.sizeId,
+              colourId: kept.colourId,
+              document: kept.document,
+              quantity,
+              isRush,
+            })
+          ).quoteId;
         }
       } catch (error) {
         setResizeProblem(error instanceof Error ? error.message : 'Your design could not be saved in the new size.');
@@ -129,10 +163,13 @@ export function CheckoutPage() {
         setIsSavingDesign(false);
       }
     }
-    place.mutate({ quoteId, designId, ...fields }, {
-      onSuccess: (started) => window.location.assign(started.checkoutUrl),
-      onError: (error) => setRepriced(repricedOf(error)),
-    });
+    place.mutate(
+      { quoteId, designId, ...fields },
+      {
+        onSuccess: (started) => window.location.assign(started.checkoutUrl),
+        onError: (error) => setRepriced(repricedOf(error)),
+      },
+    );
   };
   const serverFields = place.error instanceof ApiError ? place.error.fields : undefined;
   const quote = shown.quote;
@@ -140,12 +177,24 @@ export function CheckoutPage() {
   return (
     <div className="space-y-6">
       <div>
-        {garment && <Link to={paths.design.href(garment.slug, design.id)} className="text-sm text-walnut-500 hover:text-madder-600">← Back to the design</Link>}
+        {garment && (
+          <Link
+            to={paths.design.href(garment.slug, design.id)}
+            className="text-sm text-walnut-500 hover:text-madder-600"
+          >
+            ← Back to the design
+          </Link>
+        )}
         <h1 className="mt-1 text-2xl font-semibold sm:text-3xl">Order “{design.name}”</h1>
       </div>
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(18rem,2fr)]">
-        <section aria-labelledby="details-heading" className="min-w-0 rounded-card border border-linen-200 bg-white p-5 shadow-sm">
-          <h2 id="details-heading" className="sr-only">Your details</h2>
+        <section
+          aria-labelledby="details-heading"
+          className="min-w-0 rounded-card border border-linen-200 bg-white p-5 shadow-sm"
+        >
+          <h2 id="details-heading" className="sr-only">
+            Your details
+          </h2>
           <CheckoutForm
             readyDates={readyDates}
             today={localToday()}
@@ -156,41 +205,84 @@ export function CheckoutPage() {
             canSubmit={quote !== undefined && !shown.isPricing}
             summary={
               <div className="space-y-3">
-                {quote && <p className="text-base">We will hold <strong className="font-semibold">{formatMoney(quote.quote.totalCents, quote.quote.currency)}</strong> on your card.</p>}
+                {quote && (
+                  <p className="text-base">
+                    We will hold{' '}
+                    <strong className="font-semibold">
+                      {formatMoney(quote.quote.totalCents, quote.quote.currency)}
+                    </strong>{' '}
+                    on your card.
+                  </p>
+                )}
                 {repriced && (
                   <div role="alert" className="rounded-lg border border-saffron-500 bg-saffron-100 p-4 text-sm">
                     <p className="font-semibold">The price has changed</p>
                     <p className="mt-1">{repriced.message}</p>
                     <p className="mt-1">
-                      Was <s>{formatMoney(repriced.previousTotalCents, repriced.currency)}</s>, now <strong>{formatMoney(repriced.totalCents, repriced.currency)}</strong>.
+                      Was <s>{formatMoney(repriced.previousTotalCents, repriced.currency)}</s>, now{' '}
+                      <strong>{formatMoney(repriced.totalCents, repriced.currency)}</strong>.
                     </p>
-                    <Button className="mt-3" onClick={() => lastFields.current && void submit(lastFields.current, repriced.quoteId)} disabled={place.isPending}>
+                    <Button
+                      className="mt-3"
+                      onClick={() => lastFields.current && void submit(lastFields.current, repriced.quoteId)}
+                      disabled={place.isPending}
+                    >
                       Confirm {formatMoney(repriced.totalCents, repriced.currency)} and pay
                     </Button>
                   </div>
                 )}
-                {place.isError && !repriced && <p role="alert" className="rounded-lg bg-madder-50 p-3 text-sm text-madder-700">{place.error.message}</p>}
+                {place.isError && !repriced && (
+                  <p role="alert" className="rounded-lg bg-madder-50 p-3 text-sm text-madder-700">
+                    {place.error.message}
+                  </p>
+                )}
               </div>
             }
           />
         </section>
-        <aside aria-labelledby="order-heading" className="min-w-0 space-y-4 rounded-card border border-linen-200 bg-white p-5 shadow-sm">
-          <h2 id="order-heading" className="text-lg font-semibold">Your order</h2>
+        <aside
+          aria-labelledby="order-heading"
+          className="min-w-0 space-y-4 rounded-card border border-linen-200 bg-white p-5 shadow-sm"
+        >
+          <h2 id="order-heading" className="text-lg font-semibold">
+            Your order
+          </h2>
           {garment && <GarmentPicture garment={garment} colourHex={colour?.hex} imageClassName="max-h-48" />}
           <p className="text-sm text-walnut-700">
             {garment?.name}, size {size?.label}, {colour?.name}.{' '}
-            {garment && <Link to={paths.design.href(garment.slug, design.id)} className="text-madder-600 underline">Change the design</Link>}
+            {garment && (
+              <Link to={paths.design.href(garment.slug, design.id)} className="text-madder-600 underline">
+                Change the design
+              </Link>
+            )}
           </p>
-          {garment && motifs.data && fonts.data && <SizePicker sizes={garment.sizes} selectedId={sizeId} onSelect={(id) => void changeSize(id)} />}
-          {resized && <p className="text-sm text-walnut-500">Your design is carried to this size and saved that way when you order.</p>}
-          {resizeProblem && <p role="alert" className="text-sm text-madder-700">{resizeProblem}</p>}
+          {garment && motifs.data && fonts.data && (
+            <SizePicker sizes={garment.sizes} selectedId={sizeId} onSelect={(id) => void changeSize(id)} />
+          )}
+          {resized && (
+            <p className="text-sm text-walnut-500">
+              Your design is carried to this size and saved that way when you order.
+            </p>
+          )}
+          {resizeProblem && (
+            <p role="alert" className="text-sm text-madder-700">
+              {resizeProblem}
+            </p>
+          )}
           <QuantityField quantity={quantity} onChange={setQuantity} />
           <div aria-live="polite" className={shown.isPricing ? 'opacity-60' : ''}>
-            <p role="status" className="text-sm text-walnut-500">{shown.isPricing ? 'Pricing…' : isRush ? 'Priced as a rush order' : ''}</p>
+            <p role="status" className="text-sm text-walnut-500">
+              {shown.isPricing ? 'Pricing…' : isRush ? 'Priced as a rush order' : ''}
+            </p>
             {quote && <QuoteLines quote={quote.quote} caption="What the order costs" />}
           </div>
           {shown.error && <ErrorNotice message={shown.error.message} />}
-          {quote && <p className="text-xs text-walnut-500">This price is held until {new Date(quote.expiresAt).toLocaleDateString('en-US', { month: 'long', day: 'numeric' })}.</p>}
+          {quote && (
+            <p className="text-xs text-walnut-500">
+              This price is held until{' '}
+              {new Date(quote.expiresAt).toLocaleDateString('en-US', { month: 'long', day: 'numeric' })}.
+            </p>
+          )}
         </aside>
       </div>
     </div>

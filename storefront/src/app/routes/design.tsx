@@ -1,6 +1,11 @@
 import { useMemo, useState } from 'react';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
-import type { GarmentSummary, LetteringFontSummary, MotifSummary, ThreadColourSummary } from '@server/contracts/catalogue.ts';
+import type {
+  GarmentSummary,
+  LetteringFontSummary,
+  MotifSummary,
+  ThreadColourSummary,
+} from '@server/contracts/catalogue.ts';
 import type { QuotePreviewRequest } from '@server/contracts/quotes.ts';
 import type { SavedDesign } from '@server/contracts/saved-designs.ts';
 import { ApiError } from '@ui/api-client.ts';
@@ -32,13 +37,22 @@ interface Catalogue {
 }
 
 /** The designer once everything it needs has arrived: it composes the catalogue's pickers and the quote around it. */
-function LoadedDesigner({ garment, motifs, fonts, threads, saved: opened }: Catalogue & { saved: SavedDesign | undefined }) {
+function LoadedDesigner({
+  garment,
+  motifs,
+  fonts,
+  threads,
+  saved: opened,
+}: Catalogue & { saved: SavedDesign | undefined }) {
   const navigate = useNavigate();
   const setting = useDesignSetting(garment, motifs, fonts);
   const designer = useDesigner(setting, useInitialDesign(garment, opened));
   const [saved, setSaved] = useState(opened);
   const { sizeId, colourId, document } = designer.state;
-  const request = useMemo<QuotePreviewRequest>(() => ({ garmentId: garment.id, sizeId, colourId, quantity: 1, isRush: false, document }), [garment.id, sizeId, colourId, document]);
+  const request = useMemo<QuotePreviewRequest>(
+    () => ({ garmentId: garment.id, sizeId, colourId, quantity: 1, isRush: false, document }),
+    [garment.id, sizeId, colourId, document],
+  );
   const onSaved = (design: SavedDesign) => {
     setSaved(design);
     // The address then opens this design, so a reload or a shared bookmark comes back to it.
@@ -54,15 +68,25 @@ function LoadedDesigner({ garment, motifs, fonts, threads, saved: opened }: Cata
       onSaved={onSaved}
       header={
         <div>
-          <Link to={paths.garment.href(garment.slug)} className="text-sm text-walnut-500 hover:text-madder-600">← {garment.name}</Link>
+          <Link to={paths.garment.href(garment.slug)} className="text-sm text-walnut-500 hover:text-madder-600">
+            ← {garment.name}
+          </Link>
           <h1 className="mt-1 text-2xl font-semibold sm:text-3xl">Design your {garment.name.toLowerCase()}</h1>
           {saved && <p className="mt-1 text-sm text-walnut-500">Saved as “{saved.name}”</p>}
         </div>
       }
       garmentOptions={
         <div className="space-y-5">
-          <SizePicker sizes={garment.sizes} selectedId={sizeId} onSelect={(id) => designer.dispatch('change-size', { sizeId: id })} />
-          <FabricColourPicker colours={garment.colours} selected={garment.colours.find((colour) => colour.id === colourId)} onSelect={(id) => designer.dispatch('set-fabric-colour', { colourId: id })} />
+          <SizePicker
+            sizes={garment.sizes}
+            selectedId={sizeId}
+            onSelect={(id) => designer.dispatch('change-size', { sizeId: id })}
+          />
+          <FabricColourPicker
+            colours={garment.colours}
+            selected={garment.colours.find((colour) => colour.id === colourId)}
+            onSelect={(id) => designer.dispatch('set-fabric-colour', { colourId: id })}
+          />
         </div>
       }
       price={
@@ -92,7 +116,11 @@ export function DesignPage() {
   const threads = useThreads();
   const saved = useSavedDesign(typeof designId === 'number' ? designId : undefined);
   const isFontsReady = useLetteringFontsReady(fonts.data ?? []);
-  const startAfresh = slug ? <Link to={paths.design.href(slug)} className="mt-4 inline-block text-madder-600 underline">Start a new design instead</Link> : null;
+  const startAfresh = slug ? (
+    <Link to={paths.design.href(slug)} className="mt-4 inline-block text-madder-600 underline">
+      Start a new design instead
+    </Link>
+  ) : null;
 
   const failed = [garments, motifs, fonts, threads].find((query) => query.isError);
   if (failed) return <ErrorNotice message={failed.error!.message} onRetry={() => void failed.refetch()} />;
@@ -102,7 +130,9 @@ export function DesignPage() {
     return (
       <div>
         <ErrorNotice message="We could not find that garment to design; it may no longer be offered." />
-        <Link to={paths.home.href()} className="mt-4 inline-block text-madder-600 underline">Back to all garments</Link>
+        <Link to={paths.home.href()} className="mt-4 inline-block text-madder-600 underline">
+          Back to all garments
+        </Link>
       </div>
     );
   }
@@ -118,7 +148,10 @@ export function DesignPage() {
     const isSignedOut = saved.error instanceof ApiError && saved.error.kind === 'unauthenticated';
     return (
       <div className="space-y-4">
-        <ErrorNotice message={isSignedOut ? 'Sign in to open your saved design.' : saved.error.message} onRetry={isSignedOut ? undefined : () => void saved.refetch()} />
+        <ErrorNotice
+          message={isSignedOut ? 'Sign in to open your saved design.' : saved.error.message}
+          onRetry={isSignedOut ? undefined : () => void saved.refetch()}
+        />
         {isSignedOut && <ButtonLink href={signInHref(paths.design.href(garment.slug, designId))}>Sign in</ButtonLink>}
         <div>{startAfresh}</div>
       </div>
@@ -129,12 +162,28 @@ export function DesignPage() {
     return (
       <div>
         <ErrorNotice message={`This saved design is for the ${itsGarment?.name.toLowerCase() ?? 'another garment'}.`} />
-        {itsGarment && <Link to={paths.design.href(itsGarment.slug, saved.data.id)} className="mt-4 inline-block text-madder-600 underline">Open it on the {itsGarment.name.toLowerCase()}</Link>}
+        {itsGarment && (
+          <Link
+            to={paths.design.href(itsGarment.slug, saved.data.id)}
+            className="mt-4 inline-block text-madder-600 underline"
+          >
+            Open it on the {itsGarment.name.toLowerCase()}
+          </Link>
+        )}
       </div>
     );
   }
   if (!motifs.data || !fonts.data || !threads.data) return <Loading label="Laying out the threads and motifs…" />;
   if (designId !== undefined && saved.isPending) return <Loading label="Opening your saved design…" />;
   if (!isFontsReady) return <Loading label="Getting the lettering ready…" />;
-  return <LoadedDesigner key={garment.slug} garment={garment} motifs={motifs.data} fonts={fonts.data} threads={threads.data} saved={saved.data} />;
+  return (
+    <LoadedDesigner
+      key={garment.slug}
+      garment={garment}
+      motifs={motifs.data}
+      fonts={fonts.data}
+      threads={threads.data}
+      saved={saved.data}
+    />
+  );
 }

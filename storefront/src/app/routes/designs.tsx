@@ -37,18 +37,36 @@ export function DesignsPage() {
     );
   }
   const failed = [designs, garments, motifs, fonts, threads].find((query) => query.isError);
-  if (failed) return <div className="space-y-4">{heading}<ErrorNotice message={failed.error!.message} onRetry={() => void failed.refetch()} /></div>;
-  if (!designs.data || !garments.data || !motifs.data || !fonts.data || !threads.data) return <div>{heading}<Loading label="Fetching your designs…" /></div>;
+  if (failed)
+    return (
+      <div className="space-y-4">
+        {heading}
+        <ErrorNotice message={failed.error!.message} onRetry={() => void failed.refetch()} />
+      </div>
+    );
+  if (!designs.data || !garments.data || !motifs.data || !fonts.data || !threads.data)
+    return (
+      <div>
+        {heading}
+        <Loading label="Fetching your designs…" />
+      </div>
+    );
   const lists = { garments: garments.data, motifs: motifs.data, fonts: fonts.data, threads: threads.data };
 
   return (
     <div>
       {heading}
-      <p className="mt-2 max-w-2xl text-walnut-700">Open a design to carry on, make a copy to try a variation, or share a link so family can see it.</p>
-      <p role="status" className="mt-3 min-h-6 text-sm text-sage-700">{copied ? `Copied as “${copied.name}”: it is first in the list.` : ''}</p>
+      <p className="mt-2 max-w-2xl text-walnut-700">
+        Open a design to carry on, make a copy to try a variation, or share a link so family can see it.
+      </p>
+      <p role="status" className="mt-3 min-h-6 text-sm text-sage-700">
+        {copied ? `Copied as “${copied.name}”: it is first in the list.` : ''}
+      </p>
       {designs.data.length === 0 ? (
         <EmptyState title="You have not saved a design yet.">
-          <Link to={paths.home.href()} className="inline-flex min-h-11 items-center text-madder-600 underline">Choose a garment to start one</Link>
+          <Link to={paths.home.href()} className="inline-flex min-h-11 items-center text-madder-600 underline">
+            Choose a garment to start one
+          </Link>
         </EmptyState>
       ) : (
         <ul className="mt-4 grid gap-6 sm:grid-cols-2 lg:grid-cols-3">

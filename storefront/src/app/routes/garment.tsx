@@ -23,14 +23,17 @@ export function GarmentPage() {
   const [sizeId, setSizeId] = useState<number>();
   if (garment.isPending) return <Loading label="Fetching the garment…" />;
   if (garment.isError) {
-    const isMissing = garment.error instanceof ApiError && (garment.error.kind === 'not-found' || garment.error.kind === 'invalid');
+    const isMissing =
+      garment.error instanceof ApiError && (garment.error.kind === 'not-found' || garment.error.kind === 'invalid');
     return (
       <div>
         <ErrorNotice
           message={isMissing ? 'We could not find that garment; it may no longer be offered.' : garment.error.message}
           onRetry={isMissing ? undefined : () => void garment.refetch()}
         />
-        <Link to={paths.home.href()} className="mt-4 inline-block text-madder-600 underline">Back to all garments</Link>
+        <Link to={paths.home.href()} className="mt-4 inline-block text-madder-600 underline">
+          Back to all garments
+        </Link>
       </div>
     );
   }
@@ -45,7 +48,12 @@ export function GarmentPage() {
       <div className="grid gap-8 lg:grid-cols-[3fr_2fr]">
         <GarmentViews garment={data} colourHex={colour?.hex} />
         <div>
-          <Link to={paths.home.href()} className="inline-flex min-h-11 items-center text-sm text-walnut-500 hover:text-madder-600">← All garments</Link>
+          <Link
+            to={paths.home.href()}
+            className="inline-flex min-h-11 items-center text-sm text-walnut-500 hover:text-madder-600"
+          >
+            ← All garments
+          </Link>
           <h1 className="mt-1 text-3xl font-semibold">{data.name}</h1>
           <p className="mt-3 text-walnut-700">{data.description}</p>
           <Link to={paths.design.href(data.slug)} className={`mt-5 ${buttonClassName()}`}>
@@ -61,7 +69,9 @@ export function GarmentPage() {
       </div>
 
       <section aria-labelledby="sizes-heading" className="mt-10">
-        <h2 id="sizes-heading" className="seam inline-block pb-2 text-xl font-semibold">Sizes and measurements</h2>
+        <h2 id="sizes-heading" className="seam inline-block pb-2 text-xl font-semibold">
+          Sizes and measurements
+        </h2>
         <p className="mt-3 max-w-2xl text-sm text-walnut-700">
           Measured on the garment laid flat: the chest all the way round and the length from the shoulder.
           {hasHem && ' The hem is measured along the line the border is stitched on.'}
@@ -72,35 +82,46 @@ export function GarmentPage() {
       </section>
 
       <section aria-labelledby="borders-heading" className="mt-10">
-        <h2 id="borders-heading" className="seam inline-block pb-2 text-xl font-semibold">Borders all the way round</h2>
+        <h2 id="borders-heading" className="seam inline-block pb-2 text-xl font-semibold">
+          Borders all the way round
+        </h2>
         {!hasHem ? (
           <p className="mt-3 text-walnut-700">This piece takes a name or a single motif rather than a hem border.</p>
         ) : (
           <>
             <p className="mt-3 max-w-2xl text-sm text-walnut-700">
               A border is one little picture repeated end to end round the hem. We resize it very slightly so that whole
-              repeats meet exactly at the back seam — never a cut-off duck. Here is how each border sits on size {size?.label}.
+              repeats meet exactly at the back seam — never a cut-off duck. Here is how each border sits on size{' '}
+              {size?.label}.
             </p>
             <div className="mt-4">
               {motifs.isPending && <Loading label="Laying out the borders…" />}
               {motifs.isError && <ErrorNotice message={motifs.error.message} onRetry={() => void motifs.refetch()} />}
               {motifs.isSuccess && borders.length === 0 && <EmptyState title="No borders are on offer just now." />}
-              {size && borders.length > 0 && <BorderFitList
+              {size && borders.length > 0 && (
+                <BorderFitList
                   motifs={borders}
                   size={size}
                   fabricHex={colour?.hex}
-                  priceOf={(motif) => <BorderPrice garment={data} sizeId={size.id} colourId={colour?.id} motif={motif} />}
-                />}
+                  priceOf={(motif) => (
+                    <BorderPrice garment={data} sizeId={size.id} colourId={colour?.id} motif={motif} />
+                  )}
+                />
+              )}
             </div>
           </>
         )}
       </section>
 
       <section aria-labelledby="motifs-heading" className="mt-10">
-        <h2 id="motifs-heading" className="seam inline-block pb-2 text-xl font-semibold">Single motifs that suit it</h2>
+        <h2 id="motifs-heading" className="seam inline-block pb-2 text-xl font-semibold">
+          Single motifs that suit it
+        </h2>
         <div className="mt-4">
           {motifs.isPending && <Loading label="Finding the motifs…" />}
-          {motifs.isSuccess && singles.length === 0 && <EmptyState title={`No single motifs fit the ${data.name.toLowerCase()} just now.`} />}
+          {motifs.isSuccess && singles.length === 0 && (
+            <EmptyState title={`No single motifs fit the ${data.name.toLowerCase()} just now.`} />
+          )}
           {singles.length > 0 && (
             <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
               {singles.map((motif) => (

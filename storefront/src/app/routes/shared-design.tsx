@@ -19,24 +19,40 @@ export function SharedDesignPage() {
   const motifs = useMotifs();
   const fonts = useFonts();
   const threads = useThreads();
-  const browse = <Link to={paths.home.href()} className="inline-flex min-h-11 items-center text-madder-600 underline">See all our garments</Link>;
+  const browse = (
+    <Link to={paths.home.href()} className="inline-flex min-h-11 items-center text-madder-600 underline">
+      See all our garments
+    </Link>
+  );
 
   if (shared.isError) {
-    const isGone = shared.error instanceof ApiError && (shared.error.kind === 'not-found' || shared.error.kind === 'invalid');
+    const isGone =
+      shared.error instanceof ApiError && (shared.error.kind === 'not-found' || shared.error.kind === 'invalid');
     return (
       <div className="space-y-4">
         <h1 className="text-2xl font-semibold">A shared design</h1>
-        <ErrorNotice message={isGone ? 'This link does not open a design: whoever shared it may have stopped sharing it.' : shared.error.message} onRetry={isGone ? undefined : () => void shared.refetch()} />
+        <ErrorNotice
+          message={
+            isGone
+              ? 'This link does not open a design: whoever shared it may have stopped sharing it.'
+              : shared.error.message
+          }
+          onRetry={isGone ? undefined : () => void shared.refetch()}
+        />
         {browse}
       </div>
     );
   }
   const failed = [garments, motifs, fonts, threads].find((query) => query.isError);
   if (failed) return <ErrorNotice message={failed.error!.message} onRetry={() => void failed.refetch()} />;
-  if (!shared.data || !garments.data || !motifs.data || !fonts.data || !threads.data) return <Loading label="Opening the shared design…" />;
+  if (!shared.data || !garments.data || !motifs.data || !fonts.data || !threads.data)
+    return <Loading label="Opening the shared design…" />;
 
   const design = shared.data;
-  const { garment, layout } = drawingOf({ garments: garments.data, motifs: motifs.data, fonts: fonts.data, threads: threads.data }, design);
+  const { garment, layout } = drawingOf(
+    { garments: garments.data, motifs: motifs.data, fonts: fonts.data, threads: threads.data },
+    design,
+  );
   if (!garment || !layout) {
     return (
       <div className="space-y-4">
@@ -51,7 +67,13 @@ export function SharedDesignPage() {
   return (
     <div className="grid gap-8 lg:grid-cols-[3fr_2fr]">
       <div className="flex items-center justify-center rounded-card bg-linen-100 p-4">
-        <DesignDrawing layout={layout} garment={garment} colourHex={colour?.hex} title={`${design.name}, drawn on the ${garment.name.toLowerCase()}`} className="max-h-[36rem] w-full" />
+        <DesignDrawing
+          layout={layout}
+          garment={garment}
+          colourHex={colour?.hex}
+          title={`${design.name}, drawn on the ${garment.name.toLowerCase()}`}
+          className="max-h-[36rem] w-full"
+        />
       </div>
       <div>
         <p className="text-sm font-medium uppercase tracking-wider text-sage-700">A design shared with you</p>
@@ -67,9 +89,13 @@ export function SharedDesignPage() {
             <li key={placement.id}>{placement.label}</li>
           ))}
         </ul>
-        <p className="mt-6 text-sm text-walnut-500">This is a look-only copy: nothing here can be changed or ordered.</p>
+        <p className="mt-6 text-sm text-walnut-500">
+          This is a look-only copy: nothing here can be changed or ordered.
+        </p>
         <div className="mt-4 flex flex-wrap items-center gap-4">
-          <Link to={paths.design.href(garment.slug)} className={buttonClassName()}>Design your own {garment.name.toLowerCase()}</Link>
+          <Link to={paths.design.href(garment.slug)} className={buttonClassName()}>
+            Design your own {garment.name.toLowerCase()}
+          </Link>
           {browse}
         </div>
       </div>

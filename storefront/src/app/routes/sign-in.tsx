@@ -10,9 +10,13 @@ export function SignInPage() {
       <h1 className="text-2xl font-semibold">Sign in to save your designs</h1>
       <p className="mt-2 text-walnut-700">We use your Google account so you don't need another password.</p>
       {problem && (
-        <p role="alert" className="mt-4 rounded-lg bg-madder-50 p-3 text-sm text-madder-700">{problem}</p>
+        <p role="alert" className="mt-4 rounded-lg bg-madder-50 p-3 text-sm text-madder-700">
+          {problem}
+        </p>
       )}
-      <ButtonLink href={signInHref('/')} className="mt-6 w-full">Continue with Google</ButtonLink>
+      <ButtonLink href={signInHref('/')} className="mt-6 w-full">
+        Continue with Google
+      </ButtonLink>
     </div>
   );
 }

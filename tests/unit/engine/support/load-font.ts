@@ -12,7 +12,10 @@ import type { GlyphOutlineSource } from '../../../../server/src/engine/index.ts'
 export const SHIPPED_FONTS = ['pacifico', 'fredoka', 'playfair-display', 'great-vibes', 'poppins'] as const;
 export type ShippedFont = (typeof SHIPPED_FONTS)[number];
 
-const fileOf = (name: ShippedFont): LetteringFontFile => ({ fontsourcePackage: `@fontsource/${name}`, fileName: `${name}-latin-400-normal.woff` });
+const fileOf = (name: ShippedFont): LetteringFontFile => ({
+  fontsourcePackage: `@fontsource/${name}`,
+  fileName: `${name}-latin-400-normal.woff`,
+});
 
 /** A shipped font's latin 400 WOFF parsed by opentype.js, whatever it can lay out. */
 export function loadOpentypeFont(name: ShippedFont): opentype.Font {

@@ -13,5 +13,7 @@ export const previewMotif = (file: File, widthMm: number | undefined, onProgress
   });
 
 export function usePreviewMotif(onProgress: (progress: UploadProgress) => void) {
-  return useMutation({ mutationFn: ({ file, widthMm }: { file: File; widthMm?: number }) => previewMotif(file, widthMm, onProgress) });
+  return useMutation({
+    mutationFn: ({ file, widthMm }: { file: File; widthMm?: number }) => previewMotif(file, widthMm, onProgress),
+  });
 }

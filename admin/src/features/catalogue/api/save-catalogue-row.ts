@@ -23,7 +23,10 @@ export function useInvalidateCatalogue() {
  * the contract's request, checked by the form with the same schema before it is sent.
  */
 export const saveCatalogueRow = (kind: CatalogueKind, id: number | undefined, body: unknown) =>
-  apiRequest(id === undefined ? `/admin/catalogue/${kind}` : `/admin/catalogue/${kind}/${id}`, catalogueRowRef, { method: id === undefined ? 'POST' : 'PUT', body });
+  apiRequest(id === undefined ? `/admin/catalogue/${kind}` : `/admin/catalogue/${kind}/${id}`, catalogueRowRef, {
+    method: id === undefined ? 'POST' : 'PUT',
+    body,
+  });
 
 export function useSaveCatalogueRow(kind: CatalogueKind) {
   const invalidate = useInvalidateCatalogue();

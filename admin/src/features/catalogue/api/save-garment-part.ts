@@ -12,14 +12,16 @@ interface PartTarget {
   partId?: number;
 }
 
-const partPath = ({ part, garmentId, partId }: PartTarget) => `/admin/catalogue/garments/${garmentId}/${part}${partId === undefined ? '' : `/${partId}`}`;
+const partPath = ({ part, garmentId, partId }: PartTarget) =>
+  `/admin/catalogue/garments/${garmentId}/${part}${partId === undefined ? '' : `/${partId}`}`;
 
 /** Adds (POST) or edits (PUT) a garment's size or fabric colour. */
 export const saveGarmentPart = (target: PartTarget, body: unknown) =>
   apiRequest(partPath(target), catalogueRowRef, { method: target.partId === undefined ? 'POST' : 'PUT', body });
 
 /** Deletes a size or colour nothing uses; the server answers 409 when a design or order does. */
-export const deleteGarmentPart = (target: Required<PartTarget>) => apiRequest(partPath(target), catalogueRowRef, { method: 'DELETE' });
+export const deleteGarmentPart = (target: Required<PartTarget>) =>
+  apiRequest(partPath(target), catalogueRowRef, { method: 'DELETE' });
 
 export function useSaveGarmentPart() {
   const invalidate = useInvalidateCatalogue();

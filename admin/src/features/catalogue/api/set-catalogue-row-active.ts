@@ -5,7 +5,9 @@ import { useInvalidateCatalogue, type CatalogueKind } from './save-catalogue-row
 
 /** Retires a row (customers no longer see it; designs and orders that use it keep it) or offers it again. */
 export const setCatalogueRowActive = (kind: CatalogueKind, id: number, isActive: boolean) =>
-  apiRequest(`/admin/catalogue/${kind}/${id}/${isActive ? 'reactivate' : 'retire'}`, catalogueRowRef, { method: 'POST' });
+  apiRequest(`/admin/catalogue/${kind}/${id}/${isActive ? 'reactivate' : 'retire'}`, catalogueRowRef, {
+    method: 'POST',
+  });
 
 export function useSetCatalogueRowActive(kind: CatalogueKind) {
   const invalidate = useInvalidateCatalogue();

@@ -9,7 +9,15 @@ import { ColourPicker } from './colour-picker.tsx';
 type StudioColour = StudioGarment['colours'][number];
 
 /** Adds a fabric colour to a garment or edits one, with the swatch as it will show on the mockup. */
-export function ColourForm({ garmentId, colour, onDone }: { garmentId: number; colour?: StudioColour; onDone: () => void }) {
+export function ColourForm({
+  garmentId,
+  colour,
+  onDone,
+}: {
+  garmentId: number;
+  colour?: StudioColour;
+  onDone: () => void;
+}) {
   const save = useSaveGarmentPart();
   const { register, formState, watch, setValue, setError, handleSubmit } = useForm({
     resolver: zodResolver(fabricColourRequest),
@@ -18,7 +26,14 @@ export function ColourForm({ garmentId, colour, onDone }: { garmentId: number; c
   const errors = formState.errors;
   const hex = watch('hex') ?? '';
 
-  const onSubmit = handleSubmit((values) => saveOrShowErrors(() => save.mutateAsync({ target: { part: 'colours', garmentId, partId: colour?.id }, body: values }), setError, ['name', 'hex'], onDone));
+  const onSubmit = handleSubmit((values) =>
+    saveOrShowErrors(
+      () => save.mutateAsync({ target: { part: 'colours', garmentId, partId: colour?.id }, body: values }),
+      setError,
+      ['name', 'hex'],
+      onDone,
+    ),
+  );
 
   return (
     <form onSubmit={onSubmit} noValidate className="grid gap-4">
@@ -30,8 +45,17 @@ export function ColourForm({ garmentId, colour, onDone }: { garmentId: number; c
           <input className={inputClassName} {...register('hex')} />
         </Field>
       </div>
-      <ColourPicker hex={hex} onPick={(picked) => setValue('hex', picked, { shouldValidate: true })} swatchClassName="h-16 flex-1 rounded-lg" />
-      <FormActions isSaving={save.isPending} error={errors.root?.server?.message} onCancel={onDone} saveLabel={colour ? 'Save colour' : 'Add colour'} />
+      <ColourPicker
+        hex={hex}
+        onPick={(picked) => setValue('hex', picked, { shouldValidate: true })}
+        swatchClassName="h-16 flex-1 rounded-lg"
+      />
+      <FormActions
+        isSaving={save.isPending}
+        error={errors.root?.server?.message}
+        onCancel={onDone}
+        saveLabel={colour ? 'Save colour' : 'Add colour'}
+      />
     </form>
   );
 }

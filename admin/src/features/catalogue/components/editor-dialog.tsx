@@ -4,7 +4,17 @@ import { useEffect, useId, useRef, type ReactNode } from 'react';
  * A modal form panel on the browser's own <dialog>: it traps focus, closes on Escape and returns focus to the
  * button that opened it. Its content is mounted only while it is open, so every opening starts a fresh form.
  */
-export function EditorDialog({ title, isOpen, onClose, children }: { title: string; isOpen: boolean; onClose: () => void; children: ReactNode }) {
+export function EditorDialog({
+  title,
+  isOpen,
+  onClose,
+  children,
+}: {
+  title: string;
+  isOpen: boolean;
+  onClose: () => void;
+  children: ReactNode;
+}) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
   useEffect(() => {
@@ -26,7 +36,12 @@ export function EditorDialog({ title, isOpen, onClose, children }: { title: stri
             <h2 id={titleId} className="text-lg font-semibold">
               {title}
             </h2>
-            <button type="button" onClick={onClose} className="min-h-10 rounded-full px-3 text-sm text-walnut-700 hover:bg-linen-200" aria-label="Close">
+            <button
+              type="button"
+              onClick={onClose}
+              className="min-h-10 rounded-full px-3 text-sm text-walnut-700 hover:bg-linen-200"
+              aria-label="Close"
+            >
               ✕
             </button>
           </div>

@@ -16,14 +16,22 @@ export function FontForm({ font, onDone }: { font?: StudioFont; onDone: () => vo
   const { register, formState, watch, setValue, setError, handleSubmit } = useForm({
     resolver: zodResolver(createFontRequest),
     defaultValues: font
-      ? { slug: font.slug, name: font.name, fontsourcePackage: font.fontsourcePackage, minHeightMm: font.minHeightMm, maxHeightMm: font.maxHeightMm }
+      ? {
+          slug: font.slug,
+          name: font.name,
+          fontsourcePackage: font.fontsourcePackage,
+          minHeightMm: font.minHeightMm,
+          maxHeightMm: font.maxHeightMm,
+        }
       : { slug: '', name: '', fontsourcePackage: '' },
   });
   const errors = formState.errors;
   const chosen = shipped.data?.fonts.find((f) => f.fontsourcePackage === watch('fontsourcePackage'));
   const family = font?.fontFamily ?? chosen?.fontFamily;
 
-  const onSubmit = handleSubmit((values) => saveOrShowErrors(() => save.mutateAsync({ id: font?.id, body: values }), setError, fieldNames, onDone));
+  const onSubmit = handleSubmit((values) =>
+    saveOrShowErrors(() => save.mutateAsync({ id: font?.id, body: values }), setError, fieldNames, onDone),
+  );
 
   return (
     <form onSubmit={onSubmit} noValidate className="grid gap-4">
@@ -33,7 +41,11 @@ export function FontForm({ font, onDone }: { font?: StudioFont; onDone: () => vo
             <input className={inputClassName} readOnly value={font.fontFamily} />
           </Field>
         ) : (
-          <Field label="Font file" error={errors.fontsourcePackage?.message} hint="Only fonts shipped with the shop, so every letter can be measured.">
+          <Field
+            label="Font file"
+            error={errors.fontsourcePackage?.message}
+            hint="Only fonts shipped with the shop, so every letter can be measured."
+          >
             <select className={inputClassName} {...register('fontsourcePackage')}>
               <option value="">{shipped.isPending ? 'Loading the shipped fonts…' : 'Choose a font'}</option>
               {(shipped.data?.fonts ?? []).map((f) => (
@@ -46,27 +58,54 @@ export function FontForm({ font, onDone }: { font?: StudioFont; onDone: () => vo
           </Field>
         )}
         <Field label="Name customers see" error={errors.name?.message}>
-          <input className={inputClassName} {...register('name', { onChange: (event) => !font && setValue('slug', slugFrom(event.target.value)) })} />
+          <input
+            className={inputClassName}
+            {...register('name', { onChange: (event) => !font && setValue('slug', slugFrom(event.target.value)) })}
+          />
         </Field>
         <Field label="Short name" error={errors.slug?.message} hint={font ? 'Fixed once created.' : undefined}>
           <input className={inputClassName} readOnly={Boolean(font)} {...register('slug')} />
         </Field>
         <div className="grid grid-cols-2 gap-3">
           <Field label="Smallest letters (mm)" error={errors.minHeightMm?.message}>
-            <input type="number" step="0.5" inputMode="decimal" className={inputClassName} {...register('minHeightMm', { setValueAs: asNumber })} />
+            <input
+              type="number"
+              step="0.5"
+              inputMode="decimal"
+              className={inputClassName}
+              {...register('minHeightMm', { setValueAs: asNumber })}
+            />
           </Field>
           <Field label="Largest letters (mm)" error={errors.maxHeightMm?.message}>
-            <input type="number" step="0.5" inputMode="decimal" className={inputClassName} {...register('maxHeightMm', { setValueAs: asNumber })} />
+            <input
+              type="number"
+              step="0.5"
+              inputMode="decimal"
+              className={inputClassName}
+              {...register('maxHeightMm', { setValueAs: asNumber })}
+            />
           </Field>
         </div>
       </div>
       {family && (
-        <p className="rounded-lg border border-linen-200 bg-white p-3 text-3xl" style={{ fontFamily: `"${family}", cursive` }}>
+        <p
+          className="rounded-lg border border-linen-200 bg-white p-3 text-3xl"
+          style={{ fontFamily: `"${family}", cursive` }}
+        >
           Amelia Rose
         </p>
       )}
-      {shipped.isError && <p role="alert" className="text-sm text-madder-700">{shipped.error.message}</p>}
-      <FormActions isSaving={save.isPending} error={errors.root?.server?.message} onCancel={onDone} saveLabel={font ? 'Save font' : 'Add font'} />
+      {shipped.isError && (
+        <p role="alert" className="text-sm text-madder-700">
+          {shipped.error.message}
+        </p>
+      )}
+      <FormActions
+        isSaving={save.isPending}
+        error={errors.root?.server?.message}
+        onCancel={onDone}
+        saveLabel={font ? 'Save font' : 'Add font'}
+      />
     </form>
   );
 }

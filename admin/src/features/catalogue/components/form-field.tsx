@@ -7,13 +7,26 @@ export const inputClassName =
   'min-h-10 w-full rounded-lg border border-linen-300 bg-white px-3 py-2 text-sm text-walnut-900 focus:border-madder-500 focus:outline-2 focus:outline-madder-500/30 aria-[invalid=true]:border-madder-600';
 
 /** A compact button for actions on a row of a list. */
-export const smallButtonClassName = 'min-h-9 rounded-full border border-linen-300 bg-white px-3 text-sm hover:bg-linen-100 disabled:opacity-60';
+export const smallButtonClassName =
+  'min-h-9 rounded-full border border-linen-300 bg-white px-3 text-sm hover:bg-linen-100 disabled:opacity-60';
 
 /**
  * A labelled form control with its hint and its error beneath it. The control gets its id, `aria-invalid` and
  * `aria-describedby` from here, so screen readers read the error with the field.
  */
-export function Field({ label, error, hint, children, className = '' }: { label: string; error?: string; hint?: ReactNode; children: ReactElement<Record<string, unknown>>; className?: string }) {
+export function Field({
+  label,
+  error,
+  hint,
+  children,
+  className = '',
+}: {
+  label: string;
+  error?: string;
+  hint?: ReactNode;
+  children: ReactElement<Record<string, unknown>>;
+  className?: string;
+}) {
   const id = useId();
   const hintId = `${id}-hint`;
   const errorId = `${id}-error`;
@@ -39,15 +52,21 @@ export function Field({ label, error, hint, children, className = '' }: { label:
 }
 
 /** A number input's value for the form: an empty box is undefined (so the schema asks for it), else the number. */
-export const asNumber = (value: unknown) => (value === '' || value === null || value === undefined ? undefined : Number(value));
+export const asNumber = (value: unknown) =>
+  value === '' || value === null || value === undefined ? undefined : Number(value);
 /** As asNumber, for lengths that may be left out on purpose: an empty box is null. */
-export const asNumberOrNull = (value: unknown) => (value === '' || value === null || value === undefined ? null : Number(value));
+export const asNumberOrNull = (value: unknown) =>
+  value === '' || value === null || value === undefined ? null : Number(value);
 
 /**
  * Puts the server's answer where it belongs: each field message beside its field (the server's dot paths are the
  * form's own field names), and anything else as the form's general error.
  */
-export function showServerErrors<T extends FieldValues>(error: unknown, setError: UseFormSetError<T>, fieldNames: readonly string[]): void {
+export function showServerErrors<T extends FieldValues>(
+  error: unknown,
+  setError: UseFormSetError<T>,
+  fieldNames: readonly string[],
+): void {
   const fields = error instanceof ApiError ? (error.fields ?? {}) : {};
   let isShownBesideAField = false;
   for (const [path, message] of Object.entries(fields)) {
@@ -82,7 +101,12 @@ export function slugFrom(name: string): string {
 }
 
 /** Saves, then closes the form; a refusal is shown on the form instead (see showServerErrors). */
-export async function saveOrShowErrors<T extends FieldValues>(save: () => Promise<unknown>, setError: UseFormSetError<T>, fieldNames: readonly string[], onDone: () => void): Promise<void> {
+export async function saveOrShowErrors<T extends FieldValues>(
+  save: () => Promise<unknown>,
+  setError: UseFormSetError<T>,
+  fieldNames: readonly string[],
+  onDone: () => void,
+): Promise<void> {
   try {
     await save();
     onDone();

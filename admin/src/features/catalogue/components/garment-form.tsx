@@ -1,14 +1,29 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { createGarmentRequest, fabricConstructions, garmentKinds, type StudioGarment } from '@server/contracts/admin-catalogue-garments.ts';
+import {
+  createGarmentRequest,
+  fabricConstructions,
+  garmentKinds,
+  type StudioGarment,
+} from '@server/contracts/admin-catalogue-garments.ts';
 import { garmentCautions } from '@server/engine/index.ts';
 import { useSaveCatalogueRow } from '../api/save-catalogue-row.ts';
 import { asNumber, Field, inputClassName, saveOrShowErrors, slugFrom } from './form-field.tsx';
 import { FormActions } from './form-actions.tsx';
 import { SvgPicture } from './svg-picture.tsx';
 
-const fieldNames = ['slug', 'name', 'kind', 'description', 'fabricType', 'isNapped', 'minAgeMonths', 'maxAgeMonths', 'mockupSvg'] as const;
+const fieldNames = [
+  'slug',
+  'name',
+  'kind',
+  'description',
+  'fabricType',
+  'isNapped',
+  'minAgeMonths',
+  'maxAgeMonths',
+  'mockupSvg',
+] as const;
 
 export const garmentKindLabels: Record<(typeof garmentKinds)[number], string> = {
   dress: 'Dress',
@@ -17,7 +32,11 @@ export const garmentKindLabels: Record<(typeof garmentKinds)[number], string> = 
   bib: 'Bib',
   bonnet: 'Bonnet',
 };
-const fabricLabels: Record<(typeof fabricConstructions)[number], string> = { woven: 'Woven (stable)', knit: 'Knit (stretches)', sheer: 'Sheer (shows the backing)' };
+const fabricLabels: Record<(typeof fabricConstructions)[number], string> = {
+  woven: 'Woven (stable)',
+  knit: 'Knit (stretches)',
+  sheer: 'Sheer (shows the backing)',
+};
 
 /** Adds a garment or edits one: what it is, who wears it, how its fabric behaves, and its flat drawing. */
 export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDone: () => void }) {
@@ -37,7 +56,15 @@ export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDo
           maxAgeMonths: garment.maxAgeMonths,
           mockupSvg: garment.mockupSvg,
         }
-      : { slug: '', name: '', kind: 'dress' as const, description: '', fabricType: 'woven' as const, isNapped: false, mockupSvg: '' },
+      : {
+          slug: '',
+          name: '',
+          kind: 'dress' as const,
+          description: '',
+          fabricType: 'woven' as const,
+          isNapped: false,
+          mockupSvg: '',
+        },
   });
   const errors = formState.errors;
   const mockupSvg = watch('mockupSvg');
@@ -57,15 +84,24 @@ export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDo
     setValue('mockupSvg', await file.text(), { shouldValidate: true });
   }
 
-  const onSubmit = handleSubmit((values) => saveOrShowErrors(() => save.mutateAsync({ id: garment?.id, body: values }), setError, fieldNames, onDone));
+  const onSubmit = handleSubmit((values) =>
+    saveOrShowErrors(() => save.mutateAsync({ id: garment?.id, body: values }), setError, fieldNames, onDone),
+  );
 
   return (
     <form onSubmit={onSubmit} noValidate className="grid gap-4">
       <div className="grid gap-4 sm:grid-cols-2">
         <Field label="Name" error={errors.name?.message}>
-          <input className={inputClassName} {...register('name', { onChange: (event) => !garment && setValue('slug', slugFrom(event.target.value)) })} />
+          <input
+            className={inputClassName}
+            {...register('name', { onChange: (event) => !garment && setValue('slug', slugFrom(event.target.value)) })}
+          />
         </Field>
-        <Field label="Web address name" error={errors.slug?.message} hint={garment ? 'Fixed once created: it is the garment’s page address.' : undefined}>
+        <Field
+          label="Web address name"
+          error={errors.slug?.message}
+          hint={garment ? 'Fixed once created: it is the garment’s page address.' : undefined}
+        >
           <input className={inputClassName} readOnly={Boolean(garment)} {...register('slug')} />
         </Field>
         <Field label="Kind" error={errors.kind?.message}>
@@ -77,7 +113,11 @@ export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDo
             ))}
           </select>
         </Field>
-        <Field label="Fabric" error={errors.fabricType?.message} hint="Guides the stabilizer advice on the production sheet.">
+        <Field
+          label="Fabric"
+          error={errors.fabricType?.message}
+          hint="Guides the stabilizer advice on the production sheet."
+        >
           <select className={inputClassName} {...register('fabricType')}>
             {fabricConstructions.map((fabric) => (
               <option key={fabric} value={fabric}>
@@ -86,11 +126,25 @@ export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDo
             ))}
           </select>
         </Field>
-        <Field label="Youngest wearer (months)" error={errors.minAgeMonths?.message} hint="Under 36 months brings the small-parts caution.">
-          <input type="number" inputMode="numeric" className={inputClassName} {...register('minAgeMonths', { setValueAs: asNumber })} />
+        <Field
+          label="Youngest wearer (months)"
+          error={errors.minAgeMonths?.message}
+          hint="Under 36 months brings the small-parts caution."
+        >
+          <input
+            type="number"
+            inputMode="numeric"
+            className={inputClassName}
+            {...register('minAgeMonths', { setValueAs: asNumber })}
+          />
         </Field>
         <Field label="Oldest wearer (months)" error={errors.maxAgeMonths?.message}>
-          <input type="number" inputMode="numeric" className={inputClassName} {...register('maxAgeMonths', { setValueAs: asNumber })} />
+          <input
+            type="number"
+            inputMode="numeric"
+            className={inputClassName}
+            {...register('maxAgeMonths', { setValueAs: asNumber })}
+          />
         </Field>
         <Field label="Description" error={errors.description?.message} className="sm:col-span-2">
           <textarea rows={3} className={inputClassName} {...register('description')} />
@@ -101,7 +155,10 @@ export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDo
         </label>
       </div>
       {cautions.ok && (
-        <aside aria-label="Safety notes for this garment" className="grid gap-1 rounded-lg border border-saffron-500/50 bg-saffron-100 p-3 text-sm">
+        <aside
+          aria-label="Safety notes for this garment"
+          className="grid gap-1 rounded-lg border border-saffron-500/50 bg-saffron-100 p-3 text-sm"
+        >
           <p className="font-medium">Safety notes customers will see</p>
           <ul className="grid gap-1">
             {cautions.messages.map((message) => (
@@ -110,16 +167,39 @@ export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDo
               </li>
             ))}
           </ul>
-          <p className="text-xs text-walnut-700">Do not offer a garment as sleepwear unless the garment and the embroidery meet the sleepwear flammability rules where you sell.</p>
+          <p className="text-xs text-walnut-700">
+            Do not offer a garment as sleepwear unless the garment and the embroidery meet the sleepwear flammability
+            rules where you sell.
+          </p>
         </aside>
       )}
       <div className="grid gap-3 sm:grid-cols-[1fr_10rem] sm:items-start">
-        <Field label="Flat drawing (SVG, viewBox in mm)" error={fileError ?? errors.mockupSvg?.message} hint="Drawn at the reference size; sizes scale it.">
-          <input type="file" accept=".svg,image/svg+xml" className={inputClassName} onChange={(event) => void readDrawing(event.target.files?.[0])} />
+        <Field
+          label="Flat drawing (SVG, viewBox in mm)"
+          error={fileError ?? errors.mockupSvg?.message}
+          hint="Drawn at the reference size; sizes scale it."
+        >
+          <input
+            type="file"
+            accept=".svg,image/svg+xml"
+            className={inputClassName}
+            onChange={(event) => void readDrawing(event.target.files?.[0])}
+          />
         </Field>
-        {mockupSvg ? <SvgPicture svg={mockupSvg} label="The garment drawing" className="h-40 w-40 rounded-lg border border-linen-200 bg-white p-2" /> : null}
+        {mockupSvg ? (
+          <SvgPicture
+            svg={mockupSvg}
+            label="The garment drawing"
+            className="h-40 w-40 rounded-lg border border-linen-200 bg-white p-2"
+          />
+        ) : null}
       </div>
-      <FormActions isSaving={save.isPending} error={errors.root?.server?.message} onCancel={onDone} saveLabel={garment ? 'Save garment' : 'Add garment'} />
+      <FormActions
+        isSaving={save.isPending}
+        error={errors.root?.server?.message}
+        onCancel={onDone}
+        saveLabel={garment ? 'Save garment' : 'Add garment'}
+      />
     </form>
   );
 }

@@ -3,7 +3,13 @@ import type { StudioHoop } from '@server/contracts/admin-catalogue.ts';
 import { formatLength } from '@ui/format.ts';
 
 /** Each hoop's sewing field drawn to one common scale, so their sizes compare at a glance. */
-export function HoopFields({ hoops, renderActions }: { hoops: StudioHoop[]; renderActions?: (hoop: StudioHoop) => ReactNode }) {
+export function HoopFields({
+  hoops,
+  renderActions,
+}: {
+  hoops: StudioHoop[];
+  renderActions?: (hoop: StudioHoop) => ReactNode;
+}) {
   const largestMm = Math.max(1, ...hoops.flatMap((h) => [h.fieldWidthMm, h.fieldHeightMm]));
   const pxPerMm = 140 / largestMm;
   return (
@@ -15,7 +21,10 @@ export function HoopFields({ hoops, renderActions }: { hoops: StudioHoop[]; rend
             style={{ width: hoop.fieldWidthMm * pxPerMm, height: hoop.fieldHeightMm * pxPerMm }}
             aria-hidden="true"
           />
-          <p className="mt-2 font-medium">{hoop.name}{hoop.isActive ? '' : ' (retired)'}</p>
+          <p className="mt-2 font-medium">
+            {hoop.name}
+            {hoop.isActive ? '' : ' (retired)'}
+          </p>
           <p className="text-xs text-walnut-500">
             {formatLength(hoop.fieldWidthMm)} × {formatLength(hoop.fieldHeightMm)}
           </p>

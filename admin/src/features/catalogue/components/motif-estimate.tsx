@@ -7,10 +7,12 @@ export function MotifEstimateSummary({ estimate }: { estimate: MotifEstimate }) 
   return (
     <div className="grid gap-2 text-sm" data-testid="motif-estimate">
       <p>
-        <span className="text-2xl font-semibold tabular-nums">{estimate.stitchCount.toLocaleString('en-US')}</span> stitches estimated
+        <span className="text-2xl font-semibold tabular-nums">{estimate.stitchCount.toLocaleString('en-US')}</span>{' '}
+        stitches estimated
         <span className="text-walnut-500">
           {' '}
-          ({top.toLocaleString('en-US')} on top, {estimate.underlay.toLocaleString('en-US')} underlay · {estimate.colourChanges} colour change
+          ({top.toLocaleString('en-US')} on top, {estimate.underlay.toLocaleString('en-US')} underlay ·{' '}
+          {estimate.colourChanges} colour change
           {estimate.colourChanges === 1 ? '' : 's'})
         </span>
       </p>

@@ -5,7 +5,15 @@ import { StitchMixBar, StitchMixLegend } from './stitch-mix-bar.tsx';
 import { svgDataUrl } from '@ui/svg-data-url.ts';
 
 /** The studio's motifs with the figures the quotes and the production sheet are built from. */
-export function MotifTable({ motifs, threads, renderActions }: { motifs: StudioMotif[]; threads: StudioThread[]; renderActions?: (motif: StudioMotif) => ReactNode }) {
+export function MotifTable({
+  motifs,
+  threads,
+  renderActions,
+}: {
+  motifs: StudioMotif[];
+  threads: StudioThread[];
+  renderActions?: (motif: StudioMotif) => ReactNode;
+}) {
   const threadByCode = new Map(threads.map((t) => [t.code, t]));
   return (
     <div>
@@ -21,7 +29,11 @@ export function MotifTable({ motifs, threads, renderActions }: { motifs: StudioM
               <th className="py-1.5 text-right font-medium">Stitches</th>
               <th className="py-1.5 pl-4 font-medium">Stitch mix</th>
               <th className="py-1.5 font-medium">Threads in order</th>
-              {renderActions && <th className="py-1.5 font-medium"><span className="sr-only">Actions</span></th>}
+              {renderActions && (
+                <th className="py-1.5 font-medium">
+                  <span className="sr-only">Actions</span>
+                </th>
+              )}
             </tr>
           </thead>
           <tbody>
@@ -29,20 +41,33 @@ export function MotifTable({ motifs, threads, renderActions }: { motifs: StudioM
               <tr key={motif.id} className={`border-t border-linen-200 ${motif.isActive ? '' : 'opacity-55'}`}>
                 <td className="py-2">
                   <span className="flex items-center gap-3">
-                    <img src={svgDataUrl(motif.svg)} alt="" className="h-10 w-16 rounded bg-linen-100 object-contain p-0.5" />
-                    <span className="font-medium">{motif.name}{motif.isActive ? '' : ' (hidden)'}</span>
+                    <img
+                      src={svgDataUrl(motif.svg)}
+                      alt=""
+                      className="h-10 w-16 rounded bg-linen-100 object-contain p-0.5"
+                    />
+                    <span className="font-medium">
+                      {motif.name}
+                      {motif.isActive ? '' : ' (hidden)'}
+                    </span>
                   </span>
                 </td>
                 <td className="py-2">{motif.kind === 'border' ? 'Hem border' : 'Single'}</td>
                 <td className="py-2 whitespace-nowrap">
                   {formatLength(motif.widthMm)} × {Math.round(motif.heightMm)} mm
                 </td>
-                <td className="py-2">{motif.minScalePct}–{motif.maxScalePct} %</td>
+                <td className="py-2">
+                  {motif.minScalePct}–{motif.maxScalePct} %
+                </td>
                 <td className="py-2 text-right tabular-nums">
                   {motif.stitchCount.toLocaleString('en-US')}
-                  <span className="block text-xs text-walnut-500">{motif.stitchCountSource === 'measured' ? 'measured' : 'estimated'}</span>
+                  <span className="block text-xs text-walnut-500">
+                    {motif.stitchCountSource === 'measured' ? 'measured' : 'estimated'}
+                  </span>
                 </td>
-                <td className="py-2 pl-4"><StitchMixBar mix={motif.mix} /></td>
+                <td className="py-2 pl-4">
+                  <StitchMixBar mix={motif.mix} />
+                </td>
                 <td className="py-2">
                   <span className="flex gap-1">
                     {motif.threadCodes.map((code, index) => {

@@ -11,7 +11,12 @@ export function StitchMixBar({ mix }: { mix: StudioMotif['mix'] }) {
   const total = mix.run + mix.satin + mix.fill || 1;
   const summary = parts.map((p) => `${mix[p.key].toLocaleString('en-US')} ${p.label}`).join(', ');
   return (
-    <div role="img" aria-label={summary} title={summary} className="flex h-2.5 w-32 overflow-hidden rounded-full bg-linen-200">
+    <div
+      role="img"
+      aria-label={summary}
+      title={summary}
+      className="flex h-2.5 w-32 overflow-hidden rounded-full bg-linen-200"
+    >
       {parts.map((p) => (
         <span key={p.key} className={p.className} style={{ width: `${(mix[p.key] / total) * 100}%` }} />
       ))}

@@ -13,7 +13,10 @@ const fieldNames = ['code', 'name', 'hex', 'lab'] as const;
 /** A stored CIELAB that is not the one the hex converts to was entered from a measurement. */
 function isMeasured(thread: StudioThread): boolean {
   const fromHex = hexToLab(thread.hex);
-  return !fromHex || Math.abs(fromHex.l - thread.lab.l) + Math.abs(fromHex.a - thread.lab.a) + Math.abs(fromHex.b - thread.lab.b) > 0.01;
+  return (
+    !fromHex ||
+    Math.abs(fromHex.l - thread.lab.l) + Math.abs(fromHex.a - thread.lab.a) + Math.abs(fromHex.b - thread.lab.b) > 0.01
+  );
 }
 
 /**
@@ -33,12 +36,18 @@ export function ThreadForm({ thread, onDone }: { thread?: StudioThread; onDone: 
   const lab = isHexColour(hex) ? hexToLab(hex) : undefined;
   const measuredLab = watch('lab');
 
-  const onSubmit = handleSubmit((values) => saveOrShowErrors(() => save.mutateAsync({ id: thread?.id, body: values }), setError, fieldNames, onDone));
+  const onSubmit = handleSubmit((values) =>
+    saveOrShowErrors(() => save.mutateAsync({ id: thread?.id, body: values }), setError, fieldNames, onDone),
+  );
 
   return (
     <form onSubmit={onSubmit} noValidate className="grid gap-4">
       <div className="grid gap-4 sm:grid-cols-2">
-        <Field label="Code on the spool" error={errors.code?.message} hint={thread ? 'Fixed once created: designs name threads by it.' : 'For example WB-140.'}>
+        <Field
+          label="Code on the spool"
+          error={errors.code?.message}
+          hint={thread ? 'Fixed once created: designs name threads by it.' : 'For example WB-140.'}
+        >
           <input className={inputClassName} readOnly={Boolean(thread)} {...register('code')} />
         </Field>
         <Field label="Colour name" error={errors.name?.message}>
@@ -47,7 +56,11 @@ export function ThreadForm({ thread, onDone }: { thread?: StudioThread; onDone: 
         <Field
           label="Colour (hex)"
           error={errors.hex?.message}
-          hint={lab && !measuredLab ? `CIELAB ${lab.l.toFixed(1)}, ${lab.a.toFixed(1)}, ${lab.b.toFixed(1)}, worked out from the hex (D65)` : undefined}
+          hint={
+            lab && !measuredLab
+              ? `CIELAB ${lab.l.toFixed(1)}, ${lab.a.toFixed(1)}, ${lab.b.toFixed(1)}, worked out from the hex (D65)`
+              : undefined
+          }
         >
           <input className={inputClassName} {...register('hex')} />
         </Field>
@@ -66,15 +79,30 @@ export function ThreadForm({ thread, onDone }: { thread?: StudioThread; onDone: 
             <div className="grid grid-cols-3 gap-3">
               {(['l', 'a', 'b'] as const).map((axis) => (
                 <Field key={axis} label={`${axis.toUpperCase()}*`} error={errors.lab?.[axis]?.message}>
-                  <input type="number" step="0.01" inputMode="decimal" className={inputClassName} {...register(`lab.${axis}`, { setValueAs: asNumber })} />
+                  <input
+                    type="number"
+                    step="0.01"
+                    inputMode="decimal"
+                    className={inputClassName}
+                    {...register(`lab.${axis}`, { setValueAs: asNumber })}
+                  />
                 </Field>
               ))}
             </div>
           )}
         </fieldset>
-        <ColourPicker hex={hex} onPick={(picked) => setValue('hex', picked, { shouldValidate: true })} swatchClassName="h-12 w-12 rounded-full shadow-inner" />
+        <ColourPicker
+          hex={hex}
+          onPick={(picked) => setValue('hex', picked, { shouldValidate: true })}
+          swatchClassName="h-12 w-12 rounded-full shadow-inner"
+        />
       </div>
-      <FormActions isSaving={save.isPending} error={errors.root?.server?.message} onCancel={onDone} saveLabel={thread ? 'Save thread' : 'Add thread'} />
+      <FormActions
+        isSaving={save.isPending}
+        error={errors.root?.server?.message}
+        onCancel={onDone}
+        saveLabel={thread ? 'Save thread' : 'Add thread'}
+      />
     </form>
   );
 }

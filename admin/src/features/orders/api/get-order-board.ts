@@ -26,6 +26,10 @@ export const getOrderBoard = (query: OrderBoardQuery) => {
 export const orderBoardKey = ['admin', 'orders', 'board'] as const;
 
 export const orderBoardQueryOptions = (query: OrderBoardQuery) =>
-  queryOptions({ queryKey: [...orderBoardKey, boardSearch(query)], queryFn: () => getOrderBoard(query), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: [...orderBoardKey, boardSearch(query)],
+    queryFn: () => getOrderBoard(query),
+    placeholderData: keepPreviousData,
+  });
 
 export const useOrderBoard = (query: OrderBoardQuery) => useQuery(orderBoardQueryOptions(query));

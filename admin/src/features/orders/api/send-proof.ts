@@ -13,7 +13,11 @@ const proofsPath = (number: string) => `/api/admin/orders/${encodeURIComponent(n
  * A photo goes up as multipart through XMLHttpRequest, the one browser API that reports upload progress; the
  * answer is read exactly as the shared API client reads one.
  */
-function uploadPhoto(number: string, input: Extract<SendProofInput, { source: 'photo' }>, onProgress: (fraction: number) => void): Promise<SentProofResponse> {
+function uploadPhoto(
+  number: string,
+  input: Extract<SendProofInput, { source: 'photo' }>,
+  onProgress: (fraction: number) => void,
+): Promise<SentProofResponse> {
   const form = new FormData();
   form.set('source', 'photo');
   form.set('message', input.message);
@@ -23,7 +27,8 @@ function uploadPhoto(number: string, input: Extract<SendProofInput, { source: 'p
     request.open('POST', proofsPath(number));
     request.setRequestHeader('Accept', 'application/json');
     request.upload.onprogress = (event) => event.lengthComputable && onProgress(event.loaded / event.total);
-    request.onerror = () => reject(new ApiError('network', 'We could not reach the shop. Check your connection and try again.', 0));
+    request.onerror = () =>
+      reject(new ApiError('network', 'We could not reach the shop. Check your connection and try again.', 0));
     request.onload = () => {
       const body = (() => {
         try {
@@ -47,12 +52,19 @@ function uploadPhoto(number: string, input: Extract<SendProofInput, { source: 'p
 export const sendProof = (number: string, input: SendProofInput, onProgress: (fraction: number) => void) =>
   input.source === 'photo'
     ? uploadPhoto(number, input, onProgress)
-    : apiRequest(`/admin/orders/${encodeURIComponent(number)}/proofs`, sentProofResponse, { method: 'POST', body: { source: 'render', message: input.message } });
+    : apiRequest(`/admin/orders/${encodeURIComponent(number)}/proofs`, sentProofResponse, {
+        method: 'POST',
+        body: { source: 'render', message: input.message },
+      });
 
 export function useSendProof(number: string, onProgress: (fraction: number) => void) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: SendProofInput) => sendProof(number, input, onProgress),
-    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: orderQuery(number).queryKey }), queryClient.invalidateQueries({ queryKey: orderBoardKey })]),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: orderQuery(number).queryKey }),
+        queryClient.invalidateQueries({ queryKey: orderBoardKey }),
+      ]),
   });
 }

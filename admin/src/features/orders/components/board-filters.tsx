@@ -5,10 +5,17 @@ import { statusLabels } from '../../../lib/order-status-labels.ts';
 
 const SEARCH_DELAY_MS = 300;
 
-const field = 'min-h-11 rounded-lg border border-linen-300 bg-white px-3 text-sm focus:border-madder-500 focus:outline-none focus:ring-2 focus:ring-madder-500/30';
+const field =
+  'min-h-11 rounded-lg border border-linen-300 bg-white px-3 text-sm focus:border-madder-500 focus:outline-none focus:ring-2 focus:ring-madder-500/30';
 
 /** Status chips, the due-date range and the search box; each change goes straight into the URL. */
-export function BoardFilters({ query, onChange }: { query: OrderBoardQuery; onChange: (changes: Partial<OrderBoardQuery>) => void }) {
+export function BoardFilters({
+  query,
+  onChange,
+}: {
+  query: OrderBoardQuery;
+  onChange: (changes: Partial<OrderBoardQuery>) => void;
+}) {
   const [search, setSearch] = useState(query.q ?? '');
   useEffect(() => setSearch(query.q ?? ''), [query.q]);
   useEffect(() => {
@@ -29,18 +36,42 @@ export function BoardFilters({ query, onChange }: { query: OrderBoardQuery; onCh
       <div className="flex flex-wrap items-end gap-3">
         <label className="grid min-w-0 flex-1 basis-64 gap-1 text-sm">
           <span className="font-medium">Search</span>
-          <input type="search" value={search} onChange={(event) => setSearch(event.target.value)} placeholder="Order number, customer name or e-mail" className={field} />
+          <input
+            type="search"
+            value={search}
+            onChange={(event) => setSearch(event.target.value)}
+            placeholder="Order number, customer name or e-mail"
+            className={field}
+          />
         </label>
         <label className="grid gap-1 text-sm">
           <span className="font-medium">Due from</span>
-          <input type="date" value={query.dueFrom ?? ''} max={query.dueTo} onChange={(event) => onChange({ dueFrom: event.target.value || undefined })} className={field} />
+          <input
+            type="date"
+            value={query.dueFrom ?? ''}
+            max={query.dueTo}
+            onChange={(event) => onChange({ dueFrom: event.target.value || undefined })}
+            className={field}
+          />
         </label>
         <label className="grid gap-1 text-sm">
           <span className="font-medium">Due by</span>
-          <input type="date" value={query.dueTo ?? ''} min={query.dueFrom} onChange={(event) => onChange({ dueTo: event.target.value || undefined })} className={field} />
+          <input
+            type="date"
+            value={query.dueTo ?? ''}
+            min={query.dueFrom}
+            onChange={(event) => onChange({ dueTo: event.target.value || undefined })}
+            className={field}
+          />
         </label>
         {hasFilters && (
-          <button type="button" onClick={() => onChange({ status: undefined, dueFrom: undefined, dueTo: undefined, q: undefined, customer: undefined })} className="min-h-11 rounded-full px-4 text-sm text-madder-700 underline-offset-2 hover:underline">
+          <button
+            type="button"
+            onClick={() =>
+              onChange({ status: undefined, dueFrom: undefined, dueTo: undefined, q: undefined, customer: undefined })
+            }
+            className="min-h-11 rounded-full px-4 text-sm text-madder-700 underline-offset-2 hover:underline"
+          >
             Clear filters
           </button>
         )}

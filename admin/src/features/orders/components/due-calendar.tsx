@@ -12,13 +12,26 @@ const weekdays = ['Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat', 'Sun'];
 const monthName = new Intl.DateTimeFormat('en-US', { month: 'short', timeZone: 'UTC' });
 
 function OrderChip({ order }: { order: BoardOrder }) {
-  const tone = order.isOverdue ? 'border-madder-500 bg-madder-50' : order.isRush ? 'border-saffron-500 bg-saffron-100' : 'border-linen-300 bg-white';
+  const tone = order.isOverdue
+    ? 'border-madder-500 bg-madder-50'
+    : order.isRush
+      ? 'border-saffron-500 bg-saffron-100'
+      : 'border-linen-300 bg-white';
   return (
     <li>
-      <Link to={paths.order.href(order.number)} className={`block overflow-hidden rounded-md border px-1.5 py-1 text-xs leading-tight hover:border-walnut-700 ${tone}`}>
+      <Link
+        to={paths.order.href(order.number)}
+        className={`block overflow-hidden rounded-md border px-1.5 py-1 text-xs leading-tight hover:border-walnut-700 ${tone}`}
+      >
         <span className="font-semibold">{order.number}</span>
-        <span className="block truncate text-walnut-700">{order.customer.name.split(' ')[0]} · {statusLabels[order.status]}</span>
-        {(order.isRush || order.isOverdue) && <span className="block"><DueFlags order={order} /></span>}
+        <span className="block truncate text-walnut-700">
+          {order.customer.name.split(' ')[0]} · {statusLabels[order.status]}
+        </span>
+        {(order.isRush || order.isOverdue) && (
+          <span className="block">
+            <DueFlags order={order} />
+          </span>
+        )}
       </Link>
     </li>
   );
@@ -35,22 +48,43 @@ export function DueCalendar({ nowMs }: { nowMs: number }) {
   if (due.isPending) return <Loading label="Laying out the weeks…" />;
   if (due.isError) return <ErrorNotice message={due.error.message} onRetry={() => void due.refetch()} />;
   const byDay = new Map<string, BoardOrder[]>();
-  for (const order of due.data.orders) if (order.neededBy && order.neededBy >= from) byDay.set(order.neededBy, [...(byDay.get(order.neededBy) ?? []), order]);
+  for (const order of due.data.orders)
+    if (order.neededBy && order.neededBy >= from)
+      byDay.set(order.neededBy, [...(byDay.get(order.neededBy) ?? []), order]);
   const late = due.data.orders.filter((order) => order.neededBy && order.neededBy < from);
   const busyDays = days.filter((day) => byDay.has(day));
 
   return (
     <div className="grid gap-4">
       {late.length > 0 && (
-        <section aria-label="Overdue before these weeks" className="rounded-lg border border-madder-500/40 bg-madder-50 p-3">
+        <section
+          aria-label="Overdue before these weeks"
+          className="rounded-lg border border-madder-500/40 bg-madder-50 p-3"
+        >
           <h3 className="mb-2 text-sm font-semibold text-madder-700">Already late ({late.length})</h3>
-          <ul className="flex flex-wrap gap-2">{late.map((order) => <OrderChip key={order.number} order={order} />)}</ul>
+          <ul className="flex flex-wrap gap-2">
+            {late.map((order) => (
+              <OrderChip key={order.number} order={order} />
+            ))}
+          </ul>
         </section>
       )}
-      {due.data.orders.length === 0 && <EmptyState title="Nothing is due in the next six weeks.">Orders with a needed-by date appear here on their day.</EmptyState>}
-      <div className="hidden md:block" role="table" aria-label={`Orders due from ${formatDueDay(from)} to ${formatDueDay(to)}`}>
+      {due.data.orders.length === 0 && (
+        <EmptyState title="Nothing is due in the next six weeks.">
+          Orders with a needed-by date appear here on their day.
+        </EmptyState>
+      )}
+      <div
+        className="hidden md:block"
+        role="table"
+        aria-label={`Orders due from ${formatDueDay(from)} to ${formatDueDay(to)}`}
+      >
         <div role="row" className="grid grid-cols-7 gap-1 text-xs font-medium text-walnut-500">
-          {weekdays.map((name) => <span role="columnheader" key={name} className="px-1">{name}</span>)}
+          {weekdays.map((name) => (
+            <span role="columnheader" key={name} className="px-1">
+              {name}
+            </span>
+          ))}
         </div>
         {Array.from({ length: WEEKS }, (_, week) => (
           <div role="row" key={week} className="mt-1 grid grid-cols-7 gap-1">
@@ -58,9 +92,22 @@ export function DueCalendar({ nowMs }: { nowMs: number }) {
               const isToday = day === due.data.today;
               const isPast = day < due.data.today;
               return (
-                <div role="cell" key={day} aria-label={formatDueDay(day)} className={`min-h-24 min-w-0 rounded-md border p-1 ${isToday ? 'border-madder-500 ring-1 ring-madder-500' : 'border-linen-200'} ${isPast ? 'bg-linen-100' : 'bg-white'}`}>
-                  <p className={`text-xs ${isToday ? 'font-semibold text-madder-700' : 'text-walnut-500'}`}>{isToday ? 'Today' : `${Number(day.slice(8))}${day.endsWith('-01') ? ` ${monthName.format(new Date(`${day}T12:00:00Z`))}` : ''}`}</p>
-                  <ul className="mt-1 grid gap-1">{(byDay.get(day) ?? []).map((order) => <OrderChip key={order.number} order={order} />)}</ul>
+                <div
+                  role="cell"
+                  key={day}
+                  aria-label={formatDueDay(day)}
+                  className={`min-h-24 min-w-0 rounded-md border p-1 ${isToday ? 'border-madder-500 ring-1 ring-madder-500' : 'border-linen-200'} ${isPast ? 'bg-linen-100' : 'bg-white'}`}
+                >
+                  <p className={`text-xs ${isToday ? 'font-semibold text-madder-700' : 'text-walnut-500'}`}>
+                    {isToday
+                      ? 'Today'
+                      : `${Number(day.slice(8))}${day.endsWith('-01') ? ` ${monthName.format(new Date(`${day}T12:00:00Z`))}` : ''}`}
+                  </p>
+                  <ul className="mt-1 grid gap-1">
+                    {(byDay.get(day) ?? []).map((order) => (
+                      <OrderChip key={order.number} order={order} />
+                    ))}
+                  </ul>
                 </div>
               );
             })}
@@ -71,7 +118,11 @@ export function DueCalendar({ nowMs }: { nowMs: number }) {
         {busyDays.map((day) => (
           <li key={day}>
             <h3 className="text-sm font-semibold">{day === due.data.today ? 'Today' : formatDueDay(day)}</h3>
-            <ul className="mt-1 grid gap-1">{byDay.get(day)!.map((order) => <OrderChip key={order.number} order={order} />)}</ul>
+            <ul className="mt-1 grid gap-1">
+              {byDay.get(day)!.map((order) => (
+                <OrderChip key={order.number} order={order} />
+              ))}
+            </ul>
           </li>
         ))}
       </ol>

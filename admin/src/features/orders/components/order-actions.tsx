@@ -11,14 +11,32 @@ type Step = 'charge' | 'cancel' | 'refund' | 'ship' | null;
 const input = 'min-h-11 rounded-lg border border-linen-300 bg-white px-3 text-sm';
 
 /** A money move waits for a second, explicit click; the question says what will happen to whose money. */
-function Confirm({ question, children, onConfirm, onBack, isBusy, confirmLabel }: { question: string; children?: ReactNode; onConfirm: () => void; onBack: () => void; isBusy: boolean; confirmLabel: string }) {
+function Confirm({
+  question,
+  children,
+  onConfirm,
+  onBack,
+  isBusy,
+  confirmLabel,
+}: {
+  question: string;
+  children?: ReactNode;
+  onConfirm: () => void;
+  onBack: () => void;
+  isBusy: boolean;
+  confirmLabel: string;
+}) {
   return (
     <div className="grid gap-3 rounded-lg border border-madder-500/40 bg-madder-50 p-3 text-sm">
       <p className="font-medium">{question}</p>
       {children}
       <div className="flex flex-wrap gap-2">
-        <Button onClick={onConfirm} disabled={isBusy}>{isBusy ? 'Working…' : confirmLabel}</Button>
-        <Button tone="quiet" onClick={onBack} disabled={isBusy}>Not now</Button>
+        <Button onClick={onConfirm} disabled={isBusy}>
+          {isBusy ? 'Working…' : confirmLabel}
+        </Button>
+        <Button tone="quiet" onClick={onBack} disabled={isBusy}>
+          Not now
+        </Button>
       </div>
     </div>
   );
@@ -47,53 +65,122 @@ export function OrderActions({ detail }: { detail: OrderDetailResponse }) {
     setStep(next);
   };
   const refundCents = isFullRefund ? refundableCents : parseCents(refundText);
-  const isRefundValid = refundCents !== undefined && refundCents > 0 && refundCents <= refundableCents && reason.trim() !== '';
+  const isRefundValid =
+    refundCents !== undefined && refundCents > 0 && refundCents <= refundableCents && reason.trim() !== '';
 
   if (studioActions.filter((name) => name !== 'send_proof').length === 0) {
-    return <p className="text-sm text-walnut-500">Nothing to do here now{order.status === 'proof_sent' ? ': the customer has the proof.' : '.'}</p>;
+    return (
+      <p className="text-sm text-walnut-500">
+        Nothing to do here now{order.status === 'proof_sent' ? ': the customer has the proof.' : '.'}
+      </p>
+    );
   }
   return (
     <div className="grid gap-3">
       <div className="flex flex-wrap gap-2">
-        {can('start_production') && order.paymentStatus === 'authorized' && <Button onClick={() => open('charge')}>Approve & charge {money(live?.authorizedCents ?? order.totalCents)}</Button>}
-        {can('mark_stitched') && <Button onClick={() => run({ action: 'stitched' })} disabled={action.isPending}>Mark stitched</Button>}
+        {can('start_production') && order.paymentStatus === 'authorized' && (
+          <Button onClick={() => open('charge')}>
+            Approve & charge {money(live?.authorizedCents ?? order.totalCents)}
+          </Button>
+        )}
+        {can('mark_stitched') && (
+          <Button onClick={() => run({ action: 'stitched' })} disabled={action.isPending}>
+            Mark stitched
+          </Button>
+        )}
         {can('ship') && <Button onClick={() => open('ship')}>Mark shipped</Button>}
-        {can('refund') && refundableCents > 0 && <Button tone="quiet" onClick={() => open('refund')}>Refund…</Button>}
-        {can('cancel') && <Button tone="quiet" onClick={() => open('cancel')}>Cancel order…</Button>}
+        {can('refund') && refundableCents > 0 && (
+          <Button tone="quiet" onClick={() => open('refund')}>
+            Refund…
+          </Button>
+        )}
+        {can('cancel') && (
+          <Button tone="quiet" onClick={() => open('cancel')}>
+            Cancel order…
+          </Button>
+        )}
       </div>
       {can('start_production') && order.paymentStatus !== 'authorized' && (
-        <p className="rounded-md bg-saffron-100 p-2 text-sm">The proof is approved, but no card is held: the customer has been asked to confirm their card again. Charge the order once they have.</p>
+        <p className="rounded-md bg-saffron-100 p-2 text-sm">
+          The proof is approved, but no card is held: the customer has been asked to confirm their card again. Charge
+          the order once they have.
+        </p>
       )}
       {step === 'charge' && (
-        <Confirm question={`Charge ${money(live?.authorizedCents ?? order.totalCents)} to ${order.customer.name}’s card and start production?`} confirmLabel="Charge the card" isBusy={action.isPending} onBack={() => setStep(null)} onConfirm={() => run({ action: 'capture' })} />
+        <Confirm
+          question={`Charge ${money(live?.authorizedCents ?? order.totalCents)} to ${order.customer.name}’s card and start production?`}
+          confirmLabel="Charge the card"
+          isBusy={action.isPending}
+          onBack={() => setStep(null)}
+          onConfirm={() => run({ action: 'capture' })}
+        />
       )}
       {step === 'cancel' && (
-        <Confirm question={`Cancel ${order.number}${order.paymentStatus === 'authorized' ? ' and release the hold on the card' : ''}? The customer is told why.`} confirmLabel="Cancel the order" isBusy={action.isPending || reason.trim() === ''} onBack={() => setStep(null)} onConfirm={() => run({ action: 'cancel', body: { reason } })}>
+        <Confirm
+          question={`Cancel ${order.number}${order.paymentStatus === 'authorized' ? ' and release the hold on the card' : ''}? The customer is told why.`}
+          confirmLabel="Cancel the order"
+          isBusy={action.isPending || reason.trim() === ''}
+          onBack={() => setStep(null)}
+          onConfirm={() => run({ action: 'cancel', body: { reason } })}
+        >
           <label className="grid gap-1">
             <span className="font-medium">Reason, for the customer</span>
-            <textarea value={reason} onChange={(event) => setReason(event.target.value)} rows={2} className="rounded-lg border border-linen-300 p-2" aria-invalid={Boolean(fields.reason)} />
+            <textarea
+              value={reason}
+              onChange={(event) => setReason(event.target.value)}
+              rows={2}
+              className="rounded-lg border border-linen-300 p-2"
+              aria-invalid={Boolean(fields.reason)}
+            />
             {fields.reason && <span className="text-madder-700">{fields.reason}</span>}
           </label>
         </Confirm>
       )}
       {step === 'refund' && (
-        <Confirm question={`Refund to ${order.customer.name}’s card (${money(refundableCents)} can still be refunded)?`} confirmLabel={refundCents ? `Refund ${money(refundCents)}` : 'Refund'} isBusy={action.isPending || !isRefundValid} onBack={() => setStep(null)} onConfirm={() => run({ action: 'refunds', body: { reason, ...(isFullRefund ? {} : { amountCents: refundCents }) } })}>
+        <Confirm
+          question={`Refund to ${order.customer.name}’s card (${money(refundableCents)} can still be refunded)?`}
+          confirmLabel={refundCents ? `Refund ${money(refundCents)}` : 'Refund'}
+          isBusy={action.isPending || !isRefundValid}
+          onBack={() => setStep(null)}
+          onConfirm={() =>
+            run({ action: 'refunds', body: { reason, ...(isFullRefund ? {} : { amountCents: refundCents }) } })
+          }
+        >
           <fieldset className="flex flex-wrap items-center gap-4">
             <legend className="sr-only">How much</legend>
-            <label className="flex items-center gap-2"><input type="radio" checked={isFullRefund} onChange={() => setIsFullRefund(true)} /> All of it ({money(refundableCents)})</label>
-            <label className="flex items-center gap-2"><input type="radio" checked={!isFullRefund} onChange={() => setIsFullRefund(false)} /> Part:</label>
+            <label className="flex items-center gap-2">
+              <input type="radio" checked={isFullRefund} onChange={() => setIsFullRefund(true)} /> All of it (
+              {money(refundableCents)})
+            </label>
+            <label className="flex items-center gap-2">
+              <input type="radio" checked={!isFullRefund} onChange={() => setIsFullRefund(false)} /> Part:
+            </label>
             {!isFullRefund && (
               <label className="flex items-center gap-2">
                 <span className="sr-only">Amount to refund</span>
-                <input inputMode="decimal" value={refundText} onChange={(event) => setRefundText(event.target.value)} placeholder="5.00" className={`${input} w-28`} aria-invalid={Boolean(fields.amountCents) || (refundText !== '' && !isRefundValid)} />
+                <input
+                  inputMode="decimal"
+                  value={refundText}
+                  onChange={(event) => setRefundText(event.target.value)}
+                  placeholder="5.00"
+                  className={`${input} w-28`}
+                  aria-invalid={Boolean(fields.amountCents) || (refundText !== '' && !isRefundValid)}
+                />
               </label>
             )}
           </fieldset>
-          {!isFullRefund && refundText !== '' && (refundCents === undefined || refundCents > refundableCents) && <p className="text-madder-700">Enter an amount up to {money(refundableCents)}.</p>}
+          {!isFullRefund && refundText !== '' && (refundCents === undefined || refundCents > refundableCents) && (
+            <p className="text-madder-700">Enter an amount up to {money(refundableCents)}.</p>
+          )}
           {fields.amountCents && <p className="text-madder-700">{fields.amountCents}</p>}
           <label className="grid gap-1">
             <span className="font-medium">Reason, for the customer</span>
-            <textarea value={reason} onChange={(event) => setReason(event.target.value)} rows={2} className="rounded-lg border border-linen-300 p-2" />
+            <textarea
+              value={reason}
+              onChange={(event) => setReason(event.target.value)}
+              rows={2}
+              className="rounded-lg border border-linen-300 p-2"
+            />
           </label>
         </Confirm>
       )}
@@ -101,17 +188,39 @@ export function OrderActions({ detail }: { detail: OrderDetailResponse }) {
         <div className="grid gap-3 rounded-lg border border-linen-200 p-3 text-sm">
           <label className="grid gap-1">
             <span className="font-medium">Tracking number (if the parcel has one)</span>
-            <input value={tracking} onChange={(event) => setTracking(event.target.value)} className={input} aria-invalid={Boolean(fields.trackingNumber)} />
+            <input
+              value={tracking}
+              onChange={(event) => setTracking(event.target.value)}
+              className={input}
+              aria-invalid={Boolean(fields.trackingNumber)}
+            />
             {fields.trackingNumber && <span className="text-madder-700">{fields.trackingNumber}</span>}
           </label>
           <div className="flex gap-2">
-            <Button onClick={() => run({ action: 'shipped', body: tracking.trim() ? { trackingNumber: tracking.trim() } : {} })} disabled={action.isPending}>Posted: tell the customer</Button>
-            <Button tone="quiet" onClick={() => setStep(null)}>Not now</Button>
+            <Button
+              onClick={() =>
+                run({ action: 'shipped', body: tracking.trim() ? { trackingNumber: tracking.trim() } : {} })
+              }
+              disabled={action.isPending}
+            >
+              Posted: tell the customer
+            </Button>
+            <Button tone="quiet" onClick={() => setStep(null)}>
+              Not now
+            </Button>
           </div>
         </div>
       )}
-      {action.isError && <p role="alert" className="rounded-md bg-madder-50 p-2 text-sm text-madder-700">{action.error.message}</p>}
-      {action.isSuccess && step === null && <p role="status" className="rounded-md bg-sage-50 p-2 text-sm text-sage-700">Done: the order now reads “{statusLabels[action.data.status]}”.</p>}
+      {action.isError && (
+        <p role="alert" className="rounded-md bg-madder-50 p-2 text-sm text-madder-700">
+          {action.error.message}
+        </p>
+      )}
+      {action.isSuccess && step === null && (
+        <p role="status" className="rounded-md bg-sage-50 p-2 text-sm text-sage-700">
+          Done: the order now reads “{statusLabels[action.data.status]}”.
+        </p>
+      )}
     </div>
   );
 }

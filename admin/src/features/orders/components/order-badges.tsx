@@ -9,8 +9,12 @@ export const formatDueDay = (isoDay: string) => day.format(new Date(`${isoDay}T1
 export function DueFlags({ order }: { order: Pick<BoardOrder, 'isRush' | 'isOverdue'> }) {
   return (
     <>
-      {order.isOverdue && <span className="ml-1 rounded-full bg-madder-600 px-2 py-0.5 text-xs font-medium text-white">Overdue</span>}
-      {order.isRush && <span className="ml-1 rounded-full bg-saffron-500 px-2 py-0.5 text-xs font-medium text-walnut-900">Rush</span>}
+      {order.isOverdue && (
+        <span className="ml-1 rounded-full bg-madder-600 px-2 py-0.5 text-xs font-medium text-white">Overdue</span>
+      )}
+      {order.isRush && (
+        <span className="ml-1 rounded-full bg-saffron-500 px-2 py-0.5 text-xs font-medium text-walnut-900">Rush</span>
+      )}
     </>
   );
 }

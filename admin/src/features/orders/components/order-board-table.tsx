@@ -1,6 +1,12 @@
 import { useMemo } from 'react';
 import { Link } from 'react-router-dom';
-import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  useReactTable,
+  type SortingState,
+} from '@tanstack/react-table';
 import type { BoardOrder, BoardSortKey, OrderBoardQuery } from '@server/contracts/studio-orders.ts';
 import { formatMoney } from '@ui/format.ts';
 import { paths } from '../../../config/paths.ts';
@@ -20,12 +26,19 @@ const columns = [
     id: 'number',
     header: 'Order',
     cell: (info) => (
-      <Link to={paths.order.href(info.getValue())} className="font-medium text-madder-700 underline-offset-2 hover:underline">
+      <Link
+        to={paths.order.href(info.getValue())}
+        className="font-medium text-madder-700 underline-offset-2 hover:underline"
+      >
         {info.getValue()}
       </Link>
     ),
   }),
-  column.accessor('placedAt', { id: 'placed', header: 'Placed', cell: (info) => (info.getValue() ? placed.format(new Date(info.getValue()!)) : 'Not paid yet') }),
+  column.accessor('placedAt', {
+    id: 'placed',
+    header: 'Placed',
+    cell: (info) => (info.getValue() ? placed.format(new Date(info.getValue()!)) : 'Not paid yet'),
+  }),
   column.accessor((order) => order.customer.name, {
     id: 'customer',
     header: 'Customer',
@@ -35,7 +48,12 @@ const columns = [
       const onCustomer = (info.table.options.meta as BoardMeta | undefined)?.onCustomer;
       return (
         <span>
-          <button type="button" onClick={() => onCustomer?.(customer.id)} title={`Only ${customer.name}’s orders`} className="text-left underline-offset-2 hover:underline">
+          <button
+            type="button"
+            onClick={() => onCustomer?.(customer.id)}
+            title={`Only ${customer.name}’s orders`}
+            className="text-left underline-offset-2 hover:underline"
+          >
             {info.getValue()}
           </button>
           <span className="block text-xs text-walnut-500">{customer.email}</span>
@@ -54,8 +72,17 @@ const columns = [
       </span>
     ),
   }),
-  column.accessor('itemSummary', { id: 'items', header: 'What to make', enableSorting: false, cell: (info) => <span className="line-clamp-2">{info.getValue()}</span> }),
-  column.accessor('totalCents', { id: 'total', header: 'Total', cell: (info) => <span className="tabular-nums">{formatMoney(info.getValue(), info.row.original.currency)}</span> }),
+  column.accessor('itemSummary', {
+    id: 'items',
+    header: 'What to make',
+    enableSorting: false,
+    cell: (info) => <span className="line-clamp-2">{info.getValue()}</span>,
+  }),
+  column.accessor('totalCents', {
+    id: 'total',
+    header: 'Total',
+    cell: (info) => <span className="tabular-nums">{formatMoney(info.getValue(), info.row.original.currency)}</span>,
+  }),
 ];
 
 const sortable = new Set<string>(['number', 'placed', 'status', 'due', 'total'] satisfies BoardSortKey[]);
@@ -64,10 +91,40 @@ const sortable = new Set<string>(['number', 'placed', 'status', 'due', 'total'] 
  * The board as a table (sorting by the server: the header buttons write the sort into the URL) and, at phone
  * width, as one card per order with the same facts.
  */
-export function OrderBoardTable({ rows, query, onSort, onCustomer }: { rows: BoardOrder[]; query: OrderBoardQuery; onSort: (sort: BoardSortKey, dir: 'asc' | 'desc') => void; onCustomer: (customerId: number) => void }) {
-  const sorting = useMemo<SortingState>(() => [{ id: query.sort, desc: query.dir === 'desc' }], [query.sort, query.dir]);
-  const table = useReactTable({ data: rows, columns, state: { sorting }, manualSorting: true, getCoreRowModel: getCoreRowModel(), meta: { onCustomer } satisfies BoardMeta });
-  const sortBy = (id: string) => onSort(id as BoardSortKey, query.sort === id && query.dir === 'asc' ? 'desc' : query.sort === id ? 'asc' : id === 'due' || id === 'number' ? 'asc' : 'desc');
+export function OrderBoardTable({
+  rows,
+  query,
+  onSort,
+  onCustomer,
+}: {
+  rows: BoardOrder[];
+  query: OrderBoardQuery;
+  onSort: (sort: BoardSortKey, dir: 'asc' | 'desc') => void;
+  onCustomer: (customerId: number) => void;
+}) {
+  const sorting = useMemo<SortingState>(
+    () => [{ id: query.sort, desc: query.dir === 'desc' }],
+    [query.sort, query.dir],
+  );
+  const table = useReactTable({
+    data: rows,
+    columns,
+    state: { sorting },
+    manualSorting: true,
+    getCoreRowModel: getCoreRowModel(),
+    meta: { onCustomer } satisfies BoardMeta,
+  });
+  const sortBy = (id: string) =>
+    onSort(
+      id as BoardSortKey,
+      query.sort === id && query.dir === 'asc'
+        ? 'desc'
+        : query.sort === id
+          ? 'asc'
+          : id === 'due' || id === 'number'
+            ? 'asc'
+            : 'desc',
+    );
 
   return (
     <>
@@ -79,11 +136,22 @@ export function OrderBoardTable({ rows, query, onSort, onCustomer }: { rows: Boa
                 const isSorted = query.sort === header.column.id;
                 const label = flexRender(header.column.columnDef.header, header.getContext());
                 return (
-                  <th key={header.id} scope="col" aria-sort={isSorted ? (query.dir === 'asc' ? 'ascending' : 'descending') : undefined} className={`py-2 pr-3 font-medium ${header.column.id === 'total' ? 'text-right' : ''}`}>
+                  <th
+                    key={header.id}
+                    scope="col"
+                    aria-sort={isSorted ? (query.dir === 'asc' ? 'ascending' : 'descending') : undefined}
+                    className={`py-2 pr-3 font-medium ${header.column.id === 'total' ? 'text-right' : ''}`}
+                  >
                     {sortable.has(header.column.id) ? (
-                      <button type="button" onClick={() => sortBy(header.column.id)} className="inline-flex items-center gap-1 rounded hover:text-walnut-900">
+                      <button
+                        type="button"
+                        onClick={() => sortBy(header.column.id)}
+                        className="inline-flex items-center gap-1 rounded hover:text-walnut-900"
+                      >
                         {label}
-                        <span aria-hidden="true" className={isSorted ? 'text-madder-600' : 'text-linen-300'}>{isSorted && query.dir === 'asc' ? '▲' : '▼'}</span>
+                        <span aria-hidden="true" className={isSorted ? 'text-madder-600' : 'text-linen-300'}>
+                          {isSorted && query.dir === 'asc' ? '▲' : '▼'}
+                        </span>
                       </button>
                     ) : (
                       label
@@ -110,10 +178,17 @@ export function OrderBoardTable({ rows, query, onSort, onCustomer }: { rows: Boa
         {rows.map((order) => (
           <li key={order.number} className="rounded-lg border border-linen-200 p-3 text-sm">
             <div className="flex items-baseline justify-between gap-2">
-              <Link to={paths.order.href(order.number)} className="text-base font-semibold text-madder-700 underline-offset-2 hover:underline">{order.number}</Link>
+              <Link
+                to={paths.order.href(order.number)}
+                className="text-base font-semibold text-madder-700 underline-offset-2 hover:underline"
+              >
+                {order.number}
+              </Link>
               <span className="tabular-nums">{formatMoney(order.totalCents, order.currency)}</span>
             </div>
-            <p>{order.customer.name} · {statusLabels[order.status]}</p>
+            <p>
+              {order.customer.name} · {statusLabels[order.status]}
+            </p>
             <p className="text-walnut-500">
               {order.neededBy ? `Needed by ${formatDueDay(order.neededBy)}` : 'No date asked'}
               <DueFlags order={order} />

@@ -18,7 +18,9 @@ export function OrderMoney({ detail }: { detail: OrderDetailResponse }) {
   return (
     <div className="grid gap-4">
       <table className="w-full text-sm">
-        <caption className="mb-1 text-left text-xs text-walnut-500">Priced with price list version {quote.ruleSetVersion}</caption>
+        <caption className="mb-1 text-left text-xs text-walnut-500">
+          Priced with price list version {quote.ruleSetVersion}
+        </caption>
         <tbody>
           {quote.lines.map((line, index) => (
             <tr key={`${line.code}-${index}`} className="border-t border-linen-200">
@@ -44,7 +46,9 @@ export function OrderMoney({ detail }: { detail: OrderDetailResponse }) {
                 {payment.refundedCents > 0 && ` · refunded ${money(payment.refundedCents)}`}
               </p>
               {payment.status === 'authorized' && payment.captureBefore && (
-                <p className="text-xs text-madder-700">Charge before {new Date(payment.captureBefore).toUTCString().slice(0, 16)}, or the hold lapses.</p>
+                <p className="text-xs text-madder-700">
+                  Charge before {new Date(payment.captureBefore).toUTCString().slice(0, 16)}, or the hold lapses.
+                </p>
               )}
             </li>
           ))}

@@ -8,14 +8,26 @@ const statusWords: Record<string, string> = {
   changes_requested: 'Customer asked for changes',
   superseded: 'Replaced by a later version',
 };
-const when = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit', timeZone: 'UTC' });
+const when = new Intl.DateTimeFormat('en-US', {
+  month: 'short',
+  day: 'numeric',
+  hour: 'numeric',
+  minute: '2-digit',
+  timeZone: 'UTC',
+});
 
 /** The picture with the customer's pins drawn where they pointed, numbered to match the comments below it. */
 function PinnedPicture({ proof }: { proof: Proof }) {
-  if (!proof.imageUrl) return <p className="rounded-md bg-linen-50 p-3 text-xs text-walnut-500">No picture was kept for this version.</p>;
+  if (!proof.imageUrl)
+    return <p className="rounded-md bg-linen-50 p-3 text-xs text-walnut-500">No picture was kept for this version.</p>;
   return (
     <figure className="relative overflow-hidden rounded-md border border-linen-200">
-      <img src={proof.imageUrl} alt={`Proof ${proof.version}${proof.source === 'photo' ? ', a photo of the stitch-out' : ', the design drawn on the garment'}`} className="block h-auto w-full" loading="lazy" />
+      <img
+        src={proof.imageUrl}
+        alt={`Proof ${proof.version}${proof.source === 'photo' ? ', a photo of the stitch-out' : ', the design drawn on the garment'}`}
+        className="block h-auto w-full"
+        loading="lazy"
+      />
       {proof.commentPins.map((pin, index) => (
         <span
           key={index}
@@ -38,10 +50,20 @@ export function ProofVersions({ proofs }: { proofs: OrderDetailResponse['proofs'
       {[...proofs].reverse().map((proof) => (
         <li key={proof.version} className="grid gap-2 rounded-lg bg-linen-100 p-3 text-sm">
           <div className="flex flex-wrap items-baseline justify-between gap-2">
-            <p className="font-medium">Proof {proof.version} · {proof.source === 'photo' ? 'stitch-out photo' : 'drawing'}</p>
+            <p className="font-medium">
+              Proof {proof.version} · {proof.source === 'photo' ? 'stitch-out photo' : 'drawing'}
+            </p>
             <p className="text-xs text-walnut-500">Sent {when.format(new Date(proof.sentAt))} UTC</p>
           </div>
-          <p className={proof.status === 'changes_requested' ? 'font-medium text-madder-700' : proof.status === 'approved' ? 'font-medium text-sage-700' : 'text-walnut-700'}>
+          <p
+            className={
+              proof.status === 'changes_requested'
+                ? 'font-medium text-madder-700'
+                : proof.status === 'approved'
+                  ? 'font-medium text-sage-700'
+                  : 'text-walnut-700'
+            }
+          >
             {statusWords[proof.status] ?? proof.status}
           </p>
           {proof.status !== 'superseded' && <PinnedPicture proof={proof} />}
@@ -51,7 +73,9 @@ export function ProofVersions({ proofs }: { proofs: OrderDetailResponse['proofs'
             <ol className="grid gap-1" aria-label={`Comments on proof ${proof.version}`}>
               {proof.commentPins.map((pin, index) => (
                 <li key={index} className="flex gap-2">
-                  <span className="flex h-5 w-5 shrink-0 items-center justify-center rounded-full bg-madder-600 text-xs font-semibold text-white">{index + 1}</span>
+                  <span className="flex h-5 w-5 shrink-0 items-center justify-center rounded-full bg-madder-600 text-xs font-semibold text-white">
+                    {index + 1}
+                  </span>
                   {pin.comment}
                 </li>
               ))}

@@ -4,17 +4,39 @@ import type { ApiError } from '@ui/api-client.ts';
 import { proofPreviewPath } from '@server/contracts/studio-orders.ts';
 import { useSendProof } from '../api/send-proof.ts';
 
-const defaultMessage = 'Here is your proof, drawn to scale on the garment. Approve it to start stitching, or point at anything you would like changed.';
+const defaultMessage =
+  'Here is your proof, drawn to scale on the garment. Approve it to start stitching, or point at anything you would like changed.';
 
 /** The drawing a render would send, drawn by the server on request; nothing is stored until it is sent. */
 function DrawingPreview({ number }: { number: string }) {
   const [state, setState] = useState<'closed' | 'loading' | 'shown' | 'failed'>('closed');
-  if (state === 'closed') return <div><Button tone="quiet" onClick={() => setState('loading')}>Preview the drawing</Button></div>;
+  if (state === 'closed')
+    return (
+      <div>
+        <Button tone="quiet" onClick={() => setState('loading')}>
+          Preview the drawing
+        </Button>
+      </div>
+    );
   return (
     <figure className="grid gap-1">
-      {state === 'loading' && <p role="status" className="text-walnut-500">Drawing the design on the garment…</p>}
-      {state === 'failed' && <p role="alert" className="text-madder-700">The drawing could not be made; try again, or send a photo.</p>}
-      <img src={proofPreviewPath(number)} alt="Preview of the drawing the customer would get" onLoad={() => setState('shown')} onError={() => setState('failed')} className={`w-full max-w-sm rounded-md border border-linen-200 ${state === 'shown' ? '' : 'hidden'}`} />
+      {state === 'loading' && (
+        <p role="status" className="text-walnut-500">
+          Drawing the design on the garment…
+        </p>
+      )}
+      {state === 'failed' && (
+        <p role="alert" className="text-madder-700">
+          The drawing could not be made; try again, or send a photo.
+        </p>
+      )}
+      <img
+        src={proofPreviewPath(number)}
+        alt="Preview of the drawing the customer would get"
+        onLoad={() => setState('shown')}
+        onError={() => setState('failed')}
+        className={`w-full max-w-sm rounded-md border border-linen-200 ${state === 'shown' ? '' : 'hidden'}`}
+      />
     </figure>
   );
 }
@@ -36,24 +58,46 @@ export function SendProofForm({ number, versionCount }: { number: string; versio
   };
 
   return (
-    <form onSubmit={submit} className="grid gap-3 rounded-lg border border-linen-200 p-3 text-sm" aria-label="Send a proof">
+    <form
+      onSubmit={submit}
+      className="grid gap-3 rounded-lg border border-linen-200 p-3 text-sm"
+      aria-label="Send a proof"
+    >
       <p className="font-medium">{versionCount === 0 ? 'Send the first proof' : `Send proof ${versionCount + 1}`}</p>
       <fieldset className="flex flex-wrap gap-4">
         <legend className="sr-only">What to send</legend>
-        <label className="flex items-center gap-2"><input type="radio" name="source" checked={source === 'render'} onChange={() => setSource('render')} /> Drawing of the design on the garment</label>
-        <label className="flex items-center gap-2"><input type="radio" name="source" checked={source === 'photo'} onChange={() => setSource('photo')} /> Photo of a test stitch-out</label>
+        <label className="flex items-center gap-2">
+          <input type="radio" name="source" checked={source === 'render'} onChange={() => setSource('render')} />{' '}
+          Drawing of the design on the garment
+        </label>
+        <label className="flex items-center gap-2">
+          <input type="radio" name="source" checked={source === 'photo'} onChange={() => setSource('photo')} /> Photo of
+          a test stitch-out
+        </label>
       </fieldset>
       {source === 'render' && <DrawingPreview number={number} />}
       {source === 'photo' && (
         <label className="grid gap-1">
           <span className="font-medium">Photo (PNG or JPEG)</span>
-          <input type="file" accept="image/png,image/jpeg" onChange={(event) => setFile(event.target.files?.[0] ?? null)} aria-invalid={Boolean(fields.file)} />
+          <input
+            type="file"
+            accept="image/png,image/jpeg"
+            onChange={(event) => setFile(event.target.files?.[0] ?? null)}
+            aria-invalid={Boolean(fields.file)}
+          />
           {fields.file && <span className="text-madder-700">{fields.file}</span>}
         </label>
       )}
       <label className="grid gap-1">
         <span className="font-medium">Note to the customer</span>
-        <textarea value={message} onChange={(event) => setMessage(event.target.value)} rows={3} maxLength={2000} className="rounded-lg border border-linen-300 p-2" aria-invalid={Boolean(fields.message)} />
+        <textarea
+          value={message}
+          onChange={(event) => setMessage(event.target.value)}
+          rows={3}
+          maxLength={2000}
+          className="rounded-lg border border-linen-300 p-2"
+          aria-invalid={Boolean(fields.message)}
+        />
         {fields.message && <span className="text-madder-700">{fields.message}</span>}
       </label>
       {send.isPending && source === 'photo' && (
@@ -62,8 +106,16 @@ export function SendProofForm({ number, versionCount }: { number: string; versio
           <progress value={progress} max={1} className="h-2 w-full" />
         </label>
       )}
-      {send.isError && <p role="alert" className="rounded-md bg-madder-50 p-2 text-madder-700">{send.error.message}</p>}
-      {send.isSuccess && <p role="status" className="rounded-md bg-sage-50 p-2 text-sage-700">Proof {send.data.version} is on its way to the customer.</p>}
+      {send.isError && (
+        <p role="alert" className="rounded-md bg-madder-50 p-2 text-madder-700">
+          {send.error.message}
+        </p>
+      )}
+      {send.isSuccess && (
+        <p role="status" className="rounded-md bg-sage-50 p-2 text-sage-700">
+          Proof {send.data.version} is on its way to the customer.
+        </p>
+      )}
       <div>
         <Button type="submit" disabled={send.isPending || (source === 'photo' && !file) || message.trim() === ''}>
           {send.isPending ? (source === 'render' ? 'Drawing the proof…' : 'Sending…') : 'Send proof'}

@@ -15,6 +15,11 @@ export function getOutbox(filter: OutboxFilter) {
   return apiRequest(`/admin/outbox?${params}`, outboxListResponse);
 }
 
-export const outboxQuery = (filter: OutboxFilter) => queryOptions({ queryKey: ['admin', 'outbox', 'list', filter], queryFn: () => getOutbox(filter), placeholderData: keepPreviousData });
+export const outboxQuery = (filter: OutboxFilter) =>
+  queryOptions({
+    queryKey: ['admin', 'outbox', 'list', filter],
+    queryFn: () => getOutbox(filter),
+    placeholderData: keepPreviousData,
+  });
 
 export const useOutbox = (filter: OutboxFilter) => useQuery(outboxQuery(filter));

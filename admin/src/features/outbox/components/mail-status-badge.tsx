@@ -9,5 +9,9 @@ const look: Record<MailStatus, { label: string; className: string }> = {
 export const mailStatusLabel = (status: MailStatus) => look[status].label;
 
 export function MailStatusBadge({ status }: { status: MailStatus }) {
-  return <span className={`whitespace-nowrap rounded-full px-2 py-0.5 text-xs font-medium ${look[status].className}`}>{look[status].label}</span>;
+  return (
+    <span className={`whitespace-nowrap rounded-full px-2 py-0.5 text-xs font-medium ${look[status].className}`}>
+      {look[status].label}
+    </span>
+  );
 }

@@ -19,7 +19,9 @@ export function OutboxMessage({ id }: { id: number }) {
   return (
     <article aria-labelledby="outbox-message-subject" className="grid gap-3">
       <header className="grid gap-1">
-        <h2 id="outbox-message-subject" className="text-lg font-semibold">{m.subject}</h2>
+        <h2 id="outbox-message-subject" className="text-lg font-semibold">
+          {m.subject}
+        </h2>
         <div className="flex flex-wrap items-center gap-2 text-sm text-walnut-500">
           <MailStatusBadge status={m.status} />
           <span>To {m.toEmail}</span>
@@ -35,16 +37,29 @@ export function OutboxMessage({ id }: { id: number }) {
       {hasHtml && (
         <div role="group" aria-label="Show the message as" className="flex gap-2 text-sm">
           {(['text', 'html'] as const).map((option) => (
-            <button key={option} type="button" aria-pressed={view === option} onClick={() => setView(option)} className={`min-h-9 rounded-full border px-3 ${view === option ? 'border-walnut-700 bg-walnut-900 text-linen-100' : 'border-linen-300 hover:bg-linen-100'}`}>
+            <button
+              key={option}
+              type="button"
+              aria-pressed={view === option}
+              onClick={() => setView(option)}
+              className={`min-h-9 rounded-full border px-3 ${view === option ? 'border-walnut-700 bg-walnut-900 text-linen-100' : 'border-linen-300 hover:bg-linen-100'}`}
+            >
               {option === 'text' ? 'Plain text' : 'As designed'}
             </button>
           ))}
         </div>
       )}
       {view === 'html' && m.htmlBody ? (
-        <iframe title={`The message “${m.subject}” as designed`} sandbox="" srcDoc={m.htmlBody} className="h-96 w-full rounded-lg border border-linen-200 bg-white" />
+        <iframe
+          title={`The message “${m.subject}” as designed`}
+          sandbox=""
+          srcDoc={m.htmlBody}
+          className="h-96 w-full rounded-lg border border-linen-200 bg-white"
+        />
       ) : m.textBody ? (
-        <pre className="whitespace-pre-wrap break-words rounded-lg border border-linen-200 bg-linen-50 p-4 font-sans text-sm">{m.textBody}</pre>
+        <pre className="whitespace-pre-wrap break-words rounded-lg border border-linen-200 bg-linen-50 p-4 font-sans text-sm">
+          {m.textBody}
+        </pre>
       ) : (
         <p className="text-sm text-walnut-500">This message was logged before the outbox kept what messages said.</p>
       )}

@@ -4,6 +4,7 @@ import { apiRequest } from '@ui/api-client.ts';
 
 export const getOverview = () => apiRequest('/admin/overview', adminOverviewResponse);
 
-export const overviewQuery = () => queryOptions({ queryKey: ['admin', 'overview'], queryFn: getOverview, staleTime: 30_000 });
+export const overviewQuery = () =>
+  queryOptions({ queryKey: ['admin', 'overview'], queryFn: getOverview, staleTime: 30_000 });
 
 export const useOverview = () => useQuery(overviewQuery());

@@ -11,18 +11,37 @@ const groupText: Record<ActionGroupKind, { title: string; empty: string }> = {
   ready_to_ship: { title: 'Stitched, ready to ship', empty: 'Nothing is waiting to be packed.' },
 };
 
-const dayFormat = new Intl.DateTimeFormat('en-US', { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' });
+const dayFormat = new Intl.DateTimeFormat('en-US', {
+  weekday: 'short',
+  month: 'short',
+  day: 'numeric',
+  timeZone: 'UTC',
+});
 const dayOf = (date: string) => dayFormat.format(new Date(`${date}T12:00:00Z`));
 
 /** What needs a hand today, one card per kind of work, each order a link to its page. */
-export function ActionGroups({ groups, orderHref }: { groups: AdminOverviewResponse['actions']; orderHref: (number: string) => string }) {
+export function ActionGroups({
+  groups,
+  orderHref,
+}: {
+  groups: AdminOverviewResponse['actions'];
+  orderHref: (number: string) => string;
+}) {
   return (
     <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-5">
       {groups.map((group) => (
-        <section key={group.kind} aria-labelledby={`action-${group.kind}`} className="min-w-0 rounded-card border border-linen-200 bg-white p-4">
+        <section
+          key={group.kind}
+          aria-labelledby={`action-${group.kind}`}
+          className="min-w-0 rounded-card border border-linen-200 bg-white p-4"
+        >
           <h3 id={`action-${group.kind}`} className="flex items-baseline justify-between gap-2 font-semibold">
             {groupText[group.kind].title}
-            <span className={`rounded-full px-2 text-sm tabular-nums ${group.orders.length ? 'bg-madder-600 text-white' : 'bg-linen-100 text-walnut-500'}`}>{group.orders.length}</span>
+            <span
+              className={`rounded-full px-2 text-sm tabular-nums ${group.orders.length ? 'bg-madder-600 text-white' : 'bg-linen-100 text-walnut-500'}`}
+            >
+              {group.orders.length}
+            </span>
           </h3>
           {group.orders.length === 0 ? (
             <p className="mt-2 text-sm text-walnut-500">{groupText[group.kind].empty}</p>
@@ -31,8 +50,15 @@ export function ActionGroups({ groups, orderHref }: { groups: AdminOverviewRespo
               {group.orders.map((order) => (
                 <li key={order.id} className="grid">
                   <span className="flex flex-wrap items-baseline justify-between gap-x-2">
-                    <Link to={orderHref(order.number)} className="font-medium text-madder-700 underline-offset-2 hover:underline">{order.number}</Link>
-                    <span className="tabular-nums text-walnut-500">{formatMoney(order.totalCents, order.currency)}</span>
+                    <Link
+                      to={orderHref(order.number)}
+                      className="font-medium text-madder-700 underline-offset-2 hover:underline"
+                    >
+                      {order.number}
+                    </Link>
+                    <span className="tabular-nums text-walnut-500">
+                      {formatMoney(order.totalCents, order.currency)}
+                    </span>
                   </span>
                   <span className="text-walnut-700">{order.customerName}</span>
                   {group.kind === 'due_soon' && <span className="text-walnut-500">{statusLabels[order.status]}</span>}

@@ -1,4 +1,14 @@
-import { Bar, BarChart, CartesianGrid, Cell, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import {
+  Bar,
+  BarChart,
+  CartesianGrid,
+  Cell,
+  ReferenceLine,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from 'recharts';
 import type { AdminOverviewResponse } from '@server/contracts/admin-overview.ts';
 import { weekLabel } from './week-label.ts';
 import { WeeklyTable } from './weekly-table.tsx';
@@ -11,7 +21,11 @@ const hours = (value: number) => `${value.toLocaleString('en-US', { maximumFract
  */
 export function MachineHoursChart({ machineHours }: { machineHours: AdminOverviewResponse['machineHours'] }) {
   const { weeks, capacityHours } = machineHours;
-  const rows = weeks.map((week) => ({ ...week, label: weekLabel(week.weekStart), isOver: week.bookedHours > capacityHours }));
+  const rows = weeks.map((week) => ({
+    ...week,
+    label: weekLabel(week.weekStart),
+    isOver: week.bookedHours > capacityHours,
+  }));
   const busiest = rows.reduce((top, row) => (row.bookedHours > top.bookedHours ? row : top), rows[0]!);
   const total = rows.reduce((sum, row) => sum + row.bookedHours, 0);
   // Round ticks (every 2, 5 or 10 h) up to a little above the capacity line or the busiest week.
@@ -32,7 +46,18 @@ export function MachineHoursChart({ machineHours }: { machineHours: AdminOvervie
             <XAxis dataKey="label" tick={{ fontSize: 12 }} interval={0} />
             <YAxis width={40} tick={{ fontSize: 12 }} domain={[0, ticks.at(-1)!]} ticks={ticks} />
             <Tooltip formatter={(value) => hours(Number(value))} labelFormatter={(label) => `Week of ${label}`} />
-            <ReferenceLine y={capacityHours} stroke="#d9a21b" strokeDasharray="6 4" strokeWidth={2} label={{ value: `capacity ${hours(capacityHours)}`, position: 'insideTopRight', fontSize: 12, fill: '#4d3d32' }} />
+            <ReferenceLine
+              y={capacityHours}
+              stroke="#d9a21b"
+              strokeDasharray="6 4"
+              strokeWidth={2}
+              label={{
+                value: `capacity ${hours(capacityHours)}`,
+                position: 'insideTopRight',
+                fontSize: 12,
+                fill: '#4d3d32',
+              }}
+            />
             <Bar dataKey="bookedHours" name="Booked" radius={[4, 4, 0, 0]}>
               {rows.map((row) => (
                 <Cell key={row.weekStart} fill={row.isOver ? '#9c4230' : '#6c8a66'} />
@@ -44,7 +69,11 @@ export function MachineHoursChart({ machineHours }: { machineHours: AdminOvervie
       <WeeklyTable
         summary="Machine hours as a table"
         columns={['Orders', 'Booked', 'Capacity']}
-        rows={rows.map((row) => ({ weekStart: row.weekStart, isMarked: row.isOver, cells: [row.orderCount, hours(row.bookedHours), hours(capacityHours)] }))}
+        rows={rows.map((row) => ({
+          weekStart: row.weekStart,
+          isMarked: row.isOver,
+          cells: [row.orderCount, hours(row.bookedHours), hours(capacityHours)],
+        }))}
       />
     </figure>
   );

@@ -24,7 +24,10 @@ export function RevenueChart({ revenue }: { revenue: AdminOverviewResponse['reve
             <XAxis dataKey="label" tick={{ fontSize: 11 }} interval="preserveStartEnd" />
             <YAxis width={52} tick={{ fontSize: 12 }} tickFormatter={(value: number) => `$${value}`} />
             <ReferenceLine y={0} stroke="#7a6656" />
-            <Tooltip formatter={(value) => money(Math.round(Number(value) * 100))} labelFormatter={(label) => `Week of ${label}`} />
+            <Tooltip
+              formatter={(value) => money(Math.round(Number(value) * 100))}
+              labelFormatter={(label) => `Week of ${label}`}
+            />
             <Bar dataKey="net" name="Taken" fill="#9c4230" radius={[4, 4, 0, 0]} />
           </BarChart>
         </ResponsiveContainer>
@@ -32,7 +35,14 @@ export function RevenueChart({ revenue }: { revenue: AdminOverviewResponse['reve
       <WeeklyTable
         summary="Takings as a table"
         columns={['Charged', 'Refunded', 'Taken']}
-        rows={weeks.map((week) => ({ weekStart: week.weekStart, cells: [money(week.capturedCents), week.refundedCents ? `−${money(week.refundedCents)}` : money(0), money(week.netCents)] }))}
+        rows={weeks.map((week) => ({
+          weekStart: week.weekStart,
+          cells: [
+            money(week.capturedCents),
+            week.refundedCents ? `−${money(week.refundedCents)}` : money(0),
+            money(week.netCents),
+          ],
+        }))}
       />
     </figure>
   );

@@ -17,18 +17,29 @@ export function WeeklyTable({ summary, columns, rows }: { summary: string; colum
       <table className="mt-2 w-full text-left">
         <thead className="text-walnut-500">
           <tr>
-            <th scope="col" className="py-1 font-medium">Week of</th>
+            <th scope="col" className="py-1 font-medium">
+              Week of
+            </th>
             {columns.map((column) => (
-              <th key={column} scope="col" className="py-1 text-right font-medium">{column}</th>
+              <th key={column} scope="col" className="py-1 text-right font-medium">
+                {column}
+              </th>
             ))}
           </tr>
         </thead>
         <tbody>
           {rows.map((row) => (
-            <tr key={row.weekStart} className={`border-t border-linen-200 ${row.isMarked ? 'font-semibold text-madder-700' : ''}`}>
-              <th scope="row" className="py-1 font-normal">{weekLabel(row.weekStart)}</th>
+            <tr
+              key={row.weekStart}
+              className={`border-t border-linen-200 ${row.isMarked ? 'font-semibold text-madder-700' : ''}`}
+            >
+              <th scope="row" className="py-1 font-normal">
+                {weekLabel(row.weekStart)}
+              </th>
               {row.cells.map((cell, index) => (
-                <td key={columns[index]} className="py-1 text-right tabular-nums">{cell}</td>
+                <td key={columns[index]} className="py-1 text-right tabular-nums">
+                  {cell}
+                </td>
               ))}
             </tr>
           ))}

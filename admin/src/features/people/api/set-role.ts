@@ -3,7 +3,8 @@ import { personResponse, type SetRoleRequest } from '@server/contracts/admin-use
 import { apiRequest } from '@ui/api-client.ts';
 import { peopleQuery } from './get-people.ts';
 
-export const setRole = (id: number, role: SetRoleRequest['role']) => apiRequest(`/admin/users/${id}/role`, personResponse, { method: 'PUT', body: { role } });
+export const setRole = (id: number, role: SetRoleRequest['role']) =>
+  apiRequest(`/admin/users/${id}/role`, personResponse, { method: 'PUT', body: { role } });
 
 export function useSetRole() {
   const queryClient = useQueryClient();

@@ -17,10 +17,18 @@ export function PeopleTable({ people, myId }: { people: StudioPerson[]; myId: nu
         <table className="w-full min-w-[36rem] text-left text-sm">
           <thead className="text-walnut-500">
             <tr>
-              <th scope="col" className="py-1.5 font-medium">Person</th>
-              <th scope="col" className="py-1.5 font-medium">Role</th>
-              <th scope="col" className="py-1.5 font-medium">Joined</th>
-              <th scope="col" className="py-1.5 font-medium"><span className="sr-only">Change</span></th>
+              <th scope="col" className="py-1.5 font-medium">
+                Person
+              </th>
+              <th scope="col" className="py-1.5 font-medium">
+                Role
+              </th>
+              <th scope="col" className="py-1.5 font-medium">
+                Joined
+              </th>
+              <th scope="col" className="py-1.5 font-medium">
+                <span className="sr-only">Change</span>
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -42,8 +50,14 @@ export function PeopleTable({ people, myId }: { people: StudioPerson[]; myId: nu
                       tone="quiet"
                       className="min-h-9 px-4 py-1 text-sm"
                       disabled={pendingId === person.id}
-                      aria-label={person.role === 'staff' ? `Remove ${person.name} from the studio team` : `Add ${person.name} to the studio team`}
-                      onClick={() => setRole.mutate({ id: person.id, role: person.role === 'staff' ? 'customer' : 'staff' })}
+                      aria-label={
+                        person.role === 'staff'
+                          ? `Remove ${person.name} from the studio team`
+                          : `Add ${person.name} to the studio team`
+                      }
+                      onClick={() =>
+                        setRole.mutate({ id: person.id, role: person.role === 'staff' ? 'customer' : 'staff' })
+                      }
                     >
                       {person.role === 'staff' ? 'Remove from team' : 'Add to team'}
                     </Button>

@@ -4,7 +4,8 @@ import { apiRequest } from '@ui/api-client.ts';
 import { ruleSetQuery } from './get-rule-set.ts';
 import { ruleSetsQuery } from './get-rule-sets.ts';
 
-export const saveDraft = (id: number, body: UpdateDraftRequest) => apiRequest(`/admin/pricing/${id}`, ruleSetDetailResponse, { method: 'PUT', body });
+export const saveDraft = (id: number, body: UpdateDraftRequest) =>
+  apiRequest(`/admin/pricing/${id}`, ruleSetDetailResponse, { method: 'PUT', body });
 
 export function useSaveDraft(id: number) {
   const queryClient = useQueryClient();

@@ -16,7 +16,9 @@ type RuleSet = RuleSetDetailResponse['ruleSet'];
 /** Field errors keyed by the form's own paths: the server names them "rules.<path>". */
 function fieldErrorsOf(error: unknown): Record<string, string> {
   if (!(error instanceof ApiError) || !error.fields) return {};
-  return Object.fromEntries(Object.entries(error.fields).map(([key, message]) => [key.replace(/^rules\./, ''), message]));
+  return Object.fromEntries(
+    Object.entries(error.fields).map(([key, message]) => [key.replace(/^rules\./, ''), message]),
+  );
 }
 
 /**
@@ -61,36 +63,67 @@ export function RuleSetEditor({ ruleSet, canEdit }: { ruleSet: RuleSet; canEdit:
         )}
         <RulesFields form={form} onChange={setForm} errors={errors} isReadOnly={!isEditable} />
         <div className="grid gap-1">
-          <label htmlFor="rule-set-notes" className="text-sm font-medium text-walnut-700">Notes for the studio</label>
-          <textarea id="rule-set-notes" rows={2} value={notes} readOnly={!isEditable} onChange={(event) => setNotes(event.target.value)} className="rounded-lg border border-linen-300 p-2.5" />
+          <label htmlFor="rule-set-notes" className="text-sm font-medium text-walnut-700">
+            Notes for the studio
+          </label>
+          <textarea
+            id="rule-set-notes"
+            rows={2}
+            value={notes}
+            readOnly={!isEditable}
+            onChange={(event) => setNotes(event.target.value)}
+            className="rounded-lg border border-linen-300 p-2.5"
+          />
           {errors.notes && <p className="text-sm text-madder-700">{errors.notes}</p>}
         </div>
         {isEditable && (
           <div className="sticky bottom-0 flex flex-wrap items-center gap-3 border-t border-linen-200 bg-white/95 py-3">
-            <Button type="submit" disabled={save.isPending || !isDirty}>{save.isPending ? 'Saving…' : 'Save draft'}</Button>
+            <Button type="submit" disabled={save.isPending || !isDirty}>
+              {save.isPending ? 'Saving…' : 'Save draft'}
+            </Button>
             {!isConfirming ? (
               <Button tone="quiet" disabled={isDirty || publish.isPending} onClick={() => setIsConfirming(true)}>
                 Publish version {ruleSet.version}…
               </Button>
             ) : (
-              <span role="group" aria-label="Confirm publishing" className="flex flex-wrap items-center gap-2 rounded-xl bg-saffron-100 px-3 py-2 text-sm">
+              <span
+                role="group"
+                aria-label="Confirm publishing"
+                className="flex flex-wrap items-center gap-2 rounded-xl bg-saffron-100 px-3 py-2 text-sm"
+              >
                 New quotes will use version {ruleSet.version}; quotes already made keep theirs.
-                <Button className="min-h-9 px-4 py-1" disabled={publish.isPending} onClick={() => publish.mutate(ruleSet.id, { onSettled: () => setIsConfirming(false) })}>
+                <Button
+                  className="min-h-9 px-4 py-1"
+                  disabled={publish.isPending}
+                  onClick={() => publish.mutate(ruleSet.id, { onSettled: () => setIsConfirming(false) })}
+                >
                   {publish.isPending ? 'Publishing…' : `Yes, publish version ${ruleSet.version}`}
                 </Button>
-                <Button tone="quiet" className="min-h-9 px-4 py-1" onClick={() => setIsConfirming(false)}>Not yet</Button>
+                <Button tone="quiet" className="min-h-9 px-4 py-1" onClick={() => setIsConfirming(false)}>
+                  Not yet
+                </Button>
               </span>
             )}
             {isDirty && <span className="text-sm text-walnut-500">Save the draft before publishing it.</span>}
-            <span role="status" className="text-sm text-sage-700">{save.isSuccess && !isDirty ? 'Draft saved.' : ''}</span>
+            <span role="status" className="text-sm text-sage-700">
+              {save.isSuccess && !isDirty ? 'Draft saved.' : ''}
+            </span>
           </div>
         )}
         {isFormLevelError && <ErrorNotice message={save.error!.message} />}
         {publish.isError && <ErrorNotice message={publish.error.message} />}
       </form>
-      <section aria-labelledby="sample-quotes-heading" className="min-w-0 self-start rounded-card border border-linen-200 bg-linen-50 p-4 xl:sticky xl:top-4">
-        <h3 id="sample-quotes-heading" className="font-semibold">How these prices change three recent quotes</h3>
-        <p className="mb-3 text-sm text-walnut-500">The smallest, a typical and the largest recent quote, priced again with the published list and with these rules.</p>
+      <section
+        aria-labelledby="sample-quotes-heading"
+        className="min-w-0 self-start rounded-card border border-linen-200 bg-linen-50 p-4 xl:sticky xl:top-4"
+      >
+        <h3 id="sample-quotes-heading" className="font-semibold">
+          How these prices change three recent quotes
+        </h3>
+        <p className="mb-3 text-sm text-walnut-500">
+          The smallest, a typical and the largest recent quote, priced again with the published list and with these
+          rules.
+        </p>
         {!isComplete(rules) ? (
           <p className="text-sm text-walnut-700">Fill in every amount to see the samples.</p>
         ) : preview.isPending ? (

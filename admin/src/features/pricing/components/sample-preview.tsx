@@ -18,7 +18,8 @@ const totalOf = (side: Sample['published']) => (side.ok ? side.totalCents : null
  */
 export function SamplePreview({ preview, isUpdating }: { preview: PricingPreviewResponse; isUpdating: boolean }) {
   const { currency, samples } = preview;
-  if (samples.length === 0) return <p className="text-sm text-walnut-500">There are no stored quotes to compare yet.</p>;
+  if (samples.length === 0)
+    return <p className="text-sm text-walnut-500">There are no stored quotes to compare yet.</p>;
   const chartRows = samples.map((sample) => ({
     name: sample.role,
     published: (totalOf(sample.published) ?? 0) / 100,
@@ -34,10 +35,18 @@ export function SamplePreview({ preview, isUpdating }: { preview: PricingPreview
           <caption className="sr-only">Three stored quotes priced with the published list and with this draft</caption>
           <thead className="text-walnut-500">
             <tr>
-              <th scope="col" className="py-1.5 font-medium">Sample quote</th>
-              <th scope="col" className="py-1.5 text-right font-medium">Published</th>
-              <th scope="col" className="py-1.5 text-right font-medium">Draft</th>
-              <th scope="col" className="py-1.5 text-right font-medium">Change</th>
+              <th scope="col" className="py-1.5 font-medium">
+                Sample quote
+              </th>
+              <th scope="col" className="py-1.5 text-right font-medium">
+                Published
+              </th>
+              <th scope="col" className="py-1.5 text-right font-medium">
+                Draft
+              </th>
+              <th scope="col" className="py-1.5 text-right font-medium">
+                Change
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -50,9 +59,19 @@ export function SamplePreview({ preview, isUpdating }: { preview: PricingPreview
                     {sample.isRush ? ', rush' : ''}
                   </span>
                 </th>
-                <td className="py-2 pl-2 text-right tabular-nums">{sample.published.ok ? formatMoney(sample.published.totalCents, currency) : '—'}</td>
-                <td className="py-2 pl-2 text-right tabular-nums">{sample.draft.ok ? formatMoney(sample.draft.totalCents, currency) : <span className="text-madder-700">{sample.draft.reason}</span>}</td>
-                <td className={`py-2 pl-2 text-right font-semibold tabular-nums ${sample.differenceCents && sample.differenceCents > 0 ? 'text-madder-700' : 'text-sage-700'}`}>
+                <td className="py-2 pl-2 text-right tabular-nums">
+                  {sample.published.ok ? formatMoney(sample.published.totalCents, currency) : '—'}
+                </td>
+                <td className="py-2 pl-2 text-right tabular-nums">
+                  {sample.draft.ok ? (
+                    formatMoney(sample.draft.totalCents, currency)
+                  ) : (
+                    <span className="text-madder-700">{sample.draft.reason}</span>
+                  )}
+                </td>
+                <td
+                  className={`py-2 pl-2 text-right font-semibold tabular-nums ${sample.differenceCents && sample.differenceCents > 0 ? 'text-madder-700' : 'text-sage-700'}`}
+                >
                   {sample.differenceCents === null ? '—' : signed(sample.differenceCents, currency)}
                 </td>
               </tr>

@@ -20,7 +20,12 @@ export interface RulesForm {
   taxRateBp: string;
 }
 
-export type MoneyField = 'centsPerThousandStitches' | 'minimumPerPlacementCents' | 'extraHoopingCents' | 'colorChangeCents' | 'artworkSetupCents';
+export type MoneyField =
+  | 'centsPerThousandStitches'
+  | 'minimumPerPlacementCents'
+  | 'extraHoopingCents'
+  | 'colorChangeCents'
+  | 'artworkSetupCents';
 
 // Minor units have two decimals in the currencies the studio takes (USD).
 const toDollars = (cents: number) => (cents / 100).toFixed(2);
@@ -32,15 +37,26 @@ const fromDecimal = (text: string) => (text.trim() === '' ? Number.NaN : Math.ro
 export function toRulesForm(rules: PricingRules): RulesForm {
   return {
     currency: rules.currency,
-    garmentBaseCents: Object.fromEntries(Object.entries(rules.garmentBaseCents).map(([garment, sizes]) => [garment, Object.fromEntries(Object.entries(sizes).map(([size, cents]) => [size, toDollars(cents)]))])),
+    garmentBaseCents: Object.fromEntries(
+      Object.entries(rules.garmentBaseCents).map(([garment, sizes]) => [
+        garment,
+        Object.fromEntries(Object.entries(sizes).map(([size, cents]) => [size, toDollars(cents)])),
+      ]),
+    ),
     centsPerThousandStitches: toDollars(rules.centsPerThousandStitches),
     minimumPerPlacementCents: toDollars(rules.minimumPerPlacementCents),
     extraHoopingCents: toDollars(rules.extraHoopingCents),
     colorChangeCents: toDollars(rules.colorChangeCents),
     artworkSetupCents: toDollars(rules.artworkSetupCents),
-    lettering: { centsPerThousandStitches: toDollars(rules.lettering.centsPerThousandStitches), minimumCents: toDollars(rules.lettering.minimumCents) },
+    lettering: {
+      centsPerThousandStitches: toDollars(rules.lettering.centsPerThousandStitches),
+      minimumCents: toDollars(rules.lettering.minimumCents),
+    },
     rushMultiplierBp: toPercent(rules.rushMultiplierBp - 10_000),
-    quantityBreaks: rules.quantityBreaks.map((bracket) => ({ minQty: String(bracket.minQty), discountBp: toPercent(bracket.discountBp) })),
+    quantityBreaks: rules.quantityBreaks.map((bracket) => ({
+      minQty: String(bracket.minQty),
+      discountBp: toPercent(bracket.discountBp),
+    })),
     taxRateBp: toPercent(rules.taxRateBp),
   };
 }
@@ -49,15 +65,26 @@ export function toRulesForm(rules: PricingRules): RulesForm {
 export function fromRulesForm(form: RulesForm): PricingRules {
   return {
     currency: form.currency.trim().toUpperCase(),
-    garmentBaseCents: Object.fromEntries(Object.entries(form.garmentBaseCents).map(([garment, sizes]) => [garment, Object.fromEntries(Object.entries(sizes).map(([size, text]) => [size, fromDecimal(text)]))])),
+    garmentBaseCents: Object.fromEntries(
+      Object.entries(form.garmentBaseCents).map(([garment, sizes]) => [
+        garment,
+        Object.fromEntries(Object.entries(sizes).map(([size, text]) => [size, fromDecimal(text)])),
+      ]),
+    ),
     centsPerThousandStitches: fromDecimal(form.centsPerThousandStitches),
     minimumPerPlacementCents: fromDecimal(form.minimumPerPlacementCents),
     extraHoopingCents: fromDecimal(form.extraHoopingCents),
     colorChangeCents: fromDecimal(form.colorChangeCents),
     artworkSetupCents: fromDecimal(form.artworkSetupCents),
-    lettering: { centsPerThousandStitches: fromDecimal(form.lettering.centsPerThousandStitches), minimumCents: fromDecimal(form.lettering.minimumCents) },
+    lettering: {
+      centsPerThousandStitches: fromDecimal(form.lettering.centsPerThousandStitches),
+      minimumCents: fromDecimal(form.lettering.minimumCents),
+    },
     rushMultiplierBp: 10_000 + fromDecimal(form.rushMultiplierBp),
-    quantityBreaks: form.quantityBreaks.map((bracket) => ({ minQty: bracket.minQty.trim() === '' ? Number.NaN : Number(bracket.minQty), discountBp: fromDecimal(bracket.discountBp) })),
+    quantityBreaks: form.quantityBreaks.map((bracket) => ({
+      minQty: bracket.minQty.trim() === '' ? Number.NaN : Number(bracket.minQty),
+      discountBp: fromDecimal(bracket.discountBp),
+    })),
     taxRateBp: fromDecimal(form.taxRateBp),
   };
 }

@@ -7,9 +7,14 @@ const sheetPath = (number: string) => `/admin/orders/${encodeURIComponent(number
 export const getProductionSheet = (number: string) => apiRequest(sheetPath(number), productionSheetResponse);
 
 export const productionSheetQuery = (number: string) =>
-  queryOptions({ queryKey: ['admin', 'orders', number, 'production-sheet'], queryFn: () => getProductionSheet(number), retry: false });
+  queryOptions({
+    queryKey: ['admin', 'orders', number, 'production-sheet'],
+    queryFn: () => getProductionSheet(number),
+    retry: false,
+  });
 
 export const useProductionSheet = (number: string) => useQuery(productionSheetQuery(number));
 
 /** The PDF is a plain same-origin download: the browser sends the session cookie and saves the file. */
-export const productionSheetPdfHref = (number: string, paper: PaperSize) => `/api${sheetPath(number)}.pdf?paper=${paper}`;
+export const productionSheetPdfHref = (number: string, paper: PaperSize) =>
+  `/api${sheetPath(number)}.pdf?paper=${paper}`;

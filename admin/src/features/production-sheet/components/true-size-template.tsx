@@ -20,18 +20,53 @@ export function TrueSizeTemplate({ template }: { template: PlacementTemplate }) 
       viewBox={`0 0 ${template.widthMm} ${template.heightMm}`}
       className="block max-w-none bg-white"
     >
-      <rect x={field.xMm} y={field.yMm} width={field.widthMm} height={field.heightMm} fill="none" stroke={FIELD} strokeWidth={0.3} strokeDasharray="2 1" />
-      <text x={field.xMm + 1.5} y={field.yMm + 4} fontSize={3} fill={FIELD}>sewing field</text>
+      <rect
+        x={field.xMm}
+        y={field.yMm}
+        width={field.widthMm}
+        height={field.heightMm}
+        fill="none"
+        stroke={FIELD}
+        strokeWidth={0.3}
+        strokeDasharray="2 1"
+      />
+      <text x={field.xMm + 1.5} y={field.yMm + 4} fontSize={3} fill={FIELD}>
+        sewing field
+      </text>
       {template.outlines.map((outline, i) => (
-        <path key={i} d={outline.d} fill={outline.isFilled ? outline.hex : 'none'} fillOpacity={0.25} stroke={INK} strokeWidth={0.2} />
+        <path
+          key={i}
+          d={outline.d}
+          fill={outline.isFilled ? outline.hex : 'none'}
+          fillOpacity={0.25}
+          stroke={INK}
+          strokeWidth={0.2}
+        />
       ))}
       {template.guideLineYMm !== null && (
-        <line x1={field.xMm} x2={field.xMm + field.widthMm} y1={template.guideLineYMm} y2={template.guideLineYMm} stroke={GUIDE} strokeWidth={0.2} strokeDasharray="1 1" />
+        <line
+          x1={field.xMm}
+          x2={field.xMm + field.widthMm}
+          y1={template.guideLineYMm}
+          y2={template.guideLineYMm}
+          stroke={GUIDE}
+          strokeWidth={0.2}
+          strokeDasharray="1 1"
+        />
       )}
       {template.hemLineYMm !== null && (
         <>
-          <line x1={field.xMm} x2={field.xMm + field.widthMm} y1={template.hemLineYMm} y2={template.hemLineYMm} stroke={INK} strokeWidth={0.35} />
-          <text x={field.xMm + 1.5} y={template.hemLineYMm + 4} fontSize={3} fill={INK}>hem edge</text>
+          <line
+            x1={field.xMm}
+            x2={field.xMm + field.widthMm}
+            y1={template.hemLineYMm}
+            y2={template.hemLineYMm}
+            stroke={INK}
+            strokeWidth={0.35}
+          />
+          <text x={field.xMm + 1.5} y={template.hemLineYMm + 4} fontSize={3} fill={INK}>
+            hem edge
+          </text>
         </>
       )}
       {template.joinMarksXMm.map((x) => (
@@ -53,7 +88,14 @@ export function TrueSizeTemplate({ template }: { template: PlacementTemplate }) 
 export function CheckSquare() {
   return (
     <div className="flex items-start gap-3 text-sm">
-      <svg role="img" aria-label="50 mm check square" width="50mm" height="50mm" viewBox="0 0 50 50" className="shrink-0">
+      <svg
+        role="img"
+        aria-label="50 mm check square"
+        width="50mm"
+        height="50mm"
+        viewBox="0 0 50 50"
+        className="shrink-0"
+      >
         <rect x={0.15} y={0.15} width={49.7} height={49.7} fill="none" stroke={INK} strokeWidth={0.3} />
       </svg>
       <p className="max-w-xs text-walnut-700">

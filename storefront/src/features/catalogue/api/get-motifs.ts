@@ -4,6 +4,7 @@ import { apiRequest } from '@ui/api-client.ts';
 
 export const getMotifs = () => apiRequest('/catalogue/motifs', motifListResponse).then((body) => body.motifs);
 
-export const motifsQuery = () => queryOptions({ queryKey: ['catalogue', 'motifs'], queryFn: getMotifs, staleTime: 5 * 60_000 });
+export const motifsQuery = () =>
+  queryOptions({ queryKey: ['catalogue', 'motifs'], queryFn: getMotifs, staleTime: 5 * 60_000 });
 
 export const useMotifs = () => useQuery(motifsQuery());

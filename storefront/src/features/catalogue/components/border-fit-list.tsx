@@ -36,7 +36,8 @@ export function BorderFitList({
               <h3 className="font-medium">{motif.name}</h3>
               {fit.ok ? (
                 <p className="text-sm text-walnut-700">
-                  {fit.count} repeats, each {formatLength(fit.repeatWidthMm)} ({Math.round(fit.scale * 1000) / 10} % of its drawn size)
+                  {fit.count} repeats, each {formatLength(fit.repeatWidthMm)} ({Math.round(fit.scale * 1000) / 10} % of
+                  its drawn size)
                 </p>
               ) : (
                 <p className="text-sm text-madder-700">Doesn't fit this size: {fit.reason}</p>
@@ -44,7 +45,13 @@ export function BorderFitList({
             </div>
             {fit.ok && (
               <div className="mt-3">
-                <HemBorderStrip motif={motif} fit={fit} circumferenceMm={circumferenceMm} frontMm={size.hemFrontMm} fabricHex={fabricHex} />
+                <HemBorderStrip
+                  motif={motif}
+                  fit={fit}
+                  circumferenceMm={circumferenceMm}
+                  frontMm={size.hemFrontMm}
+                  fabricHex={fabricHex}
+                />
                 <div className="mt-3">{priceOf(motif)}</div>
               </div>
             )}

@@ -11,13 +11,28 @@ const kindChoices: { value: CatalogueKind | undefined; label: string }[] = [
 ];
 
 /** Narrows the embroidery to one garment and one kind; both choices live in the address. */
-export function CatalogueFilters({ garments, filter, onChange }: { garments: GarmentSummary[]; filter: CatalogueFilter; onChange: (filter: CatalogueFilter) => void }) {
+export function CatalogueFilters({
+  garments,
+  filter,
+  onChange,
+}: {
+  garments: GarmentSummary[];
+  filter: CatalogueFilter;
+  onChange: (filter: CatalogueFilter) => void;
+}) {
   const garmentId = useId();
   const kindName = useId();
   return (
-    <form role="search" aria-label="Filter the embroidery" className="flex flex-col gap-4 rounded-card bg-linen-100 p-4 sm:flex-row sm:items-end sm:gap-6" onSubmit={(event) => event.preventDefault()}>
+    <form
+      role="search"
+      aria-label="Filter the embroidery"
+      className="flex flex-col gap-4 rounded-card bg-linen-100 p-4 sm:flex-row sm:items-end sm:gap-6"
+      onSubmit={(event) => event.preventDefault()}
+    >
       <div className="flex flex-col gap-1.5">
-        <label htmlFor={garmentId} className="text-sm font-medium">For the garment</label>
+        <label htmlFor={garmentId} className="text-sm font-medium">
+          For the garment
+        </label>
         <select
           id={garmentId}
           value={filter.garment ?? ''}
@@ -26,7 +41,9 @@ export function CatalogueFilters({ garments, filter, onChange }: { garments: Gar
         >
           <option value="">Any garment</option>
           {garments.map((garment) => (
-            <option key={garment.id} value={garment.slug}>{garment.name}</option>
+            <option key={garment.id} value={garment.slug}>
+              {garment.name}
+            </option>
           ))}
         </select>
       </div>
@@ -34,7 +51,12 @@ export function CatalogueFilters({ garments, filter, onChange }: { garments: Gar
         <legend className="text-sm font-medium">Kind</legend>
         <div className="mt-1.5 flex flex-wrap gap-2">
           {kindChoices.map((choice) => (
-            <ChoiceChip key={choice.label} name={kindName} checked={filter.kind === choice.value} onSelect={() => onChange({ ...filter, kind: choice.value })}>
+            <ChoiceChip
+              key={choice.label}
+              name={kindName}
+              checked={filter.kind === choice.value}
+              onSelect={() => onChange({ ...filter, kind: choice.value })}
+            >
               {choice.label}
             </ChoiceChip>
           ))}

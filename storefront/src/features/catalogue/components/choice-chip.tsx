@@ -1,7 +1,19 @@
 import type { ReactNode } from 'react';
 
 /** A thumb-sized radio chip: a real radio input (arrow keys move within its group) drawn as a pill. */
-export function ChoiceChip({ name, value, checked, onSelect, children }: { name: string; value?: string | number; checked: boolean; onSelect: () => void; children: ReactNode }) {
+export function ChoiceChip({
+  name,
+  value,
+  checked,
+  onSelect,
+  children,
+}: {
+  name: string;
+  value?: string | number;
+  checked: boolean;
+  onSelect: () => void;
+  children: ReactNode;
+}) {
   return (
     <label className="cursor-pointer">
       <input type="radio" name={name} value={value} checked={checked} onChange={onSelect} className="peer sr-only" />

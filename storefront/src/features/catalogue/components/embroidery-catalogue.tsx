@@ -16,11 +16,31 @@ const sectionNames: Record<CatalogueKind, { title: string; plural: string; intro
     plural: 'borders',
     intro: 'One small picture repeated end to end round a hem. We resize it a touch so whole repeats meet exactly.',
   },
-  single: { title: 'Single motifs', plural: 'single motifs', intro: 'One picture on its own: on a yoke, a bib or a brim.' },
-  lettering: { title: 'Lettering', plural: 'lettering fonts', intro: 'A name or a short word, stitched in one of these faces.' },
+  single: {
+    title: 'Single motifs',
+    plural: 'single motifs',
+    intro: 'One picture on its own: on a yoke, a bib or a brim.',
+  },
+  lettering: {
+    title: 'Lettering',
+    plural: 'lettering fonts',
+    intro: 'A name or a short word, stitched in one of these faces.',
+  },
 };
 
-function CatalogueSection({ kind, count, garmentName, onShowAll, children }: { kind: CatalogueKind; count: number; garmentName: string | undefined; onShowAll: () => void; children: ReactNode }) {
+function CatalogueSection({
+  kind,
+  count,
+  garmentName,
+  onShowAll,
+  children,
+}: {
+  kind: CatalogueKind;
+  count: number;
+  garmentName: string | undefined;
+  onShowAll: () => void;
+  children: ReactNode;
+}) {
   const headingId = useId();
   const { title, plural, intro } = sectionNames[kind];
   return (
@@ -33,7 +53,13 @@ function CatalogueSection({ kind, count, garmentName, onShowAll, children }: { k
         {count > 0 ? (
           children
         ) : (
-          <EmptyState title={garmentName ? `No ${plural} suit the ${garmentName.toLowerCase()}.` : `The studio has no ${plural} on offer right now.`}>
+          <EmptyState
+            title={
+              garmentName
+                ? `No ${plural} suit the ${garmentName.toLowerCase()}.`
+                : `The studio has no ${plural} on offer right now.`
+            }
+          >
             {garmentName && (
               <button type="button" onClick={onShowAll} className="min-h-11 text-madder-600 underline">
                 Show {plural} for every garment
@@ -74,10 +100,13 @@ export function EmbroideryCatalogue({
 
   return (
     <div>
-      {(showsKind(filter, 'border') || showsKind(filter, 'single')) && <p className="mt-4 max-w-2xl text-sm text-walnut-700">
-        Every picture here is stitched from the studio's own machine file. Its <strong className="font-medium">stitch count</strong> is
-        how many times the needle goes through the fabric: more stitches mean a fuller picture and a little longer on the machine.
-      </p>}
+      {(showsKind(filter, 'border') || showsKind(filter, 'single')) && (
+        <p className="mt-4 max-w-2xl text-sm text-walnut-700">
+          Every picture here is stitched from the studio's own machine file. Its{' '}
+          <strong className="font-medium">stitch count</strong> is how many times the needle goes through the fabric:
+          more stitches mean a fuller picture and a little longer on the machine.
+        </p>
+      )}
       {(['border', 'single'] as const)
         .filter((kind) => showsKind(filter, kind))
         .map((kind) => {
@@ -96,7 +125,12 @@ export function EmbroideryCatalogue({
         <CatalogueSection kind="lettering" count={shownFonts.length} {...sectionProps}>
           <label className="mb-4 flex max-w-sm flex-col gap-1.5 text-sm font-medium">
             Try a name
-            <input value={sample} maxLength={MAX_SAMPLE_LENGTH} onChange={(event) => setSample(event.target.value)} className="min-h-11 rounded-lg border border-linen-300 bg-white px-3 text-base font-normal" />
+            <input
+              value={sample}
+              maxLength={MAX_SAMPLE_LENGTH}
+              onChange={(event) => setSample(event.target.value)}
+              className="min-h-11 rounded-lg border border-linen-300 bg-white px-3 text-base font-normal"
+            />
           </label>
           <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
             {shownFonts.map((font) => (

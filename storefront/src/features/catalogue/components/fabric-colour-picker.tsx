@@ -3,7 +3,15 @@ import type { GarmentSummary } from '@server/contracts/catalogue.ts';
 type FabricColour = GarmentSummary['colours'][number];
 
 /** Thumb-sized swatches of the garment's fabric colours; the chosen one is pressed. */
-export function FabricColourPicker({ colours, selected, onSelect }: { colours: FabricColour[]; selected: FabricColour | undefined; onSelect: (id: number) => void }) {
+export function FabricColourPicker({
+  colours,
+  selected,
+  onSelect,
+}: {
+  colours: FabricColour[];
+  selected: FabricColour | undefined;
+  onSelect: (id: number) => void;
+}) {
   return (
     <fieldset>
       <legend className="font-medium">Fabric colour{selected ? `: ${selected.name}` : ''}</legend>

@@ -9,11 +9,16 @@ export function FontSample({ font, sample }: { font: LetteringFontSummary; sampl
   return (
     <li className="rounded-card border border-linen-200 bg-white p-4">
       <h3 className="text-sm font-medium text-walnut-500">{font.name}</h3>
-      <p className="mt-1 truncate text-4xl leading-snug text-walnut-900" style={{ fontFamily: `"${font.fontFamily}", cursive` }} data-font-family={font.fontFamily}>
+      <p
+        className="mt-1 truncate text-4xl leading-snug text-walnut-900"
+        style={{ fontFamily: `"${font.fontFamily}", cursive` }}
+        data-font-family={font.fontFamily}
+      >
         {sample}
       </p>
       <p className="mt-2 text-xs text-walnut-500">
-        Letters from {formatLength(font.minHeightMm)} to {formatLength(font.maxHeightMm)} tall (the height of a capital H)
+        Letters from {formatLength(font.minHeightMm)} to {formatLength(font.maxHeightMm)} tall (the height of a capital
+        H)
       </p>
     </li>
   );

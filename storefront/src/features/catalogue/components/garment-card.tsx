@@ -16,7 +16,12 @@ export function GarmentCard({ garment, href }: { garment: GarmentSummary; href: 
             </span>
             <span className="flex gap-1" aria-label={`${garment.colours.length} fabric colours`}>
               {garment.colours.map((colour) => (
-                <span key={colour.id} title={colour.name} className="h-4 w-4 rounded-full border border-walnut-900/15" style={{ backgroundColor: colour.hex }} />
+                <span
+                  key={colour.id}
+                  title={colour.name}
+                  className="h-4 w-4 rounded-full border border-walnut-900/15"
+                  style={{ backgroundColor: colour.hex }}
+                />
               ))}
             </span>
           </div>

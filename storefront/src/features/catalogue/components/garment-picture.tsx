@@ -15,7 +15,11 @@ export function GarmentPicture({
 }) {
   return (
     <div className={`flex items-center justify-center rounded-card bg-linen-100 p-4 ${className}`}>
-      <img src={dyedMockupSrc(garment.mockupSvg, colourHex)} alt={`Drawing of the ${garment.name}`} className={`h-full w-auto drop-shadow-sm ${imageClassName}`} />
+      <img
+        src={dyedMockupSrc(garment.mockupSvg, colourHex)}
+        alt={`Drawing of the ${garment.name}`}
+        className={`h-full w-auto drop-shadow-sm ${imageClassName}`}
+      />
     </div>
   );
 }

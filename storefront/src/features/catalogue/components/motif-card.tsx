@@ -15,7 +15,9 @@ export function MotifCard({ motif }: { motif: MotifSummary }) {
       <div className="flex flex-1 flex-col gap-2 p-4">
         <div className="flex flex-wrap items-baseline justify-between gap-2">
           <h3 className="font-semibold">{motif.name}</h3>
-          <span className="rounded-full bg-sage-50 px-2.5 py-0.5 text-xs font-medium text-sage-700">{kindLabels[motif.kind]}</span>
+          <span className="rounded-full bg-sage-50 px-2.5 py-0.5 text-xs font-medium text-sage-700">
+            {kindLabels[motif.kind]}
+          </span>
         </div>
         <dl className="grid gap-1 text-sm text-walnut-700">
           <div>
@@ -33,7 +35,8 @@ export function MotifCard({ motif }: { motif: MotifSummary }) {
           <div>
             <dt className="inline text-walnut-500">Stitches: </dt>
             <dd className="inline">
-              about {motif.stitchCount.toLocaleString('en-US')} in {motif.colourCount} thread {motif.colourCount === 1 ? 'colour' : 'colours'}
+              about {motif.stitchCount.toLocaleString('en-US')} in {motif.colourCount} thread{' '}
+              {motif.colourCount === 1 ? 'colour' : 'colours'}
             </dd>
           </div>
         </dl>

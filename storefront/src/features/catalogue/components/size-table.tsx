@@ -9,7 +9,15 @@ const lengthOrDash = (mm: number | null) => (mm === null ? '—' : formatLength(
  * Every size with the garment's own measurements, in millimetres and inches, the chosen size marked. The hem columns
  * show only on garments that take a hem border; the table scrolls sideways on a narrow phone rather than squeezing.
  */
-export function SizeTable({ garmentName, sizes, selectedId }: { garmentName: string; sizes: SizeDetail[]; selectedId: number | undefined }) {
+export function SizeTable({
+  garmentName,
+  sizes,
+  selectedId,
+}: {
+  garmentName: string;
+  sizes: SizeDetail[];
+  selectedId: number | undefined;
+}) {
   const hasHem = sizes.some((size) => size.hemCircumferenceMm !== null);
   const hasChest = sizes.some((size) => size.chestMm !== null);
   const hasLength = sizes.some((size) => size.lengthMm !== null);
@@ -20,16 +28,30 @@ export function SizeTable({ garmentName, sizes, selectedId }: { garmentName: str
     { heading: 'Hem, all round', cell: (size) => lengthOrDash(size.hemCircumferenceMm), isShown: hasHem },
   ];
   const shown = columns.filter((column) => column.isShown);
-  if (shown.length === 0) return <p className="text-sm text-walnut-700">One size fits as labelled; ask the studio if you need a measurement.</p>;
+  if (shown.length === 0)
+    return (
+      <p className="text-sm text-walnut-700">One size fits as labelled; ask the studio if you need a measurement.</p>
+    );
   return (
-    <div role="region" aria-label={`Sizes of the ${garmentName.toLowerCase()}`} tabIndex={0} className="overflow-x-auto rounded-card border border-linen-200 bg-white">
+    <div
+      role="region"
+      aria-label={`Sizes of the ${garmentName.toLowerCase()}`}
+      tabIndex={0}
+      className="overflow-x-auto rounded-card border border-linen-200 bg-white"
+    >
       <table className="w-full min-w-[34rem] text-left text-sm">
-        <caption className="sr-only">Measurements of each size of the {garmentName.toLowerCase()}, in millimetres and inches</caption>
+        <caption className="sr-only">
+          Measurements of each size of the {garmentName.toLowerCase()}, in millimetres and inches
+        </caption>
         <thead className="bg-linen-100 text-walnut-700">
           <tr>
-            <th scope="col" className="px-3 py-2 font-medium">Size</th>
+            <th scope="col" className="px-3 py-2 font-medium">
+              Size
+            </th>
             {shown.map((column) => (
-              <th key={column.heading} scope="col" className="px-3 py-2 font-medium">{column.heading}</th>
+              <th key={column.heading} scope="col" className="px-3 py-2 font-medium">
+                {column.heading}
+              </th>
             ))}
           </tr>
         </thead>
@@ -43,7 +65,9 @@ export function SizeTable({ garmentName, sizes, selectedId }: { garmentName: str
                   {isChosen && <span className="ml-2 text-xs font-normal text-madder-700"> (chosen)</span>}
                 </th>
                 {shown.map((column) => (
-                  <td key={column.heading} className="whitespace-nowrap px-3 py-2">{column.cell(size)}</td>
+                  <td key={column.heading} className="whitespace-nowrap px-3 py-2">
+                    {column.cell(size)}
+                  </td>
                 ))}
               </tr>
             );

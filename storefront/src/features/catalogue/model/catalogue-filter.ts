@@ -35,4 +35,5 @@ export function writeCatalogueFilter(params: URLSearchParams, filter: CatalogueF
 }
 
 /** Whether a section of the catalogue shows under the filter. */
-export const showsKind = (filter: CatalogueFilter, kind: CatalogueKind) => filter.kind === undefined || filter.kind === kind;
+export const showsKind = (filter: CatalogueFilter, kind: CatalogueKind) =>
+  filter.kind === undefined || filter.kind === kind;

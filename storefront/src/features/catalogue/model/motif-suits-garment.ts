@@ -12,14 +12,22 @@ const HEM_ZONE = 'hem';
 export function motifSuitsGarment(motif: MotifSummary, garment: GarmentSummary): boolean {
   if (motif.kind === 'border') {
     return garment.sizes.some(
-      (size) => size.hemCircumferenceMm !== null && fitMotifBorder(motif, { runLengthMm: size.hemCircumferenceMm, closed: true }).ok,
+      (size) =>
+        size.hemCircumferenceMm !== null &&
+        fitMotifBorder(motif, { runLengthMm: size.hemCircumferenceMm, closed: true }).ok,
     );
   }
   const smallest = motif.minScalePct / 100;
   return garment.sizes.some((size) =>
-    size.zones.some((zone) => zone.code !== HEM_ZONE && motif.widthMm * smallest <= zone.widthMm && motif.heightMm * smallest <= zone.heightMm),
+    size.zones.some(
+      (zone) =>
+        zone.code !== HEM_ZONE &&
+        motif.widthMm * smallest <= zone.widthMm &&
+        motif.heightMm * smallest <= zone.heightMm,
+    ),
   );
 }
 
 /** Whether a garment takes lettering: it has a place other than the hem for a name. */
-export const garmentTakesLettering = (garment: GarmentSummary) => garment.sizes.some((size) => size.zones.some((zone) => zone.code !== HEM_ZONE));
+export const garmentTakesLettering = (garment: GarmentSummary) =>
+  garment.sizes.some((size) => size.zones.some((zone) => zone.code !== HEM_ZONE));

@@ -3,9 +3,13 @@ import { checkoutStartedResponse, type PlaceOrderRequest } from '@server/contrac
 import { apiRequest } from '@ui/api-client.ts';
 
 /** Places the order from a stored quote; the answer is the payment page to go to. */
-export const placeOrder = (request: PlaceOrderRequest) => apiRequest('/orders', checkoutStartedResponse, { method: 'POST', body: request });
+export const placeOrder = (request: PlaceOrderRequest) =>
+  apiRequest('/orders', checkoutStartedResponse, { method: 'POST', body: request });
 
 export function usePlaceOrder() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: placeOrder, onSuccess: () => queryClient.invalidateQueries({ queryKey: ['orders'] }) });
+  return useMutation({
+    mutationFn: placeOrder,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['orders'] }),
+  });
 }

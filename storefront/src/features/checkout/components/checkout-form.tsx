@@ -24,15 +24,35 @@ interface CheckoutFormProps {
   canSubmit: boolean;
 }
 
-const inputClass = 'mt-1 block min-h-11 w-full rounded-lg border border-linen-300 bg-white px-3 aria-invalid:border-madder-600';
-const dayName = (date: string) => new Date(`${date}T12:00:00Z`).toLocaleDateString('en-US', { weekday: 'long', month: 'long', day: 'numeric', timeZone: 'UTC' });
+const inputClass =
+  'mt-1 block min-h-11 w-full rounded-lg border border-linen-300 bg-white px-3 aria-invalid:border-madder-600';
+const dayName = (date: string) =>
+  new Date(`${date}T12:00:00Z`).toLocaleDateString('en-US', {
+    weekday: 'long',
+    month: 'long',
+    day: 'numeric',
+    timeZone: 'UTC',
+  });
 
 /** The date, address and note, checked with the same contract the server uses; server messages appear in place. */
-export function CheckoutForm({ readyDates, today, onNeededByChange, onSubmit, serverFields, isSubmitting, summary, canSubmit }: CheckoutFormProps) {
+export function CheckoutForm({
+  readyDates,
+  today,
+  onNeededByChange,
+  onSubmit,
+  serverFields,
+  isSubmitting,
+  summary,
+  canSubmit,
+}: CheckoutFormProps) {
   const id = useId();
   const form = useForm<CheckoutFieldsInput, unknown, CheckoutFields>({
     resolver: zodResolver(checkoutFields),
-    defaultValues: { neededBy: '', shipTo: { name: '', line1: '', line2: '', city: '', region: '', postalCode: '', countryCode: 'US', phone: '' }, note: '' },
+    defaultValues: {
+      neededBy: '',
+      shipTo: { name: '', line1: '', line2: '', city: '', region: '', postalCode: '', countryCode: 'US', phone: '' },
+      note: '',
+    },
   });
   const { register, formState, setError, watch } = form;
   const neededBy = watch('neededBy');
@@ -40,7 +60,8 @@ export function CheckoutForm({ readyDates, today, onNeededByChange, onSubmit, se
   useEffect(() => onNeededByChange(neededBy), [neededBy, onNeededByChange]);
   useEffect(() => {
     for (const [path, message] of Object.entries(serverFields ?? {})) {
-      if (path === 'neededBy' || path === 'note' || path.startsWith('shipTo.')) setError(path as FieldPath<CheckoutFieldsInput>, { message });
+      if (path === 'neededBy' || path === 'note' || path.startsWith('shipTo.'))
+        setError(path as FieldPath<CheckoutFieldsInput>, { message });
     }
   }, [serverFields, setError]);
 
@@ -50,7 +71,11 @@ export function CheckoutForm({ readyDates, today, onNeededByChange, onSubmit, se
     for (const part of parts) node = (node as Record<string, unknown> | undefined)?.[part];
     return (node as { message?: string } | undefined)?.message;
   };
-  const field = (path: FieldPath<CheckoutFieldsInput>, label: string, options: { autoComplete?: string; type?: string; optional?: boolean; className?: string } = {}) => {
+  const field = (
+    path: FieldPath<CheckoutFieldsInput>,
+    label: string,
+    options: { autoComplete?: string; type?: string; optional?: boolean; className?: string } = {},
+  ) => {
     const error = errorOf(path);
     const inputId = `${id}-${path}`;
     return (
@@ -59,8 +84,20 @@ export function CheckoutForm({ readyDates, today, onNeededByChange, onSubmit, se
           {label}
           {options.optional && <span className="font-normal text-walnut-500"> (optional)</span>}
         </label>
-        <input id={inputId} type={options.type ?? 'text'} autoComplete={options.autoComplete} aria-invalid={error ? true : undefined} aria-describedby={error ? `${inputId}-error` : undefined} className={inputClass} {...register(path)} />
-        {error && <p id={`${inputId}-error`} className="mt-1 text-sm text-madder-700">{error}</p>}
+        <input
+          id={inputId}
+          type={options.type ?? 'text'}
+          autoComplete={options.autoComplete}
+          aria-invalid={error ? true : undefined}
+          aria-describedby={error ? `${inputId}-error` : undefined}
+          className={inputClass}
+          {...register(path)}
+        />
+        {error && (
+          <p id={`${inputId}-error`} className="mt-1 text-sm text-madder-700">
+            {error}
+          </p>
+        )}
       </div>
     );
   };
@@ -73,13 +110,31 @@ export function CheckoutForm({ readyDates, today, onNeededByChange, onSubmit, se
         <legend className="text-lg font-semibold">When do you need it?</legend>
         {readyDates && (
           <p className="text-sm text-walnut-700">
-            Ready by <strong className="font-semibold">{dayName(readyDates.earliestReadyDate)}</strong> at the usual pace, or from {dayName(readyDates.earliestRushDate)} as a rush.
+            Ready by <strong className="font-semibold">{dayName(readyDates.earliestReadyDate)}</strong> at the usual
+            pace, or from {dayName(readyDates.earliestRushDate)} as a rush.
           </p>
         )}
-        <label htmlFor={`${id}-neededBy`} className="text-sm font-medium">Needed by</label>
-        <input id={`${id}-neededBy`} type="date" min={readyDates?.earliestRushDate ?? today} aria-invalid={neededByError ? true : undefined} aria-describedby={`${id}-neededBy-note`} className={`${inputClass} sm:w-64`} {...register('neededBy')} />
-        <p id={`${id}-neededBy-note`} role="status" className={`text-sm ${neededByError ? 'text-madder-700' : isInsideLeadTime ? 'font-medium text-madder-700' : 'text-walnut-500'}`}>
-          {neededByError ?? (isInsideLeadTime ? 'That is sooner than our usual time, so this is a rush order: the rush charge is added to the price.' : 'Give yourself a few days for the post.')}
+        <label htmlFor={`${id}-neededBy`} className="text-sm font-medium">
+          Needed by
+        </label>
+        <input
+          id={`${id}-neededBy`}
+          type="date"
+          min={readyDates?.earliestRushDate ?? today}
+          aria-invalid={neededByError ? true : undefined}
+          aria-describedby={`${id}-neededBy-note`}
+          className={`${inputClass} sm:w-64`}
+          {...register('neededBy')}
+        />
+        <p
+          id={`${id}-neededBy-note`}
+          role="status"
+          className={`text-sm ${neededByError ? 'text-madder-700' : isInsideLeadTime ? 'font-medium text-madder-700' : 'text-walnut-500'}`}
+        >
+          {neededByError ??
+            (isInsideLeadTime
+              ? 'That is sooner than our usual time, so this is a rush order: the rush charge is added to the price.'
+              : 'Give yourself a few days for the post.')}
         </p>
       </fieldset>
 
@@ -87,7 +142,11 @@ export function CheckoutForm({ readyDates, today, onNeededByChange, onSubmit, se
         <legend className="mb-2 text-lg font-semibold">Where should we send it?</legend>
         {field('shipTo.name', 'Name', { autoComplete: 'name', className: 'sm:col-span-2' })}
         {field('shipTo.line1', 'Street address', { autoComplete: 'address-line1', className: 'sm:col-span-2' })}
-        {field('shipTo.line2', 'Flat, suite or building', { autoComplete: 'address-line2', optional: true, className: 'sm:col-span-2' })}
+        {field('shipTo.line2', 'Flat, suite or building', {
+          autoComplete: 'address-line2',
+          optional: true,
+          className: 'sm:col-span-2',
+        })}
         {field('shipTo.city', 'Town or city', { autoComplete: 'address-level2' })}
         {field('shipTo.region', 'State, county or region', { autoComplete: 'address-level1' })}
         {field('shipTo.postalCode', 'Postal code', { autoComplete: 'postal-code' })}
@@ -96,8 +155,17 @@ export function CheckoutForm({ readyDates, today, onNeededByChange, onSubmit, se
       </fieldset>
 
       <div>
-        <label htmlFor={`${id}-note`} className="text-lg font-semibold">A note to the studio <span className="text-sm font-normal text-walnut-500">(optional)</span></label>
-        <textarea id={`${id}-note`} rows={3} maxLength={1000} className="mt-1 block w-full rounded-lg border border-linen-300 bg-white p-3" placeholder="The occasion, how the name is said, anything we should know" {...register('note')} />
+        <label htmlFor={`${id}-note`} className="text-lg font-semibold">
+          A note to the studio <span className="text-sm font-normal text-walnut-500">(optional)</span>
+        </label>
+        <textarea
+          id={`${id}-note`}
+          rows={3}
+          maxLength={1000}
+          className="mt-1 block w-full rounded-lg border border-linen-300 bg-white p-3"
+          placeholder="The occasion, how the name is said, anything we should know"
+          {...register('note')}
+        />
         {errorOf('note') && <p className="mt-1 text-sm text-madder-700">{errorOf('note')}</p>}
       </div>
 
@@ -105,7 +173,9 @@ export function CheckoutForm({ readyDates, today, onNeededByChange, onSubmit, se
       <Button type="submit" className="w-full sm:w-auto" disabled={!canSubmit || isSubmitting}>
         {isSubmitting ? 'Opening the payment page…' : 'Continue to payment'}
       </Button>
-      <p className="text-xs text-walnut-500">Your card is only held now. We charge it after you approve the proof of your design.</p>
+      <p className="text-xs text-walnut-500">
+        Your card is only held now. We charge it after you approve the proof of your design.
+      </p>
     </form>
   );
 }

@@ -27,7 +27,15 @@ export function useCheckoutQuote(design: OrderedDesign | undefined, quantity: nu
   useEffect(() => {
     if (!design) return;
     const timer = setTimeout(() => {
-      const request = { designId: design.id, garmentId: design.garmentId, sizeId: design.sizeId, colourId: design.colourId, document: design.document, quantity, isRush };
+      const request = {
+        designId: design.id,
+        garmentId: design.garmentId,
+        sizeId: design.sizeId,
+        colourId: design.colourId,
+        document: design.document,
+        quantity,
+        isRush,
+      };
       mutate(request, { onSuccess: (quote) => setPriced({ key, quote }) });
     }, SETTLE_MS);
     return () => clearTimeout(timer);

@@ -15,7 +15,8 @@ function errorOf(request: XMLHttpRequest): ApiError {
     // Not JSON: a proxy's page, say; the status tells what there is to tell.
   }
   const parsed = apiErrorBody.safeParse(body);
-  if (parsed.success) return new ApiError(parsed.data.error.kind, parsed.data.error.message, request.status, parsed.data.error.fields);
+  if (parsed.success)
+    return new ApiError(parsed.data.error.kind, parsed.data.error.message, request.status, parsed.data.error.fields);
   if (request.status === 413) return new ApiError('too-large', 'That file is too large.', 413);
   return new ApiError('server', `The shop answered with an unexpected error (${request.status}).`, request.status);
 }
@@ -39,7 +40,8 @@ export function uploadArtwork(file: File, onProgress: UploadProgress): Promise<A
       if (parsed.success) resolve(parsed.data.artwork);
       else reject(new ApiError('server', 'The shop sent back something we could not read.', request.status));
     });
-    const offline = () => reject(new ApiError('network', 'We could not reach the shop. Check your connection and try again.', 0));
+    const offline = () =>
+      reject(new ApiError('network', 'We could not reach the shop. Check your connection and try again.', 0));
     request.addEventListener('error', offline);
     request.addEventListener('abort', offline);
     const form = new FormData();
@@ -54,7 +56,10 @@ export function useUploadArtwork(onProgress: UploadProgress) {
   return useMutation({
     mutationFn: (file: File) => uploadArtwork(file, onProgress),
     onSuccess: (artwork) => {
-      queryClient.setQueryData(artworksQuery().queryKey, (current: ArtworkUpload[] | undefined) => [artwork, ...(current ?? []).filter((known) => known.id !== artwork.id)]);
+      queryClient.setQueryData(artworksQuery().queryKey, (current: ArtworkUpload[] | undefined) => [
+        artwork,
+        ...(current ?? []).filter((known) => known.id !== artwork.id),
+      ]);
     },
   });
 }

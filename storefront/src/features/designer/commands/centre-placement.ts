@@ -22,6 +22,9 @@ export const centrePlacement: EditCommand<CentreArgs, 'centre-placement'> = {
     if (!placement || !isItem(placement)) return state;
     const zone = zoneOf(sizeOf(setting, state.sizeId), placement.zone);
     if (!zone) return state;
-    return movePlacement(setting, state, placement.id, { centerXMm: zone.xMm + zone.widthMm / 2, centerYMm: placement.centerYMm });
+    return movePlacement(setting, state, placement.id, {
+      centerXMm: zone.xMm + zone.widthMm / 2,
+      centerYMm: placement.centerYMm,
+    });
   },
 };

@@ -61,7 +61,12 @@ export function commandOf<K extends CommandId>(id: K): CommandOf<K> {
 }
 
 /** Runs a command on the history: undo and redo step through it; edits make an entry or only preview. */
-export function runCommand<K extends CommandId>(history: DesignerHistory, id: K, args: CommandArgs<K>, setting: DesignSetting): DesignerHistory {
+export function runCommand<K extends CommandId>(
+  history: DesignerHistory,
+  id: K,
+  args: CommandArgs<K>,
+  setting: DesignSetting,
+): DesignerHistory {
   // The signature pairs each id with its own arguments; a lookup by id cannot carry that pairing, so it widens here.
   const command = byId.get(id) as EditCommand<unknown> | HistoryCommand;
   if ('step' in command) return command.step(history);

@@ -17,5 +17,6 @@ export const dragPlacement: EditCommand<PlacementTarget, 'drag-placement'> = {
   id: 'drag-placement',
   label: 'Drag',
   isRecorded: false,
-  perform: (state, { id, ...to }, setting) => movePlacement(setting, state, id, snapToCentreLine(setting, state, id, to)),
+  perform: (state, { id, ...to }, setting) =>
+    movePlacement(setting, state, id, snapToCentreLine(setting, state, id, to)),
 };

@@ -8,5 +8,6 @@ export const movePlacement: EditCommand<PlacementTarget, 'move-placement'> = {
   id: 'move-placement',
   label: 'Move',
   isRecorded: true,
-  perform: (state, { id, ...to }, setting) => moveWithinZone(setting, state, id, snapToCentreLine(setting, state, id, to)),
+  perform: (state, { id, ...to }, setting) =>
+    moveWithinZone(setting, state, id, snapToCentreLine(setting, state, id, to)),
 };

@@ -31,6 +31,9 @@ export const nudgePlacement: EditCommand<NudgeArgs, 'nudge-placement'> = {
     const placement = findPlacement(state, args.id ?? state.selectedId);
     if (!placement) return state;
     const centre = centreOf(setting, state, placement);
-    return movePlacement(setting, state, placement.id, { centerXMm: centre.centerXMm + args.dxMm, centerYMm: centre.centerYMm + args.dyMm });
+    return movePlacement(setting, state, placement.id, {
+      centerXMm: centre.centerXMm + args.dxMm,
+      centerYMm: centre.centerYMm + args.dyMm,
+    });
   },
 };

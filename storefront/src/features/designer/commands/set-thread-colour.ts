@@ -17,8 +17,18 @@ export const setThreadColour: EditCommand<SetThreadColourArgs, 'set-thread-colou
   perform(state, { id, index, thread }) {
     const placement = findPlacement(state, id);
     if (!placement || placement.kind === 'artwork') return state;
-    if (placement.kind === 'lettering') return index !== 0 || placement.thread === thread ? state : replacePlacement(state, { ...placement, thread });
-    if (!Number.isInteger(index) || index < 0 || index >= placement.threads.length || placement.threads[index] === thread) return state;
-    return replacePlacement(state, { ...placement, threads: placement.threads.map((code, at) => (at === index ? thread : code)) });
+    if (placement.kind === 'lettering')
+      return index !== 0 || placement.thread === thread ? state : replacePlacement(state, { ...placement, thread });
+    if (
+      !Number.isInteger(index) ||
+      index < 0 ||
+      index >= placement.threads.length ||
+      placement.threads[index] === thread
+    )
+      return state;
+    return replacePlacement(state, {
+      ...placement,
+      threads: placement.threads.map((code, at) => (at === index ? thread : code)),
+    });
   },
 };

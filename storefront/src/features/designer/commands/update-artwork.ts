@@ -23,9 +23,17 @@ export const updateArtwork: EditCommand<UpdateArtworkArgs, 'update-artwork'> = {
     if (placement?.kind !== 'artwork') return state;
     const size = sizeOf(setting, state.sizeId);
     const zone = args.zone === undefined || args.zone === placement.zone ? undefined : zoneOf(size, args.zone);
-    const range = artworkWidthRange(setting, artworkOf(setting, placement.artworkUploadId), zone ?? zoneOf(size, placement.zone));
+    const range = artworkWidthRange(
+      setting,
+      artworkOf(setting, placement.artworkUploadId),
+      zone ?? zoneOf(size, placement.zone),
+    );
     const widthMm = clampArtworkWidth(range, args.widthMm ?? placement.widthMm);
     if (!zone && widthMm === placement.widthMm) return state;
-    return withSettled(setting, state, { ...placement, widthMm, ...(zone ? { zone: zone.code, ...centreOfZone(zone) } : {}) });
+    return withSettled(setting, state, {
+      ...placement,
+      widthMm,
+      ...(zone ? { zone: zone.code, ...centreOfZone(zone) } : {}),
+    });
   },
 };

@@ -27,7 +27,8 @@ export const updateBorder: EditCommand<UpdateBorderArgs, 'update-border'> = {
     if (!motif || motif.kind !== 'border') return state;
     const run = args.run ?? border.run;
     if (motif.slug === border.motif && run === border.run) {
-      if (args.count === undefined || args.count === border.count || !Number.isInteger(args.count) || args.count < 1) return state;
+      if (args.count === undefined || args.count === border.count || !Number.isInteger(args.count) || args.count < 1)
+        return state;
       const { scalePct, hoop, ...kept } = border;
       return withSettled(setting, state, { ...kept, count: args.count });
     }

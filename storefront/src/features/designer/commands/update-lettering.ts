@@ -28,7 +28,10 @@ export const updateLettering: EditCommand<UpdateLetteringArgs, 'update-lettering
     if (lettering?.kind !== 'lettering') return state;
     const font = fontOf(setting, args.font ?? lettering.font);
     if (!font || (args.text !== undefined && !checkLetteringText(args.text).ok)) return state;
-    const zone = args.zone === undefined || args.zone === lettering.zone ? undefined : zoneOf(sizeOf(setting, state.sizeId), args.zone);
+    const zone =
+      args.zone === undefined || args.zone === lettering.zone
+        ? undefined
+        : zoneOf(sizeOf(setting, state.sizeId), args.zone);
     const next = {
       ...lettering,
       ...(zone ? { zone: zone.code, ...centreOfZone(zone) } : {}),
@@ -37,7 +40,10 @@ export const updateLettering: EditCommand<UpdateLetteringArgs, 'update-lettering
       letterHeightMm: clampLetterHeight(font, args.letterHeightMm ?? lettering.letterHeightMm),
     };
     const isUnchanged =
-      !zone && next.text === lettering.text && next.font === lettering.font && next.letterHeightMm === lettering.letterHeightMm;
+      !zone &&
+      next.text === lettering.text &&
+      next.font === lettering.font &&
+      next.letterHeightMm === lettering.letterHeightMm;
     return isUnchanged ? state : withSettled(setting, state, next);
   },
 };

@@ -23,9 +23,17 @@ export const updateMotif: EditCommand<UpdateMotifArgs, 'update-motif'> = {
     if (placement?.kind !== 'motif') return state;
     const motif = motifOf(setting, placement.motif);
     if (!motif) return state;
-    const scalePct = args.scalePct === undefined ? placement.scalePct : clampMotifScale(motif, args.scalePct, setting.hoops);
-    const zone = args.zone === undefined || args.zone === placement.zone ? undefined : zoneOf(sizeOf(setting, state.sizeId), args.zone);
+    const scalePct =
+      args.scalePct === undefined ? placement.scalePct : clampMotifScale(motif, args.scalePct, setting.hoops);
+    const zone =
+      args.zone === undefined || args.zone === placement.zone
+        ? undefined
+        : zoneOf(sizeOf(setting, state.sizeId), args.zone);
     if (!zone && scalePct === placement.scalePct) return state;
-    return withSettled(setting, state, { ...placement, scalePct, ...(zone ? { zone: zone.code, ...centreOfZone(zone) } : {}) });
+    return withSettled(setting, state, {
+      ...placement,
+      scalePct,
+      ...(zone ? { zone: zone.code, ...centreOfZone(zone) } : {}),
+    });
   },
 };

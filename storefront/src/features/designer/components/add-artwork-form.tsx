@@ -14,7 +14,15 @@ const ACCEPTED = '.svg,.png,.jpg,.jpeg,image/svg+xml,image/png,image/jpeg';
  * Uploading the customer's own picture (a child's drawing is a favourite): chosen or dropped, sent with a progress
  * bar, and any refusal shown right here. Earlier uploads stay to choose from; the chosen one goes on the garment.
  */
-export function AddArtworkForm({ setting, state, dispatch }: { setting: DesignSetting; state: DesignerState; dispatch: Dispatch }) {
+export function AddArtworkForm({
+  setting,
+  state,
+  dispatch,
+}: {
+  setting: DesignSetting;
+  state: DesignerState;
+  dispatch: Dispatch;
+}) {
   const inputId = useId();
   const size = sizeOf(setting, state.sizeId);
   const [zone, setZone] = useState(() => defaultItemZone(size)?.code ?? '');
@@ -56,7 +64,10 @@ export function AddArtworkForm({ setting, state, dispatch }: { setting: DesignSe
         className={`rounded-card border-2 border-dashed p-4 text-center ${isOver ? 'border-madder-500 bg-madder-50' : 'border-linen-300 bg-linen-50'}`}
       >
         <p className="text-sm text-walnut-700">Drop a picture here, or</p>
-        <label htmlFor={inputId} className="mt-2 inline-flex min-h-11 cursor-pointer items-center rounded-full border border-linen-300 bg-white px-5 font-medium hover:bg-linen-100 focus-within:outline-3 focus-within:outline-saffron-500">
+        <label
+          htmlFor={inputId}
+          className="mt-2 inline-flex min-h-11 cursor-pointer items-center rounded-full border border-linen-300 bg-white px-5 font-medium hover:bg-linen-100 focus-within:outline-3 focus-within:outline-saffron-500"
+        >
           Choose a picture
           <input
             id={inputId}
@@ -79,22 +90,41 @@ export function AddArtworkForm({ setting, state, dispatch }: { setting: DesignSe
 
       {sending && (
         <div>
-          <label htmlFor={`${inputId}-progress`} className="text-sm">Uploading {sending}… {Math.round(progress * 100)} %</label>
-          <progress id={`${inputId}-progress`} max={1} value={progress} className="mt-1 block h-3 w-full accent-madder-600" />
+          <label htmlFor={`${inputId}-progress`} className="text-sm">
+            Uploading {sending}… {Math.round(progress * 100)} %
+          </label>
+          <progress
+            id={`${inputId}-progress`}
+            max={1}
+            value={progress}
+            className="mt-1 block h-3 w-full accent-madder-600"
+          />
         </div>
       )}
       {problem && (
-        <p id={`${inputId}-problem`} role="alert" className="rounded-lg bg-madder-50 p-3 text-sm text-madder-700">{problem}</p>
+        <p id={`${inputId}-problem`} role="alert" className="rounded-lg bg-madder-50 p-3 text-sm text-madder-700">
+          {problem}
+        </p>
       )}
 
-      {uploads.isError && <p className="text-sm text-madder-700">Your earlier pictures could not be loaded: {uploads.error.message}</p>}
+      {uploads.isError && (
+        <p className="text-sm text-madder-700">Your earlier pictures could not be loaded: {uploads.error.message}</p>
+      )}
       {artworks.length > 0 && (
         <fieldset>
           <legend className="text-sm font-medium">Your pictures</legend>
           <div className="mt-2 grid grid-cols-3 gap-2 sm:grid-cols-4">
             {artworks.map((artwork) => (
               <label key={artwork.id} className="cursor-pointer">
-                <input type="radio" name="artwork-choice" value={artwork.id} checked={artwork.id === chosen?.id} onChange={() => setChosenId(artwork.id)} className="peer sr-only" aria-label={artwork.originalName} />
+                <input
+                  type="radio"
+                  name="artwork-choice"
+                  value={artwork.id}
+                  checked={artwork.id === chosen?.id}
+                  onChange={() => setChosenId(artwork.id)}
+                  className="peer sr-only"
+                  aria-label={artwork.originalName}
+                />
                 <span className="block rounded-lg border-2 border-linen-200 bg-white p-1 peer-checked:border-madder-500 peer-focus-visible:outline-3 peer-focus-visible:outline-saffron-500">
                   <img src={artwork.imageUrl} alt="" className="aspect-square w-full object-contain" />
                   <span className="block truncate text-xs">{artwork.originalName}</span>
@@ -105,7 +135,9 @@ export function AddArtworkForm({ setting, state, dispatch }: { setting: DesignSe
         </fieldset>
       )}
       <ZoneChoice zones={size.zones} value={zone} onChange={setZone} />
-      <Button type="submit" disabled={!chosen || !hasRoomForPlacement(state)}>{commandOf('add-artwork').label}</Button>
+      <Button type="submit" disabled={!chosen || !hasRoomForPlacement(state)}>
+        {commandOf('add-artwork').label}
+      </Button>
     </form>
   );
 }

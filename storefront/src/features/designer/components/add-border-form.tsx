@@ -11,16 +11,28 @@ import { borderFitWords } from './border-fit-summary.tsx';
 import { MotifChoice } from './motif-choice.tsx';
 import { RunChoice } from './run-choice.tsx';
 
-export function AddBorderForm({ setting, state, dispatch }: { setting: DesignSetting; state: DesignerState; dispatch: Dispatch }) {
+export function AddBorderForm({
+  setting,
+  state,
+  dispatch,
+}: {
+  setting: DesignSetting;
+  state: DesignerState;
+  dispatch: Dispatch;
+}) {
   const borders = setting.motifs.filter((motif) => motif.kind === 'border');
   const [motif, setMotif] = useState(borders[0]?.slug ?? '');
   const [run, setRun] = useState<BorderPlacement['run']>('circumference');
   const size = sizeOf(setting, state.sizeId);
   if (!zoneOf(size, HEM_ZONE) || size.hemFrontMm === null || size.hemCircumferenceMm === null) {
-    return <p className="text-sm text-walnut-700">This piece takes a name or a single motif rather than a hem border.</p>;
+    return (
+      <p className="text-sm text-walnut-700">This piece takes a name or a single motif rather than a hem border.</p>
+    );
   }
   if (state.document.placements.some((placement) => placement.kind === 'border')) {
-    return <p className="text-sm text-walnut-700">The hem has its border. Choose it under “On the garment” to change it.</p>;
+    return (
+      <p className="text-sm text-walnut-700">The hem has its border. Choose it under “On the garment” to change it.</p>
+    );
   }
   if (borders.length === 0) return <EmptyState title="No borders are on offer just now." />;
   const submit = (event: FormEvent) => {
@@ -33,9 +45,24 @@ export function AddBorderForm({ setting, state, dispatch }: { setting: DesignSet
         A border is one little picture repeated end to end along the hem. We resize it very slightly so whole repeats
         meet exactly — never a cut-off one.
       </p>
-      <RunChoice name="new-border-run" value={run} frontMm={size.hemFrontMm} circumferenceMm={size.hemCircumferenceMm} onChange={setRun} />
-      <MotifChoice name="new-border-motif" legend="Choose a border" motifs={borders} value={motif} onChange={setMotif} detailOf={(candidate) => borderFitWords(layoutBorder(setting, state.sizeId, trialBorder(candidate.slug, run)))} />
-      <Button type="submit" disabled={!hasRoomForPlacement(state)}>{commandOf('add-border').label}</Button>
+      <RunChoice
+        name="new-border-run"
+        value={run}
+        frontMm={size.hemFrontMm}
+        circumferenceMm={size.hemCircumferenceMm}
+        onChange={setRun}
+      />
+      <MotifChoice
+        name="new-border-motif"
+        legend="Choose a border"
+        motifs={borders}
+        value={motif}
+        onChange={setMotif}
+        detailOf={(candidate) => borderFitWords(layoutBorder(setting, state.sizeId, trialBorder(candidate.slug, run)))}
+      />
+      <Button type="submit" disabled={!hasRoomForPlacement(state)}>
+        {commandOf('add-border').label}
+      </Button>
     </form>
   );
 }

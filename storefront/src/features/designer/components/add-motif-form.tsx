@@ -10,7 +10,15 @@ import { MotifChoice } from './motif-choice.tsx';
 import { MotifSizeField } from './motif-size-field.tsx';
 import { ZoneChoice } from './zone-choice.tsx';
 
-export function AddMotifForm({ setting, state, dispatch }: { setting: DesignSetting; state: DesignerState; dispatch: Dispatch }) {
+export function AddMotifForm({
+  setting,
+  state,
+  dispatch,
+}: {
+  setting: DesignSetting;
+  state: DesignerState;
+  dispatch: Dispatch;
+}) {
   const singles = setting.motifs.filter((motif) => motif.kind === 'single');
   const size = sizeOf(setting, state.sizeId);
   const [slug, setSlug] = useState(singles[0]?.slug ?? '');
@@ -35,7 +43,9 @@ export function AddMotifForm({ setting, state, dispatch }: { setting: DesignSett
       />
       <MotifSizeField motif={motif} hoops={setting.hoops} value={scale} onChange={setScalePct} />
       <ZoneChoice zones={size.zones} value={zone} onChange={setZone} />
-      <Button type="submit" disabled={!hasRoomForPlacement(state)}>{commandOf('add-motif').label}</Button>
+      <Button type="submit" disabled={!hasRoomForPlacement(state)}>
+        {commandOf('add-motif').label}
+      </Button>
     </form>
   );
 }

@@ -57,7 +57,9 @@ export function AddNameForm({
       <div>
         <label htmlFor={textId} className="flex items-baseline justify-between text-sm font-medium">
           <span>Name or words</span>
-          <span className="font-normal text-walnut-500">{[...text].length} / {MAX_LETTERING_LENGTH}</span>
+          <span className="font-normal text-walnut-500">
+            {[...text].length} / {MAX_LETTERING_LENGTH}
+          </span>
         </label>
         <input
           id={textId}
@@ -70,13 +72,19 @@ export function AddNameForm({
           className="mt-2 block min-h-11 w-full rounded-lg border border-linen-300 bg-white px-3 text-lg aria-invalid:border-madder-500"
           placeholder="Eliza"
         />
-        {problem && <p id={`${textId}-problem`} className="mt-1 text-sm text-madder-700">{problem}</p>}
+        {problem && (
+          <p id={`${textId}-problem`} className="mt-1 text-sm text-madder-700">
+            {problem}
+          </p>
+        )}
       </div>
       <FontChoice name="new-name-font" fonts={setting.fonts} value={font.slug} sample={text} onChange={setFontSlug} />
       <LetterHeightField font={font} value={letterHeightMm} onChange={setHeightMm} />
       <ThreadChoice name="new-name-thread" threads={threads} value={thread} onChange={setThread} />
       <ZoneChoice zones={size.zones} value={zone} onChange={setZone} />
-      <Button type="submit" disabled={!hasRoomForPlacement(state)}>{commandOf('add-lettering').label}</Button>
+      <Button type="submit" disabled={!hasRoomForPlacement(state)}>
+        {commandOf('add-lettering').label}
+      </Button>
     </form>
   );
 }

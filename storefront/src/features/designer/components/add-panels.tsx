@@ -10,15 +10,33 @@ import { AddArtworkForm } from './add-artwork-form.tsx';
 
 type Way = 'border' | 'name' | 'motif' | 'artwork';
 
-function Drawer({ title, hint, isOpen, onToggle, children }: { title: string; hint: string; isOpen: boolean; onToggle: (isOpen: boolean) => void; children: ReactNode }) {
+function Drawer({
+  title,
+  hint,
+  isOpen,
+  onToggle,
+  children,
+}: {
+  title: string;
+  hint: string;
+  isOpen: boolean;
+  onToggle: (isOpen: boolean) => void;
+  children: ReactNode;
+}) {
   return (
-    <details open={isOpen} onToggle={(event) => onToggle(event.currentTarget.open)} className="group rounded-card border border-linen-200 bg-white">
+    <details
+      open={isOpen}
+      onToggle={(event) => onToggle(event.currentTarget.open)}
+      className="group rounded-card border border-linen-200 bg-white"
+    >
       <summary className="flex min-h-14 cursor-pointer list-none items-center justify-between gap-3 rounded-card px-4 py-3 hover:bg-linen-100">
         <span>
           <span className="block font-semibold">{title}</span>
           <span className="block text-sm text-walnut-500">{hint}</span>
         </span>
-        <span aria-hidden="true" className="text-xl text-madder-600 transition-transform group-open:rotate-45">+</span>
+        <span aria-hidden="true" className="text-xl text-madder-600 transition-transform group-open:rotate-45">
+          +
+        </span>
       </summary>
       <div className="border-t border-linen-200 p-4">{children}</div>
     </details>
@@ -45,7 +63,10 @@ export function AddPanels({
   onAdded: () => void;
 }) {
   const [open, setOpen] = useState<Way>();
-  const drawer = (way: Way) => ({ isOpen: open === way, onToggle: (isOpen: boolean) => setOpen((current) => (isOpen ? way : current === way ? undefined : current)) });
+  const drawer = (way: Way) => ({
+    isOpen: open === way,
+    onToggle: (isOpen: boolean) => setOpen((current) => (isOpen ? way : current === way ? undefined : current)),
+  });
   const adding: Dispatch = (id, args) => {
     dispatch(id, args);
     setOpen(undefined);
@@ -53,8 +74,14 @@ export function AddPanels({
   };
   return (
     <section aria-labelledby="add-heading" className="space-y-2">
-      <h2 id="add-heading" className="text-lg font-semibold">Add to the garment</h2>
-      {!hasRoomForPlacement(state) && <p className="text-sm text-walnut-700">A garment takes up to {MAX_PLACEMENTS} pieces of embroidery; remove one to add another.</p>}
+      <h2 id="add-heading" className="text-lg font-semibold">
+        Add to the garment
+      </h2>
+      {!hasRoomForPlacement(state) && (
+        <p className="text-sm text-walnut-700">
+          A garment takes up to {MAX_PLACEMENTS} pieces of embroidery; remove one to add another.
+        </p>
+      )}
       <Drawer title="Add a border" hint="A little picture repeated along the hem" {...drawer('border')}>
         <AddBorderForm setting={setting} state={state} dispatch={adding} />
       </Drawer>

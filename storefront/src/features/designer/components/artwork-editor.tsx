@@ -10,7 +10,17 @@ import { ArtworkWidthField } from './artwork-width-field.tsx';
 import { ZoneChoice } from './zone-choice.tsx';
 import { TooBigNote } from './too-big-note.tsx';
 
-export function ArtworkEditor({ placement, setting, state, dispatch }: { placement: ArtworkPlacement; setting: DesignSetting; state: DesignerState; dispatch: Dispatch }) {
+export function ArtworkEditor({
+  placement,
+  setting,
+  state,
+  dispatch,
+}: {
+  placement: ArtworkPlacement;
+  setting: DesignSetting;
+  state: DesignerState;
+  dispatch: Dispatch;
+}) {
   const artwork = artworkOf(setting, placement.artworkUploadId);
   const size = sizeOf(setting, state.sizeId);
   const zone = zoneOf(size, placement.zone);
@@ -32,9 +42,13 @@ export function ArtworkEditor({ placement, setting, state, dispatch }: { placeme
             : ': a drawing, so we can count its stitches straight away.'}
         </p>
       ) : (
-        <p className="text-sm text-walnut-700">This artwork was uploaded in another browser or account; sign in to the account that uploaded it to see it.</p>
+        <p className="text-sm text-walnut-700">
+          This artwork was uploaded in another browser or account; sign in to the account that uploaded it to see it.
+        </p>
       )}
-      {zone && !fitsZone(itemExtent(setting, placement), zone) && <TooBigNote zone={zone} advice="Try it narrower, turned less, or in another place." />}
+      {zone && !fitsZone(itemExtent(setting, placement), zone) && (
+        <TooBigNote zone={zone} advice="Try it narrower, turned less, or in another place." />
+      )}
       <ArtworkWidthField
         value={placement.widthMm}
         heightMm={uprightExtent(setting, placement).heightMm}
@@ -42,7 +56,11 @@ export function ArtworkEditor({ placement, setting, state, dispatch }: { placeme
         limitNote={limitNote}
         onChange={(widthMm) => dispatch('update-artwork', { id: placement.id, widthMm })}
       />
-      <ZoneChoice zones={size.zones} value={placement.zone} onChange={(code) => dispatch('update-artwork', { id: placement.id, zone: code })} />
+      <ZoneChoice
+        zones={size.zones}
+        value={placement.zone}
+        onChange={(code) => dispatch('update-artwork', { id: placement.id, zone: code })}
+      />
     </div>
   );
 }

@@ -2,7 +2,19 @@ import { useId, useState } from 'react';
 import { formatLength } from '@ui/format.ts';
 
 /** The artwork's width on the garment, mm, by slider or typed; its height follows in proportion. */
-export function ArtworkWidthField({ value, heightMm, range, limitNote, onChange }: { value: number; heightMm: number; range: { minMm: number; maxMm: number }; limitNote: string; onChange: (widthMm: number) => void }) {
+export function ArtworkWidthField({
+  value,
+  heightMm,
+  range,
+  limitNote,
+  onChange,
+}: {
+  value: number;
+  heightMm: number;
+  range: { minMm: number; maxMm: number };
+  limitNote: string;
+  onChange: (widthMm: number) => void;
+}) {
   const sliderId = useId();
   const numberId = useId();
   // A typed width is taken when the field is left or Enter is pressed, so "1" on the way to "120" is not clamped.
@@ -48,7 +60,8 @@ export function ArtworkWidthField({ value, heightMm, range, limitNote, onChange 
         />
       </div>
       <p className="mt-1 text-xs text-walnut-500">
-        {formatLength(value)} wide, {formatLength(heightMm)} tall; from {range.minMm} to {range.maxMm} mm here. {limitNote}
+        {formatLength(value)} wide, {formatLength(heightMm)} tall; from {range.minMm} to {range.maxMm} mm here.{' '}
+        {limitNote}
       </p>
     </div>
   );

@@ -46,7 +46,9 @@ export function BorderEditor({
         motifs={borders}
         value={border.motif}
         onChange={(motif) => dispatch('update-border', { id: border.id, motif })}
-        detailOf={(candidate) => borderFitWords(layoutBorder(setting, state.sizeId, trialBorder(candidate.slug, border.run)))}
+        detailOf={(candidate) =>
+          borderFitWords(layoutBorder(setting, state.sizeId, trialBorder(candidate.slug, border.run)))
+        }
       />
       <PlacementThreads placement={border} threads={threads} dispatch={dispatch} />
     </div>

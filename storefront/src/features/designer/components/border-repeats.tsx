@@ -9,7 +9,17 @@ const percentOf = (layout: Extract<BorderLayout, { ok: true }>) => `${Math.round
  * One more or one fewer repeat along the hem: each button says the size the engine would stitch them at, or, when
  * that many cannot be stitched, the engine's reason, and stays off.
  */
-export function BorderRepeats({ border, setting, sizeId, dispatch }: { border: BorderPlacement; setting: DesignSetting; sizeId: number; dispatch: Dispatch }) {
+export function BorderRepeats({
+  border,
+  setting,
+  sizeId,
+  dispatch,
+}: {
+  border: BorderPlacement;
+  setting: DesignSetting;
+  sizeId: number;
+  dispatch: Dispatch;
+}) {
   const current = layoutBorder(setting, sizeId, border);
   if (!current.ok) return null;
   const options = [
@@ -35,7 +45,11 @@ export function BorderRepeats({ border, setting, sizeId, dispatch }: { border: B
             {verb} ({count})
           </button>
           <p id={`${border.id}-repeats-${by}`} className="mt-1 text-xs text-walnut-500">
-            {trial?.ok ? `${count} repeats, each stitched at ${percentOf(trial)} of its drawn size.` : trial ? trial.reason : 'A border needs at least one repeat.'}
+            {trial?.ok
+              ? `${count} repeats, each stitched at ${percentOf(trial)} of its drawn size.`
+              : trial
+                ? trial.reason
+                : 'A border needs at least one repeat.'}
           </p>
         </div>
       ))}

@@ -17,7 +17,10 @@ function useBox(host: RefObject<HTMLDivElement | null>) {
     const element = host.current;
     if (!element) return;
     const measure = () => {
-      const next = { widthPx: element.clientWidth, heightPx: Math.max(MIN_HEIGHT_PX, window.innerHeight - TOOLS_AND_HELP_PX) };
+      const next = {
+        widthPx: element.clientWidth,
+        heightPx: Math.max(MIN_HEIGHT_PX, window.innerHeight - TOOLS_AND_HELP_PX),
+      };
       setBox((current) => (current.widthPx === next.widthPx && current.heightPx === next.heightPx ? current : next));
     };
     const observer = new ResizeObserver(measure);
@@ -36,11 +39,28 @@ function useBox(host: RefObject<HTMLDivElement | null>) {
  * strict mode mounts twice, so each mount makes its own canvas element), sizes it to the container (Fabric scales
  * for the device pixel ratio itself), and syncs it from the scene whenever the design or the view changes.
  */
-export function DesignCanvas({ scene, mockupSizeMm, dispatch, label }: { scene: Omit<Scene, 'view'>; mockupSizeMm: ExtentMm; dispatch: Dispatch; label: string }) {
+export function DesignCanvas({
+  scene,
+  mockupSizeMm,
+  dispatch,
+  label,
+}: {
+  scene: Omit<Scene, 'view'>;
+  mockupSizeMm: ExtentMm;
+  dispatch: Dispatch;
+  label: string;
+}) {
   const host = useRef<HTMLDivElement>(null);
   const box = useBox(host);
   const { widthMm, heightMm } = mockupSizeMm;
-  const view = useMemo(() => fitView({ widthMm: mm(widthMm), heightMm: mm(heightMm) }, { widthPx: px(box.widthPx), heightPx: px(box.heightPx) }), [widthMm, heightMm, box]);
+  const view = useMemo(
+    () =>
+      fitView(
+        { widthMm: mm(widthMm), heightMm: mm(heightMm) },
+        { widthPx: px(box.widthPx), heightPx: px(box.heightPx) },
+      ),
+    [widthMm, heightMm, box],
+  );
   const [live, setLive] = useState<{ canvas: Canvas; sync: SceneSync }>();
   const latest = useRef({ view, dispatch });
   useEffect(() => {
@@ -52,9 +72,19 @@ export function DesignCanvas({ scene, mockupSizeMm, dispatch, label }: { scene: 
     const element = document.createElement('canvas');
     mount.append(element);
     host.current?.append(mount);
-    const canvas = new Canvas(element, { selection: false, preserveObjectStacking: true, allowTouchScrolling: true, enableRetinaScaling: true });
+    const canvas = new Canvas(element, {
+      selection: false,
+      preserveObjectStacking: true,
+      allowTouchScrolling: true,
+      enableRetinaScaling: true,
+    });
     const sync = createSceneSync(canvas);
-    const unbind = translateCanvasEvents(canvas, sync, () => latest.current.view, (id, args) => latest.current.dispatch(id, args));
+    const unbind = translateCanvasEvents(
+      canvas,
+      sync,
+      () => latest.current.view,
+      (id, args) => latest.current.dispatch(id, args),
+    );
     setLive({ canvas, sync });
     return () => {
       unbind();

@@ -1,5 +1,10 @@
 import { useId, useMemo } from 'react';
-import type { GarmentSummary, LetteringFontSummary, MotifSummary, ThreadColourSummary } from '@server/contracts/catalogue.ts';
+import type {
+  GarmentSummary,
+  LetteringFontSummary,
+  MotifSummary,
+  ThreadColourSummary,
+} from '@server/contracts/catalogue.ts';
 import type { DesignDocument } from '@server/contracts/designs.ts';
 import { dyedMockupSrc } from '@store/lib/dyed-mockup.ts';
 import { mockupSizeMm, sizeOf } from '../model/design-setting.ts';
@@ -19,19 +24,36 @@ interface DesignPreviewProps {
   label: string;
 }
 
-
 /** One placement drawn in SVG, in the mockup's millimetres: the same drawables the designer's canvas shows. */
 function PreviewItem({ drawable, clipId }: { drawable: Drawable; clipId: string }) {
   const turn = `rotate(${drawable.rotationDeg} ${drawable.centerXMm} ${drawable.centerYMm})`;
   switch (drawable.kind) {
     case 'lettering':
       return (
-        <text x={drawable.centerXMm} y={drawable.centerYMm} transform={turn} textAnchor="middle" dominantBaseline="central" fontFamily={`"${drawable.fontFamily}"`} fontSize={drawable.fontSizeMm} fill={drawable.fill}>
+        <text
+          x={drawable.centerXMm}
+          y={drawable.centerYMm}
+          transform={turn}
+          textAnchor="middle"
+          dominantBaseline="central"
+          fontFamily={`"${drawable.fontFamily}"`}
+          fontSize={drawable.fontSizeMm}
+          fill={drawable.fill}
+        >
           {drawable.text}
         </text>
       );
     case 'motif':
-      return <image href={svgDataUrl(drawable.svg)} x={drawable.centerXMm - drawable.widthMm / 2} y={drawable.centerYMm - drawable.widthMm / 2} width={drawable.widthMm} height={drawable.widthMm} transform={turn} />;
+      return (
+        <image
+          href={svgDataUrl(drawable.svg)}
+          x={drawable.centerXMm - drawable.widthMm / 2}
+          y={drawable.centerYMm - drawable.widthMm / 2}
+          width={drawable.widthMm}
+          height={drawable.widthMm}
+          transform={turn}
+        />
+      );
     case 'border': {
       const { band } = drawable;
       const src = svgDataUrl(drawable.svg);
@@ -41,7 +63,15 @@ function PreviewItem({ drawable, clipId }: { drawable: Drawable; clipId: string 
             <rect x={band.leftMm} y={band.centerYMm - band.heightMm} width={band.widthMm} height={band.heightMm * 2} />
           </clipPath>
           {drawable.repeats.map((repeat, index) => (
-            <image key={index} href={src} x={repeat.centerXMm - repeat.widthMm / 2} y={repeat.centerYMm - repeat.heightMm / 2} width={repeat.widthMm} height={repeat.heightMm} preserveAspectRatio="none" />
+            <image
+              key={index}
+              href={src}
+              x={repeat.centerXMm - repeat.widthMm / 2}
+              y={repeat.centerYMm - repeat.heightMm / 2}
+              width={repeat.widthMm}
+              height={repeat.heightMm}
+              preserveAspectRatio="none"
+            />
           ))}
         </g>
       );
@@ -53,13 +83,25 @@ function PreviewItem({ drawable, clipId }: { drawable: Drawable; clipId: string 
  * A still picture of a saved design on its garment, for pages that show an order rather than edit it. It draws
  * the designer's own scene description, so it matches what the customer saw while designing.
  */
-export function DesignPreview({ garment, sizeId, colourHex, document, motifs, fonts, threads, label }: DesignPreviewProps) {
+export function DesignPreview({
+  garment,
+  sizeId,
+  colourHex,
+  document,
+  motifs,
+  fonts,
+  threads,
+  label,
+}: DesignPreviewProps) {
   const clipPrefix = useId();
   const setting = useDesignSetting(garment, motifs, fonts);
   const isFontsReady = useLetteringFontsReady(fonts);
   const size = sizeOf(setting, sizeId);
   const { widthMm, heightMm } = mockupSizeMm(garment, size);
-  const drawables = useMemo(() => (isFontsReady ? describeScene({ document, sizeId }, setting, threads) : []), [isFontsReady, document, sizeId, setting, threads]);
+  const drawables = useMemo(
+    () => (isFontsReady ? describeScene({ document, sizeId }, setting, threads) : []),
+    [isFontsReady, document, sizeId, setting, threads],
+  );
   return (
     <svg viewBox={`0 0 ${widthMm} ${heightMm}`} role="img" aria-label={label} className="h-auto w-full">
       <image href={dyedMockupSrc(garment.mockupSvg, colourHex)} x={0} y={0} width={widthMm} height={heightMm} />

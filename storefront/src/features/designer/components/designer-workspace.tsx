@@ -33,7 +33,18 @@ interface WorkspaceProps {
  * the garment options, what is on the garment, ways to add more, the price and saving. Keyboard shortcuts work
  * anywhere in it except inside a text field.
  */
-export function DesignerWorkspace({ garment, setting, threads, designer, saved, onSaved, garmentOptions, price, priceTotal, header }: WorkspaceProps) {
+export function DesignerWorkspace({
+  garment,
+  setting,
+  threads,
+  designer,
+  saved,
+  onSaved,
+  garmentOptions,
+  price,
+  priceTotal,
+  header,
+}: WorkspaceProps) {
   const { state, dispatch } = designer;
   const size = sizeOf(setting, state.sizeId);
   const colour = garment.colours.find((candidate) => candidate.id === state.colourId);
@@ -44,7 +55,10 @@ export function DesignerWorkspace({ garment, setting, threads, designer, saved, 
   const showGarment = () => garmentView.current?.scrollIntoView({ block: 'nearest', behavior: 'smooth' });
 
   const { document, sizeId } = state;
-  const drawables = useMemo(() => describeScene({ document, sizeId }, setting, threads), [document, sizeId, setting, threads]);
+  const drawables = useMemo(
+    () => describeScene({ document, sizeId }, setting, threads),
+    [document, sizeId, setting, threads],
+  );
   const scene = useMemo(
     () => ({
       drawables,
@@ -61,20 +75,37 @@ export function DesignerWorkspace({ garment, setting, threads, designer, saved, 
       {header}
       <div className="mt-6 grid items-start gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(20rem,2fr)] lg:gap-8">
         <div ref={garmentView} className="scroll-mt-4 space-y-3 lg:sticky lg:top-4">
-          <DesignerToolbar canUndo={designer.canUndo} canRedo={designer.canRedo} hasSelection={selected !== undefined} dispatch={dispatch} />
-          <DesignCanvas scene={scene} mockupSizeMm={mockupSizeMm(garment, size)} dispatch={dispatch} label={`The ${garment.name.toLowerCase()} in size ${size.label}, with your design`} />
+          <DesignerToolbar
+            canUndo={designer.canUndo}
+            canRedo={designer.canRedo}
+            hasSelection={selected !== undefined}
+            dispatch={dispatch}
+          />
+          <DesignCanvas
+            scene={scene}
+            mockupSizeMm={mockupSizeMm(garment, size)}
+            dispatch={dispatch}
+            label={`The ${garment.name.toLowerCase()} in size ${size.label}, with your design`}
+          />
           {/* On a phone the full price is far below the garment, so its total rides along here. */}
           <div className="lg:hidden">{priceTotal}</div>
           <p id="canvas-help" className="text-sm text-walnut-500">
-            Drag a name, motif or picture to move it (near the middle it settles on the centre line); a border moves
-            up and down, and a picture's corners resize it. Arrow keys move the chosen item 1 mm (with Shift, 10 mm),
-            R turns it 15° (Shift + R back), C centres it side to side, Delete removes it, and Ctrl or ⌘ + Z undoes.
+            Drag a name, motif or picture to move it (near the middle it settles on the centre line); a border moves up
+            and down, and a picture's corners resize it. Arrow keys move the chosen item 1 mm (with Shift, 10 mm), R
+            turns it 15° (Shift + R back), C centres it side to side, Delete removes it, and Ctrl or ⌘ + Z undoes.
           </p>
         </div>
         <div className="min-w-0 space-y-6">
           {garmentOptions}
           <PlacementList setting={setting} state={state} threads={threads} dispatch={dispatch} />
-          <AddPanels setting={setting} state={state} threads={threads} fabricHex={colour?.hex ?? '#ffffff'} dispatch={dispatch} onAdded={showGarment} />
+          <AddPanels
+            setting={setting}
+            state={state}
+            threads={threads}
+            fabricHex={colour?.hex ?? '#ffffff'}
+            dispatch={dispatch}
+            onAdded={showGarment}
+          />
           {price}
           <SaveDesignPanel garment={garment} state={state} saved={saved} onSaved={onSaved} />
         </div>

@@ -8,7 +8,15 @@ function along(offsetMm: number, [before, after, centred]: [string, string, stri
 }
 
 /** Where an item sits in its zone, in words, announced as it moves, for those moving it by buttons or keys. */
-export function ItemPosition({ setting, state, item }: { setting: DesignSetting; state: DesignerState; item: ItemPlacement }) {
+export function ItemPosition({
+  setting,
+  state,
+  item,
+}: {
+  setting: DesignSetting;
+  state: DesignerState;
+  item: ItemPlacement;
+}) {
   const offset = offsetFromZoneMiddle(setting, state.sizeId, item);
   if (!offset) return null;
   const across = along(offset.dxMm, ['left of', 'right of', 'centred side to side']);

@@ -3,7 +3,15 @@ import type { LetteringFontSummary } from '@server/contracts/catalogue.ts';
 import { formatLength } from '@ui/format.ts';
 
 /** How tall the capital letters are, within what the font sews cleanly at, in mm with inches alongside. */
-export function LetterHeightField({ font, value, onChange }: { font: LetteringFontSummary; value: number; onChange: (heightMm: number) => void }) {
+export function LetterHeightField({
+  font,
+  value,
+  onChange,
+}: {
+  font: LetteringFontSummary;
+  value: number;
+  onChange: (heightMm: number) => void;
+}) {
   const id = useId();
   return (
     <div>
@@ -23,7 +31,8 @@ export function LetterHeightField({ font, value, onChange }: { font: LetteringFo
         className="mt-2 h-11 w-full accent-madder-600"
       />
       <p className="text-xs text-walnut-500">
-        The height of a capital letter. {font.name} sews cleanly from {formatLength(font.minHeightMm)} to {formatLength(font.maxHeightMm)}.
+        The height of a capital letter. {font.name} sews cleanly from {formatLength(font.minHeightMm)} to{' '}
+        {formatLength(font.maxHeightMm)}.
       </p>
     </div>
   );

@@ -41,14 +41,17 @@ export function LetteringEditor({
   const size = sizeOf(setting, state.sizeId);
   const zone = zoneOf(size, lettering.zone);
   const isTooBig = zone !== undefined && !fitsZone(itemExtent(setting, lettering), zone);
-  const update = (change: Omit<UpdateLetteringArgs, 'id'>) => dispatch('update-lettering', { id: lettering.id, ...change });
+  const update = (change: Omit<UpdateLetteringArgs, 'id'>) =>
+    dispatch('update-lettering', { id: lettering.id, ...change });
 
   return (
     <div className="space-y-4">
       <div>
         <label htmlFor={textId} className="flex items-baseline justify-between text-sm font-medium">
           <span>Name or words</span>
-          <span className="font-normal text-walnut-500">{[...draft].length} / {MAX_LETTERING_LENGTH}</span>
+          <span className="font-normal text-walnut-500">
+            {[...draft].length} / {MAX_LETTERING_LENGTH}
+          </span>
         </label>
         <input
           id={textId}
@@ -63,12 +66,34 @@ export function LetteringEditor({
           }}
           className="mt-2 block min-h-11 w-full rounded-lg border border-linen-300 bg-white px-3 text-lg aria-invalid:border-madder-500"
         />
-        {!check.ok && <p id={`${textId}-problem`} className="mt-1 text-sm text-madder-700">{check.message}</p>}
+        {!check.ok && (
+          <p id={`${textId}-problem`} className="mt-1 text-sm text-madder-700">
+            {check.message}
+          </p>
+        )}
       </div>
       {isTooBig && zone && <TooBigNote zone={zone} advice="Try smaller letters or fewer words." />}
-      <FontChoice name={`${lettering.id}-font`} fonts={setting.fonts} value={lettering.font} sample={lettering.text} onChange={(slug) => update({ font: slug })} />
-      {font && <LetterHeightField font={font} value={lettering.letterHeightMm} onChange={(letterHeightMm) => update({ letterHeightMm })} />}
-      <ThreadPicker name={`${lettering.id}-thread`} legend="Thread colour" threads={threads} value={lettering.thread} onChange={(thread) => dispatch('set-thread-colour', { id: lettering.id, index: 0, thread })} />
+      <FontChoice
+        name={`${lettering.id}-font`}
+        fonts={setting.fonts}
+        value={lettering.font}
+        sample={lettering.text}
+        onChange={(slug) => update({ font: slug })}
+      />
+      {font && (
+        <LetterHeightField
+          font={font}
+          value={lettering.letterHeightMm}
+          onChange={(letterHeightMm) => update({ letterHeightMm })}
+        />
+      )}
+      <ThreadPicker
+        name={`${lettering.id}-thread`}
+        legend="Thread colour"
+        threads={threads}
+        value={lettering.thread}
+        onChange={(thread) => dispatch('set-thread-colour', { id: lettering.id, index: 0, thread })}
+      />
       <ZoneChoice zones={size.zones} value={lettering.zone} onChange={(code) => update({ zone: code })} />
     </div>
   );

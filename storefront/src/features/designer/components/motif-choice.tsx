@@ -26,7 +26,14 @@ export function MotifChoice({
       <div className="mt-2 grid gap-2">
         {motifs.map((motif) => (
           <label key={motif.slug} className="cursor-pointer">
-            <input type="radio" name={name} value={motif.slug} checked={motif.slug === value} onChange={() => onChange(motif.slug)} className="peer sr-only" />
+            <input
+              type="radio"
+              name={name}
+              value={motif.slug}
+              checked={motif.slug === value}
+              onChange={() => onChange(motif.slug)}
+              className="peer sr-only"
+            />
             <span className="flex items-center gap-3 rounded-lg border border-linen-300 bg-white p-2 peer-checked:border-madder-500 peer-checked:bg-madder-50 peer-focus-visible:outline-3 peer-focus-visible:outline-saffron-500">
               <span className="flex h-12 w-20 shrink-0 items-center justify-center rounded-md bg-linen-100 p-1">
                 <img src={pictureOf(motif)} alt="" className="max-h-full max-w-full" />

@@ -24,14 +24,26 @@ export function MotifEditor({
   dispatch: Dispatch;
 }) {
   const motif = motifOf(setting, placement.motif);
-  if (!motif) return <p className="text-sm text-madder-700">This motif is no longer offered; remove it or choose another.</p>;
+  if (!motif)
+    return <p className="text-sm text-madder-700">This motif is no longer offered; remove it or choose another.</p>;
   const size = sizeOf(setting, state.sizeId);
   const zone = zoneOf(size, placement.zone);
   return (
     <div className="space-y-4">
-      {zone && !fitsZone(itemExtent(setting, placement), zone) && <TooBigNote zone={zone} advice="Try it smaller, or in another place." />}
-      <MotifSizeField motif={motif} hoops={setting.hoops} value={placement.scalePct} onChange={(scalePct) => dispatch('update-motif', { id: placement.id, scalePct })} />
-      <ZoneChoice zones={size.zones} value={placement.zone} onChange={(zone) => dispatch('update-motif', { id: placement.id, zone })} />
+      {zone && !fitsZone(itemExtent(setting, placement), zone) && (
+        <TooBigNote zone={zone} advice="Try it smaller, or in another place." />
+      )}
+      <MotifSizeField
+        motif={motif}
+        hoops={setting.hoops}
+        value={placement.scalePct}
+        onChange={(scalePct) => dispatch('update-motif', { id: placement.id, scalePct })}
+      />
+      <ZoneChoice
+        zones={size.zones}
+        value={placement.zone}
+        onChange={(zone) => dispatch('update-motif', { id: placement.id, zone })}
+      />
       <PlacementThreads placement={placement} threads={threads} dispatch={dispatch} />
     </div>
   );

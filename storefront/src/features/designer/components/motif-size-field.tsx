@@ -5,7 +5,17 @@ import { largestHoop } from '../model/hoop-limit.ts';
 import { motifScaleRange } from '../model/motif-rules.ts';
 
 /** A motif's size as a share of its digitized size, within the limits its stitch file and the largest hoop allow. */
-export function MotifSizeField({ motif, hoops, value, onChange }: { motif: MotifSummary; hoops: readonly HoopSummary[]; value: number; onChange: (scalePct: number) => void }) {
+export function MotifSizeField({
+  motif,
+  hoops,
+  value,
+  onChange,
+}: {
+  motif: MotifSummary;
+  hoops: readonly HoopSummary[];
+  value: number;
+  onChange: (scalePct: number) => void;
+}) {
   const id = useId();
   const { minPct, maxPct, isHoopLimited } = motifScaleRange(motif, hoops);
   const widthMm = (motif.widthMm * value) / 100;
@@ -15,7 +25,9 @@ export function MotifSizeField({ motif, hoops, value, onChange }: { motif: Motif
     <div>
       <label htmlFor={id} className="flex items-baseline justify-between gap-2 text-sm font-medium">
         <span>Size</span>
-        <span className="font-normal text-walnut-700">{value} % · {formatLength(widthMm)} wide</span>
+        <span className="font-normal text-walnut-700">
+          {value} % · {formatLength(widthMm)} wide
+        </span>
       </label>
       <input
         id={id}
@@ -31,7 +43,10 @@ export function MotifSizeField({ motif, hoops, value, onChange }: { motif: Motif
       <p className="text-xs text-walnut-500">
         {formatLength(widthMm)} wide, {formatLength(heightMm)} tall. A stitched design only resizes a little before it
         looks wrong, so this one goes from {minPct} % to {maxPct} %
-        {isHoopLimited && hoop ? `, the most that fits our largest hoop's ${hoop.fieldWidthMm} × ${hoop.fieldHeightMm} mm sewing field` : ''}.
+        {isHoopLimited && hoop
+          ? `, the most that fits our largest hoop's ${hoop.fieldWidthMm} × ${hoop.fieldHeightMm} mm sewing field`
+          : ''}
+        .
       </p>
     </div>
   );

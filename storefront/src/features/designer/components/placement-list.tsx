@@ -36,7 +36,9 @@ export function PlacementList(props: ListProps) {
   const { placements } = state.document;
   return (
     <section aria-labelledby="placements-heading">
-      <h2 id="placements-heading" className="text-lg font-semibold">On the garment</h2>
+      <h2 id="placements-heading" className="text-lg font-semibold">
+        On the garment
+      </h2>
       {placements.length === 0 ? (
         <div className="mt-3">
           <EmptyState title="Nothing on the garment yet.">Add a border, a name or a motif below.</EmptyState>
@@ -47,7 +49,10 @@ export function PlacementList(props: ListProps) {
             const label = placementLabel(setting, placement);
             const isOpen = placement.id === state.selectedId;
             return (
-              <li key={placement.id} className={`rounded-card border bg-white ${isOpen ? 'border-madder-500 shadow-sm' : 'border-linen-200'}`}>
+              <li
+                key={placement.id}
+                className={`rounded-card border bg-white ${isOpen ? 'border-madder-500 shadow-sm' : 'border-linen-200'}`}
+              >
                 <div className="flex items-center gap-2 p-2">
                   <button
                     type="button"
@@ -69,10 +74,22 @@ export function PlacementList(props: ListProps) {
                 </div>
                 {isOpen && (
                   <div className="space-y-4 border-t border-linen-200 p-4">
-                    <NudgePad id={placement.id} label={label} isBorder={placement.kind === 'border'} dispatch={dispatch} />
+                    <NudgePad
+                      id={placement.id}
+                      label={label}
+                      isBorder={placement.kind === 'border'}
+                      dispatch={dispatch}
+                    />
                     {isItem(placement) && <ItemPosition setting={setting} state={state} item={placement} />}
                     <Editor placement={placement} {...props} />
-                    {isItem(placement) && <RotationField id={placement.id} label={label} rotationDeg={placement.rotationDeg} dispatch={dispatch} />}
+                    {isItem(placement) && (
+                      <RotationField
+                        id={placement.id}
+                        label={label}
+                        rotationDeg={placement.rotationDeg}
+                        dispatch={dispatch}
+                      />
+                    )}
                   </div>
                 )}
               </li>

@@ -25,7 +25,17 @@ const requestOf = (garment: GarmentSummary, state: DesignerState, name: string):
  * Saving for signed-in customers: the first save creates the design, later ones save over it. A visitor is offered
  * sign-in instead; the unsaved design waits in the tab meanwhile (see useDesignDraft).
  */
-export function SaveDesignPanel({ garment, state, saved, onSaved }: { garment: GarmentSummary; state: DesignerState; saved: SavedDesign | undefined; onSaved: (design: SavedDesign) => void }) {
+export function SaveDesignPanel({
+  garment,
+  state,
+  saved,
+  onSaved,
+}: {
+  garment: GarmentSummary;
+  state: DesignerState;
+  saved: SavedDesign | undefined;
+  onSaved: (design: SavedDesign) => void;
+}) {
   const nameId = useId();
   const location = useLocation();
   const navigate = useNavigate();
@@ -34,7 +44,9 @@ export function SaveDesignPanel({ garment, state, saved, onSaved }: { garment: G
   const update = useUpdateDesign();
   const [name, setName] = useState(saved?.name ?? `My ${garment.name.toLowerCase()}`);
   // What was last saved, as this page sent it: the server's copy may order the same fields differently.
-  const [savedAs, setSavedAs] = useState(() => (saved ? JSON.stringify(requestOf(garment, state, saved.name)) : undefined));
+  const [savedAs, setSavedAs] = useState(() =>
+    saved ? JSON.stringify(requestOf(garment, state, saved.name)) : undefined,
+  );
   const request = requestOf(garment, state, name);
   const isSaved = savedAs === JSON.stringify(request);
   const mutation = saved ? update : create;
@@ -66,7 +78,9 @@ export function SaveDesignPanel({ garment, state, saved, onSaved }: { garment: G
 
   return (
     <section aria-labelledby="save-heading" className="rounded-card border border-linen-200 bg-linen-100/60 p-5">
-      <h2 id="save-heading" className="text-lg font-semibold">Keep this design</h2>
+      <h2 id="save-heading" className="text-lg font-semibold">
+        Keep this design
+      </h2>
       {me.isPending ? (
         <p className="mt-2 text-sm text-walnut-500">Checking whether you are signed in…</p>
       ) : !me.data ? (
@@ -77,7 +91,9 @@ export function SaveDesignPanel({ garment, state, saved, onSaved }: { garment: G
       ) : (
         <form onSubmit={submit} className="mt-3 space-y-3">
           <div>
-            <label htmlFor={nameId} className="text-sm font-medium">Name this design</label>
+            <label htmlFor={nameId} className="text-sm font-medium">
+              Name this design
+            </label>
             <input
               id={nameId}
               value={name}
@@ -87,15 +103,26 @@ export function SaveDesignPanel({ garment, state, saved, onSaved }: { garment: G
             />
           </div>
           <div className="flex flex-wrap items-center gap-3">
-            <Button type="submit" disabled={isSaved || mutation.isPending || name.trim() === '' || state.document.placements.length === 0}>
+            <Button
+              type="submit"
+              disabled={isSaved || mutation.isPending || name.trim() === '' || state.document.placements.length === 0}
+            >
               {mutation.isPending ? 'Saving…' : saved ? 'Save changes' : 'Save design'}
             </Button>
-            <p role="status" className="text-sm text-sage-700">{isSaved && !mutation.isPending ? '✓ Saved' : ''}</p>
+            <p role="status" className="text-sm text-sage-700">
+              {isSaved && !mutation.isPending ? '✓ Saved' : ''}
+            </p>
           </div>
-          <Button tone="quiet" onClick={orderIt} disabled={mutation.isPending || name.trim() === '' || state.document.placements.length === 0 || isOrdered}>
+          <Button
+            tone="quiet"
+            onClick={orderIt}
+            disabled={mutation.isPending || name.trim() === '' || state.document.placements.length === 0 || isOrdered}
+          >
             {isSaved ? 'Order this design' : 'Save and order'}
           </Button>
-          {state.document.placements.length === 0 && <p className="text-sm text-walnut-500">Add something to the garment to save it.</p>}
+          {state.document.placements.length === 0 && (
+            <p className="text-sm text-walnut-500">Add something to the garment to save it.</p>
+          )}
           {mutation.isError && (
             <div role="alert" className="rounded-lg bg-madder-50 p-3 text-sm text-madder-700">
               <p>{mutation.error.message}</p>

@@ -24,7 +24,8 @@ export function useDesignDraft(garmentSlug: string, state: DesignerState, isKept
   const { sizeId, colourId, document } = state;
   useEffect(() => {
     try {
-      if (isKept) sessionStorage.setItem(draftKey(garmentSlug), JSON.stringify(draftOf({ sizeId, colourId, document })));
+      if (isKept)
+        sessionStorage.setItem(draftKey(garmentSlug), JSON.stringify(draftOf({ sizeId, colourId, document })));
       else sessionStorage.removeItem(draftKey(garmentSlug));
     } catch {
       // See above: without storage there is nothing to keep the draft in.

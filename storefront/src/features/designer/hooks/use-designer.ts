@@ -6,7 +6,8 @@ import { canRedo, canUndo, startHistory } from '../model/history.ts';
 
 /** Keys typed into a field belong to the field: Delete edits the text there, and Ctrl+Z undoes typing. */
 const isTypingTarget = (target: EventTarget) =>
-  target instanceof HTMLElement && (target.isContentEditable || ['INPUT', 'TEXTAREA', 'SELECT'].includes(target.tagName));
+  target instanceof HTMLElement &&
+  (target.isContentEditable || ['INPUT', 'TEXTAREA', 'SELECT'].includes(target.tagName));
 
 /**
  * The designer's state and undo history, changed only by dispatching commands by id; the keyboard shortcuts are

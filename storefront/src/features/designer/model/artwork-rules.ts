@@ -15,7 +15,11 @@ const tenths = (value: number) => Math.floor(value * 10) / 10;
  * How wide the customer's artwork may be drawn, mm: upright, it must fit inside its zone and inside the largest
  * hoop's sewing field, and within the document's limits. `limitedBy` names what sets the top, for the panel.
  */
-export function artworkWidthRange(setting: DesignSetting, artwork: ArtworkUpload | undefined, zone: PlacementZoneSummary | undefined) {
+export function artworkWidthRange(
+  setting: DesignSetting,
+  artwork: ArtworkUpload | undefined,
+  zone: PlacementZoneSummary | undefined,
+) {
   const aspect = artwork ? artwork.heightPx / artwork.widthPx : 1;
   const zoneMaxMm = zone ? Math.min(zone.widthMm, zone.heightMm / aspect) : Number.POSITIVE_INFINITY;
   const hoopMaxMm = largestFactorInHoops({ widthMm: 1, heightMm: aspect }, setting.hoops);

@@ -30,7 +30,15 @@ export function layoutBorder(setting: DesignSetting, sizeId: number, border: Bor
   const fit = fitMotifBorder(motif, { runLengthMm, closed: isClosed, count: border.count });
   if (!fit.ok) return { ok: false, reason: fit.reason, bandHeightMm: motif.heightMm + hemCurve(zone).totalRiseMm };
 
-  const { band, repeats } = layoutHemBorder({ zone, fit, isClosed, runLengthMm, hemFrontMm: size.hemFrontMm, hemOffsetMm: border.hemOffsetMm, motifHeightMm: motif.heightMm });
+  const { band, repeats } = layoutHemBorder({
+    zone,
+    fit,
+    isClosed,
+    runLengthMm,
+    hemFrontMm: size.hemFrontMm,
+    hemOffsetMm: border.hemOffsetMm,
+    motifHeightMm: motif.heightMm,
+  });
   return { ok: true, fit, isClosed, runLengthMm, band, repeats };
 }
 
@@ -38,4 +46,12 @@ export function layoutBorder(setting: DesignSetting, sizeId: number, border: Bor
 export const borderBandHeightMm = (layout: BorderLayout) => (layout.ok ? layout.band.heightMm : layout.bandHeightMm);
 
 /** A border only to be laid out, to show how a motif would fit before the customer chooses it. */
-export const trialBorder = (motif: string, run: BorderPlacement['run']): BorderPlacement => ({ id: 'trial', kind: 'border', zone: 'hem', motif, run, hemOffsetMm: 0, threads: ['trial'] });
+export const trialBorder = (motif: string, run: BorderPlacement['run']): BorderPlacement => ({
+  id: 'trial',
+  kind: 'border',
+  zone: 'hem',
+  motif,
+  run,
+  hemOffsetMm: 0,
+  threads: ['trial'],
+});

@@ -11,7 +11,11 @@ function clampAxis(centre: number, start: number, length: number, size: number):
 }
 
 /** The nearest centre, mm on the mockup, at which an item of this extent lies wholly inside its zone. */
-export function clampCentre(centre: { centerXMm: number; centerYMm: number }, extent: ExtentMm, zone: PlacementZoneSummary) {
+export function clampCentre(
+  centre: { centerXMm: number; centerYMm: number },
+  extent: ExtentMm,
+  zone: PlacementZoneSummary,
+) {
   return {
     centerXMm: clampAxis(centre.centerXMm, zone.xMm, zone.widthMm, extent.widthMm),
     centerYMm: clampAxis(centre.centerYMm, zone.yMm, zone.heightMm, extent.heightMm),
@@ -26,4 +30,5 @@ export function clampHemOffset(hemOffsetMm: number, bandHeightMm: number, zone: 
   return clampAxis(hemOffsetMm, 0, zone.heightMm, bandHeightMm);
 }
 
-export const fitsZone = (extent: ExtentMm, zone: PlacementZoneSummary) => extent.widthMm <= zone.widthMm && extent.heightMm <= zone.heightMm;
+export const fitsZone = (extent: ExtentMm, zone: PlacementZoneSummary) =>
+  extent.widthMm <= zone.widthMm && extent.heightMm <= zone.heightMm;

@@ -1,5 +1,11 @@
 import type { ArtworkUpload } from '@server/contracts/artwork.ts';
-import type { GarmentSummary, HoopSummary, LetteringFontSummary, MotifSummary, PlacementZoneSummary } from '@server/contracts/catalogue.ts';
+import type {
+  GarmentSummary,
+  HoopSummary,
+  LetteringFontSummary,
+  MotifSummary,
+  PlacementZoneSummary,
+} from '@server/contracts/catalogue.ts';
 
 type GarmentSize = GarmentSummary['sizes'][number];
 
@@ -32,10 +38,12 @@ export function sizeOf(setting: DesignSetting, sizeId: number): GarmentSize {
   return size;
 }
 
-export const zoneOf = (size: GarmentSize, code: string): PlacementZoneSummary | undefined => size.zones.find((zone) => zone.code === code);
+export const zoneOf = (size: GarmentSize, code: string): PlacementZoneSummary | undefined =>
+  size.zones.find((zone) => zone.code === code);
 
 /** Where a new name or motif goes: the first zone that is not the hem (a yoke, a bib front), else the hem. */
-export const defaultItemZone = (size: GarmentSize): PlacementZoneSummary | undefined => size.zones.find((zone) => zone.code !== HEM_ZONE) ?? size.zones[0];
+export const defaultItemZone = (size: GarmentSize): PlacementZoneSummary | undefined =>
+  size.zones.find((zone) => zone.code !== HEM_ZONE) ?? size.zones[0];
 
 export const motifOf = (setting: DesignSetting, slug: string) => setting.motifs.find((motif) => motif.slug === slug);
 

@@ -1,4 +1,10 @@
-import type { ArtworkPlacement, DesignDocument, DesignPlacement, LetteringPlacement, MotifPlacement } from '@server/contracts/designs.ts';
+import type {
+  ArtworkPlacement,
+  DesignDocument,
+  DesignPlacement,
+  LetteringPlacement,
+  MotifPlacement,
+} from '@server/contracts/designs.ts';
 
 /** Most placements the design document accepts (server/src/contracts/designs.ts). */
 export const MAX_PLACEMENTS = 12;
@@ -19,11 +25,16 @@ export type ItemPlacement = MotifPlacement | LetteringPlacement | ArtworkPlaceme
 
 export const isItem = (placement: DesignPlacement): placement is ItemPlacement => placement.kind !== 'border';
 
-export function createDesignerState(sizeId: number, colourId: number, document: DesignDocument = { version: 1, placements: [] }): DesignerState {
+export function createDesignerState(
+  sizeId: number,
+  colourId: number,
+  document: DesignDocument = { version: 1, placements: [] },
+): DesignerState {
   return { document, sizeId, colourId, selectedId: null };
 }
 
-export const findPlacement = (state: DesignerState, id: string | null) => state.document.placements.find((placement) => placement.id === id);
+export const findPlacement = (state: DesignerState, id: string | null) =>
+  state.document.placements.find((placement) => placement.id === id);
 
 export const hasRoomForPlacement = (state: DesignerState) => state.document.placements.length < MAX_PLACEMENTS;
 
@@ -34,7 +45,11 @@ export function replacePlacement(state: DesignerState, next: DesignPlacement): D
 }
 
 export function appendPlacement(state: DesignerState, placement: DesignPlacement): DesignerState {
-  return { ...state, document: { ...state.document, placements: [...state.document.placements, placement] }, selectedId: placement.id };
+  return {
+    ...state,
+    document: { ...state.document, placements: [...state.document.placements, placement] },
+    selectedId: placement.id,
+  };
 }
 
 /** The first free id from a stem: "name", then "name-2", "name-3"; quote lines and proofs refer to placements by id. */
@@ -47,4 +62,5 @@ export function nextPlacementId(state: DesignerState, stem: string): string {
 }
 
 /** Two states that differ at most in their selection: nothing the customer would want to undo. */
-export const isSameDesign = (a: DesignerState, b: DesignerState) => a.document === b.document && a.sizeId === b.sizeId && a.colourId === b.colourId;
+export const isSameDesign = (a: DesignerState, b: DesignerState) =>
+  a.document === b.document && a.sizeId === b.sizeId && a.colourId === b.colourId;

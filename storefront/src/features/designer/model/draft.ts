@@ -6,7 +6,11 @@ import { createDesignerState, type DesignerState } from './designer-state.ts';
 /** An unsaved design kept in the browser tab, so it survives the round trip through sign-in. */
 const draftEnvelope = z.object({ sizeId: z.number().int(), colourId: z.number().int(), document: z.unknown() });
 
-export const draftOf = ({ sizeId, colourId, document }: Pick<DesignerState, 'sizeId' | 'colourId' | 'document'>) => ({ sizeId, colourId, document });
+export const draftOf = ({ sizeId, colourId, document }: Pick<DesignerState, 'sizeId' | 'colourId' | 'document'>) => ({
+  sizeId,
+  colourId,
+  document,
+});
 
 /**
  * A kept draft back as designer state, or undefined when there is none fit to use: unreadable, for a size or colour
@@ -24,6 +28,7 @@ export function restoreDraft(raw: string | null, garment: GarmentSummary): Desig
   if (!envelope.success) return undefined;
   const { sizeId, colourId, document } = envelope.data;
   const restored = restoreDesign(document);
-  const isOnOffer = garment.sizes.some((size) => size.id === sizeId) && garment.colours.some((colour) => colour.id === colourId);
+  const isOnOffer =
+    garment.sizes.some((size) => size.id === sizeId) && garment.colours.some((colour) => colour.id === colourId);
   return restored.success && isOnOffer ? createDesignerState(sizeId, colourId, restored.data) : undefined;
 }

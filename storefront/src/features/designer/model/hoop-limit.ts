@@ -20,4 +20,10 @@ export function largestFactorInHoops(extent: ExtentMm, hoops: readonly HoopSumma
 
 /** The hoop with the largest sewing field, for saying what the limit is. */
 export const largestHoop = (hoops: readonly HoopSummary[]) =>
-  hoops.reduce<HoopSummary | undefined>((largest, hoop) => (!largest || hoop.fieldWidthMm * hoop.fieldHeightMm > largest.fieldWidthMm * largest.fieldHeightMm ? hoop : largest), undefined);
+  hoops.reduce<HoopSummary | undefined>(
+    (largest, hoop) =>
+      !largest || hoop.fieldWidthMm * hoop.fieldHeightMm > largest.fieldWidthMm * largest.fieldHeightMm
+        ? hoop
+        : largest,
+    undefined,
+  );

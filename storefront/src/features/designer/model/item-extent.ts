@@ -15,7 +15,13 @@ export function uprightExtent(setting: DesignSetting, placement: ItemPlacement):
     return { widthMm: placement.widthMm, heightMm: placement.widthMm * aspect };
   }
   const font = fontOf(setting, placement.font);
-  return font ? setting.measureLettering({ text: placement.text, fontFamily: font.fontFamily, letterHeightMm: placement.letterHeightMm }) : { widthMm: 0, heightMm: 0 };
+  return font
+    ? setting.measureLettering({
+        text: placement.text,
+        fontFamily: font.fontFamily,
+        letterHeightMm: placement.letterHeightMm,
+      })
+    : { widthMm: 0, heightMm: 0 };
 }
 
 /** The box an item covers on the garment, mm, turned by its rotation. */

@@ -8,5 +8,9 @@ import type { ItemPlacement } from './designer-state.ts';
 export function offsetFromZoneMiddle(setting: DesignSetting, sizeId: number, item: ItemPlacement) {
   const zone = zoneOf(sizeOf(setting, sizeId), item.zone);
   if (!zone) return undefined;
-  return { zone, dxMm: item.centerXMm - (zone.xMm + zone.widthMm / 2), dyMm: item.centerYMm - (zone.yMm + zone.heightMm / 2) };
+  return {
+    zone,
+    dxMm: item.centerXMm - (zone.xMm + zone.widthMm / 2),
+    dyMm: item.centerYMm - (zone.yMm + zone.heightMm / 2),
+  };
 }

@@ -8,7 +8,8 @@ export type LetteringTextCheck = { ok: true; text: string } | { ok: false; messa
 /** The contract's rules for lettering text, checked before the text goes into the document. */
 export function checkLetteringText(text: string): LetteringTextCheck {
   if (text.trim() === '') return { ok: false, message: 'Type the name or words to stitch.' };
-  if ([...text].length > MAX_LETTERING_LENGTH) return { ok: false, message: `Keep it to ${MAX_LETTERING_LENGTH} letters and spaces or fewer.` };
+  if ([...text].length > MAX_LETTERING_LENGTH)
+    return { ok: false, message: `Keep it to ${MAX_LETTERING_LENGTH} letters and spaces or fewer.` };
   if (/\p{Cc}/u.test(text)) return { ok: false, message: 'Lettering is one line of text.' };
   return { ok: true, text };
 }

@@ -6,7 +6,10 @@ import { defaultItemZone, HEM_ZONE, sizeOf, zoneOf, type DesignSetting } from '.
 import { findPlacement, isItem, replacePlacement, type DesignerState, type ItemPlacement } from './designer-state.ts';
 import { itemExtent } from './item-extent.ts';
 
-export const centreOfZone = (zone: PlacementZoneSummary) => ({ centerXMm: zone.xMm + zone.widthMm / 2, centerYMm: zone.yMm + zone.heightMm / 2 });
+export const centreOfZone = (zone: PlacementZoneSummary) => ({
+  centerXMm: zone.xMm + zone.widthMm / 2,
+  centerYMm: zone.yMm + zone.heightMm / 2,
+});
 
 /**
  * Keeps an item wholly inside its zone at this size, so what the customer sees is what can be hooped; the document
@@ -17,7 +20,8 @@ export function settleItem(setting: DesignSetting, sizeId: number, item: ItemPla
   const zone = zoneOf(size, item.zone) ?? defaultItemZone(size);
   if (!zone) return item;
   const centre = clampCentre(item, itemExtent(setting, item), zone);
-  const isUnchanged = zone.code === item.zone && centre.centerXMm === item.centerXMm && centre.centerYMm === item.centerYMm;
+  const isUnchanged =
+    zone.code === item.zone && centre.centerXMm === item.centerXMm && centre.centerYMm === item.centerYMm;
   return isUnchanged ? item : { ...item, ...centre, zone: zone.code };
 }
 
@@ -25,7 +29,11 @@ export function settleItem(setting: DesignSetting, sizeId: number, item: ItemPla
 export function settleBorder(setting: DesignSetting, sizeId: number, border: BorderPlacement): BorderPlacement {
   const zone = zoneOf(sizeOf(setting, sizeId), HEM_ZONE);
   if (!zone) return border;
-  const hemOffsetMm = clampHemOffset(border.hemOffsetMm, borderBandHeightMm(layoutBorder(setting, sizeId, border)), zone);
+  const hemOffsetMm = clampHemOffset(
+    border.hemOffsetMm,
+    borderBandHeightMm(layoutBorder(setting, sizeId, border)),
+    zone,
+  );
   return hemOffsetMm === border.hemOffsetMm ? border : { ...border, hemOffsetMm };
 }
 
@@ -44,18 +52,28 @@ export function withSettled(setting: DesignSetting, state: DesignerState, next: 
  * Moves a placement's centre towards a point on the mockup, mm. An item goes as near as its zone allows; a border
  * follows the hem, so only the height of its centre line counts.
  */
-export function movePlacement(setting: DesignSetting, state: DesignerState, id: string, to: { centerXMm: number; centerYMm: number }): DesignerState {
+export function movePlacement(
+  setting: DesignSetting,
+  state: DesignerState,
+  id: string,
+  to: { centerXMm: number; centerYMm: number },
+): DesignerState {
   const placement = findPlacement(state, id);
   if (!placement) return state;
   if (placement.kind === 'border') {
     const zone = zoneOf(sizeOf(setting, state.sizeId), HEM_ZONE);
     if (!zone) return state;
-    const settled = settleBorder(setting, state.sizeId, { ...placement, hemOffsetMm: zone.yMm + zone.heightMm - to.centerYMm });
+    const settled = settleBorder(setting, state.sizeId, {
+      ...placement,
+      hemOffsetMm: zone.yMm + zone.heightMm - to.centerYMm,
+    });
     return settled.hemOffsetMm === placement.hemOffsetMm ? state : replacePlacement(state, settled);
   }
   if (!isItem(placement)) return state;
   const settled = settleItem(setting, state.sizeId, { ...placement, ...to });
-  return settled.centerXMm === placement.centerXMm && settled.centerYMm === placement.centerYMm ? state : replacePlacement(state, settled);
+  return settled.centerXMm === placement.centerXMm && settled.centerYMm === placement.centerYMm
+    ? state
+    : replacePlacement(state, settled);
 }
 
 /** Where a placement's centre is on the mockup, mm (a border's centre line is at the middle of the hem zone). */

@@ -5,7 +5,12 @@ import { findPlacement, isItem, type DesignerState } from './designer-state.ts';
 export const SNAP_TO_CENTRE_MM = 3;
 
 /** Where a drag carries an item, pulled onto its zone's centre line (side to side) when it comes within snapping distance. */
-export function snapToCentreLine(setting: DesignSetting, state: DesignerState, id: string, to: { centerXMm: number; centerYMm: number }) {
+export function snapToCentreLine(
+  setting: DesignSetting,
+  state: DesignerState,
+  id: string,
+  to: { centerXMm: number; centerYMm: number },
+) {
   const placement = findPlacement(state, id);
   if (!placement || !isItem(placement)) return to;
   const zone = zoneOf(sizeOf(setting, state.sizeId), placement.zone);

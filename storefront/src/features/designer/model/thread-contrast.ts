@@ -16,6 +16,9 @@ const contrast = (a: string, b: string) => {
 };
 
 /** The first thread in the palette's order that reads clearly on this fabric, so a new name never starts invisible. */
-export function legibleThread(threads: readonly ThreadColourSummary[], fabricHex: string): ThreadColourSummary | undefined {
+export function legibleThread(
+  threads: readonly ThreadColourSummary[],
+  fabricHex: string,
+): ThreadColourSummary | undefined {
   return threads.find((thread) => contrast(thread.hex, fabricHex) >= LEGIBLE_CONTRAST) ?? threads.at(-1);
 }

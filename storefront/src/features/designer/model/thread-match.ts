@@ -28,5 +28,9 @@ export interface OfferedThread {
 export function offerNearestThreads(hex: string, palette: readonly ThreadColourSummary[]): OfferedThread[] {
   const found = nearestThreads(hex, palette, OFFERED_MATCHES);
   if (!found.ok) return [];
-  return found.matches.map(({ thread, deltaE }) => ({ thread, deltaE: Math.round(deltaE * 10) / 10, words: describeDeltaE(deltaE) }));
+  return found.matches.map(({ thread, deltaE }) => ({
+    thread,
+    deltaE: Math.round(deltaE * 10) / 10,
+    words: describeDeltaE(deltaE),
+  }));
 }

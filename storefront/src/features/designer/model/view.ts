@@ -30,13 +30,23 @@ export interface DesignView {
  */
 export function fitView(mockup: { widthMm: Mm; heightMm: Mm }, box: { widthPx: Px; heightPx: Px }): DesignView {
   const pxPerMm = Math.max(0, Math.min(box.widthPx / mockup.widthMm, box.heightPx / mockup.heightMm));
-  return { pxPerMm, widthPx: px(Math.floor(mockup.widthMm * pxPerMm)), heightPx: px(Math.floor(mockup.heightMm * pxPerMm)) };
+  return {
+    pxPerMm,
+    widthPx: px(Math.floor(mockup.widthMm * pxPerMm)),
+    heightPx: px(Math.floor(mockup.heightMm * pxPerMm)),
+  };
 }
 
 export const toPx = (view: DesignView, length: Mm): Px => px(length * view.pxPerMm);
 
 export const toMm = (view: DesignView, length: Px): Mm => mm(view.pxPerMm === 0 ? 0 : length / view.pxPerMm);
 
-export const pointToPx = (view: DesignView, point: PointMm): PointPx => ({ xPx: toPx(view, point.xMm), yPx: toPx(view, point.yMm) });
+export const pointToPx = (view: DesignView, point: PointMm): PointPx => ({
+  xPx: toPx(view, point.xMm),
+  yPx: toPx(view, point.yMm),
+});
 
-export const pointToMm = (view: DesignView, point: PointPx): PointMm => ({ xMm: toMm(view, point.xPx), yMm: toMm(view, point.yPx) });
+export const pointToMm = (view: DesignView, point: PointPx): PointMm => ({
+  xMm: toMm(view, point.xPx),
+  yMm: toMm(view, point.yPx),
+});

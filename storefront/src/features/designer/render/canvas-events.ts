@@ -10,7 +10,12 @@ const RESYNC_AFTER_MS = 50;
  * Turns what the customer does on the canvas into commands; nothing here writes to the design itself. A drag
  * previews on every pointer move and commits once on release; clicking an item selects it.
  */
-export function translateCanvasEvents(canvas: Canvas, sync: SceneSync, viewOf: () => DesignView, dispatch: Dispatch): () => void {
+export function translateCanvasEvents(
+  canvas: Canvas,
+  sync: SceneSync,
+  viewOf: () => DesignView,
+  dispatch: Dispatch,
+): () => void {
   const target = (object: FabricObject) => {
     const id = sync.placementIdOf(object);
     if (id === undefined) return undefined;
@@ -31,7 +36,8 @@ export function translateCanvasEvents(canvas: Canvas, sync: SceneSync, viewOf: (
       if (!moved) return;
       // Objects are drawn in mm and scaled by the view, so a resize by the corner handles shows in the scale.
       const scaledWidthMm = (object.width * object.scaleX) / viewOf().pxPerMm;
-      if (Math.abs(object.scaleX / viewOf().pxPerMm - 1) > 1e-3) dispatch('update-artwork', { id: moved.id, widthMm: scaledWidthMm });
+      if (Math.abs(object.scaleX / viewOf().pxPerMm - 1) > 1e-3)
+        dispatch('update-artwork', { id: moved.id, widthMm: scaledWidthMm });
       else dispatch('move-placement', moved);
       // A change the document clamps to what it already was renders no new scene, so once the design has had its
       // turn to re-render, put every object back where the document has it.

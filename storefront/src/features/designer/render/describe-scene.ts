@@ -31,7 +31,11 @@ export type Drawable =
  * motifs in their threads, a border's repeats as the engine lays them out (a border that does not fit is not
  * drawn; the panel says why), and the customer's artwork once its upload is known.
  */
-export function describeScene(state: Pick<DesignerState, 'document' | 'sizeId'>, setting: DesignSetting, threads: readonly ThreadColourSummary[]): Drawable[] {
+export function describeScene(
+  state: Pick<DesignerState, 'document' | 'sizeId'>,
+  setting: DesignSetting,
+  threads: readonly ThreadColourSummary[],
+): Drawable[] {
   const hexOf = (code: string) => threads.find((thread) => thread.code === code)?.hex;
   return state.document.placements.flatMap((placement): Drawable[] => {
     if (placement.kind === 'lettering') {
@@ -40,7 +44,20 @@ export function describeScene(state: Pick<DesignerState, 'document' | 'sizeId'>,
       const fontSizeMm = fontSizeFor(font.fontFamily, placement.letterHeightMm);
       const fill = hexOf(placement.thread) ?? UNKNOWN_THREAD_HEX;
       const { id, text, centerXMm, centerYMm, rotationDeg } = placement;
-      return [{ kind: 'lettering', id, key: JSON.stringify([text, font.fontFamily, fontSizeMm, fill]), text, fontFamily: font.fontFamily, fontSizeMm, fill, centerXMm, centerYMm, rotationDeg }];
+      return [
+        {
+          kind: 'lettering',
+          id,
+          key: JSON.stringify([text, font.fontFamily, fontSizeMm, fill]),
+          text,
+          fontFamily: font.fontFamily,
+          fontSizeMm,
+          fill,
+          centerXMm,
+          centerYMm,
+          rotationDeg,
+        },
+      ];
     }
     if (placement.kind === 'motif') {
       const motif = motifOf(setting, placement.motif);
@@ -48,7 +65,9 @@ export function describeScene(state: Pick<DesignerState, 'document' | 'sizeId'>,
       const svg = recolourMotif(motif.svg, placement.threads.map(hexOf));
       const widthMm = (motif.widthMm * placement.scalePct) / 100;
       const { id, centerXMm, centerYMm, rotationDeg } = placement;
-      return [{ kind: 'motif', id, key: JSON.stringify([svg, widthMm]), svg, widthMm, centerXMm, centerYMm, rotationDeg }];
+      return [
+        { kind: 'motif', id, key: JSON.stringify([svg, widthMm]), svg, widthMm, centerXMm, centerYMm, rotationDeg },
+      ];
     }
     if (placement.kind === 'border') {
       const motif = motifOf(setting, placement.motif);
@@ -58,13 +77,36 @@ export function describeScene(state: Pick<DesignerState, 'document' | 'sizeId'>,
       const shape = layout.repeats.map((repeat) => [repeat.centerXMm, repeat.widthMm, repeat.heightMm]);
       const { band } = layout;
       const key = JSON.stringify([svg, shape, band.leftMm, band.widthMm]);
-      return [{ kind: 'border', id: placement.id, key, svg, repeats: layout.repeats, band, centerXMm: band.leftMm + band.widthMm / 2, centerYMm: band.centerYMm, rotationDeg: 0 }];
+      return [
+        {
+          kind: 'border',
+          id: placement.id,
+          key,
+          svg,
+          repeats: layout.repeats,
+          band,
+          centerXMm: band.leftMm + band.widthMm / 2,
+          centerYMm: band.centerYMm,
+          rotationDeg: 0,
+        },
+      ];
     }
     if (placement.kind === 'artwork') {
       const artwork = artworkOf(setting, placement.artworkUploadId);
       if (!artwork) return [];
       const { id, centerXMm, centerYMm, rotationDeg, widthMm } = placement;
-      return [{ kind: 'artwork', id, key: JSON.stringify([artwork.imageUrl, widthMm]), src: artwork.imageUrl, widthMm, centerXMm, centerYMm, rotationDeg }];
+      return [
+        {
+          kind: 'artwork',
+          id,
+          key: JSON.stringify([artwork.imageUrl, widthMm]),
+          src: artwork.imageUrl,
+          widthMm,
+          centerXMm,
+          centerYMm,
+          rotationDeg,
+        },
+      ];
     }
     return [];
   });

@@ -33,7 +33,10 @@ export interface PlacementObject {
 
 async function motifGroup(svg: string, widthMm: number): Promise<FabricObject> {
   const { objects, options } = await loadSVGFromString(svg);
-  const group = util.groupSVGElements(objects.filter((object) => object !== null), options);
+  const group = util.groupSVGElements(
+    objects.filter((object) => object !== null),
+    options,
+  );
   if (!(group.width > 0)) throw new Error('The motif drawing has nothing in it to draw');
   group.scale(widthMm / group.width);
   return group;
@@ -48,7 +51,13 @@ const threadShadow = () => new Shadow({ color: 'rgba(46, 36, 30, 0.28)', blur: 0
  */
 export async function buildPlacementObject(drawable: Drawable): Promise<PlacementObject> {
   if (drawable.kind === 'lettering') {
-    const text = new FabricText(drawable.text, { ...interactive, fontFamily: drawable.fontFamily, fontSize: drawable.fontSizeMm, fill: drawable.fill, shadow: threadShadow() });
+    const text = new FabricText(drawable.text, {
+      ...interactive,
+      fontFamily: drawable.fontFamily,
+      fontSize: drawable.fontSizeMm,
+      fill: drawable.fill,
+      shadow: threadShadow(),
+    });
     return { object: text, centerXMm: (current) => current.centerXMm, offsetYMm: 0 };
   }
   if (drawable.kind === 'artwork') {
@@ -58,7 +67,15 @@ export async function buildPlacementObject(drawable: Drawable): Promise<Placemen
     image.set({ originX: 'center', originY: 'center', left: 0, top: 0 });
     image.scale(drawable.widthMm / image.width);
     // Corner handles resize it about its centre, in proportion; the panel sets its width exactly.
-    const wrapper = new Group([image], { ...interactive, hasControls: true, centeredScaling: true, lockScalingFlip: true, cornerColor: SELECTION_COLOUR, cornerSize: 14, transparentCorners: false });
+    const wrapper = new Group([image], {
+      ...interactive,
+      hasControls: true,
+      centeredScaling: true,
+      lockScalingFlip: true,
+      cornerColor: SELECTION_COLOUR,
+      cornerSize: 14,
+      transparentCorners: false,
+    });
     wrapper.setControlsVisibility({ mt: false, mb: false, ml: false, mr: false, mtr: false });
     return { object: wrapper, centerXMm: (current) => current.centerXMm, offsetYMm: 0 };
   }
@@ -76,12 +93,31 @@ export async function buildPlacementObject(drawable: Drawable): Promise<Placemen
   const repeats = await Promise.all(
     drawable.repeats.map(async (repeat) => {
       const group = await motifGroup(drawable.svg, repeat.widthMm);
-      group.set({ originX: 'center', originY: 'center', left: repeat.centerXMm, top: repeat.centerYMm - band.centerYMm, angle: repeat.rotationDeg });
+      group.set({
+        originX: 'center',
+        originY: 'center',
+        left: repeat.centerXMm,
+        top: repeat.centerYMm - band.centerYMm,
+        angle: repeat.rotationDeg,
+      });
       return group;
     }),
   );
-  const border = new Group(repeats, { ...interactive, lockMovementX: true, hoverCursor: 'ns-resize', moveCursor: 'ns-resize', shadow: threadShadow() });
+  const border = new Group(repeats, {
+    ...interactive,
+    lockMovementX: true,
+    hoverCursor: 'ns-resize',
+    moveCursor: 'ns-resize',
+    shadow: threadShadow(),
+  });
   const { x: centreXMm, y: centreYMm } = border.getCenterPoint();
-  border.clipPath = new Rect({ originX: 'center', originY: 'center', left: band.leftMm + band.widthMm / 2 - centreXMm, top: 0, width: band.widthMm, height: border.height + 10 });
+  border.clipPath = new Rect({
+    originX: 'center',
+    originY: 'center',
+    left: band.leftMm + band.widthMm / 2 - centreXMm,
+    top: 0,
+    width: band.widthMm,
+    height: border.height + 10,
+  });
   return { object: border, centerXMm: () => centreXMm, offsetYMm: centreYMm };
 }

@@ -26,6 +26,17 @@ interface ResizeRequest {
  */
 export async function resizeDocument(request: ResizeRequest): Promise<DesignDocument> {
   await loadLetteringFonts([...new Set(request.fonts.map((font) => font.fontFamily))]);
-  const setting: DesignSetting = { garment: request.garment, motifs: request.motifs, fonts: request.fonts, measureLettering, hoops: request.hoops ?? [], artworks: request.artworks ?? [] };
-  return changeSize.perform(createDesignerState(request.sizeId, request.colourId, request.document), { sizeId: request.toSizeId }, setting).document;
+  const setting: DesignSetting = {
+    garment: request.garment,
+    motifs: request.motifs,
+    fonts: request.fonts,
+    measureLettering,
+    hoops: request.hoops ?? [],
+    artworks: request.artworks ?? [],
+  };
+  return changeSize.perform(
+    createDesignerState(request.sizeId, request.colourId, request.document),
+    { sizeId: request.toSizeId },
+    setting,
+  ).document;
 }

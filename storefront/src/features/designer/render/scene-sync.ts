@@ -140,7 +140,8 @@ export function createSceneSync(canvas: Canvas) {
   function show(scene: Scene) {
     latest = scene;
     // Resizing a canvas clears it, so only a new view resizes; drags sync many times a second.
-    if (canvas.width !== scene.view.widthPx || canvas.height !== scene.view.heightPx) canvas.setDimensions({ width: scene.view.widthPx, height: scene.view.heightPx });
+    if (canvas.width !== scene.view.widthPx || canvas.height !== scene.view.heightPx)
+      canvas.setDimensions({ width: scene.view.widthPx, height: scene.view.heightPx });
     void showMockup(scene);
     showGuides(scene);
     for (const [id, entry] of built) {

@@ -51,7 +51,8 @@ export function buildZoneGuides(zones: readonly PlacementZoneSummary[], view: De
     objects,
     show(activeZone) {
       for (const object of objects) object.visible = activeZone !== null;
-      for (const [code, outline] of outlines) outline.set({ stroke: code === activeZone ? MADDER_600 : WALNUT_500, opacity: code === activeZone ? 1 : 0.6 });
+      for (const [code, outline] of outlines)
+        outline.set({ stroke: code === activeZone ? MADDER_600 : WALNUT_500, opacity: code === activeZone ? 1 : 0.6 });
     },
   };
 }

@@ -11,4 +11,5 @@ export const getDesigns = () => apiRequest('/designs', savedDesignListResponse).
  */
 export const designListQuery = () => queryOptions({ queryKey: ['designs'], queryFn: getDesigns });
 
-export const useDesigns = (options: { enabled: boolean }) => useQuery({ ...designListQuery(), enabled: options.enabled });
+export const useDesigns = (options: { enabled: boolean }) =>
+  useQuery({ ...designListQuery(), enabled: options.enabled });

@@ -18,23 +18,37 @@ export function DeleteDesignButton({ design }: { design: SavedDesign }) {
         <p>{remove.error.message}</p>
         {isOrdered && (
           <p className="mt-1">
-            The studio keeps every design that is in an order, so it makes exactly what you ordered. To change it, make a
-            copy and change that.
+            The studio keeps every design that is in an order, so it makes exactly what you ordered. To change it, make
+            a copy and change that.
           </p>
         )}
-        <Button tone="quiet" className="mt-2" autoFocus onClick={() => remove.reset()}>OK</Button>
+        <Button tone="quiet" className="mt-2" autoFocus onClick={() => remove.reset()}>
+          OK
+        </Button>
       </div>
     );
   }
   if (!isAsking) {
-    return <Button tone="quiet" onClick={() => setIsAsking(true)}>Delete</Button>;
+    return (
+      <Button tone="quiet" onClick={() => setIsAsking(true)}>
+        Delete
+      </Button>
+    );
   }
   return (
-    <div role="group" aria-label={`Delete “${design.name}”?`} className="flex flex-wrap items-center gap-2 rounded-lg bg-madder-50 p-3 text-sm">
+    <div
+      role="group"
+      aria-label={`Delete “${design.name}”?`}
+      className="flex flex-wrap items-center gap-2 rounded-lg bg-madder-50 p-3 text-sm"
+    >
       <span className="text-madder-700">Delete “{design.name}” for good?</span>
-      <Button disabled={remove.isPending} onClick={() => remove.mutate(design.id)}>{remove.isPending ? 'Deleting…' : 'Yes, delete it'}</Button>
+      <Button disabled={remove.isPending} onClick={() => remove.mutate(design.id)}>
+        {remove.isPending ? 'Deleting…' : 'Yes, delete it'}
+      </Button>
       {/* Focus lands on the safe answer, so a stray Enter keeps the design. */}
-      <Button tone="quiet" autoFocus onClick={() => setIsAsking(false)}>Keep it</Button>
+      <Button tone="quiet" autoFocus onClick={() => setIsAsking(false)}>
+        Keep it
+      </Button>
     </div>
   );
 }

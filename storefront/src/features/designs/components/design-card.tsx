@@ -10,7 +10,8 @@ import { RenameDesignForm } from './rename-design-form.tsx';
 import { ShareDesignPanel } from './share-design-panel.tsx';
 import { DeleteDesignButton } from './delete-design-button.tsx';
 
-const changedOn = (iso: string) => new Date(iso).toLocaleDateString('en-US', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+const changedOn = (iso: string) =>
+  new Date(iso).toLocaleDateString('en-US', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
 
 /**
  * One saved design: its picture on the garment, what it is, and everything the customer can do with it. Rename and
@@ -40,7 +41,13 @@ export function DesignCard({
     <li className="flex flex-col overflow-hidden rounded-card border border-linen-200 bg-white shadow-sm">
       <div className="flex h-64 items-center justify-center bg-linen-100 p-3">
         {garment && layout ? (
-          <DesignDrawing layout={layout} garment={garment} colourHex={colour?.hex} title={`${design.name} on the ${garment.name.toLowerCase()}`} className="h-full w-full" />
+          <DesignDrawing
+            layout={layout}
+            garment={garment}
+            colourHex={colour?.hex}
+            title={`${design.name} on the ${garment.name.toLowerCase()}`}
+            className="h-full w-full"
+          />
         ) : (
           <p className="text-sm text-walnut-500">This garment is no longer offered.</p>
         )}
@@ -49,9 +56,16 @@ export function DesignCard({
         <div>
           <h2 className="text-lg font-semibold break-words">{design.name}</h2>
           <p className="text-sm text-walnut-500">
-            {garment ? `${garment.name}${size ? `, ${size.label}` : ''}${colour ? `, ${colour.name}` : ''}` : 'Garment no longer offered'} · changed {changedOn(design.updatedAt)}
+            {garment
+              ? `${garment.name}${size ? `, ${size.label}` : ''}${colour ? `, ${colour.name}` : ''}`
+              : 'Garment no longer offered'}{' '}
+            · changed {changedOn(design.updatedAt)}
           </p>
-          {design.shareToken && <p className="mt-1 inline-block rounded-full bg-sage-50 px-2.5 py-0.5 text-xs font-medium text-sage-700">Shared by link</p>}
+          {design.shareToken && (
+            <p className="mt-1 inline-block rounded-full bg-sage-50 px-2.5 py-0.5 text-xs font-medium text-sage-700">
+              Shared by link
+            </p>
+          )}
         </div>
         <div className="flex flex-wrap gap-2">
           {openHref && (
@@ -59,14 +73,26 @@ export function DesignCard({
               Open
             </Link>
           )}
-          <Button tone="quiet" aria-expanded={panel === 'rename'} onClick={() => toggle('rename')}>Rename</Button>
-          <Button tone="quiet" disabled={duplicate.isPending} onClick={() => duplicate.mutate(design.id, { onSuccess: onDuplicated })}>
+          <Button tone="quiet" aria-expanded={panel === 'rename'} onClick={() => toggle('rename')}>
+            Rename
+          </Button>
+          <Button
+            tone="quiet"
+            disabled={duplicate.isPending}
+            onClick={() => duplicate.mutate(design.id, { onSuccess: onDuplicated })}
+          >
             {duplicate.isPending ? 'Copying…' : 'Duplicate'}
           </Button>
-          <Button tone="quiet" aria-expanded={panel === 'share'} onClick={() => toggle('share')}>Share</Button>
+          <Button tone="quiet" aria-expanded={panel === 'share'} onClick={() => toggle('share')}>
+            Share
+          </Button>
           <DeleteDesignButton design={design} />
         </div>
-        {duplicate.isError && <p role="alert" className="text-sm text-madder-700">{duplicate.error.message}</p>}
+        {duplicate.isError && (
+          <p role="alert" className="text-sm text-madder-700">
+            {duplicate.error.message}
+          </p>
+        )}
         {panel === 'rename' && <RenameDesignForm design={design} onDone={() => setPanel(undefined)} />}
         {panel === 'share' && <ShareDesignPanel design={design} linkOf={linkOf} />}
       </div>

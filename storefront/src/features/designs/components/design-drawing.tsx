@@ -11,10 +11,15 @@ const CAP_HEIGHT_EM = 0.7;
 const ARTWORK_ASPECT = 0.75;
 
 const turned = (placement: { centerXMm: number; centerYMm: number; rotationDeg: number }) =>
-  placement.rotationDeg === 0 ? undefined : `rotate(${placement.rotationDeg} ${placement.centerXMm} ${placement.centerYMm})`;
+  placement.rotationDeg === 0
+    ? undefined
+    : `rotate(${placement.rotationDeg} ${placement.centerXMm} ${placement.centerYMm})`;
 
 function Placement({ placement, clipId }: { placement: DrawnPlacement; clipId: string }) {
-  const src = useMemo(() => ('svg' in placement ? motifInThreadsSrc(placement.svg, placement.threadHexes) : ''), [placement]);
+  const src = useMemo(
+    () => ('svg' in placement ? motifInThreadsSrc(placement.svg, placement.threadHexes) : ''),
+    [placement],
+  );
   switch (placement.kind) {
     case 'border': {
       const { visible } = placement;
@@ -24,7 +29,14 @@ function Placement({ placement, clipId }: { placement: DrawnPlacement; clipId: s
             <rect x={visible.xMm} y={visible.yMm} width={visible.widthMm} height={visible.heightMm} />
           </clipPath>
           {placement.repeats.map((repeat, index) => (
-            <image key={index} href={src} x={repeat.xMm} y={repeat.yMm} width={repeat.widthMm} height={repeat.heightMm} />
+            <image
+              key={index}
+              href={src}
+              x={repeat.xMm}
+              y={repeat.yMm}
+              width={repeat.widthMm}
+              height={repeat.heightMm}
+            />
           ))}
         </g>
       );
@@ -79,12 +91,31 @@ function Placement({ placement, clipId }: { placement: DrawnPlacement; clipId: s
  * A design drawn still on its garment, without the designer's canvas library: the dyed mockup and each placement
  * as SVG, to the mockup's millimetres. `title` names the picture for screen readers.
  */
-export function DesignDrawing({ layout, garment, colourHex, title, className = '' }: { layout: DesignDrawingLayout; garment: GarmentSummary; colourHex: string | undefined; title: string; className?: string }) {
+export function DesignDrawing({
+  layout,
+  garment,
+  colourHex,
+  title,
+  className = '',
+}: {
+  layout: DesignDrawingLayout;
+  garment: GarmentSummary;
+  colourHex: string | undefined;
+  title: string;
+  className?: string;
+}) {
   const idPrefix = useId().replace(/[^A-Za-z0-9_-]/g, '');
   useLetteringFaces(layout.placements.some((placement) => placement.kind === 'lettering'));
   return (
     <svg viewBox={`0 0 ${layout.widthMm} ${layout.heightMm}`} role="img" aria-label={title} className={className}>
-      <image href={dyedMockupSrc(garment.mockupSvg, colourHex)} x={0} y={0} width={layout.widthMm} height={layout.heightMm} preserveAspectRatio="none" />
+      <image
+        href={dyedMockupSrc(garment.mockupSvg, colourHex)}
+        x={0}
+        y={0}
+        width={layout.widthMm}
+        height={layout.heightMm}
+        preserveAspectRatio="none"
+      />
       {layout.placements.map((placement) => (
         <Placement key={placement.id} placement={placement} clipId={`${idPrefix}-clip-${placement.id}`} />
       ))}

@@ -12,14 +12,17 @@ export function RenameDesignForm({ design, onDone }: { design: SavedDesign; onDo
   const errorId = useId();
   const [name, setName] = useState(design.name);
   const rename = useRenameDesign();
-  const fieldError = rename.error instanceof ApiError ? (rename.error.fields?.name ?? rename.error.message) : rename.error?.message;
+  const fieldError =
+    rename.error instanceof ApiError ? (rename.error.fields?.name ?? rename.error.message) : rename.error?.message;
   const submit = (event: FormEvent) => {
     event.preventDefault();
     rename.mutate({ id: design.id, request: { name } }, { onSuccess: onDone });
   };
   return (
     <form onSubmit={submit} className="space-y-2">
-      <label htmlFor={fieldId} className="block text-sm font-medium">New name</label>
+      <label htmlFor={fieldId} className="block text-sm font-medium">
+        New name
+      </label>
       <input
         id={fieldId}
         value={name}
@@ -30,10 +33,18 @@ export function RenameDesignForm({ design, onDone }: { design: SavedDesign; onDo
         onChange={(event) => setName(event.target.value)}
         className="block min-h-11 w-full rounded-lg border border-linen-300 bg-white px-3"
       />
-      {fieldError && <p id={errorId} role="alert" className="text-sm text-madder-700">{fieldError}</p>}
+      {fieldError && (
+        <p id={errorId} role="alert" className="text-sm text-madder-700">
+          {fieldError}
+        </p>
+      )}
       <div className="flex flex-wrap gap-2">
-        <Button type="submit" disabled={rename.isPending}>{rename.isPending ? 'Saving…' : 'Save the name'}</Button>
-        <Button tone="quiet" onClick={onDone}>Cancel</Button>
+        <Button type="submit" disabled={rename.isPending}>
+          {rename.isPending ? 'Saving…' : 'Save the name'}
+        </Button>
+        <Button tone="quiet" onClick={onDone}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

@@ -28,25 +28,47 @@ export function ShareDesignPanel({ design, linkOf }: { design: SavedDesign; link
     <div className="space-y-2 rounded-lg bg-linen-100 p-3 text-sm">
       {link ? (
         <>
-          <label htmlFor={linkId} className="block font-medium">Anyone with this link can look (but not change it)</label>
-          <input id={linkId} readOnly value={link} onFocus={(event) => event.target.select()} className="block min-h-11 w-full rounded-lg border border-linen-300 bg-white px-3 text-walnut-700" />
+          <label htmlFor={linkId} className="block font-medium">
+            Anyone with this link can look (but not change it)
+          </label>
+          <input
+            id={linkId}
+            readOnly
+            value={link}
+            onFocus={(event) => event.target.select()}
+            className="block min-h-11 w-full rounded-lg border border-linen-300 bg-white px-3 text-walnut-700"
+          />
           <div className="flex flex-wrap items-center gap-2">
-            <Button tone="quiet" onClick={() => void copy(link)}>Copy link</Button>
-            <Button tone="quiet" disabled={unshare.isPending} onClick={() => unshare.mutate(design.id, { onSuccess: () => setCopied(false) })}>
+            <Button tone="quiet" onClick={() => void copy(link)}>
+              Copy link
+            </Button>
+            <Button
+              tone="quiet"
+              disabled={unshare.isPending}
+              onClick={() => unshare.mutate(design.id, { onSuccess: () => setCopied(false) })}
+            >
               {unshare.isPending ? 'Stopping…' : 'Stop sharing'}
             </Button>
-            <span role="status" className="text-sage-700">{copied ? '✓ Copied' : ''}</span>
+            <span role="status" className="text-sage-700">
+              {copied ? '✓ Copied' : ''}
+            </span>
           </div>
         </>
       ) : (
         <>
-          <p className="text-walnut-700">Make a link to show this design to family and friends. You can switch it off again.</p>
+          <p className="text-walnut-700">
+            Make a link to show this design to family and friends. You can switch it off again.
+          </p>
           <Button tone="quiet" disabled={share.isPending} onClick={() => share.mutate(design.id)}>
             {share.isPending ? 'Making the link…' : 'Make a share link'}
           </Button>
         </>
       )}
-      {failure && <p role="alert" className="text-madder-700">{failure.message}</p>}
+      {failure && (
+        <p role="alert" className="text-madder-700">
+          {failure.message}
+        </p>
+      )}
     </div>
   );
 }

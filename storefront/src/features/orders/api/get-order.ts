@@ -4,7 +4,8 @@ import { apiRequest } from '@ui/api-client.ts';
 
 export const getOrder = (number: string) => apiRequest(`/orders/${encodeURIComponent(number)}`, customerOrderResponse);
 
-export const orderQuery = (number: string) => queryOptions({ queryKey: ['orders', number], queryFn: () => getOrder(number) });
+export const orderQuery = (number: string) =>
+  queryOptions({ queryKey: ['orders', number], queryFn: () => getOrder(number) });
 
 /** How often to look again while the payment provider's word is on its way, and for how long at most (about 1 min). */
 const PAYMENT_POLL_MS = 1_500;
@@ -20,7 +21,9 @@ export function useOrder(number: string, options: { isBackFromPayment?: boolean 
     refetchInterval: (query) => {
       const data = query.state.data as CustomerOrderResponse | undefined;
       const isWaiting = data?.order.status === 'awaiting_payment' && !data.payment.failureMessage;
-      return options.isBackFromPayment && isWaiting && query.state.dataUpdateCount < MAX_PAYMENT_POLLS ? PAYMENT_POLL_MS : false;
+      return options.isBackFromPayment && isWaiting && query.state.dataUpdateCount < MAX_PAYMENT_POLLS
+        ? PAYMENT_POLL_MS
+        : false;
     },
   });
 }

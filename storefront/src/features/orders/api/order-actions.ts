@@ -7,9 +7,11 @@ import { ordersQuery } from './get-orders.ts';
 const orderPath = (number: string) => `/orders/${encodeURIComponent(number)}`;
 
 /** Opens a new payment page for an order whose card was declined or whose hold ran out. */
-export const retryPayment = (number: string) => apiRequest(`${orderPath(number)}/payment`, checkoutStartedResponse, { method: 'POST', body: {} });
+export const retryPayment = (number: string) =>
+  apiRequest(`${orderPath(number)}/payment`, checkoutStartedResponse, { method: 'POST', body: {} });
 
-export const cancelOrder = (number: string) => apiRequest(`${orderPath(number)}/cancel`, null, { method: 'POST', body: {} });
+export const cancelOrder = (number: string) =>
+  apiRequest(`${orderPath(number)}/cancel`, null, { method: 'POST', body: {} });
 
 export interface ProofAnswer {
   version: number;
@@ -18,12 +20,19 @@ export interface ProofAnswer {
 }
 
 export const answerProof = (number: string, { version, isApproved, answer }: ProofAnswer) =>
-  apiRequest(`${orderPath(number)}/proofs/${version}/${isApproved ? 'approval' : 'change-request'}`, null, { method: 'POST', body: answer });
+  apiRequest(`${orderPath(number)}/proofs/${version}/${isApproved ? 'approval' : 'change-request'}`, null, {
+    method: 'POST',
+    body: answer,
+  });
 
 /** Refreshes the order and the list after it changed. */
 function useOrderRefresh(number: string) {
   const queryClient = useQueryClient();
-  return () => Promise.all([queryClient.invalidateQueries(orderQuery(number)), queryClient.invalidateQueries({ queryKey: ordersQuery().queryKey, exact: true })]);
+  return () =>
+    Promise.all([
+      queryClient.invalidateQueries(orderQuery(number)),
+      queryClient.invalidateQueries({ queryKey: ordersQuery().queryKey, exact: true }),
+    ]);
 }
 
 export const useRetryPayment = (number: string) => useMutation({ mutationFn: () => retryPayment(number) });

@@ -14,13 +14,25 @@ export function CancelOrderButton({ number }: { number: string }) {
     );
   }
   return (
-    <div role="group" aria-label="Cancel the order?" className="rounded-lg border border-linen-300 bg-linen-50 p-3 text-sm">
+    <div
+      role="group"
+      aria-label="Cancel the order?"
+      className="rounded-lg border border-linen-300 bg-linen-50 p-3 text-sm"
+    >
       <p>Cancel {number}? Any hold on your card is released and nothing is charged.</p>
       <div className="mt-2 flex flex-wrap gap-2">
-        <Button onClick={() => cancel.mutate()} disabled={cancel.isPending}>{cancel.isPending ? 'Cancelling…' : 'Yes, cancel it'}</Button>
-        <Button tone="quiet" onClick={() => setIsAsking(false)}>Keep my order</Button>
+        <Button onClick={() => cancel.mutate()} disabled={cancel.isPending}>
+          {cancel.isPending ? 'Cancelling…' : 'Yes, cancel it'}
+        </Button>
+        <Button tone="quiet" onClick={() => setIsAsking(false)}>
+          Keep my order
+        </Button>
       </div>
-      {cancel.isError && <p role="alert" className="mt-2 text-madder-700">{cancel.error.message}</p>}
+      {cancel.isError && (
+        <p role="alert" className="mt-2 text-madder-700">
+          {cancel.error.message}
+        </p>
+      )}
     </div>
   );
 }

@@ -5,7 +5,9 @@ type Placement = CustomerOrderResponse['design']['document']['placements'][numbe
 function describe(placement: Placement): string {
   switch (placement.kind) {
     case 'border':
-      return placement.run === 'circumference' ? 'A border all the way round the hem' : 'A border along the front of the hem';
+      return placement.run === 'circumference'
+        ? 'A border all the way round the hem'
+        : 'A border along the front of the hem';
     case 'lettering':
       return `The name “${placement.text}”`;
     case 'motif':

@@ -16,5 +16,7 @@ export const orderStatusWords: Record<OrderStatus, { label: string; tone: string
 
 export function OrderStatusBadge({ status }: { status: OrderStatus }) {
   const words = orderStatusWords[status];
-  return <span className={`inline-block rounded-full px-3 py-1 text-xs font-semibold ${words.tone}`}>{words.label}</span>;
+  return (
+    <span className={`inline-block rounded-full px-3 py-1 text-xs font-semibold ${words.tone}`}>{words.label}</span>
+  );
 }

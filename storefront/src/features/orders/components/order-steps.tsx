@@ -10,11 +10,31 @@ interface Step {
 }
 
 const steps: Step[] = [
-  { label: 'Card held', hint: 'Nothing is charged yet', doneIn: (['authorized', 'proof_sent', 'changes_requested', 'proof_approved', 'in_production', 'stitched', 'shipped']), currentIn: ['awaiting_payment'] },
-  { label: 'Proof drawn', hint: 'We draw your design on the garment', doneIn: (['proof_sent', 'proof_approved', 'in_production', 'stitched', 'shipped']), currentIn: ['authorized', 'changes_requested'] },
-  { label: 'You approve', hint: 'Or ask for changes', doneIn: (['proof_approved', 'in_production', 'stitched', 'shipped']), currentIn: ['proof_sent'] },
-  { label: 'Stitching', hint: 'Your card is charged now', doneIn: (['stitched', 'shipped']), currentIn: ['proof_approved', 'in_production'] },
-  { label: 'On its way', hint: 'Packed and posted', doneIn: (['shipped']), currentIn: ['stitched'] },
+  {
+    label: 'Card held',
+    hint: 'Nothing is charged yet',
+    doneIn: ['authorized', 'proof_sent', 'changes_requested', 'proof_approved', 'in_production', 'stitched', 'shipped'],
+    currentIn: ['awaiting_payment'],
+  },
+  {
+    label: 'Proof drawn',
+    hint: 'We draw your design on the garment',
+    doneIn: ['proof_sent', 'proof_approved', 'in_production', 'stitched', 'shipped'],
+    currentIn: ['authorized', 'changes_requested'],
+  },
+  {
+    label: 'You approve',
+    hint: 'Or ask for changes',
+    doneIn: ['proof_approved', 'in_production', 'stitched', 'shipped'],
+    currentIn: ['proof_sent'],
+  },
+  {
+    label: 'Stitching',
+    hint: 'Your card is charged now',
+    doneIn: ['stitched', 'shipped'],
+    currentIn: ['proof_approved', 'in_production'],
+  },
+  { label: 'On its way', hint: 'Packed and posted', doneIn: ['shipped'], currentIn: ['stitched'] },
 ];
 
 /**
@@ -23,7 +43,11 @@ const steps: Step[] = [
  */
 export function OrderSteps({ status }: { status: OrderStatus }) {
   if (status === 'cancelled' || status === 'refunded') {
-    return <p className="rounded-card bg-linen-100 p-4 text-walnut-700">{status === 'cancelled' ? 'This order was cancelled.' : 'This order was refunded in full.'}</p>;
+    return (
+      <p className="rounded-card bg-linen-100 p-4 text-walnut-700">
+        {status === 'cancelled' ? 'This order was cancelled.' : 'This order was refunded in full.'}
+      </p>
+    );
   }
   return (
     <ol aria-label="Where your order is" className="grid gap-3 sm:grid-cols-5 sm:gap-0">
@@ -31,12 +55,25 @@ export function OrderSteps({ status }: { status: OrderStatus }) {
         const isDone = step.doneIn.includes(status);
         const isCurrent = step.currentIn.includes(status);
         return (
-          <li key={step.label} aria-current={isCurrent ? 'step' : undefined} className="relative flex items-center gap-3 sm:flex-col sm:text-center">
-            {index > 0 && <span aria-hidden="true" className={`absolute hidden h-0.5 sm:right-1/2 sm:top-5 sm:block sm:w-full ${isDone || isCurrent ? 'seam' : 'bg-linen-300'}`} />}
+          <li
+            key={step.label}
+            aria-current={isCurrent ? 'step' : undefined}
+            className="relative flex items-center gap-3 sm:flex-col sm:text-center"
+          >
+            {index > 0 && (
+              <span
+                aria-hidden="true"
+                className={`absolute hidden h-0.5 sm:right-1/2 sm:top-5 sm:block sm:w-full ${isDone || isCurrent ? 'seam' : 'bg-linen-300'}`}
+              />
+            )}
             <span
               aria-hidden="true"
               className={`relative z-10 flex h-10 w-10 shrink-0 items-center justify-center rounded-full border-2 text-sm font-semibold ${
-                isDone ? 'border-sage-700 bg-sage-700 text-white' : isCurrent ? 'border-madder-600 bg-white text-madder-700 ring-4 ring-madder-50' : 'border-linen-300 bg-white text-walnut-500'
+                isDone
+                  ? 'border-sage-700 bg-sage-700 text-white'
+                  : isCurrent
+                    ? 'border-madder-600 bg-white text-madder-700 ring-4 ring-madder-50'
+                    : 'border-linen-300 bg-white text-walnut-500'
               }`}
             >
               {isDone ? '✓' : index + 1}

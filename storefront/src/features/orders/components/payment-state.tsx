@@ -25,19 +25,34 @@ export function PaymentState({ order, checkoutReturn }: PaymentStateProps) {
 
   return (
     <section aria-labelledby="payment-heading" className="rounded-card border border-linen-200 bg-white p-5 shadow-sm">
-      <h2 id="payment-heading" className="text-lg font-semibold">Payment</h2>
+      <h2 id="payment-heading" className="text-lg font-semibold">
+        Payment
+      </h2>
       <div role="status" aria-live="polite" className="mt-2 space-y-1 text-sm text-walnut-700">
         {isConfirming && <p>Confirming your payment with the card company…</p>}
         {payment.heldCents > 0 && (
           <p>
-            <strong className="font-semibold">{money(payment.heldCents)}</strong> is held on your card, not charged. We charge it once you approve your proof
+            <strong className="font-semibold">{money(payment.heldCents)}</strong> is held on your card, not charged. We
+            charge it once you approve your proof
             {payment.holdExpiresAt ? ` (the hold lasts until ${day(payment.holdExpiresAt)})` : ''}.
           </p>
         )}
-        {payment.chargedCents > 0 && <p><strong className="font-semibold">{money(payment.chargedCents)}</strong> charged.</p>}
-        {payment.refundedCents > 0 && <p><strong className="font-semibold">{money(payment.refundedCents)}</strong> refunded to your card.</p>}
+        {payment.chargedCents > 0 && (
+          <p>
+            <strong className="font-semibold">{money(payment.chargedCents)}</strong> charged.
+          </p>
+        )}
+        {payment.refundedCents > 0 && (
+          <p>
+            <strong className="font-semibold">{money(payment.refundedCents)}</strong> refunded to your card.
+          </p>
+        )}
         {!isConfirming && summary.status === 'awaiting_payment' && !payment.failureMessage && (
-          <p>{checkoutReturn === 'cancelled' ? 'You left the payment page, so your card was not charged.' : 'Not paid yet: your card has not been charged.'}</p>
+          <p>
+            {checkoutReturn === 'cancelled'
+              ? 'You left the payment page, so your card was not charged.'
+              : 'Not paid yet: your card has not been charged.'}
+          </p>
         )}
       </div>
       {payment.failureMessage && (
@@ -48,10 +63,18 @@ export function PaymentState({ order, checkoutReturn }: PaymentStateProps) {
       )}
       {canPay && (
         <Button className="mt-4" onClick={pay} disabled={retry.isPending || isConfirming}>
-          {retry.isPending ? 'Opening the payment page…' : payment.failureMessage || checkoutReturn === 'cancelled' ? 'Try another card' : 'Pay now'}
+          {retry.isPending
+            ? 'Opening the payment page…'
+            : payment.failureMessage || checkoutReturn === 'cancelled'
+              ? 'Try another card'
+              : 'Pay now'}
         </Button>
       )}
-      {retry.isError && <p role="alert" className="mt-2 text-sm text-madder-700">{retry.error.message}</p>}
+      {retry.isError && (
+        <p role="alert" className="mt-2 text-sm text-madder-700">
+          {retry.error.message}
+        </p>
+      )}
     </section>
   );
 }

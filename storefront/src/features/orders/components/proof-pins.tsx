@@ -1,7 +1,13 @@
 import type { ProofPin } from '@server/contracts/orders.ts';
 
 /** Pins drawn over the proof picture, numbered as in the list beside it. */
-export function ProofPins({ pins, tone }: { pins: readonly Pick<ProofPin, 'xPct' | 'yPct'>[]; tone: 'saved' | 'draft' }) {
+export function ProofPins({
+  pins,
+  tone,
+}: {
+  pins: readonly Pick<ProofPin, 'xPct' | 'yPct'>[];
+  tone: 'saved' | 'draft';
+}) {
   return (
     <>
       {pins.map((pin, index) => (

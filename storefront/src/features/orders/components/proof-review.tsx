@@ -17,7 +17,11 @@ export function ProofReview({ number, proofs }: { number: string; proofs: Custom
   const [shownVersion, setShownVersion] = useState(proofs.at(-1)?.version);
   const proof = proofs.find((p) => p.version === shownVersion) ?? proofs.at(-1);
   if (!proof) {
-    return <p className="text-walnut-700">Your proof is being drawn. We will e-mail you as soon as it is ready to look at.</p>;
+    return (
+      <p className="text-walnut-700">
+        Your proof is being drawn. We will e-mail you as soon as it is ready to look at.
+      </p>
+    );
   }
   return (
     <div className="space-y-4">
@@ -41,7 +45,8 @@ export function ProofReview({ number, proofs }: { number: string; proofs: Custom
           Version {proof.version} · {statusWords[proof.status]}
         </h3>
         <p className="text-sm text-walnut-500">
-          Sent {day(proof.sentAt)} · {proof.source === 'photo' ? 'a photo of a test stitch-out' : 'drawn to scale on your garment'}
+          Sent {day(proof.sentAt)} ·{' '}
+          {proof.source === 'photo' ? 'a photo of a test stitch-out' : 'drawn to scale on your garment'}
         </p>
         {proof.message && <p className="mt-2 rounded-lg bg-linen-100 p-3 text-sm">“{proof.message}”</p>}
       </div>

@@ -3,7 +3,8 @@ import { quotePreviewResponse, type QuotePreviewRequest } from '@server/contract
 import { apiRequest } from '@ui/api-client.ts';
 
 /** Prices a design on the server without saving it. Every figure comes back from the server; nothing is trusted. */
-export const previewQuote = (request: QuotePreviewRequest) => apiRequest('/quotes/preview', quotePreviewResponse, { method: 'POST', body: request });
+export const previewQuote = (request: QuotePreviewRequest) =>
+  apiRequest('/quotes/preview', quotePreviewResponse, { method: 'POST', body: request });
 
 // Pricing does not change the server's state, so it is a query: cached per design, refetched when the design changes.
 export const quotePreviewQuery = (request: QuotePreviewRequest) =>

@@ -6,7 +6,12 @@ import { useQuotePreview } from '../api/preview-quote.ts';
 /** The 1¾ in line above the hem edge where a border's centre commonly sits (common practice, no source). */
 const HEM_OFFSET_MM = 44.45;
 
-function borderRequest(garment: GarmentSummary, sizeId: number, colourId: number | undefined, motif: MotifSummary): QuotePreviewRequest {
+function borderRequest(
+  garment: GarmentSummary,
+  sizeId: number,
+  colourId: number | undefined,
+  motif: MotifSummary,
+): QuotePreviewRequest {
   return {
     garmentId: garment.id,
     sizeId,
@@ -15,15 +20,40 @@ function borderRequest(garment: GarmentSummary, sizeId: number, colourId: number
     isRush: false,
     document: {
       version: 1,
-      placements: [{ id: 'hem', kind: 'border', zone: 'hem', motif: motif.slug, run: 'circumference', hemOffsetMm: HEM_OFFSET_MM, threads: motif.threadCodes }],
+      placements: [
+        {
+          id: 'hem',
+          kind: 'border',
+          zone: 'hem',
+          motif: motif.slug,
+          run: 'circumference',
+          hemOffsetMm: HEM_OFFSET_MM,
+          threads: motif.threadCodes,
+        },
+      ],
     },
   };
 }
 
 /** The server's price for the garment with this border all the way round, with its lines on request. */
-export function BorderPrice({ garment, sizeId, colourId, motif }: { garment: GarmentSummary; sizeId: number; colourId: number | undefined; motif: MotifSummary }) {
+export function BorderPrice({
+  garment,
+  sizeId,
+  colourId,
+  motif,
+}: {
+  garment: GarmentSummary;
+  sizeId: number;
+  colourId: number | undefined;
+  motif: MotifSummary;
+}) {
   const preview = useQuotePreview(borderRequest(garment, sizeId, colourId, motif));
-  if (preview.isPending) return <p className="text-sm text-walnut-500" role="status">Pricing…</p>;
+  if (preview.isPending)
+    return (
+      <p className="text-sm text-walnut-500" role="status">
+        Pricing…
+      </p>
+    );
   if (preview.isError) return <p className="text-sm text-madder-700">{preview.error.message}</p>;
   const { quote, placements } = preview.data;
   const border = placements[0];
@@ -49,8 +79,8 @@ export function BorderPrice({ garment, sizeId, colourId, motif }: { garment: Gar
       </table>
       {border && (
         <p className="mt-2 text-xs text-walnut-500">
-          About {border.stitches.toLocaleString('en-US')} stitches, sewn in {border.hoopings} hoopings (the fabric is clamped
-          in a frame, stitched, then moved along for the next part of the border).
+          About {border.stitches.toLocaleString('en-US')} stitches, sewn in {border.hoopings} hoopings (the fabric is
+          clamped in a frame, stitched, then moved along for the next part of the border).
         </p>
       )}
     </details>

@@ -15,13 +15,23 @@ export function DesignQuote({ request }: { request: QuotePreviewRequest }) {
   const { preview, isEmpty, isPricing } = useDesignQuote(request);
 
   return (
-    <section id={DESIGN_QUOTE_ID} aria-labelledby="price-heading" className="scroll-mt-4 rounded-card border border-linen-200 bg-white p-5 shadow-sm">
+    <section
+      id={DESIGN_QUOTE_ID}
+      aria-labelledby="price-heading"
+      className="scroll-mt-4 rounded-card border border-linen-200 bg-white p-5 shadow-sm"
+    >
       <div className="flex items-baseline justify-between gap-3">
-        <h2 id="price-heading" className="text-lg font-semibold">Your price</h2>
-        <p role="status" aria-live="polite" className="text-sm text-walnut-500">{isPricing ? 'Pricing…' : ''}</p>
+        <h2 id="price-heading" className="text-lg font-semibold">
+          Your price
+        </h2>
+        <p role="status" aria-live="polite" className="text-sm text-walnut-500">
+          {isPricing ? 'Pricing…' : ''}
+        </p>
       </div>
       {isEmpty ? (
-        <p className="mt-2 text-sm text-walnut-700">Add a border, a name or a motif and the price appears here, line by line.</p>
+        <p className="mt-2 text-sm text-walnut-700">
+          Add a border, a name or a motif and the price appears here, line by line.
+        </p>
       ) : preview.isError && !isPricing ? (
         <div className="mt-3">
           <ErrorNotice message={preview.error.message} />

@@ -1,6 +1,7 @@
 import type { QuotePreviewResponse } from '@server/contracts/quotes.ts';
 
-const counted = (count: number, one: string, many: string) => `${count.toLocaleString('en-US')} ${count === 1 ? one : many}`;
+const counted = (count: number, one: string, many: string) =>
+  `${count.toLocaleString('en-US')} ${count === 1 ? one : many}`;
 
 /** Notes addressed to the studio rather than the parent; the shop's footer carries its own word on local rules. */
 const studioOnlyNotes = new Set(['caution.local-rules']);
@@ -24,14 +25,17 @@ export function MakingNotes({ preview }: { preview: QuotePreviewResponse }) {
         <ul className="mt-1 space-y-0.5 text-walnut-700">
           {preview.placements.map((placement) => (
             <li key={placement.id}>
-              {placement.label}: {placement.isPriceProvisional ? 'stitches counted once the studio has digitized it' : `about ${counted(placement.stitches, 'stitch', 'stitches')}`},{' '}
-              {counted(placement.hoopings, 'hooping', 'hoopings')}
+              {placement.label}:{' '}
+              {placement.isPriceProvisional
+                ? 'stitches counted once the studio has digitized it'
+                : `about ${counted(placement.stitches, 'stitch', 'stitches')}`}
+              , {counted(placement.hoopings, 'hooping', 'hoopings')}
             </li>
           ))}
         </ul>
         <p className="mt-2 text-xs text-walnut-500">
-          <strong className="font-medium">Hooping</strong> is how each part is stitched: the fabric is held taut in a ring
-          (the hoop) on the machine. A border is stitched one hooping at a time, moving the hoop along the hem.{' '}
+          <strong className="font-medium">Hooping</strong> is how each part is stitched: the fabric is held taut in a
+          ring (the hoop) on the machine. A border is stitched one hooping at a time, moving the hoop along the hem.{' '}
           <strong className="font-medium">Stabilizer</strong> is a thin backing stitched under the fabric so the
           embroidery lies flat and keeps its shape; we choose it for your fabric and design.
         </p>

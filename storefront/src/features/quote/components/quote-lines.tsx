@@ -20,7 +20,9 @@ export function QuoteLines({ quote, caption = 'How the price is made up' }: Quot
       </tbody>
       <tfoot>
         <tr className="border-t-2 border-walnut-900/20 text-base font-semibold">
-          <th scope="row" className="pt-2 text-left">Total</th>
+          <th scope="row" className="pt-2 text-left">
+            Total
+          </th>
           <td className="pt-2 text-right tabular-nums">{formatMoney(quote.totalCents, quote.currency)}</td>
         </tr>
       </tfoot>

@@ -1,6 +1,12 @@
 import { useReadyDates } from '../api/get-ready-dates.ts';
 
-const shortDay = (date: string) => new Date(`${date}T12:00:00Z`).toLocaleDateString('en-US', { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' });
+const shortDay = (date: string) =>
+  new Date(`${date}T12:00:00Z`).toLocaleDateString('en-US', {
+    weekday: 'short',
+    month: 'short',
+    day: 'numeric',
+    timeZone: 'UTC',
+  });
 
 /** When an order placed today could be ready, from the studio's lead time; nothing shows until the server answers. */
 export function ReadyDatesNote({ isRush }: { isRush: boolean }) {
@@ -9,7 +15,8 @@ export function ReadyDatesNote({ isRush }: { isRush: boolean }) {
   const { earliestReadyDate, earliestRushDate } = ready.data;
   return (
     <p className="mt-3 px-1 text-sm text-walnut-700">
-      Ordered today, ready by <strong className="font-semibold">{shortDay(isRush ? earliestRushDate : earliestReadyDate)}</strong>
+      Ordered today, ready by{' '}
+      <strong className="font-semibold">{shortDay(isRush ? earliestRushDate : earliestReadyDate)}</strong>
       {isRush ? ' as a rush' : `, or ${shortDay(earliestRushDate)} as a rush`}.
     </p>
   );
