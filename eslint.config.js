@@ -8,10 +8,13 @@ import globals from 'globals';
 
 /** Shared server folders: every module may use them; they never use a module. */
 const sharedServer = ['engine', 'contracts', 'middleware', 'auth', 'integrations', 'db'];
-/** A module's files by layer, told apart by name: `*routes.ts`, `*-repo.ts`, and everything else is a service. */
+/**
+ * A module's files by layer, told apart by name: `*routes.ts`, `*-repo.ts`, `*-types.ts` (shapes only, which any
+ * layer may use), and everything else is a service.
+ */
 const ROUTE = '*routes.ts';
 const REPO = '*-repo.ts';
-const SERVICE = '!(*routes|*-repo).ts';
+const SERVICE = '!(*routes|*-repo|*-types).ts';
 const inModule = (layer, captured) => ({
   element: { type: 'module', ...(layer ? { fileInternalPath: layer } : {}), ...(captured ? { captured } : {}) },
 });
@@ -37,6 +40,24 @@ export default tseslint.config(
     // Rows come out of knex untyped; each repo maps them to a domain type straight away.
     files: ['server/src/modules/*/*-repo.ts'],
     rules: { '@typescript-eslint/no-explicit-any': 'off' },
+  },
+  {
+    // Services tell the flow and own the transaction; the SQL lives in their module's repos.
+    files: ['server/src/modules/*/!(*-repo).ts'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector: 'CallExpression[callee.name=/^(db|trx|knex)$/], CallExpression[callee.property.name=/^(db|trx)$/]',
+          message: 'a service reads and writes rows through its repo, not with a query of its own',
+        },
+        {
+          selector:
+            'MemberExpression[object.name=/^(db|trx)$/][property.name=/^(raw|select|insert|update|from|table)$/]',
+          message: 'a service reads and writes rows through its repo, not with a query of its own',
+        },
+      ],
+    },
   },
   {
     files: ['storefront/src/**/*.tsx', 'admin/src/**/*.tsx', 'ui/src/**/*.tsx'],
@@ -80,8 +101,15 @@ export default tseslint.config(
             },
             {
               from: inModule(REPO),
-              disallow: { to: [inModule(SERVICE), inModule(ROUTE), element('integrations')] },
-              message: 'a repo reads and writes rows: it never imports a service, a route or an integration',
+              disallow: { to: [inModule(SERVICE), inModule(ROUTE)] },
+              message: 'a repo reads and writes rows: it never imports a service or a route',
+            },
+            {
+              // A repo may name an integration's data shapes (a font file) but never call one.
+              from: inModule(REPO),
+              disallow: { to: element('integrations') },
+              dependency: { kind: 'value' },
+              message: 'a repo reads and writes rows: it never calls an integration',
             },
             { from: inModule(SERVICE), disallow: { to: inModule(ROUTE) }, message: 'a service never imports a route' },
             {

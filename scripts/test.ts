@@ -35,8 +35,20 @@ function readPlaywrightTally(file: string): Tally {
   return { passed: stats.expected + stats.flaky, failed: stats.unexpected, skipped: stats.skipped };
 }
 
+// The lint (ESLint with the layering rules, Prettier) and the type check come first: quick, and no database needed.
+const checks = {
+  lint: await run('eslint', ['.']),
+  format: await run('prettier', ['--check', '.', '--log-level', 'warn']),
+  types:
+    (await run(process.execPath, ['node_modules/typescript-native/bin/tsc', '-p', 'tsconfig.json'])) ||
+    (await run(process.execPath, ['node_modules/typescript-native/bin/tsc', '-p', 'tsconfig.apps.json'])),
+};
+const failedChecks = Object.entries(checks)
+  .filter(([, code]) => code !== 0)
+  .map(([name]) => name);
+
 const { started } = await startLocalDatabase();
-let exitCode = 1;
+let exitCode: number;
 try {
   ensureChromium();
   recreateLocalDatabase('hoopwright_test');
@@ -74,8 +86,12 @@ try {
   console.log(
     `\nVitest: ${unit.passed} passed, ${unit.failed} failed · Playwright: ${browser.passed} passed, ${browser.failed} failed`,
   );
-  console.log(`${total.passed} passed, ${total.failed} failed, ${total.skipped} skipped`);
-  exitCode = vitestCode === 0 && playwrightCode === 0 && total.failed === 0 ? 0 : 1;
+  if (failedChecks.length) console.log(`Failed before the tests: ${failedChecks.join(', ')}`);
+  console.log(`${total.passed} passed, ${total.failed + failedChecks.length} failed, ${total.skipped} skipped`);
+  exitCode = vitestCode === 0 && playwrightCode === 0 && total.failed === 0 && failedChecks.length === 0 ? 0 : 1;
+} catch (error) {
+  console.error(error);
+  exitCode = 1;
 } finally {
   if (started) await stopLocalDatabase();
 }

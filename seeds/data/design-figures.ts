@@ -8,7 +8,7 @@ import type { QuotePlacement } from '../../server/src/engine/index.ts';
 import { createLetteringFontLoader } from '../../server/src/integrations/lettering-fonts.ts';
 import { figureDesign } from '../../server/src/modules/quotes/design-figures.ts';
 import type { PlacementFigures } from '../../server/src/modules/quotes/placement-outcome.ts';
-import type { QuoteCatalogue } from '../../server/src/modules/quotes/quote-catalogue.ts';
+import type { QuoteCatalogue } from '../../server/src/modules/quotes/quote-catalogue-types.ts';
 import { artworkUploads, type DesignSpec, type PlacementSpec } from './designs.ts';
 import { garments, mockupScale, type SeedGarment, type SeedSize } from './garments.ts';
 import { hoops } from './hoops.ts';

@@ -3,7 +3,7 @@
  * zones are the reference zones scaled by that size's mockup_scale, so they are in the size's own millimetres.
  */
 
-import type { PlacementZone as CataloguePlacementZone } from '../../server/src/modules/quotes/quote-catalogue.ts';
+import type { PlacementZone as CataloguePlacementZone } from '../../server/src/modules/quotes/quote-catalogue-types.ts';
 
 export type ZoneCode = 'hem' | 'chest' | 'collar' | 'bib_centre' | 'brim';
 

@@ -1,58 +1,61 @@
 import express, { type Express } from 'express';
 import helmet from 'helmet';
-import passport from 'passport';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type Stripe from 'stripe';
 import type { AppConfig } from './config.ts';
 import type { Db } from './db/knex.ts';
 import type { Mailer } from './integrations/mailer.ts';
-import { createGoogleStrategy } from './modules/people/google-strategy.ts';
 import { requireRole } from './auth/roles.ts';
 import type { SessionLayer } from './auth/session.ts';
-import { createUserService } from './modules/people/user-service.ts';
-import { createQuoteService } from './modules/quotes/quote-service.ts';
-import { createDesignService } from './modules/designs/design-service.ts';
-import { createStoredQuoteService } from './modules/quotes/stored-quote-service.ts';
-import { createCheckoutService } from './modules/orders/checkout-service.ts';
-import { createCustomerOrderService } from './modules/orders/customer-order-service.ts';
-import { createPaymentWebhookService } from './modules/payments/payment-webhook-service.ts';
-import { createDesignSharingService } from './modules/designs/design-sharing-service.ts';
 import { createLetteringFontLoader } from './integrations/lettering-fonts.ts';
 import { requestId } from './middleware/request-id.ts';
 import { accessLog } from './middleware/access-log.ts';
 import { requireSameOrigin } from './middleware/same-origin.ts';
 import { createErrorHandler, notFoundHandler } from './middleware/error-handler.ts';
+import { createUserService } from './modules/people/user-service.ts';
+import { createPeopleService } from './modules/people/people-service.ts';
+import { createSignIn } from './modules/people/sign-in.ts';
 import { createAuthRouter } from './modules/people/auth-routes.ts';
 import { createMeRouter } from './modules/people/me-routes.ts';
-import { createCatalogueRouter } from './modules/catalogue/routes.ts';
-import { createQuotesRouter } from './modules/quotes/routes.ts';
-import { createDesignsRouter } from './modules/designs/routes.ts';
-import { createArtworkRouter } from './modules/artwork/routes.ts';
-import { createArtworkService } from './modules/artwork/artwork-service.ts';
-import { createSharedDesignsRouter } from './modules/designs/shared-routes.ts';
-import { createPaymentWebhookRouter } from './modules/payments/webhook-routes.ts';
-import { createOrdersRouter } from './modules/orders/routes.ts';
-import { createAdminOverviewRouter } from './modules/studio/admin-overview-routes.ts';
-import { createAdminCatalogueRouter } from './modules/catalogue/admin-overview-routes.ts';
-import { createAdminOrdersRouter } from './modules/orders/admin-routes.ts';
-import { createOrderArtworkRouter } from './modules/orders/admin-artwork-routes.ts';
-import { createProductionSheetRouter } from './modules/production/admin-routes.ts';
-import { createProductionSheetService } from './modules/production/production-sheet-service.ts';
-import { createStudioOrdersRouter } from './modules/orders/admin-studio-routes.ts';
-import { createCatalogueGarmentsRouter } from './modules/catalogue/admin-garment-routes.ts';
-import { createCatalogueMotifsRouter } from './modules/catalogue/admin-motif-routes.ts';
-import { createCatalogueFontsRouter } from './modules/catalogue/admin-font-routes.ts';
-import { createCatalogueThreadsRouter } from './modules/catalogue/admin-thread-routes.ts';
-import { createCatalogueHoopsRouter } from './modules/catalogue/admin-hoop-routes.ts';
-import { createAdminPricingRouter } from './modules/pricing/admin-routes.ts';
-import { createAdminSettingsRouter } from './modules/settings/admin-routes.ts';
 import { createAdminUsersRouter } from './modules/people/admin-routes.ts';
-import { createAdminOutboxRouter } from './modules/mail/admin-outbox-routes.ts';
-import { createOverviewService } from './modules/studio/overview-service.ts';
+import { createCatalogueService } from './modules/catalogue/catalogue-service.ts';
+import { createCatalogueGarmentService } from './modules/catalogue/garment-service.ts';
+import { createCatalogueMotifService } from './modules/catalogue/motif-service.ts';
+import { createFontService } from './modules/catalogue/font-service.ts';
+import { createThreadService } from './modules/catalogue/thread-service.ts';
+import { createHoopService } from './modules/catalogue/hoop-service.ts';
+import { createCatalogueRouter } from './modules/catalogue/routes.ts';
+import { createAdminCatalogueRouter } from './modules/catalogue/admin-routes.ts';
+import { createQuoteService } from './modules/quotes/quote-service.ts';
+import { createStoredQuoteService } from './modules/quotes/stored-quote-service.ts';
+import { createQuotesRouter } from './modules/quotes/routes.ts';
+import { createDesignService } from './modules/designs/design-service.ts';
+import { createDesignSharingService } from './modules/designs/design-sharing-service.ts';
+import { createDesignsRouter } from './modules/designs/routes.ts';
+import { createSharedDesignsRouter } from './modules/designs/shared-routes.ts';
+import { createArtworkService } from './modules/artwork/artwork-service.ts';
+import { createArtworkRouter } from './modules/artwork/routes.ts';
+import { createCheckoutService } from './modules/orders/checkout-service.ts';
+import { createCustomerOrderService } from './modules/orders/customer-order-service.ts';
+import { createStudioOrderService } from './modules/orders/studio-order-service.ts';
+import { createOrderProductionSteps } from './modules/orders/order-production-steps.ts';
+import { createOrdersRouter } from './modules/orders/routes.ts';
+import { createAdminOrdersRouter } from './modules/orders/admin-routes.ts';
+import { createOrderPaymentService } from './modules/orders/order-payment-service.ts';
+import { createPaymentWebhookService } from './modules/orders/payment-webhook-service.ts';
+import { createPaymentWebhookRouter } from './modules/orders/payment-webhook-routes.ts';
+import { createProofService } from './modules/orders/proof-service.ts';
+import { createProductionSheetService } from './modules/production/production-sheet-service.ts';
+import { createProductionSheetRouter } from './modules/production/admin-routes.ts';
 import { createPricingService } from './modules/pricing/pricing-service.ts';
-import { createPeopleService } from './modules/people/people-service.ts';
-import type { CurrentUser } from './contracts/users.ts';
+import { createAdminPricingRouter } from './modules/pricing/admin-routes.ts';
+import { createSettingsService } from './modules/settings/settings-service.ts';
+import { createAdminSettingsRouter } from './modules/settings/admin-routes.ts';
+import { createOverviewService } from './modules/studio/overview-service.ts';
+import { createAdminOverviewRouter } from './modules/studio/admin-overview-routes.ts';
+import { createOutboxService } from './modules/mail/outbox-service.ts';
+import { createAdminOutboxRouter } from './modules/mail/admin-outbox-routes.ts';
 
 export interface AppDeps {
   config: AppConfig;
@@ -98,15 +101,22 @@ function mountSinglePageApp(app: Express, base: string, dir: string): void {
   });
 }
 
-/** Builds the Express app: middleware, routers, the two apps and the error handler. It does not listen. */
+/**
+ * Builds the Express app: middleware, one router per URL prefix, the two apps and the error handler. It does not
+ * listen. This is the one place services are made and handed to the routers that answer for them.
+ */
 export function createApp(deps: AppDeps): Express {
-  const { config, db } = deps;
+  const { config, db, now, mailer, stripe } = deps;
+  const { appOrigin, uploadMaxBytes } = config;
   const users = createUserService({ db, ownerEmails: config.ownerEmails });
-  passport.use(createGoogleStrategy(config, users));
-  passport.serializeUser((user, done) => done(null, (user as CurrentUser).id));
-  passport.deserializeUser((id: number, done) => {
-    users.findById(id).then((user) => done(null, user ?? false), done);
-  });
+  const signIn = createSignIn(config, users);
+  // One font loader, so each lettering font is parsed once for quotes, saved designs, proofs and production sheets.
+  const fonts = createLetteringFontLoader();
+  const artwork = createArtworkService({ db, now });
+  const quotes = createQuoteService({ db, fonts });
+  const storedQuotes = createStoredQuoteService({ db, quotes, now });
+  const sharing = createDesignSharingService({ db });
+  const money = { db, stripe, mailer, now, appOrigin };
 
   const app = express();
   app.disable('x-powered-by');
@@ -116,92 +126,71 @@ export function createApp(deps: AppDeps): Express {
   app.use(securityHeaders(config));
 
   // Webhooks authenticate by signature, not by session or origin, and need the raw body.
-  const webhooks = createPaymentWebhookService({
-    db,
-    stripe: deps.stripe,
-    mailer: deps.mailer,
-    appOrigin: config.appOrigin,
-    now: deps.now,
-  });
   app.use(
     '/api/webhooks/stripe',
-    createPaymentWebhookRouter({ stripe: deps.stripe, webhookSecret: config.stripe.webhookSecret, webhooks }),
+    createPaymentWebhookRouter({
+      stripe,
+      webhookSecret: config.stripe.webhookSecret,
+      webhooks: createPaymentWebhookService({ db, stripe, mailer, appOrigin, now }),
+    }),
   );
 
-  app.use('/api', requireSameOrigin(config.appOrigin));
+  app.use('/api', requireSameOrigin(appOrigin));
   app.use('/api', express.json({ limit: '1mb' }));
-  app.use('/api', deps.sessions.middleware, passport.session());
+  app.use('/api', deps.sessions.middleware, signIn.session());
   app.use('/api', (_req, res, next) => {
     res.set('Cache-Control', 'no-store');
     next();
   });
 
   app.get('/api/health', (_req, res) => res.json({ ok: true }));
-  const artwork = createArtworkService({ db, now: deps.now });
-  app.use('/api/auth', createAuthRouter({ log: deps.log, claimArtwork: artwork.claim }));
+  app.use('/api/auth', createAuthRouter({ signIn, log: deps.log, claimArtwork: artwork.claim }));
   app.use('/api/me', createMeRouter());
-  app.use('/api/catalogue', createCatalogueRouter({ db }));
-  // One font loader, so each lettering font is parsed once for quotes, saved designs, proofs and production sheets.
-  const fonts = createLetteringFontLoader();
-  const quotes = createQuoteService({ db, fonts });
-  const storedQuotes = createStoredQuoteService({ db, quotes, now: deps.now });
+  app.use('/api/catalogue', createCatalogueRouter({ catalogue: createCatalogueService({ db }) }));
   app.use('/api/quotes', createQuotesRouter({ quotes, storedQuotes }));
-  const sharing = createDesignSharingService({ db });
-  app.use(
-    '/api/designs',
-    createDesignsRouter({ designs: createDesignService({ db, quotes, now: deps.now }), sharing }),
-  );
+  app.use('/api/designs', createDesignsRouter({ designs: createDesignService({ db, quotes, now }), sharing }));
   app.use('/api/shared-designs', createSharedDesignsRouter({ sharing }));
   app.use(
     '/api/orders',
     createOrdersRouter({
-      checkout: createCheckoutService({
-        db,
-        stripe: deps.stripe,
-        mailer: deps.mailer,
-        storedQuotes,
-        appOrigin: config.appOrigin,
-        now: deps.now,
-      }),
-      customerOrders: createCustomerOrderService({
-        db,
-        mailer: deps.mailer,
-        appOrigin: config.appOrigin,
-        now: deps.now,
-      }),
+      checkout: createCheckoutService({ db, stripe, mailer, storedQuotes, appOrigin, now }),
+      customerOrders: createCustomerOrderService({ db, mailer, appOrigin, now }),
     }),
   );
-  app.use('/api/artwork', createArtworkRouter({ artwork, uploadMaxBytes: config.uploadMaxBytes }));
+  app.use('/api/artwork', createArtworkRouter({ artwork, uploadMaxBytes }));
+
   app.use('/api/admin', requireRole('staff', 'owner'));
-  app.use('/api/admin/overview', createAdminOverviewRouter({ overview: createOverviewService({ db, now: deps.now }) }));
-  app.use('/api/admin/catalogue', createAdminCatalogueRouter({ db }));
+  app.use('/api/admin/overview', createAdminOverviewRouter({ overview: createOverviewService({ db, now }) }));
+  app.use(
+    '/api/admin/catalogue',
+    createAdminCatalogueRouter({
+      catalogue: createCatalogueService({ db }),
+      garments: createCatalogueGarmentService({ db }),
+      motifs: createCatalogueMotifService({ db }),
+      fonts: createFontService({ db }),
+      threads: createThreadService({ db }),
+      hoops: createHoopService({ db }),
+      uploadMaxBytes,
+    }),
+  );
   app.use(
     '/api/admin/orders',
-    createStudioOrdersRouter({
-      db,
-      stripe: deps.stripe,
-      mailer: deps.mailer,
-      now: deps.now,
-      appOrigin: config.appOrigin,
-      uploadMaxBytes: config.uploadMaxBytes,
-      fonts,
+    createAdminOrdersRouter({
+      orders: createStudioOrderService({ db, artwork, now }),
+      payments: createOrderPaymentService(money),
+      production: createOrderProductionSteps({ db, mailer, now, appOrigin }),
+      proofs: createProofService({ db, mailer, now, appOrigin, fonts }),
+      productionSheets: createProductionSheetRouter({ sheets: createProductionSheetService({ db, fonts }) }),
+      uploadMaxBytes,
     }),
   );
-  app.use('/api/admin/orders', createAdminOrdersRouter({ db }));
-  app.use('/api/admin/orders', createOrderArtworkRouter({ db }));
-  app.use('/api/admin/orders', createProductionSheetRouter({ sheets: createProductionSheetService({ db, fonts }) }));
-  app.use('/api/admin/catalogue/garments', createCatalogueGarmentsRouter({ db }));
-  app.use('/api/admin/catalogue/motifs', createCatalogueMotifsRouter({ db, uploadMaxBytes: config.uploadMaxBytes }));
-  app.use('/api/admin/catalogue/fonts', createCatalogueFontsRouter({ db }));
-  app.use('/api/admin/catalogue/threads', createCatalogueThreadsRouter({ db }));
-  app.use('/api/admin/catalogue/hoops', createCatalogueHoopsRouter({ db }));
-  app.use('/api/admin/pricing', createAdminPricingRouter({ pricing: createPricingService({ db, now: deps.now }) }));
-  app.use('/api/admin/settings', createAdminSettingsRouter({ db, now: deps.now }));
+  app.use('/api/admin/pricing', createAdminPricingRouter({ pricing: createPricingService({ db, now }) }));
+  app.use('/api/admin/settings', createAdminSettingsRouter({ settings: createSettingsService({ db, now }) }));
   app.use(
     '/api/admin/users',
-    createAdminUsersRouter({ people: createPeopleService({ db, ownerEmails: config.ownerEmails, now: deps.now }) }),
+    createAdminUsersRouter({ people: createPeopleService({ db, ownerEmails: config.ownerEmails, now }) }),
   );
-  app.use('/api/admin/outbox', createAdminOutboxRouter({ db }));
+  app.use('/api/admin/outbox', createAdminOutboxRouter({ outbox: createOutboxService({ db }) }));
   app.use('/api', notFoundHandler);
 
   const staticRoot = resolve(config.staticDir);

@@ -68,6 +68,7 @@ export const garmentSlugParams = z.object({
   slug: z.string().regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, 'must be a garment name from the catalogue'),
 });
 export const garmentDetailResponse = z.object({ garment: garmentDetail });
+export type GarmentDetailResponse = z.infer<typeof garmentDetailResponse>;
 
 export const motifKind = z.enum(['border', 'single']);
 
@@ -106,10 +107,12 @@ export const letteringFont = z.object({
 });
 export type LetteringFontSummary = z.infer<typeof letteringFont>;
 export const fontListResponse = z.object({ fonts: z.array(letteringFont) });
+export type FontListResponse = z.infer<typeof fontListResponse>;
 
 export const threadColour = z.object({ code: z.string(), name: z.string(), hex: z.string() });
 export type ThreadColourSummary = z.infer<typeof threadColour>;
 export const threadListResponse = z.object({ threads: z.array(threadColour) });
+export type ThreadListResponse = z.infer<typeof threadListResponse>;
 
 /** A hoop the studio stitches with; the sewing field is the area the machine reaches, mm. */
 export const hoopSummary = z.object({
@@ -120,3 +123,4 @@ export const hoopSummary = z.object({
 });
 export type HoopSummary = z.infer<typeof hoopSummary>;
 export const hoopListResponse = z.object({ hoops: z.array(hoopSummary) });
+export type HoopListResponse = z.infer<typeof hoopListResponse>;

@@ -59,16 +59,3 @@ export function validated<S extends RequestSchemas>(
     await handler(input, req, res, next);
   };
 }
-
-type Part = 'body' | 'query' | 'params';
-
-/** Middleware form of the same check, kept while routes move to `validated`; it stores the parsed value on the request. */
-export function validate(schema: z.ZodType, part: Part = 'body'): RequestHandler {
-  return (req, res, next) => {
-    const data = parseOrRefuse(schema, req[part]);
-    if (part === 'query') res.locals.query = data;
-    else if (part === 'params') res.locals.params = data;
-    else req.body = data;
-    next();
-  };
-}

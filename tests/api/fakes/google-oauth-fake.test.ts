@@ -66,7 +66,7 @@ describe('GET /authorize', () => {
         new RegExp(`<button[^>]*name="identity" value="${person.sub}">[\\s\\S]*?${person.name}[\\s\\S]*?</button>`),
       );
     }
-    expect(page).toMatch(/<input id="email" name="email" type="email"/);
+    expect(page).toMatch(/<input\s+id="email"\s+name="email"\s+type="email"/);
     expect(page).toContain('<input type="hidden" name="state" value="st-123">');
   });
 

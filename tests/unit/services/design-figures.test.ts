@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { DesignDocument, DesignPlacement } from '../../../server/src/contracts/designs.ts';
 import { figureDesign } from '../../../server/src/modules/quotes/design-figures.ts';
-import type { CatalogueMotifEntry, QuoteCatalogue } from '../../../server/src/modules/quotes/quote-catalogue.ts';
+import type { CatalogueMotifEntry, QuoteCatalogue } from '../../../server/src/modules/quotes/quote-catalogue-types.ts';
 import { loadShippedFont } from '../engine/support/load-font.ts';
 
 const daisyChain: CatalogueMotifEntry = {

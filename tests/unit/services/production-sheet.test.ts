@@ -8,7 +8,7 @@ import {
   tileTemplate,
   TILE_OVERLAP_MM,
 } from '../../../server/src/modules/production/production-sheet-pdf-templates.ts';
-import type { QuoteCatalogue } from '../../../server/src/modules/quotes/quote-catalogue.ts';
+import type { QuoteCatalogue } from '../../../server/src/modules/quotes/quote-catalogue-types.ts';
 import { letteringOutline } from '../../../server/src/modules/production/production-sheet-outlines.ts';
 import { itemTemplate } from '../../../server/src/modules/production/production-sheet-templates.ts';
 import type { SheetPlacement } from '../../../server/src/contracts/production-sheet.ts';

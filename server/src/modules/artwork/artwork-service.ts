@@ -6,6 +6,7 @@ import {
   findOwnedArtworkImage,
   insertArtwork,
   listOwnedArtwork,
+  loadOwnedArtworkForQuote,
   type ArtworkImage,
   type ArtworkMeta,
   type ArtworkOwner,
@@ -122,3 +123,11 @@ export const artworkImageUrl = (id: number) => `/api/artwork/${id}/image`;
 function toUpload(meta: ArtworkMeta): ArtworkUpload {
   return { ...meta, imageUrl: artworkImageUrl(meta.id) };
 }
+
+export type { ArtworkImage, ArtworkOwner };
+
+/**
+ * The drawings of these uploads that this owner may use, for pricing and production sheets: other owners' uploads
+ * are left out. `db` may be the caller's transaction.
+ */
+export const artworkForQuote = (db: Db, owner: ArtworkOwner, ids: number[]) => loadOwnedArtworkForQuote(db, owner, ids);

@@ -1,33 +1,11 @@
-import { Router, type Response } from 'express';
-import type { ArtworkImage } from './artwork-repo.ts';
-import type { z } from 'zod';
+import { Router } from 'express';
 import { artworkOwnerForUpload, artworkOwnerOf } from './artwork-owner.ts';
+import { sendArtworkImage } from './send-artwork-image.ts';
 import { artworkIdParams } from '../../contracts/artwork.ts';
 import { sendResult } from '../../middleware/send-result.ts';
-import { validate } from '../../middleware/validate.ts';
-import type { ArtworkService } from './artwork-service.ts';
+import { validated } from '../../middleware/validate.ts';
 import { singleUpload } from '../../middleware/upload.ts';
-
-type ArtworkIdParams = z.infer<typeof artworkIdParams>;
-
-/**
- * An SVG is only ever shown as a picture, but opened on its own it would be a document of this origin; so it gets
- * a policy that runs nothing and loads nothing (its inline styles aside), and the browser may not guess its type.
- */
-const SVG_POLICY = "default-src 'none'; style-src 'unsafe-inline'";
-
-/** Sends a stored upload as a picture, private to whoever may see it. */
-export function sendArtworkImage(res: Response, image: ArtworkImage): void {
-  res.set('X-Content-Type-Options', 'nosniff');
-  // Private: a shared cache must not keep it, but the viewer's browser may for a moment.
-  res.set('Cache-Control', 'private, max-age=300');
-  if (image.kind === 'svg') {
-    res.set('Content-Security-Policy', SVG_POLICY);
-    res.type('image/svg+xml').send(image.svg);
-  } else {
-    res.type('image/png').send(image.png);
-  }
-}
+import type { ArtworkService } from './artwork-service.ts';
 
 /** The customer's own artwork, for anyone designing, signed in or not; each upload reaches only its owner. */
 export function createArtworkRouter(deps: { artwork: ArtworkService; uploadMaxBytes: number }): Router {
@@ -39,15 +17,19 @@ export function createArtworkRouter(deps: { artwork: ArtworkService; uploadMaxBy
   router.get('/', async (req, res) => {
     sendResult(res, await deps.artwork.list(artworkOwnerOf(req)));
   });
-  router.get('/:id', validate(artworkIdParams, 'params'), async (req, res) => {
-    const { id } = res.locals.params as ArtworkIdParams;
-    sendResult(res, await deps.artwork.get(artworkOwnerOf(req), id));
-  });
-  router.get('/:id/image', validate(artworkIdParams, 'params'), async (req, res) => {
-    const { id } = res.locals.params as ArtworkIdParams;
-    const found = await deps.artwork.image(artworkOwnerOf(req), id);
-    if (!found.ok) return sendResult(res, found);
-    sendArtworkImage(res, found.value);
-  });
+  router.get(
+    '/:id',
+    validated({ params: artworkIdParams }, async ({ params }, req, res) => {
+      sendResult(res, await deps.artwork.get(artworkOwnerOf(req), params.id));
+    }),
+  );
+  router.get(
+    '/:id/image',
+    validated({ params: artworkIdParams }, async ({ params }, req, res) => {
+      const found = await deps.artwork.image(artworkOwnerOf(req), params.id);
+      if (!found.ok) return sendResult(res, found);
+      sendArtworkImage(res, found.value);
+    }),
+  );
   return router;
 }

@@ -60,3 +60,9 @@ export async function deleteCatalogueRow(
     throw error;
   }
 }
+
+/** Whether the row is offered to customers; a row without the flag (a size, a colour) always is. */
+export async function readRowIsActive(db: Db, table: CatalogueTable, id: number): Promise<boolean> {
+  const row = await db(table).where({ id }).first('is_active');
+  return Boolean(row?.is_active ?? true);
+}

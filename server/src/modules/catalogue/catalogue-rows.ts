@@ -7,6 +7,7 @@
 import type { Db } from '../../db/knex.ts';
 import {
   deleteCatalogueRow,
+  readRowIsActive,
   insertCatalogueRow,
   updateCatalogueRow,
   type CatalogueTable,
@@ -38,11 +39,6 @@ function toResult(write: RowWrite, wording: RowWording, isActive: boolean): Resu
   }
 }
 
-async function isActiveOf(db: Db, table: CatalogueTable, id: number): Promise<boolean> {
-  const row = await db(table).where({ id }).first('is_active');
-  return Boolean(row?.is_active ?? true);
-}
-
 export async function createCatalogueRow(
   db: Db,
   table: CatalogueTable,
@@ -64,7 +60,7 @@ export async function editCatalogueRow(
     write,
     wording,
     write.outcome === 'written' && table !== 'garment_sizes' && table !== 'fabric_colours'
-      ? await isActiveOf(db, table, where.id)
+      ? await readRowIsActive(db, table, where.id)
       : true,
   );
 }
@@ -87,4 +83,26 @@ export async function removeCatalogueRow(
   wording: RowWording,
 ): Promise<Result<CatalogueRowRef>> {
   return toResult(await deleteCatalogueRow(db, table, where), wording, false);
+}
+
+/** How one kind of plain catalogue row (hoop, thread, font) is written from its requests. */
+export interface PlainRowKind<C, U> {
+  table: CatalogueTable;
+  wording: RowWording;
+  /** The columns a new row gets, its slug or code among them, or why the request cannot become a row. */
+  newRow: (request: C) => Result<Record<string, unknown>>;
+  /** The columns an edit writes; the row's slug or code is not among them, as designs refer to it. */
+  editedRow: (request: U) => Record<string, unknown>;
+}
+
+/** Create, edit, retire and bring back one kind of plain catalogue row. */
+export function createPlainRowService<C, U>(db: Db, kind: PlainRowKind<C, U>) {
+  return {
+    async create(request: C): Promise<Result<CatalogueRowRef>> {
+      const row = kind.newRow(request);
+      return row.ok ? createCatalogueRow(db, kind.table, row.value, kind.wording) : row;
+    },
+    update: (id: number, request: U) => editCatalogueRow(db, kind.table, { id }, kind.editedRow(request), kind.wording),
+    setActive: (id: number, isActive: boolean) => setCatalogueRowActive(db, kind.table, id, isActive, kind.wording),
+  };
 }

@@ -3,7 +3,9 @@
  * orders keep pointing at it. Its sizes and colours may be deleted while nothing uses them.
  */
 import type { Db } from '../../db/knex.ts';
-import { mockupSizeMm } from './garment-repo.ts';
+import { garmentIdExists } from './garment-repo.ts';
+import { mockupSizeMm } from '../../engine/garment-mockup-size.ts';
+import { listStudioGarments } from './studio-garment-repo.ts';
 import type {
   CreateGarmentRequest,
   FabricColourRequest,
@@ -13,7 +15,13 @@ import type {
 import type { CatalogueRowRef } from '../../contracts/admin-catalogue-common.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import { inspectUpload } from '../../integrations/inspect-upload.ts';
-import { createCatalogueRow, editCatalogueRow, removeCatalogueRow, type RowWording } from './catalogue-rows.ts';
+import {
+  createCatalogueRow,
+  editCatalogueRow,
+  removeCatalogueRow,
+  setCatalogueRowActive,
+  type RowWording,
+} from './catalogue-rows.ts';
 
 export const garmentWording: RowWording = {
   noun: 'garment',
@@ -97,10 +105,6 @@ const parts: {
   colours: { table: 'fabric_colours', wording: colourWording, toRow: colourRow },
 };
 
-async function garmentExists(db: Db, garmentId: number): Promise<boolean> {
-  return Boolean(await db('garments').where({ id: garmentId }).first('id'));
-}
-
 const noSuchGarment = () => failure('not-found', 'There is no such garment.');
 
 export function createCatalogueGarmentService(deps: { db: Db }) {
@@ -136,7 +140,7 @@ export function createCatalogueGarmentService(deps: { db: Db }) {
     garmentId: number,
     request: PartRequest[P],
   ): Promise<Result<CatalogueRowRef>> {
-    if (!(await garmentExists(db, garmentId))) return noSuchGarment();
+    if (!(await garmentIdExists(db, garmentId))) return noSuchGarment();
     return createCatalogueRow(
       db,
       parts[part].table,
@@ -165,6 +169,9 @@ export function createCatalogueGarmentService(deps: { db: Db }) {
     return removeCatalogueRow(db, parts[part].table, { id: partId, garment_id: garmentId }, parts[part].wording);
   }
 
-  return { create, update, addPart, updatePart, removePart };
+  const setActive = (id: number, isActive: boolean) =>
+    setCatalogueRowActive(db, 'garments', id, isActive, garmentWording);
+
+  return { create, update, addPart, updatePart, removePart, setActive, list: () => listStudioGarments(db) };
 }
 export type CatalogueGarmentService = ReturnType<typeof createCatalogueGarmentService>;

@@ -24,3 +24,9 @@ export async function listActiveLetteringFonts(db: Db): Promise<LetteringFontSum
     .orderBy([{ column: 'sort_order' }, { column: 'id' }]);
   return rows.map(toLetteringFont);
 }
+
+/** The @fontsource packages the catalogue already has a row for, active or retired. */
+export async function listCataloguedFontPackages(db: Db): Promise<Set<string>> {
+  const rows = await db('lettering_fonts').select('fontsource_package');
+  return new Set(rows.map((row) => row.fontsource_package as string));
+}

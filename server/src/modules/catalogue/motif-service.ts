@@ -4,6 +4,7 @@
  * its digitizing), else the engine's estimate; the estimate is kept beside them either way.
  */
 import type { Db } from '../../db/knex.ts';
+import { findThreadCodes, listActiveThreads } from './thread-repo.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import type { CatalogueRowRef } from '../../contracts/admin-catalogue-common.ts';
 import type {
@@ -23,7 +24,7 @@ import {
   type SvgSize,
 } from '../../engine/index.ts';
 import { inspectUpload } from '../../integrations/inspect-upload.ts';
-import { createCatalogueRow, editCatalogueRow, type RowWording } from './catalogue-rows.ts';
+import { createCatalogueRow, editCatalogueRow, setCatalogueRowActive, type RowWording } from './catalogue-rows.ts';
 
 const wording: RowWording = {
   noun: 'motif',
@@ -62,13 +63,6 @@ function estimateAt(
 export function createCatalogueMotifService(deps: { db: Db }) {
   const { db } = deps;
 
-  async function activeThreads() {
-    return db('threads')
-      .select('code', 'name', 'hex')
-      .where({ is_active: true })
-      .orderBy([{ column: 'sort_order' }, { column: 'id' }]);
-  }
-
   /**
    * What an uploaded SVG would become, without saving: the sanitized drawing, its size at 100 % (from its own
    * units, or stretched to `widthMm`), the engine's estimate and its colours matched to the nearest threads.
@@ -78,7 +72,7 @@ export function createCatalogueMotifService(deps: { db: Db }) {
     if (!svg.ok) return svg;
     const canvas = svgCanvasSizeMm(svg.value, widthMm === undefined ? undefined : { widthMm });
     const estimated = canvas.ok ? estimateAt(svg.value, { mmPerUnit: canvas.mmPerUnit }) : { reason: canvas.reason };
-    const palette = await activeThreads();
+    const palette = await listActiveThreads(db);
     const colours = svgColoursInOrder(svg.value);
     return ok({
       svg: svg.value,
@@ -98,9 +92,7 @@ export function createCatalogueMotifService(deps: { db: Db }) {
     const svg = await cleanSvg(Buffer.from(request.svg, 'utf8'));
     if (!svg.ok) return failure(svg.error.kind, svg.error.message, { svg: svg.error.message });
 
-    const known = new Set(
-      (await db('threads').select('code').whereIn('code', request.threadCodes)).map((row) => row.code as string),
-    );
+    const known = new Set(await findThreadCodes(db, request.threadCodes));
     const unknownAt = request.threadCodes.findIndex((code) => !known.has(code));
     if (unknownAt >= 0) {
       const message = `There is no thread ${request.threadCodes[unknownAt]} on the shelf`;
@@ -163,7 +155,10 @@ export function createCatalogueMotifService(deps: { db: Db }) {
     return editCatalogueRow(db, 'motifs', { id }, row.value, wording);
   }
 
-  return { preview, create, update };
+  const setActive = (id: number, isActive: boolean) => setCatalogueRowActive(db, 'motifs', id, isActive, wording);
+
+  return { preview, create, update, setActive };
 }
 
 export { wording as motifWording };
+export type CatalogueMotifService = ReturnType<typeof createCatalogueMotifService>;

@@ -9,3 +9,8 @@ export async function listActiveThreads(db: Db): Promise<ThreadColourSummary[]> 
     .orderBy([{ column: 'sort_order' }, { column: 'id' }]);
   return rows.map((row) => ({ code: row.code, name: row.name, hex: row.hex }));
 }
+
+/** Which of these thread codes the palette has, active or retired. */
+export async function findThreadCodes(db: Db, codes: string[]): Promise<string[]> {
+  return (await db('threads').select('code').whereIn('code', codes)).map((row) => row.code as string);
+}

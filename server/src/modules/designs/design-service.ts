@@ -166,3 +166,6 @@ function toSavedDesign(stored: StoredDesign): SavedDesign {
   if (!restored.success) throw new Error(`Saved design ${stored.id} no longer restores: ${restored.error.message}`);
   return { ...stored, document: restored.data };
 }
+
+/** A customer's own saved design as stored, or undefined for anyone else's; `db` may be the caller's transaction. */
+export const findCustomerDesign = findOwnedDesign;

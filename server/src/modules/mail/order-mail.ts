@@ -1,5 +1,6 @@
 import type { Db } from '../../db/knex.ts';
 import type { Mailer, OutgoingMail } from '../../integrations/mailer.ts';
+import { insertQueuedMail, recordMailOutcome } from './outbox-repo.ts';
 
 export interface LoggedMail extends OutgoingMail {
   /** Names the message for the outbox: order_placed, proof_ready, proof_approved, order_shipped… */
@@ -17,33 +18,18 @@ export async function sendLoggedMail(
   mail: LoggedMail,
 ): Promise<{ id: number; sent: boolean }> {
   const { template, orderId, ...message } = mail;
-  const [id] = await deps.db('email_log').insert({
-    to_email: message.to,
-    subject: message.subject,
-    template,
-    order_id: orderId,
-    status: 'queued',
-    text_body: message.text,
-    html_body: message.html ?? null,
-    created_at: deps.now(),
-    updated_at: deps.now(),
-  });
+  const id = await insertQueuedMail(deps.db, { ...message, template, orderId, html: message.html ?? null }, deps.now());
   try {
     const { messageId } = await deps.mailer.send(message);
-    await deps
-      .db('email_log')
-      .where({ id })
-      .update({ status: 'sent', provider_message_id: messageId, updated_at: deps.now() });
-    return { id: id!, sent: true };
+    await recordMailOutcome(deps.db, id, { sent: true, messageId }, deps.now());
+    return { id, sent: true };
   } catch (error) {
-    await deps
-      .db('email_log')
-      .where({ id })
-      .update({
-        status: 'failed',
-        error: String((error as Error)?.message ?? error).slice(0, 2000),
-        updated_at: deps.now(),
-      });
-    return { id: id!, sent: false };
+    await recordMailOutcome(
+      deps.db,
+      id,
+      { sent: false, error: String((error as Error)?.message ?? error) },
+      deps.now(),
+    );
+    return { id, sent: false };
   }
 }

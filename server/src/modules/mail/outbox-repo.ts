@@ -66,3 +66,44 @@ export async function readOutboxMessage(db: Db, id: number): Promise<OutboxMessa
     }
   );
 }
+
+export interface MailLogEntry {
+  to: string;
+  subject: string;
+  template: string;
+  orderId: number | null;
+  text: string;
+  html: string | null;
+}
+
+/** Keeps a message before it is sent, as queued; returns its id. */
+export async function insertQueuedMail(db: Db, mail: MailLogEntry, at: Date): Promise<number> {
+  const [id] = await db('email_log').insert({
+    to_email: mail.to,
+    subject: mail.subject,
+    template: mail.template,
+    order_id: mail.orderId,
+    status: 'queued',
+    text_body: mail.text,
+    html_body: mail.html,
+    created_at: at,
+    updated_at: at,
+  });
+  return id!;
+}
+
+/** Records how sending went: the provider's message id, or the reason it failed. */
+export async function recordMailOutcome(
+  db: Db,
+  id: number,
+  outcome: { sent: true; messageId: string } | { sent: false; error: string },
+  at: Date,
+): Promise<void> {
+  await db('email_log')
+    .where({ id })
+    .update(
+      outcome.sent
+        ? { status: 'sent', provider_message_id: outcome.messageId, updated_at: at }
+        : { status: 'failed', error: outcome.error.slice(0, 2000), updated_at: at },
+    );
+}

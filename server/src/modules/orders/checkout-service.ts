@@ -2,9 +2,8 @@ import { isDeepStrictEqual } from 'node:util';
 import type Stripe from 'stripe';
 import type { Db } from '../../db/knex.ts';
 import type { Mailer } from '../../integrations/mailer.ts';
-import { findOwnedDesign } from '../designs/design-repo.ts';
-import { findQuote, type StoredQuote } from '../quotes/stored-quote-repo.ts';
-import { readShopSchedule } from '../settings/shop-settings-repo.ts';
+import { findCustomerDesign } from '../designs/design-service.ts';
+import { shopScheduleOf } from '../settings/settings-service.ts';
 import {
   describeDesignForOrder,
   findCustomerOrder,
@@ -24,12 +23,12 @@ import type { CheckoutStartedResponse, PlaceOrderRequest } from '../../contracts
 import type { CurrentUser } from '../../contracts/users.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import { formatMoneyText } from '../mail/money-text.ts';
-import { openCheckoutSession } from '../payments/checkout-session.ts';
+import { openCheckoutSession } from './checkout-session.ts';
 import { moveOrder } from './order-transitions.ts';
 import { sendLoggedMail } from '../mail/order-mail.ts';
 import { orderCancelledMail } from './customer-order-mail.ts';
 import { shopToday } from '../quotes/ready-dates.ts';
-import type { StoredQuoteService } from '../quotes/stored-quote-service.ts';
+import { findStoredQuote, type StoredQuote, type StoredQuoteService } from '../quotes/stored-quote-service.ts';
 
 export interface CheckoutDeps {
   db: Db;
@@ -64,12 +63,12 @@ export function createCheckoutService(deps: CheckoutDeps) {
    * and the customer is asked to confirm the new total (409 with both totals and the new quote id).
    */
   async function place(customer: CurrentUser, request: PlaceOrderRequest): Promise<Result<CheckoutStartedResponse>> {
-    const quote = await findQuote(db, request.quoteId);
+    const quote = await findStoredQuote(db, request.quoteId);
     if (!quote || quote.customerId !== customer.id)
       return failure('not-found', `There is no quote ${request.quoteId}.`, {
         quoteId: 'Price your design again before ordering',
       });
-    const design = await findOwnedDesign(db, { id: request.designId, customerId: customer.id });
+    const design = await findCustomerDesign(db, { id: request.designId, customerId: customer.id });
     if (!design)
       return failure('not-found', `There is no design ${request.designId}.`, {
         designId: 'Choose one of your saved designs',
@@ -90,7 +89,7 @@ export function createCheckoutService(deps: CheckoutDeps) {
     }
 
     const dates = await deps.storedQuotes.readyDatesToday();
-    const shop = await readShopSchedule(db);
+    const shop = await shopScheduleOf(db);
     const today = shopToday(deps.now(), shop.timezone);
     if (request.neededBy < today)
       return failure('invalid', 'Choose a date from today on.', { neededBy: 'Choose a date from today on' });
@@ -223,7 +222,7 @@ export function createCheckoutService(deps: CheckoutDeps) {
       return ok({ wasHeld: held.length > 0 });
     });
     if (!moved.ok) return moved;
-    const shop = await readShopSchedule(db);
+    const shop = await shopScheduleOf(db);
     await sendLoggedMail(
       mailDeps,
       orderCancelledMail(

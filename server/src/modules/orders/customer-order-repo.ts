@@ -1,7 +1,6 @@
 import type { Db } from '../../db/knex.ts';
 import type { OrderStatus, PaymentStatus } from '../../contracts/order-status.ts';
 import type { ShipTo } from '../../contracts/orders.ts';
-import type { StoredOrderEvent } from './customer-order-wording.ts';
 
 const iso = (value: Date | string | null): string | null => (value === null ? null : new Date(value).toISOString());
 const dateOnly = (value: Date | string | null): string | null => (value === null ? null : iso(value)!.slice(0, 10));
@@ -24,6 +23,15 @@ export interface CustomerOrderRow {
   shipTo: ShipTo;
   customerNote: string | null;
   quantity: number;
+}
+
+/** One entry of an order's history as stored; the wording turns it into the customer's timeline. */
+export interface StoredOrderEvent {
+  id: number;
+  type: string;
+  note: string | null;
+  payload: Record<string, unknown> | null;
+  createdAt: string;
 }
 
 /** The order columns with its one item, design and garment; every read names the customer. */

@@ -9,7 +9,7 @@ import {
   recordProofAnswer,
 } from './customer-order-repo.ts';
 import { findCustomerOrder, listPayments, type PaymentRecord } from './order-repo.ts';
-import { readShopSchedule } from '../settings/shop-settings-repo.ts';
+import { shopScheduleOf } from '../settings/settings-service.ts';
 import { restoreDesign } from '../../contracts/designs.ts';
 import type {
   CustomerOrderAction,
@@ -149,7 +149,7 @@ export function createCustomerOrderService(deps: { db: Db; mailer: Mailer; appOr
     });
     if (!done.ok) return done;
 
-    const shop = await readShopSchedule(db);
+    const shop = await shopScheduleOf(db);
     const context = { appOrigin: deps.appOrigin, shopName: shop.name, number, orderId: order.id };
     const mailDeps = { db, mailer: deps.mailer, now: deps.now };
     if (isApproved) await sendLoggedMail(mailDeps, proofApprovedMail(context, customer.email, version));

@@ -3,14 +3,9 @@
  * out. Amounts come from the event's payload.
  */
 import { formatMoneyText } from '../mail/money-text.ts';
+import type { StoredOrderEvent } from './customer-order-repo.ts';
 
-export interface StoredOrderEvent {
-  id: number;
-  type: string;
-  note: string | null;
-  payload: Record<string, unknown> | null;
-  createdAt: string;
-}
+export type { StoredOrderEvent };
 
 /** Events whose note is meant for the customer (their own words, or the reason for a cancel or refund). */
 const notesShown = new Set(['payment_failed', 'changes_requested', 'proof_approved', 'cancelled', 'refunded']);

@@ -7,7 +7,7 @@ import { findStudioOrder, readOrderStanding } from './studio-order-repo.ts';
 import { sendLoggedMail } from '../mail/order-mail.ts';
 import type { OrderAction } from './order-flow.ts';
 import { moveOrder } from './order-transitions.ts';
-import type { StudioActor } from '../payments/order-payment-service.ts';
+import type { StudioActor } from './order-payment-service.ts';
 import { orderShippedMail } from './studio-order-mail.ts';
 
 export function createOrderProductionSteps(deps: { db: Db; mailer: Mailer; now: () => Date; appOrigin: string }) {
@@ -49,3 +49,4 @@ export function createOrderProductionSteps(deps: { db: Db; mailer: Mailer; now: 
     },
   };
 }
+export type OrderProductionSteps = ReturnType<typeof createOrderProductionSteps>;

@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { lockOrderForMove, writeOrderMove } from './order-move-repo.ts';
 import type { OrderStatus } from '../../contracts/order-status.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import { planOrderMove, type OrderAction, type OrderActor } from './order-flow.ts';
@@ -28,25 +29,23 @@ export interface OrderMoved {
  * before the transaction commits.
  */
 export async function moveOrder(trx: Knex.Transaction, request: OrderMoveRequest): Promise<Result<OrderMoved>> {
-  const order = await trx('orders').where({ id: request.orderId }).forUpdate().first('id', 'status', 'placed_at');
+  const order = await lockOrderForMove(trx, request.orderId);
   if (!order) return failure('not-found', 'There is no such order.');
-  const from = order.status as OrderStatus;
+  const from = order.status;
   const planned = planOrderMove(from, request.action, request.actor);
   if (!planned.ok) return failure(planned.kind, planned.reason);
 
-  const changes: Record<string, unknown> = { status: planned.to };
-  // An order joins the studio's queue when the card is held (orders_placed_at CHECK).
-  if (planned.to === 'authorized' && !order.placed_at) changes.placed_at = request.now;
-  await trx('orders').where({ id: order.id }).update(changes);
-  const [eventId] = await trx('order_events').insert({
-    order_id: order.id,
-    actor_user_id: request.actorUserId,
-    type: planned.event,
-    from_status: from,
-    to_status: planned.to,
+  const eventId = await writeOrderMove(trx, {
+    orderId: order.id,
+    from,
+    to: planned.to,
+    event: planned.event,
+    // An order joins the studio's queue when the card is held (orders_placed_at CHECK).
+    ...(planned.to === 'authorized' && !order.placedAt ? { placedAt: request.now } : {}),
+    actorUserId: request.actorUserId,
     note: request.note ?? null,
-    payload: request.payload ? JSON.stringify(request.payload) : null,
-    created_at: request.now,
+    payload: request.payload ?? null,
+    at: request.now,
   });
-  return ok({ orderId: order.id, from, to: planned.to, eventId: eventId! });
+  return ok({ orderId: order.id, from, to: planned.to, eventId });
 }

@@ -1,9 +1,8 @@
 import { Router } from 'express';
-import type { z } from 'zod';
 import { peopleQuery, personIdParams, setRoleRequest } from '../../contracts/admin-users.ts';
 import { currentUserOf } from '../../auth/roles.ts';
 import { requireOwner } from '../../auth/require-owner.ts';
-import { validate } from '../../middleware/validate.ts';
+import { validated } from '../../middleware/validate.ts';
 import { sendResult } from '../../middleware/send-result.ts';
 import type { PeopleService } from './people-service.ts';
 
@@ -11,12 +10,17 @@ import type { PeopleService } from './people-service.ts';
 export function createAdminUsersRouter(deps: { people: PeopleService }): Router {
   const router = Router();
   router.use(requireOwner('see and change who works in the studio'));
-  router.get('/', validate(peopleQuery, 'query'), async (_req, res) => {
-    res.json(await deps.people.list((res.locals.query as z.infer<typeof peopleQuery>).search || undefined));
-  });
-  router.put('/:id/role', validate(personIdParams, 'params'), validate(setRoleRequest), async (req, res) => {
-    const { id } = res.locals.params as z.infer<typeof personIdParams>;
-    sendResult(res, await deps.people.setRole(currentUserOf(req)!, id, req.body.role));
-  });
+  router.get(
+    '/',
+    validated({ query: peopleQuery }, async ({ query }, _req, res) => {
+      res.json(await deps.people.list(query.search || undefined));
+    }),
+  );
+  router.put(
+    '/:id/role',
+    validated({ params: personIdParams, body: setRoleRequest }, async ({ params, body }, req, res) => {
+      sendResult(res, await deps.people.setRole(currentUserOf(req)!, params.id, body.role));
+    }),
+  );
   return router;
 }

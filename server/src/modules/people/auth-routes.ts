@@ -1,9 +1,9 @@
 import { Router } from 'express';
-import passport from 'passport';
+import type passport from 'passport';
 import { AuthorizationError, InternalOAuthError, TokenError } from 'passport-oauth2';
 import { z } from 'zod';
 import { returnToPath, type CurrentUser } from '../../contracts/users.ts';
-import { validate } from '../../middleware/validate.ts';
+import { validated } from '../../middleware/validate.ts';
 
 declare module 'express-session' {
   interface SessionData {
@@ -30,19 +30,23 @@ function problemMessage(info: unknown): string {
  * signing in to their account.
  */
 export function createAuthRouter(deps: {
+  signIn: passport.Authenticator;
   log: (line: string) => void;
   claimArtwork: (sessionKey: string, userId: number) => Promise<void>;
 }): Router {
   const router = Router();
 
-  router.get('/google', validate(startQuery, 'query'), (req, res, next) => {
-    req.session.returnTo = (res.locals.query as z.infer<typeof startQuery>).returnTo ?? '/';
-    passport.authenticate('google', { prompt: 'select_account' } as never)(req, res, next);
-  });
+  router.get(
+    '/google',
+    validated({ query: startQuery }, ({ query }, req, res, next) => {
+      req.session.returnTo = query.returnTo ?? '/';
+      deps.signIn.authenticate('google', { prompt: 'select_account' } as never)(req, res, next);
+    }),
+  );
 
   router.get('/google/callback', (req, res, next) => {
     // The custom callback reads returnTo before req.logIn regenerates the session (which drops its old contents).
-    passport.authenticate('google', (error: unknown, user: Express.User | false, info?: unknown) => {
+    deps.signIn.authenticate('google', (error: unknown, user: Express.User | false, info?: unknown) => {
       const signInProblem = (message: string) => res.redirect(`/sign-in?problem=${encodeURIComponent(message)}`);
       // A code that was already used or has expired is the visitor's back button, not a fault of ours.
       if (error instanceof TokenError || error instanceof AuthorizationError) return signInProblem(unfinished);

@@ -14,7 +14,7 @@ import { adviseNeedle } from './production-sheet-needle.ts';
 import { letteringOutline, motifOutline, type ArtworkOutline } from './production-sheet-outlines.ts';
 import { borderTemplates, itemTemplate } from './production-sheet-templates.ts';
 import { BACKING_NAMES, toppingName } from './production-sheet-wording.ts';
-import type { QuoteCatalogue } from '../quotes/quote-catalogue.ts';
+import type { QuoteCatalogue } from '../quotes/quote-catalogue-types.ts';
 
 export interface SheetSources {
   order: OrderToMake;

@@ -1,6 +1,5 @@
 import type { Db } from '../../db/knex.ts';
-import { loadOwnedArtworkForQuote } from '../artwork/artwork-repo.ts';
-import { loadQuoteCatalogue } from '../quotes/quote-catalogue-repo.ts';
+import { artworkForQuote } from '../artwork/artwork-service.ts';
 import { readMotifArtwork, readOrderToMake, readThreadsByCode, type OrderToMake } from './production-sheet-repo.ts';
 import { restoreDesign, type DesignDocument } from '../../contracts/designs.ts';
 import type { OrderStatus } from '../../contracts/order-status.ts';
@@ -10,7 +9,7 @@ import type { LetteringFontLoader } from '../../integrations/lettering-fonts.ts'
 import { figureDesign } from '../quotes/design-figures.ts';
 import { renderProductionSheetPdf } from './production-sheet-pdf.ts';
 import { assembleSheet } from './production-sheet-assembly.ts';
-import { artworkCatalogueOf, slugsNamedIn, toQuoteCatalogue } from '../quotes/quote-service.ts';
+import { artworkCatalogueOf, quoteCatalogueFor, slugsNamedIn, toQuoteCatalogue } from '../quotes/quote-service.ts';
 
 /** The statuses a sheet is printed in: the customer has approved the proof in writing, so the needle may move. */
 const APPROVED_STATUSES: ReadonlySet<OrderStatus> = new Set(['proof_approved', 'in_production', 'stitched', 'shipped']);
@@ -62,7 +61,7 @@ export function createProductionSheetService(deps: { db: Db; fonts: LetteringFon
   }
 
   async function sheetFor(order: OrderToMake, document: DesignDocument): Promise<Result<ProductionSheet>> {
-    const record = await loadQuoteCatalogue(db, {
+    const record = await quoteCatalogueFor(db, {
       garmentId: order.garmentId,
       sizeId: order.sizeId,
       colourId: order.colourId,
@@ -74,7 +73,7 @@ export function createProductionSheetService(deps: { db: Db; fonts: LetteringFon
     const artworkIds = document.placements.flatMap((placement) =>
       placement.kind === 'artwork' ? [placement.artworkUploadId] : [],
     );
-    const uploads = await loadOwnedArtworkForQuote(db, { userId: order.customerId }, artworkIds);
+    const uploads = await artworkForQuote(db, { userId: order.customerId }, artworkIds);
     const catalogue = toQuoteCatalogue(record.value, deps.fonts, artworkCatalogueOf(uploads));
     const figured = figureDesign(catalogue, document);
     if (!figured.ok)

@@ -18,7 +18,7 @@ import { failure, ok, type Result } from '../../contracts/result.ts';
 import { figureBorder } from './figure-border.ts';
 import { figureItem } from './figure-item.ts';
 import type { PlacementFigures } from './placement-outcome.ts';
-import type { QuoteCatalogue } from './quote-catalogue.ts';
+import type { QuoteCatalogue } from './quote-catalogue-types.ts';
 
 /** Under 3 the stabilizer advice adds a soft cover on the back, matching the cautions' small-parts age. */
 const BABY_OR_TODDLER_BELOW_MONTHS = 36;

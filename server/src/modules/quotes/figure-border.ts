@@ -7,7 +7,7 @@ import {
   type HoopingPlan,
 } from '../../engine/index.ts';
 import type { BorderPlacement } from '../../contracts/designs.ts';
-import type { CatalogueHoop, CatalogueMotifEntry, QuoteCatalogue } from './quote-catalogue.ts';
+import type { CatalogueHoop, CatalogueMotifEntry, QuoteCatalogue } from './quote-catalogue-types.ts';
 import { byFieldArea, catalogueMotifFor, countOf, refuse, type PlacementOutcome } from './placement-outcome.ts';
 
 /**

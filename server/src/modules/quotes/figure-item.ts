@@ -1,6 +1,6 @@
 import { estimateStitches, type StitchEstimate } from '../../engine/index.ts';
 import type { ArtworkPlacement, LetteringPlacement, MotifPlacement } from '../../contracts/designs.ts';
-import type { QuoteCatalogue } from './quote-catalogue.ts';
+import type { QuoteCatalogue } from './quote-catalogue-types.ts';
 import {
   catalogueMotifFor,
   checkFitsAHoop,

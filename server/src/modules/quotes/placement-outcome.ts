@@ -1,6 +1,6 @@
 import type { CatalogueMotif, HoopingPlan, StitchEstimate } from '../../engine/index.ts';
 import type { DesignPlacement } from '../../contracts/designs.ts';
-import type { CatalogueHoop, CatalogueMotifEntry } from './quote-catalogue.ts';
+import type { CatalogueHoop, CatalogueMotifEntry } from './quote-catalogue-types.ts';
 
 /** What one placement costs to sew, per garment. */
 export interface PlacementFigures {

@@ -10,7 +10,7 @@ import type {
   CatalogueSize,
   PlacementZone,
   ShopMachine,
-} from './quote-catalogue.ts';
+} from './quote-catalogue-types.ts';
 
 /** Which catalogue rows a quote needs: the design names its motifs and fonts by slug. */
 interface QuoteCatalogueQuery {

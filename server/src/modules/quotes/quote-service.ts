@@ -1,5 +1,5 @@
 import type { Db } from '../../db/knex.ts';
-import { loadOwnedArtworkForQuote, type ArtworkOwner } from '../artwork/artwork-repo.ts';
+import { artworkForQuote, type ArtworkOwner } from '../artwork/artwork-service.ts';
 import { loadQuoteCatalogue, type QuoteCatalogueRecord } from './quote-catalogue-repo.ts';
 import { priceQuote } from '../../engine/index.ts';
 import type { LetteringFontLoader } from '../../integrations/lettering-fonts.ts';
@@ -7,7 +7,7 @@ import type { DesignDocument } from '../../contracts/designs.ts';
 import type { QuotePreviewRequest, QuotePreviewResponse } from '../../contracts/quotes.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import { figureDesign, type DesignFigures } from './design-figures.ts';
-import type { CatalogueArtwork, QuoteCatalogue } from './quote-catalogue.ts';
+import type { CatalogueArtwork, QuoteCatalogue } from './quote-catalogue-types.ts';
 
 /** A priced design: the preview's answer, the engine's figures and the catalogue rows it was priced from. */
 export interface PricedDesign {
@@ -32,7 +32,7 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader })
         motifSlugs,
         fontSlugs,
       }),
-      owner ? loadOwnedArtworkForQuote(deps.db, owner, artworkIds) : [],
+      owner ? artworkForQuote(deps.db, owner, artworkIds) : [],
     ]);
     if (!record.ok) return record;
     const figured = figureDesign(
@@ -120,7 +120,7 @@ function namedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: s
 
 /** Uploaded artwork as `figureDesign` takes it: an SVG's drawing to estimate, or a raster's size in pixels. */
 export function artworkCatalogueOf(
-  uploads: Awaited<ReturnType<typeof loadOwnedArtworkForQuote>>,
+  uploads: Awaited<ReturnType<typeof artworkForQuote>>,
 ): ReadonlyMap<number, CatalogueArtwork> {
   return new Map(
     uploads.map((upload): [number, CatalogueArtwork] => [
@@ -159,3 +159,6 @@ export function toQuoteCatalogue(
     artworkUploads,
   };
 }
+
+/** The catalogue rows one design is priced from, for whoever prices or makes it (quotes, production sheets). */
+export const quoteCatalogueFor = loadQuoteCatalogue;

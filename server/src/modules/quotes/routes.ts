@@ -1,10 +1,9 @@
 import { Router, type Request } from 'express';
-import type { z } from 'zod';
 import { artworkOwnerOf } from '../artwork/artwork-owner.ts';
 import { quotePreviewRequest } from '../../contracts/quotes.ts';
 import { createQuoteRequest, quoteIdParams } from '../../contracts/stored-quotes.ts';
 import { currentUserOf } from '../../auth/roles.ts';
-import { validate } from '../../middleware/validate.ts';
+import { validated } from '../../middleware/validate.ts';
 import { sendResult } from '../../middleware/send-result.ts';
 import type { QuoteService } from './quote-service.ts';
 import type { StoredQuoteService } from './stored-quote-service.ts';
@@ -27,23 +26,31 @@ const viewerOf = (req: Request) => ({
 /** Quotes for anyone, signed in or not: a visitor prices a design before making an account. */
 export function createQuotesRouter(deps: { quotes: QuoteService; storedQuotes: StoredQuoteService }): Router {
   const router = Router();
-  router.post('/preview', validate(quotePreviewRequest), async (req, res) => {
-    sendResult(res, await deps.quotes.preview(req.body, artworkOwnerOf(req)));
-  });
-  router.post('/', validate(createQuoteRequest), async (req, res) => {
-    const viewer = viewerOf(req);
-    const result = await deps.storedQuotes.create(req.body, viewer.customerId);
-    if (result.ok && viewer.customerId === null)
-      req.session.quoteIds = [...viewer.sessionQuoteIds, result.value.quoteId].slice(-REMEMBERED_VISITOR_QUOTES);
-    sendResult(res, result, 201);
-  });
+  router.post(
+    '/preview',
+    validated({ body: quotePreviewRequest }, async ({ body }, req, res) => {
+      sendResult(res, await deps.quotes.preview(body, artworkOwnerOf(req)));
+    }),
+  );
+  router.post(
+    '/',
+    validated({ body: createQuoteRequest }, async ({ body }, req, res) => {
+      const viewer = viewerOf(req);
+      const result = await deps.storedQuotes.create(body, viewer.customerId);
+      if (result.ok && viewer.customerId === null)
+        req.session.quoteIds = [...viewer.sessionQuoteIds, result.value.quoteId].slice(-REMEMBERED_VISITOR_QUOTES);
+      sendResult(res, result, 201);
+    }),
+  );
   // When an order placed today could be ready, for the designer's price panel (before any quote is stored).
   router.get('/ready-dates', async (_req, res) => {
     res.json(await deps.storedQuotes.readyDatesToday());
   });
-  router.get('/:id', validate(quoteIdParams, 'params'), async (req, res) => {
-    const { id } = res.locals.params as z.infer<typeof quoteIdParams>;
-    sendResult(res, await deps.storedQuotes.get(id, viewerOf(req)));
-  });
+  router.get(
+    '/:id',
+    validated({ params: quoteIdParams }, async ({ params }, req, res) => {
+      sendResult(res, await deps.storedQuotes.get(params.id, viewerOf(req)));
+    }),
+  );
   return router;
 }

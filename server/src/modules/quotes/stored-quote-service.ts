@@ -1,6 +1,6 @@
 import type { Db } from '../../db/knex.ts';
-import { findOwnedDesign } from '../designs/design-repo.ts';
-import { readShopSchedule } from '../settings/shop-settings-repo.ts';
+import { findCustomerDesign } from '../designs/design-service.ts';
+import { shopScheduleOf } from '../settings/settings-service.ts';
 import {
   findFabricColourName,
   findQuote,
@@ -37,7 +37,7 @@ export function createStoredQuoteService(deps: { db: Db; quotes: QuoteService; n
     const { designId, ...pricing } = request;
     if (designId !== undefined) {
       if (customerId === null) return failure('unauthenticated', 'Sign in to price one of your saved designs.');
-      const design = await findOwnedDesign(db, { id: designId, customerId });
+      const design = await findCustomerDesign(db, { id: designId, customerId });
       if (!design)
         return failure('not-found', `There is no design ${designId}.`, {
           designId: 'Choose one of your saved designs',
@@ -147,7 +147,7 @@ export function createStoredQuoteService(deps: { db: Db; quotes: QuoteService; n
 
   /** The ready dates for an order placed now. */
   async function readyDatesToday() {
-    const shop = await readShopSchedule(db);
+    const shop = await shopScheduleOf(db);
     return workOutReadyDates(shopToday(deps.now(), shop.timezone), shop.leadTimeDays);
   }
 
@@ -155,3 +155,8 @@ export function createStoredQuoteService(deps: { db: Db; quotes: QuoteService; n
 }
 
 export type StoredQuoteService = ReturnType<typeof createStoredQuoteService>;
+
+export type { StoredQuote };
+
+/** A stored quote with its price list version, for checkout; `db` may be the caller's transaction. */
+export const findStoredQuote = findQuote;

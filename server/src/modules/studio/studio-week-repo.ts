@@ -1,6 +1,11 @@
 import type { Db } from '../../db/knex.ts';
 import type { OrderStatus } from '../../contracts/order-status.ts';
-import type { MoneyMovement } from './studio-weeks.ts';
+
+/** Money that moved at one instant: a capture, or a refund (a positive amount either way). */
+export interface MoneyMovement {
+  at: Date;
+  amountCents: number;
+}
 
 /** Statuses in which an order still needs the studio: from a held card to stitched and waiting to ship. */
 const openStatuses: OrderStatus[] = [

@@ -3,6 +3,9 @@
  * capacity, and takings per week. Weeks start on Monday and are counted in UTC, as every stored time is.
  */
 import { addWorkingDays } from '../quotes/ready-dates.ts';
+import type { MoneyMovement } from './studio-week-repo.ts';
+
+export type { MoneyMovement };
 
 const dayMs = 86_400_000;
 
@@ -67,12 +70,6 @@ export function bookMachineHours(
     bookedHours: Math.round((minutes / 60) * 100) / 100,
     orderCount,
   }));
-}
-
-/** Money that moved at one instant: a capture, or a refund (a positive amount either way). */
-export interface MoneyMovement {
-  at: Date;
-  amountCents: number;
 }
 
 export interface RevenueWeek {

@@ -3,7 +3,7 @@ import type Stripe from 'stripe';
 import type { Db } from '../../db/knex.ts';
 import type { Mailer } from '../../integrations/mailer.ts';
 import { markWebhookEventProcessed, recordWebhookEvent } from './webhook-event-repo.ts';
-import { readShopSchedule } from '../settings/shop-settings-repo.ts';
+import { shopScheduleOf } from '../settings/settings-service.ts';
 import {
   findCustomerEmail,
   findOrderById,
@@ -13,12 +13,12 @@ import {
   syncOrderPaymentStatus,
   updatePayment,
   type PaymentRecord,
-} from '../orders/order-repo.ts';
+} from './order-repo.ts';
 import type { LoggedMail } from '../mail/order-mail.ts';
 import { sendLoggedMail } from '../mail/order-mail.ts';
-import { moveOrder } from '../orders/order-transitions.ts';
-import { finalStatuses } from '../orders/order-flow.ts';
-import { orderPlacedMail } from '../orders/customer-order-mail.ts';
+import { moveOrder } from './order-transitions.ts';
+import { finalStatuses } from './order-flow.ts';
+import { orderPlacedMail } from './customer-order-mail.ts';
 import { formatMoneyText } from '../mail/money-text.ts';
 
 /** What a payment webhook changes; `after` runs once the transaction has committed (the e-mails). */
@@ -201,7 +201,7 @@ export function createPaymentWebhookService(deps: {
     await syncOrderPaymentStatus(trx, order.id, now);
     if (order.status !== 'awaiting_payment') return undefined;
     const customerEmail = await findCustomerEmail(trx, order.id);
-    const shop = await readShopSchedule(trx);
+    const shop = await shopScheduleOf(trx);
     const mail: LoggedMail = orderPlacedMail(
       { appOrigin: deps.appOrigin, shopName: shop.name, number: order.number, orderId: order.id },
       customerEmail,

@@ -4,19 +4,20 @@
  * unanswered earlier version is superseded and the order moves to `proof_sent`. The customer is e-mailed after.
  */
 import type { Db } from '../../db/knex.ts';
+import { findProofPicture, insertSentProof, nextProofVersion } from './proof-repo.ts';
 import type { Mailer } from '../../integrations/mailer.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import { proofImagePath, type SendProofRequest, type SentProofResponse } from '../../contracts/studio-orders.ts';
-import { findStudioOrder } from '../orders/studio-order-repo.ts';
+import { findStudioOrder } from './studio-order-repo.ts';
 import { loadProofScene } from './proof-scene-repo.ts';
 import { inspectUpload } from '../../integrations/inspect-upload.ts';
 import type { LetteringFontLoader } from '../../integrations/lettering-fonts.ts';
 import { sendLoggedMail } from '../mail/order-mail.ts';
-import { planOrderMove } from '../orders/order-flow.ts';
-import { moveOrder } from '../orders/order-transitions.ts';
-import type { StudioActor } from '../payments/order-payment-service.ts';
+import { planOrderMove } from './order-flow.ts';
+import { moveOrder } from './order-transitions.ts';
+import type { StudioActor } from './order-payment-service.ts';
 import { renderProof } from './proof-render.ts';
-import { proofReadyMail } from '../orders/studio-order-mail.ts';
+import { proofReadyMail } from './studio-order-mail.ts';
 
 export function createProofService(deps: {
   db: Db;
@@ -71,8 +72,7 @@ export function createProofService(deps: {
 
     const sent = await db.transaction(async (trx): Promise<Result<SentProofResponse>> => {
       const now = deps.now();
-      const latest = await trx('proofs').where({ order_id: order.id }).max({ version: 'version' }).first();
-      const version = Number(latest?.version ?? 0) + 1;
+      const version = await nextProofVersion(trx, order.id);
       const moved = await moveOrder(trx, {
         orderId: order.id,
         action: 'send_proof',
@@ -82,20 +82,13 @@ export function createProofService(deps: {
         now,
       });
       if (!moved.ok) return moved;
-      await trx('proofs')
-        .where({ order_id: order.id, status: 'sent' })
-        .update({ status: 'superseded', updated_at: now });
-      await trx('proofs').insert({
-        order_id: order.id,
-        version,
-        status: 'sent',
+      await insertSentProof(trx, version, {
+        orderId: order.id,
         source: request.source,
-        image_png: picture.value,
+        imagePng: picture.value,
         message: request.message,
-        comment_pins: JSON.stringify([]),
-        sent_by_user_id: actor.userId,
-        created_at: now,
-        updated_at: now,
+        sentByUserId: actor.userId,
+        at: now,
       });
       return ok({
         version,
@@ -114,14 +107,12 @@ export function createProofService(deps: {
 
   /** The stored picture of one proof version; seeded history kept no pictures. */
   async function image(number: string, version: number): Promise<Result<Buffer>> {
-    const row = await db('proofs as p')
-      .join('orders as o', 'o.id', 'p.order_id')
-      .where({ 'o.number': number, 'p.version': version })
-      .first('p.image_png');
-    if (!row) return failure('not-found', `Order ${number} has no proof ${version}.`);
-    if (!row.image_png) return failure('not-found', `No picture was kept for proof ${version} of ${number}.`);
-    return ok(row.image_png as Buffer);
+    const picture = await findProofPicture(db, number, version);
+    if (picture === undefined) return failure('not-found', `Order ${number} has no proof ${version}.`);
+    if (picture === null) return failure('not-found', `No picture was kept for proof ${version} of ${number}.`);
+    return ok(picture);
   }
 
   return { send, preview, image };
 }
+export type ProofService = ReturnType<typeof createProofService>;

@@ -19,11 +19,11 @@ import {
   recordOrderEvent,
   updatePayment,
   type StudioOrder,
-} from '../orders/studio-order-repo.ts';
+} from './studio-order-repo.ts';
 import { sendLoggedMail, type LoggedMail } from '../mail/order-mail.ts';
-import { planOrderMove } from '../orders/order-flow.ts';
-import { moveOrder } from '../orders/order-transitions.ts';
-import { orderCancelledMail, payAgainMail, refundIssuedMail } from '../orders/studio-order-mail.ts';
+import { planOrderMove } from './order-flow.ts';
+import { moveOrder } from './order-transitions.ts';
+import { orderCancelledMail, payAgainMail, refundIssuedMail } from './studio-order-mail.ts';
 
 export interface OrderPaymentDeps {
   db: Db;

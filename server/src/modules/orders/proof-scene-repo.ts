@@ -1,8 +1,8 @@
 import type { Db } from '../../db/knex.ts';
 import { designDocument, type DesignDocument } from '../../contracts/designs.ts';
-import type { PlacementZone } from '../quotes/quote-catalogue.ts';
+import type { PlacementZone } from '../quotes/quote-catalogue-types.ts';
 import type { LetteringFontFile } from '../../integrations/lettering-fonts.ts';
-import { mockupSizeMm } from '../catalogue/garment-repo.ts';
+import { mockupSizeMm } from '../../engine/garment-mockup-size.ts';
 
 /** A motif's drawing and the figures that size and fit it. */
 export interface SceneMotif {
