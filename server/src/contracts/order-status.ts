@@ -19,3 +19,32 @@ export type OrderStatus = z.infer<typeof orderStatus>;
 export const paymentStatuses = ['none', 'authorized', 'captured', 'partially_refunded', 'refunded', 'voided'] as const;
 export const paymentStatus = z.enum(paymentStatuses);
 export type PaymentStatus = z.infer<typeof paymentStatus>;
+
+/** Finished with: nothing more for the studio to do. */
+export const closedOrderStatuses = ['shipped', 'cancelled', 'refunded'] as const satisfies readonly OrderStatus[];
+/** The studio's work in hand: from a held card to stitched and waiting to ship. */
+export const openOrderStatuses = [
+  'authorized',
+  'proof_sent',
+  'changes_requested',
+  'proof_approved',
+  'in_production',
+  'stitched',
+] as const satisfies readonly OrderStatus[];
+/** The customer's card is held and not yet charged. */
+export const cardHeldOrderStatuses = [
+  'authorized',
+  'proof_sent',
+  'changes_requested',
+  'proof_approved',
+] as const satisfies readonly OrderStatus[];
+/** The customer approved a proof: the design is settled and may be made (the production sheet exists). */
+export const approvedOrderStatuses = [
+  'proof_approved',
+  'in_production',
+  'stitched',
+  'shipped',
+] as const satisfies readonly OrderStatus[];
+
+/** Whether a status is in one of the groups above. */
+export const isIn = (group: readonly OrderStatus[], status: OrderStatus): boolean => group.includes(status);

@@ -1,4 +1,5 @@
 import { isDeepStrictEqual } from 'node:util';
+import { cardHeldOrderStatuses, isIn, type OrderStatus } from '../../contracts/order-status.ts';
 import type Stripe from 'stripe';
 import type { Db } from '../../db/knex.ts';
 import type { Mailer } from '../../integrations/mailer.ts';
@@ -39,16 +40,13 @@ export interface CheckoutDeps {
   now: () => Date;
 }
 
-/** Orders in these statuses are placed and not yet charged: the card must stay held until the studio charges it. */
-const heldStatuses = ['authorized', 'proof_sent', 'changes_requested', 'proof_approved'];
-
 /**
  * True when the order needs the customer to pay: still awaiting payment (a declined card, an abandoned checkout),
  * or placed but with no hold left on the card (the authorization lapsed before the studio charged it).
  */
 export function isPaymentNeeded(order: Pick<OrderRecord, 'status'>, payments: PaymentRecord[], now: Date): boolean {
   if (order.status === 'awaiting_payment') return true;
-  if (!heldStatuses.includes(order.status)) return false;
+  if (!isIn(cardHeldOrderStatuses, order.status as OrderStatus)) return false;
   return !payments.some((p) => p.status === 'authorized' && (p.captureBefore === null || p.captureBefore > now));
 }
 

@@ -1,6 +1,6 @@
 import type { Knex } from 'knex';
+import { closedOrderStatuses, isIn } from '../../contracts/order-status.ts';
 import type { Db } from '../../db/knex.ts';
-import type { OrderStatus } from '../../contracts/order-status.ts';
 import type {
   BoardOrder,
   BoardSortKey,
@@ -10,7 +10,6 @@ import type {
 } from '../../contracts/studio-orders.ts';
 
 /** Orders past these statuses are no longer the studio's to make, so they are never overdue. */
-const closedStatuses: readonly OrderStatus[] = ['shipped', 'cancelled', 'refunded'];
 
 /** Each sort, with the order id as the tie-break so a page boundary never repeats or skips an order. */
 const sortColumns: Record<BoardSortKey, string> = {
@@ -120,7 +119,7 @@ async function boardRows(db: Db, ids: number[], today: string): Promise<BoardOrd
       placedAt: row.placed_at === null ? null : new Date(row.placed_at).toISOString(),
       neededBy,
       isRush: Boolean(row.is_rush),
-      isOverdue: neededBy !== null && neededBy < today && !closedStatuses.includes(row.status),
+      isOverdue: neededBy !== null && neededBy < today && !isIn(closedOrderStatuses, row.status),
       totalCents: Number(row.total_cents),
       currency: row.currency,
       itemSummary: (summaries.get(id) ?? []).join('; '),

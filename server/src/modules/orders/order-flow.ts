@@ -4,6 +4,7 @@
  * inside a transaction and writes the order event.
  */
 import type { OrderStatus } from '../../contracts/order-status.ts';
+import { approvedOrderStatuses, isIn } from '../../contracts/order-status.ts';
 import type { Role } from '../../contracts/users.ts';
 
 /** What happened, as the order events name it. */
@@ -75,7 +76,7 @@ function refusal(action: OrderAction, from: OrderStatus): string {
         : 'The proof has already been approved; it cannot be replaced now.';
     case 'request_changes':
     case 'approve_proof':
-      return ['proof_approved', 'in_production', 'stitched', 'shipped'].includes(from)
+      return isIn(approvedOrderStatuses, from)
         ? 'This proof has already been approved.'
         : 'There is no proof waiting for an answer on this order.';
     case 'start_production':

@@ -1,4 +1,5 @@
 import type { Db } from '../../db/knex.ts';
+import { approvedOrderStatuses, isIn } from '../../contracts/order-status.ts';
 import { artworkForQuote } from '../artwork/artwork-service.ts';
 import { readMotifArtwork, readOrderToMake, readThreadsByCode, type OrderToMake } from './production-sheet-repo.ts';
 import { restoreDesign, type DesignDocument } from '../../contracts/designs.ts';
@@ -12,7 +13,6 @@ import { assembleSheet } from './production-sheet-assembly.ts';
 import { artworkCatalogueOf, quoteCatalogueFor, slugsNamedIn, toQuoteCatalogue } from '../quotes/quote-service.ts';
 
 /** The statuses a sheet is printed in: the customer has approved the proof in writing, so the needle may move. */
-const APPROVED_STATUSES: ReadonlySet<OrderStatus> = new Set(['proof_approved', 'in_production', 'stitched', 'shipped']);
 
 /** Why there is no sheet yet (or any more), in the studio's words. */
 const NOT_YET: Readonly<Record<OrderStatus, string>> = {
@@ -39,7 +39,7 @@ export function createProductionSheetService(deps: { db: Db; fonts: LetteringFon
   async function get(number: string): Promise<Result<ProductionSheet>> {
     const order = await readOrderToMake(db, number);
     if (!order) return failure('not-found', `There is no order ${number}.`);
-    if (!APPROVED_STATUSES.has(order.status)) {
+    if (!isIn(approvedOrderStatuses, order.status)) {
       return failure(
         'conflict',
         `Order ${number} ${NOT_YET[order.status]}. The production sheet is ready once the customer approves the proof.`,

@@ -3,6 +3,7 @@
  * the studio page both draw from these figures, so the printout and the screen cannot disagree.
  */
 import type { PlacementTemplate, SheetPlacement } from '../../contracts/production-sheet.ts';
+import { fitInField } from '../../engine/hoop-fit.ts';
 import { placeOutlines, type ArtworkOutline } from './production-sheet-outlines.ts';
 
 /** Clear paper round the sewing field, mm, so the field's outline is not lost at a trimmed edge. */
@@ -67,7 +68,7 @@ export function borderTemplates(
 
 /** A single motif or lettering centred in its hoop's field, turned to fit when it only fits the other way. */
 export function itemTemplate(placement: SheetPlacement, hoop: Hoop, artwork: ArtworkOutline): PlacementTemplate {
-  const fitsAsIs = artwork.widthMm <= hoop.fieldWidthMm && artwork.heightMm <= hoop.fieldHeightMm;
+  const fitsAsIs = fitInField(hoop, artwork) !== 'turned';
   const [fieldWidthMm, fieldHeightMm] = fitsAsIs
     ? [hoop.fieldWidthMm, hoop.fieldHeightMm]
     : [hoop.fieldHeightMm, hoop.fieldWidthMm];

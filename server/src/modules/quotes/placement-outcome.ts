@@ -1,4 +1,5 @@
 import type { CatalogueMotif, HoopingPlan, StitchEstimate } from '../../engine/index.ts';
+import { fitInField } from '../../engine/hoop-fit.ts';
 import type { DesignPlacement } from '../../contracts/designs.ts';
 import type { CatalogueHoop, CatalogueMotifEntry } from './quote-catalogue-types.ts';
 
@@ -81,9 +82,5 @@ export function smallestHoopHolding(
   widthMm: number,
   heightMm: number,
 ): CatalogueHoop | undefined {
-  return byFieldArea(hoops).find(
-    (hoop) =>
-      (widthMm <= hoop.fieldWidthMm && heightMm <= hoop.fieldHeightMm) ||
-      (widthMm <= hoop.fieldHeightMm && heightMm <= hoop.fieldWidthMm),
-  );
+  return byFieldArea(hoops).find((hoop) => fitInField(hoop, { widthMm, heightMm }) !== undefined);
 }

@@ -1,4 +1,5 @@
 import type { Db } from '../../db/knex.ts';
+import { openOrderStatuses } from '../../contracts/order-status.ts';
 import type { OrderStatus } from '../../contracts/order-status.ts';
 
 /** Money that moved at one instant: a capture, or a refund (a positive amount either way). */
@@ -6,16 +7,6 @@ export interface MoneyMovement {
   at: Date;
   amountCents: number;
 }
-
-/** Statuses in which an order still needs the studio: from a held card to stitched and waiting to ship. */
-const openStatuses: OrderStatus[] = [
-  'authorized',
-  'proof_sent',
-  'changes_requested',
-  'proof_approved',
-  'in_production',
-  'stitched',
-];
 
 export interface OpenOrderRow {
   id: number;
@@ -49,7 +40,7 @@ export async function readOpenOrders(db: Db): Promise<OpenOrderRow[]> {
       'o.placed_at',
       'q.run_minutes',
     )
-    .whereIn('o.status', openStatuses)
+    .whereIn('o.status', openOrderStatuses)
     .orderBy([{ column: 'o.placed_at' }, { column: 'o.id' }]);
   return rows.map((row) => ({
     id: row.id,

@@ -1,5 +1,6 @@
 import type { HoopSummary } from '@server/contracts/catalogue.ts';
 import type { ExtentMm } from './design-setting.ts';
+import { largestScaleInField } from '@server/engine/hoop-fit.ts';
 
 /**
  * How many times larger an item of this upright size may be made and still go in one hooping: the largest factor
@@ -8,14 +9,7 @@ import type { ExtentMm } from './design-setting.ts';
  */
 export function largestFactorInHoops(extent: ExtentMm, hoops: readonly HoopSummary[]): number {
   if (hoops.length === 0 || !(extent.widthMm > 0) || !(extent.heightMm > 0)) return Number.POSITIVE_INFINITY;
-  return Math.max(
-    ...hoops.map((hoop) =>
-      Math.max(
-        Math.min(hoop.fieldWidthMm / extent.widthMm, hoop.fieldHeightMm / extent.heightMm),
-        Math.min(hoop.fieldHeightMm / extent.widthMm, hoop.fieldWidthMm / extent.heightMm),
-      ),
-    ),
-  );
+  return Math.max(...hoops.map((hoop) => largestScaleInField(hoop, extent)));
 }
 
 /** The hoop with the largest sewing field, for saying what the limit is. */
