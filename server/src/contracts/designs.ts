@@ -6,12 +6,25 @@ import { z } from 'zod';
  * from the catalogue, so nothing in it is a price or a stitch count.
  */
 
-/** Placements a design may hold: more than this is not one garment's embroidery. */
-const MAX_PLACEMENTS = 12;
-/** Longest lettering, in characters: a name or a short phrase on a child's garment. */
-const MAX_LETTERING_LENGTH = 40;
-/** Most repeats a customer may ask for: more would be a motif narrower than 10 mm round a 2 m hem. */
-const MAX_REQUESTED_REPEATS = 200;
+/** The design document's limits, one source for the server's checks and the apps' fields. */
+export const designLimits = {
+  /** Placements a design may hold: more than this is not one garment's embroidery. */
+  maxPlacements: 12,
+  /** Longest lettering, in characters: a name or a short phrase on a child's garment. */
+  maxLetteringLength: 40,
+  /** Most repeats a customer may ask for: more would be a motif narrower than 10 mm round a 2 m hem. */
+  maxRequestedRepeats: 200,
+  /** Letter heights, mm (each font narrows this to what it sews cleanly). */
+  letterHeightMm: { min: 5, max: 100 },
+  /** The customer's own artwork, drawn this wide, mm. */
+  artworkWidthMm: { min: 5, max: 400 },
+  /** A motif's or border's size against its drawing, %. */
+  scalePct: { min: 1, max: 400 },
+} as const;
+const MAX_PLACEMENTS = designLimits.maxPlacements;
+const MAX_LETTERING_LENGTH = designLimits.maxLetteringLength;
+const MAX_REQUESTED_REPEATS = designLimits.maxRequestedRepeats;
+const { letterHeightMm: letterHeight, artworkWidthMm: artworkWidth, scalePct: scale } = designLimits;
 
 /**
  * Objects are strict: every figure is recomputed by the server, so a price, stitch count or hooping sent along
@@ -66,7 +79,7 @@ const borderPlacement = z.strictObject(
       .min(1, 'Ask for at least 1 repeat')
       .max(MAX_REQUESTED_REPEATS, `Ask for at most ${MAX_REQUESTED_REPEATS} repeats`)
       .optional(),
-    scalePct: z.number().min(1).max(400).optional(),
+    scalePct: z.number().min(scale.min).max(scale.max).optional(),
     /** The border's centre line above the hem edge, mm. */
     hemOffsetMm: z.number().min(0).max(500),
     hoop: catalogueSlug.optional(),
@@ -83,7 +96,10 @@ const motifPlacement = z.strictObject(
     kind: z.literal('motif'),
     ...itemPosition,
     motif: catalogueSlug,
-    scalePct: z.number().min(1, 'Use a size from 1 % to 400 %').max(400, 'Use a size from 1 % to 400 %'),
+    scalePct: z
+      .number()
+      .min(scale.min, `Use a size from ${scale.min} % to ${scale.max} %`)
+      .max(scale.max, `Use a size from ${scale.min} % to ${scale.max} %`),
     threads: threadCodes,
   },
   strictObjectErrors('the motif'),
@@ -106,8 +122,8 @@ const letteringPlacement = z.strictObject(
     font: catalogueSlug,
     letterHeightMm: z
       .number()
-      .min(5, 'Letters must be at least 5 mm tall')
-      .max(100, 'Letters can be at most 100 mm tall'),
+      .min(letterHeight.min, `Letters must be at least ${letterHeight.min} mm tall`)
+      .max(letterHeight.max, `Letters can be at most ${letterHeight.max} mm tall`),
     thread: threadCode,
   },
   strictObjectErrors('the lettering'),
@@ -120,7 +136,10 @@ const artworkPlacement = z.strictObject(
     kind: z.literal('artwork'),
     ...itemPosition,
     artworkUploadId: z.number().int().positive(),
-    widthMm: z.number().min(5, 'Make the artwork at least 5 mm wide').max(400, 'Make the artwork at most 400 mm wide'),
+    widthMm: z
+      .number()
+      .min(artworkWidth.min, `Make the artwork at least ${artworkWidth.min} mm wide`)
+      .max(artworkWidth.max, `Make the artwork at most ${artworkWidth.max} mm wide`),
   },
   strictObjectErrors('the artwork'),
 );

@@ -1,11 +1,11 @@
 import type { ArtworkUpload } from '@server/contracts/artwork.ts';
 import type { PlacementZoneSummary } from '@server/contracts/catalogue.ts';
+import { designLimits } from '@server/contracts/designs.ts';
 import type { DesignSetting } from './design-setting.ts';
 import { largestFactorInHoops } from './hoop-limit.ts';
 
-/** The design document's limits for artwork width (server/src/contracts/designs.ts). */
-const DOCUMENT_MIN_WIDTH_MM = 5;
-const DOCUMENT_MAX_WIDTH_MM = 400;
+/** The design document's limits for artwork width. */
+const { min: DOCUMENT_MIN_WIDTH_MM, max: DOCUMENT_MAX_WIDTH_MM } = designLimits.artworkWidthMm;
 /** A child's drawing usually reads well about this wide on a yoke or bib (common practice, no source). */
 export const STARTING_WIDTH_MM = 60;
 

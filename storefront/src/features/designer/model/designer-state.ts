@@ -1,13 +1,14 @@
-import type {
-  ArtworkPlacement,
-  DesignDocument,
-  DesignPlacement,
-  LetteringPlacement,
-  MotifPlacement,
+import {
+  designLimits,
+  type ArtworkPlacement,
+  type DesignDocument,
+  type DesignPlacement,
+  type LetteringPlacement,
+  type MotifPlacement,
 } from '@server/contracts/designs.ts';
 
 /** Most placements the design document accepts (server/src/contracts/designs.ts). */
-export const MAX_PLACEMENTS = 12;
+export const MAX_PLACEMENTS = designLimits.maxPlacements;
 
 /**
  * What the customer is designing: the document in the garment's millimetres at the chosen size, the size and fabric

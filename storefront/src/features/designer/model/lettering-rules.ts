@@ -1,7 +1,8 @@
 import type { LetteringFontSummary } from '@server/contracts/catalogue.ts';
+import { designLimits } from '@server/contracts/designs.ts';
 
-/** As in the design document contract: a name or a short phrase on a child's garment. */
-export const MAX_LETTERING_LENGTH = 40;
+/** The design document contract's limit: a name or a short phrase on a child's garment. */
+export const MAX_LETTERING_LENGTH = designLimits.maxLetteringLength;
 
 export type LetteringTextCheck = { ok: true; text: string } | { ok: false; message: string };
 
