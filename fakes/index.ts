@@ -12,6 +12,8 @@ export interface FakesConfig {
   stripeApiKey: string;
   stripeWebhookSecret: string;
   stripeWebhookUrl: string;
+  /** Where the payment stand-in keeps its state between runs; in memory only when left out. */
+  stripeStateFile?: string;
 }
 
 export interface FakeUrls {
@@ -35,6 +37,7 @@ export async function startFakes(cfg: FakesConfig): Promise<{ urls: FakeUrls; cl
       apiKey: cfg.stripeApiKey,
       webhookSecret: cfg.stripeWebhookSecret,
       webhookUrl: cfg.stripeWebhookUrl,
+      stateFile: cfg.stripeStateFile,
     }),
     startSmtpFake({ smtpPort: cfg.smtpPort, httpPort: cfg.smtpHttpPort, host: cfg.host }),
   ]);

@@ -1,5 +1,7 @@
 /** `npm run db:start | db:stop | db:reset` — the local MariaDB's lifecycle. */
+import { rmSync } from 'node:fs';
 import { openDatabase } from '../server/src/db/knex.ts';
+import { demoStandInFolder } from './stack.ts';
 import { loadDatabaseConfig } from '../server/src/config.ts';
 import { localDatabaseSettings, startLocalDatabase, stopLocalDatabase, wipeLocalDatabase } from './db-lifecycle.ts';
 
@@ -18,6 +20,8 @@ if (command === 'start') {
   console.log(stopped ? 'MariaDB stopped.' : 'MariaDB was not running.');
 } else if (command === 'reset') {
   await wipeLocalDatabase(settings);
+  // The payment stand-in's saved sessions belong to the demo data being wiped.
+  rmSync(demoStandInFolder, { recursive: true, force: true });
   await startLocalDatabase(settings);
   const db = openDatabase(loadDatabaseConfig({ ...process.env, DB_PORT: String(settings.port) }));
   try {

@@ -98,7 +98,10 @@ export async function migrateAndSeed(
 }
 
 /** Starts the three local stand-ins (sign-in, payments, mail) on the stack's ports. */
-export function startLocalFakes(stack: LocalStack) {
+/** Where the demo's payment stand-in keeps its sessions and holds between runs of `npm start` (wiped by db:reset). */
+export const demoStandInFolder = join(projectRoot, '.data', 'stand-ins');
+
+export function startLocalFakes(stack: LocalStack, options: { stripeStateFile?: string } = {}) {
   return startFakes({
     host: '127.0.0.1',
     googlePort: stack.ports.google,
@@ -115,6 +118,7 @@ export function startLocalFakes(stack: LocalStack) {
     stripeApiKey: stack.env.STRIPE_SECRET_KEY!,
     stripeWebhookSecret: stack.env.STRIPE_WEBHOOK_SECRET!,
     stripeWebhookUrl: `${stack.appOrigin}/api/webhooks/stripe`,
+    stripeStateFile: options.stripeStateFile,
   });
 }
 

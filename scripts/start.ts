@@ -6,7 +6,16 @@
 import type { ChildProcess } from 'node:child_process';
 import { demoPeople } from '../seeds/data/people.ts';
 import { startLocalDatabase, stopLocalDatabase } from './db-lifecycle.ts';
-import { buildApps, localStack, migrateAndSeed, startLocalFakes, startServerProcess, stopProcess } from './stack.ts';
+import { join } from 'node:path';
+import {
+  buildApps,
+  demoStandInFolder,
+  localStack,
+  migrateAndSeed,
+  startLocalFakes,
+  startServerProcess,
+  stopProcess,
+} from './stack.ts';
 
 const stack = localStack('demo');
 const usesOwnDatabase = !process.env.DATABASE_URL;
@@ -38,7 +47,7 @@ try {
   }
   const { migrated, seeded } = await migrateAndSeed(stack.env, 'when-empty');
   console.log(`Database ready (${migrated} new migrations${seeded ? ', demo data loaded' : ''}).`);
-  fakes = await startLocalFakes(stack);
+  fakes = await startLocalFakes(stack, { stripeStateFile: join(demoStandInFolder, 'stripe.json') });
   console.log('Building the storefront and studio apps…');
   await buildApps();
   server = await startServerProcess(stack);

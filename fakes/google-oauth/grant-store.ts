@@ -1,3 +1,4 @@
+import { randomId } from '../random-id.ts';
 import type { FakeIdentity } from './fake-identity.ts';
 
 interface AuthorizationGrant {
@@ -10,18 +11,16 @@ interface AuthorizationGrant {
 type Redemption = { ok: true; accessToken: string } | { ok: false; description: string };
 
 /**
- * Authorization codes and access tokens, in memory. Secrets come from counters, not randomness, so a failing test
- * fails the same way twice; this provider only ever listens on loopback.
+ * Authorization codes and access tokens, in memory. Both are random, as the real provider's are, so a code or token
+ * from before a restart is simply unknown afterwards instead of naming someone else's grant.
  */
 export function createGrantStore() {
   const grants = new Map<string, AuthorizationGrant>();
   const tokens = new Map<string, FakeIdentity>();
-  let codeCount = 0;
-  let tokenCount = 0;
 
   return {
     issueCode(identity: FakeIdentity, clientId: string, redirectUri: string): string {
-      const code = `code-${String(++codeCount).padStart(6, '0')}`;
+      const code = randomId('code-', 32);
       grants.set(code, { identity, clientId, redirectUri });
       return code;
     },
@@ -38,7 +37,7 @@ export function createGrantStore() {
       if (grant.redirectUri !== redirectUri) {
         return { ok: false, description: 'redirect_uri does not match the one the code was issued for.' };
       }
-      const accessToken = `token-${String(++tokenCount).padStart(6, '0')}`;
+      const accessToken = randomId('token-', 43);
       grant.accessToken = accessToken;
       tokens.set(accessToken, grant.identity);
       return { ok: true, accessToken };

@@ -1,4 +1,5 @@
 import type { AddressObject, ParsedMail } from 'mailparser';
+import { randomId } from '../random-id.ts';
 
 /** One message as the fake captured it; attachment bytes are kept aside and served over HTTP. */
 export interface CapturedMail {
@@ -32,13 +33,12 @@ function addressText(addresses: AddressObject | AddressObject[] | undefined): st
 export function createMailbox(): Mailbox {
   const messages: CapturedMail[] = [];
   const contents = new Map<string, Buffer[]>();
-  let count = 0;
 
   return {
     messages,
     add(parsed, envelope) {
       const mail: CapturedMail = {
-        id: `mail-${String(++count).padStart(6, '0')}`,
+        id: randomId('mail-', 16),
         receivedAt: new Date().toISOString(),
         envelope,
         from: parsed.from?.text ?? '',

@@ -1,10 +1,11 @@
+import { randomId } from '../random-id.ts';
 import type { FakeStripeState } from './fake-stripe-state.ts';
 
 /** What the fake's routers share: its state, its clock, its id counters and its webhook sender. */
 export interface FakeStripeContext {
   state: FakeStripeState;
-  /** Counter-based ids such as `pi_test_000001`, so a failing test fails the same way twice. */
-  nextId(prefix: string): string;
+  /** A new object id with the real service's prefix (`cs_test_…`, `pi_…`, `ch_…`, `re_…`, `evt_…`, `req_…`). */
+  nextId(prefix: IdPrefix): string;
   nowMs(): number;
   nowSeconds(): number;
   paymentPageUrl(sessionId: string): string;
@@ -12,11 +13,14 @@ export interface FakeStripeContext {
   emit(type: string, object: unknown): void;
 }
 
-export function createIdSequence(): (prefix: string) => string {
-  const counts = new Map<string, number>();
-  return (prefix) => {
-    const count = (counts.get(prefix) ?? 0) + 1;
-    counts.set(prefix, count);
-    return `${prefix}_test_${String(count).padStart(6, '0')}`;
-  };
+export type IdPrefix = 'cs' | 'pi' | 'ch' | 're' | 'evt' | 'req';
+
+/**
+ * Ids as the real service mints them for practical purposes: random after the object's prefix (Checkout Sessions
+ * carry `cs_test_` in test mode), so they never repeat after a restart or between two stand-ins.
+ */
+export function mintProviderId(prefix: IdPrefix): string {
+  if (prefix === 'cs') return randomId('cs_test_', 58);
+  if (prefix === 'req') return randomId('req_', 14);
+  return randomId(`${prefix}_`, 24);
 }

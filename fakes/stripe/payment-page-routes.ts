@@ -16,7 +16,7 @@ const cardFormSchema = z.object({ card_number: typed, expiry: typed, cvc: typed,
  */
 function announceDecline(ctx: FakeStripeContext, record: CheckoutSessionRecord, message: string): void {
   ctx.emit('payment_intent.payment_failed', {
-    id: ctx.nextId('pi_declined'),
+    id: ctx.nextId('pi'),
     object: 'payment_intent',
     amount: record.session.amount_total,
     currency: record.session.currency,

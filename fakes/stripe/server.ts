@@ -2,14 +2,10 @@ import express from 'express';
 import { DEFAULT_FAKE_HOST, isLoopbackHost, serveHttpOnLoopback } from '../loopback-server.ts';
 import { createApiRouter } from './api-router.ts';
 import { createFakeControlRouter } from './fake-control-routes.ts';
-import { createIdSequence, type FakeStripeContext } from './fake-stripe-context.ts';
-import {
-  createFakeStripeState,
-  STRIPE_API_VERSION,
-  type FakeStripeState,
-  type StripeEvent,
-} from './fake-stripe-state.ts';
+import { mintProviderId, type FakeStripeContext, type IdPrefix } from './fake-stripe-context.ts';
+import { STRIPE_API_VERSION, type FakeStripeState, type StripeEvent } from './fake-stripe-state.ts';
 import { createPaymentPageRouter } from './payment-page-routes.ts';
+import { loadFakeStripeState, saveFakeStripeState } from './state-file.ts';
 import { createWebhookDispatcher } from './webhook-dispatcher.ts';
 
 export type { FakeStripeState } from './fake-stripe-state.ts';
@@ -23,6 +19,10 @@ export interface StripeFakeOptions {
   webhookSecret: string;
   /** Milliseconds since the epoch; defaults to Date.now. Drives `created` fields, card expiry and signatures. */
   now?: () => number;
+  /** Keeps the state in this JSON file across restarts (loaded at start, written after every change). */
+  stateFile?: string;
+  /** Mints object ids; random with the real prefixes unless a test needs to imitate a faulty provider. */
+  mintId?: (prefix: IdPrefix) => string;
 }
 
 /**
@@ -38,8 +38,18 @@ export async function startStripeFake(
   }
   const now = opts.now ?? Date.now;
   const nowSeconds = () => Math.floor(now() / 1000);
-  const nextId = createIdSequence();
-  const state = createFakeStripeState();
+  const nextId = opts.mintId ?? mintProviderId;
+  const state = loadFakeStripeState(opts.stateFile);
+  let saveQueued = false;
+  /** Writes the state file once after the current burst of changes (a request, its events, their deliveries). */
+  const queueSave = () => {
+    if (!opts.stateFile || saveQueued) return;
+    saveQueued = true;
+    setImmediate(() => {
+      saveQueued = false;
+      saveFakeStripeState(opts.stateFile!, state);
+    });
+  };
   const webhooks = createWebhookDispatcher({
     webhookUrl: opts.webhookUrl,
     webhookSecret: opts.webhookSecret,
@@ -68,7 +78,8 @@ export async function startStripeFake(
         type,
       };
       state.events.push(event);
-      void webhooks.deliver(event);
+      queueSave();
+      void webhooks.deliver(event).then(queueSave);
     },
   };
 
@@ -76,6 +87,10 @@ export async function startStripeFake(
   app.disable('x-powered-by');
   // The SDK sends `expand[0]=payment_intent` in GET query strings; the extended parser turns that into an array.
   app.set('query parser', 'extended');
+  app.use((req, res, next) => {
+    if (req.method !== 'GET') res.on('finish', queueSave);
+    next();
+  });
   app.use('/v1', createApiRouter(ctx, opts.apiKey));
   app.use('/pay', createPaymentPageRouter(ctx));
   app.use('/_fake', createFakeControlRouter(ctx, webhooks.deliver));
@@ -88,6 +103,7 @@ export async function startStripeFake(
     async close() {
       await webhooks.close();
       await server.close();
+      if (opts.stateFile) saveFakeStripeState(opts.stateFile, state);
     },
   };
 }

@@ -23,6 +23,20 @@ function fromUpload(error: unknown): HttpError | undefined {
   return new HttpError('invalid', `The upload was not accepted: ${error.message}.`);
 }
 
+// MariaDB's ER_DUP_ENTRY on a unique key that holds an id the payment service minted.
+const DUPLICATE_KEY = 1062;
+const providerIdKey = /payments_(checkout_session_id|payment_intent_id)_unique/;
+
+/** The payment service handed out an id another order already has: the provider's fault, told as a sentence. */
+function fromProviderIdClash(error: unknown): HttpError | undefined {
+  const e = error as { errno?: number; sqlMessage?: string };
+  if (e?.errno !== DUPLICATE_KEY || !providerIdKey.test(e.sqlMessage ?? '')) return undefined;
+  return new HttpError(
+    'conflict',
+    'The payment service gave this payment a reference that another order already has, so the payment page could not be opened. Nothing was charged: try paying again from your order page, and tell the shop if it happens again.',
+  );
+}
+
 export const notFoundHandler: RequestHandler = (req) => {
   throw new HttpError('not-found', `There is nothing at ${req.method} ${req.path}.`);
 };
@@ -31,7 +45,9 @@ export const notFoundHandler: RequestHandler = (req) => {
 export function createErrorHandler(log: (line: string) => void): ErrorRequestHandler {
   return (error, req, res, next) => {
     if (res.headersSent) return next(error);
-    const known = error instanceof HttpError ? error : (fromBodyParser(error) ?? fromUpload(error));
+    const clash = fromProviderIdClash(error);
+    if (clash) log(`[${res.locals.requestId ?? '-'}] ${req.method} ${req.originalUrl}: ${(error as Error).message}`);
+    const known = error instanceof HttpError ? error : (fromBodyParser(error) ?? fromUpload(error) ?? clash);
     if (known) {
       res.status(statusByKind[known.kind]).json({
         error: { kind: known.kind, message: known.message, ...(known.fields ? { fields: known.fields } : {}) },

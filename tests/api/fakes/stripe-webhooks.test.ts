@@ -125,8 +125,10 @@ describe('webhook delivery', () => {
     const receiver = await startReceiver();
     const fake = await startWithPaidSession(receiver.url);
     const state = await (await fetch(`${fake.url}/_fake/state`)).json();
-    expect(Object.keys(state.checkoutSessions)).toEqual(['cs_test_000001']);
-    expect(state.paymentIntents.pi_test_000001.status).toBe('requires_capture');
+    const [sessionId] = Object.keys(state.checkoutSessions);
+    expect(Object.keys(state.checkoutSessions)).toEqual([sessionId]);
+    const intentId = state.checkoutSessions[sessionId].session.payment_intent;
+    expect(state.paymentIntents[intentId].status).toBe('requires_capture');
     expect(state.events.map((event: { type: string }) => event.type)).toEqual([
       'checkout.session.completed',
       'payment_intent.amount_capturable_updated',

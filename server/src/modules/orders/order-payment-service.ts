@@ -44,6 +44,15 @@ type Outcome = { result: Result<OrderActionResponse>; mail?: LoggedMail };
 const isStripeError = (error: unknown): error is Stripe.errors.StripeError =>
   error instanceof Stripe.errors.StripeError;
 
+/** The payment service answers 404 `resource_missing` for an id it does not know (another account, or lost). */
+const isUnknownToProvider = (error: unknown): boolean => isStripeError(error) && error.code === 'resource_missing';
+
+const unknownHold = (paymentIntentId: string, doing: string) =>
+  failure(
+    'conflict',
+    `The payment service has no record of this order's card hold (${paymentIntentId}), so it could not be ${doing}. Nothing was charged; ask the customer to pay again from their order page.`,
+  );
+
 export function createOrderPaymentService(deps: OrderPaymentDeps) {
   const { db, stripe } = deps;
 
@@ -109,6 +118,7 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
         );
         capturedCents = intent.amount_received;
       } catch (error) {
+        if (isUnknownToProvider(error)) return { result: unknownHold(payment.paymentIntentId, 'charged') };
         if (!isStripeError(error) || error.type !== 'StripeInvalidRequestError') throw error;
         const intent = await stripe.paymentIntents.retrieve(payment.paymentIntentId);
         if (intent.status === 'canceled') return markLapsed(trx, order, payment.id, actor, now);
@@ -154,6 +164,7 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
             { idempotencyKey: `cancel-order-${order.id}-${payment.id}` },
           );
         } catch (error) {
+          if (isUnknownToProvider(error)) return { result: unknownHold(payment.paymentIntentId, 'released') };
           // A hold that already lapsed has nothing left to release; anything else is not ours to ignore.
           if (
             !isStripeError(error) ||

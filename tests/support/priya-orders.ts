@@ -1,0 +1,36 @@
+/** Priya (a demo customer) ordering her saved designs: the steps several API tests share. */
+import { storedQuoteResponse } from '../../server/src/contracts/stored-quotes.ts';
+import { savedDesignResponse } from '../../server/src/contracts/saved-designs.ts';
+import type { ApiAgent } from './api-harness.ts';
+
+export const priyaShipTo = {
+  name: 'Priya Castellanos',
+  line1: '48 Larkspur Lane',
+  city: 'Fernhollow',
+  region: 'OR',
+  postalCode: '97000',
+  countryCode: 'US',
+};
+
+/** Prices one of the signed-in customer's saved designs as it is and stores the quote. */
+export async function quoteSavedDesign(agent: ApiAgent, designId = 1) {
+  const { design } = savedDesignResponse.parse((await agent.get(`/api/designs/${designId}`).expect(200)).body);
+  const body = {
+    garmentId: design.garmentId,
+    sizeId: design.sizeId,
+    colourId: design.colourId,
+    quantity: 1,
+    isRush: false,
+    document: design.document,
+    designId,
+  };
+  return storedQuoteResponse.parse((await agent.post('/api/quotes').send(body).expect(201)).body);
+}
+
+/** Pays on the payment stand-in's hosted page with a test card; resolves with the page's HTTP status. */
+export async function payWithTestCard(checkoutUrl: string, cardNumber = '4242 4242 4242 4242'): Promise<number> {
+  const form = new URLSearchParams({ card_number: cardNumber, expiry: '12/30', cvc: '123', name: 'Priya Castellanos' });
+  const response = await fetch(checkoutUrl, { method: 'POST', body: form, redirect: 'manual' });
+  await response.arrayBuffer();
+  return response.status;
+}
