@@ -216,6 +216,11 @@ export function recreateLocalDatabase(name: string, settings = localDatabaseSett
   runSql(settings, `DROP DATABASE IF EXISTS \`${name}\`;\n${grantSql(settings)}`);
 }
 
+/** Creates one more database on the local instance (if missing) and lets the application user use it. */
+export function ensureLocalDatabase(name: string, settings = localDatabaseSettings()): void {
+  runSql({ ...settings, databases: [name] }, grantSql({ ...settings, databases: [name] }));
+}
+
 /** Drops one scratch database of the local instance (the order-board benchmark's). */
 export function dropLocalDatabase(name: string, settings = localDatabaseSettings()): void {
   runSql(settings, `DROP DATABASE IF EXISTS \`${name}\`;`);
