@@ -1,3 +1,5 @@
+import { createHealthRouter } from './modules/health/routes.ts';
+import { createHealthService } from './modules/health/health-service.ts';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { existsSync } from 'node:fs';
@@ -65,6 +67,8 @@ export interface AppDeps {
   mailer: Mailer;
   now: () => Date;
   log: (line: string) => void;
+  /** True once the process has begun to shut down: readiness then says no, so a proxy stops sending work. */
+  isDraining?: () => boolean;
 }
 
 function securityHeaders(config: AppConfig) {
@@ -137,13 +141,17 @@ export function createApp(deps: AppDeps): Express {
 
   app.use('/api', requireSameOrigin(appOrigin));
   app.use('/api', express.json({ limit: '1mb' }));
+  // Health checks come before the session layer: a proxy polling them needs no session.
+  app.use(
+    '/api/health',
+    createHealthRouter({ health: createHealthService({ db, isDraining: deps.isDraining ?? (() => false) }) }),
+  );
   app.use('/api', deps.sessions.middleware, signIn.session());
   app.use('/api', (_req, res, next) => {
     res.set('Cache-Control', 'no-store');
     next();
   });
 
-  app.get('/api/health', (_req, res) => res.json({ ok: true }));
   app.use('/api/auth', createAuthRouter({ signIn, log: deps.log, claimArtwork: artwork.claim }));
   app.use('/api/me', createMeRouter());
   app.use('/api/catalogue', createCatalogueRouter({ catalogue: createCatalogueService({ db }) }));

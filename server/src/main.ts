@@ -13,7 +13,17 @@ const config = loadConfig();
 const db = openDatabase(config.database);
 const sessions = await createSessionLayer(config);
 const mailer = createMailer(config);
-const app = createApp({ config, db, sessions, stripe: createStripeClient(config), mailer, now: () => new Date(), log });
+let isClosing = false;
+const app = createApp({
+  config,
+  db,
+  sessions,
+  stripe: createStripeClient(config),
+  mailer,
+  now: () => new Date(),
+  log,
+  isDraining: () => isClosing,
+});
 
 const server: Server = app.listen(config.port, config.host, (error?: Error) => {
   if (error) {
@@ -23,7 +33,7 @@ const server: Server = app.listen(config.port, config.host, (error?: Error) => {
   console.log(`Hoopwright API listening on http://${config.host}:${config.port}`);
 });
 
-let isClosing = false;
+/** Stops taking connections, lets the requests in flight finish, then closes the database. */
 async function shutdown(signal: string): Promise<void> {
   if (isClosing) return;
   isClosing = true;
