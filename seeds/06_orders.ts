@@ -79,4 +79,8 @@ export async function seed(knex: Knex): Promise<void> {
   await knex('proofs').insert(rows.proofs);
   await knex('payments').insert(rows.payments);
   await knex('email_log').insert(rows.emails);
+  // The demo's orders carry their own numbers; the shop's next order continues after the highest.
+  await knex.raw('ALTER SEQUENCE order_numbers RESTART WITH ?', [
+    Math.max(...orders.map((order) => Number(order.number.slice(3)))) + 1,
+  ]);
 }

@@ -3,7 +3,6 @@ import type { OrderStatus, PaymentStatus } from '../../contracts/order-status.ts
 import type { ShipTo } from '../../contracts/orders.ts';
 
 /** The first order number a new shop gives, and the letters before it (the shop's initials). */
-const FIRST_ORDER_NUMBER = 1001;
 const ORDER_NUMBER_PREFIX = 'WB';
 
 export type PaymentRowStatus =
@@ -57,10 +56,10 @@ const toPayment = (row: Record<string, unknown>): PaymentRecord => ({
 const orderColumns = ['id', 'number', 'customer_id', 'status', 'payment_status', 'total_cents', 'currency'];
 
 /** The next order number, WB-1001 onwards; the caller's transaction holds the lock until its order is in. */
-export async function nextOrderNumber(trx: Db): Promise<string> {
-  const [rows] = await trx.raw('SELECT MAX(CAST(SUBSTRING(number, 4) AS UNSIGNED)) AS n FROM orders FOR UPDATE');
-  const highest = Number((rows as { n: number | null }[])[0]?.n ?? 0);
-  return `${ORDER_NUMBER_PREFIX}-${Math.max(highest + 1, FIRST_ORDER_NUMBER)}`;
+/** The next order number from the `order_numbers` sequence (no lock; a rolled-back checkout leaves a gap). */
+export async function nextOrderNumber(db: Db): Promise<string> {
+  const [rows] = await db.raw('SELECT NEXTVAL(order_numbers) AS n');
+  return `${ORDER_NUMBER_PREFIX}-${Number((rows as { n: number | string }[])[0]!.n)}`;
 }
 
 export interface OrderWrite {
