@@ -25,13 +25,17 @@ async function readBoundedMessage(stream: Readable, maxBytes: number): Promise<B
  * A local SMTP server that captures every message (nodemailer with `host`, `port`, `secure: false`,
  * `ignoreTLS: true`), plus an HTTP endpoint to read them back. No authentication and no TLS: loopback only.
  */
-export async function startSmtpFake(opts: {
-  smtpPort: number;
-  httpPort: number;
-  host?: string;
-}): Promise<{ smtpUrl: string; httpUrl: string; messages: CapturedMail[]; close(): Promise<void> }> {
+export async function startSmtpFake(opts: { smtpPort: number; httpPort: number; host?: string }): Promise<{
+  smtpUrl: string;
+  httpUrl: string;
+  messages: CapturedMail[];
+  /** Answers the next `count` messages with 451 (try again later), as a busy provider does. */
+  refuseNext(count: number): void;
+  close(): Promise<void>;
+}> {
   const host = opts.host ?? DEFAULT_FAKE_HOST;
   const mailbox = createMailbox();
+  let toRefuse = 0;
   const smtp = new SMTPServer({
     secure: false,
     authOptional: true,
@@ -45,6 +49,11 @@ export async function startSmtpFake(opts: {
         .then(async (raw) => {
           if (!raw) {
             callback(Object.assign(new Error('Message exceeds fixed maximum message size'), { responseCode: 552 }));
+            return;
+          }
+          if (toRefuse > 0) {
+            toRefuse -= 1;
+            callback(Object.assign(new Error('Mailbox busy, try again later'), { responseCode: 451 }));
             return;
           }
           const { mailFrom, rcptTo } = session.envelope;
@@ -71,6 +80,9 @@ export async function startSmtpFake(opts: {
     smtpUrl: originFor('smtp', host, smtpPort),
     httpUrl: http.url,
     messages: mailbox.messages,
+    refuseNext(count) {
+      toRefuse = count;
+    },
     async close() {
       await Promise.all([http.close(), closeSmtp()]);
     },

@@ -103,6 +103,7 @@ export function replayOrder(context: OrderContext): OrderHistory {
       status: failure ? 'failed' : 'sent',
       provider_message_id: failure ? null : `<seed-${seq(id)}@wrenandbobbin.test>`,
       error: failure ?? null,
+      attempts: 1,
       ...seedMailBodies(template, order.number),
       created_at: stamp,
       updated_at: stamp,

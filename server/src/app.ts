@@ -1,3 +1,6 @@
+import { createJobRunner } from './modules/jobs/job-runner.ts';
+import { SEND_MAIL_JOB, sendMailJobHandler } from './modules/mail/order-mail.ts';
+import { purgeExpiredSessions } from './modules/people/session-sweep-repo.ts';
 import { createHealthRouter } from './modules/health/routes.ts';
 import { createHealthService } from './modules/health/health-service.ts';
 import express, { type Express } from 'express';
@@ -198,7 +201,7 @@ export function createApp(deps: AppDeps): Express {
     '/api/admin/users',
     createAdminUsersRouter({ people: createPeopleService({ db, ownerEmails: config.ownerEmails, now }) }),
   );
-  app.use('/api/admin/outbox', createAdminOutboxRouter({ outbox: createOutboxService({ db }) }));
+  app.use('/api/admin/outbox', createAdminOutboxRouter({ outbox: createOutboxService({ db, mailer, now }) }));
   app.use('/api', notFoundHandler);
 
   const staticRoot = resolve(config.staticDir);
@@ -208,4 +211,29 @@ export function createApp(deps: AppDeps): Express {
   app.use(notFoundHandler);
   app.use(createErrorHandler(deps.log));
   return app;
+}
+
+/**
+ * The job worker: sends queued e-mails (retrying with a growing delay) and runs the scheduled housekeeping, each task
+ * once per period across every instance. `main.ts` runs one in the API process unless WORKER_IN_PROCESS=false;
+ * `worker.ts` runs one on its own.
+ */
+export function createJobWorker(deps: Pick<AppDeps, 'db' | 'mailer' | 'now' | 'log'> & { workerId?: string }) {
+  const { db, mailer, now, log } = deps;
+  return createJobRunner({
+    db,
+    now,
+    log,
+    workerId: deps.workerId,
+    handlers: { [SEND_MAIL_JOB]: sendMailJobHandler({ db, mailer, now, log }) },
+    schedules: [
+      {
+        name: 'purge-expired-sessions',
+        periodMs: 15 * 60_000,
+        run: async (at) => {
+          await purgeExpiredSessions(db, at);
+        },
+      },
+    ],
+  });
 }

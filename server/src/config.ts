@@ -19,6 +19,11 @@ const flag = z
   .default('false')
   .transform((value) => value === 'true' || value === '1');
 
+const flagOn = z
+  .enum(['true', 'false', '1', '0', ''])
+  .default('true')
+  .transform((value) => value !== 'false' && value !== '0');
+
 const databaseSchema = z.object({
   DATABASE_URL: z.url().optional(),
   DB_HOST: z.string().default('127.0.0.1'),
@@ -51,6 +56,7 @@ const appSchema = databaseSchema.extend({
     .int()
     .min(1024)
     .default(5 * 1024 * 1024),
+  WORKER_IN_PROCESS: flagOn,
 });
 
 export interface DatabaseConfig {
@@ -76,6 +82,8 @@ export interface AppConfig {
   stripe: { secretKey: string; webhookSecret: string; apiUrl?: string };
   mail: { smtpUrl: string; from: string };
   uploadMaxBytes: number;
+  /** Whether the API process also runs a job worker (the demo, one-server shops); false when workers run apart. */
+  isWorkerInProcess: boolean;
 }
 
 function fail(error: z.ZodError): never {
@@ -135,5 +143,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Readonly<AppCo
     stripe: { secretKey: e.STRIPE_SECRET_KEY, webhookSecret: e.STRIPE_WEBHOOK_SECRET, apiUrl: e.STRIPE_API_URL },
     mail: { smtpUrl: e.SMTP_URL, from: e.MAIL_FROM },
     uploadMaxBytes: e.UPLOAD_MAX_BYTES,
+    isWorkerInProcess: e.WORKER_IN_PROCESS,
   });
 }

@@ -1,11 +1,14 @@
-/** Reads the configuration, opens the database, listens, and shuts down cleanly on SIGINT/SIGTERM. */
+/**
+ * Reads the configuration, opens the database, listens (with a job worker in the same process unless
+ * WORKER_IN_PROCESS=false), and shuts down cleanly on SIGINT/SIGTERM: requests and the job in hand finish first.
+ */
 import type { Server } from 'node:http';
 import { loadConfig } from './config.ts';
 import { openDatabase } from './db/knex.ts';
 import { createSessionLayer } from './auth/session.ts';
 import { createStripeClient } from './integrations/payment-gateway.ts';
 import { createMailer } from './integrations/mailer.ts';
-import { createApp } from './app.ts';
+import { createApp, createJobWorker } from './app.ts';
 
 const log = (line: string) => console.error(`${new Date().toISOString()} ${line}`);
 
@@ -25,6 +28,9 @@ const app = createApp({
   isDraining: () => isClosing,
 });
 
+const worker = config.isWorkerInProcess ? createJobWorker({ db, mailer, now: () => new Date(), log }) : undefined;
+worker?.start();
+
 const server: Server = app.listen(config.port, config.host, (error?: Error) => {
   if (error) {
     log(`Could not listen on ${config.host}:${config.port}: ${error.message}`);
@@ -39,7 +45,7 @@ async function shutdown(signal: string): Promise<void> {
   isClosing = true;
   log(`${signal} received, closing.`);
   server.closeIdleConnections();
-  await new Promise<void>((resolve) => server.close(() => resolve()));
+  await Promise.all([new Promise<void>((resolve) => server.close(() => resolve())), worker?.stop()]);
   await sessions.close();
   mailer.close();
   await db.destroy();

@@ -24,8 +24,8 @@ export async function createSessionLayer(config: AppConfig): Promise<SessionLaye
     database: config.database.database,
     createDatabaseTable: false,
     expiration: 14 * dayMs,
-    clearExpired: true,
-    checkExpirationInterval: 15 * 60_000,
+    // Expired sessions are swept by the job worker's scheduled task, once per period across all instances.
+    clearExpired: false,
     endConnectionOnClose: true,
     connectionLimit: 3,
   } as never);

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 
-export const mailStatus = z.enum(['queued', 'sent', 'failed']);
+/** queued: not tried yet; retrying: an attempt failed and another is due; failed: no more attempts. */
+export const mailStatus = z.enum(['queued', 'retrying', 'sent', 'failed']);
 export type MailStatus = z.infer<typeof mailStatus>;
 
 export const outboxPageSize = 20;
@@ -29,6 +30,9 @@ export const outboxEntry = z.object({
   template: z.string(),
   status: mailStatus,
   error: z.string().nullable(),
+  /** Attempts made so far, and when the next is due while it is retrying. */
+  attempts: z.number().int(),
+  nextAttemptAt: z.string().nullable(),
   orderNumber: z.string().nullable(),
   createdAt: z.string(),
 });

@@ -19,5 +19,11 @@ export function createAdminOutboxRouter(deps: { outbox: OutboxService }): Router
       sendResult(res, await deps.outbox.message(params.id));
     }),
   );
+  router.post(
+    '/:id/resend',
+    validated({ params: outboxIdParams }, async ({ params }, _req, res) => {
+      sendResult(res, await deps.outbox.resend(params.id));
+    }),
+  );
   return router;
 }

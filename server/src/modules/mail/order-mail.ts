@@ -1,35 +1,71 @@
 import type { Db } from '../../db/knex.ts';
 import type { Mailer, OutgoingMail } from '../../integrations/mailer.ts';
-import { insertQueuedMail, recordMailOutcome } from './outbox-repo.ts';
+import { enqueueJob, retryDelayMs, runJobNow, type JobHandler } from '../jobs/job-runner.ts';
+import { insertQueuedMail, readMailToSend, recordMailOutcome } from './outbox-repo.ts';
 
-export interface LoggedMail extends OutgoingMail {
+export interface LoggedMail extends Omit<OutgoingMail, 'attachments'> {
   /** Names the message for the outbox: order_placed, proof_ready, proof_approved, order_shipped… */
   template: string;
   orderId: number | null;
 }
 
+type MailDeps = { db: Db; mailer: Mailer; now: () => Date; log?: (line: string) => void };
+
+/** The job kind that sends one logged message. */
+export const SEND_MAIL_JOB = 'send-mail';
+
 /**
- * Sends one message and keeps it in email_log with its text, so the studio's outbox shows what a customer was told.
- * Call it after the transaction that caused it commits: a failed send is logged as failed and never undoes the
- * order's move. Returns the log row's id.
+ * Sends one logged message (job payload `{ mailId }`): the outbox row says sent, or why not and when it is tried
+ * again; a failure is thrown so the job runner retries it with a growing delay, up to the job's last attempt.
+ */
+export function sendMailJobHandler(deps: MailDeps): JobHandler {
+  return async (job) => {
+    const { mailId } = job.payload as { mailId: number };
+    const mail = await readMailToSend(deps.db, mailId);
+    if (!mail || mail.status === 'sent') return;
+    try {
+      const { messageId } = await deps.mailer.send({
+        to: mail.to,
+        subject: mail.subject,
+        text: mail.text,
+        ...(mail.html ? { html: mail.html } : {}),
+      });
+      await recordMailOutcome(deps.db, mailId, { sent: true, messageId, attempt: job.attempt }, deps.now());
+    } catch (error) {
+      const now = deps.now();
+      const isLast = job.attempt >= job.maxAttempts;
+      const nextAttemptAt = isLast ? null : new Date(now.getTime() + retryDelayMs(job.attempt));
+      const reason = String((error as Error)?.message ?? error);
+      await recordMailOutcome(
+        deps.db,
+        mailId,
+        { sent: false, error: reason, attempt: job.attempt, nextAttemptAt },
+        now,
+      );
+      throw error;
+    }
+  };
+}
+
+/**
+ * Keeps one message in email_log, with its text, so the studio's outbox shows what a customer was told, and queues
+ * the job that sends it (both in one transaction, or in `db` when that is the caller's). Unless `sendNow` is false
+ * the first attempt is made at once; a failed one is retried by the worker and never undoes the order's move.
+ * Returns the log row's id and whether it has gone.
  */
 export async function sendLoggedMail(
-  deps: { db: Db; mailer: Mailer; now: () => Date },
+  deps: MailDeps,
   mail: LoggedMail,
+  options: { sendNow?: boolean } = {},
 ): Promise<{ id: number; sent: boolean }> {
   const { template, orderId, ...message } = mail;
-  const id = await insertQueuedMail(deps.db, { ...message, template, orderId, html: message.html ?? null }, deps.now());
-  try {
-    const { messageId } = await deps.mailer.send(message);
-    await recordMailOutcome(deps.db, id, { sent: true, messageId }, deps.now());
-    return { id, sent: true };
-  } catch (error) {
-    await recordMailOutcome(
-      deps.db,
-      id,
-      { sent: false, error: String((error as Error)?.message ?? error) },
-      deps.now(),
-    );
-    return { id, sent: false };
-  }
+  const now = deps.now();
+  const { id, jobId } = await deps.db.transaction(async (trx) => {
+    const id = await insertQueuedMail(trx, { ...message, template, orderId, html: message.html ?? null }, now);
+    const jobId = await enqueueJob(trx, { kind: SEND_MAIL_JOB, payload: { mailId: id } }, now);
+    return { id, jobId };
+  });
+  if (options.sendNow === false) return { id, sent: false };
+  const sent = await runJobNow({ ...deps, log: deps.log ?? (() => {}) }, jobId, sendMailJobHandler(deps));
+  return { id, sent };
 }

@@ -9,6 +9,8 @@ const entryColumns = [
   'm.template',
   'm.status',
   'm.error',
+  'm.attempts',
+  'm.next_attempt_at',
   'm.created_at',
   'o.number as order_number',
 ];
@@ -20,6 +22,8 @@ const toEntry = (row: Record<string, any>): OutboxEntry => ({
   template: row.template,
   status: row.status,
   error: row.error,
+  attempts: row.attempts,
+  nextAttemptAt: row.next_attempt_at ? iso(row.next_attempt_at) : null,
   orderNumber: row.order_number ?? null,
   createdAt: iso(row.created_at),
 });
@@ -92,18 +96,58 @@ export async function insertQueuedMail(db: Db, mail: MailLogEntry, at: Date): Pr
   return id!;
 }
 
-/** Records how sending went: the provider's message id, or the reason it failed. */
+/** Records how an attempt went: the provider's message id, or the reason and whether it will be tried again. */
 export async function recordMailOutcome(
   db: Db,
   id: number,
-  outcome: { sent: true; messageId: string } | { sent: false; error: string },
+  outcome:
+    | { sent: true; messageId: string; attempt: number }
+    | { sent: false; error: string; attempt: number; nextAttemptAt: Date | null },
   at: Date,
 ): Promise<void> {
   await db('email_log')
     .where({ id })
     .update(
       outcome.sent
-        ? { status: 'sent', provider_message_id: outcome.messageId, updated_at: at }
-        : { status: 'failed', error: outcome.error.slice(0, 2000), updated_at: at },
+        ? {
+            status: 'sent',
+            provider_message_id: outcome.messageId,
+            error: null,
+            attempts: outcome.attempt,
+            next_attempt_at: null,
+            updated_at: at,
+          }
+        : {
+            status: outcome.nextAttemptAt ? 'retrying' : 'failed',
+            error: outcome.error.slice(0, 2000),
+            attempts: outcome.attempt,
+            next_attempt_at: outcome.nextAttemptAt,
+            updated_at: at,
+          },
     );
+}
+
+/** The message as logged, to send (or send again). */
+export async function readMailToSend(
+  db: Db,
+  id: number,
+): Promise<{ to: string; subject: string; text: string; html: string | null; status: string } | undefined> {
+  const row = await db('email_log').where({ id }).first('to_email', 'subject', 'text_body', 'html_body', 'status');
+  return (
+    row && {
+      to: row.to_email,
+      subject: row.subject,
+      text: row.text_body ?? '',
+      html: row.html_body,
+      status: row.status,
+    }
+  );
+}
+
+/** Puts a failed message back in the queue, to be tried again from its first attempt. */
+export async function requeueFailedMail(db: Db, id: number, at: Date): Promise<boolean> {
+  const changed = await db('email_log')
+    .where({ id, status: 'failed' })
+    .update({ status: 'queued', error: null, attempts: 0, next_attempt_at: null, updated_at: at });
+  return changed === 1;
 }

@@ -40,6 +40,11 @@ export function OutboxList({
           {message.status === 'failed' && message.error && (
             <p className="text-sm text-madder-700">Not delivered: {message.error}</p>
           )}
+          {message.status === 'retrying' && message.nextAttemptAt && (
+            <p className="text-sm text-walnut-700">
+              Attempt {message.attempts} failed; trying again at {timeFormat.format(new Date(message.nextAttemptAt))}.
+            </p>
+          )}
         </li>
       ))}
     </ul>

@@ -1,6 +1,8 @@
 import { useState } from 'react';
 import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
+import { Button } from '@ui/components/button.tsx';
 import { useOutboxMessage } from '../api/get-outbox-message.ts';
+import { useResendMessage } from '../api/resend-message.ts';
 import { MailStatusBadge } from './mail-status-badge.tsx';
 
 const timeFormat = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
@@ -11,6 +13,7 @@ const timeFormat = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeS
  */
 export function OutboxMessage({ id }: { id: number }) {
   const message = useOutboxMessage(id);
+  const resend = useResendMessage();
   const [view, setView] = useState<'text' | 'html'>('text');
   if (message.isPending) return <Loading label="Opening the message…" />;
   if (message.isError) return <ErrorNotice message={message.error.message} onRetry={() => void message.refetch()} />;
@@ -28,10 +31,25 @@ export function OutboxMessage({ id }: { id: number }) {
           {m.orderNumber && <span>· order {m.orderNumber}</span>}
           <span>· {timeFormat.format(new Date(m.createdAt))}</span>
         </div>
-        {m.status === 'failed' && m.error && (
-          <p role="note" className="rounded-lg bg-madder-50 p-2.5 text-sm text-madder-700">
-            This one was not delivered: {m.error}
+        {m.status === 'retrying' && (
+          <p role="note" className="rounded-lg bg-saffron-100 p-2.5 text-sm text-walnut-900">
+            Attempt {m.attempts} did not go through{m.error ? ` (${m.error})` : ''}.{' '}
+            {m.nextAttemptAt ? `The next try is at ${timeFormat.format(new Date(m.nextAttemptAt))}.` : ''}
           </p>
+        )}
+        {m.status === 'failed' && (
+          <div role="note" className="grid gap-2 rounded-lg bg-madder-50 p-2.5 text-sm text-madder-700">
+            <p>
+              This one was not delivered after {m.attempts} {m.attempts === 1 ? 'attempt' : 'attempts'}
+              {m.error ? `: ${m.error}` : '.'}
+            </p>
+            <div className="flex flex-wrap items-center gap-3">
+              <Button tone="quiet" disabled={resend.isPending} onClick={() => resend.mutate(m.id)}>
+                {resend.isPending ? 'Sending…' : 'Send it again'}
+              </Button>
+              {resend.isError && <span role="alert">{resend.error.message}</span>}
+            </div>
+          </div>
         )}
       </header>
       {hasHtml && (
