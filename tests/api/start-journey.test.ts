@@ -7,9 +7,9 @@ import { join } from 'node:path';
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
 import { checkoutStartedResponse } from '../../server/src/contracts/orders.ts';
-import { demoPeople } from '../../seeds/data/people.ts';
 import { projectRoot } from '../../scripts/db-lifecycle.ts';
 import { payWithTestCard, priyaShipTo, quoteSavedDesign } from '../support/priya-orders.ts';
+import { signInOverHttp } from '../support/api-calls.ts';
 
 const offset = Number(process.env.HW_PORT_OFFSET ?? 0) + 300;
 const appOrigin = `http://127.0.0.1:${3000 + offset}`;
@@ -45,13 +45,7 @@ async function stopDemoShop(child: ChildProcess): Promise<void> {
 /** Signs Priya in on the running shop, prices her saved design 1 and orders it; resolves with the payment page. */
 async function orderAndPay(): Promise<{ number: string; paidStatus: number }> {
   const agent = request.agent(appOrigin).set('Origin', appOrigin);
-  const start = await agent.get('/api/auth/google').expect(302);
-  const authorize = new URL(start.headers.location!);
-  const priya = demoPeople.find((person) => person.email === 'priya@example.test')!;
-  const form = new URLSearchParams({ ...Object.fromEntries(authorize.searchParams), identity: priya.sub });
-  const decision = await fetch(`${signInOrigin}/authorize`, { method: 'POST', body: form, redirect: 'manual' });
-  const callback = new URL(decision.headers.get('location')!);
-  await agent.get(`${callback.pathname}${callback.search}`).expect(302);
+  await signInOverHttp(agent, signInOrigin, 'priya@example.test');
 
   const quote = await quoteSavedDesign(agent);
   const placed = await agent.post('/api/orders').send({
