@@ -2,6 +2,7 @@
  * The only reader of process.env. Every setting is parsed once with zod at start-up; a missing or malformed value
  * stops the process with a list of what to fix. `.env.example` and the README document each variable.
  */
+import { availableParallelism } from 'node:os';
 import { z } from 'zod';
 
 const port = z.coerce.number().int().min(0).max(65_535);
@@ -51,6 +52,14 @@ const appSchema = databaseSchema.extend({
     .int()
     .min(1024)
     .default(5 * 1024 * 1024),
+  // One thread fewer than the cores, so the request thread keeps one to itself.
+  HEAVY_WORK_THREADS: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(64)
+    .default(Math.max(1, availableParallelism() - 1)),
+  HEAVY_JOB_TIME_LIMIT_MS: z.coerce.number().int().min(1).max(600_000).default(20_000),
 });
 
 export interface DatabaseConfig {
@@ -76,6 +85,8 @@ export interface AppConfig {
   stripe: { secretKey: string; webhookSecret: string; apiUrl?: string };
   mail: { smtpUrl: string; from: string };
   uploadMaxBytes: number;
+  /** The worker threads for uploads, SVG measuring, proofs and PDFs, and how long one job may take. */
+  heavyWork: { threads: number; timeLimitMs: number };
 }
 
 function fail(error: z.ZodError): never {
@@ -135,5 +146,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Readonly<AppCo
     stripe: { secretKey: e.STRIPE_SECRET_KEY, webhookSecret: e.STRIPE_WEBHOOK_SECRET, apiUrl: e.STRIPE_API_URL },
     mail: { smtpUrl: e.SMTP_URL, from: e.MAIL_FROM },
     uploadMaxBytes: e.UPLOAD_MAX_BYTES,
+    heavyWork: { threads: e.HEAVY_WORK_THREADS, timeLimitMs: e.HEAVY_JOB_TIME_LIMIT_MS },
   });
 }

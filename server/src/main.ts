@@ -5,6 +5,7 @@ import { openDatabase } from './db/knex.ts';
 import { createSessionLayer } from './auth/session.ts';
 import { createStripeClient } from './integrations/payment-gateway.ts';
 import { createMailer } from './integrations/mailer.ts';
+import { createHeavyWork } from './integrations/heavy-work.ts';
 import { createApp } from './app.ts';
 
 const log = (line: string) => console.error(`${new Date().toISOString()} ${line}`);
@@ -13,7 +14,17 @@ const config = loadConfig();
 const db = openDatabase(config.database);
 const sessions = await createSessionLayer(config);
 const mailer = createMailer(config);
-const app = createApp({ config, db, sessions, stripe: createStripeClient(config), mailer, now: () => new Date(), log });
+const heavyWork = createHeavyWork(config.heavyWork);
+const app = createApp({
+  config,
+  db,
+  sessions,
+  stripe: createStripeClient(config),
+  mailer,
+  heavyWork,
+  now: () => new Date(),
+  log,
+});
 
 const server: Server = app.listen(config.port, config.host, (error?: Error) => {
   if (error) {
@@ -32,6 +43,7 @@ async function shutdown(signal: string): Promise<void> {
   await new Promise<void>((resolve) => server.close(() => resolve()));
   await sessions.close();
   mailer.close();
+  await heavyWork.close();
   await db.destroy();
   process.exit(0);
 }
