@@ -39,12 +39,19 @@ export function createHeavyWork(settings: HeavyWorkSettings): HeavyWork {
     // Threads keep what they loaded (jsdom, jimp, fonts) between jobs.
     idleTimeout: 60_000,
   });
+  // Each thread loads tsx, jsdom, jimp, resvg and pdfkit before its first job (seconds on a busy machine): the
+  // first job waits for that without it counting against the job's time limit.
+  const warmedUp = pool.run(null, { name: 'warmUp' }).then(
+    () => undefined,
+    () => undefined,
+  );
   const seconds = settings.timeLimitMs / 1000;
   const tooLong = `This took longer than the ${seconds.toLocaleString('en-GB')} s we allow for one file, so it was stopped; try a smaller or simpler file.`;
   const tooBusy = 'We are preparing too many files at once right now; please try again in a minute.';
 
   return {
     async run<T>(task: HeavyTaskName, input: unknown): Promise<Result<T>> {
+      await warmedUp;
       try {
         return (await pool.run(input, { name: task, signal: AbortSignal.timeout(settings.timeLimitMs) })) as Result<T>;
       } catch (error) {

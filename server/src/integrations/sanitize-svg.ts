@@ -60,6 +60,9 @@ purify.addHook('uponSanitizeElement', (node, data) => {
 export function sanitizeSvg(svg: string): string {
   return purify.sanitize(svg, {
     USE_PROFILES: { svg: true, svgFilters: true },
+    // <use> is DOMPurify's to drop, as it can pull in another document; with every reference but `#id` cut by
+    // the hook above it only repeats a shape of this one.
+    ADD_TAGS: ['use'],
     // <image> and <feImage> exist to show another file; <foreignObject> embeds HTML.
     FORBID_TAGS: ['foreignObject', 'image', 'feImage'],
   });

@@ -5,4 +5,4 @@ import { register } from 'tsx/esm/api';
 register();
 const tasks = await import('./heavy-tasks.ts');
 
-export const { inspectUpload, inspectArtwork, estimateSvg, renderProof, productionSheetPdf } = tasks;
+export const { warmUp, inspectUpload, inspectArtwork, estimateSvg, renderProof, productionSheetPdf } = tasks;

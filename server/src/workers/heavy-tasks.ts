@@ -2,7 +2,7 @@
  * The jobs the heavy-work pool runs in its threads (see `integrations/heavy-work.ts`), one export per task name.
  * Each takes plain data and answers a `Result`; Buffers arrive and leave as Uint8Arrays.
  */
-import { ok, type Result } from '../contracts/result.ts';
+import { failure, ok, type Result } from '../contracts/result.ts';
 import type { PaperSize, ProductionSheet } from '../contracts/production-sheet.ts';
 import {
   DEFAULT_STITCH_SETTINGS,
@@ -19,9 +19,13 @@ import { asBuffer } from '../integrations/heavy-work.ts';
 import { renderProof as drawProof } from '../modules/orders/proof-render.ts';
 import type { ProofScene } from '../modules/orders/proof-scene-repo.ts';
 import { renderProductionSheetPdf } from '../modules/production/production-sheet-pdf.ts';
-import { failure } from '../contracts/result.ts';
 
 const fonts = createLetteringFontLoader();
+
+/** Run once when the pool starts: by then this module and everything it imports are loaded. */
+export function warmUp(): boolean {
+  return true;
+}
 
 export function inspectUpload(input: { bytes: Uint8Array; allowed: UploadKind[] }): Promise<Result<InspectedUpload>> {
   return inspect(asBuffer(input.bytes), input.allowed);
