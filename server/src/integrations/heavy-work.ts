@@ -38,6 +38,9 @@ export function createHeavyWork(settings: HeavyWorkSettings): HeavyWork {
     maxQueue: settings.threads * QUEUED_PER_THREAD,
     // Threads keep what they loaded (jsdom, jimp, fonts) between jobs.
     idleTimeout: 60_000,
+    // The request thread comes first when cores are short: heavy jobs run at a lower priority (Linux nice, per
+    // thread, through piscina's optional @napi-rs/nice; where that is missing they run at normal priority).
+    niceIncrement: 10,
   });
   // Each thread loads tsx, jsdom, jimp, resvg and pdfkit before its first job (seconds on a busy machine): the
   // first job waits for that without it counting against the job's time limit.

@@ -110,18 +110,20 @@ export async function listOwnedArtwork(db: Db, owner: ArtworkOwner, limit: numbe
 }
 
 /**
- * What a quote needs of the uploads a design names: an SVG's text and its stitch measurements, or a raster's
- * proportions. Others' are left out.
+ * What a quote needs of the uploads a design names: an SVG's stitch measurements (not its text, which a quote no
+ * longer parses), or a raster's proportions. Others' are left out.
  */
 export async function loadOwnedArtworkForQuote(db: Db, owner: ArtworkOwner, ids: number[]) {
   if (ids.length === 0) return [];
   const rows: Record<string, unknown>[] = await ownedBy(
-    db('artwork_uploads').select('id', 'sanitized_svg', 'stitch_figures', 'width_px', 'height_px').whereIn('id', ids),
+    db('artwork_uploads')
+      .select('id', 'stitch_figures', 'width_px', 'height_px', db.raw('sanitized_svg IS NOT NULL AS is_svg'))
+      .whereIn('id', ids),
     owner,
   );
   return rows.map((row) => ({
     id: Number(row.id),
-    svgText: (row.sanitized_svg as string | null) ?? null,
+    isSvg: Number(row.is_svg) === 1,
     stitchFigures:
       typeof row.stitch_figures === 'string' ? (JSON.parse(row.stitch_figures) as SvgArtworkFigures) : null,
     widthPx: Number(row.width_px),

@@ -125,7 +125,7 @@ export function artworkCatalogueOf(
   return new Map(
     uploads.map((upload): [number, CatalogueArtwork] => [
       upload.id,
-      upload.svgText !== null
+      upload.isSvg
         ? { svgFigures: upload.stitchFigures }
         : { rasterSizePx: { widthPx: upload.widthPx, heightPx: upload.heightPx } },
     ]),
