@@ -61,6 +61,8 @@ export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {})
   const mailer = createMailer(config);
   const stripe = createStripeClient(config);
   const heavyWork = createHeavyWork(config.heavyWork);
+  // The pool's threads load jsdom, jimp, resvg and pdfkit once; that happens here, in the hook, not in a test.
+  await heavyWork.ready;
   const app = createApp({ config, db, sessions, stripe, mailer, heavyWork, now: fixedNow, log: () => {} });
 
   const agent = () => request.agent(app).set('Origin', config.appOrigin);

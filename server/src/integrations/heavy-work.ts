@@ -18,6 +18,8 @@ export interface HeavyWork {
    * a Uint8Array: see `asBuffer`).
    */
   run<T>(task: HeavyTaskName, input: unknown): Promise<Result<T>>;
+  /** Settles once the threads have loaded their code; jobs wait for it before their time limit starts. */
+  ready: Promise<void>;
   close(): Promise<void>;
 }
 
@@ -28,7 +30,7 @@ export interface HeavyWorkSettings {
 
 const ENTRY = new URL('../workers/heavy-tasks-entry.mjs', import.meta.url).href;
 /** Jobs waiting beyond this many per thread are refused at once rather than left to time out. */
-const QUEUED_PER_THREAD = 16;
+const QUEUED_PER_THREAD = 64;
 
 export function createHeavyWork(settings: HeavyWorkSettings): HeavyWork {
   const pool = new Piscina({
@@ -64,6 +66,7 @@ export function createHeavyWork(settings: HeavyWorkSettings): HeavyWork {
         throw error;
       }
     },
+    ready: warmedUp,
     close: () => pool.close({ force: true }),
   };
 }
