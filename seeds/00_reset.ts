@@ -14,6 +14,7 @@ export const seededTables = [
   'orders',
   'quotes',
   'artwork_uploads',
+  'artwork_owner_locks',
   'designs',
   'pricing_rule_sets',
   'motifs',

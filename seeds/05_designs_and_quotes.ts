@@ -1,6 +1,6 @@
 import type { Knex } from 'knex';
 import { userIds } from './data/accounts.ts';
-import { designFigures } from './data/design-figures.ts';
+import { artworkStitchFigures, designFigures } from './data/design-figures.ts';
 import { artworkUploads, designs } from './data/designs.ts';
 import { buildQuote, quoteSpecs } from './data/quotes.ts';
 import { readSeedFile } from './data/seed-files.ts';
@@ -20,6 +20,7 @@ export async function seed(knex: Knex): Promise<void> {
         png: null,
         width_px: upload.widthPx,
         height_px: upload.heightPx,
+        stitch_figures: JSON.stringify(artworkStitchFigures(upload.file)),
         created_at: at(upload.createdAt),
         updated_at: at(upload.createdAt),
       };

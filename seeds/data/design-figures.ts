@@ -4,7 +4,12 @@
  * `figureDesign`, given the seed data as its catalogue, so every seeded quote is what the server computes today.
  */
 import { restoreDesign, type DesignDocument, type DesignPlacement } from '../../server/src/contracts/designs.ts';
-import type { QuotePlacement } from '../../server/src/engine/index.ts';
+import {
+  DEFAULT_STITCH_SETTINGS,
+  measureSvgArtwork,
+  type QuotePlacement,
+  type SvgArtworkFigures,
+} from '../../server/src/engine/index.ts';
 import { createLetteringFontLoader } from '../../server/src/integrations/lettering-fonts.ts';
 import { figureDesign } from '../../server/src/modules/quotes/design-figures.ts';
 import type { PlacementFigures } from '../../server/src/modules/quotes/placement-outcome.ts';
@@ -17,6 +22,13 @@ import { borderGapMm, motifs } from './motifs.ts';
 import { scaleZones, type PlacementZone } from './placement-zones.ts';
 import { readSeedFile } from './seed-files.ts';
 import { shopSettings } from './shop.ts';
+
+/** A seeded upload's stitch measurements, as the server takes them when the file is uploaded. */
+export function artworkStitchFigures(file: string): SvgArtworkFigures {
+  const measured = measureSvgArtwork(readSeedFile('uploads', file), DEFAULT_STITCH_SETTINGS);
+  if (!measured.ok) throw new Error(`The seeded upload ${file} cannot be measured: ${measured.reason}`);
+  return measured.figures;
+}
 
 export interface DesignFigures {
   garment: SeedGarment;
@@ -84,7 +96,7 @@ const seededCatalogue: Omit<QuoteCatalogue, 'garment' | 'size'> = {
     setupMinutes: shopSettings.setup_minutes,
   },
   artworkUploads: new Map(
-    artworkUploads.map((upload) => [upload.id, { svgText: readSeedFile('uploads', upload.file) }]),
+    artworkUploads.map((upload) => [upload.id, { svgFigures: artworkStitchFigures(upload.file) }]),
   ),
 };
 

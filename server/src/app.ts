@@ -11,6 +11,7 @@ import type Stripe from 'stripe';
 import type { AppConfig } from './config.ts';
 import type { Db } from './db/knex.ts';
 import type { Mailer } from './integrations/mailer.ts';
+import type { HeavyWork } from './integrations/heavy-work.ts';
 import { requireRole } from './auth/roles.ts';
 import type { SessionLayer } from './auth/session.ts';
 import { createLetteringFontLoader } from './integrations/lettering-fonts.ts';
@@ -68,6 +69,8 @@ export interface AppDeps {
   sessions: SessionLayer;
   stripe: Stripe;
   mailer: Mailer;
+  /** Worker threads for uploads, SVG measuring, proofs and PDFs (`createHeavyWork`); the caller closes it. */
+  heavyWork: HeavyWork;
   now: () => Date;
   log: (line: string) => void;
   /** True once the process has begun to shut down: readiness then says no, so a proxy stops sending work. */
@@ -113,13 +116,13 @@ function mountSinglePageApp(app: Express, base: string, dir: string): void {
  * listen. This is the one place services are made and handed to the routers that answer for them.
  */
 export function createApp(deps: AppDeps): Express {
-  const { config, db, now, mailer, stripe } = deps;
+  const { config, db, now, mailer, stripe, heavyWork } = deps;
   const { appOrigin, uploadMaxBytes } = config;
   const users = createUserService({ db, ownerEmails: config.ownerEmails });
   const signIn = createSignIn(config, users);
   // One font loader, so each lettering font is parsed once for quotes, saved designs, proofs and production sheets.
   const fonts = createLetteringFontLoader();
-  const artwork = createArtworkService({ db, now });
+  const artwork = createArtworkService({ db, now, heavyWork });
   const quotes = createQuoteService({ db, fonts });
   const storedQuotes = createStoredQuoteService({ db, quotes, now });
   const sharing = createDesignSharingService({ db });
@@ -176,8 +179,8 @@ export function createApp(deps: AppDeps): Express {
     '/api/admin/catalogue',
     createAdminCatalogueRouter({
       catalogue: createCatalogueService({ db }),
-      garments: createCatalogueGarmentService({ db }),
-      motifs: createCatalogueMotifService({ db }),
+      garments: createCatalogueGarmentService({ db, heavyWork }),
+      motifs: createCatalogueMotifService({ db, heavyWork }),
       fonts: createFontService({ db }),
       threads: createThreadService({ db }),
       hoops: createHoopService({ db }),
@@ -190,8 +193,10 @@ export function createApp(deps: AppDeps): Express {
       orders: createStudioOrderService({ db, artwork, now }),
       payments: createOrderPaymentService(money),
       production: createOrderProductionSteps({ db, mailer, now, appOrigin }),
-      proofs: createProofService({ db, mailer, now, appOrigin, fonts }),
-      productionSheets: createProductionSheetRouter({ sheets: createProductionSheetService({ db, fonts }) }),
+      proofs: createProofService({ db, mailer, now, appOrigin, heavyWork }),
+      productionSheets: createProductionSheetRouter({
+        sheets: createProductionSheetService({ db, fonts, heavyWork }),
+      }),
       uploadMaxBytes,
     }),
   );

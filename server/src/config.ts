@@ -2,6 +2,7 @@
  * The only reader of process.env. Every setting is parsed once with zod at start-up; a missing or malformed value
  * stops the process with a list of what to fix. `.env.example` and the README document each variable.
  */
+import { availableParallelism } from 'node:os';
 import { z } from 'zod';
 
 const port = z.coerce.number().int().min(0).max(65_535);
@@ -57,6 +58,14 @@ const appSchema = databaseSchema.extend({
     .min(1024)
     .default(5 * 1024 * 1024),
   WORKER_IN_PROCESS: flagOn,
+  // One thread fewer than the cores, so the request thread keeps one to itself.
+  HEAVY_WORK_THREADS: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(64)
+    .default(Math.max(1, availableParallelism() - 1)),
+  HEAVY_JOB_TIME_LIMIT_MS: z.coerce.number().int().min(1).max(600_000).default(20_000),
 });
 
 export interface DatabaseConfig {
@@ -84,6 +93,8 @@ export interface AppConfig {
   uploadMaxBytes: number;
   /** Whether the API process also runs a job worker (the demo, one-server shops); false when workers run apart. */
   isWorkerInProcess: boolean;
+  /** The worker threads for uploads, SVG measuring, proofs and PDFs, and how long one job may take. */
+  heavyWork: { threads: number; timeLimitMs: number };
 }
 
 function fail(error: z.ZodError): never {
@@ -144,5 +155,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Readonly<AppCo
     mail: { smtpUrl: e.SMTP_URL, from: e.MAIL_FROM },
     uploadMaxBytes: e.UPLOAD_MAX_BYTES,
     isWorkerInProcess: e.WORKER_IN_PROCESS,
+    heavyWork: { threads: e.HEAVY_WORK_THREADS, timeLimitMs: e.HEAVY_JOB_TIME_LIMIT_MS },
   });
 }

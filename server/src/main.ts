@@ -8,6 +8,7 @@ import { openDatabase } from './db/knex.ts';
 import { createSessionLayer } from './auth/session.ts';
 import { createStripeClient } from './integrations/payment-gateway.ts';
 import { createMailer } from './integrations/mailer.ts';
+import { createHeavyWork } from './integrations/heavy-work.ts';
 import { createApp, createJobWorker } from './app.ts';
 
 const log = (line: string) => console.error(`${new Date().toISOString()} ${line}`);
@@ -17,12 +18,14 @@ const db = openDatabase(config.database);
 const sessions = await createSessionLayer(config);
 const mailer = createMailer(config);
 let isClosing = false;
+const heavyWork = createHeavyWork(config.heavyWork);
 const app = createApp({
   config,
   db,
   sessions,
   stripe: createStripeClient(config),
   mailer,
+  heavyWork,
   now: () => new Date(),
   log,
   isDraining: () => isClosing,
@@ -48,6 +51,7 @@ async function shutdown(signal: string): Promise<void> {
   await Promise.all([new Promise<void>((resolve) => server.close(() => resolve())), worker?.stop()]);
   await sessions.close();
   mailer.close();
+  await heavyWork.close();
   await db.destroy();
   process.exit(0);
 }

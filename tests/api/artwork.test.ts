@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { Jimp, JimpMime } from 'jimp';
 import { artworkUploadResponse, artworkListResponse } from '../../server/src/contracts/artwork.ts';
-import { quotePreviewResponse, type QuotePreviewRequest } from '../../server/src/contracts/quotes.ts';
+import { quotePreviewResponse } from '../../server/src/contracts/quotes.ts';
 import type { DesignPlacement } from '../../server/src/contracts/designs.ts';
 import { estimateStitches } from '../../server/src/engine/index.ts';
-import { garments } from '../../seeds/data/garments.ts';
 import { publishedRuleSet } from '../../seeds/data/pricing.ts';
+import { artworkDressQuote } from '../support/sample-designs.ts';
 import { useApiHarness, type ApiAgent } from '../support/api-harness.ts';
 
 const harness = useApiHarness();
@@ -30,30 +30,7 @@ const upload = (agent: Agent, bytes: Buffer | string, filename: string, contentT
     .attach('file', Buffer.isBuffer(bytes) ? bytes : Buffer.from(bytes), { filename, contentType });
 
 const pricing = publishedRuleSet.rules;
-const bishop = garments.find((garment) => garment.slug === 'bishop-dress')!;
-const sixMonths = bishop.sizes.find((size) => size.code === '6m')!;
-const withArtwork = (artworkUploadId: number, widthMm: number): QuotePreviewRequest => ({
-  garmentId: bishop.id,
-  sizeId: sixMonths.id,
-  colourId: bishop.colours[0].id,
-  quantity: 1,
-  isRush: false,
-  document: {
-    version: 1,
-    placements: [
-      {
-        id: 'drawing',
-        kind: 'artwork',
-        zone: 'chest',
-        centerXMm: 209,
-        centerYMm: 105,
-        rotationDeg: 0,
-        artworkUploadId,
-        widthMm,
-      } satisfies DesignPlacement,
-    ],
-  },
-});
+const withArtwork = artworkDressQuote;
 
 describe('POST /api/artwork', () => {
   it('when an SVG carries a script element, an onload handler and javascript: links, then only the clean drawing is stored', async () => {

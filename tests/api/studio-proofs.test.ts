@@ -4,6 +4,7 @@ import { Jimp, JimpMime } from 'jimp';
 import { orderDetailResponse } from '../../server/src/contracts/admin-orders.ts';
 import { sentProofResponse } from '../../server/src/contracts/studio-orders.ts';
 import { startApiHarness, type ApiHarness } from '../support/api-harness.ts';
+import { pngDeclaring } from '../support/hostile-files.ts';
 
 const UPLOAD_LIMIT_BYTES = 300_000;
 let harness: ApiHarness;
@@ -131,6 +132,18 @@ describe('POST /api/admin/orders/:number/proofs', () => {
       .attach('file', huge, { filename: 'big.jpg', contentType: 'image/jpeg' })
       .expect(413);
     expect(res.body.error.kind).toBe('too-large');
+  });
+
+  it('when the photo is a 45-byte PNG declaring 20,000 × 20,000 px, then it answers 413 from its header and keeps nothing', async () => {
+    const res = await staff
+      .post('/api/admin/orders/WB-1009/proofs')
+      .field('source', 'photo')
+      .field('message', 'Photo')
+      .attach('file', pngDeclaring(20_000, 20_000), { filename: 'stitch-out.png', contentType: 'image/png' })
+      .expect(413);
+    expect(res.body.error.message).toMatch(/^That picture is 20,000 × 20,000 px .*under 25 megapixels\.$/);
+    const order = await harness.db('orders').where({ number: 'WB-1009' }).first('id');
+    expect(await harness.db('proofs').where({ order_id: order.id })).toHaveLength(0);
   });
 
   it('when a photo proof comes without its file, or without a message, then it answers 400 naming the field', async () => {

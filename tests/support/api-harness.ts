@@ -12,6 +12,7 @@ import { createApp } from '../../server/src/app.ts';
 import { createSessionLayer, type SessionLayer } from '../../server/src/auth/session.ts';
 import { createStripeClient } from '../../server/src/integrations/payment-gateway.ts';
 import { createMailer } from '../../server/src/integrations/mailer.ts';
+import { createHeavyWork } from '../../server/src/integrations/heavy-work.ts';
 import { startGoogleOAuthFake } from '../../fakes/google-oauth/server.ts';
 import { demoPeople } from '../../seeds/data/people.ts';
 import { localStack } from '../../scripts/stack.ts';
@@ -59,7 +60,10 @@ export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {})
   const sessions: SessionLayer = await createSessionLayer(config);
   const mailer = createMailer(config);
   const stripe = createStripeClient(config);
-  const app = createApp({ config, db, sessions, stripe, mailer, now: fixedNow, log: () => {} });
+  const heavyWork = createHeavyWork(config.heavyWork);
+  // The pool's threads load jsdom, jimp, resvg and pdfkit once; that happens here, in the hook, not in a test.
+  await heavyWork.ready;
+  const app = createApp({ config, db, sessions, stripe, mailer, heavyWork, now: fixedNow, log: () => {} });
 
   const agent = () => request.agent(app).set('Origin', config.appOrigin);
 
@@ -87,6 +91,7 @@ export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {})
     async close() {
       await sessions.close();
       mailer.close();
+      await heavyWork.close();
       await db.destroy();
       await google.close();
     },

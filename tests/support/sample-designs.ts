@@ -1,3 +1,4 @@
+import type { DesignPlacement } from '../../server/src/contracts/designs.ts';
 import type { QuotePreviewRequest } from '../../server/src/contracts/quotes.ts';
 import { garments } from '../../seeds/data/garments.ts';
 import { motifs } from '../../seeds/data/motifs.ts';
@@ -27,3 +28,29 @@ export const daisyDressQuote: QuotePreviewRequest = {
     ],
   },
 };
+
+const sixMonths = bishop.sizes.find((size) => size.code === '6m')!;
+
+/** A seeded bishop dress, 6 months, with one artwork upload on the chest at a width: a quote of customer artwork. */
+export const artworkDressQuote = (artworkUploadId: number, widthMm: number): QuotePreviewRequest => ({
+  garmentId: bishop.id,
+  sizeId: sixMonths.id,
+  colourId: bishop.colours[0].id,
+  quantity: 1,
+  isRush: false,
+  document: {
+    version: 1,
+    placements: [
+      {
+        id: 'drawing',
+        kind: 'artwork',
+        zone: 'chest',
+        centerXMm: 209,
+        centerYMm: 105,
+        rotationDeg: 0,
+        artworkUploadId,
+        widthMm,
+      } satisfies DesignPlacement,
+    ],
+  },
+});

@@ -10,6 +10,8 @@ export const errorKinds = [
   'too-large',
   'unsupported-type',
   'payment-failed',
+  /** The server could not do the work in time (a heavy job past its time limit, or too many at once). */
+  'busy',
 ] as const;
 export type ErrorKind = (typeof errorKinds)[number];
 

@@ -16,7 +16,9 @@ export type { HoopField, Hooping, HoopingPlan, HoopingPlanInput, HoopingSide } f
 export { estimateStitches } from './estimate-stitches.ts';
 export type { StitchSource } from './estimate-stitches.ts';
 export type { CatalogueMotif } from './estimate-catalogue-stitches.ts';
-export type { SvgSize } from './estimate-svg-stitches.ts';
+export { measureSvgArtwork } from './svg-artwork-figures.ts';
+export type { SvgArtworkFigures, SvgShapeFigures, SvgSize } from './svg-artwork-figures.ts';
+export { MAX_SVG_ELEMENTS, MAX_SVG_PATH_SEGMENTS } from './svg-document.ts';
 export { MAX_LETTERING_CHARACTERS } from './estimate-lettering-stitches.ts';
 export type { GlyphOutlineSource } from './estimate-lettering-stitches.ts';
 export type { OutlineCommand } from './outline-geometry.ts';

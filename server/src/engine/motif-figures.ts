@@ -1,5 +1,5 @@
 import { fail, type EngineResult } from './engine-result.ts';
-import { resolveMmPerUnit, type SvgSize } from './estimate-svg-stitches.ts';
+import { resolveMmPerUnit, type SvgSize } from './svg-artwork-figures.ts';
 import type { StitchTally } from './shape-stitches.ts';
 import { readSvgDrawing } from './svg-document.ts';
 import { parseSvgLengthMm } from './units.ts';

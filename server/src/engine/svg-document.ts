@@ -1,4 +1,5 @@
 import { XMLParser } from 'fast-xml-parser';
+import svgpath from 'svgpath';
 import { cssColorToHex } from './color-difference.ts';
 import { fail, type Failure } from './engine-result.ts';
 import type { FillRule } from './outline-geometry.ts';
@@ -20,14 +21,25 @@ export interface SvgDrawable {
   runPasses: number;
 }
 
-export interface SvgDrawing {
-  drawables: SvgDrawable[];
-  /** Root `width`/`height` and `viewBox`, raw, for working out the size. */
+/** The root's `width`/`height` (raw) and `viewBox`, for working out the size. */
+export interface SvgCanvas {
   width?: string;
   height?: string;
   viewBox?: [number, number, number, number];
+}
+
+export interface SvgDrawing extends SvgCanvas {
+  drawables: SvgDrawable[];
   notes: string[];
 }
+
+/**
+ * Path segments in one drawing, all shapes together: a traced child's drawing has a few thousand, and each
+ * segment costs measuring time on every estimate (common practice, no source).
+ */
+export const MAX_SVG_PATH_SEGMENTS = 20_000;
+/** Elements in one drawing, whatever they are. */
+export const MAX_SVG_ELEMENTS = 5_000;
 
 interface Style {
   fill: string | null;
@@ -86,6 +98,11 @@ export function readSvgDrawing(svgText: string): SvgDrawing | Failure {
   const root = Array.isArray(nodes) ? nodes.find((node: XmlNode) => tagOf(node) === 'svg') : undefined;
   if (!root) return fail('The file has no <svg> element, so it is not SVG artwork.');
 
+  const elements = countElements(nodes);
+  if (elements > MAX_SVG_ELEMENTS)
+    return fail(
+      `The artwork has ${formatCount(elements)} elements; ${formatCount(MAX_SVG_ELEMENTS)} at most can be measured, so simplify or merge its shapes.`,
+    );
   const drawing: SvgDrawing = { drawables: [], notes: [] };
   const rootAttributes = attributesOf(root);
   drawing.width = rootAttributes.width;
@@ -94,7 +111,40 @@ export function readSvgDrawing(svgText: string): SvgDrawing | Failure {
   const skipped = new Map<string, number>();
   walk(root, INITIAL_STYLE, '', drawing.drawables, skipped);
   for (const [tag, count] of skipped) drawing.notes.push(`${count} × ${SKIPPED_WITH_NOTE[tag]}.`);
+  const segments = drawing.drawables.reduce((sum, drawable) => sum + segmentCount(drawable.pathData), 0);
+  if (segments > MAX_SVG_PATH_SEGMENTS)
+    return fail(
+      `The artwork's paths have ${formatCount(segments)} segments; ${formatCount(MAX_SVG_PATH_SEGMENTS)} at most can be measured, so simplify the paths (fewer nodes) and upload it again.`,
+    );
   return drawing;
+}
+
+const formatCount = (value: number) => value.toLocaleString('en-GB');
+
+/** The path's segments as svgpath reads them (its `segments`, missing from its typings). */
+function segmentCount(pathData: string): number {
+  return (svgpath(pathData) as unknown as { segments: unknown[] }).segments.length;
+}
+
+/** Every element in the parsed tree, at any depth. */
+function countElements(nodes: unknown): number {
+  let total = 0;
+  const stack: unknown[] = Array.isArray(nodes) ? [...nodes] : [];
+  while (stack.length > 0) {
+    const node = stack.pop();
+    if (!isElement(node)) continue;
+    total += 1;
+    const key = Object.keys(node as XmlNode).find((name) => name !== ':@');
+    const children = key === undefined ? undefined : (node as XmlNode)[key];
+    if (Array.isArray(children)) stack.push(...children);
+  }
+  return total;
+}
+
+/** An element node of any name (text, comments and processing instructions are not). */
+function isElement(node: unknown): boolean {
+  if (typeof node !== 'object' || node === null) return false;
+  return Object.keys(node).some((name) => name !== ':@' && !name.startsWith('#') && !name.startsWith('?'));
 }
 
 function walk(

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { DesignDocument, DesignPlacement } from '../../../server/src/contracts/designs.ts';
+import { DEFAULT_STITCH_SETTINGS, measureSvgArtwork } from '../../../server/src/engine/index.ts';
 import { figureDesign } from '../../../server/src/modules/quotes/design-figures.ts';
 import type { CatalogueMotifEntry, QuoteCatalogue } from '../../../server/src/modules/quotes/quote-catalogue-types.ts';
 import { loadShippedFont } from '../engine/support/load-font.ts';
@@ -260,7 +261,10 @@ describe('figureDesign', () => {
       artworkUploadId: 1,
       widthMm: 56,
     };
-    const figured = figureDesign(catalogueWith({ artworkUploads: new Map([[1, { svgText }]]) }), design(artwork));
+    const measured = measureSvgArtwork(svgText, DEFAULT_STITCH_SETTINGS);
+    if (!measured.ok) throw new Error(measured.reason);
+    const svgFigures = measured.figures;
+    const figured = figureDesign(catalogueWith({ artworkUploads: new Map([[1, { svgFigures }]]) }), design(artwork));
     if (!figured.ok) throw new Error(figured.error.message);
     expect(figured.value.quotePlacements[0]).toMatchObject({
       label: 'Your artwork',

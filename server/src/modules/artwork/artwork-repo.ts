@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 import type { Db } from '../../db/knex.ts';
+import type { SvgArtworkFigures } from '../../engine/index.ts';
 
 /** Who is asking: the signed-in account, or the browser session of a visitor who has not signed in yet. */
 export type ArtworkOwner = { userId: number } | { sessionKey: string };
@@ -24,6 +25,8 @@ export interface ArtworkWrite {
   widthPx: number;
   heightPx: number;
   image: ArtworkImage;
+  /** An SVG's measurements for stitch estimates, taken once at upload; null for a raster. */
+  stitchFigures: SvgArtworkFigures | null;
   createdAt: Date;
 }
 
@@ -68,6 +71,7 @@ export async function insertArtwork(db: Db, owner: ArtworkOwner, write: ArtworkW
     png: image.kind === 'raster' ? image.png : null,
     width_px: write.widthPx,
     height_px: write.heightPx,
+    stitch_figures: write.stitchFigures === null ? null : JSON.stringify(write.stitchFigures),
     created_at: write.createdAt,
     updated_at: write.createdAt,
   });
@@ -105,19 +109,41 @@ export async function listOwnedArtwork(db: Db, owner: ArtworkOwner, limit: numbe
   return rows.map(toMeta);
 }
 
-/** What a quote needs of the uploads a design names: an SVG's text, or a raster's proportions. Others' are left out. */
+/**
+ * What a quote needs of the uploads a design names: an SVG's stitch measurements (not its text, which a quote no
+ * longer parses), or a raster's proportions. Others' are left out.
+ */
 export async function loadOwnedArtworkForQuote(db: Db, owner: ArtworkOwner, ids: number[]) {
   if (ids.length === 0) return [];
   const rows: Record<string, unknown>[] = await ownedBy(
-    db('artwork_uploads').select('id', 'sanitized_svg', 'width_px', 'height_px').whereIn('id', ids),
+    db('artwork_uploads')
+      .select('id', 'stitch_figures', 'width_px', 'height_px', db.raw('sanitized_svg IS NOT NULL AS is_svg'))
+      .whereIn('id', ids),
     owner,
   );
   return rows.map((row) => ({
     id: Number(row.id),
-    svgText: (row.sanitized_svg as string | null) ?? null,
+    isSvg: Number(row.is_svg) === 1,
+    stitchFigures:
+      typeof row.stitch_figures === 'string' ? (JSON.parse(row.stitch_figures) as SvgArtworkFigures) : null,
     widthPx: Number(row.width_px),
     heightPx: Number(row.height_px),
   }));
+}
+
+const ownerKeyOf = (owner: ArtworkOwner) =>
+  'userId' in owner ? `user:${owner.userId}` : `session:${owner.sessionKey}`;
+
+/**
+ * Takes the owner's lock row for the rest of the transaction (made on first use): an upload counted and inserted
+ * under it cannot interleave with another upload of the same owner. `INSERT … ON DUPLICATE KEY UPDATE` takes the
+ * row's exclusive lock at once, so two uploads never hold a shared lock each and deadlock upgrading it.
+ */
+export async function lockArtworkOwner(trx: Db, owner: ArtworkOwner, now: Date): Promise<void> {
+  await trx.raw(
+    'INSERT INTO artwork_owner_locks (owner_key, created_at) VALUES (?, ?) ON DUPLICATE KEY UPDATE owner_key = owner_key',
+    [ownerKeyOf(owner), now],
+  );
 }
 
 /** Hands a visitor's unclaimed uploads to the account they have just signed in to; returns how many. */

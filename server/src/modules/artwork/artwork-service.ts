@@ -7,18 +7,16 @@ import {
   insertArtwork,
   listOwnedArtwork,
   loadOwnedArtworkForQuote,
+  lockArtworkOwner,
   type ArtworkImage,
   type ArtworkMeta,
   type ArtworkOwner,
 } from './artwork-repo.ts';
 import type { ArtworkUpload } from '../../contracts/artwork.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
-
-/**
- * Inspecting an upload needs jsdom (for DOMPurify) and jimp, which take seconds to load: loaded on the first upload,
- * so that every start of the server does not wait for them (measured about 6 s under load on the test machine).
- */
-const loadInspector = () => import('../../integrations/inspect-upload.ts');
+import type { SvgArtworkFigures } from '../../engine/index.ts';
+import { asBuffer, type HeavyWork } from '../../integrations/heavy-work.ts';
+import type { InspectedUpload } from '../../integrations/inspect-upload.ts';
 
 /** Enough to pick from earlier uploads; a studio's customers upload a drawing or two. */
 const LISTED_UPLOADS = 50;
@@ -36,39 +34,57 @@ const MAX_NAME_LENGTH = 255;
  * clean copy is kept, and each upload is seen only by its owner: anyone else gets the same answer as for a
  * missing one, so ids reveal nothing.
  */
-export function createArtworkService(deps: { db: Db; now: () => Date }) {
+export function createArtworkService(deps: { db: Db; now: () => Date; heavyWork: HeavyWork }) {
   const { db } = deps;
+
+  /** Refused when the owner has as many uploads as they may keep; `db` may be a transaction holding their lock. */
+  async function checkCap(on: Db, owner: ArtworkOwner): Promise<Result<void>> {
+    const isVisitor = 'sessionKey' in owner;
+    if ((await countOwnedArtwork(on, owner)) < (isVisitor ? MAX_VISITOR_UPLOADS : MAX_ACCOUNT_UPLOADS))
+      return ok(undefined);
+    const message = isVisitor
+      ? `You have uploaded ${MAX_VISITOR_UPLOADS} pictures already; sign in to upload more, and they come with you.`
+      : `You have uploaded ${MAX_ACCOUNT_UPLOADS} pictures, as many as we keep for one account; get in touch with the studio for more.`;
+    return failure('conflict', message, { file: message });
+  }
 
   async function upload(
     owner: ArtworkOwner,
     file: { buffer: Buffer; originalName: string } | undefined,
   ): Promise<Result<{ artwork: ArtworkUpload }>> {
     if (!file) return failure('invalid', 'Choose a picture to upload.', { file: 'Choose a picture to upload.' });
-    const isVisitor = 'sessionKey' in owner;
-    if ((await countOwnedArtwork(db, owner)) >= (isVisitor ? MAX_VISITOR_UPLOADS : MAX_ACCOUNT_UPLOADS)) {
-      const message = isVisitor
-        ? `You have uploaded ${MAX_VISITOR_UPLOADS} pictures already; sign in to upload more, and they come with you.`
-        : `You have uploaded ${MAX_ACCOUNT_UPLOADS} pictures, as many as we keep for one account; get in touch with the studio for more.`;
-      return failure('conflict', message, { file: message });
-    }
-    const { inspectUpload } = await loadInspector();
-    const inspected = await inspectUpload(file.buffer, ['svg', 'png', 'jpeg']);
+    // A first look spares the inspection when the cap is plainly reached; the count that decides is taken below.
+    const early = await checkCap(db, owner);
+    if (!early.ok) return early;
+    const inspected = await deps.heavyWork.run<{ upload: InspectedUpload; figures: SvgArtworkFigures | null }>(
+      'inspectArtwork',
+      { bytes: file.buffer },
+    );
     if (!inspected.ok) return { ok: false, error: { ...inspected.error, fields: { file: inspected.error.message } } };
-    const clean = inspected.value;
+    const { upload: clean, figures } = inspected.value;
     const image: ArtworkImage =
       clean.kind === 'svg'
         ? { kind: 'svg', svg: withIntrinsicSize(clean.svg, clean.widthPx, clean.heightPx) }
-        : { kind: 'raster', png: clean.png };
-    const id = await insertArtwork(db, owner, {
-      originalName: nameOf(file.originalName),
-      // What is stored, not what was sent: rasters are kept as PNG whatever they came as.
-      mimeType: clean.kind === 'svg' ? 'image/svg+xml' : 'image/png',
-      widthPx: clean.widthPx,
-      heightPx: clean.heightPx,
-      image,
-      createdAt: deps.now(),
+        : { kind: 'raster', png: asBuffer(clean.png) };
+    // Counted and inserted under the owner's lock, so parallel uploads cannot all pass the same count.
+    const stored = await db.transaction(async (trx): Promise<Result<number>> => {
+      await lockArtworkOwner(trx, owner, deps.now());
+      const cap = await checkCap(trx, owner);
+      if (!cap.ok) return cap;
+      return ok(
+        await insertArtwork(trx, owner, {
+          originalName: nameOf(file.originalName),
+          // What is stored, not what was sent: rasters are kept as PNG whatever they came as.
+          mimeType: clean.kind === 'svg' ? 'image/svg+xml' : 'image/png',
+          widthPx: clean.widthPx,
+          heightPx: clean.heightPx,
+          image,
+          stitchFigures: figures,
+          createdAt: deps.now(),
+        }),
+      );
     });
-    return get(owner, id);
+    return stored.ok ? get(owner, stored.value) : stored;
   }
 
   async function get(owner: ArtworkOwner | undefined, id: number): Promise<Result<{ artwork: ArtworkUpload }>> {

@@ -14,7 +14,8 @@ import type {
 } from '../../contracts/admin-catalogue-garments.ts';
 import type { CatalogueRowRef } from '../../contracts/admin-catalogue-common.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
-import { inspectUpload } from '../../integrations/inspect-upload.ts';
+import type { HeavyWork } from '../../integrations/heavy-work.ts';
+import { cleanSvgOffThread } from '../../integrations/inspect-upload-job.ts';
 import {
   createCatalogueRow,
   editCatalogueRow,
@@ -40,18 +41,17 @@ const colourWording: RowWording = {
 };
 
 /** The drawing sanitized like any upload, and only if the storefront can size it (a viewBox or width/height in mm). */
-async function cleanMockup(svg: string): Promise<Result<string>> {
-  const inspected = await inspectUpload(Buffer.from(svg, 'utf8'), ['svg']);
+async function cleanMockup(work: HeavyWork, svg: string): Promise<Result<string>> {
+  const inspected = await cleanSvgOffThread(work, Buffer.from(svg, 'utf8'));
   if (!inspected.ok)
     return failure(inspected.error.kind, inspected.error.message, { mockupSvg: inspected.error.message });
-  if (inspected.value.kind !== 'svg') throw new Error('inspectUpload answered a raster for an SVG-only check');
   try {
-    mockupSizeMm(inspected.value.svg, 'new');
+    mockupSizeMm(inspected.value, 'new');
   } catch {
     const message = 'Draw the garment with a viewBox in millimetres, like viewBox="0 0 300 400"';
     return failure('invalid', `${message}.`, { mockupSvg: message });
   }
-  return ok(inspected.value.svg);
+  return ok(inspected.value);
 }
 
 function garmentRow(garment: UpdateGarmentRequest) {
@@ -107,12 +107,12 @@ const parts: {
 
 const noSuchGarment = () => failure('not-found', 'There is no such garment.');
 
-export function createCatalogueGarmentService(deps: { db: Db }) {
+export function createCatalogueGarmentService(deps: { db: Db; heavyWork: HeavyWork }) {
   const { db } = deps;
 
   /** A new garment, on sale at once; it needs sizes and colours before a customer can design on it. */
   async function create(request: CreateGarmentRequest): Promise<Result<CatalogueRowRef>> {
-    const mockup = await cleanMockup(request.mockupSvg);
+    const mockup = await cleanMockup(deps.heavyWork, request.mockupSvg);
     if (!mockup.ok) return mockup;
     return createCatalogueRow(
       db,
@@ -123,7 +123,7 @@ export function createCatalogueGarmentService(deps: { db: Db }) {
   }
 
   async function update(id: number, request: UpdateGarmentRequest): Promise<Result<CatalogueRowRef>> {
-    const mockup = request.mockupSvg === undefined ? undefined : await cleanMockup(request.mockupSvg);
+    const mockup = request.mockupSvg === undefined ? undefined : await cleanMockup(deps.heavyWork, request.mockupSvg);
     if (mockup && !mockup.ok) return mockup;
     return editCatalogueRow(
       db,

@@ -15,15 +15,17 @@ import type {
 } from '../../contracts/admin-catalogue-motifs.ts';
 import {
   apportionStitches,
-  estimateStitches,
   foldUnderlay,
   nearestThreads,
   svgCanvasSizeMm,
   svgColoursInOrder,
+  type EngineResult,
   type MotifStitchMix,
+  type StitchEstimate,
   type SvgSize,
 } from '../../engine/index.ts';
-import { inspectUpload } from '../../integrations/inspect-upload.ts';
+import type { HeavyWork } from '../../integrations/heavy-work.ts';
+import { cleanSvgOffThread } from '../../integrations/inspect-upload-job.ts';
 import { createCatalogueRow, editCatalogueRow, setCatalogueRowActive, type RowWording } from './catalogue-rows.ts';
 
 const wording: RowWording = {
@@ -32,20 +34,19 @@ const wording: RowWording = {
   duplicateMessage: 'Another motif already uses this short name',
 };
 
-/** The uploaded bytes as clean SVG text, or why not (415 for another type of file, 400 for a broken one). */
-async function cleanSvg(bytes: Buffer): Promise<Result<string>> {
-  const inspected = await inspectUpload(bytes, ['svg']);
-  if (!inspected.ok) return inspected;
-  if (inspected.value.kind !== 'svg') throw new Error('inspectUpload answered a raster for an SVG-only check');
-  return ok(inspected.value.svg);
+type MotifEstimateAt = { estimate: MotifEstimate; mix: MotifStitchMix } | { reason: string };
+
+/**
+ * The engine's estimate at a size (worked out in the heavy-work pool), in the motif table's columns; a reason in
+ * words when it cannot be made, or the pool's failure when it took too long.
+ */
+async function estimateAt(work: HeavyWork, svg: string, size: SvgSize | undefined): Promise<Result<MotifEstimateAt>> {
+  const estimated = await work.run<EngineResult<StitchEstimate>>('estimateSvg', { svg, size });
+  if (!estimated.ok) return estimated;
+  return ok(motifEstimateOf(estimated.value));
 }
 
-/** The engine's estimate at a size, in the motif table's columns; a reason in words when it cannot be made. */
-function estimateAt(
-  svg: string,
-  size: SvgSize | undefined,
-): { estimate: MotifEstimate; mix: MotifStitchMix } | { reason: string } {
-  const estimate = estimateStitches({ kind: 'svg', svgText: svg, size });
+function motifEstimateOf(estimate: EngineResult<StitchEstimate>): MotifEstimateAt {
   if (!estimate.ok) return { reason: estimate.reason };
   const { underlay, ...top } = estimate.byType;
   return {
@@ -60,8 +61,9 @@ function estimateAt(
   };
 }
 
-export function createCatalogueMotifService(deps: { db: Db }) {
-  const { db } = deps;
+export function createCatalogueMotifService(deps: { db: Db; heavyWork: HeavyWork }) {
+  const { db, heavyWork } = deps;
+  const cleanSvg = (bytes: Buffer) => cleanSvgOffThread(heavyWork, bytes);
 
   /**
    * What an uploaded SVG would become, without saving: the sanitized drawing, its size at 100 % (from its own
@@ -71,7 +73,11 @@ export function createCatalogueMotifService(deps: { db: Db }) {
     const svg = await cleanSvg(bytes);
     if (!svg.ok) return svg;
     const canvas = svgCanvasSizeMm(svg.value, widthMm === undefined ? undefined : { widthMm });
-    const estimated = canvas.ok ? estimateAt(svg.value, { mmPerUnit: canvas.mmPerUnit }) : { reason: canvas.reason };
+    const measured = canvas.ok
+      ? await estimateAt(heavyWork, svg.value, { mmPerUnit: canvas.mmPerUnit })
+      : ok<MotifEstimateAt>({ reason: canvas.reason });
+    if (!measured.ok) return measured;
+    const estimated = measured.value;
     const palette = await listActiveThreads(db);
     const colours = svgColoursInOrder(svg.value);
     return ok({
@@ -99,7 +105,9 @@ export function createCatalogueMotifService(deps: { db: Db }) {
       return failure('invalid', `${message}.`, { [`threadCodes.${unknownAt}`]: message });
     }
 
-    const estimated = estimateAt(svg.value, { widthMm: request.widthMm });
+    const measured = await estimateAt(heavyWork, svg.value, { widthMm: request.widthMm });
+    if (!measured.ok) return failure(measured.error.kind, measured.error.message, { svg: measured.error.message });
+    const estimated = measured.value;
     const estimatedMix = 'mix' in estimated && estimated.estimate.stitchCount > 0 ? estimated.mix : undefined;
     let used: MotifStitchMix;
     if (request.measured) {

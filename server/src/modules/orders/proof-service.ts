@@ -10,13 +10,12 @@ import { failure, ok, type Result } from '../../contracts/result.ts';
 import { proofImagePath, type SendProofRequest, type SentProofResponse } from '../../contracts/studio-orders.ts';
 import { findStudioOrder } from './studio-order-repo.ts';
 import { loadProofScene } from './proof-scene-repo.ts';
-import { inspectUpload } from '../../integrations/inspect-upload.ts';
-import type { LetteringFontLoader } from '../../integrations/lettering-fonts.ts';
+import { asBuffer, type HeavyWork } from '../../integrations/heavy-work.ts';
+import { cleanPhotoOffThread } from '../../integrations/inspect-upload-job.ts';
 import { sendLoggedMail } from '../mail/order-mail.ts';
 import { planOrderMove } from './order-flow.ts';
 import { moveOrder } from './order-transitions.ts';
 import type { StudioActor } from './order-payment-service.ts';
-import { renderProof } from './proof-render.ts';
 import { proofReadyMail } from './studio-order-mail.ts';
 
 export function createProofService(deps: {
@@ -24,14 +23,16 @@ export function createProofService(deps: {
   mailer: Mailer;
   now: () => Date;
   appOrigin: string;
-  fonts: LetteringFontLoader;
+  heavyWork: HeavyWork;
 }) {
   const { db } = deps;
 
+  /** The render proof of the order's design, drawn in the heavy-work pool (resvg and jimp take a while). */
   async function drawing(orderId: number): Promise<Result<Buffer>> {
     const scene = await loadProofScene(db, orderId);
     if (!scene) return failure('conflict', 'This order has no design to draw a proof from; send a photo instead.');
-    return ok((await renderProof(scene, deps.fonts)).png);
+    const drawn = await deps.heavyWork.run<{ png: Uint8Array }>('renderProof', scene);
+    return drawn.ok ? ok(asBuffer(drawn.value.png)) : drawn;
   }
 
   async function pictureFor(
@@ -42,11 +43,7 @@ export function createProofService(deps: {
     if (request.source === 'render') return drawing(orderId);
     if (!photo)
       return failure('invalid', 'Choose the photo of the stitch-out to send.', { file: 'Choose a PNG or JPEG photo' });
-    const inspected = await inspectUpload(photo, ['png', 'jpeg']);
-    if (!inspected.ok) return inspected;
-    return inspected.value.kind === 'svg'
-      ? failure('unsupported-type', 'Please upload a PNG or JPEG photo.')
-      : ok(inspected.value.png);
+    return cleanPhotoOffThread(deps.heavyWork, photo);
   }
 
   /** The drawing a render proof would send now, for the studio to look at first; nothing is stored or sent. */

@@ -8,7 +8,7 @@ import type { PaperSize, ProductionSheet } from '../../contracts/production-shee
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import type { LetteringFontLoader } from '../../integrations/lettering-fonts.ts';
 import { figureDesign } from '../quotes/design-figures.ts';
-import { renderProductionSheetPdf } from './production-sheet-pdf.ts';
+import { asBuffer, type HeavyWork } from '../../integrations/heavy-work.ts';
 import { assembleSheet } from './production-sheet-assembly.ts';
 import { artworkCatalogueOf, quoteCatalogueFor, slugsNamedIn, toQuoteCatalogue } from '../quotes/quote-service.ts';
 
@@ -33,7 +33,7 @@ const NOT_YET: Readonly<Record<OrderStatus, string>> = {
  * and 1:1 templates, all recomputed from the ordered design and today's catalogue with the quote's own
  * `figureDesign`, so the sheet is made the way the order was priced.
  */
-export function createProductionSheetService(deps: { db: Db; fonts: LetteringFontLoader }) {
+export function createProductionSheetService(deps: { db: Db; fonts: LetteringFontLoader; heavyWork: HeavyWork }) {
   const { db } = deps;
 
   async function get(number: string): Promise<Result<ProductionSheet>> {
@@ -57,7 +57,9 @@ export function createProductionSheetService(deps: { db: Db; fonts: LetteringFon
   async function pdf(number: string, paper: PaperSize): Promise<Result<Buffer>> {
     const sheet = await get(number);
     if (!sheet.ok) return sheet;
-    return ok(await renderProductionSheetPdf(sheet.value, paper));
+    // pdfkit lays out every page and template tile: done in the heavy-work pool.
+    const built = await deps.heavyWork.run<Uint8Array>('productionSheetPdf', { sheet: sheet.value, paper });
+    return built.ok ? ok(asBuffer(built.value)) : built;
   }
 
   async function sheetFor(order: OrderToMake, document: DesignDocument): Promise<Result<ProductionSheet>> {

@@ -99,7 +99,14 @@ function figureArtwork(catalogue: QuoteCatalogue, placement: ArtworkPlacement, p
     return oneHooping(catalogue, placement, rasterPlaceholder(upload.rasterSizePx, placement.widthMm), wording, {
       isPriceProvisional: true,
     });
-  const estimate = estimateStitches({ kind: 'svg', svgText: upload.svgText, size: { widthMm: placement.widthMm } });
+  if (!upload.svgFigures)
+    return refuse(`${path}.artworkUploadId`, 'That artwork could not be measured for stitching; upload it again.');
+  // Measured once at upload; a quote only scales the measurements to the width.
+  const estimate = estimateStitches({
+    kind: 'svg-figures',
+    figures: upload.svgFigures,
+    size: { widthMm: placement.widthMm },
+  });
   if (!estimate.ok) return refuse(`${path}.artworkUploadId`, `Your artwork can't be estimated: ${estimate.reason}`);
   return oneHooping(catalogue, placement, estimate, wording);
 }

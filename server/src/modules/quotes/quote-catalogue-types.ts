@@ -3,7 +3,7 @@
  * design names, the hoops and the machine's pace. The server reads it from the database, the seeds build it from
  * their data files, and both hand it to `figureDesign`, so a seeded quote is priced exactly as the server would.
  */
-import type { FabricConstruction, GlyphOutlineSource, MachineSettings } from '../../engine/index.ts';
+import type { FabricConstruction, GlyphOutlineSource, MachineSettings, SvgArtworkFigures } from '../../engine/index.ts';
 
 export interface CatalogueGarment {
   id: number;
@@ -90,11 +90,13 @@ export interface QuoteCatalogue {
   hoops: readonly CatalogueHoop[];
   machine: ShopMachine;
   /**
-   * The customer's uploads by id, as far as their owner may use them: an SVG's sanitized text, from which the
-   * engine counts stitches, or a raster's pixel size, which only the studio can digitize. Absent where uploads
+   * The customer's uploads by id, as far as their owner may use them: an SVG's measurements taken at upload,
+   * from which the engine counts stitches at any size (null when it could not be measured), or a raster's pixel
+   * size, which only the studio can digitize. Absent where uploads
    * are not supported, so artwork placements are refused there; the seeds price their one upload through it.
    */
   artworkUploads?: ReadonlyMap<number, CatalogueArtwork>;
 }
 
-export type CatalogueArtwork = { svgText: string } | { rasterSizePx: { widthPx: number; heightPx: number } };
+export type CatalogueArtwork =
+  { svgFigures: SvgArtworkFigures | null } | { rasterSizePx: { widthPx: number; heightPx: number } };

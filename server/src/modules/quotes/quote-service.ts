@@ -118,15 +118,15 @@ function namedIn(document: DesignDocument): { motifSlugs: string[]; fontSlugs: s
   return { motifSlugs: [...motifSlugs], fontSlugs: [...fontSlugs], artworkIds: [...artworkIds] };
 }
 
-/** Uploaded artwork as `figureDesign` takes it: an SVG's drawing to estimate, or a raster's size in pixels. */
+/** Uploaded artwork as `figureDesign` takes it: an SVG's stored measurements, or a raster's size in pixels. */
 export function artworkCatalogueOf(
   uploads: Awaited<ReturnType<typeof artworkForQuote>>,
 ): ReadonlyMap<number, CatalogueArtwork> {
   return new Map(
     uploads.map((upload): [number, CatalogueArtwork] => [
       upload.id,
-      upload.svgText !== null
-        ? { svgText: upload.svgText }
+      upload.isSvg
+        ? { svgFigures: upload.stitchFigures }
         : { rasterSizePx: { widthPx: upload.widthPx, heightPx: upload.heightPx } },
     ]),
   );
