@@ -153,7 +153,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(
     '/api/orders',
     createOrdersRouter({
-      checkout: createCheckoutService({ db, stripe, mailer, storedQuotes, appOrigin, now }),
+      checkout: createCheckoutService({ db, stripe, mailer, storedQuotes, appOrigin, now, log: deps.log }),
       customerOrders: createCustomerOrderService({ db, mailer, appOrigin, now }),
     }),
   );

@@ -1,10 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import Stripe from 'stripe';
-import { storedQuoteResponse } from '../../server/src/contracts/stored-quotes.ts';
 import { checkoutStartedResponse, customerOrderResponse } from '../../server/src/contracts/orders.ts';
-import { savedDesignResponse } from '../../server/src/contracts/saved-designs.ts';
 import { startPaymentHarness, type PaymentHarness } from '../support/payment-stand-ins.ts';
 import { signedInAgent } from '../support/api-calls.ts';
+import { priyasCheckout } from '../support/checkout-bodies.ts';
 
 let harness: PaymentHarness;
 beforeAll(async () => {
@@ -15,44 +14,12 @@ afterAll(async () => {
 });
 
 type Agent = ReturnType<PaymentHarness['agent']>;
-const shipTo = {
-  name: 'Priya Castellanos',
-  line1: '48 Larkspur Lane',
-  city: 'Fernhollow',
-  region: 'OR',
-  postalCode: '97000',
-  countryCode: 'US',
-};
-
 const priya = (): Promise<Agent> => signedInAgent(harness, 'priya@example.test');
 
 /** Priya orders her design 1 and is sent to the payment page. */
 async function placeOrder(agent: Agent) {
-  const { design } = savedDesignResponse.parse((await agent.get('/api/designs/1').expect(200)).body);
-  const quote = storedQuoteResponse.parse(
-    (
-      await agent
-        .post('/api/quotes')
-        .send({
-          garmentId: design.garmentId,
-          sizeId: design.sizeId,
-          colourId: design.colourId,
-          quantity: 1,
-          isRush: false,
-          document: design.document,
-          designId: 1,
-        })
-        .expect(201)
-    ).body,
-  );
-  const started = checkoutStartedResponse.parse(
-    (
-      await agent
-        .post('/api/orders')
-        .send({ quoteId: quote.quoteId, designId: 1, neededBy: '2026-12-18', shipTo })
-        .expect(201)
-    ).body,
-  );
+  const { quote, body } = await priyasCheckout(agent);
+  const started = checkoutStartedResponse.parse((await agent.post('/api/orders').send(body).expect(201)).body);
   return { ...started, totalCents: quote.quote.totalCents };
 }
 
