@@ -12,6 +12,7 @@ import { createLetteringFontLoader } from './integrations/lettering-fonts.ts';
 import { requestId } from './middleware/request-id.ts';
 import { accessLog } from './middleware/access-log.ts';
 import { requireSameOrigin } from './middleware/same-origin.ts';
+import { createRateLimits } from './middleware/rate-limit.ts';
 import { createErrorHandler, notFoundHandler } from './middleware/error-handler.ts';
 import { createUserService } from './modules/people/user-service.ts';
 import { createPeopleService } from './modules/people/people-service.ts';
@@ -142,6 +143,17 @@ export function createApp(deps: AppDeps): Express {
     res.set('Cache-Control', 'no-store');
     next();
   });
+
+  // Abuse limits, counted before the work: sign-in, pricing, uploads, checkouts and answers to proofs.
+  const limits = createRateLimits(db, config.database.database, config.rateLimits);
+  app.get(['/api/auth/google', '/api/auth/google/callback'], limits.signIn);
+  app.post('/api/quotes/preview', limits.quotePreviews);
+  app.post(['/api/artwork', '/api/admin/catalogue/motifs/preview', '/api/admin/orders/:number/proofs'], limits.uploads);
+  app.post(['/api/orders', '/api/orders/:number/payment'], limits.orders);
+  app.post(
+    ['/api/orders/:number/proofs/:version/approval', '/api/orders/:number/proofs/:version/change-request'],
+    limits.proofAnswers,
+  );
 
   app.get('/api/health', (_req, res) => res.json({ ok: true }));
   app.use('/api/auth', createAuthRouter({ signIn, log: deps.log, claimArtwork: artwork.claim }));

@@ -51,6 +51,13 @@ const appSchema = databaseSchema.extend({
     .int()
     .min(1024)
     .default(5 * 1024 * 1024),
+  RATE_LIMIT_WINDOW_SECONDS: z.coerce.number().int().min(1).max(86_400).default(60),
+  RATE_LIMIT_SIGN_IN: z.coerce.number().int().min(1).default(30),
+  RATE_LIMIT_QUOTE_PREVIEWS: z.coerce.number().int().min(1).default(120),
+  RATE_LIMIT_UPLOADS: z.coerce.number().int().min(1).default(20),
+  RATE_LIMIT_ORDERS: z.coerce.number().int().min(1).default(10),
+  RATE_LIMIT_PROOF_ANSWERS: z.coerce.number().int().min(1).default(20),
+  VISITOR_DATA_RETENTION_DAYS: z.coerce.number().int().min(1).max(3650).default(30),
 });
 
 export interface DatabaseConfig {
@@ -76,6 +83,19 @@ export interface AppConfig {
   stripe: { secretKey: string; webhookSecret: string; apiUrl?: string };
   mail: { smtpUrl: string; from: string };
   uploadMaxBytes: number;
+  rateLimits: RateLimitSettings;
+  /** Days a visitor's sessions, uploads and quotes are kept when no account claimed them. */
+  visitorDataRetentionDays: number;
+}
+
+/** Requests one client may make per window (per signed-in person, or per address for visitors). */
+export interface RateLimitSettings {
+  windowSeconds: number;
+  signIn: number;
+  quotePreviews: number;
+  uploads: number;
+  orders: number;
+  proofAnswers: number;
 }
 
 function fail(error: z.ZodError): never {
@@ -135,5 +155,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Readonly<AppCo
     stripe: { secretKey: e.STRIPE_SECRET_KEY, webhookSecret: e.STRIPE_WEBHOOK_SECRET, apiUrl: e.STRIPE_API_URL },
     mail: { smtpUrl: e.SMTP_URL, from: e.MAIL_FROM },
     uploadMaxBytes: e.UPLOAD_MAX_BYTES,
+    rateLimits: {
+      windowSeconds: e.RATE_LIMIT_WINDOW_SECONDS,
+      signIn: e.RATE_LIMIT_SIGN_IN,
+      quotePreviews: e.RATE_LIMIT_QUOTE_PREVIEWS,
+      uploads: e.RATE_LIMIT_UPLOADS,
+      orders: e.RATE_LIMIT_ORDERS,
+      proofAnswers: e.RATE_LIMIT_PROOF_ANSWERS,
+    },
+    visitorDataRetentionDays: e.VISITOR_DATA_RETENTION_DAYS,
   });
 }

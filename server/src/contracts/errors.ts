@@ -10,6 +10,7 @@ export const errorKinds = [
   'too-large',
   'unsupported-type',
   'payment-failed',
+  'too-many-requests',
 ] as const;
 export type ErrorKind = (typeof errorKinds)[number];
 
