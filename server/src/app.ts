@@ -1,5 +1,6 @@
 import express, { type Express } from 'express';
 import helmet from 'helmet';
+import cookieParser from 'cookie-parser';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type Stripe from 'stripe';
@@ -156,7 +157,11 @@ export function createApp(deps: AppDeps): Express {
   );
 
   app.get('/api/health', (_req, res) => res.json({ ok: true }));
-  app.use('/api/auth', createAuthRouter({ signIn, log: deps.log, claimArtwork: artwork.claim }));
+  app.use(
+    '/api/auth',
+    cookieParser(config.sessionSecret),
+    createAuthRouter({ signIn, log: deps.log, claimArtwork: artwork.claim }),
+  );
   app.use('/api/me', createMeRouter());
   app.use('/api/catalogue', createCatalogueRouter({ catalogue: createCatalogueService({ db }) }));
   app.use('/api/quotes', createQuotesRouter({ quotes, storedQuotes }));
