@@ -6,6 +6,7 @@ import { createSessionLayer } from './auth/session.ts';
 import { createStripeClient } from './integrations/payment-gateway.ts';
 import { createMailer } from './integrations/mailer.ts';
 import { createApp } from './app.ts';
+import { createVisitorDataRetention } from './modules/retention/visitor-data-retention.ts';
 
 const log = (line: string) => console.error(`${new Date().toISOString()} ${line}`);
 
@@ -14,6 +15,14 @@ const db = openDatabase(config.database);
 const sessions = await createSessionLayer(config);
 const mailer = createMailer(config);
 const app = createApp({ config, db, sessions, stripe: createStripeClient(config), mailer, now: () => new Date(), log });
+// Until a job runner exists, the server sweeps visitors' unclaimed data itself: at start and then daily.
+const retention = createVisitorDataRetention({
+  db,
+  now: () => new Date(),
+  retentionDays: config.visitorDataRetentionDays,
+  log,
+});
+void retention.start();
 
 const server: Server = app.listen(config.port, config.host, (error?: Error) => {
   if (error) {
@@ -28,6 +37,7 @@ async function shutdown(signal: string): Promise<void> {
   if (isClosing) return;
   isClosing = true;
   log(`${signal} received, closing.`);
+  retention.stop();
   server.closeIdleConnections();
   await new Promise<void>((resolve) => server.close(() => resolve()));
   await sessions.close();
