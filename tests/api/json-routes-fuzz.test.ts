@@ -93,7 +93,6 @@ const routes: JsonRoute[] = [
     who: 'harriet',
     sample: fixed({ comment: 'Bigger', pins: [{ xPct: 10, yPct: 20, comment: 'here' }] }),
   },
-  { method: 'post', path: '/api/orders/WB-1010/cancel', who: 'priya', sample: fixed({}) },
   {
     method: 'post',
     path: '/api/admin/catalogue/hoops',
@@ -293,6 +292,26 @@ function mutationsOf(sample: Json): fc.Arbitrary<Json> {
     .array(change, { minLength: 1, maxLength: 3 })
     .map((changes) => changes.reduce((body, [path, next]) => replaced(body, path, next), sample));
 }
+
+describe('values the database would round to nothing', () => {
+  it('when a hoop of 0.001 mm or a lettering font of 5e-324 mm is sent, then it answers 400 naming the field', async () => {
+    const hoop = await owner
+      .post('/api/admin/catalogue/hoops')
+      .send({ slug: 'tiny-hoop', name: 'Tiny', fieldWidthMm: 0.001, fieldHeightMm: 100 })
+      .expect(400);
+    expect(hoop.body.error.fields).toEqual({ fieldWidthMm: 'The field width must be at least 0.01 mm' });
+    const font = await owner
+      .put('/api/admin/catalogue/fonts/1')
+      .send({ name: 'Font', minHeightMm: 5e-324, maxHeightMm: 40 })
+      .expect(400);
+    expect(font.body.error.fields).toEqual({ minHeightMm: 'The smallest letter height must be at least 0.01 mm' });
+    const size = await owner
+      .post('/api/admin/catalogue/garments/1/sizes')
+      .send({ code: '9T', label: '9 years', hemFrontMm: 300, hemCircumferenceMm: 620, mockupScale: 1e-9, zones: [] })
+      .expect(400);
+    expect(size.body.error.fields.mockupScale).toBe('Use a scale of at least 0.0001');
+  });
+});
 
 const serverFailures: { route: string; status: number; body: string }[] = [];
 
