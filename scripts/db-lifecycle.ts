@@ -205,6 +205,19 @@ export async function stopLocalDatabase(settings = localDatabaseSettings()): Pro
   return { stopped: true };
 }
 
+/**
+ * Kills the local instance at once (SIGKILL, as a crash or a lost machine would) and waits until it has gone, for
+ * the benchmarks that measure how the app behaves while its database is away. The next start runs crash recovery.
+ */
+export async function killLocalDatabase(settings = localDatabaseSettings()): Promise<{ killed: boolean }> {
+  const pid = runningPid(settings);
+  if (!pid) return { killed: false };
+  process.kill(pid, 'SIGKILL');
+  const deadline = Date.now() + 30_000;
+  while (isAlive(pid) && Date.now() < deadline) await sleep(100);
+  return { killed: true };
+}
+
 /** Stops the instance and deletes its data folder; the next start initialises it afresh. */
 export async function wipeLocalDatabase(settings = localDatabaseSettings()): Promise<void> {
   await stopLocalDatabase(settings);

@@ -33,6 +33,14 @@ export interface LocalStack {
   env: NodeJS.ProcessEnv;
 }
 
+const testRateLimits: NodeJS.ProcessEnv = {
+  RATE_LIMIT_SIGN_IN: '100000',
+  RATE_LIMIT_QUOTE_PREVIEWS: '100000',
+  RATE_LIMIT_UPLOADS: '100000',
+  RATE_LIMIT_ORDERS: '100000',
+  RATE_LIMIT_PROOF_ANSWERS: '100000',
+};
+
 /** Environment for the server in the local demo or test stack; values already set in the shell win. */
 export function localStack(profile: StackProfile): LocalStack {
   const ports = offsetPorts(portsByProfile[profile], Number(process.env.HW_PORT_OFFSET ?? 0));
@@ -61,6 +69,8 @@ export function localStack(profile: StackProfile): LocalStack {
     STRIPE_WEBHOOK_SECRET: 'whsec_hoopwright_local',
     STRIPE_API_URL: `http://127.0.0.1:${ports.stripe}`,
     SMTP_URL: `smtp://127.0.0.1:${ports.smtp}`,
+    // The tests make many requests from one address in a short while; the rate-limit test lowers these for itself.
+    ...(profile === 'test' ? testRateLimits : {}),
     ...(profile === 'demo' ? pickDefined(process.env, ['HOST', 'PORT', 'APP_ORIGIN']) : {}),
   };
   return { ports: { ...ports, app: appPort }, appOrigin, env };

@@ -5,6 +5,7 @@ import type { Knex } from 'knex';
  * with the same ids, so anyone signed in stays signed in across a re-seed.
  */
 export const seededTables = [
+  'rate_limits',
   'email_log',
   'payments',
   'payment_webhook_events',

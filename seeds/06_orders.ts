@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { orderPlacementKey } from '../server/src/modules/orders/order-repo.ts';
 import { userIds } from './data/accounts.ts';
 import { replayOrder } from './data/order-history.ts';
 import { orders, shipToByCustomer } from './data/orders.ts';
@@ -41,6 +42,7 @@ export async function seed(knex: Knex): Promise<void> {
       number: order.number,
       customer_id: userIds[quote.customer],
       quote_id: spec.id,
+      placement_key: orderPlacementKey(spec.id, quote.designId),
       status: history.status,
       payment_status: history.paymentStatus,
       subtotal_cents: totals.subtotal_cents,

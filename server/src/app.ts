@@ -1,10 +1,12 @@
 import { createJobRunner } from './modules/jobs/job-runner.ts';
+import { createVisitorDataRetention } from './modules/retention/visitor-data-retention.ts';
 import { SEND_MAIL_JOB, sendMailJobHandler } from './modules/mail/order-mail.ts';
 import { purgeExpiredSessions } from './modules/people/session-sweep-repo.ts';
 import { createHealthRouter } from './modules/health/routes.ts';
 import { createHealthService } from './modules/health/health-service.ts';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
+import cookieParser from 'cookie-parser';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type Stripe from 'stripe';
@@ -18,6 +20,7 @@ import { createLetteringFontLoader } from './integrations/lettering-fonts.ts';
 import { requestId } from './middleware/request-id.ts';
 import { accessLog } from './middleware/access-log.ts';
 import { requireSameOrigin } from './middleware/same-origin.ts';
+import { createRateLimits } from './middleware/rate-limit.ts';
 import { createErrorHandler, notFoundHandler } from './middleware/error-handler.ts';
 import { createUserService } from './modules/people/user-service.ts';
 import { createPeopleService } from './modules/people/people-service.ts';
@@ -158,7 +161,22 @@ export function createApp(deps: AppDeps): Express {
     next();
   });
 
-  app.use('/api/auth', createAuthRouter({ signIn, log: deps.log, claimArtwork: artwork.claim }));
+  // Abuse limits, counted before the work: sign-in, pricing, uploads, checkouts and answers to proofs.
+  const limits = createRateLimits(db, config.database.database, config.rateLimits);
+  app.get(['/api/auth/google', '/api/auth/google/callback'], limits.signIn);
+  app.post('/api/quotes/preview', limits.quotePreviews);
+  app.post(['/api/artwork', '/api/admin/catalogue/motifs/preview', '/api/admin/orders/:number/proofs'], limits.uploads);
+  app.post(['/api/orders', '/api/orders/:number/payment'], limits.orders);
+  app.post(
+    ['/api/orders/:number/proofs/:version/approval', '/api/orders/:number/proofs/:version/change-request'],
+    limits.proofAnswers,
+  );
+
+  app.use(
+    '/api/auth',
+    cookieParser(config.sessionSecret),
+    createAuthRouter({ signIn, log: deps.log, claimArtwork: artwork.claim }),
+  );
   app.use('/api/me', createMeRouter());
   app.use('/api/catalogue', createCatalogueRouter({ catalogue: createCatalogueService({ db }) }));
   app.use('/api/quotes', createQuotesRouter({ quotes, storedQuotes }));
@@ -167,7 +185,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(
     '/api/orders',
     createOrdersRouter({
-      checkout: createCheckoutService({ db, stripe, mailer, storedQuotes, appOrigin, now }),
+      checkout: createCheckoutService({ db, stripe, mailer, storedQuotes, appOrigin, now, log: deps.log }),
       customerOrders: createCustomerOrderService({ db, mailer, appOrigin, now }),
     }),
   );
@@ -223,8 +241,11 @@ export function createApp(deps: AppDeps): Express {
  * once per period across every instance. `main.ts` runs one in the API process unless WORKER_IN_PROCESS=false;
  * `worker.ts` runs one on its own.
  */
-export function createJobWorker(deps: Pick<AppDeps, 'db' | 'mailer' | 'now' | 'log'> & { workerId?: string }) {
+export function createJobWorker(
+  deps: Pick<AppDeps, 'db' | 'mailer' | 'now' | 'log'> & { workerId?: string; visitorDataRetentionDays?: number },
+) {
   const { db, mailer, now, log } = deps;
+  const retention = createVisitorDataRetention({ db, now, log, retentionDays: deps.visitorDataRetentionDays ?? 30 });
   return createJobRunner({
     db,
     now,
@@ -239,6 +260,8 @@ export function createJobWorker(deps: Pick<AppDeps, 'db' | 'mailer' | 'now' | 'l
           await purgeExpiredSessions(db, at);
         },
       },
+      // Visitors' sessions, uploads and quotes no account claimed, once a day across all instances.
+      { name: 'purge-unclaimed-visitor-data', periodMs: 86_400_000, run: () => retention.sweepAndReport() },
     ],
   });
 }

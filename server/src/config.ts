@@ -66,6 +66,13 @@ const appSchema = databaseSchema.extend({
     .max(64)
     .default(Math.max(1, availableParallelism() - 1)),
   HEAVY_JOB_TIME_LIMIT_MS: z.coerce.number().int().min(1).max(600_000).default(20_000),
+  RATE_LIMIT_WINDOW_SECONDS: z.coerce.number().int().min(1).max(86_400).default(60),
+  RATE_LIMIT_SIGN_IN: z.coerce.number().int().min(1).default(30),
+  RATE_LIMIT_QUOTE_PREVIEWS: z.coerce.number().int().min(1).default(120),
+  RATE_LIMIT_UPLOADS: z.coerce.number().int().min(1).default(20),
+  RATE_LIMIT_ORDERS: z.coerce.number().int().min(1).default(10),
+  RATE_LIMIT_PROOF_ANSWERS: z.coerce.number().int().min(1).default(20),
+  VISITOR_DATA_RETENTION_DAYS: z.coerce.number().int().min(1).max(3650).default(30),
 });
 
 export interface DatabaseConfig {
@@ -95,6 +102,19 @@ export interface AppConfig {
   isWorkerInProcess: boolean;
   /** The worker threads for uploads, SVG measuring, proofs and PDFs, and how long one job may take. */
   heavyWork: { threads: number; timeLimitMs: number };
+  rateLimits: RateLimitSettings;
+  /** Days a visitor's sessions, uploads and quotes are kept when no account claimed them. */
+  visitorDataRetentionDays: number;
+}
+
+/** Requests one client may make per window (per signed-in person, or per address for visitors). */
+export interface RateLimitSettings {
+  windowSeconds: number;
+  signIn: number;
+  quotePreviews: number;
+  uploads: number;
+  orders: number;
+  proofAnswers: number;
 }
 
 function fail(error: z.ZodError): never {
@@ -156,5 +176,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Readonly<AppCo
     uploadMaxBytes: e.UPLOAD_MAX_BYTES,
     isWorkerInProcess: e.WORKER_IN_PROCESS,
     heavyWork: { threads: e.HEAVY_WORK_THREADS, timeLimitMs: e.HEAVY_JOB_TIME_LIMIT_MS },
+    rateLimits: {
+      windowSeconds: e.RATE_LIMIT_WINDOW_SECONDS,
+      signIn: e.RATE_LIMIT_SIGN_IN,
+      quotePreviews: e.RATE_LIMIT_QUOTE_PREVIEWS,
+      uploads: e.RATE_LIMIT_UPLOADS,
+      orders: e.RATE_LIMIT_ORDERS,
+      proofAnswers: e.RATE_LIMIT_PROOF_ANSWERS,
+    },
+    visitorDataRetentionDays: e.VISITOR_DATA_RETENTION_DAYS,
   });
 }

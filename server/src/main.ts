@@ -31,7 +31,15 @@ const app = createApp({
   isDraining: () => isClosing,
 });
 
-const worker = config.isWorkerInProcess ? createJobWorker({ db, mailer, now: () => new Date(), log }) : undefined;
+const worker = config.isWorkerInProcess
+  ? createJobWorker({
+      db,
+      mailer,
+      now: () => new Date(),
+      log,
+      visitorDataRetentionDays: config.visitorDataRetentionDays,
+    })
+  : undefined;
 worker?.start();
 
 const server: Server = app.listen(config.port, config.host, (error?: Error) => {

@@ -12,7 +12,13 @@ const log = (line: string) => console.error(`${new Date().toISOString()} ${line}
 const config = loadConfig();
 const db = openDatabase(config.database);
 const mailer = createMailer(config);
-const worker = createJobWorker({ db, mailer, now: () => new Date(), log });
+const worker = createJobWorker({
+  db,
+  mailer,
+  now: () => new Date(),
+  log,
+  visitorDataRetentionDays: config.visitorDataRetentionDays,
+});
 worker.start();
 console.log(`Hoopwright worker ${worker.workerId} is running.`);
 

@@ -3,7 +3,7 @@ import Stripe from 'stripe';
 import { checkoutStartedResponse, customerOrderResponse } from '../../server/src/contracts/orders.ts';
 import { startPaymentHarness, type PaymentHarness } from '../support/payment-stand-ins.ts';
 import { signedInAgent } from '../support/api-calls.ts';
-import { priyaShipTo, quoteSavedDesign } from '../support/priya-orders.ts';
+import { priyasCheckout } from '../support/checkout-bodies.ts';
 
 let harness: PaymentHarness;
 beforeAll(async () => {
@@ -14,20 +14,12 @@ afterAll(async () => {
 });
 
 type Agent = ReturnType<PaymentHarness['agent']>;
-
 const priya = (): Promise<Agent> => signedInAgent(harness, 'priya@example.test');
 
 /** Priya orders her design 1 and is sent to the payment page. */
 async function placeOrder(agent: Agent) {
-  const quote = await quoteSavedDesign(agent);
-  const started = checkoutStartedResponse.parse(
-    (
-      await agent
-        .post('/api/orders')
-        .send({ quoteId: quote.quoteId, designId: 1, neededBy: '2026-12-18', shipTo: priyaShipTo })
-        .expect(201)
-    ).body,
-  );
+  const { quote, body } = await priyasCheckout(agent);
+  const started = checkoutStartedResponse.parse((await agent.post('/api/orders').send(body).expect(201)).body);
   return { ...started, totalCents: quote.quote.totalCents };
 }
 

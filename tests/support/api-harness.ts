@@ -25,8 +25,11 @@ export interface ApiHarness {
   stripe: Stripe;
   /** A supertest agent that keeps cookies and sends this app's Origin, as the browser apps do. */
   agent(): ReturnType<typeof request.agent>;
-  /** Signs the agent in through the authorization-code flow of the local provider. */
-  signIn(agent: ReturnType<typeof request.agent>, email: string): Promise<void>;
+  /**
+   * Signs the agent in through the authorization-code flow of the local provider, starting with `returnTo` when
+   * given; resolves with where the callback sends the browser.
+   */
+  signIn(agent: ReturnType<typeof request.agent>, email: string, returnTo?: string): Promise<string>;
   close(): Promise<void>;
 }
 
@@ -67,8 +70,11 @@ export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {})
 
   const agent = () => request.agent(app).set('Origin', config.appOrigin);
 
-  async function signIn(client: ReturnType<typeof request.agent>, email: string): Promise<void> {
-    const start = await client.get('/api/auth/google').expect(302);
+  async function signIn(client: ReturnType<typeof request.agent>, email: string, returnTo?: string): Promise<string> {
+    const start = await client
+      .get('/api/auth/google')
+      .query(returnTo ? { returnTo } : {})
+      .expect(302);
     const authorizeUrl = new URL(start.headers.location!);
     const person = demoPeople.find((p) => p.email === email);
     // The stand-in's page posts the chosen identity back to itself and redirects with a code.
@@ -78,7 +84,7 @@ export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {})
     });
     const decision = await fetch(new URL('/authorize', google.url), { method: 'POST', body: form, redirect: 'manual' });
     const callback = new URL(decision.headers.get('location')!);
-    await client.get(`${callback.pathname}${callback.search}`).expect(302);
+    return (await client.get(`${callback.pathname}${callback.search}`).expect(302)).headers.location!;
   }
 
   return {
@@ -128,6 +134,6 @@ export function useApiHarness(options: { env?: NodeJS.ProcessEnv } = {}): Omit<A
       return current().stripe;
     },
     agent: () => current().agent(),
-    signIn: (client, email) => current().signIn(client, email),
+    signIn: (client, email, returnTo) => current().signIn(client, email, returnTo),
   };
 }

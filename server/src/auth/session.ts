@@ -10,6 +10,9 @@ export interface SessionLayer {
 
 const dayMs = 86_400_000;
 
+/** How long a session lasts after its last request (the cookie rolls); the store expires rows after that. */
+export const SESSION_LIFETIME_MS = 14 * dayMs;
+
 /**
  * Sessions live in MariaDB (the `sessions` table from the migrations), so they survive a server restart. The store
  * keeps its own small pool, which it ends on close.
@@ -23,7 +26,7 @@ export async function createSessionLayer(config: AppConfig): Promise<SessionLaye
     password: config.database.password,
     database: config.database.database,
     createDatabaseTable: false,
-    expiration: 14 * dayMs,
+    expiration: SESSION_LIFETIME_MS,
     // Expired sessions are swept by the job worker's scheduled task, once per period across all instances.
     clearExpired: false,
     endConnectionOnClose: true,
@@ -42,7 +45,7 @@ export async function createSessionLayer(config: AppConfig): Promise<SessionLaye
       httpOnly: true,
       sameSite: 'lax',
       secure: config.isCookieSecure,
-      maxAge: 14 * dayMs,
+      maxAge: SESSION_LIFETIME_MS,
       path: '/',
     },
   });

@@ -22,11 +22,21 @@ export const hexColour = z
   .regex(/^#[0-9A-Fa-f]{6}$/, 'Write the colour as # and six hex digits, like #F4A6C0')
   .transform((hex) => hex.toUpperCase());
 
-/** A length on the garment or in the hoop, mm. */
+/**
+ * The smallest length the catalogue stores: its columns keep hundredths of a millimetre, so anything shorter would
+ * be stored as 0 and break the table's "more than 0" checks.
+ */
+export const MIN_STORED_LENGTH_MM = 0.01;
+
+/** A length on the garment or in the hoop, mm: at least a hundredth of a millimetre, as the columns store it. */
 export const lengthMm = (label: string, maxMm = 2000) =>
   z
     .number({ error: `Enter ${label} in millimetres` })
     .positive(`${label[0]!.toUpperCase()}${label.slice(1)} must be more than 0 mm`)
+    .min(
+      MIN_STORED_LENGTH_MM,
+      `${label[0]!.toUpperCase()}${label.slice(1)} must be at least ${MIN_STORED_LENGTH_MM} mm`,
+    )
     .max(maxMm, `Keep ${label} at or under ${maxMm} mm`);
 
 export const sortOrder = z.number().int('Use a whole number').min(0).max(100_000).optional();

@@ -67,6 +67,8 @@ export const garmentSizeRequest = z
     mockupScale: z
       .number({ error: 'Enter the drawing scale' })
       .positive('The scale must be more than 0')
+      // The column keeps four decimals; a smaller scale would be stored as 0.
+      .min(0.0001, 'Use a scale of at least 0.0001')
       .max(10, 'Keep the scale at or under 10'),
     zones: z.array(zoneInput).min(1, 'Add at least one place for embroidery').max(10, 'Use at most 10 places'),
     sortOrder,

@@ -12,6 +12,7 @@ export const errorKinds = [
   'payment-failed',
   /** The server could not do the work in time (a heavy job past its time limit, or too many at once). */
   'busy',
+  'too-many-requests',
 ] as const;
 export type ErrorKind = (typeof errorKinds)[number];
 

@@ -10,6 +10,7 @@ export const statusByKind: Record<ErrorKind, number> = {
   'unsupported-type': 415,
   'payment-failed': 402,
   busy: 503,
+  'too-many-requests': 429,
 };
 
 /** An expected failure raised at the edge (middleware); the error handler answers it with its status and message. */

@@ -23,7 +23,7 @@ const legal: [OrderStatus, OrderAction, OrderActor[], OrderStatus][] = [
   ['changes_requested', 'send_proof', ['staff', 'owner'], 'proof_sent'],
   ['proof_sent', 'request_changes', ['customer'], 'changes_requested'],
   ['proof_sent', 'approve_proof', ['customer'], 'proof_approved'],
-  ['proof_approved', 'start_production', ['staff', 'owner'], 'in_production'],
+  ['proof_approved', 'start_production', ['staff', 'owner', 'system'], 'in_production'],
   ['in_production', 'mark_stitched', ['staff', 'owner'], 'stitched'],
   ['stitched', 'ship', ['staff', 'owner'], 'shipped'],
   ...(['awaiting_payment', 'authorized', 'proof_sent', 'changes_requested', 'proof_approved'] as const).map(

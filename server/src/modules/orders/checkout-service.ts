@@ -8,6 +8,7 @@ import { shopScheduleOf } from '../settings/settings-service.ts';
 import {
   describeDesignForOrder,
   findCustomerOrder,
+  findPlacedOrder,
   insertOrder,
   insertOrderNote,
   insertPendingPayment,
@@ -24,6 +25,7 @@ import type { CheckoutStartedResponse, PlaceOrderRequest } from '../../contracts
 import type { CurrentUser } from '../../contracts/users.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import { formatMoneyText } from '../mail/money-text.ts';
+import { orderPageUrl } from '../mail/mail-layout.ts';
 import { openCheckoutSession } from './checkout-session.ts';
 import { moveOrder } from './order-transitions.ts';
 import { sendLoggedMail } from '../mail/order-mail.ts';
@@ -38,6 +40,7 @@ export interface CheckoutDeps {
   storedQuotes: StoredQuoteService;
   appOrigin: string;
   now: () => Date;
+  log: (line: string) => void;
 }
 
 /**
@@ -95,6 +98,11 @@ export function createCheckoutService(deps: CheckoutDeps) {
       const message = `We can't have it ready by then, even as a rush. The earliest is ${dates.earliestRushDate}.`;
       return failure('conflict', message, { neededBy: message }, { reason: 'too-soon', ...dates });
     }
+    // The same checkout sent again (a double click, a retry after a lost answer) finds the order it made.
+    const placement = { quoteId: quote.id, designId: design.id };
+    const placed = await findPlacedOrder(db, customer.id, placement);
+    if (placed) return answerPlaced(customer, placed);
+
     const needsRush = request.neededBy < dates.earliestReadyDate && !quote.isRush;
     const hasExpired = quote.expiresAt.getTime() <= deps.now().getTime();
     if (needsRush || hasExpired) return repriced(quote, { needsRush, hasExpired, dates });
@@ -117,10 +125,17 @@ export function createCheckoutService(deps: CheckoutDeps) {
         item: { designId: design.id, sizeId: design.sizeId, quantity: quote.quantity, description },
         createdAt: now,
       });
+      if (orderId === undefined) return undefined;
       const paymentId = await insertPendingPayment(trx, { id: orderId, currency: quote.currency }, now);
       return { orderId, number, paymentId };
     });
-    const checkoutUrl = await startPayment(
+    if (!created) {
+      // Another request for the same quote and design committed first: answer with its order.
+      const first = await findPlacedOrder(db, customer.id, placement);
+      if (!first) throw new Error(`The order for quote ${quote.id} was taken and then not found.`);
+      return answerPlaced(customer, first);
+    }
+    const checkoutUrl = await paymentPageOrOrderPage(
       {
         id: created.orderId,
         number: created.number,
@@ -132,6 +147,51 @@ export function createCheckoutService(deps: CheckoutDeps) {
       created.paymentId,
     );
     return ok({ number: created.number, checkoutUrl });
+  }
+
+  /**
+   * The answer to a checkout that was placed before: the same 201 with the order's payment page. A pending attempt
+   * opens its page again (the payment row keys the provider's request, so the first session comes back), an order
+   * with no attempt left opens a new one, and an order that needs no payment sends the browser to its own page.
+   */
+  async function answerPlaced(customer: CurrentUser, order: OrderRecord): Promise<Result<CheckoutStartedResponse>> {
+    if (order.status === 'cancelled') {
+      return failure(
+        'conflict',
+        `Order ${order.number} was placed from this price and then cancelled. Price the design again to order it.`,
+        { quoteId: 'Price your design again before ordering' },
+      );
+    }
+    const payments = await listPayments(db, order.id);
+    if (!isPaymentNeeded(order, payments, deps.now()))
+      return ok({ number: order.number, checkoutUrl: orderPageUrl(deps.appOrigin, order.number) });
+    const pending = payments.findLast((payment) => payment.status === 'pending');
+    const paymentId = pending?.id ?? (await insertPendingPayment(db, order, deps.now()));
+    const description = (await readOrderDescription(db, order.id)) ?? order.number;
+    const checkoutUrl = await paymentPageOrOrderPage(
+      { ...order, description, customerEmail: customer.email },
+      paymentId,
+    );
+    return ok({ number: order.number, checkoutUrl });
+  }
+
+  /**
+   * After the order is committed the customer is always told about it: when the payment page cannot be opened now
+   * (the provider or the database is away), the answer is still 201 and leads to the order's page, which offers to
+   * pay; the same checkout sent again opens the page for the same attempt.
+   */
+  async function paymentPageOrOrderPage(
+    order: Parameters<typeof openCheckoutSession>[2],
+    paymentId: number,
+  ): Promise<string> {
+    try {
+      return await startPayment(order, paymentId);
+    } catch (error) {
+      deps.log(
+        `Order ${order.number}: the payment page did not open (${(error as Error).message}); it opens on retry.`,
+      );
+      return orderPageUrl(deps.appOrigin, order.number);
+    }
   }
 
   /** Prices the quote again (with rush when the date needs it) and answers with the change for the customer to confirm. */
@@ -165,8 +225,9 @@ export function createCheckoutService(deps: CheckoutDeps) {
       await updatePayment(db, paymentId, { checkout_session_id: session.id }, deps.now());
       return session.url;
     } catch (error) {
-      // The order stays awaiting payment, and its page offers to try again.
-      await updatePayment(db, paymentId, { status: 'failed' }, deps.now());
+      // The order stays awaiting payment, and its page offers to try again. Marking the attempt is best effort: a
+      // row left pending is opened again, under the same key, by the next request.
+      await updatePayment(db, paymentId, { status: 'failed' }, deps.now()).catch(() => undefined);
       throw error;
     }
   }

@@ -48,7 +48,13 @@ export const orderMoves: Readonly<Record<OrderAction, Move>> = {
   },
   request_changes: { from: ['proof_sent'], to: 'changes_requested', by: ['customer'], event: 'changes_requested' },
   approve_proof: { from: ['proof_sent'], to: 'proof_approved', by: ['customer'], event: 'proof_approved' },
-  start_production: { from: ['proof_approved'], to: 'in_production', by: studio, event: 'payment_captured' },
+  // The system moves it when the provider reports a capture made outside the app (payment-capture.ts).
+  start_production: {
+    from: ['proof_approved'],
+    to: 'in_production',
+    by: [...studio, 'system'],
+    event: 'payment_captured',
+  },
   mark_stitched: { from: ['in_production'], to: 'stitched', by: studio, event: 'stitched' },
   ship: { from: ['stitched'], to: 'shipped', by: studio, event: 'shipped' },
   cancel: {

@@ -23,6 +23,7 @@ import {
 import { sendLoggedMail, type LoggedMail } from '../mail/order-mail.ts';
 import { planOrderMove } from './order-flow.ts';
 import { moveOrder } from './order-transitions.ts';
+import { applyCapture } from './payment-capture.ts';
 import { orderCancelledMail, payAgainMail, refundIssuedMail } from './studio-order-mail.ts';
 
 export interface OrderPaymentDeps {
@@ -92,12 +93,25 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
       const now = deps.now();
       const order = await findStudioOrder(trx, number, { lock: true });
       if (!order) return { result: failure('not-found', `There is no order ${number}.`) };
+      const planned = planOrderMove(order.status, 'start_production', actor.role);
+      const payment = await lockLivePayment(trx, order.id);
       if (['captured', 'partially_refunded', 'refunded'].includes(order.paymentStatus)) {
+        // Charged outside the app before the proof was approved: the order moves on, nothing is charged again.
+        if (planned.ok && payment?.status === 'captured' && payment.paymentIntentId) {
+          await applyCapture(trx, {
+            orderId: order.id,
+            paymentId: payment.id,
+            paymentIntentId: payment.paymentIntentId,
+            capturedCents: payment.capturedCents,
+            actor: actor.role,
+            actorUserId: actor.userId,
+            now,
+          });
+          return { result: ok(await readOrderStanding(trx, order.id)) };
+        }
         return { result: failure('conflict', `Order ${number} has already been charged.`) };
       }
-      const planned = planOrderMove(order.status, 'start_production', actor.role);
       if (!planned.ok) return { result: failure(planned.kind, planned.reason) };
-      const payment = await lockLivePayment(trx, order.id);
       if (!payment || payment.status !== 'authorized' || !payment.paymentIntentId) {
         return {
           result: failure(
@@ -127,16 +141,15 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
         // Charged by an earlier attempt whose answer was lost: record that charge, never make a second one.
         capturedCents = intent.amount_received;
       }
-      await updatePayment(trx, order.id, payment.id, { status: 'captured', capturedCents, capturedAt: now });
-      const moved = await moveOrder(trx, {
+      await applyCapture(trx, {
         orderId: order.id,
-        action: 'start_production',
+        paymentId: payment.id,
+        paymentIntentId: payment.paymentIntentId,
+        capturedCents,
         actor: actor.role,
         actorUserId: actor.userId,
-        payload: { paymentIntentId: payment.paymentIntentId, amountCents: capturedCents },
         now,
       });
-      if (!moved.ok) throw new Error(`The order moved while it was locked: ${moved.error.message}`);
       return { result: ok(await readOrderStanding(trx, order.id)) };
     });
     return finish(outcome);

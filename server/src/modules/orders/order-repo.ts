@@ -62,6 +62,12 @@ export async function nextOrderNumber(db: Db): Promise<string> {
   return `${ORDER_NUMBER_PREFIX}-${Number((rows as { n: number | string }[])[0]!.n)}`;
 }
 
+/**
+ * The key that makes placing an order idempotent: one order per stored quote and saved design (a unique index on
+ * `orders.placement_key`).
+ */
+export const orderPlacementKey = (quoteId: number, designId: number) => `quote-${quoteId}-design-${designId}`;
+
 export interface OrderWrite {
   number: string;
   customerId: number;
@@ -77,25 +83,39 @@ export interface OrderWrite {
   createdAt: Date;
 }
 
-/** Writes the order awaiting payment with its one item and its created event; gives the order id. */
-export async function insertOrder(trx: Db, write: OrderWrite): Promise<number> {
+const isDuplicatePlacement = (error: unknown) =>
+  (error as { code?: string }).code === 'ER_DUP_ENTRY' && String(error).includes('orders_placement_key_unique');
+
+/**
+ * Writes the order awaiting payment with its one item and its created event; gives the order id, or undefined when
+ * an order for the same quote and design is already there (its placement key is taken).
+ */
+export async function insertOrder(trx: Db, write: OrderWrite): Promise<number | undefined> {
   const stamps = { created_at: write.createdAt, updated_at: write.createdAt };
-  const [orderId] = await trx('orders').insert({
-    number: write.number,
-    customer_id: write.customerId,
-    quote_id: write.quoteId,
-    status: 'awaiting_payment',
-    payment_status: 'none',
-    subtotal_cents: write.subtotalCents,
-    tax_cents: write.taxCents,
-    total_cents: write.totalCents,
-    currency: write.currency,
-    needed_by: write.neededBy,
-    ship_to: JSON.stringify(write.shipTo),
-    customer_note: write.note,
-    placed_at: null,
-    ...stamps,
-  });
+  const inserted = await trx('orders')
+    .insert({
+      number: write.number,
+      placement_key: orderPlacementKey(write.quoteId, write.item.designId),
+      customer_id: write.customerId,
+      quote_id: write.quoteId,
+      status: 'awaiting_payment',
+      payment_status: 'none',
+      subtotal_cents: write.subtotalCents,
+      tax_cents: write.taxCents,
+      total_cents: write.totalCents,
+      currency: write.currency,
+      needed_by: write.neededBy,
+      ship_to: JSON.stringify(write.shipTo),
+      customer_note: write.note,
+      placed_at: null,
+      ...stamps,
+    })
+    .catch((error: unknown) => {
+      if (isDuplicatePlacement(error)) return undefined;
+      throw error;
+    });
+  if (!inserted) return undefined;
+  const [orderId] = inserted;
   // One line: the quote priced one design on identical garments. The unit price is the pre-tax amount shared over
   // the garments; a one-off setup makes it inexact, so total_cents is the figure.
   await trx('order_items').insert({
@@ -122,6 +142,19 @@ export async function insertOrder(trx: Db, write: OrderWrite): Promise<number> {
 /** The customer's order by number; undefined when it is missing or someone else's. */
 export async function findCustomerOrder(db: Db, customerId: number, number: string): Promise<OrderRecord | undefined> {
   const row = await db('orders').select(orderColumns).where({ number, customer_id: customerId }).first();
+  return row ? toOrder(row) : undefined;
+}
+
+/** The customer's order placed from this quote and design, if there is one. */
+export async function findPlacedOrder(
+  db: Db,
+  customerId: number,
+  placement: { quoteId: number; designId: number },
+): Promise<OrderRecord | undefined> {
+  const row = await db('orders')
+    .select(orderColumns)
+    .where({ customer_id: customerId, placement_key: orderPlacementKey(placement.quoteId, placement.designId) })
+    .first();
   return row ? toOrder(row) : undefined;
 }
 

@@ -17,6 +17,7 @@ import {
 import type { LoggedMail } from '../mail/order-mail.ts';
 import { sendLoggedMail } from '../mail/order-mail.ts';
 import { moveOrder } from './order-transitions.ts';
+import { applyCapture } from './payment-capture.ts';
 import { finalStatuses } from './order-flow.ts';
 import { orderPlacedMail } from './customer-order-mail.ts';
 import { formatMoneyText } from '../mail/money-text.ts';
@@ -99,30 +100,37 @@ export function createPaymentWebhookService(deps: {
           now,
         );
       case 'payment_intent.succeeded': {
+        // Captured, by the studio's own charge (already recorded) or outside the app: the same rule either way.
         const pi = event.data.object;
-        return bringInLine(
-          trx,
-          pi.id,
-          (p) =>
-            p.status === 'authorized'
-              ? { status: 'captured', amount_captured_cents: pi.amount_received, captured_at: now }
-              : undefined,
+        const payment = await lockPaymentBy(trx, { paymentIntentId: pi.id });
+        if (payment?.status !== 'authorized') return undefined;
+        await applyCapture(trx, {
+          orderId: payment.orderId,
+          paymentId: payment.id,
+          paymentIntentId: pi.id,
+          capturedCents: Math.min(pi.amount_received, payment.authorizedCents),
+          actor: 'system',
+          actorUserId: null,
           now,
-        );
+        });
+        return undefined;
       }
       case 'charge.refunded': {
         const charge = event.data.object;
         const intentId = typeof charge.payment_intent === 'string' ? charge.payment_intent : charge.payment_intent?.id;
         if (!intentId) return undefined;
+        // A refund applies only to money that was captured, and only up to it; a refund reported for a hold that
+        // was never captured is recorded with the event and changes nothing.
         return bringInLine(
           trx,
           intentId,
           (p) => {
-            if (charge.amount_refunded <= p.refundedCents) return undefined;
-            const isWhole = charge.amount_refunded >= p.capturedCents;
+            if (!['captured', 'partially_refunded'].includes(p.status) || p.capturedCents <= 0) return undefined;
+            const refundedCents = Math.min(charge.amount_refunded, p.capturedCents);
+            if (refundedCents <= p.refundedCents) return undefined;
             return {
-              amount_refunded_cents: Math.min(charge.amount_refunded, p.capturedCents),
-              status: isWhole ? 'refunded' : 'partially_refunded',
+              amount_refunded_cents: refundedCents,
+              status: refundedCents === p.capturedCents ? 'refunded' : 'partially_refunded',
             };
           },
           now,

@@ -4,12 +4,7 @@ import { AuthorizationError, InternalOAuthError, TokenError } from 'passport-oau
 import { z } from 'zod';
 import { returnToPath, type CurrentUser } from '../../contracts/users.ts';
 import { validated } from '../../middleware/validate.ts';
-
-declare module 'express-session' {
-  interface SessionData {
-    returnTo?: string;
-  }
-}
+import type { SignInAppState } from '../../auth/oauth-state-cookie.ts';
 
 const startQuery = z.object({ returnTo: returnToPath.optional() });
 
@@ -39,13 +34,14 @@ export function createAuthRouter(deps: {
   router.get(
     '/google',
     validated({ query: startQuery }, ({ query }, req, res, next) => {
-      req.session.returnTo = query.returnTo ?? '/';
-      deps.signIn.authenticate('google', { prompt: 'select_account' } as never)(req, res, next);
+      // returnTo rides in the attempt's signed state cookie (auth/oauth-state-cookie.ts), not in a session.
+      const state: SignInAppState = { returnTo: query.returnTo ?? '/' };
+      deps.signIn.authenticate('google', { prompt: 'select_account', state } as never)(req, res, next);
     }),
   );
 
   router.get('/google/callback', (req, res, next) => {
-    // The custom callback reads returnTo before req.logIn regenerates the session (which drops its old contents).
+    // The custom callback reads the visitor's upload key before req.logIn regenerates the session (which drops it).
     deps.signIn.authenticate('google', (error: unknown, user: Express.User | false, info?: unknown) => {
       const signInProblem = (message: string) => res.redirect(`/sign-in?problem=${encodeURIComponent(message)}`);
       // A code that was already used or has expired is the visitor's back button, not a fault of ours.
@@ -55,9 +51,9 @@ export function createAuthRouter(deps: {
         return signInProblem('We could not reach the sign-in service just now. Please try again in a minute.');
       }
       if (error) return next(error);
-      const returnTo = req.session.returnTo ?? '/';
-      const { artworkSessionKey } = req.session;
       if (!user) return signInProblem(problemMessage(info));
+      const returnTo = (info as { state?: SignInAppState } | undefined)?.state?.returnTo ?? '/';
+      const { artworkSessionKey } = req.session;
       req.logIn(user, (loginError) => {
         if (loginError) return next(loginError);
         if (!artworkSessionKey) return res.redirect(returnTo);

@@ -1,6 +1,7 @@
 import { Strategy as GoogleStrategy, type Profile, type VerifyCallback } from 'passport-google-oauth20';
 import type { AppConfig } from '../../config.ts';
 import type { UserService } from './user-service.ts';
+import { createOAuthStateCookieStore } from '../../auth/oauth-state-cookie.ts';
 
 /**
  * The Google sign-in strategy. With GOOGLE_OAUTH_BASE_URL set (development and tests) the same strategy talks to the
@@ -14,7 +15,9 @@ export function createGoogleStrategy(config: AppConfig, users: UserService): Goo
       clientSecret: config.google.clientSecret,
       callbackURL: `${config.appOrigin}/api/auth/google/callback`,
       scope: ['openid', 'email', 'profile'],
-      state: true,
+      // The attempt's state lives in a signed cookie, not the session: starting a sign-in stores no session.
+      // passport-oauth2 calls a store by its arity; its types only list the two- and three-argument forms.
+      store: createOAuthStateCookieStore(config.isCookieSecure) as never,
       ...(base
         ? { authorizationURL: `${base}/authorize`, tokenURL: `${base}/token`, userProfileURL: `${base}/userinfo` }
         : {}),

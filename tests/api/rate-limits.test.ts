@@ -1,0 +1,132 @@
+/**
+ * The abuse limits, lowered for this file's app: each limited route answers 429 with Retry-After and a sentence once
+ * a client has used its share, and the count is kept in the database, so a second server instance sees it too.
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import { createApp } from '../../server/src/app.ts';
+import { createSessionLayer, type SessionLayer } from '../../server/src/auth/session.ts';
+import { createStripeClient } from '../../server/src/integrations/payment-gateway.ts';
+import { createHeavyWork } from '../../server/src/integrations/heavy-work.ts';
+import { createMailer, type Mailer } from '../../server/src/integrations/mailer.ts';
+import { fixedNow, useApiHarness, type ApiAgent } from '../support/api-harness.ts';
+import { errorOf } from '../support/api-calls.ts';
+import { daisyDressQuote } from '../support/sample-designs.ts';
+
+const harness = useApiHarness({
+  env: {
+    RATE_LIMIT_WINDOW_SECONDS: '600',
+    RATE_LIMIT_SIGN_IN: '8',
+    RATE_LIMIT_QUOTE_PREVIEWS: '3',
+    RATE_LIMIT_UPLOADS: '3',
+    RATE_LIMIT_ORDERS: '3',
+    RATE_LIMIT_PROOF_ANSWERS: '3',
+  },
+});
+
+let priya: ApiAgent;
+let harriet: ApiAgent;
+let owner: ApiAgent;
+beforeAll(async () => {
+  // Three sign-ins use 6 of the address's 8 sign-in requests (a start and a callback each).
+  priya = harness.agent();
+  harriet = harness.agent();
+  owner = harness.agent();
+  await harness.signIn(priya, 'priya@example.test');
+  await harness.signIn(harriet, 'harriet@example.test');
+  await harness.signIn(owner, 'marigold@wrenandbobbin.test');
+});
+
+/** The answer once over the limit: 429, a wait in seconds no longer than the window, and a sentence with it. */
+function expectRefused(res: request.Response, what: RegExp) {
+  expect(res.status).toBe(429);
+  const wait = Number(res.headers['retry-after']);
+  expect(wait).toBeGreaterThan(0);
+  expect(wait).toBeLessThanOrEqual(600);
+  const error = errorOf(res.body);
+  expect(error.kind).toBe('too-many-requests');
+  expect(error.message).toMatch(what);
+  expect(error.message).toMatch(/try again in \d+ (seconds|minutes)/);
+}
+
+describe('rate limits', () => {
+  it('when a visitor asks for more price checks than the limit, then the next is 429 with Retry-After', async () => {
+    const visitor = harness.agent();
+    for (let i = 0; i < 3; i += 1) await visitor.post('/api/quotes/preview').send(daisyDressQuote).expect(200);
+    expectRefused(await visitor.post('/api/quotes/preview').send(daisyDressQuote), /more price checks/);
+  });
+
+  it('when sign-in is started again and again from one address, then it is refused after the limit', async () => {
+    const visitor = harness.agent();
+    await visitor.get('/api/auth/google').expect(302);
+    await visitor.get('/api/auth/google').expect(302);
+    expectRefused(await visitor.get('/api/auth/google'), /more sign-in attempts/);
+    expectRefused(await visitor.get('/api/auth/google/callback?code=x&state=y'), /more sign-in attempts/);
+  });
+
+  it('when a visitor sends more uploads than the limit, then the next is refused before the file is read', async () => {
+    const visitor = harness.agent();
+    const svg = Buffer.from(
+      '<svg xmlns="http://www.w3.org/2000/svg" width="10mm" height="10mm"><rect width="5" height="5"/></svg>',
+    );
+    const upload = () =>
+      visitor.post('/api/artwork').attach('file', svg, { filename: 'a.svg', contentType: 'image/svg+xml' });
+    for (let i = 0; i < 3; i += 1) expect((await upload()).status).not.toBe(429);
+    expectRefused(await upload(), /more uploads/);
+
+    // The studio's uploads (motif drawings, proof photos) share one count per member.
+    const motif = () =>
+      owner
+        .post('/api/admin/catalogue/motifs/preview')
+        .attach('file', svg, { filename: 'm.svg', contentType: 'image/svg+xml' });
+    for (let i = 0; i < 3; i += 1) expect((await motif()).status).not.toBe(429);
+    expectRefused(
+      await owner
+        .post('/api/admin/orders/WB-1009/proofs')
+        .field('source', 'photo')
+        .attach('file', svg, { filename: 'p.svg', contentType: 'image/svg+xml' }),
+      /more uploads/,
+    );
+  });
+
+  it('when a customer sends more checkouts than the limit, then the next is 429, counted for their account', async () => {
+    for (let i = 0; i < 3; i += 1) await priya.post('/api/orders').send({}).expect(400);
+    expectRefused(await priya.post('/api/orders').send({}), /more checkouts/);
+    // Another customer at the same address has their own count.
+    await harriet.post('/api/orders').send({}).expect(400);
+  });
+
+  it('when a customer answers proofs more often than the limit, then the next answer is 429', async () => {
+    for (let i = 0; i < 3; i += 1) await harriet.post('/api/orders/WB-1008/proofs/1/approval').send({}).expect(409);
+    expectRefused(
+      await harriet.post('/api/orders/WB-1008/proofs/2/change-request').send({ comment: 'x' }),
+      /more answers to proofs/,
+    );
+  });
+
+  it('when a second server instance shares the database, then it sees the counts the first one kept', async () => {
+    const sessions: SessionLayer = await createSessionLayer(harness.config);
+    const mailer: Mailer = createMailer(harness.config);
+    const heavyWork = createHeavyWork({ ...harness.config.heavyWork, threads: 1 });
+    try {
+      const second = createApp({
+        heavyWork,
+        config: harness.config,
+        db: harness.db,
+        sessions,
+        stripe: createStripeClient(harness.config),
+        mailer,
+        now: fixedNow,
+        log: () => {},
+      });
+      const first = harness.agent();
+      await first.post('/api/quotes/preview').send({}).expect(429);
+      const res = await request(second).post('/api/quotes/preview').set('Origin', harness.config.appOrigin).send({});
+      expectRefused(res, /more price checks/);
+    } finally {
+      await sessions.close();
+      mailer.close();
+      await heavyWork.close();
+    }
+  });
+});
