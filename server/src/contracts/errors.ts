@@ -10,6 +10,8 @@ export const errorKinds = [
   'too-large',
   'unsupported-type',
   'payment-failed',
+  /** The request is sound but needs the person to confirm something first (the safety notes at checkout). */
+  'needs-acknowledgement',
 ] as const;
 export type ErrorKind = (typeof errorKinds)[number];
 

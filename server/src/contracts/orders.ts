@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { designDocument } from './designs.ts';
 import { orderStatus, paymentStatus } from './order-status.ts';
+import { guidanceMessage } from './guidance.ts';
 
 /** Most pins a customer may drop on one proof: more is a conversation for e-mail. */
 export const MAX_PROOF_PINS = 20;
@@ -69,6 +70,11 @@ export const placeOrderRequest = z.strictObject({
   neededBy: calendarDate,
   shipTo,
   note: optionalText('the note to the studio', MAX_ORDER_NOTE),
+  /**
+   * The customer ticked that they have read the safety notes for the garment and size. Needed when any note is more
+   * than good practice (a caution or a warning); the server works the notes out itself and refuses (422) without it.
+   */
+  hasReadSafetyNotes: z.boolean().optional(),
 });
 export type PlaceOrderRequest = z.infer<typeof placeOrderRequest>;
 
@@ -194,6 +200,8 @@ export const customerOrderResponse = z.object({
     colourHex: z.string(),
     document: designDocument,
   }),
+  /** The safety notes for the garment, size and motifs as ordered, worked out as the catalogue states them now. */
+  cautions: z.array(guidanceMessage),
   payment: z.object({
     /** Held on the card, not yet charged. */
     heldCents: z.number().int(),

@@ -56,8 +56,8 @@ export type {
   StabilizerInput,
   StabilizerKind,
 } from './advise-stabilizer.ts';
-export { garmentCautions } from './garment-cautions.ts';
-export type { GarmentCautionInput } from './garment-cautions.ts';
+export { cautionsForGarment, garmentCautions, needsSafetyAcknowledgement } from './garment-cautions.ts';
+export type { CordPlace, GarmentCautionInput, GarmentClosure, GarmentSafetyFactsInput } from './garment-cautions.ts';
 export { layoutHemBorder } from './hem-border-layout.ts';
 export type { BorderBand, BorderRepeat, HemZone } from './hem-border-layout.ts';
 export { recolourThreadGroups } from './recolour-threads.ts';

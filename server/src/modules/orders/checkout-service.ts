@@ -20,6 +20,7 @@ import {
   type PaymentRecord,
 } from './order-repo.ts';
 import { restoreDesign } from '../../contracts/designs.ts';
+import { needsSafetyAcknowledgement } from '../../engine/index.ts';
 import type { CheckoutStartedResponse, PlaceOrderRequest } from '../../contracts/orders.ts';
 import type { CurrentUser } from '../../contracts/users.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
@@ -86,6 +87,15 @@ export function createCheckoutService(deps: CheckoutDeps) {
       );
     }
 
+    const cautions = await deps.storedQuotes.cautionsOf(quote);
+    if (needsSafetyAcknowledgement(cautions) && request.hasReadSafetyNotes !== true) {
+      const titles = cautions.filter((caution) => caution.severity !== 'info').map((caution) => caution.title);
+      const message = `Please read the safety notes for this garment (${titles.join('; ')}) and tick that you have read them before paying.`;
+      return failure('needs-acknowledgement', message, {
+        hasReadSafetyNotes: 'Tick that you have read the safety notes',
+      });
+    }
+
     const dates = await deps.storedQuotes.readyDatesToday();
     const shop = await shopScheduleOf(db);
     const today = shopToday(deps.now(), shop.timezone);
@@ -117,6 +127,15 @@ export function createCheckoutService(deps: CheckoutDeps) {
         item: { designId: design.id, sizeId: design.sizeId, quantity: quote.quantity, description },
         createdAt: now,
       });
+      if (needsSafetyAcknowledgement(cautions)) {
+        await insertOrderNote(trx, {
+          orderId,
+          type: 'safety_notes_read',
+          actorUserId: customer.id,
+          payload: { codes: cautions.filter((caution) => caution.severity !== 'info').map((caution) => caution.code) },
+          at: now,
+        });
+      }
       const paymentId = await insertPendingPayment(trx, { id: orderId, currency: quote.currency }, now);
       return { orderId, number, paymentId };
     });

@@ -26,11 +26,18 @@ import { sendLoggedMail } from '../mail/order-mail.ts';
 import { proofAnsweredStudioMail, proofApprovedMail } from './customer-order-mail.ts';
 import { customerTimeline } from './customer-order-wording.ts';
 import { isPaymentNeeded } from './checkout-service.ts';
+import type { QuoteService } from '../quotes/quote-service.ts';
 
 type ProofAnswer = z.output<typeof proofAnswerRequest>;
 
 /** The customer's orders and proofs: each person reaches only their own, and anyone else's reads as missing. */
-export function createCustomerOrderService(deps: { db: Db; mailer: Mailer; appOrigin: string; now: () => Date }) {
+export function createCustomerOrderService(deps: {
+  db: Db;
+  mailer: Mailer;
+  quotes: Pick<QuoteService, 'cautionsFor'>;
+  appOrigin: string;
+  now: () => Date;
+}) {
   const { db } = deps;
 
   async function list(customerId: number): Promise<Result<z.infer<typeof customerOrderListResponse>>> {
@@ -68,6 +75,11 @@ export function createCustomerOrderService(deps: { db: Db; mailer: Mailer; appOr
     const latestSent = detail.proofs.findLast((p) => p.status === 'sent');
     const latestVersion = detail.proofs.at(-1)?.version;
     const needsPayment = isPaymentNeeded(order, payments, now);
+    const { garmentId, sizeId } = detail.design;
+    const cautions = await deps.quotes.cautionsFor(
+      { garmentId, sizeId, document: restored.data },
+      { userId: customerId },
+    );
     const flowActions = availableOrderActions(order.status, 'customer').filter(
       (action) => action === 'cancel' || latestSent !== undefined,
     );
@@ -83,6 +95,7 @@ export function createCustomerOrderService(deps: { db: Db; mailer: Mailer; appOr
       },
       quote: { ruleSetVersion: detail.quote.ruleSetVersion, lines: detail.quote.lines },
       design: { ...detail.design, document: restored.data },
+      cautions,
       payment: paymentSummary(payments, detail.events, needsPayment, now),
       proofs: detail.proofs.map(({ hasImage, ...proof }) => ({
         ...proof,

@@ -8,7 +8,7 @@ import {
   type StoredQuote,
   type StoredQuoteInput,
 } from './stored-quote-repo.ts';
-import { estimateRunMinutes } from '../../engine/index.ts';
+import { estimateRunMinutes, type GuidanceMessage } from '../../engine/index.ts';
 import type { CreateQuoteRequest, StoredQuoteResponse } from '../../contracts/stored-quotes.ts';
 import type { QuotePreviewRequest } from '../../contracts/quotes.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
@@ -145,13 +145,25 @@ export function createStoredQuoteService(deps: { db: Db; quotes: QuoteService; n
     });
   }
 
+  /**
+   * The safety cautions for a quote's design as the catalogue states the garment, size and motifs today, so a fact
+   * the studio corrected since the quote counts; a quote too old to be figured again keeps the cautions it showed.
+   */
+  async function cautionsOf(quote: StoredQuote): Promise<GuidanceMessage[]> {
+    const { garmentId, sizeId, document, figures } = quote.input;
+    if (garmentId === undefined || sizeId === undefined || !document) return figures?.cautions ?? [];
+    const owner = quote.customerId === null ? undefined : { userId: quote.customerId };
+    const cautions = await deps.quotes.cautionsFor({ garmentId, sizeId, document }, owner);
+    return cautions.length > 0 ? cautions : (figures?.cautions ?? []);
+  }
+
   /** The ready dates for an order placed now. */
   async function readyDatesToday() {
     const shop = await shopScheduleOf(db);
     return workOutReadyDates(shopToday(deps.now(), shop.timezone), shop.leadTimeDays);
   }
 
-  return { create, get, reprice, readyDatesToday };
+  return { create, get, reprice, cautionsOf, readyDatesToday };
 }
 
 export type StoredQuoteService = ReturnType<typeof createStoredQuoteService>;
