@@ -33,8 +33,15 @@ export type ApiAgent = ReturnType<ApiHarness['agent']>;
 
 export const fixedNow = () => new Date('2026-12-01T10:00:00Z');
 
-/** `env` overrides the test stack's settings, e.g. STRIPE_API_URL and SMTP_URL of fakes a test file starts itself. */
-export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {}): Promise<ApiHarness> {
+/** What a test file may change about its harness. */
+interface HarnessOptions {
+  /** Overrides of the test stack's settings, e.g. STRIPE_API_URL and SMTP_URL of fakes a test file starts itself. */
+  env?: NodeJS.ProcessEnv;
+  /** The app's clock; `fixedNow` unless a test needs another moment (the shop's evening, say). */
+  now?: () => Date;
+}
+
+export async function startApiHarness(options: HarnessOptions = {}): Promise<ApiHarness> {
   const google = await startGoogleOAuthFake({
     port: 0,
     identities: demoPeople.map(({ sub, email, name, givenName, familyName }) => ({
@@ -59,7 +66,7 @@ export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {})
   const sessions: SessionLayer = await createSessionLayer(config);
   const mailer = createMailer(config);
   const stripe = createStripeClient(config);
-  const app = createApp({ config, db, sessions, stripe, mailer, now: fixedNow, log: () => {} });
+  const app = createApp({ config, db, sessions, stripe, mailer, now: options.now ?? fixedNow, log: () => {} });
 
   const agent = () => request.agent(app).set('Origin', config.appOrigin);
 
@@ -97,7 +104,7 @@ export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {})
  * The harness for one test file: started before its tests and closed after them by hooks this registers, so the
  * file only says what it needs. Its members may be used inside tests and hooks, once it has started.
  */
-export function useApiHarness(options: { env?: NodeJS.ProcessEnv } = {}): Omit<ApiHarness, 'close'> {
+export function useApiHarness(options: HarnessOptions = {}): Omit<ApiHarness, 'close'> {
   let started: ApiHarness | undefined;
   beforeAll(async () => {
     started = await startApiHarness(options);

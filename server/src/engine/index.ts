@@ -65,3 +65,13 @@ export type { PaintableElement } from './recolour-threads.ts';
 
 export { apportionStitches, foldUnderlay, svgCanvasSizeMm, svgColoursInOrder } from './motif-figures.ts';
 export type { MotifStitchMix } from './motif-figures.ts';
+export {
+  addCalendarDays,
+  addWorkingDays,
+  dueDateOf,
+  isPastDue,
+  isWorkingDay,
+  shopDayOf,
+  weekStartOf,
+} from './shop-calendar.ts';
+export type { DatedOrder, ShopCalendar } from './shop-calendar.ts';

@@ -20,7 +20,7 @@ import {
   type PaymentRecord,
 } from './order-repo.ts';
 import { restoreDesign } from '../../contracts/designs.ts';
-import { needsSafetyAcknowledgement } from '../../engine/index.ts';
+import { needsSafetyAcknowledgement, shopDayOf } from '../../engine/index.ts';
 import type { CheckoutStartedResponse, PlaceOrderRequest } from '../../contracts/orders.ts';
 import type { CurrentUser } from '../../contracts/users.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
@@ -29,7 +29,6 @@ import { openCheckoutSession } from './checkout-session.ts';
 import { moveOrder } from './order-transitions.ts';
 import { sendLoggedMail } from '../mail/order-mail.ts';
 import { orderCancelledMail } from './customer-order-mail.ts';
-import { shopToday } from '../quotes/ready-dates.ts';
 import { findStoredQuote, type StoredQuote, type StoredQuoteService } from '../quotes/stored-quote-service.ts';
 
 export interface CheckoutDeps {
@@ -98,7 +97,7 @@ export function createCheckoutService(deps: CheckoutDeps) {
 
     const dates = await deps.storedQuotes.readyDatesToday();
     const shop = await shopScheduleOf(db);
-    const today = shopToday(deps.now(), shop.timezone);
+    const today = shopDayOf(deps.now().getTime(), shop.timezone);
     if (request.neededBy < today)
       return failure('invalid', 'Choose a date from today on.', { neededBy: 'Choose a date from today on' });
     if (request.neededBy < dates.earliestRushDate) {

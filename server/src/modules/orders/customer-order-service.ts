@@ -9,7 +9,7 @@ import {
   recordProofAnswer,
 } from './customer-order-repo.ts';
 import { findCustomerOrder, listPayments, type PaymentRecord } from './order-repo.ts';
-import { shopScheduleOf } from '../settings/settings-service.ts';
+import { shopCalendarOf, shopScheduleOf } from '../settings/settings-service.ts';
 import { restoreDesign } from '../../contracts/designs.ts';
 import type {
   CustomerOrderAction,
@@ -27,6 +27,7 @@ import { proofAnsweredStudioMail, proofApprovedMail } from './customer-order-mai
 import { customerTimeline } from './customer-order-wording.ts';
 import { isPaymentNeeded } from './checkout-service.ts';
 import type { QuoteService } from '../quotes/quote-service.ts';
+import { dueDateOf } from '../../engine/index.ts';
 
 type ProofAnswer = z.output<typeof proofAnswerRequest>;
 
@@ -40,8 +41,18 @@ export function createCustomerOrderService(deps: {
 }) {
   const { db } = deps;
 
+  /** The due date of each order by the one rule, in the shop's calendar. */
+  async function dueDates() {
+    const schedule = await shopCalendarOf(db);
+    return (order: { neededBy: string | null; placedAt: string | null }) =>
+      dueDateOf(
+        { neededBy: order.neededBy, placedAtMs: order.placedAt === null ? null : Date.parse(order.placedAt) },
+        schedule,
+      );
+  }
+
   async function list(customerId: number): Promise<Result<z.infer<typeof customerOrderListResponse>>> {
-    const orders = await listCustomerOrders(db, customerId);
+    const [orders, dueDateOfOrder] = await Promise.all([listCustomerOrders(db, customerId), dueDates()]);
     const proofWaiting = await ordersWithProofWaiting(
       db,
       orders.map((o) => o.id),
@@ -57,6 +68,7 @@ export function createCustomerOrderService(deps: {
         totalCents: o.totalCents,
         currency: o.currency,
         neededBy: o.neededBy,
+        dueDate: dueDateOfOrder(o),
         createdAt: o.createdAt,
         placedAt: o.placedAt,
         isWaitingOnCustomer: o.status === 'awaiting_payment' || (o.status === 'proof_sent' && proofWaiting.has(o.id)),
@@ -90,6 +102,7 @@ export function createCustomerOrderService(deps: {
     return ok({
       order: {
         ...withoutId(order),
+        dueDate: (await dueDates())(order),
         isRush: detail.quote.isRush,
         isWaitingOnCustomer: needsPayment || latestSent !== undefined,
       },

@@ -78,8 +78,8 @@ export function OrderPage() {
         </div>
         <p className="mt-1 text-walnut-700">
           {summary.description} · {formatMoney(summary.totalCents, summary.currency)}
-          {summary.neededBy &&
-            ` · needed by ${new Date(`${summary.neededBy}T12:00:00Z`).toLocaleDateString('en-US', { month: 'long', day: 'numeric' })}`}
+          {summary.dueDate &&
+            ` · ${summary.neededBy ? 'needed by' : 'ready by about'} ${new Date(`${summary.dueDate}T12:00:00Z`).toLocaleDateString('en-US', { month: 'long', day: 'numeric', timeZone: 'UTC' })}`}
           {summary.isRush && ' · rush'}
         </p>
       </div>
