@@ -8,6 +8,8 @@ import { savedDesignResponse } from '../../server/src/contracts/saved-designs.ts
 import { apiErrorBody } from '../../server/src/contracts/errors.ts';
 import { startPaymentHarness, type PaymentHarness } from '../support/payment-stand-ins.ts';
 import { signedInAgent } from '../support/api-calls.ts';
+import { productionSheetResponse } from '../../server/src/contracts/production-sheet.ts';
+import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 
 let harness: PaymentHarness;
 beforeAll(async () => {
@@ -204,5 +206,39 @@ describe('POST /api/orders with safety notes', () => {
     const page = customerOrderResponse.parse((await dominic.get(`/api/orders/${placed.number}`).expect(200)).body);
     expect(codesOf(page.cautions)).toEqual(['caution.neck-ties', 'caution.thread-ends', 'caution.local-rules']);
     expect(page.timeline.map((entry) => entry.title)).toContain('You read the safety notes for this garment');
+  });
+});
+
+describe('GET /api/admin/orders/:number/production-sheet', () => {
+  const pdfText = async (bytes: Buffer) => {
+    // Read back with pdfjs-dist, independent of the pdfkit that wrote it.
+    const pdf = await getDocument({ data: new Uint8Array(bytes), useSystemFonts: false }).promise;
+    const pages = await Promise.all(
+      Array.from({ length: pdf.numPages }, async (_, i) => (await pdf.getPage(i + 1)).getTextContent()),
+    );
+    return pages
+      .flatMap((page) => page.items.map((item) => ('str' in item ? item.str : '')))
+      .join(' ')
+      .replace(/\s+/g, ' ');
+  };
+
+  it('when the studio prints the sheet of Harriet’s small bib, then page and PDF carry the neck-fastening caution', async () => {
+    const staff = await signedInAgent(harness, 'tobias@wrenandbobbin.test');
+    const sheet = productionSheetResponse.parse(
+      (await staff.get('/api/admin/orders/WB-1001/production-sheet').expect(200)).body,
+    );
+    expect(codesOf(sheet.cautions)).toEqual(['caution.neck-closure', 'caution.thread-ends', 'caution.local-rules']);
+    const res = await staff
+      .get('/api/admin/orders/WB-1001/production-sheet.pdf?paper=letter')
+      .buffer(true)
+      .parse((response, done) => {
+        const chunks: Buffer[] = [];
+        response.on('data', (chunk: Buffer) => chunks.push(chunk));
+        response.on('end', () => done(null, Buffer.concat(chunks)));
+      })
+      .expect(200);
+    const text = await pdfText(res.body as Buffer);
+    expect(text).toContain('Fastens round the neck: This garment fastens round the neck with a snap.');
+    expect(text).toContain('follow your local regulations');
   });
 });
