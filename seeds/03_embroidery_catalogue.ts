@@ -49,6 +49,8 @@ export async function seed(knex: Knex): Promise<void> {
       max_scale_pct: motif.maxScalePct,
       gap_mm: borderGapMm,
       default_thread_codes: JSON.stringify(motif.threadCodes),
+      // The studio's motifs are all stitches: no appliqué, buttons, bows or beads to come off.
+      trims: '[]',
       is_active: true,
       sort_order: index + 1,
       created_by_user_id: userIds.marigold,

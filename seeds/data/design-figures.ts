@@ -66,6 +66,7 @@ const seededCatalogue: Omit<QuoteCatalogue, 'garment' | 'size'> = {
         colourCount: threadCodes.length,
         minScalePct,
         maxScalePct,
+        trims: [],
       },
     ]),
   ),
@@ -178,6 +179,7 @@ export function designFigures(spec: DesignChoice): DesignFigures {
       fabricType: garment.fabricType,
       isNapped: garment.isNapped,
       minAgeMonths: garment.ageMonths[0],
+      safety: garment.safety,
     },
     size: {
       id: size.id,
@@ -186,6 +188,7 @@ export function designFigures(spec: DesignChoice): DesignFigures {
       hemFrontMm: size.hem?.frontMm ?? null,
       hemCircumferenceMm: size.hem?.circumferenceMm ?? null,
       zones,
+      minAgeMonths: size.ageMonths[0],
     },
   };
   const draft: DesignDocument = {

@@ -186,7 +186,7 @@ export function createApp(deps: AppDeps): Express {
     '/api/orders',
     createOrdersRouter({
       checkout: createCheckoutService({ db, stripe, mailer, storedQuotes, appOrigin, now, log: deps.log }),
-      customerOrders: createCustomerOrderService({ db, mailer, appOrigin, now }),
+      customerOrders: createCustomerOrderService({ db, mailer, quotes, appOrigin, now }),
     }),
   );
   app.use('/api/artwork', createArtworkRouter({ artwork, uploadMaxBytes }));

@@ -21,6 +21,9 @@ const seeded: ShopSettings = {
   setupMinutes: 10,
   leadTimeDays: 10,
   machineHoursPerWeek: 30,
+  timeZone: 'America/Chicago',
+  closedWeekdays: [0, 6],
+  holidays: [],
 };
 
 const runTime = async () =>
@@ -61,6 +64,27 @@ describe('/api/admin/settings', () => {
       machineHoursPerWeek: 'A week has 168 hours',
       leadTimeDays: 'Use whole working days',
     });
+  });
+
+  it('when the owner closes the shop on 9 December and sends a made-up zone and a 31 November, then the zone and day are refused, and the holiday pushes the ready date', async () => {
+    const readyDates = async () => (await harness.agent().get('/api/quotes/ready-dates').expect(200)).body;
+    // The harness clock is Tuesday 1 December 04:00 in Chicago: 10 working days on is Tuesday 15 December.
+    expect(await readyDates()).toMatchObject({ earliestReadyDate: '2026-12-15', earliestRushDate: '2026-12-08' });
+    const refused = await owner
+      .put('/api/admin/settings')
+      .send({ ...seeded, timeZone: 'Mars/Olympus', holidays: ['2026-11-31'] })
+      .expect(400);
+    expect(refused.body.error.fields).toMatchObject({
+      timeZone: 'Use a time zone name like America/Chicago or Europe/London',
+      'holidays.0': 'That day does not exist',
+    });
+    const closed = { ...seeded, holidays: ['2026-12-09'] };
+    expect(
+      shopSettingsResponse.parse((await owner.put('/api/admin/settings').send(closed).expect(200)).body).settings,
+    ).toEqual(closed);
+    // Wednesday 9 December is stepped over: the 10th working day is Wednesday 16; the rush's 5th is still the 8th.
+    expect(await readyDates()).toMatchObject({ earliestReadyDate: '2026-12-16', earliestRushDate: '2026-12-08' });
+    await owner.put('/api/admin/settings').send(seeded).expect(200);
   });
 
   it('when the owner slows the machine and lengthens hooping, then quotes’ run-time estimates use the new pace at once', async () => {

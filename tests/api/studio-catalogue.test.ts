@@ -53,6 +53,7 @@ function uploadPreview(
 
 const newMotif = (overrides: Partial<CreateMotifRequest> = {}): CreateMotifRequest => ({
   slug: 'rosy-square',
+  trims: [],
   name: 'Rosy square',
   kind: 'single',
   svg: squareInch,
@@ -284,6 +285,8 @@ describe('garments, sizes and fabric colours', () => {
   const size = {
     code: '3T',
     label: '3 years',
+    minAgeMonths: 36,
+    maxAgeMonths: 48,
     hemFrontMm: 300,
     hemCircumferenceMm: 620,
     mockupScale: 1,
@@ -354,6 +357,8 @@ describe('garments, sizes and fabric colours', () => {
       .send({
         code: size.code,
         label: size.label,
+        minAgeMonths: size.minAgeMonths,
+        maxAgeMonths: 66,
         hemFrontMm: 545,
         hemCircumferenceMm: 1090,
         mockupScale: size.mockupScale,
@@ -367,7 +372,11 @@ describe('garments, sizes and fabric colours', () => {
     const listed = garmentListResponse
       .parse((await harness.agent().get('/api/catalogue/garments')).body)
       .garments.find((g) => g.id === dress.id)!;
-    expect(listed.sizes.find((s) => s.id === size.id)).toMatchObject({ hemFrontMm: 545, hemCircumferenceMm: 1090 });
+    expect(listed.sizes.find((s) => s.id === size.id)).toMatchObject({
+      hemFrontMm: 545,
+      hemCircumferenceMm: 1090,
+      maxAgeMonths: 66,
+    });
     expect(listed.sizes.find((s) => s.id === size.id)!.zones.find((zone) => zone.code === 'hem')?.hemOffsetMm).toBe(
       38.1,
     );

@@ -141,8 +141,11 @@ describe('GET /api/admin/orders/due (the calendar)', () => {
       (await staff.get('/api/admin/orders/due?from=2026-12-01&to=2026-12-31').expect(200)).body,
     );
     expect(due.today).toBe('2026-12-01');
+    // WB-1006 has no date asked for: it is due by the lead time, 10 working days after its card was held on
+    // Saturday 21 November in Chicago, so on Friday 4 December.
     expect(due.orders.map((order) => order.number)).toEqual([
       'WB-1009',
+      'WB-1006',
       'WB-1003',
       'WB-1010',
       'WB-1013',
@@ -151,6 +154,7 @@ describe('GET /api/admin/orders/due (the calendar)', () => {
       'WB-1007',
     ]);
     expect(due.orders[0]!.isOverdue).toBe(true);
+    expect(due.orders[1]).toMatchObject({ neededBy: null, dueDate: '2026-12-04', isOverdue: false });
     expect(due.orders.every((order) => !['shipped', 'cancelled', 'refunded'].includes(order.status))).toBe(true);
   });
 

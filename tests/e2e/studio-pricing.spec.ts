@@ -142,3 +142,34 @@ test('when the owner lowers the weekly machine hours in Settings, then Today dra
   await page.getByRole('button', { name: 'Save settings' }).click();
   await expect(page.getByText('Saved. New quotes use these figures.')).toBeVisible();
 });
+
+test('when the owner closes the shop on the day an order would be ready, then the shop’s ready date moves on a working day', async ({
+  page,
+}) => {
+  await signInAsOwner(page);
+  const readyDate = async () => (await (await page.request.get('/api/quotes/ready-dates')).json()).earliestReadyDate;
+  const before: string = await readyDate();
+  await page.getByRole('link', { name: 'Settings' }).click();
+  await expect(page.getByLabel('Time zone')).toHaveValue('America/Chicago');
+  await expect(page.getByRole('checkbox', { name: 'Saturday' })).toBeChecked();
+  await expect(page.getByRole('checkbox', { name: 'Monday' })).not.toBeChecked();
+  const closedDays = page.getByLabel('Holidays and other closed days');
+  await closedDays.fill('2026-11-31');
+  await page.getByRole('button', { name: 'Save settings' }).click();
+  await expect(page.getByText('That day does not exist')).toBeVisible();
+  await closedDays.fill(before);
+  await page.getByRole('button', { name: 'Save settings' }).click();
+  await expect(page.getByText('Saved. New quotes use these figures.')).toBeVisible();
+  await page.screenshot({ path: `${shots}/studio-settings-closed-days.png`, fullPage: true });
+  // The lead time's last working day is now a closed day, so the count runs one working day further.
+  const after: string = await readyDate();
+  expect(after > before).toBe(true);
+
+  // Later journeys expect the seeded calendar.
+  await closedDays.fill('');
+  await Promise.all([
+    page.waitForResponse((response) => response.url().endsWith('/api/admin/settings') && response.ok()),
+    page.getByRole('button', { name: 'Save settings' }).click(),
+  ]);
+  expect(await readyDate()).toBe(before);
+});

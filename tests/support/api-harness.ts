@@ -37,8 +37,15 @@ export type ApiAgent = ReturnType<ApiHarness['agent']>;
 
 export const fixedNow = () => new Date('2026-12-01T10:00:00Z');
 
-/** `env` overrides the test stack's settings, e.g. STRIPE_API_URL and SMTP_URL of fakes a test file starts itself. */
-export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {}): Promise<ApiHarness> {
+/** What a test file may change about its harness. */
+interface HarnessOptions {
+  /** Overrides of the test stack's settings, e.g. STRIPE_API_URL and SMTP_URL of fakes a test file starts itself. */
+  env?: NodeJS.ProcessEnv;
+  /** The app's clock; `fixedNow` unless a test needs another moment (the shop's evening, say). */
+  now?: () => Date;
+}
+
+export async function startApiHarness(options: HarnessOptions = {}): Promise<ApiHarness> {
   const google = await startGoogleOAuthFake({
     port: 0,
     identities: demoPeople.map(({ sub, email, name, givenName, familyName }) => ({
@@ -66,7 +73,16 @@ export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {})
   const heavyWork = createHeavyWork(config.heavyWork);
   // The pool's threads load jsdom, jimp, resvg and pdfkit once; that happens here, in the hook, not in a test.
   await heavyWork.ready;
-  const app = createApp({ config, db, sessions, stripe, mailer, heavyWork, now: fixedNow, log: () => {} });
+  const app = createApp({
+    config,
+    db,
+    sessions,
+    stripe,
+    mailer,
+    heavyWork,
+    now: options.now ?? fixedNow,
+    log: () => {},
+  });
 
   const agent = () => request.agent(app).set('Origin', config.appOrigin);
 
@@ -108,7 +124,7 @@ export async function startApiHarness(options: { env?: NodeJS.ProcessEnv } = {})
  * The harness for one test file: started before its tests and closed after them by hooks this registers, so the
  * file only says what it needs. Its members may be used inside tests and hooks, once it has started.
  */
-export function useApiHarness(options: { env?: NodeJS.ProcessEnv } = {}): Omit<ApiHarness, 'close'> {
+export function useApiHarness(options: HarnessOptions = {}): Omit<ApiHarness, 'close'> {
   let started: ApiHarness | undefined;
   beforeAll(async () => {
     started = await startApiHarness(options);

@@ -1,6 +1,7 @@
 /** Plain words for what happened to an order; unknown kinds of event fall back to their own name. */
 const eventLabels: Record<string, string> = {
   order_created: 'Order placed',
+  safety_notes_read: 'Customer ticked they read the safety notes',
   payment_authorized: 'Card held (not charged yet)',
   proof_sent: 'Proof sent',
   changes_requested: 'Customer asked for changes',

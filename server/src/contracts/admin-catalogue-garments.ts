@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { garmentSummary } from './catalogue.ts';
+import { garmentSafetyFacts } from './guidance.ts';
 import { catalogueName, catalogueSlug, hexColour, lengthMm, sortOrder } from './admin-catalogue-common.ts';
 
 export const garmentKinds = ['dress', 'romper', 'bishop_dress', 'bib', 'bonnet'] as const;
@@ -23,6 +24,12 @@ const garmentFields = {
   isNapped: z.boolean(),
   minAgeMonths: ageMonths,
   maxAgeMonths: ageMonths,
+  // A form that says nothing of them (an older client) keeps the plain day-wear garment with nothing at the neck.
+  tiePlaces: garmentSafetyFacts.shape.tiePlaces.default([]),
+  drawstringPlaces: garmentSafetyFacts.shape.drawstringPlaces.default([]),
+  closure: garmentSafetyFacts.shape.closure.default('none'),
+  closesAtNeck: garmentSafetyFacts.shape.closesAtNeck.default(false),
+  intendedUse: garmentSafetyFacts.shape.intendedUse.default('day_wear'),
   sortOrder,
 };
 
@@ -64,6 +71,8 @@ export const garmentSizeRequest = z
     /** Hem run at the guide line, front panel and whole way round; both null for garments without a hem border. */
     hemFrontMm: lengthMm('the front hem').nullable(),
     hemCircumferenceMm: lengthMm('the hem all round', 4000).nullable(),
+    minAgeMonths: ageMonths,
+    maxAgeMonths: ageMonths,
     mockupScale: z
       .number({ error: 'Enter the drawing scale' })
       .positive('The scale must be more than 0')
@@ -74,6 +83,9 @@ export const garmentSizeRequest = z
     sortOrder,
   })
   .superRefine((size, ctx) => {
+    if (size.minAgeMonths > size.maxAgeMonths) {
+      ctx.addIssue({ code: 'custom', path: ['maxAgeMonths'], message: agesMessage.message });
+    }
     if ((size.hemFrontMm === null) !== (size.hemCircumferenceMm === null)) {
       ctx.addIssue({
         code: 'custom',

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { motifKind } from './catalogue.ts';
+import { motifTrims } from './guidance.ts';
 import { catalogueName, catalogueSlug, lengthMm, sortOrder } from './admin-catalogue-common.ts';
 import { threadCodeField } from './admin-catalogue-threads.ts';
 
@@ -73,6 +74,11 @@ const motifFields = z.object({
       mix: stitchMix.optional(),
     })
     .nullable(),
+  /** Trims sewn on beyond the stitches, each of which could come off; none for stitches only. */
+  trims: z
+    .array(z.enum(motifTrims, { error: 'Choose appliqué, buttons, bows or beads' }))
+    .max(4)
+    .default([]),
   sortOrder,
 });
 

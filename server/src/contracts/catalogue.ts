@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { garmentSafetyFacts, guidanceMessage, motifTrims } from './guidance.ts';
 
 /** A place on the garment where embroidery may go, in the size's own millimetres on the mockup. */
 export const placementZone = z.object({
@@ -28,6 +29,9 @@ export const garmentSize = z.object({
   /** Null for garments without a hem border (bibs, bonnets). */
   hemFrontMm: z.number().nullable(),
   hemCircumferenceMm: z.number().nullable(),
+  /** The ages this size is made for, months: the safety cautions assume its youngest wearer. */
+  minAgeMonths: z.number().int(),
+  maxAgeMonths: z.number().int(),
 });
 
 export const fabricColour = z.object({ id: z.number().int(), name: z.string(), hex: z.string() });
@@ -39,6 +43,8 @@ export const garmentSummary = z.object({
   kind: z.string(),
   description: z.string(),
   fabricType: z.string(),
+  /** Ties, drawstrings, fastening and use: what the safety cautions are worked out from. */
+  safety: garmentSafetyFacts,
   mockupSvg: z.string(),
   /** The drawing's size at the reference size, mm (its viewBox). */
   mockupWidthMm: z.number(),
@@ -55,6 +61,11 @@ export type GarmentListResponse = z.infer<typeof garmentListResponse>;
 export const garmentSizeDetail = garmentSize.extend({
   chestMm: z.number().nullable(),
   lengthMm: z.number().nullable(),
+  /**
+   * The safety cautions for this size's youngest wearer and the garment's ties, fastening and use, before any
+   * trimmed motif is added (the design's quote adds those); the note deferring to local rules comes last.
+   */
+  cautions: z.array(guidanceMessage),
 });
 
 /** One garment for its product page: the list's summary plus the back drawing (same viewBox) and measured sizes. */
@@ -90,6 +101,8 @@ export const motifSummary = z.object({
   stitchCount: z.number().int(),
   /** The studio's suggested thread for each colour, in stitching order. */
   threadCodes: z.array(z.string()),
+  /** Trims beyond stitches (appliqué, buttons, bows, beads) that could come off: a small-parts caution for under-3s. */
+  trims: z.array(z.enum(motifTrims)),
 });
 export type MotifSummary = z.infer<typeof motifSummary>;
 

@@ -13,6 +13,8 @@ export const errorKinds = [
   /** The server could not do the work in time (a heavy job past its time limit, or too many at once). */
   'busy',
   'too-many-requests',
+  /** The request is sound but needs the person to confirm something first (the safety notes at checkout). */
+  'needs-acknowledgement',
 ] as const;
 export type ErrorKind = (typeof errorKinds)[number];
 

@@ -1,6 +1,8 @@
 import { z } from 'zod';
 import { designDocument } from './designs.ts';
 import { orderStatus, paymentStatus } from './order-status.ts';
+import { guidanceMessage } from './guidance.ts';
+import { calendarDate } from './calendar-date.ts';
 
 /** Most pins a customer may drop on one proof: more is a conversation for e-mail. */
 export const MAX_PROOF_PINS = 20;
@@ -50,15 +52,8 @@ export const shipTo = z.strictObject({
 });
 export type ShipTo = z.infer<typeof shipTo>;
 
-/** A calendar day, YYYY-MM-DD, that exists. */
-const calendarDate = z
-  .string({ error: 'Choose the date you need it by' })
-  .regex(/^\d{4}-\d{2}-\d{2}$/, 'Choose the date you need it by')
-  .refine(
-    (value) =>
-      !Number.isNaN(Date.parse(`${value}T00:00:00Z`)) && new Date(`${value}T00:00:00Z`).toISOString().startsWith(value),
-    'Choose a real date',
-  );
+/** The day the customer needs the order by. */
+const neededByDate = calendarDate({ format: 'Choose the date you need it by', unreal: 'Choose a real date' });
 
 const positiveId = (message: string) => z.number({ error: message }).int(message).positive(message);
 
@@ -66,9 +61,14 @@ const positiveId = (message: string) => z.number({ error: message }).int(message
 export const placeOrderRequest = z.strictObject({
   quoteId: positiveId('Price your design again before ordering'),
   designId: positiveId('Choose one of your saved designs'),
-  neededBy: calendarDate,
+  neededBy: neededByDate,
   shipTo,
   note: optionalText('the note to the studio', MAX_ORDER_NOTE),
+  /**
+   * The customer ticked that they have read the safety notes for the garment and size. Needed when any note is more
+   * than good practice (a caution or a warning); the server works the notes out itself and refuses (422) without it.
+   */
+  hasReadSafetyNotes: z.boolean().optional(),
 });
 export type PlaceOrderRequest = z.infer<typeof placeOrderRequest>;
 
@@ -125,6 +125,8 @@ const orderSummary = z.object({
   totalCents: z.number().int(),
   currency: z.string(),
   neededBy: z.string().nullable(),
+  /** When it is due: the date asked for, else the lead time in the shop's working days after the card was held. */
+  dueDate: z.string().nullable(),
   createdAt: z.string(),
   placedAt: z.string().nullable(),
   /** True when the order waits on the customer: a payment to make or a proof to answer. */
@@ -194,6 +196,8 @@ export const customerOrderResponse = z.object({
     colourHex: z.string(),
     document: designDocument,
   }),
+  /** The safety notes for the garment, size and motifs as ordered, worked out as the catalogue states them now. */
+  cautions: z.array(guidanceMessage),
   payment: z.object({
     /** Held on the card, not yet charged. */
     heldCents: z.number().int(),

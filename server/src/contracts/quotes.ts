@@ -1,5 +1,8 @@
 import { z } from 'zod';
 import { designDocument, strictObjectErrors } from './designs.ts';
+import { guidanceMessage } from './guidance.ts';
+
+export { guidanceMessage };
 
 /** Garments one quote may price: more is a wholesale order the studio quotes by hand. */
 const MAX_QUOTE_QUANTITY = 50;
@@ -57,15 +60,6 @@ const quoteSummary = z.object({
   currency: z.string(),
   /** The published price list version the quote was priced with. */
   ruleSetVersion: z.number().int(),
-});
-
-/** Advice the apps show as it is; severity `info` is good practice, `caution` needs a look, `warning` is a hazard. */
-export const guidanceMessage = z.object({
-  code: z.string(),
-  severity: z.enum(['info', 'caution', 'warning']),
-  title: z.string(),
-  text: z.string(),
-  appliesWhen: z.string(),
 });
 
 /** What the server worked out for one placement, per garment. */

@@ -64,8 +64,10 @@ export const boardOrder = z.object({
   customer: z.object({ id: z.number().int(), name: z.string(), email: z.string() }),
   placedAt: z.string().nullable(),
   neededBy: z.string().nullable(),
+  /** When it is due (`dueDateOf`): the customer's date, else the lead time after the card was held; null before. */
+  dueDate: z.string().nullable(),
   isRush: z.boolean(),
-  /** Due before today and not yet shipped, cancelled or refunded. */
+  /** Due before the shop's today and not yet shipped, cancelled or refunded. */
   isOverdue: z.boolean(),
   totalCents: z.number().int(),
   currency: z.string(),
@@ -96,9 +98,12 @@ export type DueOrdersQuery = z.infer<typeof dueOrdersQuery>;
 export const dueOrdersResponse = z.object({
   from: z.string(),
   to: z.string(),
-  /** The studio's today, from the server's clock, so "overdue" means the same on every screen. */
+  /** The shop's today (its time zone), from the server's clock, so "overdue" means the same on every screen. */
   today: z.string(),
-  /** Open orders due in the range, plus open orders already overdue (due before today), soonest first. */
+  /**
+   * Open orders due in the range, plus open orders already overdue (due before today), soonest first; an order
+   * without a date asked for is due by the lead time.
+   */
   orders: z.array(boardOrder),
 });
 export type DueOrdersResponse = z.infer<typeof dueOrdersResponse>;

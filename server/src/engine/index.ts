@@ -58,8 +58,8 @@ export type {
   StabilizerInput,
   StabilizerKind,
 } from './advise-stabilizer.ts';
-export { garmentCautions } from './garment-cautions.ts';
-export type { GarmentCautionInput } from './garment-cautions.ts';
+export { cautionsForGarment, garmentCautions, needsSafetyAcknowledgement } from './garment-cautions.ts';
+export type { CordPlace, GarmentCautionInput, GarmentClosure, GarmentSafetyFactsInput } from './garment-cautions.ts';
 export { layoutHemBorder } from './hem-border-layout.ts';
 export type { BorderBand, BorderRepeat, HemZone } from './hem-border-layout.ts';
 export { recolourThreadGroups } from './recolour-threads.ts';
@@ -67,3 +67,13 @@ export type { PaintableElement } from './recolour-threads.ts';
 
 export { apportionStitches, foldUnderlay, svgCanvasSizeMm, svgColoursInOrder } from './motif-figures.ts';
 export type { MotifStitchMix } from './motif-figures.ts';
+export {
+  addCalendarDays,
+  addWorkingDays,
+  dueDateOf,
+  isPastDue,
+  isWorkingDay,
+  shopDayOf,
+  weekStartOf,
+} from './shop-calendar.ts';
+export type { DatedOrder, ShopCalendar } from './shop-calendar.ts';

@@ -11,6 +11,7 @@ export const statusByKind: Record<ErrorKind, number> = {
   'payment-failed': 402,
   busy: 503,
   'too-many-requests': 429,
+  'needs-acknowledgement': 422,
 };
 
 /** An expected failure raised at the edge (middleware); the error handler answers it with its status and message. */

@@ -10,16 +10,16 @@ export function SafetyNotes() {
       </h2>
       <ul className="mt-2 grid gap-2 sm:grid-cols-3">
         <li>
-          <strong className="font-medium">Under 3s:</strong> we add nothing that could come off — no buttons, beads,
-          gems or loose appliqué — because small parts are a choking hazard. Thread ends are secured on every piece.
+          <strong className="font-medium">Under 3s:</strong> buttons, beads, bows and appliqué that could come off are a
+          choking hazard; a design that carries any says so in its safety notes. Thread ends are secured on every piece.
         </li>
         <li>
-          <strong className="font-medium">Not sleepwear:</strong> children's sleepwear has its own flammability rules.
-          Our garments are day wear; please don't use them as pyjamas or nightgowns.
+          <strong className="font-medium">Sleepwear:</strong> children's sleepwear has its own flammability rules. Each
+          garment's page says whether it is made as day wear; please don't use day wear as pyjamas or nightgowns.
         </li>
         <li>
-          <strong className="font-medium">No neck cords:</strong> drawstrings at the hood or neck of children's clothes
-          can catch and strangle, so we never add them.
+          <strong className="font-medium">Ties and neck fastenings:</strong> ribbon ties and fastenings round the neck
+          can catch. Take such garments off before sleep; each garment's page lists its own notes.
         </li>
       </ul>
       <p className="mt-2 text-xs text-walnut-500">

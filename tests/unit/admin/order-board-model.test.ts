@@ -24,7 +24,7 @@ describe('parseCents', () => {
 describe('calendarRange', () => {
   it('starts on the Monday of this week and spans whole weeks', () => {
     // 2026-12-01 is a Tuesday (ISO 8601 weeks start on Monday).
-    const range = calendarRange(Date.parse('2026-12-01T22:30:00Z'), 6);
+    const range = calendarRange(Date.parse('2026-12-01T22:30:00Z'), 6, 'America/Chicago');
     expect(range.from).toBe('2026-11-30');
     expect(range.to).toBe('2027-01-10');
     expect(range.days).toHaveLength(42);
@@ -32,10 +32,19 @@ describe('calendarRange', () => {
   });
 
   it('on a Sunday, still shows the week that ends that day', () => {
-    expect(calendarRange(Date.parse('2026-12-06T08:00:00Z'), 1)).toMatchObject({
+    expect(calendarRange(Date.parse('2026-12-06T08:00:00Z'), 1, 'America/Chicago')).toMatchObject({
       from: '2026-11-30',
       to: '2026-12-06',
     });
+  });
+
+  it('on Sunday evening in the shop, when it is already Monday in UTC, the shop’s week still shows', () => {
+    // 20:00 on Sunday 6 December in Chicago is 02:00 UTC on Monday 7 December.
+    expect(calendarRange(Date.parse('2026-12-07T02:00:00Z'), 1, 'America/Chicago')).toMatchObject({
+      from: '2026-11-30',
+      to: '2026-12-06',
+    });
+    expect(calendarRange(Date.parse('2026-12-07T02:00:00Z'), 1, 'UTC').from).toBe('2026-12-07');
   });
 });
 

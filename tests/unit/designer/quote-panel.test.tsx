@@ -98,7 +98,7 @@ function renderPanel(request: QuotePreviewRequest) {
 const panel = () => screen.getByRole('region', { name: 'Your price' });
 
 describe('the quote panel', () => {
-  it('when the server prices the design, then every line and the total show as the server sent them, with its cautions as notes', async () => {
+  it('when the server prices the design, then every line and the total show as the server sent them, with its safety notes', async () => {
     fetchMock.mockResolvedValueOnce(json(200, answer(7400)));
     renderPanel(requestFor(60));
     const table = await within(panel()).findByRole('table', { name: 'How the price is made up' });
@@ -112,8 +112,9 @@ describe('the quote panel', () => {
       'Artwork setup: 1 design, once per order$25.00',
       'Total$74.00',
     ]);
-    const notes = within(panel()).getByRole('list', { name: 'Notes on your garment' });
-    expect(notes.textContent).toContain('Nothing that can come off');
+    const notes = within(panel()).getByRole('region', { name: 'Safety notes for this size' });
+    expect(notes.textContent).toContain('Important: Nothing that can come off');
+    expect(notes.textContent).toContain('follow the children’s product rules where you live');
     expect(fetchMock).toHaveBeenCalledTimes(1);
     expect(JSON.parse(fetchMock.mock.calls[0]![1].body)).toEqual(requestFor(60));
   });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import type { DesignDocument } from '../../../server/src/contracts/designs.ts';
+import type { BorderPlacement, DesignDocument } from '../../../server/src/contracts/designs.ts';
+import { layoutBorder } from '../../../storefront/src/features/designer/model/border-layout.ts';
 import {
   drawingOf,
   layoutDesignDrawing,
@@ -8,6 +9,7 @@ import {
 import {
   bishopDress,
   breezyScript,
+  setting as bishopDressSetting,
   daisyChain,
   sittingBunny,
   sixMonths,
@@ -50,11 +52,35 @@ describe('layoutDesignDrawing', () => {
     expect(border.repeats.map((repeat) => repeat.widthMm)).toEqual([173, 173]);
     const hem = sixMonths.zones.find((zone) => zone.code === 'hem')!;
     const lineYMm = hem.yMm + hem.heightMm - 44.45;
-    for (const repeat of border.repeats) expect(repeat.yMm + repeat.heightMm / 2).toBeCloseTo(lineYMm, 6);
-    expect(border.visible.xMm).toBeCloseTo(hem.xMm + (hem.widthMm - 346) / 2, 6);
-    expect(border.visible.widthMm).toBe(346);
+    for (const repeat of border.repeats) expect(repeat.centerYMm).toBeCloseTo(lineYMm, 6);
+    expect(border.band.leftMm).toBeCloseTo(hem.xMm + (hem.widthMm - 346) / 2, 6);
+    expect(border.band.widthMm).toBe(346);
     // Threads are looked up in the palette; an unknown code keeps the drawing's own colour.
     expect(border.threadHexes).toEqual(['#5A8A3C', undefined]);
+  });
+
+  it('when the hem is drawn curved, then the picture lays the border exactly as the designer does: on the curve, turned to its slope', () => {
+    const curvedDress = {
+      ...bishopDress,
+      sizes: bishopDress.sizes.map((size) => ({
+        ...size,
+        zones: size.zones.map((zone) => (zone.code === 'hem' ? { ...zone, hemCurveMm: 10 } : zone)),
+      })),
+    };
+    const setting = { ...bishopDressSetting, garment: curvedDress };
+    const layout = layoutDesignDrawing({ ...catalogue, garment: curvedDress }, sixMonths.id, documentOf(daisyLoop))!;
+    const [border] = layout.placements;
+    if (border?.kind !== 'border') throw new Error(`expected a border, got ${border?.kind}`);
+    const designer = layoutBorder(setting, sixMonths.id, daisyLoop as BorderPlacement);
+    if (!designer.ok) throw new Error(designer.reason);
+    expect(border.repeats).toEqual(designer.repeats);
+    expect(border.band).toEqual(designer.band);
+    // The ends of the hem rise, so the two front repeats sit above the straight centre line and lean outwards.
+    const hem = sixMonths.zones.find((zone) => zone.code === 'hem')!;
+    const lineYMm = hem.yMm + hem.heightMm - 44.45;
+    for (const repeat of border.repeats) expect(repeat.centerYMm).toBeLessThan(lineYMm - 1);
+    expect(border.repeats[0]!.rotationDeg).toBeGreaterThan(0);
+    expect(border.repeats[1]!.rotationDeg).toBeCloseTo(-border.repeats[0]!.rotationDeg, 9);
   });
 
   it('when the design has a motif and lettering, then each sits where the document puts it, at its size, in its thread', () => {

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import {
   adviseStabilizer,
   garmentCautions,
+  needsSafetyAcknowledgement,
   type GuidanceMessage,
   type StabilizerInput,
 } from '../../../server/src/engine/index.ts';
@@ -84,7 +85,14 @@ describe('adviseStabilizer', () => {
 });
 
 describe('garmentCautions', () => {
-  const plain = { hasDetachableEmbellishments: false, isSleepwear: false, hasHoodOrNeckDrawstring: false };
+  const plain = {
+    hasDetachableEmbellishments: false,
+    isSleepwear: false,
+    tiePlaces: [],
+    drawstringPlaces: [],
+    closure: 'none',
+    closesAtNeck: false,
+  } as const;
 
   it('when nothing applies, then only the note to check local rules is shown', () => {
     const result = garmentCautions({ ...plain, wearerAgeMonths: 60 });
@@ -107,7 +115,7 @@ describe('garmentCautions', () => {
   });
 
   it('when the garment is sleepwear with a hood drawstring, then both warnings appear and defer to the rules', () => {
-    const result = garmentCautions({ ...plain, wearerAgeMonths: 72, isSleepwear: true, hasHoodOrNeckDrawstring: true });
+    const result = garmentCautions({ ...plain, wearerAgeMonths: 72, isSleepwear: true, drawstringPlaces: ['hood'] });
     expect(result.ok).toBe(true);
     if (!result.ok) return;
     expect(result.messages.map((m) => [m.code, m.severity])).toEqual([
@@ -118,8 +126,47 @@ describe('garmentCautions', () => {
     expectPlainGuidance(result.messages);
   });
 
+  it('when a bonnet for a 0-month-old ties under the chin, then the ties caution comes first and the fastening is not cautioned twice', () => {
+    const result = garmentCautions({
+      ...plain,
+      wearerAgeMonths: 0,
+      tiePlaces: ['neck'],
+      closure: 'ties',
+      closesAtNeck: true,
+    });
+    expect(result.ok && result.messages.map((m) => [m.code, m.severity])).toEqual([
+      ['caution.neck-ties', 'caution'],
+      ['caution.thread-ends', 'info'],
+      ['caution.local-rules', 'info'],
+    ]);
+    expect(result.ok && result.messages[0]!.title).toBe('Ribbon ties under the chin');
+    expect(result.ok && needsSafetyAcknowledgement(result.messages)).toBe(true);
+  });
+
+  it('when a bib snaps round the neck, then the neck-fastening caution names the snap', () => {
+    const result = garmentCautions({ ...plain, wearerAgeMonths: 6, closure: 'snaps', closesAtNeck: true });
+    expect(result.ok && result.messages[0]).toMatchObject({ code: 'caution.neck-closure', severity: 'caution' });
+    expect(result.ok && result.messages[0]!.text).toMatch(/^This garment fastens round the neck with a snap\./);
+  });
+
+  it('when a drawstring is only at the waist, then it is a caution with the length limit, not the hood and neck warning', () => {
+    const result = garmentCautions({ ...plain, wearerAgeMonths: 48, drawstringPlaces: ['waist'] });
+    expect(result.ok && result.messages.map((m) => m.code)).toEqual([
+      'caution.waist-drawstring',
+      'caution.local-rules',
+    ]);
+    // ASTM F1816: at most 3 in (75 mm) outside the channel, from memory.
+    expect(result.ok && result.messages[0]!.text).toMatch(/3 inches \(75 mm\)/);
+  });
+
+  it('when only good practice applies, then no acknowledgement is needed', () => {
+    const result = garmentCautions({ ...plain, wearerAgeMonths: 6 });
+    expect(result.ok && needsSafetyAcknowledgement(result.messages)).toBe(false);
+  });
+
   it('when the age is negative or a flag is missing, then it fails with a reason', () => {
     expect(garmentCautions({ ...plain, wearerAgeMonths: -1 }).ok).toBe(false);
     expect(garmentCautions({ hasDetachableEmbellishments: true } as never).ok).toBe(false);
+    expect(garmentCautions({ ...plain, tiePlaces: ['sleeve'] } as never).ok).toBe(false);
   });
 });

@@ -340,7 +340,10 @@ describe('no input makes an engine function throw', () => {
             wearerAgeMonths: k,
             hasDetachableEmbellishments: true,
             isSleepwear: false,
-            hasHoodOrNeckDrawstring: other,
+            tiePlaces: other,
+            drawstringPlaces: [other],
+            closure: other,
+            closesAtNeck: true,
           } as never),
         );
       }),

@@ -18,6 +18,7 @@ const daisyChain: CatalogueMotifEntry = {
   colourCount: 3,
   minScalePct: 90,
   maxScalePct: 110,
+  trims: [],
 };
 const littleLamb: CatalogueMotifEntry = {
   ...daisyChain,
@@ -46,6 +47,7 @@ function catalogueWith(changes: Partial<QuoteCatalogue> = {}): QuoteCatalogue {
       fabricType: 'woven',
       isNapped: false,
       minAgeMonths: 6,
+      safety: { tiePlaces: [], drawstringPlaces: [], closure: 'buttons', closesAtNeck: false, intendedUse: 'day_wear' },
     },
     size: {
       id: 301,
@@ -53,6 +55,7 @@ function catalogueWith(changes: Partial<QuoteCatalogue> = {}): QuoteCatalogue {
       label: '6 months',
       hemFrontMm: 346,
       hemCircumferenceMm: 692,
+      minAgeMonths: 6,
       zones: [
         { code: 'hem', label: 'Hem border', xMm: 36, yMm: 319, widthMm: 346, heightMm: 91, hemOffsetMm: 44.45 },
         { code: 'chest', label: 'Below the smocking', xMm: 164, yMm: 82, widthMm: 91, heightMm: 46 },

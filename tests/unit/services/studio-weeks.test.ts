@@ -1,38 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import {
-  bookMachineHours,
-  dueDateOf,
-  sumRevenueByWeek,
-  weekStartOf,
-} from '../../../server/src/modules/studio/studio-weeks.ts';
+import { bookMachineHours, sumRevenueByWeek } from '../../../server/src/modules/studio/studio-weeks.ts';
 
 // 2 December 2026 is a Wednesday (checked against a printed 2026 calendar: 1 Dec is a Tuesday).
 const wednesday = new Date('2026-12-02T15:00:00Z');
-
-describe('weekStartOf', () => {
-  it.each([
-    ['2026-11-30T00:00:00Z', '2026-11-30'], // Monday itself
-    ['2026-12-02T15:00:00Z', '2026-11-30'],
-    ['2026-12-06T23:59:59Z', '2026-11-30'], // Sunday still belongs to the week that began on Monday
-    ['2026-12-07T00:00:00Z', '2026-12-07'],
-    ['2027-01-01T10:00:00Z', '2026-12-28'], // across a year end
-  ])('when the instant is %s, then the week starts on %s', (instant, monday) => {
-    expect(weekStartOf(new Date(instant))).toBe(monday);
-  });
-});
-
-describe('dueDateOf', () => {
-  it('when 10 working days follow a Sunday, then weekends are skipped: Sunday 22 Nov + 10 = Friday 4 Dec', () => {
-    // Mon 23 … Fri 27 is 5, Mon 30 … Fri 4 is 10.
-    expect(dueDateOf({ neededBy: null, placedAt: new Date('2026-11-22T03:02:00Z') }, 10)).toBe('2026-12-04');
-  });
-
-  it('when the customer gave a date, then it is the due date; otherwise placed + lead time; unplaced orders have none', () => {
-    expect(dueDateOf({ neededBy: '2026-12-20', placedAt: new Date('2026-11-01T00:00:00Z') }, 10)).toBe('2026-12-20');
-    expect(dueDateOf({ neededBy: null, placedAt: new Date('2026-11-27T12:00:00Z') }, 1)).toBe('2026-11-30'); // Friday + 1 = Monday
-    expect(dueDateOf({ neededBy: null, placedAt: null }, 10)).toBeNull();
-  });
-});
+const schedule = { timeZone: 'America/Chicago', closedWeekdays: [0, 6], holidays: [], leadTimeDays: 10 };
 
 describe('bookMachineHours', () => {
   it('when orders are due in three weeks, then each week sums its minutes as hours, overdue work lands in this week and later work is left out', () => {
@@ -46,7 +17,7 @@ describe('bookMachineHours', () => {
         { runMinutes: 600, neededBy: '2027-03-01', placedAt: null }, // beyond the three weeks shown
         { runMinutes: 60, neededBy: null, placedAt: null }, // not placed: no due date, not booked
       ],
-      { now: wednesday, weekCount: 3, leadTimeDays: 10 },
+      { now: wednesday, weekCount: 3, schedule },
     );
     expect(weeks).toEqual([
       { weekStart: '2026-11-30', bookedHours: 2, orderCount: 2 }, // 90 + 30 = 120 min = 2 h
@@ -55,8 +26,18 @@ describe('bookMachineHours', () => {
     ]);
   });
 
+  it('when it is Sunday evening in the shop but Monday in UTC, then the shop’s week is still the one that began last Monday', () => {
+    // 20:00 in Chicago on Sunday 6 December is 02:00 UTC on Monday 7 December.
+    const weeks = bookMachineHours([{ runMinutes: 60, neededBy: '2026-12-06', placedAt: null }], {
+      now: new Date('2026-12-07T02:00:00Z'),
+      weekCount: 1,
+      schedule,
+    });
+    expect(weeks).toEqual([{ weekStart: '2026-11-30', bookedHours: 1, orderCount: 1 }]);
+  });
+
   it('when nothing is booked, then every week is shown with zero hours', () => {
-    expect(bookMachineHours([], { now: wednesday, weekCount: 2, leadTimeDays: 10 })).toEqual([
+    expect(bookMachineHours([], { now: wednesday, weekCount: 2, schedule })).toEqual([
       { weekStart: '2026-11-30', bookedHours: 0, orderCount: 0 },
       { weekStart: '2026-12-07', bookedHours: 0, orderCount: 0 },
     ]);
@@ -76,7 +57,7 @@ describe('sumRevenueByWeek', () => {
         { at: new Date('2026-11-17T15:12:00Z'), amountCents: 8458 },
         { at: new Date('2026-11-24T15:05:00Z'), amountCents: 500 }, // a refund in a week with no takings
       ],
-      { now: wednesday, weekCount: 3 },
+      { now: wednesday, weekCount: 3, timeZone: 'America/Chicago' },
     );
     expect(weeks).toEqual([
       // 8,458 + 7,490 = 15,948 captured; 15,948 − 8,458 = 7,490 net.

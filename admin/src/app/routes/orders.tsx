@@ -5,6 +5,7 @@ import { BoardPager } from '../../features/orders/components/board-pager.tsx';
 import { DueCalendar } from '../../features/orders/components/due-calendar.tsx';
 import { OrderBoardTable } from '../../features/orders/components/order-board-table.tsx';
 import { useBoardQuery } from '../../features/orders/hooks/use-board-query.ts';
+import { useSettings } from '../../features/settings/api/get-settings.ts';
 
 function ViewSwitch({ view, onChange }: { view: 'list' | 'calendar'; onChange: (view: 'list' | 'calendar') => void }) {
   const option = (value: 'list' | 'calendar', label: string) => (
@@ -33,6 +34,8 @@ function ViewSwitch({ view, onChange }: { view: 'list' | 'calendar'; onChange: (
 export function OrdersPage() {
   const { query, view, update, setView } = useBoardQuery();
   const board = useOrderBoard(query);
+  // The shop's time zone: the calendar's weeks are the shop's, as its due dates are.
+  const settings = useSettings();
   return (
     <div className="grid gap-5">
       <div className="flex flex-wrap items-center justify-between gap-3">
@@ -41,7 +44,13 @@ export function OrdersPage() {
       </div>
       {view === 'calendar' ? (
         <section className="min-w-0 rounded-card border border-linen-200 bg-white p-4">
-          <DueCalendar nowMs={Date.now()} />
+          {settings.data ? (
+            <DueCalendar nowMs={Date.now()} timeZone={settings.data.settings.timeZone} />
+          ) : settings.isError ? (
+            <ErrorNotice message={settings.error.message} onRetry={() => void settings.refetch()} />
+          ) : (
+            <Loading label="Laying out the weeks…" />
+          )}
         </section>
       ) : (
         <section className="grid min-w-0 gap-4 rounded-card border border-linen-200 bg-white p-4">

@@ -1,6 +1,8 @@
 import { z } from 'zod';
 import type { Db } from '../../db/knex.ts';
+import { jsonColumn } from '../../db/json-column.ts';
 import { placementZone, type GarmentDetail, type GarmentSummary } from '../../contracts/catalogue.ts';
+import { garmentSafetyFacts } from '../../contracts/guidance.ts';
 import { mockupSizeMm } from '../../engine/garment-mockup-size.ts';
 
 const placementZones = z.array(placementZone);
@@ -13,7 +15,21 @@ async function readActiveGarments(
   extra: { garmentColumns: string[]; sizeColumns: string[]; slug?: string; includeRetired?: boolean },
 ) {
   const garments: Row[] = await db('garments')
-    .select('id', 'slug', 'name', 'kind', 'description', 'fabric_type', 'mockup_svg', ...extra.garmentColumns)
+    .select(
+      'id',
+      'slug',
+      'name',
+      'kind',
+      'description',
+      'fabric_type',
+      'mockup_svg',
+      'tie_places',
+      'drawstring_places',
+      'closure',
+      'closes_at_neck',
+      'intended_use',
+      ...extra.garmentColumns,
+    )
     .where({
       ...(extra.includeRetired ? {} : { is_active: true }),
       ...(extra.slug === undefined ? {} : { slug: extra.slug }),
@@ -31,6 +47,8 @@ async function readActiveGarments(
         'hem_circumference_mm',
         'mockup_scale',
         'placement_zones',
+        'min_age_months',
+        'max_age_months',
         ...extra.sizeColumns,
       )
       .whereIn('garment_id', ids)
@@ -60,6 +78,13 @@ function toGarmentSummary({ row: g, sizes, colours }: { row: Row; sizes: Row[]; 
     kind: g.kind,
     description: g.description ?? '',
     fabricType: g.fabric_type,
+    safety: garmentSafetyFacts.parse({
+      tiePlaces: jsonColumn(g.tie_places),
+      drawstringPlaces: jsonColumn(g.drawstring_places),
+      closure: g.closure,
+      closesAtNeck: Boolean(g.closes_at_neck),
+      intendedUse: g.intended_use,
+    }),
     mockupSvg: g.mockup_svg,
     mockupWidthMm: mockup.widthMm,
     mockupHeightMm: mockup.heightMm,
@@ -71,6 +96,8 @@ function toGarmentSummary({ row: g, sizes, colours }: { row: Row; sizes: Row[]; 
       zones: placementZones.parse(s.placement_zones),
       hemFrontMm: millimetres(s.hem_front_mm),
       hemCircumferenceMm: millimetres(s.hem_circumference_mm),
+      minAgeMonths: s.min_age_months,
+      maxAgeMonths: s.max_age_months,
     })),
     colours: colours.map((c) => ({ id: c.id, name: c.name, hex: c.hex })),
   };
@@ -92,8 +119,13 @@ export async function listActiveGarments(
   return garments.map(toGarmentSummary);
 }
 
+/** A garment's page before the service adds each size's safety cautions. */
+export type GarmentDetailRecord = Omit<GarmentDetail, 'sizes'> & {
+  sizes: Omit<GarmentDetail['sizes'][number], 'cautions'>[];
+};
+
 /** One active garment for its product page, with its back drawing and each size's measurements; undefined if not on offer. */
-export async function findActiveGarmentDetail(db: Db, slug: string): Promise<GarmentDetail | undefined> {
+export async function findActiveGarmentDetail(db: Db, slug: string): Promise<GarmentDetailRecord | undefined> {
   const [garment] = await readActiveGarments(db, {
     garmentColumns: ['mockup_back_svg'],
     sizeColumns: ['chest_mm', 'length_mm'],

@@ -63,6 +63,11 @@ function garmentRow(garment: UpdateGarmentRequest) {
     is_napped: garment.isNapped,
     min_age_months: garment.minAgeMonths,
     max_age_months: garment.maxAgeMonths,
+    tie_places: JSON.stringify([...new Set(garment.tiePlaces)]),
+    drawstring_places: JSON.stringify([...new Set(garment.drawstringPlaces)]),
+    closure: garment.closure,
+    closes_at_neck: garment.closesAtNeck,
+    intended_use: garment.intendedUse,
     ...(garment.sortOrder === undefined ? {} : { sort_order: garment.sortOrder }),
   };
 }
@@ -73,6 +78,8 @@ function sizeRow(size: GarmentSizeRequest) {
     label: size.label,
     hem_front_mm: size.hemFrontMm,
     hem_circumference_mm: size.hemCircumferenceMm,
+    min_age_months: size.minAgeMonths,
+    max_age_months: size.maxAgeMonths,
     mockup_scale: size.mockupScale,
     placement_zones: JSON.stringify(size.zones),
     ...(size.sortOrder === undefined ? {} : { sort_order: size.sortOrder }),

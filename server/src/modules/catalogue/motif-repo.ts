@@ -1,5 +1,10 @@
 import type { Db } from '../../db/knex.ts';
+import { z } from 'zod';
 import type { MotifSummary } from '../../contracts/catalogue.ts';
+import { motifTrims } from '../../contracts/guidance.ts';
+import { jsonColumn } from '../../db/json-column.ts';
+
+const motifTrimList = z.array(z.enum(motifTrims));
 
 /** A motifs row as the catalogue shows it; the studio's catalogue adds its measured figures on top. */
 export function toMotifSummary(row: Record<string, any>): MotifSummary {
@@ -19,6 +24,7 @@ export function toMotifSummary(row: Record<string, any>): MotifSummary {
     stitchCount: row.stitch_count,
     // JSON columns arrive parsed.
     threadCodes: row.default_thread_codes,
+    trims: motifTrimList.parse(jsonColumn(row.trims)),
   };
 }
 
@@ -39,6 +45,7 @@ export async function listActiveMotifs(db: Db): Promise<MotifSummary[]> {
       'colour_count',
       'stitch_count',
       'default_thread_codes',
+      'trims',
     )
     .where({ is_active: true })
     .orderBy([{ column: 'kind' }, { column: 'sort_order' }, { column: 'id' }]);

@@ -134,6 +134,7 @@ export function createCatalogueMotifService(deps: { db: Db; heavyWork: HeavyWork
       max_scale_pct: request.maxScalePct,
       colour_count: request.threadCodes.length,
       default_thread_codes: JSON.stringify(request.threadCodes),
+      trims: JSON.stringify([...new Set(request.trims)]),
       stitch_count: used.run + used.satin + used.fill,
       run_stitches: used.run,
       satin_stitches: used.satin,

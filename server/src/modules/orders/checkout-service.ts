@@ -21,6 +21,7 @@ import {
   type PaymentRecord,
 } from './order-repo.ts';
 import { restoreDesign } from '../../contracts/designs.ts';
+import { needsSafetyAcknowledgement, shopDayOf } from '../../engine/index.ts';
 import type { CheckoutStartedResponse, PlaceOrderRequest } from '../../contracts/orders.ts';
 import type { CurrentUser } from '../../contracts/users.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
@@ -30,7 +31,6 @@ import { openCheckoutSession } from './checkout-session.ts';
 import { moveOrder } from './order-transitions.ts';
 import { sendLoggedMail } from '../mail/order-mail.ts';
 import { orderCancelledMail } from './customer-order-mail.ts';
-import { shopToday } from '../quotes/ready-dates.ts';
 import { findStoredQuote, type StoredQuote, type StoredQuoteService } from '../quotes/stored-quote-service.ts';
 
 export interface CheckoutDeps {
@@ -89,9 +89,18 @@ export function createCheckoutService(deps: CheckoutDeps) {
       );
     }
 
+    const cautions = await deps.storedQuotes.cautionsOf(quote);
+    if (needsSafetyAcknowledgement(cautions) && request.hasReadSafetyNotes !== true) {
+      const titles = cautions.filter((caution) => caution.severity !== 'info').map((caution) => caution.title);
+      const message = `Please read the safety notes for this garment (${titles.join('; ')}) and tick that you have read them before paying.`;
+      return failure('needs-acknowledgement', message, {
+        hasReadSafetyNotes: 'Tick that you have read the safety notes',
+      });
+    }
+
     const dates = await deps.storedQuotes.readyDatesToday();
     const shop = await shopScheduleOf(db);
-    const today = shopToday(deps.now(), shop.timezone);
+    const today = shopDayOf(deps.now().getTime(), shop.timezone);
     if (request.neededBy < today)
       return failure('invalid', 'Choose a date from today on.', { neededBy: 'Choose a date from today on' });
     if (request.neededBy < dates.earliestRushDate) {
@@ -126,6 +135,15 @@ export function createCheckoutService(deps: CheckoutDeps) {
         createdAt: now,
       });
       if (orderId === undefined) return undefined;
+      if (needsSafetyAcknowledgement(cautions)) {
+        await insertOrderNote(trx, {
+          orderId,
+          type: 'safety_notes_read',
+          actorUserId: customer.id,
+          payload: { codes: cautions.filter((caution) => caution.severity !== 'info').map((caution) => caution.code) },
+          at: now,
+        });
+      }
       const paymentId = await insertPendingPayment(trx, { id: orderId, currency: quote.currency }, now);
       return { orderId, number, paymentId };
     });

@@ -4,6 +4,7 @@
  */
 import { mailBodies, orderPageUrl } from '../mail/mail-layout.ts';
 import type { LoggedMail } from '../mail/order-mail.ts';
+import { formatDayText } from '../mail/day-text.ts';
 
 interface MailContext {
   appOrigin: string;
@@ -29,10 +30,25 @@ function compose(
   };
 }
 
-export function orderPlacedMail(context: MailContext, to: string, totalText: string): LoggedMail {
+/**
+ * The order is in and the card held. `due` is its due date by the shop's one rule: the day asked for, or the lead
+ * time counted in the shop's working days from today.
+ */
+export function orderPlacedMail(
+  context: MailContext,
+  to: string,
+  totalText: string,
+  due: { date: string; isAskedFor: boolean } | null,
+): LoggedMail {
+  const when = due
+    ? due.isAskedFor
+      ? [`We have noted that you need it by ${formatDayText(due.date)}.`]
+      : [`We aim to have it ready by ${formatDayText(due.date)}.`]
+    : [];
   return compose(context, to, 'order_placed', `We have your order ${context.number}`, [
     `Thank you! Your order ${context.number} is in.`,
     `We have put a hold of ${totalText} on your card. Nothing is charged until you approve the proof of your design.`,
+    ...when,
     'Next, we draw a proof of your design on the garment and e-mail you when it is ready to look at.',
   ]);
 }

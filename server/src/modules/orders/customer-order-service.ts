@@ -9,7 +9,7 @@ import {
   recordProofAnswer,
 } from './customer-order-repo.ts';
 import { findCustomerOrder, listPayments, type PaymentRecord } from './order-repo.ts';
-import { shopScheduleOf } from '../settings/settings-service.ts';
+import { shopCalendarOf, shopScheduleOf } from '../settings/settings-service.ts';
 import { restoreDesign } from '../../contracts/designs.ts';
 import type {
   CustomerOrderAction,
@@ -26,15 +26,33 @@ import { sendLoggedMail } from '../mail/order-mail.ts';
 import { proofAnsweredStudioMail, proofApprovedMail } from './customer-order-mail.ts';
 import { customerTimeline } from './customer-order-wording.ts';
 import { isPaymentNeeded } from './checkout-service.ts';
+import type { QuoteService } from '../quotes/quote-service.ts';
+import { dueDateOf } from '../../engine/index.ts';
 
 type ProofAnswer = z.output<typeof proofAnswerRequest>;
 
 /** The customer's orders and proofs: each person reaches only their own, and anyone else's reads as missing. */
-export function createCustomerOrderService(deps: { db: Db; mailer: Mailer; appOrigin: string; now: () => Date }) {
+export function createCustomerOrderService(deps: {
+  db: Db;
+  mailer: Mailer;
+  quotes: Pick<QuoteService, 'cautionsFor'>;
+  appOrigin: string;
+  now: () => Date;
+}) {
   const { db } = deps;
 
+  /** The due date of each order by the one rule, in the shop's calendar. */
+  async function dueDates() {
+    const schedule = await shopCalendarOf(db);
+    return (order: { neededBy: string | null; placedAt: string | null }) =>
+      dueDateOf(
+        { neededBy: order.neededBy, placedAtMs: order.placedAt === null ? null : Date.parse(order.placedAt) },
+        schedule,
+      );
+  }
+
   async function list(customerId: number): Promise<Result<z.infer<typeof customerOrderListResponse>>> {
-    const orders = await listCustomerOrders(db, customerId);
+    const [orders, dueDateOfOrder] = await Promise.all([listCustomerOrders(db, customerId), dueDates()]);
     const proofWaiting = await ordersWithProofWaiting(
       db,
       orders.map((o) => o.id),
@@ -50,6 +68,7 @@ export function createCustomerOrderService(deps: { db: Db; mailer: Mailer; appOr
         totalCents: o.totalCents,
         currency: o.currency,
         neededBy: o.neededBy,
+        dueDate: dueDateOfOrder(o),
         createdAt: o.createdAt,
         placedAt: o.placedAt,
         isWaitingOnCustomer: o.status === 'awaiting_payment' || (o.status === 'proof_sent' && proofWaiting.has(o.id)),
@@ -68,6 +87,11 @@ export function createCustomerOrderService(deps: { db: Db; mailer: Mailer; appOr
     const latestSent = detail.proofs.findLast((p) => p.status === 'sent');
     const latestVersion = detail.proofs.at(-1)?.version;
     const needsPayment = isPaymentNeeded(order, payments, now);
+    const { garmentId, sizeId } = detail.design;
+    const cautions = await deps.quotes.cautionsFor(
+      { garmentId, sizeId, document: restored.data },
+      { userId: customerId },
+    );
     const flowActions = availableOrderActions(order.status, 'customer').filter(
       (action) => action === 'cancel' || latestSent !== undefined,
     );
@@ -78,11 +102,13 @@ export function createCustomerOrderService(deps: { db: Db; mailer: Mailer; appOr
     return ok({
       order: {
         ...withoutId(order),
+        dueDate: (await dueDates())(order),
         isRush: detail.quote.isRush,
         isWaitingOnCustomer: needsPayment || latestSent !== undefined,
       },
       quote: { ruleSetVersion: detail.quote.ruleSetVersion, lines: detail.quote.lines },
       design: { ...detail.design, document: restored.data },
+      cautions,
       payment: paymentSummary(payments, detail.events, needsPayment, now),
       proofs: detail.proofs.map(({ hasImage, ...proof }) => ({
         ...proof,

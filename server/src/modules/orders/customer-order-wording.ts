@@ -17,6 +17,8 @@ function titleOf(event: StoredOrderEvent, currency: string): string | undefined 
   switch (event.type) {
     case 'order_created':
       return 'You placed the order';
+    case 'safety_notes_read':
+      return 'You read the safety notes for this garment';
     case 'payment_authorized':
       return amount ? `${amount} held on your card (not charged yet)` : 'Payment held on your card (not charged yet)';
     case 'payment_failed':

@@ -1,5 +1,4 @@
 import type { Knex } from 'knex';
-import { closedOrderStatuses, isIn } from '../../contracts/order-status.ts';
 import type { Db } from '../../db/knex.ts';
 import type {
   BoardOrder,
@@ -9,7 +8,8 @@ import type {
   OrderBoardResponse,
 } from '../../contracts/studio-orders.ts';
 
-/** Orders past these statuses are no longer the studio's to make, so they are never overdue. */
+/** A board row as read; the service adds its due date and whether it is overdue, by the shop's calendar. */
+export type BoardOrderRow = Omit<BoardOrder, 'dueDate' | 'isOverdue'>;
 
 /** Each sort, with the order id as the tie-break so a page boundary never repeats or skips an order. */
 const sortColumns: Record<BoardSortKey, string> = {
@@ -94,7 +94,7 @@ const boardColumns = [
 ];
 
 /** Full rows for orders already chosen (and ordered) by id: customer, rush flag and a one-line item summary. */
-async function boardRows(db: Db, ids: number[], today: string): Promise<BoardOrder[]> {
+async function boardRows(db: Db, ids: number[]): Promise<BoardOrderRow[]> {
   if (ids.length === 0) return [];
   const [rows, items] = await Promise.all([
     db('orders as o')
@@ -110,16 +110,14 @@ async function boardRows(db: Db, ids: number[], today: string): Promise<BoardOrd
   const byId = new Map(rows.map((row) => [row.id as number, row]));
   return ids.map((id) => {
     const row = byId.get(id)!;
-    const neededBy = isoDay(row.needed_by);
     return {
       number: row.number,
       status: row.status,
       paymentStatus: row.payment_status,
       customer: { id: row.customer_id, name: row.customer_name, email: row.customer_email },
       placedAt: row.placed_at === null ? null : new Date(row.placed_at).toISOString(),
-      neededBy,
+      neededBy: isoDay(row.needed_by),
       isRush: Boolean(row.is_rush),
-      isOverdue: neededBy !== null && neededBy < today && !isIn(closedOrderStatuses, row.status),
       totalCents: Number(row.total_cents),
       currency: row.currency,
       itemSummary: (summaries.get(id) ?? []).join('; '),
@@ -132,7 +130,10 @@ async function boardRows(db: Db, ids: number[], today: string): Promise<BoardOrd
  * indexes), then only those rows are joined to their customer, quote and items: a deferred join, so a page costs
  * the same whether the shop has a hundred orders or fifty thousand.
  */
-export async function listBoardOrders(db: Db, query: OrderBoardQuery, today: string): Promise<OrderBoardResponse> {
+export async function listBoardOrders(
+  db: Db,
+  query: OrderBoardQuery,
+): Promise<Omit<OrderBoardResponse, 'rows'> & { rows: BoardOrderRow[] }> {
   const { sort, dir, page, pageSize, ...filters } = query;
   const filter = await boardFilters(db, filters);
   const column = sortColumns[sort];
@@ -151,11 +152,15 @@ export async function listBoardOrders(db: Db, query: OrderBoardQuery, today: str
     ordered.pluck('o.id') as Promise<number[]>,
     db('orders as o').modify(filter).count({ total: '*' }),
   ]);
-  return { rows: await boardRows(db, ids, today), total: Number(total), page, pageSize };
+  return { rows: await boardRows(db, ids), total: Number(total), page, pageSize };
 }
 
-/** Open orders due in the range, and open orders already overdue, soonest first: the calendar's days. */
-export async function listDueOrders(db: Db, range: DueOrdersQuery, today: string): Promise<BoardOrder[]> {
+/**
+ * The calendar's candidates: open orders whose date asked for is in the range or already past (before `today` or
+ * the range, whichever is earlier), and open orders with no date asked for, whose due date comes from the lead time
+ * and is worked out by the service. Soonest asked-for date first.
+ */
+export async function listDueCandidates(db: Db, range: DueOrdersQuery, today: string): Promise<BoardOrderRow[]> {
   const open = [
     'authorized',
     'proof_sent',
@@ -164,15 +169,18 @@ export async function listDueOrders(db: Db, range: DueOrdersQuery, today: string
     'in_production',
     'stitched',
   ] as const;
-  const ids = (await db('orders as o')
-    .whereIn('o.status', open)
-    .where((when) => {
-      when
-        .whereBetween('o.needed_by', [range.from, range.to])
-        .orWhere('o.needed_by', '<', today < range.from ? today : range.from);
-    })
-    .orderBy([{ column: 'o.needed_by' }, { column: 'o.id' }])
-    .limit(2000)
-    .pluck('o.id')) as number[];
-  return boardRows(db, ids, today);
+  const openOrders = () => db('orders as o').whereIn('o.status', open).limit(2000);
+  // Two lookups, so the dated ones keep the needed_by index and the undated ones cannot crowd them out.
+  const [dated, undated] = (await Promise.all([
+    openOrders()
+      .where((when) => {
+        when
+          .whereBetween('o.needed_by', [range.from, range.to])
+          .orWhere('o.needed_by', '<', today < range.from ? today : range.from);
+      })
+      .orderBy([{ column: 'o.needed_by' }, { column: 'o.id' }])
+      .pluck('o.id'),
+    openOrders().whereNull('o.needed_by').whereNotNull('o.placed_at').orderBy('o.placed_at').pluck('o.id'),
+  ])) as [number[], number[]];
+  return boardRows(db, [...dated, ...undated]);
 }

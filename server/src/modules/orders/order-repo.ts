@@ -275,6 +275,12 @@ export async function readOrderDescription(db: Db, orderId: number): Promise<str
 }
 
 /** Where the order's e-mails go. */
+/** The date the customer asked for, YYYY-MM-DD, or null. */
+export async function findOrderNeededBy(db: Db, orderId: number): Promise<string | null> {
+  const row = await db('orders').select('needed_by').where({ id: orderId }).first();
+  return row?.needed_by ? new Date(row.needed_by).toISOString().slice(0, 10) : null;
+}
+
 export async function findCustomerEmail(db: Db, orderId: number): Promise<string> {
   const row = await db('orders as o')
     .join('users as u', 'u.id', 'o.customer_id')

@@ -3,9 +3,11 @@ import type Stripe from 'stripe';
 import type { Db } from '../../db/knex.ts';
 import type { Mailer } from '../../integrations/mailer.ts';
 import { markWebhookEventProcessed, recordWebhookEvent } from './webhook-event-repo.ts';
-import { shopScheduleOf } from '../settings/settings-service.ts';
+import { shopCalendarOf, shopScheduleOf } from '../settings/settings-service.ts';
+import { dueDateOf } from '../../engine/index.ts';
 import {
   findCustomerEmail,
+  findOrderNeededBy,
   findOrderById,
   insertOrderNote,
   lockLatestPendingPayment,
@@ -209,11 +211,18 @@ export function createPaymentWebhookService(deps: {
     await syncOrderPaymentStatus(trx, order.id, now);
     if (order.status !== 'awaiting_payment') return undefined;
     const customerEmail = await findCustomerEmail(trx, order.id);
-    const shop = await shopScheduleOf(trx);
+    const [shop, calendar, neededBy] = await Promise.all([
+      shopScheduleOf(trx),
+      shopCalendarOf(trx),
+      findOrderNeededBy(trx, order.id),
+    ]);
+    // The card is held now, so this is the moment the lead time counts from (the order's placed_at).
+    const dueDate = dueDateOf({ neededBy, placedAtMs: now.getTime() }, calendar);
     const mail: LoggedMail = orderPlacedMail(
       { appOrigin: deps.appOrigin, shopName: shop.name, number: order.number, orderId: order.id },
       customerEmail,
       formatMoneyText(intent.amount_capturable, order.currency),
+      dueDate === null ? null : { date: dueDate, isAskedFor: neededBy !== null },
     );
     return { after: () => sendLoggedMail({ db, mailer: deps.mailer, now: deps.now }, mail) };
   }

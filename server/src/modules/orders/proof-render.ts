@@ -82,11 +82,17 @@ function borderMarkup(
     hemOffsetMm: border.hemOffsetMm,
     motifHeightMm: motif.heightMm,
   });
+  // Each repeat turned to the hem's slope beneath it, as the designer and the saved-design pictures draw it.
   const drawings = repeats.map((r) =>
-    placedDrawing(
-      motif.svg,
-      { x: r.centerXMm - r.widthMm / 2, y: r.centerYMm - r.heightMm / 2, width: r.widthMm, height: r.heightMm },
-      hexes,
+    rotated(
+      placedDrawing(
+        motif.svg,
+        { x: r.centerXMm - r.widthMm / 2, y: r.centerYMm - r.heightMm / 2, width: r.widthMm, height: r.heightMm },
+        hexes,
+      ),
+      r.rotationDeg,
+      r.centerXMm,
+      r.centerYMm,
     ),
   );
   const clip = `<clipPath id="${clipId}"><rect x="${round(band.leftMm)}" y="${round(band.centerYMm - band.heightMm)}" width="${round(band.widthMm)}" height="${round(band.heightMm * 2)}"/></clipPath>`;

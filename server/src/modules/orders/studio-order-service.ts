@@ -8,20 +8,48 @@ import type {
 } from '../../contracts/studio-orders.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import type { ArtworkImage, ArtworkService } from '../artwork/artwork-service.ts';
-import { listBoardOrders, listDueOrders } from './order-board-repo.ts';
+import { listBoardOrders, listDueCandidates, type BoardOrderRow } from './order-board-repo.ts';
+import { shopCalendarOf } from '../settings/settings-service.ts';
+import { closedOrderStatuses, isIn } from '../../contracts/order-status.ts';
+import { dueDateOf, isPastDue, shopDayOf, type ShopCalendar } from '../../engine/index.ts';
+import type { BoardOrder } from '../../contracts/studio-orders.ts';
+
+/** A board row with its due date by the one rule, overdue when due before the shop's today and still open. */
+function dated(row: BoardOrderRow, schedule: ShopCalendar & { leadTimeDays: number }, today: string): BoardOrder {
+  const placedAtMs = row.placedAt === null ? null : Date.parse(row.placedAt);
+  const dueDate = dueDateOf({ neededBy: row.neededBy, placedAtMs }, schedule);
+  return { ...row, dueDate, isOverdue: isPastDue(dueDate, today) && !isIn(closedOrderStatuses, row.status) };
+}
 import { readOrderArtworkOwner, readOrderDetail } from './order-detail-repo.ts';
 import { availableOrderActions } from './order-flow.ts';
 
 /** What the studio reads about orders: the board, the due-date calendar, one order's page and its customer's pictures. */
 export function createStudioOrderService(deps: { db: Db; artwork: ArtworkService; now: () => Date }) {
   const { db } = deps;
-  const today = () => deps.now().toISOString().slice(0, 10);
+  /** The shop's calendar and its today, in its own time zone: the one "today" of the board and the calendar. */
+  async function shopDay() {
+    const schedule = await shopCalendarOf(db);
+    return { schedule, today: shopDayOf(deps.now().getTime(), schedule.timeZone) };
+  }
 
   return {
-    board: (query: OrderBoardQuery): Promise<OrderBoardResponse> => listBoardOrders(db, query, today()),
+    async board(query: OrderBoardQuery): Promise<OrderBoardResponse> {
+      const [{ schedule, today }, page] = await Promise.all([shopDay(), listBoardOrders(db, query)]);
+      return { ...page, rows: page.rows.map((row) => dated(row, schedule, today)) };
+    },
 
+    /** Due in the range or already overdue, soonest first, whether the date was asked for or comes from the lead time. */
     async due(range: DueOrdersQuery): Promise<DueOrdersResponse> {
-      return { ...range, today: today(), orders: await listDueOrders(db, range, today()) };
+      const { schedule, today } = await shopDay();
+      const orders = (await listDueCandidates(db, range, today))
+        .map((row) => dated(row, schedule, today))
+        .filter(
+          (order) =>
+            order.dueDate !== null &&
+            ((order.dueDate >= range.from && order.dueDate <= range.to) || order.dueDate < today),
+        )
+        .sort((a, b) => a.dueDate!.localeCompare(b.dueDate!) || a.number.localeCompare(b.number));
+      return { ...range, today, orders };
     },
 
     async detail(number: string): Promise<Result<OrderDetailResponse>> {

@@ -7,7 +7,7 @@
 import {
   adviseStabilizer,
   estimateRunMinutes,
-  garmentCautions,
+  cautionsForGarment,
   type GuidanceMessage,
   type QuotePlacement,
   type RunTimeEstimate,
@@ -79,14 +79,14 @@ export function figureDesign(catalogue: QuoteCatalogue, document: DesignDocument
   if (!runMinutes.ok) return failure('invalid', `The machine time can't be estimated: ${runMinutes.reason}`);
   const stabilizer = adviseDesignStabilizer(catalogue, placements, totals.stitches);
   if (!stabilizer.ok) return failure('invalid', `The stabilizer can't be chosen: ${stabilizer.reason}`);
-  // The youngest wearer the garment is made for, so the cautions err towards the younger child. The shop's
-  // garments are not sleepwear and have no drawstrings, and a design of stitches adds no detachable trims.
-  const cautions = garmentCautions({
-    wearerAgeMonths: catalogue.garment.minAgeMonths,
-    isSleepwear: false,
-    hasHoodOrNeckDrawstring: false,
-    hasDetachableEmbellishments: false,
-  });
+  // The youngest wearer the chosen size is made for, so the cautions err towards the younger child; trims come
+  // with the catalogue's motifs the design places (a stitched name or the customer's picture adds none).
+  const hasTrims = document.placements.some(
+    (placement) =>
+      (placement.kind === 'border' || placement.kind === 'motif') &&
+      (catalogue.motifs.get(placement.motif)?.trims.length ?? 0) > 0,
+  );
+  const cautions = cautionsForGarment(catalogue.garment.safety, catalogue.size.minAgeMonths, hasTrims);
   if (!cautions.ok) return failure('invalid', `The garment cautions can't be given: ${cautions.reason}`);
 
   return ok({

@@ -1,7 +1,9 @@
 import type { Db } from '../../db/knex.ts';
+import { jsonColumn } from '../../db/json-column.ts';
 import type { PricingRuleSet } from '../../engine/index.ts';
 import type { LetteringFontFile } from '../../integrations/lettering-fonts.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
+import { garmentSafetyFacts } from '../../contracts/guidance.ts';
 import type {
   CatalogueFont,
   CatalogueGarment,
@@ -46,11 +48,23 @@ const mmOrNull = (value: string | null) => (value === null ? null : Number(value
 export async function loadQuoteCatalogue(db: Db, query: QuoteCatalogueQuery): Promise<Result<QuoteCatalogueRecord>> {
   const [garment, size, colour, motifs, fonts, hoops, shop, ruleSet] = await Promise.all([
     db('garments')
-      .select('id', 'slug', 'name', 'fabric_type', 'is_napped', 'min_age_months')
+      .select(
+        'id',
+        'slug',
+        'name',
+        'fabric_type',
+        'is_napped',
+        'min_age_months',
+        'tie_places',
+        'drawstring_places',
+        'closure',
+        'closes_at_neck',
+        'intended_use',
+      )
       .where({ id: query.garmentId, is_active: true })
       .first(),
     db('garment_sizes')
-      .select('id', 'code', 'label', 'hem_front_mm', 'hem_circumference_mm', 'placement_zones')
+      .select('id', 'code', 'label', 'hem_front_mm', 'hem_circumference_mm', 'placement_zones', 'min_age_months')
       .where({ id: query.sizeId, garment_id: query.garmentId })
       .first(),
     query.colourId === undefined
@@ -70,6 +84,7 @@ export async function loadQuoteCatalogue(db: Db, query: QuoteCatalogueQuery): Pr
         'colour_count',
         'min_scale_pct',
         'max_scale_pct',
+        'trims',
       )
       .whereIn('slug', query.motifSlugs)
       .where({ is_active: true }),
@@ -108,6 +123,13 @@ export async function loadQuoteCatalogue(db: Db, query: QuoteCatalogueQuery): Pr
       fabricType: garment.fabric_type,
       isNapped: Boolean(garment.is_napped),
       minAgeMonths: garment.min_age_months,
+      safety: garmentSafetyFacts.parse({
+        tiePlaces: jsonColumn(garment.tie_places),
+        drawstringPlaces: jsonColumn(garment.drawstring_places),
+        closure: garment.closure,
+        closesAtNeck: Boolean(garment.closes_at_neck),
+        intendedUse: garment.intended_use,
+      }),
     },
     size: {
       id: size.id,
@@ -116,6 +138,7 @@ export async function loadQuoteCatalogue(db: Db, query: QuoteCatalogueQuery): Pr
       hemFrontMm: mmOrNull(size.hem_front_mm),
       hemCircumferenceMm: mmOrNull(size.hem_circumference_mm),
       zones: size.placement_zones as PlacementZone[],
+      minAgeMonths: size.min_age_months,
     },
     motifs: motifs.map((m) => ({
       slug: m.slug,
@@ -130,6 +153,7 @@ export async function loadQuoteCatalogue(db: Db, query: QuoteCatalogueQuery): Pr
       colourCount: m.colour_count,
       minScalePct: m.min_scale_pct,
       maxScalePct: m.max_scale_pct,
+      trims: jsonColumn(m.trims) as string[],
     })),
     fonts: fonts.map((f) => ({
       slug: f.slug,

@@ -3,7 +3,13 @@
  * design names, the hoops and the machine's pace. The server reads it from the database, the seeds build it from
  * their data files, and both hand it to `figureDesign`, so a seeded quote is priced exactly as the server would.
  */
-import type { FabricConstruction, GlyphOutlineSource, MachineSettings, SvgArtworkFigures } from '../../engine/index.ts';
+import type {
+  FabricConstruction,
+  GarmentSafetyFactsInput,
+  GlyphOutlineSource,
+  MachineSettings,
+  SvgArtworkFigures,
+} from '../../engine/index.ts';
 
 export interface CatalogueGarment {
   id: number;
@@ -11,8 +17,10 @@ export interface CatalogueGarment {
   name: string;
   fabricType: FabricConstruction;
   isNapped: boolean;
-  /** The youngest wearer the garment is made for, months: the safety cautions assume this child. */
+  /** The youngest wearer the garment is made for, months: the stabilizer's soft back for babies assumes this child. */
   minAgeMonths: number;
+  /** Ties, drawstrings, fastening and use, for the safety cautions. */
+  safety: GarmentSafetyFactsInput;
 }
 
 /** A place on the garment where embroidery may go, in the size's own millimetres. */
@@ -37,6 +45,8 @@ export interface CatalogueSize {
   hemFrontMm: number | null;
   hemCircumferenceMm: number | null;
   zones: PlacementZone[];
+  /** The youngest wearer this size is made for, months: the safety cautions assume this child. */
+  minAgeMonths: number;
 }
 
 /** A catalogue motif with the figures measured from its stitch file at 100 %. */
@@ -54,6 +64,8 @@ export interface CatalogueMotifEntry {
   colourCount: number;
   minScalePct: number;
   maxScalePct: number;
+  /** Trims beyond stitches (appliqué, buttons, bows, beads), which could come off; empty for stitches only. */
+  trims: readonly string[];
 }
 
 export interface CatalogueFont {

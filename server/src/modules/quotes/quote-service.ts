@@ -1,7 +1,7 @@
 import type { Db } from '../../db/knex.ts';
 import { artworkForQuote, type ArtworkOwner } from '../artwork/artwork-service.ts';
 import { loadQuoteCatalogue, type QuoteCatalogueRecord } from './quote-catalogue-repo.ts';
-import { priceQuote } from '../../engine/index.ts';
+import { priceQuote, type GuidanceMessage } from '../../engine/index.ts';
 import type { LetteringFontLoader } from '../../integrations/lettering-fonts.ts';
 import type { DesignDocument } from '../../contracts/designs.ts';
 import type { QuotePreviewRequest, QuotePreviewResponse } from '../../contracts/quotes.ts';
@@ -94,7 +94,20 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader })
     return priced.ok ? ok(priced.value.response) : priced;
   }
 
-  return { preview, price };
+  /**
+   * The safety cautions for a design on a garment size as the catalogue states them now (ties, fastening, use, the
+   * size's youngest wearer, the motifs' trims). Empty when the design can no longer be figured (a retired garment):
+   * the page then shows none rather than failing.
+   */
+  async function cautionsFor(
+    design: { garmentId: number; sizeId: number; document: DesignDocument },
+    owner?: ArtworkOwner,
+  ): Promise<GuidanceMessage[]> {
+    const priced = await price({ ...design, quantity: 1, isRush: false }, owner);
+    return priced.ok ? priced.value.figures.cautions : [];
+  }
+
+  return { preview, price, cautionsFor };
 }
 
 export type QuoteService = ReturnType<typeof createQuoteService>;

@@ -1,6 +1,6 @@
 import type { Db } from '../../db/knex.ts';
 import { findCustomerDesign } from '../designs/design-service.ts';
-import { shopScheduleOf } from '../settings/settings-service.ts';
+import { shopCalendarOf } from '../settings/settings-service.ts';
 import {
   findFabricColourName,
   findQuote,
@@ -8,12 +8,12 @@ import {
   type StoredQuote,
   type StoredQuoteInput,
 } from './stored-quote-repo.ts';
-import { estimateRunMinutes } from '../../engine/index.ts';
+import { estimateRunMinutes, shopDayOf, type GuidanceMessage } from '../../engine/index.ts';
 import type { CreateQuoteRequest, StoredQuoteResponse } from '../../contracts/stored-quotes.ts';
 import type { QuotePreviewRequest } from '../../contracts/quotes.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import { quoteSummaryOf, type QuoteService } from './quote-service.ts';
-import { shopToday, workOutReadyDates } from './ready-dates.ts';
+import { workOutReadyDates } from './ready-dates.ts';
 
 /** A quote holds its price for two weeks: long enough to decide, short enough that prices do not go stale. */
 export const QUOTE_VALIDITY_DAYS = 14;
@@ -145,13 +145,25 @@ export function createStoredQuoteService(deps: { db: Db; quotes: QuoteService; n
     });
   }
 
-  /** The ready dates for an order placed now. */
-  async function readyDatesToday() {
-    const shop = await shopScheduleOf(db);
-    return workOutReadyDates(shopToday(deps.now(), shop.timezone), shop.leadTimeDays);
+  /**
+   * The safety cautions for a quote's design as the catalogue states the garment, size and motifs today, so a fact
+   * the studio corrected since the quote counts; a quote too old to be figured again keeps the cautions it showed.
+   */
+  async function cautionsOf(quote: StoredQuote): Promise<GuidanceMessage[]> {
+    const { garmentId, sizeId, document, figures } = quote.input;
+    if (garmentId === undefined || sizeId === undefined || !document) return figures?.cautions ?? [];
+    const owner = quote.customerId === null ? undefined : { userId: quote.customerId };
+    const cautions = await deps.quotes.cautionsFor({ garmentId, sizeId, document }, owner);
+    return cautions.length > 0 ? cautions : (figures?.cautions ?? []);
   }
 
-  return { create, get, reprice, readyDatesToday };
+  /** The ready dates for an order placed now. */
+  async function readyDatesToday() {
+    const calendar = await shopCalendarOf(db);
+    return workOutReadyDates(shopDayOf(deps.now().getTime(), calendar.timeZone), calendar);
+  }
+
+  return { create, get, reprice, cautionsOf, readyDatesToday };
 }
 
 export type StoredQuoteService = ReturnType<typeof createStoredQuoteService>;

@@ -1,6 +1,7 @@
 import type { Db } from '../../db/knex.ts';
 import type { ShopSettings } from '../../contracts/admin-settings.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
+import type { ShopCalendar } from '../../engine/index.ts';
 import { readShopSchedule, readShopSettings, updateShopSettings, type ShopSchedule } from './shop-settings-repo.ts';
 
 export type { ShopSchedule };
@@ -10,6 +11,17 @@ export type { ShopSchedule };
  * payment e-mails). `db` may be the caller's transaction.
  */
 export const shopScheduleOf = (db: Db): Promise<ShopSchedule> => readShopSchedule(db);
+
+/** The shop's calendar as the engine's date rules take it: its zone, closed days and lead time. */
+export async function shopCalendarOf(db: Db): Promise<ShopCalendar & { leadTimeDays: number }> {
+  const shop = await readShopSchedule(db);
+  return {
+    timeZone: shop.timezone,
+    closedWeekdays: shop.closedWeekdays,
+    holidays: shop.holidays,
+    leadTimeDays: shop.leadTimeDays,
+  };
+}
 
 const noSettings = () => failure('conflict', 'The studio has no settings yet; run the set-up first.');
 

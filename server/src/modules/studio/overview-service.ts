@@ -3,7 +3,9 @@ import type { ActionGroupKind, ActionOrder, AdminOverviewResponse } from '../../
 import type { OrderStatus } from '../../contracts/order-status.ts';
 import { readOrderOverview } from './order-overview-repo.ts';
 import { readCapacitySettings, readMoneyMovements, readOpenOrders, type OpenOrderRow } from './studio-week-repo.ts';
-import { bookMachineHours, dueDateOf, sumRevenueByWeek, weekStartOf } from './studio-weeks.ts';
+import { bookMachineHours, dueDateOfRow, sumRevenueByWeek } from './studio-weeks.ts';
+import { shopCalendarOf } from '../settings/settings-service.ts';
+import { addCalendarDays, isPastDue, shopDayOf, weekStartOf } from '../../engine/index.ts';
 
 /** Weeks of machine time shown ahead (this one included) and of takings shown back. */
 const weeksAhead = 6;
@@ -23,19 +25,23 @@ const statusOfGroup: Record<Exclude<ActionGroupKind, 'due_soon'>, OrderStatus> =
 export function createOverviewService(deps: { db: Db; now: () => Date }) {
   async function read(): Promise<AdminOverviewResponse> {
     const now = deps.now();
-    const since = new Date(Date.parse(`${weekStartOf(now)}T00:00:00Z`) - (weeksBack - 1) * 7 * 86_400_000);
+    const schedule = await shopCalendarOf(deps.db);
+    // The shop's day, in its own time zone: an order due today is not overdue this evening, whatever UTC says.
+    const today = shopDayOf(now.getTime(), schedule.timeZone);
+    // Takings from the first shop day of the earliest week shown; a day before that in UTC does no harm, as the
+    // weeks themselves are counted in the shop's days.
+    const since = new Date(Date.parse(`${addCalendarDays(weekStartOf(today), -7 * (weeksBack - 1) - 1)}T00:00:00Z`));
     const [base, open, money, settings] = await Promise.all([
       readOrderOverview(deps.db, 12),
       readOpenOrders(deps.db),
       readMoneyMovements(deps.db, since),
       readCapacitySettings(deps.db),
     ]);
-    const leadTimeDays = settings?.leadTimeDays ?? 10;
-    const today = now.toISOString().slice(0, 10);
-    const soon = new Date(now.getTime() + dueSoonDays * 86_400_000).toISOString().slice(0, 10);
+    const { leadTimeDays } = schedule;
+    const soon = addCalendarDays(today, dueSoonDays);
 
     const toAction = (order: OpenOrderRow): ActionOrder => {
-      const dueDate = dueDateOf(order, leadTimeDays);
+      const dueDate = dueDateOfRow(order, schedule);
       return {
         id: order.id,
         number: order.number,
@@ -46,7 +52,7 @@ export function createOverviewService(deps: { db: Db; now: () => Date }) {
         neededBy: order.neededBy,
         placedAt: order.placedAt?.toISOString() ?? null,
         dueDate,
-        isOverdue: dueDate !== null && dueDate < today,
+        isOverdue: isPastDue(dueDate, today),
       };
     };
     const actions = open.map(toAction);
@@ -74,12 +80,16 @@ export function createOverviewService(deps: { db: Db; now: () => Date }) {
         // Stitched work has left the machine, so only orders before that point book hours.
         weeks: bookMachineHours(
           open.filter((order) => order.status !== 'stitched'),
-          { now, weekCount: weeksAhead, leadTimeDays },
+          { now, weekCount: weeksAhead, schedule },
         ),
       },
       revenue: {
         currency: settings?.currency ?? 'USD',
-        weeks: sumRevenueByWeek(money.captures, money.refunds, { now, weekCount: weeksBack }),
+        weeks: sumRevenueByWeek(money.captures, money.refunds, {
+          now,
+          weekCount: weeksBack,
+          timeZone: schedule.timeZone,
+        }),
       },
     };
   }

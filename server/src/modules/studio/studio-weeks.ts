@@ -1,23 +1,14 @@
 /**
- * The Today page's weekly figures, as pure functions of rows and "now": machine hours booked per week against
- * capacity, and takings per week. Weeks start on Monday and are counted in UTC, as every stored time is.
+ * The Today page's weekly figures, as pure functions of rows, "now" and the shop's calendar: machine hours booked per
+ * week against capacity, and takings per week. Weeks start on Monday and are counted in the shop's days (its time
+ * zone), the same days as its due dates.
  */
-import { addWorkingDays } from '../quotes/ready-dates.ts';
+import { addCalendarDays, dueDateOf, shopDayOf, weekStartOf, type ShopCalendar } from '../../engine/index.ts';
 import type { MoneyMovement } from './studio-week-repo.ts';
 
 export type { MoneyMovement };
 
-const dayMs = 86_400_000;
-
-/** The Monday (UTC) of the week holding `date`, as "YYYY-MM-DD". */
-export function weekStartOf(date: Date): string {
-  const midnight = Date.UTC(date.getUTCFullYear(), date.getUTCMonth(), date.getUTCDate());
-  const daysSinceMonday = (new Date(midnight).getUTCDay() + 6) % 7;
-  return new Date(midnight - daysSinceMonday * dayMs).toISOString().slice(0, 10);
-}
-
-const addWeeks = (weekStart: string, weeks: number) =>
-  new Date(Date.parse(`${weekStart}T00:00:00Z`) + weeks * 7 * dayMs).toISOString().slice(0, 10);
+const addWeeks = (weekStart: string, weeks: number) => addCalendarDays(weekStart, weeks * 7);
 
 /** An order still to be stitched, with its quote's machine minutes for the whole quantity. */
 export interface BookedOrder {
@@ -28,12 +19,12 @@ export interface BookedOrder {
   placedAt: Date | null;
 }
 
-/** When an order is due: the customer's date, else the lead time in working days after it was placed. */
-export function dueDateOf(order: Pick<BookedOrder, 'neededBy' | 'placedAt'>, leadTimeDays: number): string | null {
-  if (order.neededBy) return order.neededBy;
-  // The same working-day rule as the customer's ready dates, counted from the day (UTC) the card was held.
-  return order.placedAt ? addWorkingDays(order.placedAt.toISOString().slice(0, 10), leadTimeDays) : null;
-}
+/** The shop's calendar with its lead time: what every due date is worked out from. */
+export type ShopSchedule = ShopCalendar & { leadTimeDays: number };
+
+/** An order's due date by the engine's one rule (`dueDateOf`), from the row's own dates. */
+export const dueDateOfRow = (order: Pick<BookedOrder, 'neededBy' | 'placedAt'>, schedule: ShopSchedule) =>
+  dueDateOf({ neededBy: order.neededBy, placedAtMs: order.placedAt?.getTime() ?? null }, schedule);
 
 export interface MachineWeek {
   weekStart: string;
@@ -48,18 +39,18 @@ export interface MachineWeek {
  */
 export function bookMachineHours(
   orders: readonly BookedOrder[],
-  options: { now: Date; weekCount: number; leadTimeDays: number },
+  options: { now: Date; weekCount: number; schedule: ShopSchedule },
 ): MachineWeek[] {
-  const first = weekStartOf(options.now);
+  const first = weekStartOf(shopDayOf(options.now.getTime(), options.schedule.timeZone));
   const weeks = Array.from({ length: options.weekCount }, (_, i) => ({
     weekStart: addWeeks(first, i),
     minutes: 0,
     orderCount: 0,
   }));
   for (const order of orders) {
-    const due = dueDateOf(order, options.leadTimeDays);
+    const due = dueDateOfRow(order, options.schedule);
     if (!due) continue;
-    const dueWeek = weekStartOf(new Date(`${due}T12:00:00Z`));
+    const dueWeek = weekStartOf(due);
     const week = dueWeek < first ? weeks[0] : weeks.find((candidate) => candidate.weekStart === dueWeek);
     if (!week) continue;
     week.minutes += order.runMinutes;
@@ -84,15 +75,16 @@ export interface RevenueWeek {
 export function sumRevenueByWeek(
   captures: readonly MoneyMovement[],
   refunds: readonly MoneyMovement[],
-  options: { now: Date; weekCount: number },
+  options: { now: Date; weekCount: number; timeZone: string },
 ): RevenueWeek[] {
-  const last = weekStartOf(options.now);
+  const weekOfMoment = (at: Date) => weekStartOf(shopDayOf(at.getTime(), options.timeZone));
+  const last = weekOfMoment(options.now);
   const weeks = Array.from({ length: options.weekCount }, (_, i) => ({
     weekStart: addWeeks(last, i - options.weekCount + 1),
     capturedCents: 0,
     refundedCents: 0,
   }));
-  const weekOf = (at: Date) => weeks.find((week) => week.weekStart === weekStartOf(at));
+  const weekOf = (at: Date) => weeks.find((week) => week.weekStart === weekOfMoment(at));
   for (const capture of captures) {
     const week = weekOf(capture.at);
     if (week) week.capturedCents += capture.amountCents;

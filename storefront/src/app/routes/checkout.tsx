@@ -22,7 +22,10 @@ import { usePlaceOrder } from '../../features/checkout/api/place-order.ts';
 import { CheckoutForm, type CheckoutFields } from '../../features/checkout/components/checkout-form.tsx';
 import { QuantityField } from '../../features/checkout/components/quantity-field.tsx';
 import { useCheckoutQuote, type OrderedDesign } from '../../features/checkout/hooks/use-checkout-quote.ts';
+import { SafetyAcknowledgement } from '../../features/checkout/components/safety-acknowledgement.tsx';
 import { paths } from '../../config/paths.ts';
+// Straight from its module: the engine's entry also registers colour spaces at load, which checkout does not need.
+import { needsSafetyAcknowledgement } from '@server/engine/garment-cautions.ts';
 
 /** What the server said when it priced the order again (an expired quote, or a date that needs a rush). */
 interface Repriced {
@@ -56,6 +59,8 @@ export function CheckoutPage() {
   const [resized, setResized] = useState<{ sizeId: number; document: DesignDocument }>();
   const [resizeProblem, setResizeProblem] = useState<string>();
   const [isSavingDesign, setIsSavingDesign] = useState(false);
+  // Which safety notes the customer ticked as read: a change of size or design brings new notes to read.
+  const [readSafetyNotes, setReadSafetyNotes] = useState<string>();
   const ordered = useMemo<OrderedDesign | undefined>(
     () =>
       saved.data && {
@@ -133,6 +138,11 @@ export function CheckoutPage() {
     }
   };
 
+  const cautions = shown.quote?.cautions ?? [];
+  const needsSafetyTick = needsSafetyAcknowledgement(cautions);
+  const safetyNotesKey = `${sizeId}:${cautions.map((caution) => caution.code).join(',')}`;
+  const hasTickedSafety = needsSafetyTick && readSafetyNotes === safetyNotesKey;
+
   const submit = async (fields: CheckoutFields, quoteId = shown.quote?.quoteId) => {
     if (quoteId === undefined) return;
     lastFields.current = fields;
@@ -164,7 +174,7 @@ export function CheckoutPage() {
       }
     }
     place.mutate(
-      { quoteId, designId, ...fields },
+      { quoteId, designId, ...fields, ...(needsSafetyTick ? { hasReadSafetyNotes: hasTickedSafety } : {}) },
       {
         onSuccess: (started) => window.location.assign(started.checkoutUrl),
         onError: (error) => setRepriced(repricedOf(error)),
@@ -202,9 +212,18 @@ export function CheckoutPage() {
             onSubmit={(fields) => void submit(fields)}
             serverFields={serverFields}
             isSubmitting={place.isPending || isSavingDesign}
-            canSubmit={quote !== undefined && !shown.isPricing}
+            canSubmit={quote !== undefined && !shown.isPricing && (!needsSafetyTick || hasTickedSafety)}
             summary={
               <div className="space-y-3">
+                {quote && (
+                  <SafetyAcknowledgement
+                    cautions={cautions}
+                    sizeLabel={size?.label}
+                    needsTick={needsSafetyTick}
+                    isTicked={hasTickedSafety}
+                    onTick={(isTicked) => setReadSafetyNotes(isTicked ? safetyNotesKey : undefined)}
+                  />
+                )}
                 {quote && (
                   <p className="text-base">
                     We will hold{' '}

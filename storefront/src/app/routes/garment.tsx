@@ -8,6 +8,7 @@ import { useMotifs } from '../../features/catalogue/api/get-motifs.ts';
 import { GarmentViews } from '../../features/catalogue/components/garment-views.tsx';
 import { SizePicker } from '../../features/catalogue/components/size-picker.tsx';
 import { SizeTable } from '../../features/catalogue/components/size-table.tsx';
+import { SafetyCautions } from '../../components/safety-cautions.tsx';
 import { FabricColourPicker } from '../../features/catalogue/components/fabric-colour-picker.tsx';
 import { BorderFitList } from '../../features/catalogue/components/border-fit-list.tsx';
 import { MotifCard } from '../../features/catalogue/components/motif-card.tsx';
@@ -65,6 +66,14 @@ export function GarmentPage() {
           <div className="mt-6">
             <SizePicker sizes={data.sizes} selectedId={size?.id} onSelect={setSizeId} />
           </div>
+          {size && (
+            <SafetyCautions
+              cautions={size.cautions}
+              heading={`Safety notes for size ${size.label}`}
+              headingLevel="h2"
+              className="mt-6"
+            />
+          )}
         </div>
       </div>
 

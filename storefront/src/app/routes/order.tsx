@@ -15,6 +15,7 @@ import { OrderSteps } from '../../features/orders/components/order-steps.tsx';
 import { OrderTimeline } from '../../features/orders/components/order-timeline.tsx';
 import { PaymentState } from '../../features/orders/components/payment-state.tsx';
 import { ProofReview } from '../../features/orders/components/proof-review.tsx';
+import { SafetyCautions } from '../../components/safety-cautions.tsx';
 import { DesignSummary } from '../../features/orders/components/design-summary.tsx';
 import { CancelOrderButton } from '../../features/orders/components/cancel-order-button.tsx';
 import { SignInNeeded } from '../../components/sign-in-needed.tsx';
@@ -61,7 +62,7 @@ export function OrderPage() {
       </div>
     );
   }
-  const { order: summary, design, quote, proofs, timeline, actions } = order.data;
+  const { order: summary, design, quote, proofs, timeline, actions, cautions } = order.data;
   const garment = garments.data?.find((candidate) => candidate.id === design.garmentId);
   const hasProofToAnswer = proofs.some((proof) => proof.isAnswerable);
 
@@ -77,8 +78,8 @@ export function OrderPage() {
         </div>
         <p className="mt-1 text-walnut-700">
           {summary.description} · {formatMoney(summary.totalCents, summary.currency)}
-          {summary.neededBy &&
-            ` · needed by ${new Date(`${summary.neededBy}T12:00:00Z`).toLocaleDateString('en-US', { month: 'long', day: 'numeric' })}`}
+          {summary.dueDate &&
+            ` · ${summary.neededBy ? 'needed by' : 'ready by about'} ${new Date(`${summary.dueDate}T12:00:00Z`).toLocaleDateString('en-US', { month: 'long', day: 'numeric', timeZone: 'UTC' })}`}
           {summary.isRush && ' · rush'}
         </p>
       </div>
@@ -113,6 +114,11 @@ export function OrderPage() {
             ) : (
               <ProofReview number={summary.number} proofs={proofs} />
             )}
+            <SafetyCautions
+              cautions={cautions}
+              heading={`Safety notes for ${design.garmentName}, size ${design.sizeLabel}`}
+              className="mt-4"
+            />
           </section>
           <section aria-labelledby="history-heading" className={card}>
             <h2 id="history-heading" className="mb-3 text-lg font-semibold">

@@ -35,6 +35,7 @@ export const bishopDress: GarmentSummary = {
   kind: 'bishop_dress',
   description: '',
   fabricType: 'woven',
+  safety: { tiePlaces: [], drawstringPlaces: [], closure: 'buttons', closesAtNeck: false, intendedUse: 'day_wear' },
   mockupSvg: '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 460 470"></svg>',
   mockupWidthMm: 460,
   mockupHeightMm: 470,
@@ -47,6 +48,8 @@ export const bishopDress: GarmentSummary = {
       zones: zonesAt(sixMonthScale),
       hemFrontMm: 346,
       hemCircumferenceMm: 692,
+      minAgeMonths: 6,
+      maxAgeMonths: 12,
     },
     {
       id: 302,
@@ -56,6 +59,8 @@ export const bishopDress: GarmentSummary = {
       zones: zonesAt(1),
       hemFrontMm: 380,
       hemCircumferenceMm: 760,
+      minAgeMonths: 12,
+      maxAgeMonths: 18,
     },
     // Not a real size: a hem so short that no whole number of daisy repeats fits within 90–110 %.
     {
@@ -66,6 +71,8 @@ export const bishopDress: GarmentSummary = {
       zones: zonesAt(0.5),
       hemFrontMm: 130,
       hemCircumferenceMm: 250,
+      minAgeMonths: 0,
+      maxAgeMonths: 3,
     },
   ],
   colours: [
@@ -84,6 +91,7 @@ const motif = (
   colourCount: 1,
   stitchCount: 1000,
   threadCodes: ['WB-118'],
+  trims: [],
   ...fields,
 });
 

@@ -7,10 +7,12 @@ import {
   garmentKinds,
   type StudioGarment,
 } from '@server/contracts/admin-catalogue-garments.ts';
-import { garmentCautions } from '@server/engine/index.ts';
+import { garmentClosures, garmentUses } from '@server/contracts/guidance.ts';
+import { cautionsForGarment } from '@server/engine/index.ts';
 import { useSaveCatalogueRow } from '../api/save-catalogue-row.ts';
 import { asNumber, Field, inputClassName, saveOrShowErrors, slugFrom } from './form-field.tsx';
 import { FormActions } from './form-actions.tsx';
+import { ChoiceBoxes } from './choice-boxes.tsx';
 import { SvgPicture } from './svg-picture.tsx';
 
 const fieldNames = [
@@ -22,8 +24,31 @@ const fieldNames = [
   'isNapped',
   'minAgeMonths',
   'maxAgeMonths',
+  'tiePlaces',
+  'drawstringPlaces',
+  'closure',
+  'closesAtNeck',
+  'intendedUse',
   'mockupSvg',
 ] as const;
+
+const placeChoices = [
+  { value: 'hood', label: 'Hood' },
+  { value: 'neck', label: 'Neck (under the chin)' },
+  { value: 'waist', label: 'Waist' },
+] as const;
+const closureLabels: Record<(typeof garmentClosures)[number], string> = {
+  none: 'Nothing (pulls on)',
+  snaps: 'Snaps',
+  buttons: 'Buttons',
+  hook_and_loop: 'Hook-and-loop tab',
+  ties: 'Ties',
+  zip: 'Zip',
+};
+const useLabels: Record<(typeof garmentUses)[number], string> = {
+  day_wear: 'Day wear',
+  sleepwear: 'Sleepwear (pyjamas, nightgowns, sleep sacks)',
+};
 
 export const garmentKindLabels: Record<(typeof garmentKinds)[number], string> = {
   dress: 'Dress',
@@ -54,6 +79,7 @@ export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDo
           isNapped: garment.isNapped,
           minAgeMonths: garment.minAgeMonths,
           maxAgeMonths: garment.maxAgeMonths,
+          ...garment.safety,
           mockupSvg: garment.mockupSvg,
         }
       : {
@@ -63,19 +89,36 @@ export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDo
           description: '',
           fabricType: 'woven' as const,
           isNapped: false,
+          tiePlaces: [],
+          drawstringPlaces: [],
+          closure: 'none' as const,
+          closesAtNeck: false,
+          intendedUse: 'day_wear' as const,
           mockupSvg: '',
         },
   });
   const errors = formState.errors;
   const mockupSvg = watch('mockupSvg');
   const youngestMonths = watch('minAgeMonths');
-  // The cautions for the youngest wearer the garment is made for, as the storefront shows them on it.
-  const cautions = garmentCautions({
-    wearerAgeMonths: typeof youngestMonths === 'number' && youngestMonths >= 0 ? youngestMonths : undefined,
-    hasDetachableEmbellishments: false,
-    isSleepwear: false,
-    hasHoodOrNeckDrawstring: false,
-  });
+  const [tiePlaces, drawstringPlaces, closure, closesAtNeck, intendedUse] = watch([
+    'tiePlaces',
+    'drawstringPlaces',
+    'closure',
+    'closesAtNeck',
+    'intendedUse',
+  ]);
+  // The cautions for the youngest wearer the garment is made for, as the storefront shows them on its smallest size.
+  const cautions = cautionsForGarment(
+    {
+      tiePlaces: Array.isArray(tiePlaces) ? tiePlaces : [],
+      drawstringPlaces: Array.isArray(drawstringPlaces) ? drawstringPlaces : [],
+      closure: closure ?? 'none',
+      closesAtNeck: Boolean(closesAtNeck),
+      intendedUse: intendedUse ?? 'day_wear',
+    },
+    typeof youngestMonths === 'number' && youngestMonths >= 0 ? youngestMonths : 0,
+    false,
+  );
 
   async function readDrawing(file: File | undefined) {
     setFileError(undefined);
@@ -154,6 +197,43 @@ export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDo
           Napped fabric (terry, velvet): stitching needs a topping
         </label>
       </div>
+      <fieldset className="grid gap-4 rounded-lg border border-linen-200 p-3 sm:grid-cols-2">
+        <legend className="px-1 text-sm font-medium">Safety facts (the cautions customers see come from these)</legend>
+        <ChoiceBoxes
+          legend="Ribbon ties at"
+          choices={placeChoices}
+          register={register('tiePlaces')}
+          error={errors.tiePlaces?.message}
+        />
+        <ChoiceBoxes
+          legend="Drawstrings at"
+          choices={placeChoices}
+          register={register('drawstringPlaces')}
+          error={errors.drawstringPlaces?.message}
+        />
+        <Field label="Fastens with" error={errors.closure?.message}>
+          <select className={inputClassName} {...register('closure')}>
+            {garmentClosures.map((kind) => (
+              <option key={kind} value={kind}>
+                {closureLabels[kind]}
+              </option>
+            ))}
+          </select>
+        </Field>
+        <Field label="Made as" error={errors.intendedUse?.message}>
+          <select className={inputClassName} {...register('intendedUse')}>
+            {garmentUses.map((use) => (
+              <option key={use} value={use}>
+                {useLabels[use]}
+              </option>
+            ))}
+          </select>
+        </Field>
+        <label className="flex min-h-10 items-center gap-2 text-sm sm:col-span-2">
+          <input type="checkbox" className="h-5 w-5 accent-madder-600" {...register('closesAtNeck')} />
+          The fastening goes round the neck (a bib’s snap, a bonnet’s ties)
+        </label>
+      </fieldset>
       {cautions.ok && (
         <aside
           aria-label="Safety notes for this garment"

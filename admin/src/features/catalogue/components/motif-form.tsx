@@ -9,6 +9,7 @@ import { usePreviewMotif } from '../api/preview-motif.ts';
 import { useSaveCatalogueRow } from '../api/save-catalogue-row.ts';
 import { asNumber, Field, inputClassName, saveOrShowErrors, slugFrom, smallButtonClassName } from './form-field.tsx';
 import { FormActions } from './form-actions.tsx';
+import { ChoiceBoxes } from './choice-boxes.tsx';
 import { MotifEstimateSummary } from './motif-estimate.tsx';
 import { StitchMixBar } from './stitch-mix-bar.tsx';
 import { SvgPicture } from './svg-picture.tsx';
@@ -25,7 +26,14 @@ const fieldNames = [
   'minScalePct',
   'maxScalePct',
   'threadCodes',
+  'trims',
   'measured',
+] as const;
+const motifTrimChoices = [
+  { value: 'applique', label: 'Appliqué' },
+  { value: 'buttons', label: 'Buttons' },
+  { value: 'bows', label: 'Bows' },
+  { value: 'beads', label: 'Beads' },
 ] as const;
 const round2 = (value: number) => Math.round(value * 100) / 100;
 
@@ -64,6 +72,7 @@ export function MotifForm({
           minScalePct: motif.minScalePct,
           maxScalePct: motif.maxScalePct,
           threadCodes: motif.threadCodes,
+          trims: motif.trims,
           measured: motif.stitchCountSource === 'measured' ? { stitchCount: motif.stitchCount, mix: motif.mix } : null,
         }
       : {
@@ -75,6 +84,7 @@ export function MotifForm({
           minScalePct: 80,
           maxScalePct: 120,
           threadCodes: [],
+          trims: [],
           measured: null,
         },
   });
@@ -257,6 +267,13 @@ export function MotifForm({
           />
         </Field>
       </div>
+
+      <ChoiceBoxes
+        legend="Trims sewn on beyond the stitches (each could come off: a choking caution for under-3s)"
+        choices={motifTrimChoices}
+        register={register('trims')}
+        error={errors.trims?.message}
+      />
 
       <fieldset className="grid gap-2">
         <legend className="text-sm font-medium text-walnut-700">Threads, one per colour, in stitching order</legend>

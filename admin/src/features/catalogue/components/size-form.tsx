@@ -25,7 +25,16 @@ const zoneLabels: Record<ZoneCode, string> = {
 };
 /** 1¾ in above the hem: where a border's centre line commonly sits (common practice, no source). */
 const usualHemOffsetMm = 44.45;
-const fieldNames = ['code', 'label', 'hemFrontMm', 'hemCircumferenceMm', 'mockupScale', 'zones'] as const;
+const fieldNames = [
+  'code',
+  'label',
+  'minAgeMonths',
+  'maxAgeMonths',
+  'hemFrontMm',
+  'hemCircumferenceMm',
+  'mockupScale',
+  'zones',
+] as const;
 
 /**
  * Adds a size to a garment or edits one: its hem lengths at the guide line, the scale its drawing is shown at, and
@@ -39,12 +48,23 @@ export function SizeForm({ garment, size, onDone }: { garment: StudioGarment; si
       ? {
           code: size.code,
           label: size.label,
+          minAgeMonths: size.minAgeMonths,
+          maxAgeMonths: size.maxAgeMonths,
           hemFrontMm: size.hemFrontMm,
           hemCircumferenceMm: size.hemCircumferenceMm,
           mockupScale: size.mockupScale,
           zones: size.zones.map((zone) => ({ ...zone, code: zone.code as ZoneCode })),
         }
-      : { code: '', label: '', hemFrontMm: null, hemCircumferenceMm: null, mockupScale: 1, zones: [] },
+      : {
+          code: '',
+          label: '',
+          minAgeMonths: garment.minAgeMonths,
+          maxAgeMonths: garment.maxAgeMonths,
+          hemFrontMm: null,
+          hemCircumferenceMm: null,
+          mockupScale: 1,
+          zones: [],
+        },
   });
   const zones = useFieldArray({ control, name: 'zones' });
   const errors = formState.errors;
@@ -67,6 +87,26 @@ export function SizeForm({ garment, size, onDone }: { garment: StudioGarment; si
         </Field>
         <Field label="Label" error={errors.label?.message}>
           <input className={inputClassName} {...register('label')} />
+        </Field>
+        <Field
+          label="Youngest wearer of this size (months)"
+          error={errors.minAgeMonths?.message}
+          hint="The safety cautions for this size assume this child: under 36 months brings the small-parts ones."
+        >
+          <input
+            type="number"
+            inputMode="numeric"
+            className={inputClassName}
+            {...register('minAgeMonths', { setValueAs: asNumber })}
+          />
+        </Field>
+        <Field label="Oldest wearer of this size (months)" error={errors.maxAgeMonths?.message}>
+          <input
+            type="number"
+            inputMode="numeric"
+            className={inputClassName}
+            {...register('maxAgeMonths', { setValueAs: asNumber })}
+          />
         </Field>
         <Field label="Drawing scale" error={errors.mockupScale?.message} hint="1 = the drawing’s reference size.">
           <input

@@ -38,20 +38,20 @@ function OrderChip({ order }: { order: BoardOrder }) {
 }
 
 /**
- * The next weeks as a calendar of due dates: each open order on the day it is needed, rush orders in saffron and
+ * The next weeks as a calendar of due dates: each open order on the day it is due (asked for, or by the lead time),
+ * rush orders in saffron and
  * overdue ones in madder, with orders already late gathered above the weeks. At phone width, a list of the days
  * that have orders.
  */
-export function DueCalendar({ nowMs }: { nowMs: number }) {
-  const { from, to, days } = calendarRange(nowMs, WEEKS);
+export function DueCalendar({ nowMs, timeZone }: { nowMs: number; timeZone: string }) {
+  const { from, to, days } = calendarRange(nowMs, WEEKS, timeZone);
   const due = useDueOrders(from, to);
   if (due.isPending) return <Loading label="Laying out the weeks…" />;
   if (due.isError) return <ErrorNotice message={due.error.message} onRetry={() => void due.refetch()} />;
   const byDay = new Map<string, BoardOrder[]>();
   for (const order of due.data.orders)
-    if (order.neededBy && order.neededBy >= from)
-      byDay.set(order.neededBy, [...(byDay.get(order.neededBy) ?? []), order]);
-  const late = due.data.orders.filter((order) => order.neededBy && order.neededBy < from);
+    if (order.dueDate && order.dueDate >= from) byDay.set(order.dueDate, [...(byDay.get(order.dueDate) ?? []), order]);
+  const late = due.data.orders.filter((order) => order.dueDate && order.dueDate < from);
   const busyDays = days.filter((day) => byDay.has(day));
 
   return (

@@ -62,12 +62,13 @@ const columns = [
     },
   }),
   column.accessor('status', { id: 'status', header: 'Where it stands', cell: (info) => statusLabels[info.getValue()] }),
-  column.accessor('neededBy', {
+  column.accessor('dueDate', {
     id: 'due',
-    header: 'Needed by',
+    header: 'Due',
     cell: (info) => (
       <span className="whitespace-nowrap">
         {info.getValue() ? formatDueDay(info.getValue()!) : '—'}
+        {info.getValue() && !info.row.original.neededBy && <span className="text-walnut-500"> (lead time)</span>}
         <DueFlags order={info.row.original} />
       </span>
     ),
@@ -190,7 +191,11 @@ export function OrderBoardTable({
               {order.customer.name} · {statusLabels[order.status]}
             </p>
             <p className="text-walnut-500">
-              {order.neededBy ? `Needed by ${formatDueDay(order.neededBy)}` : 'No date asked'}
+              {order.neededBy
+                ? `Needed by ${formatDueDay(order.neededBy)}`
+                : order.dueDate
+                  ? `Due ${formatDueDay(order.dueDate)} (lead time)`
+                  : 'No date yet'}
               <DueFlags order={order} />
             </p>
             <p className="mt-1 text-walnut-700">{order.itemSummary}</p>

@@ -1,13 +1,16 @@
-const DAY_MS = 86_400_000;
-const isoDay = (ms: number) => new Date(ms).toISOString().slice(0, 10);
+// Straight from its module: the engine's entry also registers colour spaces at load, which the calendar does not need.
+import { addCalendarDays, shopDayOf, weekStartOf } from '@server/engine/shop-calendar.ts';
 
 /**
- * The calendar's days: from the Monday of the week holding `nowMs` for `weeks` whole weeks, as YYYY-MM-DD in UTC
- * (as due dates are stored), with the first and last day for the request.
+ * The calendar's days: from the Monday of the shop's week holding `nowMs` (the shop's day, in its time zone, as the
+ * server's due dates are) for `weeks` whole weeks, YYYY-MM-DD, with the first and last day for the request.
  */
-export function calendarRange(nowMs: number, weeks: number): { from: string; to: string; days: string[] } {
-  const today = Date.parse(isoDay(nowMs));
-  const monday = today - ((new Date(today).getUTCDay() + 6) % 7) * DAY_MS;
-  const days = Array.from({ length: weeks * 7 }, (_, i) => isoDay(monday + i * DAY_MS));
+export function calendarRange(
+  nowMs: number,
+  weeks: number,
+  timeZone: string,
+): { from: string; to: string; days: string[] } {
+  const monday = weekStartOf(shopDayOf(nowMs, timeZone));
+  const days = Array.from({ length: weeks * 7 }, (_, i) => addCalendarDays(monday, i));
   return { from: days[0]!, to: days.at(-1)!, days };
 }

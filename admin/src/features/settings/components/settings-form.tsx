@@ -6,7 +6,20 @@ import { ErrorNotice } from '@ui/components/page-state.tsx';
 import { NumberField } from '../../../components/number-field.tsx';
 import { useUpdateSettings } from '../api/update-settings.ts';
 
-type Field = keyof ShopSettings;
+type Field = Exclude<keyof ShopSettings, 'timeZone' | 'closedWeekdays' | 'holidays'>;
+
+/** Monday first, as the studio's week runs; values are JavaScript's days, 0 Sunday to 6 Saturday. */
+const weekdays = [
+  { day: 1, label: 'Monday' },
+  { day: 2, label: 'Tuesday' },
+  { day: 3, label: 'Wednesday' },
+  { day: 4, label: 'Thursday' },
+  { day: 5, label: 'Friday' },
+  { day: 6, label: 'Saturday' },
+  { day: 0, label: 'Sunday' },
+];
+const inputClassName =
+  'mt-1 block min-h-10 w-full rounded-lg border border-linen-300 bg-white px-3 read-only:bg-linen-100 aria-invalid:border-madder-600';
 
 const fields: { key: Field; label: string; suffix: string; step: string; hint: string }[] = [
   {
@@ -53,7 +66,10 @@ const fields: { key: Field; label: string; suffix: string; step: string; hint: s
   },
 ];
 
-/** The shop's pace and capacity; every quote's run time is worked out from the first four. */
+/**
+ * The shop's pace, capacity and days; every quote's run time is worked out from the first four, and every due and
+ * ready date from the lead time, the time zone and the closed days.
+ */
 export function SettingsForm({
   settings,
   canEdit,
@@ -66,6 +82,9 @@ export function SettingsForm({
   const [values, setValues] = useState<Record<Field, string>>(
     () => Object.fromEntries(fields.map(({ key }) => [key, String(settings[key])])) as Record<Field, string>,
   );
+  const [timeZone, setTimeZone] = useState(settings.timeZone);
+  const [closedWeekdays, setClosedWeekdays] = useState<number[]>(settings.closedWeekdays);
+  const [holidays, setHolidays] = useState(settings.holidays.join('\n'));
   const update = useUpdateSettings();
   const errors = update.error instanceof ApiError ? (update.error.fields ?? {}) : {};
   const toNumber = (text: string) => (text.trim() === '' ? Number.NaN : Number(text));
@@ -76,7 +95,12 @@ export function SettingsForm({
       aria-label="Shop settings"
       onSubmit={(event) => {
         event.preventDefault();
-        update.mutate(Object.fromEntries(fields.map(({ key }) => [key, toNumber(values[key])])) as ShopSettings, {
+        const numbers = Object.fromEntries(fields.map(({ key }) => [key, toNumber(values[key])]));
+        const closedDays = holidays
+          .split(/[\s,]+/)
+          .map((day) => day.trim())
+          .filter(Boolean);
+        update.mutate({ ...numbers, timeZone, closedWeekdays, holidays: closedDays } as ShopSettings, {
           onSuccess: onSaved,
         });
       }}
@@ -99,6 +123,69 @@ export function SettingsForm({
           />
         ))}
       </div>
+      <fieldset className="grid gap-4 sm:grid-cols-2">
+        <legend className="mb-1 text-base font-semibold">The shop’s days</legend>
+        <label className="grid text-sm font-medium">
+          Time zone
+          <input
+            className={inputClassName}
+            value={timeZone}
+            readOnly={!canEdit}
+            aria-invalid={errors.timeZone ? true : undefined}
+            onChange={(event) => setTimeZone(event.target.value)}
+          />
+          <span className="mt-1 text-xs font-normal text-walnut-500">
+            Where the shop is, like America/Chicago: “today” and “overdue” follow its clock.
+          </span>
+          {errors.timeZone && <span className="text-sm font-normal text-madder-700">{errors.timeZone}</span>}
+        </label>
+        <fieldset className="grid gap-1">
+          <legend className="text-sm font-medium">Closed every week on</legend>
+          <div className="flex flex-wrap gap-x-4 gap-y-1">
+            {weekdays.map(({ day, label }) => (
+              <label key={day} className="flex min-h-10 items-center gap-2 text-sm">
+                <input
+                  type="checkbox"
+                  className="h-5 w-5 accent-madder-600"
+                  checked={closedWeekdays.includes(day)}
+                  disabled={!canEdit}
+                  onChange={(event) =>
+                    setClosedWeekdays(
+                      event.target.checked
+                        ? [...closedWeekdays, day]
+                        : closedWeekdays.filter((closed) => closed !== day),
+                    )
+                  }
+                />
+                {label}
+              </label>
+            ))}
+          </div>
+          {errors.closedWeekdays && <span className="text-sm text-madder-700">{errors.closedWeekdays}</span>}
+        </fieldset>
+        <label className="grid text-sm font-medium sm:col-span-2">
+          Holidays and other closed days
+          <textarea
+            rows={3}
+            className={`${inputClassName} py-2`}
+            value={holidays}
+            readOnly={!canEdit}
+            aria-invalid={Object.keys(errors).some((key) => key.startsWith('holidays')) ? true : undefined}
+            placeholder="2026-12-25"
+            onChange={(event) => setHolidays(event.target.value)}
+          />
+          <span className="mt-1 text-xs font-normal text-walnut-500">
+            One day a line, as YYYY-MM-DD. Lead times and ready dates step over these and the closed days above.
+          </span>
+          {Object.entries(errors)
+            .filter(([key]) => key.startsWith('holidays'))
+            .map(([key, message]) => (
+              <span key={key} className="text-sm font-normal text-madder-700">
+                {message}
+              </span>
+            ))}
+        </label>
+      </fieldset>
       {canEdit && (
         <div className="flex flex-wrap items-center gap-3">
           <Button type="submit" disabled={update.isPending}>

@@ -22,20 +22,22 @@ function Placement({ placement, clipId }: { placement: DrawnPlacement; clipId: s
   );
   switch (placement.kind) {
     case 'border': {
-      const { visible } = placement;
+      // The same clip as the proof's: the front panel's width, and room above and below for a curved hem's rise.
+      const { band } = placement;
       return (
         <g clipPath={`url(#${clipId})`}>
           <clipPath id={clipId}>
-            <rect x={visible.xMm} y={visible.yMm} width={visible.widthMm} height={visible.heightMm} />
+            <rect x={band.leftMm} y={band.centerYMm - band.heightMm} width={band.widthMm} height={band.heightMm * 2} />
           </clipPath>
           {placement.repeats.map((repeat, index) => (
             <image
               key={index}
               href={src}
-              x={repeat.xMm}
-              y={repeat.yMm}
+              x={repeat.centerXMm - repeat.widthMm / 2}
+              y={repeat.centerYMm - repeat.heightMm / 2}
               width={repeat.widthMm}
               height={repeat.heightMm}
+              transform={turned(repeat)}
             />
           ))}
         </g>

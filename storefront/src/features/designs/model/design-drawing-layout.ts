@@ -5,8 +5,9 @@ import type {
   ThreadColourSummary,
 } from '@server/contracts/catalogue.ts';
 import type { BorderPlacement, DesignDocument, DesignPlacement } from '@server/contracts/designs.ts';
-// Straight from its module: the engine's entry also registers colour spaces at load, which a drawing does not need.
+// Straight from their modules: the engine's entry also registers colour spaces at load, which a drawing does not need.
 import { fitMotifBorder } from '@server/engine/fit-border.ts';
+import { layoutHemBorder, type BorderBand, type BorderRepeat } from '@server/engine/hem-border-layout.ts';
 
 /** A box on the mockup at the design's size, mm from its top left corner. */
 export interface BoxMm {
@@ -30,8 +31,10 @@ export type DrawnPlacement =
       label: string;
       svg: string;
       threadHexes: (string | undefined)[];
-      visible: BoxMm;
-      repeats: BoxMm[];
+      /** The front panel's strip of the hem: repeats are clipped to it, as those past its ends are round the back. */
+      band: BorderBand;
+      /** Centred where the engine lays them, turned along a curved hem. */
+      repeats: BorderRepeat[];
     }
   | ({
       kind: 'motif';
@@ -70,13 +73,11 @@ export interface DrawingCatalogue {
 }
 
 const HEM_ZONE = 'hem';
-/** A repeat that only meets the front panel's edge (up to rounding) is round the back, not on the front. */
-const TOUCH_MM = 0.01;
 
 /**
- * Lays a border's repeats on the front of the mockup with the engine's fit (the one the server prices): the hem
- * loop is unrolled from the back seam, so the front panel is its middle stretch, and repeats past the panel's ends
- * are round the back. The centre line sits `hemOffsetMm` above the hem zone's bottom edge.
+ * Lays a border's repeats on the front of the mockup with the engine's fit (the one the server prices) and the
+ * engine's hem layout (the one the designer and the proof draw), curve included: the hem loop is unrolled from the
+ * back seam, so the front panel is its middle stretch, and repeats past the panel's ends are round the back.
  */
 function drawBorder(
   size: GarmentSummary['sizes'][number],
@@ -84,40 +85,34 @@ function drawBorder(
   motif: MotifSummary,
   hexes: (string | undefined)[],
 ): DrawnPlacement {
-  const hem = size.zones.find((zone) => zone.code === HEM_ZONE);
-  const isLoop = border.run === 'circumference';
-  const runMm = isLoop ? size.hemCircumferenceMm : size.hemFrontMm;
-  const frontMm = size.hemFrontMm;
+  const zone = size.zones.find((candidate) => candidate.code === HEM_ZONE);
+  const isClosed = border.run === 'circumference';
+  const runLengthMm = isClosed ? size.hemCircumferenceMm : size.hemFrontMm;
+  const hemFrontMm = size.hemFrontMm;
   const fit =
-    hem && runMm !== null && frontMm !== null
-      ? fitMotifBorder(motif, { runLengthMm: runMm, closed: isLoop, count: border.count })
+    zone && runLengthMm !== null && hemFrontMm !== null
+      ? fitMotifBorder(motif, { runLengthMm, closed: isClosed, count: border.count })
       : undefined;
-  if (!hem || !fit?.ok || runMm === null || frontMm === null) {
+  if (!zone || !fit?.ok || runLengthMm === null || hemFrontMm === null) {
     return { kind: 'unavailable', id: border.id, label: `Border: ${motif.name} (it no longer fits this size)` };
   }
-  const panelLeftMm = hem.xMm + (hem.widthMm - frontMm) / 2;
-  const lineYMm = hem.yMm + hem.heightMm - border.hemOffsetMm;
-  const heightMm = motif.heightMm * fit.scale;
-  const skippedMm = isLoop ? (runMm - frontMm) / 2 : 0;
-  const repeats = fit.centersMm
-    .map((alongMm) => ({
-      xMm: panelLeftMm + alongMm - skippedMm - fit.repeatWidthMm / 2,
-      yMm: lineYMm - heightMm / 2,
-      widthMm: fit.repeatWidthMm,
-      heightMm,
-    }))
-    .filter(
-      (repeat) =>
-        Math.min(repeat.xMm + repeat.widthMm, panelLeftMm + frontMm) - Math.max(repeat.xMm, panelLeftMm) > TOUCH_MM,
-    );
-  const where = isLoop ? 'all the way round' : 'along the front';
+  const { band, repeats } = layoutHemBorder({
+    zone,
+    fit,
+    isClosed,
+    runLengthMm,
+    hemFrontMm,
+    hemOffsetMm: border.hemOffsetMm,
+    motifHeightMm: motif.heightMm,
+  });
+  const where = isClosed ? 'all the way round' : 'along the front';
   return {
     kind: 'border',
     id: border.id,
     label: `Border: ${motif.name}, ${fit.count} repeats ${where}`,
     svg: motif.svg,
     threadHexes: hexes,
-    visible: { xMm: panelLeftMm, yMm: lineYMm - heightMm, widthMm: frontMm, heightMm: heightMm * 2 },
+    band,
     repeats,
   };
 }

@@ -1,23 +1,16 @@
 import type { QuotePreviewResponse } from '@server/contracts/quotes.ts';
+import { SafetyCautions, severityLook } from '../../../components/safety-cautions.tsx';
 
 const counted = (count: number, one: string, many: string) =>
   `${count.toLocaleString('en-US')} ${count === 1 ? one : many}`;
 
-/** Notes addressed to the studio rather than the parent; the shop's footer carries its own word on local rules. */
-const studioOnlyNotes = new Set(['caution.local-rules']);
-
-const severityLook = {
-  info: 'border-sage-500/40 bg-sage-50',
-  caution: 'border-saffron-500/50 bg-saffron-100',
-  warning: 'border-madder-500/50 bg-madder-50',
-} as const;
-
 /**
  * How the design will be made and what to know about it, in plain words: the trade words "hooping" and
- * "stabilizer" are explained where they first appear, and the server's advice and cautions follow as notes.
+ * "stabilizer" are explained where they first appear; the server's stabilizer advice follows as notes, then its
+ * safety notes for the garment, size and design.
  */
 export function MakingNotes({ preview }: { preview: QuotePreviewResponse }) {
-  const notes = [...preview.stabilizer.messages, ...preview.cautions].filter((note) => !studioOnlyNotes.has(note.code));
+  const notes = preview.stabilizer.messages;
   return (
     <div className="mt-4 space-y-3 text-sm">
       <div>
@@ -50,6 +43,7 @@ export function MakingNotes({ preview }: { preview: QuotePreviewResponse }) {
           ))}
         </ul>
       )}
+      <SafetyCautions cautions={preview.cautions} heading="Safety notes for this size" />
     </div>
   );
 }
