@@ -219,7 +219,7 @@ describe('POST /api/quotes/preview with artwork', () => {
     );
     const res = await agent.post('/api/quotes/preview').send(withArtwork(artwork.id, 250)).expect(400);
     expect(res.body.error.fields['document.placements.0.widthMm']).toMatch(
-      /^Your artwork at 250 mm wide comes to 250 × 250 mm, bigger than the 200 × 300 mm sewing field of our largest hoop/,
+      /^Your artwork at 250 mm wide comes to 250 × 250 mm, bigger than the 194 × 294 mm our largest hoop can sew in \(its 200 × 300 mm sewing field less 3 mm clearance at each edge\)/,
     );
   });
 
@@ -269,13 +269,14 @@ describe('POST /api/quotes/preview with artwork', () => {
 });
 
 describe('the catalogue the designer reads', () => {
-  it('when anyone asks for the hoops, then they get each sewing field in mm, so the designer can keep items within the largest', async () => {
+  it('when anyone asks for the hoops, then they get each sewing field and its clearance in mm, so the designer can keep items within the largest', async () => {
     const res = await harness.agent().get('/api/catalogue/hoops').expect(200);
     expect(res.body.hoops).toContainEqual({
       slug: 'large-200x300',
       name: 'Large 200 × 300 mm (8 × 12 in)',
       fieldWidthMm: 200,
       fieldHeightMm: 300,
+      clearanceMm: 3,
     });
   });
 

@@ -33,7 +33,9 @@ const catalogue: QuoteCatalogue = {
   size: { id: 301, code: '6m', label: '6 months', hemFrontMm: 346, hemCircumferenceMm: 692, zones: [] },
   motifs: new Map([[daisyChain.slug, daisyChain]]),
   fonts: new Map(),
-  hoops: [{ slug: 'oblong-120x180', name: 'Oblong 120 × 180 mm', fieldWidthMm: 120, fieldHeightMm: 180 }],
+  hoops: [
+    { slug: 'oblong-120x180', name: 'Oblong 120 × 180 mm', fieldWidthMm: 120, fieldHeightMm: 180, clearanceMm: 3 },
+  ],
   machine: { stitchesPerMinute: 650, minutesPerColorChange: 0.5, minutesPerHooping: 4, setupMinutes: 10 },
 };
 
@@ -57,14 +59,20 @@ function planFor(run: 'front' | 'circumference') {
 }
 
 describe('sheetBorderPlan', () => {
-  it('when 4 repeats of 173 mm go round a 692 mm loop, then the hoop centres are ±86.5 and ±259.5 mm from the centre mark, centre first', () => {
+  it('when 4 repeats of 173 mm go round a 692 mm loop, then the hoop centres are ±86.5 and ±259.5 mm from the centre mark, sewn outwards from it', () => {
     const plan = planFor('circumference');
+    // Issue 11: the two beside the centre mark first (left, then right), then the outer left and the outer right.
     expect(plan.hoopings.map((h) => [h.order, h.side, h.fromCentreMm])).toEqual([
       [1, 'center', -86.5],
-      [2, 'left', -259.5],
-      [3, 'right', 86.5],
+      [2, 'right', 86.5],
+      [3, 'left', -259.5],
       [4, 'right', 259.5],
     ]);
+    expect(plan.orderRule).toContain('each new hooping lies beside stitches already sewn');
+    expect(plan.orderRule).toContain('From left to right the hoopings are numbered 3, 1, 2, 4.');
+    expect(plan.clearanceNote).toBe(
+      'Planned with 3 mm kept clear inside the sewing field at every edge (114 × 174 mm of the 120 × 180 mm field).',
+    );
   });
 
   it('when 2 repeats of 173 mm fill the 346 mm front hem, then the centre mark is the middle of the front and the hoops sit 86.5 mm either side', () => {
@@ -123,10 +131,13 @@ describe('template outlines', () => {
 
   it('when an item only fits the hoop turned, then its template turns the field and centres the item on the crosshair', () => {
     const placement = { id: 'bunny', label: 'Sitting bunny' } as SheetPlacement;
-    const hoop = { slug: 'oblong', name: 'Oblong 180 × 120 mm', fieldWidthMm: 180, fieldHeightMm: 120 };
+    const hoop = { slug: 'oblong', name: 'Oblong 180 × 120 mm', fieldWidthMm: 180, fieldHeightMm: 120, clearanceMm: 3 };
     const template = itemTemplate(placement, hoop, { widthMm: 60, heightMm: 150, outlines: [] });
     expect(template.field).toMatchObject({ widthMm: 120, heightMm: 180 });
     expect(template.subtitle).toMatch(/turned 90° in the hoop/);
+    expect(template.subtitle).toMatch(
+      /3 mm kept clear inside the sewing field at every edge \(174 × 114 mm of the 180 × 120 mm field\)/,
+    );
     expect(template.artwork.xMm + template.artwork.widthMm / 2).toBeCloseTo(template.centre.xMm, 9);
     expect(template.artwork.yMm + template.artwork.heightMm / 2).toBeCloseTo(template.centre.yMm, 9);
   });

@@ -71,6 +71,8 @@ export interface CatalogueHoop {
   /** The sewing field, mm. */
   fieldWidthMm: number;
   fieldHeightMm: number;
+  /** Kept free inside the field at every edge, mm. */
+  clearanceMm: number;
 }
 
 /** The shop's machine settings that `estimateRunMinutes` reads; the time per trim keeps the engine's default. */
