@@ -1,7 +1,7 @@
 import { fail, type EngineResult, type Failure } from './engine-result.ts';
 import { isPositiveNumber, isRecord } from './input-checks.ts';
 import { extentOf, filledArea, polylineLength, unionExtent, type Extent } from './outline-geometry.ts';
-import { stitchFilledShape, stitchStroke, tallyTotal } from './shape-stitches.ts';
+import { filledShapeKind, stitchFilledShape, stitchStroke, strokeKind, tallyTotal } from './shape-stitches.ts';
 import { summariseParts, type StitchEstimate, type StitchedPart } from './stitch-estimate.ts';
 import type { StitchSettings } from './stitch-settings.ts';
 import { readSvgDrawing, type SvgDrawing } from './svg-document.ts';
@@ -18,7 +18,10 @@ export type SvgSize = { mmPerUnit: number } | { widthMm: number };
 /**
  * Stitches for SVG artwork: fills and narrow shapes from each filled outline, running stitch or satin from each
  * stroke (see `stitchFilledShape`, `stitchStroke`); elements are sewn in document order, one colour block per
- * run of one colour.
+ * run of one colour. Each element's stitch type is decided from the artwork as drawn (its own size, see
+ * `drawnMmPerUnit`) and kept at every size it is stitched, so the count follows the size smoothly: a 0.5 mm line
+ * stays a running stitch when the drawing is doubled, rather than jumping to a satin column as it crosses 1 mm
+ * (issue 11). The counts themselves are worked out at the stitched size.
  */
 export function estimateSvgStitches(
   svgText: string,
@@ -29,6 +32,8 @@ export function estimateSvgStitches(
   if ('reason' in drawing) return drawing;
   const mmPerUnit = resolveMmPerUnit(drawing, size);
   if (typeof mmPerUnit !== 'number') return mmPerUnit;
+  // Millimetres as drawn per millimetre stitched: turns a stitched width back into the drawn one.
+  const drawnPerStitched = drawnMmPerUnit(drawing) / mmPerUnit;
 
   const parts: StitchedPart[] = [];
   const notes = [...drawing.notes];
@@ -45,14 +50,16 @@ export function estimateSvgStitches(
     if (drawable.fill) {
       const area = filledArea(outline.polylines, drawable.fillRule);
       const perimeter = outline.polylines.reduce((sum, polyline) => sum + polylineLength(polyline, true), 0);
-      const tally = stitchFilledShape(area, perimeter, settings);
+      const kind = filledShapeKind(area * drawnPerStitched ** 2, perimeter * drawnPerStitched, settings);
+      const tally = stitchFilledShape(area, perimeter, settings, kind);
       if (tallyTotal(tally) > 0) parts.push({ color: drawable.fill, tally });
       extent = unionExtent(extent, extentOf(outline.polylines));
     }
     const strokeWidthMm = drawable.strokeWidth * outline.strokeScale * mmPerUnit;
     if (drawable.stroke && strokeWidthMm > 0) {
       const length = outline.polylines.reduce((sum, polyline) => sum + polylineLength(polyline), 0);
-      const tally = stitchStroke(length, strokeWidthMm, drawable.runPasses, settings);
+      const kind = strokeKind(strokeWidthMm * drawnPerStitched, settings);
+      const tally = stitchStroke(length, strokeWidthMm, drawable.runPasses, settings, kind);
       if (tallyTotal(tally) > 0) parts.push({ color: drawable.stroke, tally });
       extent = unionExtent(extent, padded(extentOf(outline.polylines), strokeWidthMm / 2));
     }
@@ -60,6 +67,15 @@ export function estimateSvgStitches(
   if (truncated > 0) notes.push(`${truncated} × a path with an error in its data was measured only up to the error.`);
   if (unmeasurable > 0) notes.push(`${unmeasurable} × a shape with unreadable or out-of-range path data was skipped.`);
   return { ok: true, ...summariseParts(parts, extent, notes) };
+}
+
+/**
+ * The artwork's own scale, mm per user unit: from its width and height in absolute units, as a browser sizes it;
+ * a drawing that gives no size is taken at one CSS pixel per unit, the unit SVG user units default to.
+ */
+function drawnMmPerUnit(drawing: SvgDrawing): number {
+  const own = resolveMmPerUnit(drawing, undefined);
+  return typeof own === 'number' ? own : MM_PER_CSS_PX;
 }
 
 export function resolveMmPerUnit(drawing: SvgDrawing, size: SvgSize | undefined): number | Failure {
