@@ -1,3 +1,4 @@
+import type { DesignPlacement } from '../../server/src/contracts/designs.ts';
 import type { QuotePreviewRequest } from '../../server/src/contracts/quotes.ts';
 import { garments } from '../../seeds/data/garments.ts';
 import { motifs } from '../../seeds/data/motifs.ts';
@@ -27,3 +28,17 @@ export const daisyDressQuote: QuotePreviewRequest = {
     ],
   },
 };
+
+/** A name on the chest of the bishop dress (its chest zone's middle), sewn in one thread. */
+export const chestLettering = (text: string, font: string, letterHeightMm: number): DesignPlacement => ({
+  id: 'name',
+  kind: 'lettering',
+  zone: 'chest',
+  centerXMm: 209,
+  centerYMm: 105,
+  rotationDeg: 0,
+  text,
+  font,
+  letterHeightMm,
+  thread: 'WB-110',
+});

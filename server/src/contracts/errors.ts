@@ -10,6 +10,8 @@ export const errorKinds = [
   'too-large',
   'unsupported-type',
   'payment-failed',
+  /** Well formed but impossible to carry out as asked: lettering in characters its font cannot stitch. */
+  'unprocessable',
 ] as const;
 export type ErrorKind = (typeof errorKinds)[number];
 

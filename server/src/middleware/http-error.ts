@@ -9,6 +9,7 @@ export const statusByKind: Record<ErrorKind, number> = {
   'too-large': 413,
   'unsupported-type': 415,
   'payment-failed': 402,
+  unprocessable: 422,
 };
 
 /** An expected failure raised at the edge (middleware); the error handler answers it with its status and message. */

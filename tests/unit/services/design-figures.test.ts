@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { DesignDocument, DesignPlacement } from '../../../server/src/contracts/designs.ts';
 import { figureDesign } from '../../../server/src/modules/quotes/design-figures.ts';
 import type { CatalogueMotifEntry, QuoteCatalogue } from '../../../server/src/modules/quotes/quote-catalogue-types.ts';
+import { chestLettering } from '../../support/sample-designs.ts';
 import { loadShippedFont } from '../engine/support/load-font.ts';
 
 const daisyChain: CatalogueMotifEntry = {
@@ -86,18 +87,7 @@ const border = (changes: Partial<Extract<DesignPlacement, { kind: 'border' }>> =
   threads: ['WB-118', 'WB-101', 'WB-103'],
   ...changes,
 });
-const lettering = (text: string, letterHeightMm: number): DesignPlacement => ({
-  id: 'name',
-  kind: 'lettering',
-  zone: 'chest',
-  centerXMm: 209,
-  centerYMm: 105,
-  rotationDeg: 0,
-  text,
-  font: 'rounded-block',
-  letterHeightMm,
-  thread: 'WB-110',
-});
+const lettering = (text: string, letterHeightMm: number) => chestLettering(text, 'rounded-block', letterHeightMm);
 const design = (...placements: DesignPlacement[]): DesignDocument => ({ version: 1, placements });
 
 describe('figureDesign', () => {

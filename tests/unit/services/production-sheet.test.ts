@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { estimateStitches } from '../../../server/src/engine/index.ts';
 import { figureDesign } from '../../../server/src/modules/quotes/design-figures.ts';
 import { sheetBorderPlan } from '../../../server/src/modules/production/production-sheet-hoopings.ts';
 import { formatLengthPlain } from '../../../server/src/modules/production/production-sheet-pdf-kit.ts';
@@ -12,7 +13,7 @@ import type { QuoteCatalogue } from '../../../server/src/modules/quotes/quote-ca
 import { letteringOutline } from '../../../server/src/modules/production/production-sheet-outlines.ts';
 import { itemTemplate } from '../../../server/src/modules/production/production-sheet-templates.ts';
 import type { SheetPlacement } from '../../../server/src/contracts/production-sheet.ts';
-import { loadShippedFont } from '../engine/support/load-font.ts';
+import { loadOpentypeFont, loadShippedFont } from '../engine/support/load-font.ts';
 
 const daisyChain = {
   slug: 'daisy-chain',
@@ -127,6 +128,19 @@ describe('template outlines', () => {
     const outline = letteringOutline(loadShippedFont('fredoka'), 'H', 20, '#2f2f33');
     expect(outline?.heightMm).toBeCloseTo(20, 3);
     expect(outline?.outlines[0]).toMatchObject({ hex: '#2f2f33', isFilled: true });
+  });
+
+  it('when a Cyrillic name is set for the template, then it is drawn from the font’s cyrillic file as wide as the quote measured it', () => {
+    // Issue 11: the sheet drew .notdef boxes for letters outside the latin file. Playfair Display ships a cyrillic
+    // subset (@fontsource/playfair-display metadata.json); the quote's estimate and the template read the same letters.
+    const font = loadShippedFont('playfair-display');
+    const outline = letteringOutline(font, 'Маша', 20, '#2f2f33');
+    const estimate = estimateStitches({ kind: 'lettering', text: 'Маша', font, letterHeightMm: 20 });
+    expect(outline?.outlines.length).toBeGreaterThan(0);
+    expect(estimate.ok && outline?.widthMm).toBeCloseTo(estimate.ok ? estimate.widthMm : NaN, 1);
+    // The latin file alone draws four .notdef boxes of another width.
+    const boxes = letteringOutline(loadOpentypeFont('playfair-display'), 'Маша', 20, '#2f2f33');
+    expect(Math.abs(outline!.widthMm - boxes!.widthMm)).toBeGreaterThan(1);
   });
 
   it('when an item only fits the hoop turned, then its template turns the field and centres the item on the crosshair', () => {

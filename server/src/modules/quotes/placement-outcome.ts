@@ -32,9 +32,17 @@ export interface PlacementFigures {
 }
 
 /** A placement's figures, or why it cannot be sewn, at its field path in the request. */
-export type PlacementOutcome = { ok: true; figures: PlacementFigures } | { ok: false; field: string; message: string };
+export type PlacementOutcome =
+  | { ok: true; figures: PlacementFigures }
+  | { ok: false; field: string; message: string; kind?: 'unprocessable' };
 
-export const refuse = (field: string, message: string): PlacementOutcome => ({ ok: false, field, message });
+/** A refusal at a field: `invalid` (400) unless the request is well formed but cannot be stitched (422). */
+export const refuse = (field: string, message: string, kind?: 'unprocessable'): PlacementOutcome => ({
+  ok: false,
+  field,
+  message,
+  ...(kind ? { kind } : {}),
+});
 
 export const countOf = (n: number, noun: string) => `${n} ${noun}${n === 1 ? '' : 's'}`;
 

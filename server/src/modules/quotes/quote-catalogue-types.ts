@@ -3,7 +3,8 @@
  * design names, the hoops and the machine's pace. The server reads it from the database, the seeds build it from
  * their data files, and both hand it to `figureDesign`, so a seeded quote is priced exactly as the server would.
  */
-import type { FabricConstruction, GlyphOutlineSource, MachineSettings } from '../../engine/index.ts';
+import type { FabricConstruction, MachineSettings } from '../../engine/index.ts';
+import type { LetteringFont } from '../../integrations/lettering-fonts.ts';
 
 export interface CatalogueGarment {
   id: number;
@@ -62,7 +63,8 @@ export interface CatalogueFont {
   /** Letter heights (capital H) the font sews cleanly at, mm. */
   minHeightMm: number;
   maxHeightMm: number;
-  outlines: GlyphOutlineSource;
+  /** Every subset the font ships, and which characters none of them draws. */
+  outlines: LetteringFont;
 }
 
 export interface CatalogueHoop {
