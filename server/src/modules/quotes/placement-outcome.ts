@@ -33,8 +33,7 @@ export interface PlacementFigures {
 
 /** A placement's figures, or why it cannot be sewn, at its field path in the request. */
 export type PlacementOutcome =
-  | { ok: true; figures: PlacementFigures }
-  | { ok: false; field: string; message: string; kind?: 'unprocessable' };
+  { ok: true; figures: PlacementFigures } | { ok: false; field: string; message: string; kind?: 'unprocessable' };
 
 /** A refusal at a field: `invalid` (400) unless the request is well formed but cannot be stitched (422). */
 export const refuse = (field: string, message: string, kind?: 'unprocessable'): PlacementOutcome => ({
