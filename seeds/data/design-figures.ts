@@ -89,6 +89,7 @@ const seededCatalogue: Omit<QuoteCatalogue, 'garment' | 'size'> = {
     name: hoop.name,
     fieldWidthMm: hoop.field_width_mm,
     fieldHeightMm: hoop.field_height_mm,
+    clearanceMm: hoop.clearance_mm,
   })),
   machine: {
     stitchesPerMinute: shopSettings.machine_stitches_per_minute,

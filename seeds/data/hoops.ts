@@ -1,4 +1,7 @@
-/** The studio's hoops by sewing field (the area the machine reaches, smaller than the frame the name rounds). */
+/**
+ * The studio's hoops by sewing field (the area the machine reaches, smaller than the frame the name rounds), each with
+ * 3 mm kept clear at every edge of the field (a few mm is common practice, no source; see the hoops clearance migration).
+ */
 export const hoops = [
   {
     id: 1,
@@ -6,6 +9,7 @@ export const hoops = [
     name: 'Square 100 × 100 mm (4 × 4 in)',
     field_width_mm: 100,
     field_height_mm: 100,
+    clearance_mm: 3,
     sort_order: 1,
   },
   {
@@ -14,6 +18,7 @@ export const hoops = [
     name: 'Oblong 120 × 180 mm (5 × 7 in)',
     field_width_mm: 120,
     field_height_mm: 180,
+    clearance_mm: 3,
     sort_order: 2,
   },
   {
@@ -22,6 +27,7 @@ export const hoops = [
     name: 'Long 160 × 260 mm (6 × 10 in)',
     field_width_mm: 160,
     field_height_mm: 260,
+    clearance_mm: 3,
     sort_order: 3,
   },
   {
@@ -30,6 +36,7 @@ export const hoops = [
     name: 'Large 200 × 300 mm (8 × 12 in)',
     field_width_mm: 200,
     field_height_mm: 300,
+    clearance_mm: 3,
     sort_order: 4,
   },
 ];

@@ -1,4 +1,7 @@
-/** Lettering fonts shipped with the app through @fontsource (latin, weight 400, .woff in each package's files/). */
+/**
+ * Lettering fonts shipped with the app through @fontsource, each named by its latin 400 .woff in the package's
+ * files/; the server's font loader reads every other subset file of that weight beside it (latin-ext, cyrillic…).
+ */
 export const letteringFonts = [
   {
     id: 1,

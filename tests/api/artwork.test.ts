@@ -196,7 +196,7 @@ describe('POST /api/quotes/preview with artwork', () => {
     );
     const res = await agent.post('/api/quotes/preview').send(withArtwork(artwork.id, 250)).expect(400);
     expect(res.body.error.fields['document.placements.0.widthMm']).toMatch(
-      /^Your artwork at 250 mm wide comes to 250 × 250 mm, bigger than the 200 × 300 mm sewing field of our largest hoop/,
+      /^Your artwork at 250 mm wide comes to 250 × 250 mm, bigger than the 194 × 294 mm our largest hoop can sew in \(its 200 × 300 mm sewing field less 3 mm clearance at each edge\)/,
     );
   });
 
@@ -230,6 +230,28 @@ describe('POST /api/quotes/preview with artwork', () => {
     }
   });
 
+  it('when Harriet sizes her sunshine drawing from 20 to 28 mm, then its stitches and price grow smoothly, with no jump where the rays cross 1 mm', async () => {
+    const harriet = harness.agent();
+    await harness.signIn(harriet, 'harriet@example.test');
+    const priced = [];
+    for (const widthMm of [20, 22, 24, 26, 28]) {
+      const body = quotePreviewResponse.parse(
+        (await harriet.post('/api/quotes/preview').send(withArtwork(1, widthMm)).expect(200)).body,
+      );
+      priced.push({ widthMm, stitches: body.placements[0].stitches, totalCents: body.quote.totalCents });
+    }
+    // Issue 11: before, 20 → 28 mm went 172 → 525 stitches (204 → 417 between 22 and 24 mm) as the 26 px rays
+    // turned from running stitch into satin. Stitches follow length or area when resized at the set density
+    // (lindeegembroidery.com/scaling), so no step may exceed the area ratio, plus a few stitches of rounding.
+    expect(priced.map((p) => p.stitches)).toEqual([359, 410, 464, 519, 579]);
+    for (let i = 1; i < priced.length; i += 1) {
+      const areaRatio = (priced[i].widthMm / priced[i - 1].widthMm) ** 2;
+      expect(priced[i].stitches).toBeGreaterThanOrEqual(priced[i - 1].stitches);
+      expect(priced[i].stitches).toBeLessThanOrEqual(priced[i - 1].stitches * areaRatio + 12);
+      expect(priced[i].totalCents).toBeGreaterThanOrEqual(priced[i - 1].totalCents);
+    }
+  });
+
   it('when Harriet saves a design with her own drawing, then it is priced for her; Priya cannot save one with it', async () => {
     const design = { ...withArtwork(1, 56), name: 'Sunshine bib' };
     const { quantity, isRush, ...save } = design;
@@ -246,13 +268,14 @@ describe('POST /api/quotes/preview with artwork', () => {
 });
 
 describe('the catalogue the designer reads', () => {
-  it('when anyone asks for the hoops, then they get each sewing field in mm, so the designer can keep items within the largest', async () => {
+  it('when anyone asks for the hoops, then they get each sewing field and its clearance in mm, so the designer can keep items within the largest', async () => {
     const res = await harness.agent().get('/api/catalogue/hoops').expect(200);
     expect(res.body.hoops).toContainEqual({
       slug: 'large-200x300',
       name: 'Large 200 × 300 mm (8 × 12 in)',
       fieldWidthMm: 200,
       fieldHeightMm: 300,
+      clearanceMm: 3,
     });
   });
 

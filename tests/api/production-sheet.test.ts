@@ -83,10 +83,20 @@ describe('GET /api/admin/orders/:number/production-sheet', () => {
     expect(border.border!.hoopings[0].side).toBe('center');
   });
 
+  it('when staff open a border of 4 hoopings, then the sheet says in words that they are sewn outwards from the centre mark, each beside sewn work', () => {
+    const border = sheet.placements.find((placement) => placement.kind === 'border')!.border!;
+    // Issue 11's rule: the two beside the centre mark first, left then right, then outwards (left first).
+    expect(border.orderRule).toMatch(
+      /^Stitch hooping 1 first: the one holding the centre mark or, when the mark falls/,
+    );
+    expect(border.orderRule).toContain('the left one first when two are equally near');
+    expect(border.orderRule).toContain('From left to right the hoopings are numbered 3, 1, 2, 4.');
+  });
+
   it('when the hoop centres are measured from the centre mark (the middle of the row, the centre front), then they sit at ±86.5 and ±259.5 mm', () => {
     const hoopings = sheet.placements.find((placement) => placement.kind === 'border')!.border!.hoopings;
     // 4 repeats of 173 mm: centres at 86.5, 259.5, 432.5 and 605.5 mm from the row's start; the middle is 346 mm.
-    expect(hoopings.map((h) => h.fromCentreMm)).toEqual([-86.5, -259.5, 86.5, 259.5]);
+    expect(hoopings.map((h) => h.fromCentreMm)).toEqual([-86.5, 86.5, -259.5, 259.5]);
     expect(hoopings.map((h) => h.fromRowStartMm - 346)).toEqual(hoopings.map((h) => h.fromCentreMm));
   });
 

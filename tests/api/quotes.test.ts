@@ -14,6 +14,7 @@ import {
 import { garments } from '../../seeds/data/garments.ts';
 import { motifs } from '../../seeds/data/motifs.ts';
 import { useApiHarness } from '../support/api-harness.ts';
+import { chestLettering } from '../support/sample-designs.ts';
 
 const harness = useApiHarness();
 
@@ -295,5 +296,44 @@ describe('GET /api/quotes/ready-dates', () => {
       earliestReadyDate: '2026-12-15',
       earliestRushDate: '2026-12-08',
     });
+  });
+});
+
+describe('POST /api/quotes/preview: names beyond basic Latin', () => {
+  const withName = (text: string, font: string): QuotePreviewRequest => ({
+    ...bishopWithDaisies,
+    document: {
+      version: 1,
+      placements: [chestLettering(text, font, 20)],
+    },
+  });
+  const stitchesOf = async (text: string, font: string) =>
+    quotePreviewResponse.parse((await preview(withName(text, font)).expect(200)).body).placements[0].stitches;
+
+  it.each([
+    ['Polish', 'Łucja', 'Lucja', 'breezy-script'],
+    ['Czech', 'Šárka', 'Sarka', 'heirloom-serif'],
+    ['Vietnamese', 'Nguyễn', 'Nguyen', 'breezy-script'],
+    ['Cyrillic', 'Маша', 'Masha', 'heirloom-serif'],
+  ])('when a %s name (%s) is lettered, then it is priced from its own letters', async (_, name, plain, font) => {
+    // The designer shows these letters from the font's latin-ext, vietnamese and cyrillic files (@fontsource
+    // unicode.json); the quote reads the same files, so Ł, Š, á, ễ and Cyrillic letters are measured, not boxes.
+    const [named, asPlain] = [await stitchesOf(name, font), await stitchesOf(plain, font)];
+    expect(named).toBeGreaterThan(0);
+    expect(named).not.toBe(asPlain);
+  });
+
+  it('when a name has letters the font does not have, then it is refused with 422 naming each of them', async () => {
+    const res = await preview(withName('Маша', 'rounded-block')).expect(422);
+    const { error } = apiErrorBody.parse(res.body);
+    expect(error.kind).toBe('unprocessable');
+    expect(error.fields?.['document.placements.0.text']).toBe(
+      'Rounded Block cannot stitch “М” (Cyrillic capital letter em), “а” (Cyrillic small letter a) and “ш” (Cyrillic small letter sha): ' +
+        'the font has no letter for them; choose another font or leave them out.',
+    );
+    const vietnamese = apiErrorBody.parse((await preview(withName('Nguyễn', 'rounded-block')).expect(422)).body);
+    expect(vietnamese.error.message).toMatch(
+      /^Rounded Block cannot stitch “ễ” \(Latin small letter e with circumflex and tilde\): the font has no letter for it;/,
+    );
   });
 });

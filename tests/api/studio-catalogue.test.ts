@@ -113,6 +113,33 @@ describe('hoops', () => {
     expect((await studioCatalogue()).hoops.find((h) => h.id === id)?.isActive).toBe(true);
   });
 
+  it('when staff add a hoop without a clearance and then set one, then it starts at the 3 mm default and keeps the edit', async () => {
+    const created = await staff
+      .post('/api/admin/catalogue/hoops')
+      .send({ slug: 'round-130', name: 'Round 130', fieldWidthMm: 130, fieldHeightMm: 130 })
+      .expect(201);
+    const id = created.body.id as number;
+    expect((await studioCatalogue()).hoops.find((h) => h.id === id)).toMatchObject({ clearanceMm: 3 });
+    await staff
+      .put(`/api/admin/catalogue/hoops/${id}`)
+      .send({ name: 'Round 130', fieldWidthMm: 130, fieldHeightMm: 130, clearanceMm: 4.5 })
+      .expect(200);
+    expect((await studioCatalogue()).hoops.find((h) => h.id === id)).toMatchObject({ clearanceMm: 4.5 });
+    // An edit that leaves the clearance out keeps it.
+    await staff
+      .put(`/api/admin/catalogue/hoops/${id}`)
+      .send({ name: 'Round 130 mm', fieldWidthMm: 130, fieldHeightMm: 130 })
+      .expect(200);
+    expect((await studioCatalogue()).hoops.find((h) => h.id === id)).toMatchObject({ clearanceMm: 4.5 });
+    const tooMuch = await staff
+      .put(`/api/admin/catalogue/hoops/${id}`)
+      .send({ name: 'Round 130 mm', fieldWidthMm: 40, fieldHeightMm: 130, clearanceMm: 20 })
+      .expect(400);
+    expect(errorOf(tooMuch.body).fields).toEqual({
+      clearanceMm: 'The clearance at both edges must be less than the field’s shorter side',
+    });
+  });
+
   it('when the short name is taken, then it answers 409 naming the field', async () => {
     const res = await staff
       .post('/api/admin/catalogue/hoops')

@@ -119,6 +119,20 @@ test('when a border does not fit the chosen size, then the designer gives the en
   );
 });
 
+test('when a parent letters a Cyrillic name, then a font with Cyrillic letters prices it and one without names the letters it lacks', async ({
+  page,
+}) => {
+  await page.goto('/design/bishop-dress');
+  await page.getByText('Add a name', { exact: true }).click();
+  await page.getByRole('textbox', { name: 'Name or words' }).fill('Маша');
+  await page.getByRole('radio', { name: 'Rounded Block' }).check({ force: true });
+  await page.getByRole('button', { name: 'Add the name' }).click();
+  // Issue 11: Fredoka ships no Cyrillic file (@fontsource/fredoka metadata.json), so the server refuses with 422.
+  await expect(price(page).getByRole('alert')).toContainText(
+    'Rounded Block cannot stitch “М” (Cyrillic capital letter em), “а” (Cyrillic small letter a) and “ш” (Cyrillic small letter sha)',
+  );
+});
+
 test('when the designer opens on a phone, then the garment fits the screen, the total rides beside it, and nothing runs off the side', async ({
   page,
 }) => {

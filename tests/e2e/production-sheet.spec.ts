@@ -20,6 +20,11 @@ test('when staff open an approved order’s production sheet, then they see the 
   await expect(picture).toBeVisible();
   await expect(picture).toHaveAttribute('aria-label', /hooping 1 holds repeat 2/);
   await expect(page.getByText(/86\.5 mm \(3 ³⁄₈ in\) left of the centre mark/)).toBeVisible();
+  // Issue 11: the stitching order's rule and the hoop's clearance, in words, for the 4 hoopings of the worked case.
+  await expect(page.getByText(/From left to right the hoopings are numbered 3, 1, 2, 4\./)).toBeVisible();
+  await expect(
+    page.getByText(/Planned with 3 mm kept clear inside the sewing field at every edge \(114 × 174 mm/).first(),
+  ).toBeVisible();
   await expect(page.getByText('WB-118').first()).toBeVisible();
   await page.screenshot({ path: 'test-results/screens/production-sheet.png', fullPage: true });
   const audit = await new AxeBuilder({ page }).include('main').analyze();

@@ -81,10 +81,13 @@ test('when staff add a hoop under a short name already taken, then the server’
   await dialog.getByLabel('Short name').fill('square-100');
   await dialog.getByLabel('Sewing field width (mm)').fill('0');
   await dialog.getByLabel('Sewing field height (mm)').fill('100');
+  // A new hoop starts with the default clearance, and the drawing says what is left to sew in.
+  await expect(dialog.getByLabel('Clearance at each edge (mm)')).toHaveValue('3');
   await dialog.getByRole('button', { name: 'Add hoop' }).click();
   // The contract checks in the browser first: a zero field never reaches the server.
   await expect(dialog.getByText('The field width must be more than 0 mm')).toBeVisible();
   await dialog.getByLabel('Sewing field width (mm)').fill('100');
+  await expect(dialog.getByText(/94 mm .* × 94 mm .* to sew in/)).toBeVisible();
   await dialog.getByRole('button', { name: 'Add hoop' }).click();
   const shortName = dialog.getByLabel('Short name');
   await expect(shortName).toHaveAttribute('aria-invalid', 'true');

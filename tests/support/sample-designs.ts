@@ -54,3 +54,17 @@ export const artworkDressQuote = (artworkUploadId: number, widthMm: number): Quo
     ],
   },
 });
+
+/** A name on the chest of the bishop dress (its chest zone's middle), sewn in one thread. */
+export const chestLettering = (text: string, font: string, letterHeightMm: number): DesignPlacement => ({
+  id: 'name',
+  kind: 'lettering',
+  zone: 'chest',
+  centerXMm: 209,
+  centerYMm: 105,
+  rotationDeg: 0,
+  text,
+  font,
+  letterHeightMm,
+  thread: 'WB-110',
+});

@@ -29,6 +29,7 @@ export const studioHoop = z.object({
   name: z.string(),
   fieldWidthMm: z.number(),
   fieldHeightMm: z.number(),
+  clearanceMm: z.number(),
   isActive: z.boolean(),
 });
 export type StudioHoop = z.infer<typeof studioHoop>;

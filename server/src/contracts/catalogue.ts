@@ -133,6 +133,8 @@ export const hoopSummary = z.object({
   name: z.string(),
   fieldWidthMm: z.number(),
   fieldHeightMm: z.number(),
+  /** Kept free inside the field at every edge, mm: the stitching fits the field less twice this each way. */
+  clearanceMm: z.number(),
 });
 export type HoopSummary = z.infer<typeof hoopSummary>;
 export const hoopListResponse = z.object({ hoops: z.array(hoopSummary) });

@@ -15,6 +15,8 @@ export const errorKinds = [
   'too-many-requests',
   /** The request is sound but needs the person to confirm something first (the safety notes at checkout). */
   'needs-acknowledgement',
+  /** Well formed but impossible to carry out as asked: lettering in characters its font cannot stitch. */
+  'unprocessable',
 ] as const;
 export type ErrorKind = (typeof errorKinds)[number];
 

@@ -19,7 +19,14 @@ const threadStep = z.object({
   hex: z.string(),
 });
 
-const hoop = z.object({ slug: z.string(), name: z.string(), fieldWidthMm: z.number(), fieldHeightMm: z.number() });
+/** The hoop a placement is sewn in; `clearanceMm` is kept free inside the sewing field at every edge. */
+const hoop = z.object({
+  slug: z.string(),
+  name: z.string(),
+  fieldWidthMm: z.number(),
+  fieldHeightMm: z.number(),
+  clearanceMm: z.number(),
+});
 
 /**
  * One hooping of a border. `fromCentreMm` is where the hoop's centre goes along the border's guide line,
@@ -51,6 +58,10 @@ const borderPlan = z.object({
   /** True when the design is turned 90° in the hoop. */
   isRotated: z.boolean(),
   hoopings: z.array(hoopingStep),
+  /** The stitching order's rule in the sheet's words, with this plan's numbering from left to right. */
+  orderRule: z.string(),
+  /** The hoop's clearance in the sheet's words: what the plan kept free inside the sewing field. */
+  clearanceNote: z.string(),
 });
 
 const sheetPlacement = z.object({

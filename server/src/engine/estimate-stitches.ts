@@ -20,7 +20,8 @@ export type StitchSource =
  * - svg: paths and basic shapes, in mm from the file's size or `size`. A filled shape whose equivalent column is
  *   narrower than `satinMaxWidthMm` is satin, else fill; a stroke under `satinMinStrokeWidthMm` is running
  *   stitch (`data-stitch="double"`, `"triple"` or `"bean"` on the element or a group multiplies the passes),
- *   a wider one satin, and one at least `satinMaxWidthMm` wide a fill.
+ *   a wider one satin, and one at least `satinMaxWidthMm` wide a fill. Widths are judged at the artwork's own
+ *   size (as drawn), so resizing with `size` changes the counts but never a shape's stitch type.
  * - svg-figures: the same, from what `measureSvgArtwork` measured of the file once (an upload's stored figures).
  * - lettering: glyph outlines from the font, measured like filled shapes, at a capital-H height in mm.
  * `settings` overrides the published defaults (`DEFAULT_STITCH_SETTINGS`, lengths in mm); catalogue motifs do

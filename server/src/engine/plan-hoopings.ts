@@ -1,4 +1,5 @@
 import { fail, type EngineResult } from './engine-result.ts';
+import { usableField } from './hoop-fit.ts';
 import { MAX_BORDER_REPEATS } from './fit-border.ts';
 import { isNonNegativeNumber, isPositiveNumber, isRecord, isWholeNumber } from './input-checks.ts';
 import { formatNumber } from './wording.ts';
@@ -23,7 +24,8 @@ export interface HoopingPlanInput {
   /** Height of the stitched motif across the row, mm. */
   motifHeightMm: number;
   hoop: HoopField;
-  /** Kept free inside the field at each end of the row, mm. Default 0. */
+  /** Kept free inside the field at each edge, mm (the hoop's clearance setting): at both ends of the row and on
+   * either side of it. Default 0. */
   clearanceMm?: number;
   /** Centre of the first repeat, mm from the run's start (`fitBorder`'s `centersMm[0]`). Default: half a repeat. */
   firstCenterMm?: number;
@@ -44,15 +46,19 @@ export interface Hooping {
 export interface HoopingPlan {
   /** The most consecutive repeats one hooping can hold. */
   perHooping: number;
-  /** In stitching order: the centre hooping, then outwards alternately left and right. */
+  /** In stitching order: see `planHoopings` for the rule. */
   hoopings: Hooping[];
   /** True when the row runs along the field's height, so the design is turned 90° in the hoop. */
   rotated: boolean;
 }
 
 /**
- * Splits a row of border repeats into hoopings and orders them the way the trade stitches a border: centre first,
- * then outwards, left before right, so each new repeat is lined up against stitches already sewn.
+ * Splits a row of border repeats into hoopings and orders them the way the trade stitches a border: outwards from
+ * the centre mark, so each new hooping is lined up against stitches already sewn. The rule: first the hooping that
+ * holds the row's middle (with an even number of hoopings the middle falls between two, and the left one goes
+ * first); then always the unsewn hooping nearest the centre mark, the left one first when two are equally near.
+ * So 3 hoopings, left to right, are sewn 2, 1, 3 and 4 are sewn 2, 3, 1, 4 (issue 11: the near right one before
+ * the far left one). The rule of outwards from the centre is common practice, no source.
  */
 export function planHoopings(input: HoopingPlanInput): EngineResult<HoopingPlan> {
   if (!isRecord(input) || !isRecord(input.hoop)) return fail('The hooping plan needs the repeats and a hoop.');
@@ -71,17 +77,20 @@ export function planHoopings(input: HoopingPlanInput): EngineResult<HoopingPlan>
   if (!isNonNegativeNumber(firstCenterMm))
     return fail('The first repeat centre must be zero or a positive number of millimetres.');
 
-  const row = orientRow(motifHeightMm, fieldWidthMm, fieldHeightMm);
+  const usable = usableField({ fieldWidthMm, fieldHeightMm, clearanceMm });
+  const keptClear = clearanceMm > 0 ? ` less ${formatNumber(clearanceMm)} mm clearance at each edge` : '';
+  const row = orientRow(motifHeightMm, usable.widthMm, usable.heightMm);
   if (!row) {
     return fail(
-      `The motif is ${formatNumber(motifHeightMm)} mm tall, more than either side of this hoop's ${formatNumber(fieldWidthMm)} × ${formatNumber(fieldHeightMm)} mm sewing field.`,
+      `The motif is ${formatNumber(motifHeightMm)} mm tall, more than either side of this hoop's ${formatNumber(fieldWidthMm)} × ${formatNumber(fieldHeightMm)} mm sewing field${keptClear}.`,
     );
   }
-  const usableMm = row.lengthMm - 2 * clearanceMm;
+  const usableMm = row.lengthMm;
   if (repeatWidthMm > usableMm + FIT_SLACK_MM) {
+    const fieldMm = row.lengthMm + 2 * clearanceMm;
     return fail(
-      `One repeat is ${formatNumber(repeatWidthMm)} mm wide, but this hoop leaves ${formatNumber(Math.max(0, usableMm))} mm ` +
-        `(a ${formatNumber(row.lengthMm)} mm field less ${formatNumber(clearanceMm)} mm clearance at each end).`,
+      `One repeat is ${formatNumber(repeatWidthMm)} mm wide, but this hoop leaves ${formatNumber(usableMm)} mm ` +
+        `(a ${formatNumber(fieldMm)} mm field${keptClear}).`,
     );
   }
   const perHooping = Math.min(count, Math.floor((usableMm - repeatWidthMm + FIT_SLACK_MM) / pitchMm) + 1);
@@ -134,12 +143,13 @@ function centreRunIndex(runs: number[][], count: number): number {
   return runs.findIndex((run) => 2 * run[0] < count && count <= 2 * (run[run.length - 1] + 1));
 }
 
-/** Centre, then one left, one right, and so on outwards; once a side runs out the other continues. */
+/**
+ * The centre run first, then the others by their distance in hoopings from the middle of the row, left first on a
+ * tie: for an even count the two beside the middle come first, then one left, one right, outwards.
+ */
 function stitchingOrder(runCount: number, centre: number): number[] {
-  const order = [centre];
-  for (let step = 1; order.length < runCount; step += 1) {
-    if (centre - step >= 0) order.push(centre - step);
-    if (centre + step < runCount) order.push(centre + step);
-  }
-  return order;
+  const middle = (runCount - 1) / 2;
+  const others = Array.from({ length: runCount }, (_, j) => j).filter((j) => j !== centre);
+  others.sort((a, b) => Math.abs(a - middle) - Math.abs(b - middle) || a - b);
+  return [centre, ...others];
 }

@@ -38,16 +38,37 @@ function equivalentColumn(areaMm2: number, perimeterMm: number): { lengthMm: num
   return { lengthMm, widthMm: areaMm2 / lengthMm };
 }
 
+/** How a filled shape is sewn: a satin column or a fill. */
+export type FilledShapeKind = 'satin' | 'fill';
+/** How a stroked line is sewn: running stitch, a satin column or a fill. */
+export type StrokeKind = 'run' | FilledShapeKind;
+
+/** Satin when the shape's equivalent column is narrower than the satin limit, else a fill. Sizes in mm. */
+export function filledShapeKind(areaMm2: number, perimeterMm: number, settings: StitchSettings): FilledShapeKind {
+  return equivalentColumn(areaMm2, perimeterMm).widthMm < settings.satinMaxWidthMm ? 'satin' : 'fill';
+}
+
+/** Running stitch under the satin minimum, satin under the satin limit, else a fill. Width in mm. */
+export function strokeKind(widthMm: number, settings: StitchSettings): StrokeKind {
+  if (widthMm < settings.satinMinStrokeWidthMm) return 'run';
+  return widthMm < settings.satinMaxWidthMm ? 'satin' : 'fill';
+}
+
 /**
- * A filled shape: satin when its equivalent column is narrower than the satin limit, else a fill.
+ * A filled shape: satin when its equivalent column is narrower than the satin limit, else a fill; `kind` fixes
+ * the type instead (artwork decides it at its drawn size, so a resize does not switch it).
  * Satin: column length ÷ spacing × 2 penetrations (Printwear Jul 2019 p. 24), over a centre-run underlay.
  * Fill: area ÷ (row pitch × stitch length), over rows of underlay plus an edge run (underlay types:
  * tex-inc.com beginner digitizing series; which ones to use is common practice, no source).
  */
-export function stitchFilledShape(areaMm2: number, perimeterMm: number, settings: StitchSettings): StitchTally {
+export function stitchFilledShape(
+  areaMm2: number,
+  perimeterMm: number,
+  settings: StitchSettings,
+  kind: FilledShapeKind = filledShapeKind(areaMm2, perimeterMm, settings),
+): StitchTally {
   if (!(areaMm2 > 0) || !(perimeterMm > 0)) return EMPTY_TALLY;
-  const column = equivalentColumn(areaMm2, perimeterMm);
-  if (column.widthMm < settings.satinMaxWidthMm) return satinColumn(column.lengthMm, settings);
+  if (kind === 'satin') return satinColumn(equivalentColumn(areaMm2, perimeterMm).lengthMm, settings);
   return {
     ...EMPTY_TALLY,
     fill: wholeStitches(areaMm2 / (settings.fillRowPitchMm * settings.fillStitchLengthMm)),
@@ -59,14 +80,20 @@ export function stitchFilledShape(areaMm2: number, perimeterMm: number, settings
 
 /**
  * A stroked line: running stitch (times `passes` for double or triple runs) when thinner than the satin minimum,
- * a satin column of the line's length when narrower than the satin limit, else a fill of length × width.
+ * a satin column of the line's length when narrower than the satin limit, else a fill of length × width; `kind`
+ * fixes the type instead, as for `stitchFilledShape`.
  */
-export function stitchStroke(lengthMm: number, widthMm: number, passes: number, settings: StitchSettings): StitchTally {
+export function stitchStroke(
+  lengthMm: number,
+  widthMm: number,
+  passes: number,
+  settings: StitchSettings,
+  kind: StrokeKind = strokeKind(widthMm, settings),
+): StitchTally {
   if (!(lengthMm > 0)) return EMPTY_TALLY;
-  if (widthMm < settings.satinMinStrokeWidthMm)
-    return { ...EMPTY_TALLY, run: wholeStitches(lengthMm / settings.runStitchLengthMm) * passes };
-  if (widthMm < settings.satinMaxWidthMm) return satinColumn(lengthMm, settings);
-  return stitchFilledShape(lengthMm * widthMm, 2 * (lengthMm + widthMm), settings);
+  if (kind === 'run') return { ...EMPTY_TALLY, run: wholeStitches(lengthMm / settings.runStitchLengthMm) * passes };
+  if (kind === 'satin') return satinColumn(lengthMm, settings);
+  return stitchFilledShape(lengthMm * widthMm, 2 * (lengthMm + widthMm), settings, 'fill');
 }
 
 function satinColumn(lengthMm: number, settings: StitchSettings): StitchTally {

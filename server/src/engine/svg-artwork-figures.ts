@@ -1,7 +1,7 @@
 import { fail, type EngineResult, type Failure } from './engine-result.ts';
 import { isRecord } from './input-checks.ts';
 import { extentOf, filledArea, polylineLength, unionExtent, type Extent } from './outline-geometry.ts';
-import { stitchFilledShape, stitchStroke, tallyTotal } from './shape-stitches.ts';
+import { filledShapeKind, stitchFilledShape, stitchStroke, strokeKind, tallyTotal } from './shape-stitches.ts';
 import { summariseParts, type StitchEstimate, type StitchedPart } from './stitch-estimate.ts';
 import type { StitchSettings } from './stitch-settings.ts';
 import { readSvgDrawing, type SvgCanvas } from './svg-document.ts';
@@ -101,7 +101,10 @@ export function measureSvgArtwork(
 /**
  * Stitches for measured SVG artwork at a size: fills and narrow shapes from each filled outline, running stitch
  * or satin from each stroke (see `stitchFilledShape`, `stitchStroke`); shapes are sewn in document order, one
- * colour block per run of one colour.
+ * colour block per run of one colour. Each shape's stitch type is decided from the artwork as drawn (its own
+ * size, see `drawnMmPerUnit`) and kept at every size it is stitched, so the count follows the size smoothly: a
+ * 0.5 mm line stays a running stitch when the drawing is doubled, rather than jumping to a satin column as it
+ * crosses 1 mm. The counts themselves are worked out at the stitched size.
  */
 export function estimateSvgFigures(
   figures: SvgArtworkFigures,
@@ -112,17 +115,42 @@ export function estimateSvgFigures(
     return fail('The artwork has no stored measurements; upload it again.');
   const mmPerUnit = resolveMmPerUnit(figures, size);
   if (typeof mmPerUnit !== 'number') return mmPerUnit;
+  const drawnMm = drawnMmPerUnit(figures);
   const parts: StitchedPart[] = [];
   let extent: Extent | undefined;
   for (const shape of figures.shapes) {
-    const tally =
-      shape.kind === 'fill'
-        ? stitchFilledShape(shape.areaUnits2 * mmPerUnit * mmPerUnit, shape.perimeterUnits * mmPerUnit, settings)
-        : stitchStroke(shape.lengthUnits * mmPerUnit, shape.widthUnits * mmPerUnit, shape.runPasses, settings);
+    let tally;
+    if (shape.kind === 'fill') {
+      const kind = filledShapeKind(shape.areaUnits2 * drawnMm * drawnMm, shape.perimeterUnits * drawnMm, settings);
+      tally = stitchFilledShape(
+        shape.areaUnits2 * mmPerUnit * mmPerUnit,
+        shape.perimeterUnits * mmPerUnit,
+        settings,
+        kind,
+      );
+    } else {
+      const kind = strokeKind(shape.widthUnits * drawnMm, settings);
+      tally = stitchStroke(
+        shape.lengthUnits * mmPerUnit,
+        shape.widthUnits * mmPerUnit,
+        shape.runPasses,
+        settings,
+        kind,
+      );
+    }
     if (tallyTotal(tally) > 0) parts.push({ color: shape.color, tally });
     extent = unionExtent(extent, scaled(shape.extent, mmPerUnit));
   }
   return { ok: true, ...summariseParts(parts, extent, [...figures.notes]) };
+}
+
+/**
+ * The artwork's own scale, mm per user unit: from its width and height in absolute units, as a browser sizes it;
+ * a drawing that gives no size is taken at one CSS pixel per unit, the unit SVG user units default to.
+ */
+function drawnMmPerUnit(canvas: SvgCanvas): number {
+  const own = resolveMmPerUnit(canvas, undefined);
+  return typeof own === 'number' ? own : MM_PER_CSS_PX;
 }
 
 /** Millimetres per user unit for a canvas at a size, or why it cannot be worked out. */

@@ -1,7 +1,8 @@
 /**
  * The lettering fonts the server can stitch: the @fontsource packages installed with the app, less the interface
- * font, each with its latin 400 .woff (the only format the outline reader takes). A catalogue font can only be one
- * of these, so every lettering font a customer picks is one the server can measure.
+ * font, each named by its latin 400 .woff (the only format the outline reader takes); the loader adds the
+ * package's other subset files beside it (latin-ext, cyrillic, vietnamese…). A catalogue font can only be one of
+ * these, so every lettering font a customer picks is one the server can measure.
  */
 import { existsSync, readdirSync } from 'node:fs';
 import { createRequire } from 'node:module';

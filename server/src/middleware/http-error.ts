@@ -12,6 +12,7 @@ export const statusByKind: Record<ErrorKind, number> = {
   busy: 503,
   'too-many-requests': 429,
   'needs-acknowledgement': 422,
+  unprocessable: 422,
 };
 
 /** An expected failure raised at the edge (middleware); the error handler answers it with its status and message. */

@@ -43,9 +43,10 @@ describe('the customer’s own artwork', () => {
     let history = run(freshHistory(), 'add-artwork', { artworkUploadId: 42, zone: 'hem' });
     history = run(history, 'update-artwork', { id: 'artwork', widthMm: 400 });
     expect(only(history, 'artwork')).toMatchObject({ zone: 'hem', widthMm: 91 });
-    // A square fits the 200 × 300 mm field up to 200 mm, a 2:1 drawing up to 300 mm (turned in the hoop).
-    expect(largestFactorInHoops({ widthMm: 1, heightMm: 1 }, setting.hoops)).toBe(200);
-    expect(largestFactorInHoops({ widthMm: 1, heightMm: 0.5 }, setting.hoops)).toBe(300);
+    // The 200 × 300 mm field less its 3 mm clearance at each edge is 194 × 294 mm: a square fits up to 194 mm, a
+    // 2:1 drawing up to 294 mm (turned in the hoop).
+    expect(largestFactorInHoops({ widthMm: 1, heightMm: 1 }, setting.hoops)).toBe(194);
+    expect(largestFactorInHoops({ widthMm: 1, heightMm: 0.5 }, setting.hoops)).toBe(294);
   });
 
   it('when a resize is repeated, then it is one step to undo', () => {
@@ -151,7 +152,7 @@ describe('thread colours', () => {
 describe('motif sizes and border repeats', () => {
   it('when the largest hoop is smaller than the motif file allows, then the hoop sets the top of the range', () => {
     expect(motifScaleRange(sittingBunny, setting.hoops)).toEqual({ minPct: 80, maxPct: 120, isHoopLimited: false });
-    const smallHoops = [{ slug: 'tiny', name: 'Tiny', fieldWidthMm: 40, fieldHeightMm: 80 }];
+    const smallHoops = [{ slug: 'tiny', name: 'Tiny', fieldWidthMm: 40, fieldHeightMm: 80, clearanceMm: 0 }];
     // 36 × 71 mm fits 40 × 80 up to 40 / 36 = 111.1 % (its height would allow 112.7 %).
     expect(motifScaleRange(sittingBunny, smallHoops)).toEqual({ minPct: 80, maxPct: 111, isHoopLimited: true });
   });

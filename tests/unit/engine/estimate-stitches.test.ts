@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import {
   DEFAULT_STITCH_SETTINGS,
@@ -156,6 +157,49 @@ describe('estimateStitches: SVG artwork', () => {
     expect(estimateStitches({ kind: 'svg', svgText: file, size: { mmPerUnit: 5 } })).toMatchObject({
       ok: true,
       byType: { run: 20 },
+    });
+  });
+
+  describe('resizing keeps each line’s stitch type (issue 11)', () => {
+    const sunshine = readFileSync(new URL('../../../seeds/uploads/sunshine-drawing.svg', import.meta.url), 'utf8');
+    const stitchesAt = (svgText: string, widthMm: number) => {
+      const estimate = estimateStitches({ kind: 'svg', svgText, size: { widthMm } });
+      if (!estimate.ok) throw new Error(estimate.reason);
+      return estimate;
+    };
+
+    it('when a 0.5 mm line in a 110 mm drawing is stitched at 219.9 and 220 mm, then it is running stitch both times: 80 stitches', () => {
+      // 200 mm of line at 2.5 mm a stitch (Printwear, Feb 2016, p. 61 range; the shop's default length) = 80.
+      // Before: 220 mm doubled the 0.5 mm stroke to 1 mm, so it became a satin column of 1,080 stitches.
+      const line = svg(
+        '<path d="M5 5H105" stroke="#000" stroke-width="0.5" fill="none"/>',
+        'width="110mm" height="10mm" viewBox="0 0 110 10"',
+      );
+      expect(stitchesAt(line, 219.9).byType).toEqual({ run: 80, satin: 0, fill: 0, underlay: 0 });
+      expect(stitchesAt(line, 220).byType).toEqual({ run: 80, satin: 0, fill: 0, underlay: 0 });
+      expect(stitchesAt(line, 110).byType.run).toBe(40);
+    });
+
+    it('when the seeded sunshine drawing is resized from 10 to 160 mm, then its stitches never fall and never step by more than the area grows', () => {
+      // Stitches follow length (running, satin) or area (fill) when a design is resized at its density
+      // (lindeegembroidery.com/scaling), so between two sizes the count can grow at most by the area ratio;
+      // the slack covers each part's rounding up to a whole stitch. Before, 22 → 24 mm went 204 → 417 (× 2.04,
+      // against an area ratio of 1.19) as the rays crossed 1 mm and turned to satin.
+      const sizes = Array.from({ length: 151 }, (_, i) => 10 + i);
+      const counts = sizes.map((widthMm) => stitchesAt(sunshine, widthMm).stitches);
+      for (let i = 1; i < sizes.length; i += 1) {
+        expect(counts[i]).toBeGreaterThanOrEqual(counts[i - 1]);
+        expect(counts[i]).toBeLessThanOrEqual(counts[i - 1] * (sizes[i] / sizes[i - 1]) ** 2 + 12);
+      }
+      // The rays (26 px = 6.9 mm as drawn at 600 px = 158.75 mm) are satin at every size, never running stitch.
+      expect(stitchesAt(sunshine, 20).byType.run).toBe(0);
+      expect([20, 24, 28].map((widthMm) => stitchesAt(sunshine, widthMm).stitches)).toEqual([359, 464, 579]);
+    });
+
+    it('when artwork is stitched at its own size, then the count is what it was before the rule (the type as drawn is the type as sewn)', () => {
+      // The drawing's own size: 600 px at 96 px per inch (CSS Values 4) = 158.75 mm.
+      const asDrawn = estimateStitches({ kind: 'svg', svgText: sunshine });
+      expect(asDrawn.ok && asDrawn.stitches).toBe(stitchesAt(sunshine, 158.75).stitches);
     });
   });
 

@@ -28,15 +28,16 @@ describe('planHoopings', () => {
     expect(plan.perHooping).toBe(1);
     expect(plan.hoopings).toHaveLength(4);
     expect(plan.rotated).toBe(true);
-    // The middle of 4 repeats falls between hoopings 2 and 3; the left one (repeat index 1) goes first.
+    // The middle of 4 repeats falls between the 2nd and 3rd from the left; the left one (repeat index 1) goes first,
+    // then the right one beside the mark (issue 11: not the far left one before the near right one).
     expect(plan.hoopings.map((h) => [h.order, h.repeatIndices, h.side])).toEqual([
       [1, [1], 'center'],
-      [2, [0], 'left'],
-      [3, [2], 'right'],
+      [2, [2], 'right'],
+      [3, [0], 'left'],
       [4, [3], 'right'],
     ]);
     // One repeat per hooping: each hoop centre sits on its repeat's centre along the loop.
-    expect(plan.hoopings.map((h) => h.centerMm)).toEqual([259.5, 86.5, 432.5, 605.5].map((c) => expect.closeTo(c, 9)));
+    expect(plan.hoopings.map((h) => h.centerMm)).toEqual([259.5, 432.5, 86.5, 605.5].map((c) => expect.closeTo(c, 9)));
   });
 
   it('when several repeats fit one hooping, then runs are as even as possible and stitched centre, left, right', () => {
@@ -73,6 +74,52 @@ describe('planHoopings', () => {
       [0],
       [4],
     ]);
+  });
+
+  // Issue 11's rule (outwards from the centre mark is common practice, no source): positions 1…n from the left, in
+  // the order they are sewn; each new hooping is beside one already sewn.
+  it.each([
+    [1, [1]],
+    [2, [1, 2]],
+    [3, [2, 1, 3]],
+    [4, [2, 3, 1, 4]],
+    [5, [3, 2, 4, 1, 5]],
+    [6, [3, 4, 2, 5, 1, 6]],
+    [7, [4, 3, 5, 2, 6, 1, 7]],
+    [8, [4, 5, 3, 6, 2, 7, 1, 8]],
+  ])(
+    'when a border needs %i hoopings, then they are sewn outwards from the centre mark: %j from the left',
+    (n, sewn) => {
+      const plan = planHoopings({ count: n, repeatWidthMm: 150, pitchMm: 150, motifHeightMm: 50, hoop: hoop5x7 });
+      if (!plan.ok) throw new Error(plan.reason);
+      const positions = plan.hoopings.map((hooping) => hooping.repeatIndices[0] + 1);
+      expect(positions).toEqual(sewn);
+      positions.forEach((position, i) => {
+        if (i > 0) expect(positions.slice(0, i).some((done) => Math.abs(done - position) === 1)).toBe(true);
+      });
+      // Never farther from the centre mark than a hooping sewn after it.
+      const fromMark = plan.hoopings.map((hooping) => Math.abs(hooping.centerMm - (n * 150) / 2));
+      fromMark.forEach((distance, i) => expect(distance).toBeLessThanOrEqual(Math.min(...fromMark.slice(i)) + 1e-9));
+    },
+  );
+
+  it('when a 173 mm repeat goes in a 180 mm row, then 3 mm clearance at each end still holds it and 4 mm refuses it', () => {
+    // Issue 11: 180 − 2 × 3 = 174 mm ≥ 173 (0.5 mm spare at each end); 180 − 2 × 4 = 172 mm < 173.
+    const input = { count: 4, repeatWidthMm: 173, pitchMm: 173, motifHeightMm: 38.4, hoop: hoop5x7 };
+    expect(planHoopings({ ...input, clearanceMm: 3 })).toMatchObject({ ok: true, perHooping: 1 });
+    expect(planHoopings({ ...input, clearanceMm: 3.5 })).toMatchObject({ ok: true, perHooping: 1 });
+    expect(planHoopings({ ...input, clearanceMm: 4 })).toEqual({
+      ok: false,
+      reason:
+        'One repeat is 173 mm wide, but this hoop leaves 172 mm (a 180 mm field less 4 mm clearance at each edge).',
+    });
+  });
+
+  it('when clearance is kept, then it is kept across the row too: a motif as tall as the short side no longer fits across it', () => {
+    const input = { count: 2, repeatWidthMm: 60, pitchMm: 60, motifHeightMm: 118, hoop: hoop5x7 };
+    expect(planHoopings(input)).toMatchObject({ ok: true, rotated: true });
+    // 120 − 2 × 3 = 114 mm across: 118 mm now only fits across the long side, so the row runs along the short one.
+    expect(planHoopings({ ...input, clearanceMm: 3 })).toMatchObject({ ok: true, rotated: false, perHooping: 1 });
   });
 
   it('when clearance is kept at the ends, then fewer repeats fit a hooping', () => {

@@ -3,6 +3,7 @@ import type { DesignDocument, DesignPlacement } from '../../../server/src/contra
 import { DEFAULT_STITCH_SETTINGS, measureSvgArtwork } from '../../../server/src/engine/index.ts';
 import { figureDesign } from '../../../server/src/modules/quotes/design-figures.ts';
 import type { CatalogueMotifEntry, QuoteCatalogue } from '../../../server/src/modules/quotes/quote-catalogue-types.ts';
+import { chestLettering } from '../../support/sample-designs.ts';
 import { loadShippedFont } from '../engine/support/load-font.ts';
 
 const daisyChain: CatalogueMotifEntry = {
@@ -33,9 +34,9 @@ const littleLamb: CatalogueMotifEntry = {
 
 /** Hoops out of area order, so the test shows the smallest workable one is chosen, not the first listed. */
 const hoops = [
-  { slug: 'large-200x300', name: 'Large 200 × 300 mm', fieldWidthMm: 200, fieldHeightMm: 300 },
-  { slug: 'oblong-120x180', name: 'Oblong 120 × 180 mm', fieldWidthMm: 120, fieldHeightMm: 180 },
-  { slug: 'square-100', name: 'Square 100 × 100 mm', fieldWidthMm: 100, fieldHeightMm: 100 },
+  { slug: 'large-200x300', name: 'Large 200 × 300 mm', fieldWidthMm: 200, fieldHeightMm: 300, clearanceMm: 3 },
+  { slug: 'oblong-120x180', name: 'Oblong 120 × 180 mm', fieldWidthMm: 120, fieldHeightMm: 180, clearanceMm: 3 },
+  { slug: 'square-100', name: 'Square 100 × 100 mm', fieldWidthMm: 100, fieldHeightMm: 100, clearanceMm: 3 },
 ];
 
 function catalogueWith(changes: Partial<QuoteCatalogue> = {}): QuoteCatalogue {
@@ -90,18 +91,7 @@ const border = (changes: Partial<Extract<DesignPlacement, { kind: 'border' }>> =
   threads: ['WB-118', 'WB-101', 'WB-103'],
   ...changes,
 });
-const lettering = (text: string, letterHeightMm: number): DesignPlacement => ({
-  id: 'name',
-  kind: 'lettering',
-  zone: 'chest',
-  centerXMm: 209,
-  centerYMm: 105,
-  rotationDeg: 0,
-  text,
-  font: 'rounded-block',
-  letterHeightMm,
-  thread: 'WB-110',
-});
+const lettering = (text: string, letterHeightMm: number) => chestLettering(text, 'rounded-block', letterHeightMm);
 const design = (...placements: DesignPlacement[]): DesignDocument => ({ version: 1, placements });
 
 describe('figureDesign', () => {
@@ -126,6 +116,34 @@ describe('figureDesign', () => {
         hasCustomerArtwork: false,
       },
     ]);
+  });
+
+  it('when the hoops keep their 3 mm default clearance, then the 120 × 180 hoop still holds one 173 mm repeat, and at 4 mm the border moves to the 160 × 260 hoop', () => {
+    // The trade's worked case (common practice, no source): a 120 × 180 mm hoop holds one repeat resized to
+    // 173 mm. 173 + 2 × 3 = 179 ≤ 180, so the 3 mm default keeps it; 173 + 2 × 4 = 181 > 180 does not.
+    const withClearance = (clearanceMm: number) =>
+      catalogueWith({
+        hoops: [
+          ...hoops.map((hoop) => ({ ...hoop, clearanceMm })),
+          { slug: 'long-160x260', name: 'Long 160 × 260 mm', fieldWidthMm: 160, fieldHeightMm: 260, clearanceMm },
+        ],
+      });
+    const held = figureDesign(withClearance(3), design(border()));
+    if (!held.ok) throw new Error(held.error.message);
+    expect(held.value.placements[0].border).toMatchObject({ hoop: { slug: 'oblong-120x180', clearanceMm: 3 } });
+    expect(held.value.placements[0].hoopings).toBe(4);
+    const moved = figureDesign(withClearance(4), design(border()));
+    if (!moved.ok) throw new Error(moved.error.message);
+    // 260 − 2 × 4 = 252 mm: still one 173 mm repeat a hooping (two would need 346 mm), now in the long hoop.
+    expect(moved.value.placements[0].border).toMatchObject({ hoop: { slug: 'long-160x260' } });
+    expect(moved.value.placements[0].hoopings).toBe(4);
+    const oblongOnly = hoops
+      .filter((hoop) => hoop.slug === 'oblong-120x180')
+      .map((hoop) => ({ ...hoop, clearanceMm: 4 }));
+    const none = figureDesign(catalogueWith({ hoops: oblongOnly }), design(border()));
+    expect(!none.ok && none.error.message).toMatch(
+      /One repeat is 173 mm wide, but this hoop leaves 172 mm \(a 180 mm field less 4 mm clearance at each edge\)/,
+    );
   });
 
   it('when the customer asks for a count that cannot fit, then it is refused at the count with the engine’s reason and a count that fits', () => {
@@ -181,7 +199,7 @@ describe('figureDesign', () => {
     });
     const tooWide = figureDesign(catalogueWith(), design(lettering('Alexandra Rose', 60)));
     expect(!tooWide.ok && tooWide.error.fields?.['document.placements.0.letterHeightMm']).toMatch(
-      /^“Alexandra Rose” at 60 mm comes to \d+(\.\d)? × \d+(\.\d)? mm, bigger than the 200 × 300 mm sewing field of our largest hoop; make it smaller\.$/,
+      /^“Alexandra Rose” at 60 mm comes to \d+(\.\d)? × \d+(\.\d)? mm, bigger than the 194 × 294 mm our largest hoop can sew in \(its 200 × 300 mm sewing field less 3 mm clearance at each edge\); make it smaller\.$/,
     );
   });
 

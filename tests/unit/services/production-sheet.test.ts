@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { estimateStitches } from '../../../server/src/engine/index.ts';
 import { figureDesign } from '../../../server/src/modules/quotes/design-figures.ts';
 import { sheetBorderPlan } from '../../../server/src/modules/production/production-sheet-hoopings.ts';
 import { formatLengthPlain } from '../../../server/src/modules/production/production-sheet-pdf-kit.ts';
@@ -12,7 +13,7 @@ import type { QuoteCatalogue } from '../../../server/src/modules/quotes/quote-ca
 import { letteringOutline } from '../../../server/src/modules/production/production-sheet-outlines.ts';
 import { itemTemplate } from '../../../server/src/modules/production/production-sheet-templates.ts';
 import type { SheetPlacement } from '../../../server/src/contracts/production-sheet.ts';
-import { loadShippedFont } from '../engine/support/load-font.ts';
+import { loadOpentypeFont, loadShippedFont } from '../engine/support/load-font.ts';
 
 const daisyChain = {
   slug: 'daisy-chain',
@@ -50,7 +51,9 @@ const catalogue: QuoteCatalogue = {
   },
   motifs: new Map([[daisyChain.slug, daisyChain]]),
   fonts: new Map(),
-  hoops: [{ slug: 'oblong-120x180', name: 'Oblong 120 × 180 mm', fieldWidthMm: 120, fieldHeightMm: 180 }],
+  hoops: [
+    { slug: 'oblong-120x180', name: 'Oblong 120 × 180 mm', fieldWidthMm: 120, fieldHeightMm: 180, clearanceMm: 3 },
+  ],
   machine: { stitchesPerMinute: 650, minutesPerColorChange: 0.5, minutesPerHooping: 4, setupMinutes: 10 },
 };
 
@@ -74,14 +77,20 @@ function planFor(run: 'front' | 'circumference') {
 }
 
 describe('sheetBorderPlan', () => {
-  it('when 4 repeats of 173 mm go round a 692 mm loop, then the hoop centres are ±86.5 and ±259.5 mm from the centre mark, centre first', () => {
+  it('when 4 repeats of 173 mm go round a 692 mm loop, then the hoop centres are ±86.5 and ±259.5 mm from the centre mark, sewn outwards from it', () => {
     const plan = planFor('circumference');
+    // Issue 11: the two beside the centre mark first (left, then right), then the outer left and the outer right.
     expect(plan.hoopings.map((h) => [h.order, h.side, h.fromCentreMm])).toEqual([
       [1, 'center', -86.5],
-      [2, 'left', -259.5],
-      [3, 'right', 86.5],
+      [2, 'right', 86.5],
+      [3, 'left', -259.5],
       [4, 'right', 259.5],
     ]);
+    expect(plan.orderRule).toContain('each new hooping lies beside stitches already sewn');
+    expect(plan.orderRule).toContain('From left to right the hoopings are numbered 3, 1, 2, 4.');
+    expect(plan.clearanceNote).toBe(
+      'Planned with 3 mm kept clear inside the sewing field at every edge (114 × 174 mm of the 120 × 180 mm field).',
+    );
   });
 
   it('when 2 repeats of 173 mm fill the 346 mm front hem, then the centre mark is the middle of the front and the hoops sit 86.5 mm either side', () => {
@@ -138,12 +147,28 @@ describe('template outlines', () => {
     expect(outline?.outlines[0]).toMatchObject({ hex: '#2f2f33', isFilled: true });
   });
 
+  it('when a Cyrillic name is set for the template, then it is drawn from the font’s cyrillic file as wide as the quote measured it', () => {
+    // Issue 11: the sheet drew .notdef boxes for letters outside the latin file. Playfair Display ships a cyrillic
+    // subset (@fontsource/playfair-display metadata.json); the quote's estimate and the template read the same letters.
+    const font = loadShippedFont('playfair-display');
+    const outline = letteringOutline(font, 'Маша', 20, '#2f2f33');
+    const estimate = estimateStitches({ kind: 'lettering', text: 'Маша', font, letterHeightMm: 20 });
+    expect(outline?.outlines.length).toBeGreaterThan(0);
+    expect(estimate.ok && outline?.widthMm).toBeCloseTo(estimate.ok ? estimate.widthMm : NaN, 1);
+    // The latin file alone draws four .notdef boxes of another width.
+    const boxes = letteringOutline(loadOpentypeFont('playfair-display'), 'Маша', 20, '#2f2f33');
+    expect(Math.abs(outline!.widthMm - boxes!.widthMm)).toBeGreaterThan(1);
+  });
+
   it('when an item only fits the hoop turned, then its template turns the field and centres the item on the crosshair', () => {
     const placement = { id: 'bunny', label: 'Sitting bunny' } as SheetPlacement;
-    const hoop = { slug: 'oblong', name: 'Oblong 180 × 120 mm', fieldWidthMm: 180, fieldHeightMm: 120 };
+    const hoop = { slug: 'oblong', name: 'Oblong 180 × 120 mm', fieldWidthMm: 180, fieldHeightMm: 120, clearanceMm: 3 };
     const template = itemTemplate(placement, hoop, { widthMm: 60, heightMm: 150, outlines: [] });
     expect(template.field).toMatchObject({ widthMm: 120, heightMm: 180 });
     expect(template.subtitle).toMatch(/turned 90° in the hoop/);
+    expect(template.subtitle).toMatch(
+      /3 mm kept clear inside the sewing field at every edge \(174 × 114 mm of the 180 × 120 mm field\)/,
+    );
     expect(template.artwork.xMm + template.artwork.widthMm / 2).toBeCloseTo(template.centre.xMm, 9);
     expect(template.artwork.yMm + template.artwork.heightMm / 2).toBeCloseTo(template.centre.yMm, 9);
   });

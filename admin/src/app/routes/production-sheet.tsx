@@ -220,7 +220,10 @@ function HoopingPlan({
         {border.isClosed ? 'round the' : 'along the front of the'} {formatLength(border.runLengthMm)} hem:{' '}
         {border.hoopings.length} hoopings in the {placement.hoop?.name ?? 'hoop'}
         {border.isRotated && ' (design turned 90° in the hoop)'}. Mark the centre front and a guide line{' '}
-        {formatLength(border.hemOffsetMm)} above the hem edge, stitch hooping 1 first, then work outwards.
+        {formatLength(border.hemOffsetMm)} above the hem edge.
+      </p>
+      <p className="mb-3 text-sm text-walnut-700">
+        {border.orderRule} {border.clearanceNote}
       </p>
       <HemPlanPicture border={border} />
       <p className="mt-1 text-xs text-walnut-500">

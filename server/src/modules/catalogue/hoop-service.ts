@@ -7,6 +7,7 @@ const editedRow = (hoop: UpdateHoopRequest) => ({
   name: hoop.name,
   field_width_mm: hoop.fieldWidthMm,
   field_height_mm: hoop.fieldHeightMm,
+  ...(hoop.clearanceMm === undefined ? {} : { clearance_mm: hoop.clearanceMm }),
   ...(hoop.sortOrder === undefined ? {} : { sort_order: hoop.sortOrder }),
 });
 

@@ -12,7 +12,9 @@ export async function readStudioCatalogue(db: Db): Promise<StudioCatalogueRespon
       .select('*')
       .orderBy([{ column: 'kind' }, ...ordered]),
     db('threads').select('id', 'code', 'name', 'hex', 'lab_l', 'lab_a', 'lab_b', 'is_active').orderBy(ordered),
-    db('hoops').select('id', 'slug', 'name', 'field_width_mm', 'field_height_mm', 'is_active').orderBy(ordered),
+    db('hoops')
+      .select('id', 'slug', 'name', 'field_width_mm', 'field_height_mm', 'clearance_mm', 'is_active')
+      .orderBy(ordered),
     db('lettering_fonts')
       .select([...letteringFontColumns, 'fontsource_package', 'is_active'])
       .orderBy(ordered),
@@ -44,6 +46,7 @@ export async function readStudioCatalogue(db: Db): Promise<StudioCatalogueRespon
       name: h.name,
       fieldWidthMm: Number(h.field_width_mm),
       fieldHeightMm: Number(h.field_height_mm),
+      clearanceMm: Number(h.clearance_mm),
       isActive: Boolean(h.is_active),
     })),
     fonts: fonts.map((f) => ({

@@ -1,5 +1,6 @@
 import type { SheetPlacement } from '../../contracts/production-sheet.ts';
 import type { PlacementFigures } from '../quotes/placement-outcome.ts';
+import { clearanceText, stitchingOrderText } from './production-sheet-wording.ts';
 
 type BorderFigures = NonNullable<PlacementFigures['border']>;
 
@@ -19,6 +20,14 @@ export function sheetBorderPlan(
   const firstMidIndex = (first.repeatIndices[0] + first.repeatIndices[first.repeatIndices.length - 1]) / 2;
   const firstRepeatCentreMm = first.centerMm - firstMidIndex * pitchMm;
   const centreMarkMm = firstRepeatCentreMm + ((count - 1) * pitchMm) / 2;
+  const hoopings = plan.hoopings.map((hooping) => ({
+    order: hooping.order,
+    repeatNumbers: hooping.repeatIndices.map((index) => index + 1),
+    side: hooping.side,
+    fromRowStartMm: hooping.centerMm,
+    // Rounded away from float noise: 259.49999999 would print as 259.4.
+    fromCentreMm: Number((hooping.centerMm - centreMarkMm).toFixed(6)),
+  }));
   return {
     count,
     scalePct: border.scalePct,
@@ -30,13 +39,8 @@ export function sheetBorderPlan(
     hemOffsetMm,
     perHooping: plan.perHooping,
     isRotated: plan.rotated,
-    hoopings: plan.hoopings.map((hooping) => ({
-      order: hooping.order,
-      repeatNumbers: hooping.repeatIndices.map((index) => index + 1),
-      side: hooping.side,
-      fromRowStartMm: hooping.centerMm,
-      // Rounded away from float noise: 259.49999999 would print as 259.4.
-      fromCentreMm: Number((hooping.centerMm - centreMarkMm).toFixed(6)),
-    })),
+    hoopings,
+    orderRule: stitchingOrderText(hoopings),
+    clearanceNote: clearanceText(border.hoop),
   };
 }

@@ -99,9 +99,10 @@ class SummaryWriter {
     this.text(
       `${border.count} repeats of ${formatLengthPlain(border.repeatWidthMm)} at ${border.scalePct} % ${loop}: ${border.hoopings.length} hoopings in the ` +
         `${placement.hoop?.name ?? 'hoop'}${border.isRotated ? ' (design turned 90° in the hoop)' : ''}. Mark the centre front and the guide line ` +
-        `${formatLengthPlain(border.hemOffsetMm)} above the hem edge; stitch hooping 1 first, then outwards.`,
+        `${formatLengthPlain(border.hemOffsetMm)} above the hem edge.`,
       { size: 9 },
     );
+    this.text(`${border.orderRule} ${border.clearanceNote}`, { size: 9 });
     this.gap(4);
     this.hemPicture(border);
     for (const hooping of border.hoopings) {

@@ -3,8 +3,9 @@
  * the studio page both draw from these figures, so the printout and the screen cannot disagree.
  */
 import type { PlacementTemplate, SheetPlacement } from '../../contracts/production-sheet.ts';
-import { fitInField } from '../../engine/hoop-fit.ts';
+import { fitInField, usableField } from '../../engine/hoop-fit.ts';
 import { placeOutlines, type ArtworkOutline } from './production-sheet-outlines.ts';
+import { clearanceText } from './production-sheet-wording.ts';
 
 /** Clear paper round the sewing field, mm, so the field's outline is not lost at a trimmed edge. */
 const PADDING_MM = 4;
@@ -29,8 +30,11 @@ export function borderTemplates(
     bySize.set(hooping.repeatNumbers.length, [...(bySize.get(hooping.repeatNumbers.length) ?? []), hooping.order]);
   const longMm = Math.max(hoop.fieldWidthMm, hoop.fieldHeightMm);
   const shortMm = Math.min(hoop.fieldWidthMm, hoop.fieldHeightMm);
-  // As planHoopings orients the row: along the long side when the motif's height fits across the short one.
-  const [rowMm, acrossMm] = border.repeatHeightMm <= shortMm ? [longMm, shortMm] : [shortMm, longMm];
+  // As planHoopings orients the row: along the long side when the motif's height fits across the short one of
+  // the usable field (the field less the hoop's clearance at each edge).
+  const usable = usableField(hoop);
+  const [rowMm, acrossMm] =
+    border.repeatHeightMm <= Math.min(usable.widthMm, usable.heightMm) + 1e-9 ? [longMm, shortMm] : [shortMm, longMm];
 
   return [...bySize].map(([repeats, orders]): PlacementTemplate => {
     const field = { xMm: PADDING_MM, yMm: PADDING_MM, widthMm: rowMm, heightMm: acrossMm };
@@ -52,7 +56,7 @@ export function borderTemplates(
       id: `${placement.id}-${repeats}`,
       placementId: placement.id,
       title: `${placement.label} · ${repeats === 1 ? 'one repeat' : `${repeats} repeats`} per hooping`,
-      subtitle: `${mm1(border.repeatWidthMm)} repeat at ${border.scalePct} % in the ${hoop.name}; use for ${hoopings}.`,
+      subtitle: `${mm1(border.repeatWidthMm)} repeat at ${border.scalePct} % in the ${hoop.name}; use for ${hoopings}. ${clearanceText(hoop)}`,
       widthMm: rowMm + 2 * PADDING_MM,
       heightMm: Math.max(field.yMm + acrossMm, hemLineYMm) + PADDING_MM,
       field,
@@ -84,7 +88,7 @@ export function itemTemplate(placement: SheetPlacement, hoop: Hoop, artwork: Art
     id: placement.id,
     placementId: placement.id,
     title: placement.label,
-    subtitle: `${mm1(artwork.widthMm)} × ${mm1(artwork.heightMm)} in the ${hoop.name}${fitsAsIs ? '' : ', turned 90° in the hoop'}.`,
+    subtitle: `${mm1(artwork.widthMm)} × ${mm1(artwork.heightMm)} in the ${hoop.name}${fitsAsIs ? '' : ', turned 90° in the hoop'}. ${clearanceText(hoop)}`,
     widthMm: fieldWidthMm + 2 * PADDING_MM,
     heightMm: fieldHeightMm + 2 * PADDING_MM,
     field,

@@ -54,7 +54,7 @@ export function figureDesign(catalogue: QuoteCatalogue, document: DesignDocument
   const refusals = outcomes.flatMap((outcome) => (outcome.ok ? [] : [outcome]));
   if (refusals.length > 0) {
     return failure(
-      'invalid',
+      refusals[0].kind ?? 'invalid',
       refusals[0].message,
       Object.fromEntries(refusals.map((refusal) => [refusal.field, refusal.message])),
     );

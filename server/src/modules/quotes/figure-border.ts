@@ -95,6 +95,7 @@ function planInBestHoop(hoops: readonly CatalogueHoop[], motif: CatalogueMotifEn
       pitchMm: fit.pitchMm,
       motifHeightMm: motif.heightMm * fit.scale,
       hoop: { fieldWidthMm: hoop.fieldWidthMm, fieldHeightMm: hoop.fieldHeightMm },
+      clearanceMm: hoop.clearanceMm,
       firstCenterMm: fit.centersMm[0],
     });
     if (!plan.ok) reason = plan.reason;

@@ -1,6 +1,7 @@
 import { estimateStitches, type StitchEstimate } from '../../engine/index.ts';
 import type { ArtworkPlacement, LetteringPlacement, MotifPlacement } from '../../contracts/designs.ts';
-import type { QuoteCatalogue } from './quote-catalogue-types.ts';
+import { describeCharacters } from '../../integrations/character-names.ts';
+import type { CatalogueFont, QuoteCatalogue } from './quote-catalogue-types.ts';
 import {
   catalogueMotifFor,
   checkFitsAHoop,
@@ -71,6 +72,8 @@ function figureLettering(catalogue: QuoteCatalogue, placement: LetteringPlacemen
       `${font.name} sews cleanly from ${font.minHeightMm} to ${font.maxHeightMm} mm tall; choose a letter height in that range.`,
     );
   }
+  const missing = font.outlines.missingCharacters(placement.text);
+  if (missing.length > 0) return refuse(`${path}.text`, cannotStitch(font, missing), 'unprocessable');
   const estimate = estimateStitches({
     kind: 'lettering',
     text: placement.text,
@@ -84,6 +87,12 @@ function figureLettering(catalogue: QuoteCatalogue, placement: LetteringPlacemen
     what: `“${placement.text}” at ${placement.letterHeightMm} mm`,
     field: `${path}.letterHeightMm`,
   });
+}
+
+/** Which characters the font has no letters for, named so a parent can see which ones to change. */
+function cannotStitch(font: CatalogueFont, missing: readonly string[]): string {
+  const them = missing.length === 1 ? 'it' : 'them';
+  return `${font.name} cannot stitch ${describeCharacters(missing)}: the font has no letter for ${them}; choose another font or leave ${them} out.`;
 }
 
 function figureArtwork(catalogue: QuoteCatalogue, placement: ArtworkPlacement, path: string): PlacementOutcome {

@@ -1,5 +1,5 @@
 import type { CatalogueMotif, HoopingPlan, StitchEstimate } from '../../engine/index.ts';
-import { fitInField } from '../../engine/hoop-fit.ts';
+import { fitInField, usableField } from '../../engine/hoop-fit.ts';
 import type { DesignPlacement } from '../../contracts/designs.ts';
 import type { CatalogueHoop, CatalogueMotifEntry } from './quote-catalogue-types.ts';
 
@@ -32,9 +32,16 @@ export interface PlacementFigures {
 }
 
 /** A placement's figures, or why it cannot be sewn, at its field path in the request. */
-export type PlacementOutcome = { ok: true; figures: PlacementFigures } | { ok: false; field: string; message: string };
+export type PlacementOutcome =
+  { ok: true; figures: PlacementFigures } | { ok: false; field: string; message: string; kind?: 'unprocessable' };
 
-export const refuse = (field: string, message: string): PlacementOutcome => ({ ok: false, field, message });
+/** A refusal at a field: `invalid` (400) unless the request is well formed but cannot be stitched (422). */
+export const refuse = (field: string, message: string, kind?: 'unprocessable'): PlacementOutcome => ({
+  ok: false,
+  field,
+  message,
+  ...(kind ? { kind } : {}),
+});
 
 export const countOf = (n: number, noun: string) => `${n} ${noun}${n === 1 ? '' : 's'}`;
 
@@ -70,9 +77,11 @@ export function checkFitsAHoop(
   const { widthMm, heightMm } = estimate;
   if (smallestHoopHolding(hoops, widthMm, heightMm)) return undefined;
   const largest = byFieldArea(hoops).at(-1);
-  const limit = largest
-    ? `the ${mm(largest.fieldWidthMm)} × ${mm(largest.fieldHeightMm)} mm sewing field of our largest hoop`
-    : 'any hoop the studio has';
+  const usable = largest && usableField(largest);
+  const limit =
+    largest && usable
+      ? `the ${mm(usable.widthMm)} × ${mm(usable.heightMm)} mm our largest hoop can sew in (its ${mm(largest.fieldWidthMm)} × ${mm(largest.fieldHeightMm)} mm sewing field less ${mm(largest.clearanceMm)} mm clearance at each edge)`
+      : 'any hoop the studio has';
   return refuse(field, `${what} comes to ${mm(widthMm)} × ${mm(heightMm)} mm, bigger than ${limit}; make it smaller.`);
 }
 

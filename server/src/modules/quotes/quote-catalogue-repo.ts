@@ -92,7 +92,10 @@ export async function loadQuoteCatalogue(db: Db, query: QuoteCatalogueQuery): Pr
       .select('slug', 'name', 'fontsource_package', 'file_name', 'min_height_mm', 'max_height_mm')
       .whereIn('slug', query.fontSlugs)
       .where({ is_active: true }),
-    db('hoops').select('slug', 'name', 'field_width_mm', 'field_height_mm').where({ is_active: true }).orderBy(ordered),
+    db('hoops')
+      .select('slug', 'name', 'field_width_mm', 'field_height_mm', 'clearance_mm')
+      .where({ is_active: true })
+      .orderBy(ordered),
     db('shop_settings')
       .select('machine_stitches_per_minute', 'minutes_per_colour_change', 'minutes_per_hooping', 'setup_minutes')
       .where({ id: 1 })
@@ -168,6 +171,7 @@ export async function loadQuoteCatalogue(db: Db, query: QuoteCatalogueQuery): Pr
       name: h.name,
       fieldWidthMm: Number(h.field_width_mm),
       fieldHeightMm: Number(h.field_height_mm),
+      clearanceMm: Number(h.clearance_mm),
     })),
     machine: {
       stitchesPerMinute: shop.machine_stitches_per_minute,

@@ -6,10 +6,10 @@
 import type {
   FabricConstruction,
   GarmentSafetyFactsInput,
-  GlyphOutlineSource,
   MachineSettings,
   SvgArtworkFigures,
 } from '../../engine/index.ts';
+import type { LetteringFont } from '../../integrations/lettering-fonts.ts';
 
 export interface CatalogueGarment {
   id: number;
@@ -74,7 +74,8 @@ export interface CatalogueFont {
   /** Letter heights (capital H) the font sews cleanly at, mm. */
   minHeightMm: number;
   maxHeightMm: number;
-  outlines: GlyphOutlineSource;
+  /** Every subset the font ships, and which characters none of them draws. */
+  outlines: LetteringFont;
 }
 
 export interface CatalogueHoop {
@@ -83,6 +84,8 @@ export interface CatalogueHoop {
   /** The sewing field, mm. */
   fieldWidthMm: number;
   fieldHeightMm: number;
+  /** Kept free inside the field at every edge, mm. */
+  clearanceMm: number;
 }
 
 /** The shop's machine settings that `estimateRunMinutes` reads; the time per trim keeps the engine's default. */

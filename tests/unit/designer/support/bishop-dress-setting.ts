@@ -135,8 +135,20 @@ export const setting: DesignSetting = {
   }),
   // The demo studio's largest two hoops (seeds/data/hoops.ts).
   hoops: [
-    { slug: 'oblong-120x180', name: 'Oblong 120 × 180 mm (5 × 7 in)', fieldWidthMm: 120, fieldHeightMm: 180 },
-    { slug: 'large-200x300', name: 'Large 200 × 300 mm (8 × 12 in)', fieldWidthMm: 200, fieldHeightMm: 300 },
+    {
+      slug: 'oblong-120x180',
+      name: 'Oblong 120 × 180 mm (5 × 7 in)',
+      fieldWidthMm: 120,
+      fieldHeightMm: 180,
+      clearanceMm: 3,
+    },
+    {
+      slug: 'large-200x300',
+      name: 'Large 200 × 300 mm (8 × 12 in)',
+      fieldWidthMm: 200,
+      fieldHeightMm: 300,
+      clearanceMm: 3,
+    },
   ],
   // A drawing twice as wide as it is tall, and a square scan.
   artworks: [

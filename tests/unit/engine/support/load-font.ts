@@ -4,6 +4,7 @@ import {
   loadLetteringFont,
   parseOpentypeFont,
   readFontFile,
+  type LetteringFont,
   type LetteringFontFile,
 } from '../../../../server/src/integrations/lettering-fonts.ts';
 import type { GlyphOutlineSource } from '../../../../server/src/engine/index.ts';
@@ -27,7 +28,10 @@ export function loadFontkitOutlines(name: ShippedFont): GlyphOutlineSource {
   return fontkitOutlines(readFontFile(fileOf(name)));
 }
 
-/** The outline source the server uses for a shipped font: opentype.js where it can lay the font out, else fontkit. */
-export function loadShippedFont(name: ShippedFont): GlyphOutlineSource {
+/**
+ * The font the server uses for a shipped font: every subset file it ships, each laid out by opentype.js where it
+ * can, else fontkit.
+ */
+export function loadShippedFont(name: ShippedFont): LetteringFont {
   return loadLetteringFont(fileOf(name));
 }

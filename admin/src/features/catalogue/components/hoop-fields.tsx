@@ -28,6 +28,7 @@ export function HoopFields({
           <p className="text-xs text-walnut-500">
             {formatLength(hoop.fieldWidthMm)} × {formatLength(hoop.fieldHeightMm)}
           </p>
+          <p className="text-xs text-walnut-500">{hoop.clearanceMm} mm kept clear at each edge</p>
           {renderActions && <div className="mt-2 flex flex-wrap justify-center gap-2">{renderActions(hoop)}</div>}
         </li>
       ))}

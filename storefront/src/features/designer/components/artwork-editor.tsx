@@ -30,7 +30,7 @@ export function ArtworkEditor({
     range.limitedBy === 'zone' && zone
       ? `It can be no bigger than the space for it (“${zone.label}”).`
       : range.limitedBy === 'hoop' && hoop
-        ? `Any bigger would not fit our largest hoop's ${hoop.fieldWidthMm} × ${hoop.fieldHeightMm} mm sewing field (the area the machine reaches in one go).`
+        ? `Any bigger would not fit our largest hoop's ${hoop.fieldWidthMm} × ${hoop.fieldHeightMm} mm sewing field (the area the machine reaches in one go) with ${hoop.clearanceMm} mm kept clear at each edge.`
         : '';
   return (
     <div className="space-y-4">

@@ -44,7 +44,7 @@ export function MotifSizeField({
         {formatLength(widthMm)} wide, {formatLength(heightMm)} tall. A stitched design only resizes a little before it
         looks wrong, so this one goes from {minPct} % to {maxPct} %
         {isHoopLimited && hoop
-          ? `, the most that fits our largest hoop's ${hoop.fieldWidthMm} × ${hoop.fieldHeightMm} mm sewing field`
+          ? `, the most that fits our largest hoop's ${hoop.fieldWidthMm} × ${hoop.fieldHeightMm} mm sewing field with ${hoop.clearanceMm} mm kept clear at each edge`
           : ''}
         .
       </p>
