@@ -20,6 +20,7 @@ import { createAuthRouter } from './modules/people/auth-routes.ts';
 import { createMeRouter } from './modules/people/me-routes.ts';
 import { createAdminUsersRouter } from './modules/people/admin-routes.ts';
 import { createCatalogueService } from './modules/catalogue/catalogue-service.ts';
+import { createCatalogueVersionWatch } from './modules/catalogue/catalogue-version.ts';
 import { createCatalogueGarmentService } from './modules/catalogue/garment-service.ts';
 import { createCatalogueMotifService } from './modules/catalogue/motif-service.ts';
 import { createFontService } from './modules/catalogue/font-service.ts';
@@ -113,7 +114,10 @@ export function createApp(deps: AppDeps): Express {
   // One font loader, so each lettering font is parsed once for quotes, saved designs, proofs and production sheets.
   const fonts = createLetteringFontLoader();
   const artwork = createArtworkService({ db, now });
-  const quotes = createQuoteService({ db, fonts });
+  // One watch of the catalogue's change count for every in-memory copy of the catalogue this instance keeps.
+  const versions = createCatalogueVersionWatch(db);
+  const catalogue = createCatalogueService({ db, versions });
+  const quotes = createQuoteService({ db, fonts, versions });
   const storedQuotes = createStoredQuoteService({ db, quotes, now });
   const sharing = createDesignSharingService({ db });
   const money = { db, stripe, mailer, now, appOrigin };
@@ -146,7 +150,7 @@ export function createApp(deps: AppDeps): Express {
   app.get('/api/health', (_req, res) => res.json({ ok: true }));
   app.use('/api/auth', createAuthRouter({ signIn, log: deps.log, claimArtwork: artwork.claim }));
   app.use('/api/me', createMeRouter());
-  app.use('/api/catalogue', createCatalogueRouter({ catalogue: createCatalogueService({ db }) }));
+  app.use('/api/catalogue', createCatalogueRouter({ catalogue }));
   app.use('/api/quotes', createQuotesRouter({ quotes, storedQuotes }));
   app.use('/api/designs', createDesignsRouter({ designs: createDesignService({ db, quotes, now }), sharing }));
   app.use('/api/shared-designs', createSharedDesignsRouter({ sharing }));
@@ -164,7 +168,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(
     '/api/admin/catalogue',
     createAdminCatalogueRouter({
-      catalogue: createCatalogueService({ db }),
+      catalogue,
       garments: createCatalogueGarmentService({ db }),
       motifs: createCatalogueMotifService({ db }),
       fonts: createFontService({ db }),
