@@ -1,4 +1,4 @@
-import express, { type Express } from 'express';
+import express, { type Express, type Request } from 'express';
 import helmet from 'helmet';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
@@ -7,7 +7,7 @@ import type { AppConfig } from './config.ts';
 import type { Db } from './db/knex.ts';
 import type { Mailer } from './integrations/mailer.ts';
 import { requireRole } from './auth/roles.ts';
-import type { SessionLayer } from './auth/session.ts';
+import { sessionWhereNeeded, type SessionLayer } from './auth/session.ts';
 import { createLetteringFontLoader } from './integrations/lettering-fonts.ts';
 import { requestId } from './middleware/request-id.ts';
 import { accessLog } from './middleware/access-log.ts';
@@ -103,6 +103,21 @@ function mountSinglePageApp(app: Express, base: string, dir: string): void {
 }
 
 /**
+ * Routes (under /api) that read nothing but a signed-in user or a visitor's uploads from the session and never
+ * write it, so a visitor without a session cookie gets them without a session.
+ */
+function isSessionFree(req: Request): boolean {
+  if (req.method === 'GET' || req.method === 'HEAD')
+    return (
+      req.path === '/health' ||
+      req.path.startsWith('/catalogue/') ||
+      req.path.startsWith('/shared-designs/') ||
+      req.path === '/quotes/ready-dates'
+    );
+  return req.method === 'POST' && req.path === '/quotes/preview';
+}
+
+/**
  * Builds the Express app: middleware, one router per URL prefix, the two apps and the error handler. It does not
  * listen. This is the one place services are made and handed to the routers that answer for them.
  */
@@ -141,7 +156,7 @@ export function createApp(deps: AppDeps): Express {
 
   app.use('/api', requireSameOrigin(appOrigin));
   app.use('/api', express.json({ limit: '1mb' }));
-  app.use('/api', deps.sessions.middleware, signIn.session());
+  app.use('/api', sessionWhereNeeded(isSessionFree, [deps.sessions.middleware, signIn.session()]));
   app.use('/api', (_req, res, next) => {
     res.set('Cache-Control', 'no-store');
     next();

@@ -7,41 +7,21 @@ import request from 'supertest';
 import type { Express } from 'express';
 import { quotePreviewResponse } from '../../server/src/contracts/quotes.ts';
 import type { ShopSettings } from '../../server/src/contracts/admin-settings.ts';
-import { openDatabase, type Db } from '../../server/src/db/knex.ts';
-import { createApp } from '../../server/src/app.ts';
-import { createSessionLayer, type SessionLayer } from '../../server/src/auth/session.ts';
-import { createStripeClient } from '../../server/src/integrations/payment-gateway.ts';
-import { createMailer, type Mailer } from '../../server/src/integrations/mailer.ts';
 import { daisyDressQuote } from '../support/sample-designs.ts';
-import { fixedNow, useApiHarness, type ApiAgent } from '../support/api-harness.ts';
+import { startAnotherApp, useApiHarness, type ApiAgent } from '../support/api-harness.ts';
 
 const harness = useApiHarness();
 
 /** A second server over the same database, with its own pool, sessions and in-memory catalogue. */
-let other: { app: Express; db: Db; sessions: SessionLayer; mailer: Mailer };
+let other: { app: Express; close(): Promise<void> };
 let owner: ApiAgent;
 beforeAll(async () => {
-  const { config } = harness;
-  const db = openDatabase(config.database);
-  const sessions = await createSessionLayer(config);
-  const mailer = createMailer(config);
-  const app = createApp({
-    config,
-    db,
-    sessions,
-    stripe: createStripeClient(config),
-    mailer,
-    now: fixedNow,
-    log: () => {},
-  });
-  other = { app, db, sessions, mailer };
+  other = await startAnotherApp(harness.config);
   owner = harness.agent();
   await harness.signIn(owner, 'marigold@wrenandbobbin.test');
 });
 afterAll(async () => {
-  await other?.sessions.close();
-  other?.mailer.close();
-  await other?.db.destroy();
+  await other?.close();
 });
 
 const previewOn = (app: Express) =>

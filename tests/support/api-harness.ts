@@ -126,3 +126,33 @@ export function useApiHarness(options: { env?: NodeJS.ProcessEnv } = {}): Omit<A
     signIn: (client, email) => current().signIn(client, email),
   };
 }
+
+/**
+ * Another server instance over the same test database, with its own pool, sessions and in-memory catalogue, as a
+ * second process would be. `wrapSessions` lets a test watch the session layer it is given.
+ */
+export async function startAnotherApp(
+  config: AppConfig,
+  options: { wrapSessions?: (layer: SessionLayer) => SessionLayer } = {},
+): Promise<{ app: Express; close(): Promise<void> }> {
+  const db = openDatabase(config.database);
+  const sessions = await createSessionLayer(config);
+  const mailer = createMailer(config);
+  const app = createApp({
+    config,
+    db,
+    sessions: options.wrapSessions?.(sessions) ?? sessions,
+    stripe: createStripeClient(config),
+    mailer,
+    now: fixedNow,
+    log: () => {},
+  });
+  return {
+    app,
+    async close() {
+      await sessions.close();
+      mailer.close();
+      await db.destroy();
+    },
+  };
+}
