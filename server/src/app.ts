@@ -1,5 +1,7 @@
 import express, { type Express, type Request } from 'express';
 import helmet from 'helmet';
+import compression from 'compression';
+import expressStaticGzip from 'express-static-gzip';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type Stripe from 'stripe';
@@ -90,11 +92,34 @@ function securityHeaders(config: AppConfig) {
   });
 }
 
-/** Serves a built single-page app at `base`, falling back to its index.html for client-side routes. */
+/** Vite names the files under assets/ by their content's hash, so a browser may keep them for good. */
+const HASHED_ASSET_CACHE = 'public, max-age=31536000, immutable';
+const OTHER_FILE_CACHE = 'public, max-age=3600';
+/** JSON answers at least this long go out compressed to clients that accept it; shorter ones gain too little. */
+const COMPRESS_FROM_BYTES = 1024;
+
+/**
+ * Serves a built single-page app at `base`, falling back to its index.html (never kept without asking again) for
+ * client-side routes. Files go out as the build's brotli or gzip copy when the browser accepts one.
+ */
 function mountSinglePageApp(app: Express, base: string, dir: string): void {
   const index = join(dir, 'index.html');
   if (!existsSync(index)) return;
-  app.use(base, express.static(dir, { index: false, maxAge: '1h', immutable: false }));
+  const assets = join(dir, 'assets');
+  app.use(
+    base,
+    expressStaticGzip(dir, {
+      index: false,
+      enableBrotli: true,
+      orderPreference: ['br', 'gz'],
+      serveStatic: {
+        cacheControl: false,
+        setHeaders: (res, path) => {
+          res.setHeader('Cache-Control', path.startsWith(assets) ? HASHED_ASSET_CACHE : OTHER_FILE_CACHE);
+        },
+      },
+    }),
+  );
   const pattern = base === '/' ? '/{*splat}' : `${base}{/*splat}`;
   app.get(pattern, (_req, res) => {
     res.set('Cache-Control', 'no-cache');
@@ -139,6 +164,9 @@ export function createApp(deps: AppDeps): Express {
 
   const app = express();
   app.disable('x-powered-by');
+  // API answers are Cache-Control: no-store, so an ETag (a hash of every body) would never be used; the apps'
+  // files get theirs from the static file server.
+  app.disable('etag');
   if (config.isBehindProxy) app.set('trust proxy', 1);
   app.use(requestId);
   app.use('/api', accessLog(deps.log));
@@ -154,6 +182,7 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
+  app.use('/api', compression({ threshold: COMPRESS_FROM_BYTES }));
   app.use('/api', requireSameOrigin(appOrigin));
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api', sessionWhereNeeded(isSessionFree, [deps.sessions.middleware, signIn.session()]));
