@@ -160,15 +160,15 @@ function fullQuote(): number {
   return quote.totalCents;
 }
 
-/** A closed wavy outline of 5,000 cubic segments, about 120 mm across, filled and stroked. */
-function svgWith5000Segments(): string {
+/** A closed wavy outline of `count` cubic segments, about 120 mm across, filled and stroked. */
+function svgWithSegments(count: number): string {
   const segments: string[] = [];
   const point = (k: number) => {
-    const angle = (2 * Math.PI * k) / 5000;
+    const angle = (2 * Math.PI * k) / count;
     const radius = 50 + 8 * Math.sin(angle * 60);
     return [60 + radius * Math.cos(angle), 60 + radius * Math.sin(angle)];
   };
-  for (let k = 1; k <= 5000; k += 1) {
+  for (let k = 1; k <= count; k += 1) {
     const [x0, y0] = point(k - 1);
     const [x1, y1] = point(k);
     segments.push(
@@ -178,13 +178,14 @@ function svgWith5000Segments(): string {
   const [sx, sy] = point(0);
   return `<svg xmlns="http://www.w3.org/2000/svg" width="120mm" height="120mm" viewBox="0 0 120 120"><path d="M${sx} ${sy}${segments.join('')}Z" fill="#f4a6c0" stroke="#5b3a29" stroke-width="0.4"/></svg>`;
 }
-const svgText = svgWith5000Segments();
+const svgText = svgWithSegments(5000);
+const largeSvgText = svgWithSegments(50_000);
 
 /** Median nanoseconds per call: each sample repeats the call until it has run for at least 2 ms. */
-function medianNs(run: () => unknown): number {
-  for (let i = 0; i < 20; i += 1) run();
+function medianNs(run: () => unknown, samples = SAMPLES, warmUps = 20): number {
+  for (let i = 0; i < warmUps; i += 1) run();
   const perCall: number[] = [];
-  for (let s = 0; s < SAMPLES; s += 1) {
+  for (let s = 0; s < samples; s += 1) {
     let calls = 0;
     const start = process.hrtime.bigint();
     let elapsed = 0n;
@@ -206,10 +207,15 @@ const loadAverage = () =>
 const microseconds = (ns: number) => `${(ns / 1000).toFixed(1)} µs`;
 const baselineNs = medianNs(() => JSON.parse(JSON.stringify(payload)));
 const quoteNs = medianNs(fullQuote);
-const svgNs = medianNs(() => {
-  const estimate = estimateStitches({ kind: 'svg', svgText });
+const estimateSvg = (text: string) => () => {
+  const estimate = estimateStitches({ kind: 'svg', svgText: text });
   if (!estimate.ok) throw new Error(estimate.reason);
-});
+};
+const svgNs = medianNs(estimateSvg(svgText));
+// Each call takes about a second on a busy machine, so fewer samples.
+const largeSvgNs = medianNs(estimateSvg(largeSvgText), 7, 2);
+// Issue 13: ten times the segments may cost about ten times as much, no more (allowance for noise: 12 ×).
+const SVG_GROWTH_LIMIT = 12;
 let coldNames = 0;
 const coldLetteringNs = medianNs(() => {
   // A text never laid out before, so nothing kept is used.
@@ -232,4 +238,7 @@ console.log(
 );
 console.log(
   `SVG estimate, 5,000-segment path:              ${microseconds(svgNs)}  = ${(svgNs / baselineNs).toFixed(1)} × baseline`,
+);
+console.log(
+  `SVG estimate, 50,000-segment path:             ${microseconds(largeSvgNs)}  = ${(largeSvgNs / svgNs).toFixed(1)} × the 5,000-segment one (target ≤ 10 ×, pass ≤ ${SVG_GROWTH_LIMIT} ×) ${largeSvgNs / svgNs <= SVG_GROWTH_LIMIT ? 'PASS' : 'MISS'}`,
 );
