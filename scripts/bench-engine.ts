@@ -181,7 +181,7 @@ function svgWithSegments(count: number): string {
 const svgText = svgWithSegments(5000);
 const largeSvgText = svgWithSegments(50_000);
 
-/** Median nanoseconds per call: each sample repeats the call until it has run for at least 2 ms. */
+/** Median nanoseconds per call over `samples` samples: each repeats the call until it has run for at least 2 ms. */
 function medianNs(run: () => unknown, samples = SAMPLES, warmUps = 20): number {
   for (let i = 0; i < warmUps; i += 1) run();
   const perCall: number[] = [];
