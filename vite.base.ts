@@ -1,6 +1,7 @@
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { compression } from 'vite-plugin-compression2';
 import { fileURLToPath } from 'node:url';
 
 const here = (path: string) => fileURLToPath(new URL(path, import.meta.url));
@@ -11,7 +12,8 @@ export function appConfig(app: 'storefront' | 'admin', port: number) {
   return defineConfig({
     root: here(`./${app}`),
     base: app === 'admin' ? '/admin/' : '/',
-    plugins: [react(), tailwindcss()],
+    // Gzip and brotli copies of each text file beside it, which the server sends to browsers that accept them.
+    plugins: [react(), tailwindcss(), compression({ algorithms: ['gzip', 'brotliCompress'] })],
     resolve: {
       alias: {
         '@server': here('./server/src'),

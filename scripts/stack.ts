@@ -3,6 +3,7 @@
  * database migration and seeding, the fakes, the app build and the server process.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
+import { get } from 'node:http';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { join } from 'node:path';
 import { loadDatabaseConfig } from '../server/src/config.ts';
@@ -10,6 +11,7 @@ import { openDatabase } from '../server/src/db/knex.ts';
 import { startFakes } from '../fakes/index.ts';
 import { demoPeople } from '../seeds/data/people.ts';
 import { localDatabaseSettings, projectRoot } from './db-lifecycle.ts';
+import { BLOCKED_PORTS } from './blocked-ports.ts';
 
 export type StackProfile = 'demo' | 'test';
 
@@ -43,7 +45,9 @@ const testRateLimits: NodeJS.ProcessEnv = {
 
 /** Environment for the server in the local demo or test stack; values already set in the shell win. */
 export function localStack(profile: StackProfile): LocalStack {
-  const ports = offsetPorts(portsByProfile[profile], Number(process.env.HW_PORT_OFFSET ?? 0));
+  const offset = Number(process.env.HW_PORT_OFFSET ?? 0);
+  refuseBlockedPorts(offset);
+  const ports = offsetPorts(portsByProfile[profile], offset);
   const appPort = profile === 'demo' && process.env.PORT ? Number(process.env.PORT) : ports.app;
   const appOrigin = `http://127.0.0.1:${appPort}`;
   const db = localDatabaseSettings();
@@ -84,6 +88,31 @@ function offsetPorts(ports: Ports, offset: number): Ports {
   if (!Number.isInteger(offset) || offset < 0 || offset > 20_000)
     throw new Error('HW_PORT_OFFSET must be a whole number from 0 to 20000.');
   return Object.fromEntries(Object.entries(ports).map(([name, port]) => [name, port + offset])) as unknown as Ports;
+}
+
+/** Every port of both stacks at an offset (and the API benchmark's bare endpoint, 50 above the test app). */
+function stackPortsAt(offset: number): { name: string; port: number }[] {
+  return (Object.entries(portsByProfile) as [StackProfile, Ports][]).flatMap(([profile, ports]) => [
+    ...Object.entries(offsetPorts(ports, offset)).map(([name, port]) => ({
+      name: `the ${profile} stack's ${name}`,
+      port,
+    })),
+    ...(profile === 'test' ? [{ name: 'the API benchmark', port: ports.app + offset + 50 }] : []),
+  ]);
+}
+
+/**
+ * Stops before anything starts when a port of the stacks is one browsers and fetch refuse (6000 with
+ * HW_PORT_OFFSET=3000, say), naming the port and the next offset, in steps of 100, whose ports are all allowed.
+ */
+export function refuseBlockedPorts(offset: number): void {
+  const blocked = stackPortsAt(offset).find(({ port }) => BLOCKED_PORTS.has(port));
+  if (!blocked) return;
+  let free = offset - (offset % 100) + 100;
+  while (stackPortsAt(free).some(({ port }) => BLOCKED_PORTS.has(port))) free += 100;
+  throw new Error(
+    `Port ${blocked.port} (${blocked.name}, HW_PORT_OFFSET=${offset}) is on the browsers' and fetch's blocked-port list, so nothing could reach it. Use another offset, e.g. HW_PORT_OFFSET=${free}.`,
+  );
 }
 
 function pickDefined(env: NodeJS.ProcessEnv, keys: string[]): NodeJS.ProcessEnv {
@@ -149,27 +178,54 @@ export async function buildApps(): Promise<void> {
   }
 }
 
-/** Starts the API server as its own process and waits until it answers /api/health. */
-export async function startServerProcess(stack: LocalStack, options: { quiet?: boolean } = {}): Promise<ChildProcess> {
+/** Whether GET <origin>/api/health answers 200 (node:http, which unlike fetch has no port list of its own). */
+function answersHealth(origin: string): Promise<boolean> {
+  return new Promise((resolve) => {
+    const request = get(`${origin}/api/health`, { timeout: 2_000 }, (response) => {
+      response.resume();
+      resolve(response.statusCode === 200);
+    });
+    request.on('error', () => resolve(false));
+    request.on('timeout', () => {
+      request.destroy();
+      resolve(false);
+    });
+  });
+}
+
+/** Waits until a child process answers /api/health; stops the child and throws when it exits or takes over 30 s. */
+export async function waitForHealth(child: ChildProcess, origin: string, what: string): Promise<void> {
+  let exited = child.exitCode !== null;
+  child.once('exit', () => (exited = true));
+  const deadline = Date.now() + 30_000;
+  for (;;) {
+    if (exited) throw new Error(`${what} stopped while starting; see the messages above.`);
+    if (await answersHealth(origin)) return;
+    if (Date.now() > deadline) {
+      await stopProcess(child);
+      throw new Error(`${what} did not answer on ${origin} within 30 s.`);
+    }
+    await sleep(200);
+  }
+}
+
+/**
+ * Starts the API server as its own process and waits until it answers /api/health. `quiet` drops its standard
+ * output, `isSilent` its error output (the access log) too. `onSpawn` gets the process at once, so a caller
+ * stopping during the wait can stop it too.
+ */
+export async function startServerProcess(
+  stack: LocalStack,
+  options: { quiet?: boolean; isSilent?: boolean; onSpawn?: (child: ChildProcess) => void } = {},
+): Promise<ChildProcess> {
   const child = spawn(process.execPath, ['--import', 'tsx', join(projectRoot, 'server/src/main.ts')], {
     cwd: projectRoot,
     env: { ...process.env, ...stack.env },
-    stdio: options.quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
+    stdio: options.isSilent ? 'ignore' : options.quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
   });
-  let exited = false;
-  child.on('exit', () => (exited = true));
-  const deadline = Date.now() + 30_000;
-  for (;;) {
-    if (exited) throw new Error('The API server stopped while starting; see the messages above.');
-    try {
-      const response = await fetch(`${stack.appOrigin}/api/health`);
-      if (response.ok) return child;
-    } catch {
-      // not listening yet
-    }
-    if (Date.now() > deadline) throw new Error(`The API server did not answer on ${stack.appOrigin} within 30 s.`);
-    await sleep(200);
-  }
+  options.onSpawn?.(child);
+  await waitForHealth(child, stack.appOrigin, 'The API server');
+  return child;
 }
 
 /** Asks a child process to stop and waits for it (SIGKILL after a grace period). */

@@ -1,9 +1,11 @@
 /**
  * `npm start`: the demo shop on this machine. MariaDB (installed and started if needed), migrations, demo data on
  * first run, the local sign-in/payment/mail stand-ins, both apps built, and the API serving everything on one origin.
- * Ctrl-C stops it all, including the database this command started.
+ * Ctrl-C stops it all, including the database this command started; so does a failed start or a crash, whatever
+ * had started by then.
  */
 import type { ChildProcess } from 'node:child_process';
+import type { LocalStack } from './stack.ts';
 import { demoPeople } from '../seeds/data/people.ts';
 import { startLocalDatabase, stopLocalDatabase } from './db-lifecycle.ts';
 import { join } from 'node:path';
@@ -17,7 +19,13 @@ import {
   stopProcess,
 } from './stack.ts';
 
-const stack = localStack('demo');
+let stack: LocalStack;
+try {
+  stack = localStack('demo');
+} catch (error) {
+  console.error(`The demo shop could not start: ${(error as Error).message}`);
+  process.exit(1);
+}
 const usesOwnDatabase = !process.env.DATABASE_URL;
 let startedDatabase = false;
 let server: ChildProcess | undefined;
@@ -39,6 +47,13 @@ function stopAll(exitCode: number): Promise<never> {
 
 process.on('SIGINT', () => void stopAll(0));
 process.on('SIGTERM', () => void stopAll(0));
+process.on('SIGHUP', () => void stopAll(0));
+for (const event of ['uncaughtException', 'unhandledRejection'] as const) {
+  process.on(event, (error) => {
+    console.error(`\nThe demo shop stopped on an error: ${error instanceof Error ? error.message : String(error)}`);
+    void stopAll(1);
+  });
+}
 
 try {
   if (usesOwnDatabase) {
@@ -50,7 +65,7 @@ try {
   fakes = await startLocalFakes(stack, { stripeStateFile: join(demoStandInFolder, 'stripe.json') });
   console.log('Building the storefront and studio apps…');
   await buildApps();
-  server = await startServerProcess(stack);
+  server = await startServerProcess(stack, { onSpawn: (child) => (server = child) });
   server.on('exit', (code) => {
     if (!stopping) {
       console.error(`The API server stopped unexpectedly (exit ${code}).`);

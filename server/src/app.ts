@@ -4,9 +4,11 @@ import { SEND_MAIL_JOB, sendMailJobHandler } from './modules/mail/order-mail.ts'
 import { purgeExpiredSessions } from './modules/people/session-sweep-repo.ts';
 import { createHealthRouter } from './modules/health/routes.ts';
 import { createHealthService } from './modules/health/health-service.ts';
-import express, { type Express } from 'express';
+import express, { type Express, type Request } from 'express';
 import helmet from 'helmet';
 import cookieParser from 'cookie-parser';
+import compression from 'compression';
+import expressStaticGzip from 'express-static-gzip';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type Stripe from 'stripe';
@@ -15,7 +17,7 @@ import type { Db } from './db/knex.ts';
 import type { Mailer } from './integrations/mailer.ts';
 import type { HeavyWork } from './integrations/heavy-work.ts';
 import { requireRole } from './auth/roles.ts';
-import type { SessionLayer } from './auth/session.ts';
+import { sessionWhereNeeded, type SessionLayer } from './auth/session.ts';
 import { createLetteringFontLoader } from './integrations/lettering-fonts.ts';
 import { requestId } from './middleware/request-id.ts';
 import { accessLog } from './middleware/access-log.ts';
@@ -29,6 +31,7 @@ import { createAuthRouter } from './modules/people/auth-routes.ts';
 import { createMeRouter } from './modules/people/me-routes.ts';
 import { createAdminUsersRouter } from './modules/people/admin-routes.ts';
 import { createCatalogueService } from './modules/catalogue/catalogue-service.ts';
+import { createCatalogueVersionWatch } from './modules/catalogue/catalogue-version.ts';
 import { createCatalogueGarmentService } from './modules/catalogue/garment-service.ts';
 import { createCatalogueMotifService } from './modules/catalogue/motif-service.ts';
 import { createFontService } from './modules/catalogue/font-service.ts';
@@ -102,16 +105,54 @@ function securityHeaders(config: AppConfig) {
   });
 }
 
-/** Serves a built single-page app at `base`, falling back to its index.html for client-side routes. */
+/** Vite names the files under assets/ by their content's hash, so a browser may keep them for good. */
+const HASHED_ASSET_CACHE = 'public, max-age=31536000, immutable';
+const OTHER_FILE_CACHE = 'public, max-age=3600';
+/** JSON answers at least this long go out compressed to clients that accept it; shorter ones gain too little. */
+const COMPRESS_FROM_BYTES = 1024;
+
+/**
+ * Serves a built single-page app at `base`, falling back to its index.html (never kept without asking again) for
+ * client-side routes. Files go out as the build's brotli or gzip copy when the browser accepts one.
+ */
 function mountSinglePageApp(app: Express, base: string, dir: string): void {
   const index = join(dir, 'index.html');
   if (!existsSync(index)) return;
-  app.use(base, express.static(dir, { index: false, maxAge: '1h', immutable: false }));
+  const assets = join(dir, 'assets');
+  app.use(
+    base,
+    expressStaticGzip(dir, {
+      index: false,
+      enableBrotli: true,
+      orderPreference: ['br', 'gz'],
+      serveStatic: {
+        cacheControl: false,
+        setHeaders: (res, path) => {
+          res.setHeader('Cache-Control', path.startsWith(assets) ? HASHED_ASSET_CACHE : OTHER_FILE_CACHE);
+        },
+      },
+    }),
+  );
   const pattern = base === '/' ? '/{*splat}' : `${base}{/*splat}`;
   app.get(pattern, (_req, res) => {
     res.set('Cache-Control', 'no-cache');
     res.sendFile(index);
   });
+}
+
+/**
+ * Routes (under /api) that read nothing but a signed-in user or a visitor's uploads from the session and never
+ * write it, so a visitor without a session cookie gets them without a session.
+ */
+function isSessionFree(req: Request): boolean {
+  if (req.method === 'GET' || req.method === 'HEAD')
+    return (
+      req.path === '/health' ||
+      req.path.startsWith('/catalogue/') ||
+      req.path.startsWith('/shared-designs/') ||
+      req.path === '/quotes/ready-dates'
+    );
+  return req.method === 'POST' && req.path === '/quotes/preview';
 }
 
 /**
@@ -126,13 +167,19 @@ export function createApp(deps: AppDeps): Express {
   // One font loader, so each lettering font is parsed once for quotes, saved designs, proofs and production sheets.
   const fonts = createLetteringFontLoader();
   const artwork = createArtworkService({ db, now, heavyWork });
-  const quotes = createQuoteService({ db, fonts });
+  // One watch of the catalogue's change count for every in-memory copy of the catalogue this instance keeps.
+  const versions = createCatalogueVersionWatch(db);
+  const catalogue = createCatalogueService({ db, versions });
+  const quotes = createQuoteService({ db, fonts, versions });
   const storedQuotes = createStoredQuoteService({ db, quotes, now });
   const sharing = createDesignSharingService({ db });
   const money = { db, stripe, mailer, now, appOrigin };
 
   const app = express();
   app.disable('x-powered-by');
+  // API answers are Cache-Control: no-store, so an ETag (a hash of every body) would never be used; the apps'
+  // files get theirs from the static file server.
+  app.disable('etag');
   if (config.isBehindProxy) app.set('trust proxy', 1);
   app.use(requestId);
   app.use('/api', accessLog(deps.log));
@@ -148,6 +195,7 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
+  app.use('/api', compression({ threshold: COMPRESS_FROM_BYTES }));
   app.use('/api', requireSameOrigin(appOrigin));
   app.use('/api', express.json({ limit: '1mb' }));
   // Health checks come before the session layer: a proxy polling them needs no session.
@@ -155,7 +203,7 @@ export function createApp(deps: AppDeps): Express {
     '/api/health',
     createHealthRouter({ health: createHealthService({ db, isDraining: deps.isDraining ?? (() => false) }) }),
   );
-  app.use('/api', deps.sessions.middleware, signIn.session());
+  app.use('/api', sessionWhereNeeded(isSessionFree, [deps.sessions.middleware, signIn.session()]));
   app.use('/api', (_req, res, next) => {
     res.set('Cache-Control', 'no-store');
     next();
@@ -178,7 +226,7 @@ export function createApp(deps: AppDeps): Express {
     createAuthRouter({ signIn, log: deps.log, claimArtwork: artwork.claim }),
   );
   app.use('/api/me', createMeRouter());
-  app.use('/api/catalogue', createCatalogueRouter({ catalogue: createCatalogueService({ db }) }));
+  app.use('/api/catalogue', createCatalogueRouter({ catalogue }));
   app.use('/api/quotes', createQuotesRouter({ quotes, storedQuotes }));
   app.use('/api/designs', createDesignsRouter({ designs: createDesignService({ db, quotes, now }), sharing }));
   app.use('/api/shared-designs', createSharedDesignsRouter({ sharing }));
@@ -196,7 +244,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(
     '/api/admin/catalogue',
     createAdminCatalogueRouter({
-      catalogue: createCatalogueService({ db }),
+      catalogue,
       garments: createCatalogueGarmentService({ db, heavyWork }),
       motifs: createCatalogueMotifService({ db, heavyWork }),
       fonts: createFontService({ db }),

@@ -23,6 +23,14 @@ describe('GET /api/catalogue/garments', () => {
     }
   });
 
+  it('when a browser that accepts gzip asks, then the list comes compressed, and a short answer does not', async () => {
+    const res = await request(harness.app).get('/api/catalogue/garments').set('Accept-Encoding', 'gzip').expect(200);
+    expect(res.headers['content-encoding']).toBe('gzip');
+    expect(garmentListResponse.parse(res.body).garments.length).toBeGreaterThanOrEqual(4);
+    const health = await request(harness.app).get('/api/health').set('Accept-Encoding', 'gzip').expect(200);
+    expect(health.headers['content-encoding']).toBeUndefined();
+  });
+
   it('when a garment takes no hem border, then its hem lengths are null rather than zero', async () => {
     const { garments } = garmentListResponse.parse((await request(harness.app).get('/api/catalogue/garments')).body);
     const bib = garments.find((garment) => garment.kind === 'bib')!;

@@ -153,3 +153,36 @@ export function useApiHarness(options: HarnessOptions = {}): Omit<ApiHarness, 'c
     signIn: (client, email, returnTo) => current().signIn(client, email, returnTo),
   };
 }
+
+/**
+ * Another server instance over the same test database, with its own pool, sessions and in-memory catalogue, as a
+ * second process would be. `wrapSessions` lets a test watch the session layer it is given.
+ */
+export async function startAnotherApp(
+  config: AppConfig,
+  options: { wrapSessions?: (layer: SessionLayer) => SessionLayer } = {},
+): Promise<{ app: Express; close(): Promise<void> }> {
+  const db = openDatabase(config.database);
+  const sessions = await createSessionLayer(config);
+  const mailer = createMailer(config);
+  const heavyWork = createHeavyWork({ ...config.heavyWork, threads: 1 });
+  const app = createApp({
+    config,
+    db,
+    sessions: options.wrapSessions?.(sessions) ?? sessions,
+    stripe: createStripeClient(config),
+    mailer,
+    heavyWork,
+    now: fixedNow,
+    log: () => {},
+  });
+  return {
+    app,
+    async close() {
+      await sessions.close();
+      mailer.close();
+      await heavyWork.close();
+      await db.destroy();
+    },
+  };
+}

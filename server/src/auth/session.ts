@@ -1,6 +1,6 @@
 import session from 'express-session';
 import MySQLStoreFactory from 'express-mysql-session';
-import type { RequestHandler } from 'express';
+import { Router, type Request, type RequestHandler } from 'express';
 import type { AppConfig } from '../config.ts';
 
 export interface SessionLayer {
@@ -9,6 +9,9 @@ export interface SessionLayer {
 }
 
 const dayMs = 86_400_000;
+const SESSION_COOKIE = 'hw.sid';
+/** Whether a Cookie header carries the session cookie. */
+const sessionCookiePattern = /(?:^|;\s*)hw\.sid=/;
 
 /** How long a session lasts after its last request (the cookie rolls); the store expires rows after that. */
 export const SESSION_LIFETIME_MS = 14 * dayMs;
@@ -34,7 +37,7 @@ export async function createSessionLayer(config: AppConfig): Promise<SessionLaye
   } as never);
   await store.onReady();
   const middleware = session({
-    name: 'hw.sid',
+    name: SESSION_COOKIE,
     secret: config.sessionSecret,
     store,
     resave: false,
@@ -50,4 +53,17 @@ export async function createSessionLayer(config: AppConfig): Promise<SessionLaye
     },
   });
   return { middleware, close: () => store.close() };
+}
+
+/**
+ * Runs the session layers (the session, then passport's user) except for a visitor without a session cookie on a
+ * route that never writes the session: such a request has no session to read and leaves none behind, so it skips
+ * the session store and the work of making an empty session.
+ */
+export function sessionWhereNeeded(isSessionFree: (req: Request) => boolean, layers: RequestHandler[]): RequestHandler {
+  const withSession = Router().use(...layers);
+  return (req, res, next) => {
+    if (isSessionFree(req) && !sessionCookiePattern.test(req.headers.cookie ?? '')) return next();
+    return withSession(req, res, next);
+  };
 }

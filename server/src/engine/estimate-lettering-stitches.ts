@@ -1,3 +1,4 @@
+import { LRUCache } from 'lru-cache';
 import { fail, type EngineResult } from './engine-result.ts';
 import { isPositiveNumber, isRecord } from './input-checks.ts';
 import { formatNumber } from './wording.ts';
@@ -38,9 +39,41 @@ export const MAX_LETTERING_CHARACTERS = 200;
 const LETTERING_COLOR = 'lettering';
 
 /**
+ * Laid-out lettering kept per font and stitch settings, by letter height and text: the designer prices the same
+ * name again on every other change, and drawing and measuring the glyphs is most of a quote's time. The answer
+ * for the same font, settings, height and text never changes, so keeping it changes no result.
+ */
+const LAYOUTS_KEPT_PER_FONT = 500;
+const layouts = new WeakMap<
+  GlyphOutlineSource,
+  WeakMap<StitchSettings, LRUCache<string, EngineResult<StitchEstimate>>>
+>();
+/** Each font's capital-H height at font size 1, measured once. */
+const capHeights = new WeakMap<GlyphOutlineSource, number>();
+
+function keptLayoutsOf(font: GlyphOutlineSource, settings: StitchSettings) {
+  let bySettings = layouts.get(font);
+  if (!bySettings) layouts.set(font, (bySettings = new WeakMap()));
+  let kept = bySettings.get(settings);
+  if (!kept) bySettings.set(settings, (kept = new LRUCache({ max: LAYOUTS_KEPT_PER_FONT })));
+  return kept;
+}
+
+function capHeightOf(font: GlyphOutlineSource): number {
+  let capHeight = capHeights.get(font);
+  if (capHeight === undefined) {
+    const reference = extentOf(flattenOutline(font.getPaths(HEIGHT_REFERENCE_GLYPH, 0, 0, 1)[0]?.commands ?? [], 1e-4));
+    capHeight = reference ? reference.maxY - reference.minY : 0;
+    capHeights.set(font, capHeight);
+  }
+  return capHeight;
+}
+
+/**
  * Stitches for text in a font at a letter height (the height of a capital H), mm. Each glyph outline is
  * measured like filled artwork: a satin column when its strokes are narrower than the satin limit, otherwise a
- * fill. Reports the stitched width and height of the whole text.
+ * fill. Reports the stitched width and height of the whole text. The result is shared by later calls with the
+ * same arguments, so it is frozen.
  */
 export function estimateLetteringStitches(
   text: string,
@@ -53,9 +86,32 @@ export function estimateLetteringStitches(
     return fail(`Lettering is limited to ${MAX_LETTERING_CHARACTERS} characters.`);
   if (!isPositiveNumber(letterHeightMm)) return fail('The letter height must be a positive number of millimetres.');
   if (!isRecord(font) || typeof font.getPaths !== 'function') return fail('No font was given for the lettering.');
+  const kept = keptLayoutsOf(font, settings);
+  const key = `${letterHeightMm}|${text}`;
+  let estimate = kept.get(key);
+  if (!estimate) {
+    estimate = deepFreeze(layOutLettering(text, font, letterHeightMm, settings));
+    kept.set(key, estimate);
+  }
+  return estimate;
+}
+
+function deepFreeze<T>(value: T): T {
+  if (typeof value === 'object' && value !== null && !Object.isFrozen(value)) {
+    Object.freeze(value);
+    for (const inner of Object.values(value)) deepFreeze(inner);
+  }
+  return value;
+}
+
+function layOutLettering(
+  text: string,
+  font: GlyphOutlineSource,
+  letterHeightMm: number,
+  settings: StitchSettings,
+): EngineResult<StitchEstimate> {
   try {
-    const reference = extentOf(flattenOutline(font.getPaths(HEIGHT_REFERENCE_GLYPH, 0, 0, 1)[0]?.commands ?? [], 1e-4));
-    const capHeight = reference ? reference.maxY - reference.minY : 0;
+    const capHeight = capHeightOf(font);
     if (!(capHeight > 0))
       return fail(`This font has no capital ${HEIGHT_REFERENCE_GLYPH} to measure the letter height by.`);
     const fontSize = letterHeightMm / capHeight;

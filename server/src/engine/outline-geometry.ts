@@ -31,38 +31,44 @@ export interface Extent {
 const MAX_PIECES_PER_CURVE = 256;
 
 /**
- * Replaces curves by straight pieces no farther than `toleranceMm` from the curve. The piece count comes from the
- * standard bound for uniform subdivision: deviation ≤ (1/8)·max|B''|/n², with |B''| ≤ 6·(largest second
- * difference of the control points) for a cubic and 2·(second difference) for a quadratic.
+ * Takes outline commands one by one and replaces curves by straight pieces no farther than `toleranceMm` from the
+ * curve, writing straight into each subpath's point list, so a long path is flattened without a list of command
+ * objects in between. The piece count comes from the standard bound for uniform subdivision: deviation ≤
+ * (1/8)·max|B''|/n², with |B''| ≤ 6·(largest second difference of the control points) for a cubic and
+ * 2·(second difference) for a quadratic.
  */
-export function flattenOutline(commands: readonly OutlineCommand[], toleranceMm: number): Polyline[] {
+export function createOutlineFlattener(toleranceMm: number) {
   const polylines: Polyline[] = [];
-  let current: Polyline | undefined;
+  let current: number[] | undefined;
+  let currentPolyline: Polyline | undefined;
   let x = 0;
   let y = 0;
   let startX = 0;
   let startY = 0;
-  const begin = () => {
+  const begin = (): number[] => {
     if (!current) {
-      current = { points: [x, y], isClosed: false };
-      polylines.push(current);
+      current = [x, y];
+      currentPolyline = { points: current, isClosed: false };
+      polylines.push(currentPolyline);
     }
-    return current.points;
+    return current;
   };
-  for (const command of commands) {
-    if (command.type === 'M') {
+  return {
+    moveTo(toX: number, toY: number): void {
       current = undefined;
-      x = startX = command.x;
-      y = startY = command.y;
-    } else if (command.type === 'L') {
-      begin().push(command.x, command.y);
-      x = command.x;
-      y = command.y;
-    } else if (command.type === 'C') {
+      x = startX = toX;
+      y = startY = toY;
+    },
+    lineTo(toX: number, toY: number): void {
+      begin().push(toX, toY);
+      x = toX;
+      y = toY;
+    },
+    cubicTo(x1: number, y1: number, x2: number, y2: number, toX: number, toY: number): void {
       const points = begin();
       const bend = Math.max(
-        Math.hypot(x - 2 * command.x1 + command.x2, y - 2 * command.y1 + command.y2),
-        Math.hypot(command.x1 - 2 * command.x2 + command.x, command.y1 - 2 * command.y2 + command.y),
+        Math.hypot(x - 2 * x1 + x2, y - 2 * y1 + y2),
+        Math.hypot(x1 - 2 * x2 + toX, y1 - 2 * y2 + toY),
       );
       const pieces = pieceCount((0.75 * bend) / toleranceMm);
       for (let i = 1; i <= pieces; i += 1) {
@@ -72,36 +78,47 @@ export function flattenOutline(commands: readonly OutlineCommand[], toleranceMm:
         const b = 3 * u * u * t;
         const c = 3 * u * t * t;
         const d = t * t * t;
-        points.push(
-          a * x + b * command.x1 + c * command.x2 + d * command.x,
-          a * y + b * command.y1 + c * command.y2 + d * command.y,
-        );
+        points.push(a * x + b * x1 + c * x2 + d * toX, a * y + b * y1 + c * y2 + d * toY);
       }
-      x = command.x;
-      y = command.y;
-    } else if (command.type === 'Q') {
+      x = toX;
+      y = toY;
+    },
+    quadTo(x1: number, y1: number, toX: number, toY: number): void {
       const points = begin();
-      const pieces = pieceCount(
-        (0.25 * Math.hypot(x - 2 * command.x1 + command.x, y - 2 * command.y1 + command.y)) / toleranceMm,
-      );
+      const pieces = pieceCount((0.25 * Math.hypot(x - 2 * x1 + toX, y - 2 * y1 + toY)) / toleranceMm);
       for (let i = 1; i <= pieces; i += 1) {
         const t = i / pieces;
         const u = 1 - t;
-        points.push(
-          u * u * x + 2 * u * t * command.x1 + t * t * command.x,
-          u * u * y + 2 * u * t * command.y1 + t * t * command.y,
-        );
+        points.push(u * u * x + 2 * u * t * x1 + t * t * toX, u * u * y + 2 * u * t * y1 + t * t * toY);
       }
-      x = command.x;
-      y = command.y;
-    } else {
-      if (current) current.isClosed = true;
-      current = undefined;
+      x = toX;
+      y = toY;
+    },
+    close(): void {
+      if (currentPolyline) currentPolyline.isClosed = true;
+      current = currentPolyline = undefined;
       x = startX;
       y = startY;
-    }
+    },
+    /** The subpaths with at least one piece. */
+    finish(): Polyline[] {
+      return polylines.filter((polyline) => polyline.points.length >= 4);
+    },
+  };
+}
+
+/** Flattens a list of outline commands (see `createOutlineFlattener`). */
+export function flattenOutline(commands: readonly OutlineCommand[], toleranceMm: number): Polyline[] {
+  const flattener = createOutlineFlattener(toleranceMm);
+  for (const command of commands) {
+    if (command.type === 'M') flattener.moveTo(command.x, command.y);
+    else if (command.type === 'L') flattener.lineTo(command.x, command.y);
+    else if (command.type === 'C')
+      flattener.cubicTo(command.x1, command.y1, command.x2, command.y2, command.x, command.y);
+    else if (command.type === 'Q') flattener.quadTo(command.x1, command.y1, command.x, command.y);
+    else flattener.close();
   }
-  return polylines.filter((polyline) => polyline.points.length >= 4);
+  return flattener.finish();
 }
 
 function pieceCount(ratio: number): number {

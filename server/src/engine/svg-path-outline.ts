@@ -1,5 +1,5 @@
 import svgpath from 'svgpath';
-import { flattenOutline, type OutlineCommand, type Polyline } from './outline-geometry.ts';
+import { createOutlineFlattener, type Polyline } from './outline-geometry.ts';
 
 export interface MeasuredOutline {
   polylines: Polyline[];
@@ -22,7 +22,7 @@ export function measureSvgOutline(
   // svgpath keeps what it read before a syntax error (its `err`, missing from its typings), as SVG renderers
   // draw a path up to its first error.
   const hasSyntaxError = Boolean((parsed as unknown as { err?: string }).err);
-  const commands: OutlineCommand[] = [];
+  const flattener = createOutlineFlattener(toleranceMm);
   parsed
     .transform(transform)
     .scale(mmPerUnit)
@@ -31,23 +31,16 @@ export function measureSvgOutline(
     .unshort()
     .iterate((segment, _index, x, y) => {
       const [type] = segment;
-      if (type === 'M' || type === 'L') commands.push({ type, x: segment[1], y: segment[2] });
-      else if (type === 'H') commands.push({ type: 'L', x: segment[1], y });
-      else if (type === 'V') commands.push({ type: 'L', x, y: segment[1] });
-      else if (type === 'C')
-        commands.push({
-          type,
-          x1: segment[1],
-          y1: segment[2],
-          x2: segment[3],
-          y2: segment[4],
-          x: segment[5],
-          y: segment[6],
-        });
-      else if (type === 'Q') commands.push({ type, x1: segment[1], y1: segment[2], x: segment[3], y: segment[4] });
-      else if (type === 'Z' || type === 'z') commands.push({ type: 'Z' });
+      const values = segment as unknown as number[];
+      if (type === 'M') flattener.moveTo(values[1], values[2]);
+      else if (type === 'L') flattener.lineTo(values[1], values[2]);
+      else if (type === 'H') flattener.lineTo(values[1], y);
+      else if (type === 'V') flattener.lineTo(x, values[1]);
+      else if (type === 'C') flattener.cubicTo(values[1], values[2], values[3], values[4], values[5], values[6]);
+      else if (type === 'Q') flattener.quadTo(values[1], values[2], values[3], values[4]);
+      else if (type === 'Z' || type === 'z') flattener.close();
     });
-  const polylines = flattenOutline(commands, toleranceMm);
+  const polylines = flattener.finish();
   if (polylines.length === 0 || !polylines.every((polyline) => polyline.points.every(Number.isFinite)))
     return undefined;
   return { polylines, strokeScale: transformScale(transform), hasSyntaxError };

@@ -93,3 +93,27 @@ describe('estimateStitches: lettering', () => {
     expect(!estimate.ok && estimate.reason).toMatch(reason);
   });
 });
+
+describe('estimateStitches: lettering laid out once', () => {
+  it('when the same text, font and height are estimated again, then the kept answer comes back without drawing the glyphs again', () => {
+    const shipped = loadShippedFont('poppins');
+    const drawn: string[] = [];
+    const font: GlyphOutlineSource = {
+      getPaths(text, x, y, fontSize) {
+        drawn.push(text);
+        return shipped.getPaths(text, x, y, fontSize);
+      },
+    };
+    const name = { kind: 'lettering', text: 'Amelia', font, letterHeightMm: 20 } as const;
+    const first = estimateStitches(name);
+    const again = estimateStitches(name);
+    expect(again).toBe(first);
+    expect(Object.isFrozen(first)).toBe(true);
+    // The capital H once for the font's letter height, then the text once.
+    expect(drawn).toEqual(['H', 'Amelia']);
+
+    const taller = estimateStitches({ ...name, letterHeightMm: 30 });
+    expect(drawn).toEqual(['H', 'Amelia', 'Amelia']);
+    expect(taller.ok && first.ok && taller.heightMm).toBeCloseTo(first.ok ? first.heightMm * 1.5 : 0, 6);
+  });
+});

@@ -1,6 +1,8 @@
 import type { Db } from '../../db/knex.ts';
 import { artworkForQuote, type ArtworkOwner } from '../artwork/artwork-service.ts';
-import { loadQuoteCatalogue, type QuoteCatalogueRecord } from './quote-catalogue-repo.ts';
+import type { QuoteCatalogueRecord } from './quote-catalogue-repo.ts';
+import { createQuoteCatalogueSnapshot, quoteCatalogueFor as readQuoteCatalogue } from './quote-catalogue.ts';
+import type { CatalogueVersionWatch } from '../catalogue/catalogue-version.ts';
 import { priceQuote, type GuidanceMessage } from '../../engine/index.ts';
 import type { LetteringFontLoader } from '../../integrations/lettering-fonts.ts';
 import type { DesignDocument } from '../../contracts/designs.ts';
@@ -17,7 +19,8 @@ export interface PricedDesign {
 }
 
 /** Quotes priced by the server from the published price list; the client's own figures are never used. */
-export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader }) {
+export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader; versions?: CatalogueVersionWatch }) {
+  const catalogueFor = createQuoteCatalogueSnapshot(deps);
   /**
    * Prices a design for one garment size and quantity, with what storing the quote needs. Reads only. Artwork
    * uploads count only when `owner` may see them; anyone else's read as not available.
@@ -25,7 +28,7 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader })
   async function price(request: QuotePreviewRequest, owner?: ArtworkOwner): Promise<Result<PricedDesign>> {
     const { motifSlugs, fontSlugs, artworkIds } = namedIn(request.document);
     const [record, uploads] = await Promise.all([
-      loadQuoteCatalogue(deps.db, {
+      catalogueFor({
         garmentId: request.garmentId,
         sizeId: request.sizeId,
         colourId: request.colourId,
@@ -174,4 +177,4 @@ export function toQuoteCatalogue(
 }
 
 /** The catalogue rows one design is priced from, for whoever prices or makes it (quotes, production sheets). */
-export const quoteCatalogueFor = loadQuoteCatalogue;
+export const quoteCatalogueFor = readQuoteCatalogue;
