@@ -5,6 +5,8 @@ import type { Knex } from 'knex';
  * with the same ids, so anyone signed in stays signed in across a re-seed.
  */
 export const seededTables = [
+  'jobs',
+  'job_leases',
   'rate_limits',
   'email_log',
   'payments',

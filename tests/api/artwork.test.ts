@@ -243,7 +243,10 @@ describe('POST /api/quotes/preview with artwork', () => {
     // Issue 11: before, 20 → 28 mm went 172 → 525 stitches (204 → 417 between 22 and 24 mm) as the 26 px rays
     // turned from running stitch into satin. Stitches follow length or area when resized at the set density
     // (lindeegembroidery.com/scaling), so no step may exceed the area ratio, plus a few stitches of rounding.
-    expect(priced.map((p) => p.stitches)).toEqual([359, 410, 464, 519, 579]);
+    // 359, 410, 464, 519 and 579 measured afresh at each size; the stored figures (measured once, then scaled)
+    // flatten curves a hair differently, so a couple of stitches either way.
+    const expected = [359, 410, 464, 519, 579];
+    priced.forEach((p, i) => expect(Math.abs(p.stitches - expected[i]!)).toBeLessThanOrEqual(2));
     for (let i = 1; i < priced.length; i += 1) {
       const areaRatio = (priced[i].widthMm / priced[i - 1].widthMm) ** 2;
       expect(priced[i].stitches).toBeGreaterThanOrEqual(priced[i - 1].stitches);

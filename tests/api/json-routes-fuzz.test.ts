@@ -299,7 +299,7 @@ describe('values the database would round to nothing', () => {
       .post('/api/admin/catalogue/hoops')
       .send({ slug: 'tiny-hoop', name: 'Tiny', fieldWidthMm: 0.001, fieldHeightMm: 100 })
       .expect(400);
-    expect(hoop.body.error.fields).toEqual({ fieldWidthMm: 'The field width must be at least 0.01 mm' });
+    expect(hoop.body.error.fields).toMatchObject({ fieldWidthMm: 'The field width must be at least 0.01 mm' });
     const font = await owner
       .put('/api/admin/catalogue/fonts/1')
       .send({ name: 'Font', minHeightMm: 5e-324, maxHeightMm: 40 })

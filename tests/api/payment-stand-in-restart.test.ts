@@ -69,7 +69,7 @@ describe('the payment stand-in across restarts', () => {
     expect(intent?.status).toBe('requires_capture');
   });
 
-  it('when a provider hands out an id another order already has, then the customer gets a 409 sentence and the order can be paid again', async () => {
+  it('when a provider hands out an id another order already has, then the order is placed and its page offers to pay, with no 500', async () => {
     const agent = await signedInAgent(harness, 'priya@example.test');
     const taken = (await harness.db('payments').whereNotNull('checkout_session_id').first('checkout_session_id'))
       .checkout_session_id as string;
@@ -77,18 +77,22 @@ describe('the payment stand-in across restarts', () => {
     await standIn.close();
     standIn = await startStandIn({ mintId: (prefix) => (prefix === 'cs' ? taken : `${prefix}_repeated`) });
 
-    const clash = await orderDesignOne(agent, 409);
-    expect(errorOf(clash.body).message).toMatch(/payment service gave this payment a reference that another order/);
-    const order = await harness.db('orders').orderBy('id', 'desc').first('id', 'number', 'status');
+    const placed = checkoutStartedResponse.parse((await orderDesignOne(agent, 201)).body);
+    expect(placed.checkoutUrl).toBe(`${harness.config.appOrigin}/orders/${placed.number}`);
+    const order = await harness.db('orders').where({ number: placed.number }).first('id', 'status');
     expect(order.status).toBe('awaiting_payment');
     expect(await harness.db('payments').where({ order_id: order.id }).pluck('status')).toEqual(['failed']);
 
+    // Paying again from the order page while the provider still repeats itself: a sentence, not a 500.
+    const again = await agent.post(`/api/orders/${placed.number}/payment`).expect(409);
+    expect(errorOf(again.body).message).toMatch(/payment service gave this payment a reference that another order/);
+
     await standIn.close();
     standIn = await startStandIn();
-    const again = checkoutStartedResponse.parse(
-      (await agent.post(`/api/orders/${order.number}/payment`).expect(201)).body,
+    const retried = checkoutStartedResponse.parse(
+      (await agent.post(`/api/orders/${placed.number}/payment`).expect(201)).body,
     );
-    expect(await payWithTestCard(again.checkoutUrl!)).toBe(303);
+    expect(await payWithTestCard(retried.checkoutUrl!)).toBe(303);
   });
 
   it('when the studio charges a hold the provider has never heard of, then it answers 409 with a sentence, not 500', async () => {

@@ -1,6 +1,7 @@
 /**
  * Two API server processes on one database behind a round-robin proxy, with a job worker in each: one whole order
- * crosses both (sign in, upload, quote, order, pay, the webhook, proof, approval, charge) and nothing is done twice.
+ * crosses both (sign in, upload, quote, order, pay, the webhook, proof, approval, charge) and nothing is done twice;
+ * a studio edit reaches both servers' in-memory catalogues, and the abuse limits count across both.
  */
 import { once } from 'node:events';
 import { createServer, request as forward, type Server } from 'node:http';
@@ -14,6 +15,9 @@ import { checkoutStartedResponse, customerOrderResponse } from '../../server/src
 import { artworkListResponse, artworkUploadResponse } from '../../server/src/contracts/artwork.ts';
 import { localStack, startLocalFakes, startServerProcess, stopProcess } from '../../scripts/stack.ts';
 import { signInOverHttp } from '../support/api-calls.ts';
+import { daisyDressQuote } from '../support/sample-designs.ts';
+import { quotePreviewResponse } from '../../server/src/contracts/quotes.ts';
+import type { ShopSettings } from '../../server/src/contracts/admin-settings.ts';
 import { payWithTestCard, priyaShipTo, quoteSavedDesign } from '../support/priya-orders.ts';
 
 const testStack = localStack('test');
@@ -79,6 +83,8 @@ beforeAll(async () => {
       STRIPE_API_URL: fakes.urls.stripe,
       SMTP_URL: fakes.urls.smtp,
       WORKER_IN_PROCESS: 'true',
+      // Low enough for the test below to reach through both servers; the counts live in the shared database.
+      RATE_LIMIT_QUOTE_PREVIEWS: '6',
     };
     servers.push(
       await startServerProcess({ ...testStack, env, appOrigin: `http://127.0.0.1:${port}` }, { quiet: true }),
@@ -168,4 +174,30 @@ describe('two servers behind a proxy', () => {
     }
     expect([...hits.values()].every((count) => count > 5)).toBe(true);
   }, 120_000);
+
+  it('when the owner edits the shop through one server, then the next price check on either uses it, and the price-check limit counts across both', async () => {
+    const owner = agentFor();
+    await signInOverHttp(owner, fakes.urls.google, 'marigold@wrenandbobbin.test');
+    const visitor = () =>
+      request(proxyOrigin).post('/api/quotes/preview').set('Origin', proxyOrigin).send(daisyDressQuote);
+    const runMinutes = async () =>
+      quotePreviewResponse.parse((await visitor().expect(200)).body).runMinutes.totalMinutes;
+
+    // One price check through each server, so both hold the catalogue in memory before the edit.
+    const before = await runMinutes();
+    expect(await runMinutes()).toBe(before);
+    const { settings } = (await owner.get('/api/admin/settings').expect(200)).body as { settings: ShopSettings };
+    await owner
+      .put('/api/admin/settings')
+      .send({ ...settings, setupMinutes: settings.setupMinutes + 30 })
+      .expect(200);
+    for (let i = 0; i < 4; i += 1) expect(await runMinutes()).toBeCloseTo(before + 30, 6);
+
+    // Six price checks so far from this address, three on each server: the seventh is refused, whichever answers.
+    const refused = await visitor().expect(429);
+    expect(Number(refused.headers['retry-after'])).toBeGreaterThan(0);
+    expect(refused.body.error.message).toMatch(/price checks/);
+    await visitor().expect(429);
+    await owner.put('/api/admin/settings').send(settings).expect(200);
+  }, 60_000);
 });

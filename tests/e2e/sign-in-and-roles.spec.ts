@@ -26,6 +26,8 @@ test('when a customer signs in, then the shop greets them by name and the studio
 test('when the owner signs in to the studio app, then the home shows the orders, and the session survives a server restart', async ({
   page,
 }) => {
+  // Stopping and starting the API server (its pools, its worker and its threads) takes a while on a busy machine.
+  test.setTimeout(90_000);
   await page.goto('/admin/');
   await expect(page.getByRole('heading', { name: 'Studio sign-in' })).toBeVisible();
   await signInAs(page, 'Marigold Ashby', /sign in with google/i);

@@ -115,7 +115,7 @@ export function estimateSvgFigures(
     return fail('The artwork has no stored measurements; upload it again.');
   const mmPerUnit = resolveMmPerUnit(figures, size);
   if (typeof mmPerUnit !== 'number') return mmPerUnit;
-  const drawnMm = drawnMmPerUnit(figures);
+  const drawnMm = drawnMmPerUnit(figures, mmPerUnit);
   const parts: StitchedPart[] = [];
   let extent: Extent | undefined;
   for (const shape of figures.shapes) {
@@ -145,12 +145,13 @@ export function estimateSvgFigures(
 }
 
 /**
- * The artwork's own scale, mm per user unit: from its width and height in absolute units, as a browser sizes it;
- * a drawing that gives no size is taken at one CSS pixel per unit, the unit SVG user units default to.
+ * The artwork's own scale, mm per user unit: from its width and height in absolute units, as a browser sizes it.
+ * A drawing that gives no absolute size has no "as drawn" size to judge by, so its types are judged at the size
+ * it is stitched (`stitchedMmPerUnit`).
  */
-function drawnMmPerUnit(canvas: SvgCanvas): number {
+function drawnMmPerUnit(canvas: SvgCanvas, stitchedMmPerUnit: number): number {
   const own = resolveMmPerUnit(canvas, undefined);
-  return typeof own === 'number' ? own : MM_PER_CSS_PX;
+  return typeof own === 'number' ? own : stitchedMmPerUnit;
 }
 
 /** Millimetres per user unit for a canvas at a size, or why it cannot be worked out. */

@@ -193,7 +193,12 @@ describe('estimateStitches: SVG artwork', () => {
       }
       // The rays (26 px = 6.9 mm as drawn at 600 px = 158.75 mm) are satin at every size, never running stitch.
       expect(stitchesAt(sunshine, 20).byType.run).toBe(0);
-      expect([20, 24, 28].map((widthMm) => stitchesAt(sunshine, widthMm).stitches)).toEqual([359, 464, 579]);
+      // 359, 464 and 579 when measured at each size; measured once and scaled (as uploads are), curves flatten a
+      // hair differently, so allow a stitch either way.
+      const [at20, at24, at28] = [20, 24, 28].map((widthMm) => stitchesAt(sunshine, widthMm).stitches);
+      expect(Math.abs(at20! - 359)).toBeLessThanOrEqual(1);
+      expect(Math.abs(at24! - 464)).toBeLessThanOrEqual(1);
+      expect(Math.abs(at28! - 579)).toBeLessThanOrEqual(1);
     });
 
     it('when artwork is stitched at its own size, then the count is what it was before the rule (the type as drawn is the type as sewn)', () => {

@@ -47,25 +47,40 @@ export function sendMailJobHandler(deps: MailDeps): JobHandler {
   };
 }
 
+/** A message written to the outbox and its send-mail job, not yet tried. */
+export interface QueuedMail {
+  id: number;
+  jobId: number;
+}
+
 /**
  * Keeps one message in email_log, with its text, so the studio's outbox shows what a customer was told, and queues
- * the job that sends it (both in one transaction, or in `db` when that is the caller's). Unless `sendNow` is false
- * the first attempt is made at once; a failed one is retried by the worker and never undoes the order's move.
- * Returns the log row's id and whether it has gone.
+ * the job that sends it. Pass the transaction of the change the message tells of, so both are kept or neither;
+ * then, after the commit, `sendQueuedMail` makes the first attempt (the worker makes any later ones).
+ */
+export async function queueLoggedMail(db: Db, mail: LoggedMail, now: Date): Promise<QueuedMail> {
+  const { template, orderId, ...message } = mail;
+  const id = await insertQueuedMail(db, { ...message, template, orderId, html: message.html ?? null }, now);
+  const jobId = await enqueueJob(db, { kind: SEND_MAIL_JOB, payload: { mailId: id } }, now);
+  return { id, jobId };
+}
+
+/** The first attempt at a queued message, right after the change committed; a failure is left to the worker. */
+export async function sendQueuedMail(deps: MailDeps, queued: QueuedMail): Promise<{ id: number; sent: boolean }> {
+  const sent = await runJobNow({ ...deps, log: deps.log ?? (() => {}) }, queued.jobId, sendMailJobHandler(deps));
+  return { id: queued.id, sent };
+}
+
+/**
+ * `queueLoggedMail` in a transaction of its own, then the first attempt unless `sendNow` is false: for a message
+ * that follows no change of its own (a test's, or the studio sending one again).
  */
 export async function sendLoggedMail(
   deps: MailDeps,
   mail: LoggedMail,
   options: { sendNow?: boolean } = {},
 ): Promise<{ id: number; sent: boolean }> {
-  const { template, orderId, ...message } = mail;
-  const now = deps.now();
-  const { id, jobId } = await deps.db.transaction(async (trx) => {
-    const id = await insertQueuedMail(trx, { ...message, template, orderId, html: message.html ?? null }, now);
-    const jobId = await enqueueJob(trx, { kind: SEND_MAIL_JOB, payload: { mailId: id } }, now);
-    return { id, jobId };
-  });
-  if (options.sendNow === false) return { id, sent: false };
-  const sent = await runJobNow({ ...deps, log: deps.log ?? (() => {}) }, jobId, sendMailJobHandler(deps));
-  return { id, sent };
+  const queued = await deps.db.transaction((trx) => queueLoggedMail(trx, mail, deps.now()));
+  if (options.sendNow === false) return { id: queued.id, sent: false };
+  return sendQueuedMail(deps, queued);
 }

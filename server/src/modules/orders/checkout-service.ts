@@ -29,7 +29,7 @@ import { formatMoneyText } from '../mail/money-text.ts';
 import { orderPageUrl } from '../mail/mail-layout.ts';
 import { openCheckoutSession } from './checkout-session.ts';
 import { moveOrder } from './order-transitions.ts';
-import { sendLoggedMail } from '../mail/order-mail.ts';
+import { queueLoggedMail, sendQueuedMail } from '../mail/order-mail.ts';
 import { orderCancelledMail } from './customer-order-mail.ts';
 import { findStoredQuote, type StoredQuote, type StoredQuoteService } from '../quotes/stored-quote-service.ts';
 
@@ -273,6 +273,7 @@ export function createCheckoutService(deps: CheckoutDeps) {
     const order = await findCustomerOrder(db, customer.id, number);
     if (!order) return failure('not-found', `There is no order ${number}.`);
     const now = deps.now();
+    const shop = await shopScheduleOf(db);
     const moved = await db.transaction(async (trx) => {
       const move = await moveOrder(trx, {
         orderId: order.id,
@@ -296,18 +297,16 @@ export function createCheckoutService(deps: CheckoutDeps) {
         });
       }
       await syncOrderPaymentStatus(trx, order.id, now);
-      return ok({ wasHeld: held.length > 0 });
-    });
-    if (!moved.ok) return moved;
-    const shop = await shopScheduleOf(db);
-    await sendLoggedMail(
-      mailDeps,
-      orderCancelledMail(
+      // The customer's message is queued with the cancellation, in this transaction.
+      const mail = orderCancelledMail(
         { appOrigin: deps.appOrigin, shopName: shop.name, number, orderId: order.id },
         customer.email,
-        moved.value.wasHeld,
-      ),
-    );
+        held.length > 0,
+      );
+      return ok(await queueLoggedMail(trx, mail, now));
+    });
+    if (!moved.ok) return moved;
+    await sendQueuedMail(mailDeps, moved.value);
     return ok({ number });
   }
 

@@ -22,7 +22,7 @@ import { failure, ok, type Result } from '../../contracts/result.ts';
 import type { z } from 'zod';
 import { availableOrderActions } from './order-flow.ts';
 import { moveOrder } from './order-transitions.ts';
-import { sendLoggedMail } from '../mail/order-mail.ts';
+import { queueLoggedMail, sendQueuedMail, type QueuedMail } from '../mail/order-mail.ts';
 import { proofAnsweredStudioMail, proofApprovedMail } from './customer-order-mail.ts';
 import { customerTimeline } from './customer-order-wording.ts';
 import { isPaymentNeeded } from './checkout-service.ts';
@@ -145,7 +145,7 @@ export function createCustomerOrderService(deps: {
     const order = await findCustomerOrder(db, customer.id, number);
     if (!order) return noSuchOrder(number);
     const now = deps.now();
-    const done = await db.transaction(async (trx): Promise<Result<void>> => {
+    const done = await db.transaction(async (trx): Promise<Result<QueuedMail[]>> => {
       const latest = await lockLatestProof(trx, order.id);
       if (!latest || version > latest.version)
         return failure('not-found', `There is no proof ${version} for ${number}.`);
@@ -171,23 +171,26 @@ export function createCustomerOrderService(deps: {
         pins: answer.pins,
         at: now,
       });
-      return ok(undefined);
+      // The messages the answer sends are queued with it, in this transaction.
+      const shop = await shopScheduleOf(trx);
+      const context = { appOrigin: deps.appOrigin, shopName: shop.name, number, orderId: order.id };
+      const mails = [
+        ...(isApproved ? [proofApprovedMail(context, customer.email, version)] : []),
+        proofAnsweredStudioMail(context, shop.contactEmail, {
+          version,
+          isApproved,
+          comment: answer.comment ?? null,
+          pinCount: answer.pins.length,
+        }),
+      ];
+      const queued: QueuedMail[] = [];
+      for (const mail of mails) queued.push(await queueLoggedMail(trx, mail, now));
+      return ok(queued);
     });
     if (!done.ok) return done;
 
-    const shop = await shopScheduleOf(db);
-    const context = { appOrigin: deps.appOrigin, shopName: shop.name, number, orderId: order.id };
     const mailDeps = { db, mailer: deps.mailer, now: deps.now };
-    if (isApproved) await sendLoggedMail(mailDeps, proofApprovedMail(context, customer.email, version));
-    await sendLoggedMail(
-      mailDeps,
-      proofAnsweredStudioMail(context, shop.contactEmail, {
-        version,
-        isApproved,
-        comment: answer.comment ?? null,
-        pinCount: answer.pins.length,
-      }),
-    );
+    for (const mail of done.value) await sendQueuedMail(mailDeps, mail);
     return ok({ number, version });
   }
 

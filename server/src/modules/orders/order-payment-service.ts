@@ -20,7 +20,7 @@ import {
   updatePayment,
   type StudioOrder,
 } from './studio-order-repo.ts';
-import { sendLoggedMail, type LoggedMail } from '../mail/order-mail.ts';
+import { queueLoggedMail, sendQueuedMail, type QueuedMail } from '../mail/order-mail.ts';
 import { planOrderMove } from './order-flow.ts';
 import { moveOrder } from './order-transitions.ts';
 import { applyCapture } from './payment-capture.ts';
@@ -40,7 +40,8 @@ export interface StudioActor {
   role: 'staff' | 'owner';
 }
 
-type Outcome = { result: Result<OrderActionResponse>; mail?: LoggedMail };
+/** What a money move answers, and the message it queued in the same transaction, to try once it has committed. */
+type Outcome = { result: Result<OrderActionResponse>; mail?: QueuedMail };
 
 const isStripeError = (error: unknown): error is Stripe.errors.StripeError =>
   error instanceof Stripe.errors.StripeError;
@@ -58,7 +59,7 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
   const { db, stripe } = deps;
 
   async function finish(outcome: Outcome): Promise<Result<OrderActionResponse>> {
-    if (outcome.mail) await sendLoggedMail(deps, outcome.mail);
+    if (outcome.mail) await sendQueuedMail(deps, outcome.mail);
     return outcome.result;
   }
 
@@ -83,7 +84,7 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
         'conflict',
         'The hold on the customer’s card has run out, so nothing could be charged. We have e-mailed them a link to confirm their card again; charge the order once they have.',
       ),
-      mail: payAgainMail(order, deps.appOrigin),
+      mail: await queueLoggedMail(trx, payAgainMail(order, deps.appOrigin), now),
     };
   }
 
@@ -207,7 +208,11 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
       if (!moved.ok) throw new Error(`The order moved while it was locked: ${moved.error.message}`);
       return {
         result: ok(await readOrderStanding(trx, order.id)),
-        mail: orderCancelledMail(order, deps.appOrigin, request.reason, wasCardReleased),
+        mail: await queueLoggedMail(
+          trx,
+          orderCancelledMail(order, deps.appOrigin, request.reason, wasCardReleased),
+          now,
+        ),
       };
     });
     return finish(outcome);
@@ -277,7 +282,11 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
       }
       return {
         result: ok(await readOrderStanding(trx, order.id)),
-        mail: refundIssuedMail(order, deps.appOrigin, { amountCents, isFull, reason: request.reason }),
+        mail: await queueLoggedMail(
+          trx,
+          refundIssuedMail(order, deps.appOrigin, { amountCents, isFull, reason: request.reason }),
+          now,
+        ),
       };
     });
     return finish(outcome);

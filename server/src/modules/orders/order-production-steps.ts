@@ -4,7 +4,7 @@ import type { Mailer } from '../../integrations/mailer.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import type { OrderActionResponse, ShipOrderRequest } from '../../contracts/studio-orders.ts';
 import { findStudioOrder, readOrderStanding } from './studio-order-repo.ts';
-import { sendLoggedMail } from '../mail/order-mail.ts';
+import { queueLoggedMail, sendQueuedMail, type LoggedMail, type QueuedMail } from '../mail/order-mail.ts';
 import type { OrderAction } from './order-flow.ts';
 import { moveOrder } from './order-transitions.ts';
 import type { StudioActor } from './order-payment-service.ts';
@@ -16,11 +16,13 @@ export function createOrderProductionSteps(deps: { db: Db; mailer: Mailer; now: 
     action: Extract<OrderAction, 'mark_stitched' | 'ship'>,
     actor: StudioActor,
     payload?: object,
-  ) {
+    /** The message the step sends, queued in the step's own transaction. */
+    mailOf?: (order: NonNullable<Awaited<ReturnType<typeof findStudioOrder>>>) => LoggedMail,
+  ): Promise<{ result: Result<OrderActionResponse>; mail?: QueuedMail }> {
     return deps.db.transaction(async (trx) => {
       const order = await findStudioOrder(trx, number);
       if (!order)
-        return { order, result: failure('not-found', `There is no order ${number}.`) as Result<OrderActionResponse> };
+        return { result: failure('not-found', `There is no order ${number}.`) as Result<OrderActionResponse> };
       const moved = await moveOrder(trx, {
         orderId: order.id,
         action,
@@ -29,8 +31,9 @@ export function createOrderProductionSteps(deps: { db: Db; mailer: Mailer; now: 
         payload,
         now: deps.now(),
       });
-      if (!moved.ok) return { order, result: moved as Result<OrderActionResponse> };
-      return { order, result: ok(await readOrderStanding(trx, order.id)) };
+      if (!moved.ok) return { result: moved as Result<OrderActionResponse> };
+      const mail = mailOf && (await queueLoggedMail(trx, mailOf(order), deps.now()));
+      return { result: ok(await readOrderStanding(trx, order.id)), mail };
     });
   }
 
@@ -40,11 +43,14 @@ export function createOrderProductionSteps(deps: { db: Db; mailer: Mailer; now: 
     },
     async ship(number: string, request: ShipOrderRequest, actor: StudioActor): Promise<Result<OrderActionResponse>> {
       const trackingNumber = request.trackingNumber || undefined;
-      const { order, result } = await step(number, 'ship', actor, {
-        carrier: 'Parcel post',
-        trackingNumber: trackingNumber ?? null,
-      });
-      if (result.ok && order) await sendLoggedMail(deps, orderShippedMail(order, deps.appOrigin, trackingNumber));
+      const { result, mail } = await step(
+        number,
+        'ship',
+        actor,
+        { carrier: 'Parcel post', trackingNumber: trackingNumber ?? null },
+        (order) => orderShippedMail(order, deps.appOrigin, trackingNumber),
+      );
+      if (mail) await sendQueuedMail(deps, mail);
       return result;
     },
   };

@@ -17,7 +17,7 @@ import {
   type PaymentRecord,
 } from './order-repo.ts';
 import type { LoggedMail } from '../mail/order-mail.ts';
-import { sendLoggedMail } from '../mail/order-mail.ts';
+import { queueLoggedMail, sendQueuedMail } from '../mail/order-mail.ts';
 import { moveOrder } from './order-transitions.ts';
 import { applyCapture } from './payment-capture.ts';
 import { finalStatuses } from './order-flow.ts';
@@ -224,7 +224,9 @@ export function createPaymentWebhookService(deps: {
       formatMoneyText(intent.amount_capturable, order.currency),
       dueDate === null ? null : { date: dueDate, isAskedFor: neededBy !== null },
     );
-    return { after: () => sendLoggedMail({ db, mailer: deps.mailer, now: deps.now }, mail) };
+    // Queued with the order's move, in this transaction; the first attempt follows the commit.
+    const queued = await queueLoggedMail(trx, mail, now);
+    return { after: () => sendQueuedMail({ db, mailer: deps.mailer, now: deps.now }, queued) };
   }
 
   /** A declined card or an abandoned page: the attempt failed, the order keeps waiting for payment. */

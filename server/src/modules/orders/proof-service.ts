@@ -12,7 +12,7 @@ import { findStudioOrder } from './studio-order-repo.ts';
 import { loadProofScene } from './proof-scene-repo.ts';
 import { asBuffer, type HeavyWork } from '../../integrations/heavy-work.ts';
 import { cleanPhotoOffThread } from '../../integrations/inspect-upload-job.ts';
-import { sendLoggedMail } from '../mail/order-mail.ts';
+import { queueLoggedMail, sendQueuedMail, type QueuedMail } from '../mail/order-mail.ts';
 import { planOrderMove } from './order-flow.ts';
 import { moveOrder } from './order-transitions.ts';
 import type { StudioActor } from './order-payment-service.ts';
@@ -67,7 +67,7 @@ export function createProofService(deps: {
     const picture = await pictureFor(order.id, request, photo);
     if (!picture.ok) return picture;
 
-    const sent = await db.transaction(async (trx): Promise<Result<SentProofResponse>> => {
+    const sent = await db.transaction(async (trx): Promise<Result<{ sent: SentProofResponse; mail: QueuedMail }>> => {
       const now = deps.now();
       const version = await nextProofVersion(trx, order.id);
       const moved = await moveOrder(trx, {
@@ -87,19 +87,24 @@ export function createProofService(deps: {
         sentByUserId: actor.userId,
         at: now,
       });
+      const mail = await queueLoggedMail(
+        trx,
+        proofReadyMail(order, deps.appOrigin, { version, message: request.message }),
+        now,
+      );
       return ok({
-        version,
-        source: request.source,
-        status: moved.value.to,
-        imageUrl: proofImagePath(order.number, version),
+        sent: {
+          version,
+          source: request.source,
+          status: moved.value.to,
+          imageUrl: proofImagePath(order.number, version),
+        },
+        mail,
       });
     });
-    if (sent.ok)
-      await sendLoggedMail(
-        deps,
-        proofReadyMail(order, deps.appOrigin, { version: sent.value.version, message: request.message }),
-      );
-    return sent;
+    if (!sent.ok) return sent;
+    await sendQueuedMail(deps, sent.value.mail);
+    return ok(sent.value.sent);
   }
 
   /** The stored picture of one proof version; seeded history kept no pictures. */
