@@ -3,7 +3,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
 import { Button } from '@ui/components/button.tsx';
-import { ApiError } from '@ui/api-client.ts';
+import { showServerErrors } from '@ui/show-server-errors.ts';
 import { proofPreviewPath, sendProofRequest } from '@server/contracts/studio-orders.ts';
 import { useSendProof } from '../api/send-proof.ts';
 
@@ -70,16 +70,9 @@ export function SendProofForm({ number, versionCount }: { number: string; versio
   const file = watch('file');
   const fields = { message: formState.errors.message?.message, file: formState.errors.file?.message };
 
-  const showServerFields = (error: Error) => {
-    const serverFields = error instanceof ApiError ? (error.fields ?? {}) : {};
-    for (const name of serverFieldNames) {
-      const fieldMessage = serverFields[name];
-      if (fieldMessage) setError(name, { type: 'server', message: fieldMessage });
-    }
-  };
   const submit = handleSubmit((values) => {
     setProgress(0);
-    const onError = showServerFields;
+    const onError = (error: Error) => showServerErrors(error, setError, serverFieldNames);
     if (values.source === 'photo' && values.file)
       send.mutate({ source: 'photo', message: values.message, file: values.file }, { onError });
     else if (values.source === 'render') send.mutate({ source: 'render', message: values.message }, { onError });
