@@ -5,6 +5,7 @@ import tseslint from 'typescript-eslint';
 import boundaries from 'eslint-plugin-boundaries';
 import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
+import hoopwrightForms from './eslint-rules/form-needs-use-form.js';
 
 /** Shared server folders: every module may use them; they never use a module. */
 const sharedServer = ['engine', 'contracts', 'middleware', 'auth', 'integrations', 'db'];
@@ -61,8 +62,8 @@ export default tseslint.config(
   },
   {
     files: ['storefront/src/**/*.tsx', 'admin/src/**/*.tsx', 'ui/src/**/*.tsx'],
-    plugins: { 'react-hooks': reactHooks },
-    rules: { 'react-hooks/rules-of-hooks': 'error' },
+    plugins: { 'react-hooks': reactHooks, 'hoopwright-forms': hoopwrightForms },
+    rules: { 'react-hooks/rules-of-hooks': 'error', 'hoopwright-forms/form-needs-use-form': 'error' },
   },
   {
     files: ['server/src/**/*.ts', 'storefront/src/**/*.{ts,tsx}', 'admin/src/**/*.{ts,tsx}', 'ui/src/**/*.{ts,tsx}'],

@@ -50,6 +50,8 @@ const zoneCode = z.string().regex(/^[a-z][a-z0-9_]{0,39}$/, 'Choose a place on t
 /** A thread's code in the shop's palette, such as "WB-118". */
 const threadCode = z.string().regex(/^[A-Za-z0-9][A-Za-z0-9 ._-]{0,19}$/, 'Choose a thread from the palette');
 const threadCodes = z.array(threadCode).min(1, 'Choose at least one thread').max(20, 'Choose at most 20 threads');
+/** The design document's own field rules, for the apps' forms that build a placement. */
+export const designFieldRules = { catalogueSlug, zoneCode, threadCode } as const;
 /** A position on the garment mockup at this size, mm from its top left corner. */
 const mockupMm = z.number().min(0, 'Place it on the garment').max(2000, 'Place it on the garment');
 

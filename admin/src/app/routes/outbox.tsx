@@ -1,12 +1,23 @@
-import { useState } from 'react';
+import { useEffect } from 'react';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
 import { useParams, useSearchParams } from 'react-router-dom';
-import { mailStatus, type MailStatus } from '@server/contracts/admin-outbox.ts';
+import { mailStatus, outboxQuery, type MailStatus } from '@server/contracts/admin-outbox.ts';
 import { EmptyState, ErrorNotice, Loading } from '@ui/components/page-state.tsx';
 import { paths } from '../../config/paths.ts';
 import { useOutbox } from '../../features/outbox/api/get-outbox.ts';
 import { OutboxList } from '../../features/outbox/components/outbox-list.tsx';
 import { OutboxMessage } from '../../features/outbox/components/outbox-message.tsx';
 import { mailStatusLabel } from '../../features/outbox/components/mail-status-badge.tsx';
+
+/** The filter form's order box: empty for every order, else the contract's order number (upper-cased for it). */
+const outboxFilterFields = z.object({
+  order: z
+    .string()
+    .trim()
+    .pipe(z.union([z.literal(''), outboxQuery.shape.order.unwrap()])),
+});
 
 /** The outbox: the filters live in the address, so a filtered list can be bookmarked and opening a message keeps them. */
 export function OutboxPage() {
@@ -17,7 +28,11 @@ export function OutboxPage() {
   const order = search.get('order') ?? '';
   const statusParam = search.get('status');
   const status = mailStatus.safeParse(statusParam).success ? (statusParam as MailStatus) : undefined;
-  const [orderDraft, setOrderDraft] = useState(order);
+  const filterForm = useForm({ resolver: zodResolver(outboxFilterFields), defaultValues: { order } });
+  const orderError = filterForm.formState.errors.order?.message;
+  const { reset: resetFilterForm } = filterForm;
+  // The address is the filters' one source: going back or forward shows its order number in the box.
+  useEffect(() => resetFilterForm({ order }), [order, resetFilterForm]);
   const outbox = useOutbox({ page, order: order || undefined, status });
 
   const setFilter = (changes: Record<string, string | undefined>) => {
@@ -42,10 +57,8 @@ export function OutboxPage() {
         <section aria-label="Messages" className="min-w-0 rounded-card border border-linen-200 bg-white p-5">
           <form
             className="mb-3 flex flex-wrap items-end gap-3"
-            onSubmit={(event) => {
-              event.preventDefault();
-              setFilter({ order: orderDraft.trim().toUpperCase() || undefined });
-            }}
+            noValidate
+            onSubmit={filterForm.handleSubmit((fields) => setFilter({ order: fields.order || undefined }))}
           >
             <div className="grid gap-1">
               <label htmlFor="outbox-order" className="text-sm font-medium text-walnut-700">
@@ -53,11 +66,17 @@ export function OutboxPage() {
               </label>
               <input
                 id="outbox-order"
-                value={orderDraft}
-                onChange={(event) => setOrderDraft(event.target.value)}
                 placeholder="WB-1003"
+                aria-invalid={orderError ? true : undefined}
+                aria-describedby={orderError ? 'outbox-order-error' : undefined}
                 className="min-h-10 w-32 rounded-lg border border-linen-300 px-3"
+                {...filterForm.register('order')}
               />
+              {orderError && (
+                <p id="outbox-order-error" role="alert" className="text-sm text-madder-700">
+                  {orderError}
+                </p>
+              )}
             </div>
             <div className="grid gap-1">
               <label htmlFor="outbox-status" className="text-sm font-medium text-walnut-700">

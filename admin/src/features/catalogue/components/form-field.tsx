@@ -1,7 +1,7 @@
 import { useId, type ReactElement, type ReactNode } from 'react';
 import { cloneElement } from 'react';
-import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
-import { ApiError } from '@ui/api-client.ts';
+import type { FieldValues, UseFormSetError } from 'react-hook-form';
+import { showServerErrors } from '@ui/show-server-errors.ts';
 
 export const inputClassName =
   'min-h-10 w-full rounded-lg border border-linen-300 bg-white px-3 py-2 text-sm text-walnut-900 focus:border-madder-500 focus:outline-2 focus:outline-madder-500/30 aria-[invalid=true]:border-madder-600';
@@ -57,27 +57,6 @@ export const asNumber = (value: unknown) =>
 /** As asNumber, for lengths that may be left out on purpose: an empty box is null. */
 export const asNumberOrNull = (value: unknown) =>
   value === '' || value === null || value === undefined ? null : Number(value);
-
-/**
- * Puts the server's answer where it belongs: each field message beside its field (the server's dot paths are the
- * form's own field names), and anything else as the form's general error.
- */
-export function showServerErrors<T extends FieldValues>(
-  error: unknown,
-  setError: UseFormSetError<T>,
-  fieldNames: readonly string[],
-): void {
-  const fields = error instanceof ApiError ? (error.fields ?? {}) : {};
-  let isShownBesideAField = false;
-  for (const [path, message] of Object.entries(fields)) {
-    if (fieldNames.some((name) => path === name || path.startsWith(`${name}.`))) {
-      setError(path as Path<T>, { type: 'server', message });
-      isShownBesideAField = true;
-    }
-  }
-  const message = error instanceof Error ? error.message : 'Something went wrong. Please try again.';
-  if (!isShownBesideAField) setError('root.server' as Path<T>, { type: 'server', message });
-}
 
 /** The form's general error, announced when it appears. */
 export function FormError({ message }: { message?: string }) {

@@ -1,4 +1,3 @@
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import {
@@ -66,8 +65,7 @@ const fabricLabels: Record<(typeof fabricConstructions)[number], string> = {
 /** Adds a garment or edits one: what it is, who wears it, how its fabric behaves, and its flat drawing. */
 export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDone: () => void }) {
   const save = useSaveCatalogueRow('garments');
-  const [fileError, setFileError] = useState<string>();
-  const { register, formState, watch, setValue, setError, handleSubmit } = useForm({
+  const { register, formState, watch, setValue, setError, clearErrors, handleSubmit } = useForm({
     resolver: zodResolver(createGarmentRequest),
     defaultValues: garment
       ? {
@@ -121,9 +119,10 @@ export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDo
   );
 
   async function readDrawing(file: File | undefined) {
-    setFileError(undefined);
+    clearErrors('mockupSvg');
     if (!file) return;
-    if (file.size > 500_000) return setFileError('That drawing is over 500 kB; simplify it first.');
+    if (file.size > 500_000)
+      return setError('mockupSvg', { type: 'file', message: 'That drawing is over 500 kB; simplify it first.' });
     setValue('mockupSvg', await file.text(), { shouldValidate: true });
   }
 
@@ -256,7 +255,7 @@ export function GarmentForm({ garment, onDone }: { garment?: StudioGarment; onDo
       <div className="grid gap-3 sm:grid-cols-[1fr_10rem] sm:items-start">
         <Field
           label="Flat drawing (SVG, viewBox in mm)"
-          error={fileError ?? errors.mockupSvg?.message}
+          error={errors.mockupSvg?.message}
           hint="Drawn at the reference size; sizes scale it."
         >
           <input

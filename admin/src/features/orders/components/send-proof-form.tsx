@@ -1,11 +1,27 @@
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
 import { Button } from '@ui/components/button.tsx';
-import type { ApiError } from '@ui/api-client.ts';
-import { proofPreviewPath } from '@server/contracts/studio-orders.ts';
+import { showServerErrors } from '@ui/show-server-errors.ts';
+import { proofPreviewPath, sendProofRequest } from '@server/contracts/studio-orders.ts';
 import { useSendProof } from '../api/send-proof.ts';
 
 const defaultMessage =
   'Here is your proof, drawn to scale on the garment. Approve it to start stitching, or point at anything you would like changed.';
+
+/** The contract's request, with the photo a photo proof sends beside it. */
+const sendProofFields = z
+  .object({
+    source: z.enum(['render', 'photo']),
+    message: sendProofRequest.options[0].shape.message,
+    file: z.instanceof(File).nullable(),
+  })
+  .refine((fields) => fields.source === 'render' || fields.file !== null, {
+    path: ['file'],
+    message: 'choose a photo to send',
+  });
+const serverFieldNames = ['message', 'file'] as const;
 
 /** The drawing a render would send, drawn by the server on request; nothing is stored until it is sent. */
 function DrawingPreview({ number }: { number: string }) {
@@ -43,23 +59,29 @@ function DrawingPreview({ number }: { number: string }) {
 
 /** Sends the next proof version: the server's drawing of the design, or a photo of a test stitch-out. */
 export function SendProofForm({ number, versionCount }: { number: string; versionCount: number }) {
-  const [source, setSource] = useState<'render' | 'photo'>('render');
-  const [message, setMessage] = useState(defaultMessage);
-  const [file, setFile] = useState<File | null>(null);
   const [progress, setProgress] = useState(0);
   const send = useSendProof(number, setProgress);
-  const fields = (send.error as ApiError | null)?.fields ?? {};
+  const { register, watch, setValue, setError, formState, handleSubmit } = useForm({
+    resolver: zodResolver(sendProofFields),
+    defaultValues: { source: 'render' as 'render' | 'photo', message: defaultMessage, file: null as File | null },
+  });
+  const source = watch('source');
+  const message = watch('message');
+  const file = watch('file');
+  const fields = { message: formState.errors.message?.message, file: formState.errors.file?.message };
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
+  const submit = handleSubmit((values) => {
     setProgress(0);
-    if (source === 'photo' && file) send.mutate({ source, message, file });
-    else if (source === 'render') send.mutate({ source, message });
-  };
+    const onError = (error: Error) => showServerErrors(error, setError, serverFieldNames);
+    if (values.source === 'photo' && values.file)
+      send.mutate({ source: 'photo', message: values.message, file: values.file }, { onError });
+    else if (values.source === 'render') send.mutate({ source: 'render', message: values.message }, { onError });
+  });
 
   return (
     <form
       onSubmit={submit}
+      noValidate
       className="grid gap-3 rounded-lg border border-linen-200 p-3 text-sm"
       aria-label="Send a proof"
     >
@@ -67,12 +89,10 @@ export function SendProofForm({ number, versionCount }: { number: string; versio
       <fieldset className="flex flex-wrap gap-4">
         <legend className="sr-only">What to send</legend>
         <label className="flex items-center gap-2">
-          <input type="radio" name="source" checked={source === 'render'} onChange={() => setSource('render')} />{' '}
-          Drawing of the design on the garment
+          <input type="radio" value="render" {...register('source')} /> Drawing of the design on the garment
         </label>
         <label className="flex items-center gap-2">
-          <input type="radio" name="source" checked={source === 'photo'} onChange={() => setSource('photo')} /> Photo of
-          a test stitch-out
+          <input type="radio" value="photo" {...register('source')} /> Photo of a test stitch-out
         </label>
       </fieldset>
       {source === 'render' && <DrawingPreview number={number} />}
@@ -82,7 +102,9 @@ export function SendProofForm({ number, versionCount }: { number: string; versio
           <input
             type="file"
             accept="image/png,image/jpeg"
-            onChange={(event) => setFile(event.target.files?.[0] ?? null)}
+            onChange={(event) =>
+              setValue('file', event.target.files?.[0] ?? null, { shouldValidate: formState.isSubmitted })
+            }
             aria-invalid={Boolean(fields.file)}
           />
           {fields.file && <span className="text-madder-700">{fields.file}</span>}
@@ -91,12 +113,11 @@ export function SendProofForm({ number, versionCount }: { number: string; versio
       <label className="grid gap-1">
         <span className="font-medium">Note to the customer</span>
         <textarea
-          value={message}
-          onChange={(event) => setMessage(event.target.value)}
           rows={3}
           maxLength={2000}
           className="rounded-lg border border-linen-300 p-2"
           aria-invalid={Boolean(fields.message)}
+          {...register('message')}
         />
         {fields.message && <span className="text-madder-700">{fields.message}</span>}
       </label>

@@ -1,5 +1,13 @@
 import { useMemo, useState } from 'react';
-import type { RuleSetDetailResponse } from '@server/contracts/admin-pricing.ts';
+import { useForm, type FieldErrors, type FieldPath } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import {
+  pricingRules,
+  updateDraftRequest,
+  type RuleSetDetailResponse,
+  type UpdateDraftRequest,
+} from '@server/contracts/admin-pricing.ts';
 import { ApiError } from '@ui/api-client.ts';
 import { Button } from '@ui/components/button.tsx';
 import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
@@ -21,14 +29,43 @@ function fieldErrorsOf(error: unknown): Record<string, string> {
   );
 }
 
+/** The draft as the form holds it: the rules as typed (see RulesForm) and the notes, checked by the contract. */
+const ruleSetFields = z.object({
+  rules: z.custom<RulesForm>().transform(fromRulesForm).pipe(pricingRules),
+  notes: z
+    .string()
+    .transform((notes) => notes.trim() || null)
+    .pipe(updateDraftRequest.shape.notes),
+});
+type RuleSetFieldsInput = { rules: RulesForm; notes: string };
+
+/** The form's messages for the rules, keyed by their paths as RulesFields names them ("lettering.minimumCents"). */
+function messagesByPath(node: unknown, prefix = ''): Record<string, string> {
+  if (!node || typeof node !== 'object') return {};
+  const { message, type: _type, ref: _ref, types: _types, ...children } = node as Record<string, unknown>;
+  const own = typeof message === 'string' && prefix ? { [prefix]: message } : {};
+  return Object.entries(children).reduce<Record<string, string>>(
+    (messages, [key, child]) => ({ ...messages, ...messagesByPath(child, prefix ? `${prefix}.${key}` : key) }),
+    own,
+  );
+}
+
 /**
  * One price list: its rules in a form (editable while it is a draft and the owner is signed in), the three sample
  * quotes repriced as the rules change, and saving and publishing for the owner.
  */
 export function RuleSetEditor({ ruleSet, canEdit }: { ruleSet: RuleSet; canEdit: boolean }) {
   const isEditable = canEdit && ruleSet.status === 'draft';
-  const [form, setForm] = useState<RulesForm>(() => toRulesForm(ruleSet.rules));
-  const [notes, setNotes] = useState(ruleSet.notes ?? '');
+  const { register, watch, setValue, setError, formState, handleSubmit } = useForm<
+    RuleSetFieldsInput,
+    unknown,
+    UpdateDraftRequest
+  >({
+    resolver: zodResolver(ruleSetFields),
+    defaultValues: { rules: toRulesForm(ruleSet.rules), notes: ruleSet.notes ?? '' },
+  });
+  const form = watch('rules');
+  const notes = watch('notes');
   const [isConfirming, setIsConfirming] = useState(false);
   const save = useSaveDraft(ruleSet.id);
   const publish = usePublishRuleSet();
@@ -37,21 +74,33 @@ export function RuleSetEditor({ ruleSet, canEdit }: { ruleSet: RuleSet; canEdit:
   const settled = useDebouncedValue(rules, 350);
   const preview = usePricingPreview(isComplete(settled) ? settled : undefined);
   const isDirty = JSON.stringify(rules) !== JSON.stringify(ruleSet.rules) || (notes || null) !== ruleSet.notes;
-  const saveErrors = fieldErrorsOf(save.error);
-  const errors = { ...fieldErrorsOf(preview.error), ...saveErrors };
-  // The engine's own check names the whole price list ("rules"), not one input, so it is shown above the buttons.
-  const isFormLevelError = save.isError && (Object.keys(saveErrors).length === 0 || 'rules' in saveErrors);
+  const formErrors: FieldErrors<RuleSetFieldsInput> = formState.errors;
+  const previewErrors = fieldErrorsOf(preview.error);
+  const errors = { ...previewErrors, ...messagesByPath(formErrors.rules) };
+  const notesError = formErrors.notes?.message ?? previewErrors.notes;
 
-  const onSave = () => save.mutate({ rules, notes: notes.trim() || null });
+  // The engine's own check names the whole price list ("rules"), not one input, so it is shown above the buttons.
+  const showSaveErrors = (error: Error) => {
+    const serverFields = fieldErrorsOf(error);
+    const fields = Object.entries(serverFields).filter(([path]) => path !== 'rules');
+    for (const [path, message] of fields)
+      setError((path === 'notes' ? path : `rules.${path}`) as FieldPath<RuleSetFieldsInput>, {
+        type: 'server',
+        message,
+      });
+    if (!fields.length || 'rules' in serverFields) setError('root.server', { type: 'server', message: error.message });
+  };
+  const onSave = handleSubmit((draft) => save.mutate(draft, { onError: showSaveErrors }));
 
   return (
     <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_30rem]">
       <form
         className="grid min-w-0 gap-4"
         aria-label={`Price list version ${ruleSet.version}`}
+        noValidate
         onSubmit={(event) => {
-          event.preventDefault();
-          if (isEditable) onSave();
+          if (isEditable) void onSave(event);
+          else event.preventDefault();
         }}
       >
         {!isEditable && (
@@ -61,7 +110,12 @@ export function RuleSetEditor({ ruleSet, canEdit }: { ruleSet: RuleSet; canEdit:
               : `Version ${ruleSet.version} is ${ruleSet.status}, so it stays as it is: quotes priced with it keep these prices. Changes go in a new draft.`}
           </p>
         )}
-        <RulesFields form={form} onChange={setForm} errors={errors} isReadOnly={!isEditable} />
+        <RulesFields
+          form={form}
+          onChange={(next) => setValue('rules', next, { shouldValidate: formState.isSubmitted })}
+          errors={errors}
+          isReadOnly={!isEditable}
+        />
         <div className="grid gap-1">
           <label htmlFor="rule-set-notes" className="text-sm font-medium text-walnut-700">
             Notes for the studio
@@ -69,12 +123,11 @@ export function RuleSetEditor({ ruleSet, canEdit }: { ruleSet: RuleSet; canEdit:
           <textarea
             id="rule-set-notes"
             rows={2}
-            value={notes}
             readOnly={!isEditable}
-            onChange={(event) => setNotes(event.target.value)}
             className="rounded-lg border border-linen-300 p-2.5"
+            {...register('notes')}
           />
-          {errors.notes && <p className="text-sm text-madder-700">{errors.notes}</p>}
+          {notesError && <p className="text-sm text-madder-700">{notesError}</p>}
         </div>
         {isEditable && (
           <div className="sticky bottom-0 flex flex-wrap items-center gap-3 border-t border-linen-200 bg-white/95 py-3">
@@ -110,7 +163,7 @@ export function RuleSetEditor({ ruleSet, canEdit }: { ruleSet: RuleSet; canEdit:
             </span>
           </div>
         )}
-        {isFormLevelError && <ErrorNotice message={save.error!.message} />}
+        {formErrors.root?.server?.message && <ErrorNotice message={formErrors.root.server.message} />}
         {publish.isError && <ErrorNotice message={publish.error.message} />}
       </form>
       <section

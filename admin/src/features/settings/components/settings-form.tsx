@@ -1,5 +1,7 @@
-import { useState } from 'react';
-import type { ShopSettings } from '@server/contracts/admin-settings.ts';
+import { useForm, type FieldPath } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { shopSettings, type ShopSettings } from '@server/contracts/admin-settings.ts';
 import { ApiError } from '@ui/api-client.ts';
 import { Button } from '@ui/components/button.tsx';
 import { ErrorNotice } from '@ui/components/page-state.tsx';
@@ -66,6 +68,36 @@ const fields: { key: Field; label: string; suffix: string; step: string; hint: s
   },
 ];
 
+const toNumber = (text: string) => (text.trim() === '' ? Number.NaN : Number(text));
+const numberBox = <T extends z.ZodType<number, number>>(rule: T) => z.string().transform(toNumber).pipe(rule);
+/** The closed days as the box holds them: one a line (or split by spaces or commas). */
+const closedDaysOf = (text: string) =>
+  text
+    .split(/[\s,]+/)
+    .map((day) => day.trim())
+    .filter(Boolean);
+/** Every refusal of the closed days, one a line, shown together under the box as the server's are. */
+const joinedMessages = (messages: string[]) => [...new Set(messages)].join('\n');
+
+/** The contract's settings as the form's boxes hold them: numbers and the closed days as typed text. */
+const settingsFields = z.object({
+  machineStitchesPerMinute: numberBox(shopSettings.shape.machineStitchesPerMinute),
+  minutesPerHooping: numberBox(shopSettings.shape.minutesPerHooping),
+  minutesPerColourChange: numberBox(shopSettings.shape.minutesPerColourChange),
+  setupMinutes: numberBox(shopSettings.shape.setupMinutes),
+  leadTimeDays: numberBox(shopSettings.shape.leadTimeDays),
+  machineHoursPerWeek: numberBox(shopSettings.shape.machineHoursPerWeek),
+  timeZone: shopSettings.shape.timeZone,
+  closedWeekdays: shopSettings.shape.closedWeekdays,
+  holidays: z.string().transform((text, context) => {
+    const parsed = shopSettings.shape.holidays.safeParse(closedDaysOf(text));
+    if (parsed.success) return parsed.data;
+    context.addIssue({ code: 'custom', message: joinedMessages(parsed.error.issues.map((issue) => issue.message)) });
+    return z.NEVER;
+  }),
+});
+type SettingsFieldsInput = z.input<typeof settingsFields>;
+
 /**
  * The shop's pace, capacity and days; every quote's run time is worked out from the first four, and every due and
  * ready date from the lead time, the time zone and the closed days.
@@ -79,31 +111,43 @@ export function SettingsForm({
   canEdit: boolean;
   onSaved: () => void;
 }) {
-  const [values, setValues] = useState<Record<Field, string>>(
-    () => Object.fromEntries(fields.map(({ key }) => [key, String(settings[key])])) as Record<Field, string>,
-  );
-  const [timeZone, setTimeZone] = useState(settings.timeZone);
-  const [closedWeekdays, setClosedWeekdays] = useState<number[]>(settings.closedWeekdays);
-  const [holidays, setHolidays] = useState(settings.holidays.join('\n'));
   const update = useUpdateSettings();
-  const errors = update.error instanceof ApiError ? (update.error.fields ?? {}) : {};
-  const toNumber = (text: string) => (text.trim() === '' ? Number.NaN : Number(text));
+  const { register, watch, setValue, setError, formState, handleSubmit } = useForm<
+    SettingsFieldsInput,
+    unknown,
+    ShopSettings
+  >({
+    resolver: zodResolver(settingsFields),
+    defaultValues: {
+      ...(Object.fromEntries(fields.map(({ key }) => [key, String(settings[key])])) as Record<Field, string>),
+      timeZone: settings.timeZone,
+      closedWeekdays: settings.closedWeekdays,
+      holidays: settings.holidays.join('\n'),
+    },
+  });
+  const errors = formState.errors;
+  const closedWeekdays = watch('closedWeekdays');
+  const holidayMessages = errors.holidays?.message?.split('\n') ?? [];
+  const setField = <K extends keyof SettingsFieldsInput>(key: K, value: SettingsFieldsInput[K]) =>
+    setValue(key as FieldPath<SettingsFieldsInput>, value, { shouldValidate: formState.isSubmitted });
+
+  /** The server's field messages beside their fields (every closed day's under the box), else one notice. */
+  const showServerErrors = (error: Error) => {
+    const serverFields = error instanceof ApiError ? Object.entries(error.fields ?? {}) : [];
+    const holidayRefusals = serverFields.filter(([key]) => key.startsWith('holidays')).map(([, message]) => message);
+    if (holidayRefusals.length) setError('holidays', { type: 'server', message: joinedMessages(holidayRefusals) });
+    for (const [key, message] of serverFields)
+      if (key in settingsFields.shape && key !== 'holidays')
+        setError(key as keyof SettingsFieldsInput, { type: 'server', message });
+    if (!serverFields.length) setError('root.server', { type: 'server', message: error.message });
+  };
 
   return (
     <form
       className="grid gap-5"
       aria-label="Shop settings"
-      onSubmit={(event) => {
-        event.preventDefault();
-        const numbers = Object.fromEntries(fields.map(({ key }) => [key, toNumber(values[key])]));
-        const closedDays = holidays
-          .split(/[\s,]+/)
-          .map((day) => day.trim())
-          .filter(Boolean);
-        update.mutate({ ...numbers, timeZone, closedWeekdays, holidays: closedDays } as ShopSettings, {
-          onSuccess: onSaved,
-        });
-      }}
+      noValidate
+      onSubmit={handleSubmit((values) => update.mutate(values, { onSuccess: onSaved, onError: showServerErrors }))}
     >
       {!canEdit && (
         <p className="rounded-xl bg-linen-100 p-3 text-sm text-walnut-700">Only the studio owner can change these.</p>
@@ -116,10 +160,10 @@ export function SettingsForm({
             suffix={suffix}
             step={step}
             hint={hint}
-            value={values[key]}
-            error={errors[key]}
+            value={watch(key)}
+            error={errors[key]?.message}
             isReadOnly={!canEdit}
-            onChange={(value) => setValues({ ...values, [key]: value })}
+            onChange={(value) => setField(key, value)}
           />
         ))}
       </div>
@@ -129,15 +173,14 @@ export function SettingsForm({
           Time zone
           <input
             className={inputClassName}
-            value={timeZone}
             readOnly={!canEdit}
             aria-invalid={errors.timeZone ? true : undefined}
-            onChange={(event) => setTimeZone(event.target.value)}
+            {...register('timeZone')}
           />
           <span className="mt-1 text-xs font-normal text-walnut-500">
             Where the shop is, like America/Chicago: “today” and “overdue” follow its clock.
           </span>
-          {errors.timeZone && <span className="text-sm font-normal text-madder-700">{errors.timeZone}</span>}
+          {errors.timeZone && <span className="text-sm font-normal text-madder-700">{errors.timeZone.message}</span>}
         </label>
         <fieldset className="grid gap-1">
           <legend className="text-sm font-medium">Closed every week on</legend>
@@ -150,7 +193,8 @@ export function SettingsForm({
                   checked={closedWeekdays.includes(day)}
                   disabled={!canEdit}
                   onChange={(event) =>
-                    setClosedWeekdays(
+                    setField(
+                      'closedWeekdays',
                       event.target.checked
                         ? [...closedWeekdays, day]
                         : closedWeekdays.filter((closed) => closed !== day),
@@ -161,29 +205,26 @@ export function SettingsForm({
               </label>
             ))}
           </div>
-          {errors.closedWeekdays && <span className="text-sm text-madder-700">{errors.closedWeekdays}</span>}
+          {errors.closedWeekdays && <span className="text-sm text-madder-700">{errors.closedWeekdays.message}</span>}
         </fieldset>
         <label className="grid text-sm font-medium sm:col-span-2">
           Holidays and other closed days
           <textarea
             rows={3}
             className={`${inputClassName} py-2`}
-            value={holidays}
             readOnly={!canEdit}
-            aria-invalid={Object.keys(errors).some((key) => key.startsWith('holidays')) ? true : undefined}
+            aria-invalid={holidayMessages.length ? true : undefined}
             placeholder="2026-12-25"
-            onChange={(event) => setHolidays(event.target.value)}
+            {...register('holidays')}
           />
           <span className="mt-1 text-xs font-normal text-walnut-500">
             One day a line, as YYYY-MM-DD. Lead times and ready dates step over these and the closed days above.
           </span>
-          {Object.entries(errors)
-            .filter(([key]) => key.startsWith('holidays'))
-            .map(([key, message]) => (
-              <span key={key} className="text-sm font-normal text-madder-700">
-                {message}
-              </span>
-            ))}
+          {holidayMessages.map((message) => (
+            <span key={message} className="text-sm font-normal text-madder-700">
+              {message}
+            </span>
+          ))}
         </label>
       </fieldset>
       {canEdit && (
@@ -196,7 +237,7 @@ export function SettingsForm({
           </span>
         </div>
       )}
-      {update.isError && !Object.keys(errors).length && <ErrorNotice message={update.error.message} />}
+      {errors.root?.server?.message && <ErrorNotice message={errors.root.server.message} />}
     </form>
   );
 }

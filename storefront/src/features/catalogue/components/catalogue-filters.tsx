@@ -23,6 +23,7 @@ export function CatalogueFilters({
   const garmentId = useId();
   const kindName = useId();
   return (
+    // eslint-disable-next-line hoopwright-forms/form-needs-use-form -- no fields of its own: each choice is the address's
     <form
       role="search"
       aria-label="Filter the embroidery"

@@ -1,4 +1,8 @@
-import { useId, useState, type DragEvent, type FormEvent } from 'react';
+import { useId, useState, type DragEvent } from 'react';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { designFieldRules } from '@server/contracts/designs.ts';
 import { Button } from '@ui/components/button.tsx';
 import { useArtworks } from '../api/get-artworks.ts';
 import { useUploadArtwork } from '../api/upload-artwork.ts';
@@ -9,6 +13,12 @@ import { ZoneChoice } from './zone-choice.tsx';
 
 /** What the file picker offers; the server decides by the bytes whatever the name says. */
 const ACCEPTED = '.svg,.png,.jpg,.jpeg,image/svg+xml,image/png,image/jpeg';
+
+/** The picture to put on the garment (none chosen means the newest) and its place. */
+const addArtworkFields = z.object({
+  artworkUploadId: z.number().int().positive().optional(),
+  zone: designFieldRules.zoneCode,
+});
 
 /**
  * Uploading the customer's own picture (a child's drawing is a favourite): chosen or dropped, sent with a progress
@@ -25,11 +35,15 @@ export function AddArtworkForm({
 }) {
   const inputId = useId();
   const size = sizeOf(setting, state.sizeId);
-  const [zone, setZone] = useState(() => defaultItemZone(size)?.code ?? '');
+  const { watch, setValue, handleSubmit } = useForm({
+    resolver: zodResolver(addArtworkFields),
+    defaultValues: { artworkUploadId: undefined as number | undefined, zone: defaultItemZone(size)?.code ?? '' },
+  });
+  const zone = watch('zone');
+  const chosenId = watch('artworkUploadId');
   const [progress, setProgress] = useState(0);
   const [sending, setSending] = useState<string>();
   const [isOver, setIsOver] = useState(false);
-  const [chosenId, setChosenId] = useState<number>();
   const uploads = useArtworks();
   const upload = useUploadArtwork(setProgress);
   const artworks = setting.artworks;
@@ -39,21 +53,23 @@ export function AddArtworkForm({
     if (!file || upload.isPending) return;
     setProgress(0);
     setSending(file.name);
-    upload.mutate(file, { onSuccess: (artwork) => setChosenId(artwork.id), onSettled: () => setSending(undefined) });
+    upload.mutate(file, {
+      onSuccess: (artwork) => setValue('artworkUploadId', artwork.id),
+      onSettled: () => setSending(undefined),
+    });
   };
   const drop = (event: DragEvent) => {
     event.preventDefault();
     setIsOver(false);
     send(event.dataTransfer.files[0]);
   };
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    if (chosen) dispatch('add-artwork', { artworkUploadId: chosen.id, zone });
-  };
+  const submit = handleSubmit((fields) => {
+    if (chosen) dispatch('add-artwork', { artworkUploadId: chosen.id, zone: fields.zone });
+  });
   const problem = upload.isError ? upload.error.message : undefined;
 
   return (
-    <form onSubmit={submit} className="space-y-4">
+    <form onSubmit={submit} noValidate className="space-y-4">
       <div
         onDragOver={(event) => {
           event.preventDefault();
@@ -121,7 +137,7 @@ export function AddArtworkForm({
                   name="artwork-choice"
                   value={artwork.id}
                   checked={artwork.id === chosen?.id}
-                  onChange={() => setChosenId(artwork.id)}
+                  onChange={() => setValue('artworkUploadId', artwork.id)}
                   className="peer sr-only"
                   aria-label={artwork.originalName}
                 />
@@ -134,7 +150,7 @@ export function AddArtworkForm({
           </div>
         </fieldset>
       )}
-      <ZoneChoice zones={size.zones} value={zone} onChange={setZone} />
+      <ZoneChoice zones={size.zones} value={zone} onChange={(code) => setValue('zone', code)} />
       <Button type="submit" disabled={!chosen || !hasRoomForPlacement(state)}>
         {commandOf('add-artwork').label}
       </Button>

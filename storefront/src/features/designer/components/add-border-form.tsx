@@ -1,5 +1,7 @@
-import { useState, type FormEvent } from 'react';
-import type { BorderPlacement } from '@server/contracts/designs.ts';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { designFieldRules, type BorderPlacement } from '@server/contracts/designs.ts';
 import { Button } from '@ui/components/button.tsx';
 import { EmptyState } from '@ui/components/page-state.tsx';
 import { commandOf } from '../commands/command-registry.ts';
@@ -11,6 +13,12 @@ import { borderFitWords } from './border-fit-summary.tsx';
 import { MotifChoice } from './motif-choice.tsx';
 import { RunChoice } from './run-choice.tsx';
 
+/** A border to add: the design document's rules for its motif and its run along the hem. */
+const addBorderFields = z.object({
+  motif: designFieldRules.catalogueSlug,
+  run: z.enum(['front', 'circumference']),
+});
+
 export function AddBorderForm({
   setting,
   state,
@@ -21,8 +29,12 @@ export function AddBorderForm({
   dispatch: Dispatch;
 }) {
   const borders = setting.motifs.filter((motif) => motif.kind === 'border');
-  const [motif, setMotif] = useState(borders[0]?.slug ?? '');
-  const [run, setRun] = useState<BorderPlacement['run']>('circumference');
+  const { watch, setValue, handleSubmit } = useForm({
+    resolver: zodResolver(addBorderFields),
+    defaultValues: { motif: borders[0]?.slug ?? '', run: 'circumference' as BorderPlacement['run'] },
+  });
+  const motif = watch('motif');
+  const run = watch('run');
   const size = sizeOf(setting, state.sizeId);
   if (!zoneOf(size, HEM_ZONE) || size.hemFrontMm === null || size.hemCircumferenceMm === null) {
     return (
@@ -35,12 +47,9 @@ export function AddBorderForm({
     );
   }
   if (borders.length === 0) return <EmptyState title="No borders are on offer just now." />;
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    dispatch('add-border', { motif, run });
-  };
+  const submit = handleSubmit((fields) => dispatch('add-border', fields));
   return (
-    <form onSubmit={submit} className="space-y-4">
+    <form onSubmit={submit} noValidate className="space-y-4">
       <p className="text-sm text-walnut-700">
         A border is one little picture repeated end to end along the hem. We resize it very slightly so whole repeats
         meet exactly — never a cut-off one.
@@ -50,14 +59,14 @@ export function AddBorderForm({
         value={run}
         frontMm={size.hemFrontMm}
         circumferenceMm={size.hemCircumferenceMm}
-        onChange={setRun}
+        onChange={(picked) => setValue('run', picked)}
       />
       <MotifChoice
         name="new-border-motif"
         legend="Choose a border"
         motifs={borders}
         value={motif}
-        onChange={setMotif}
+        onChange={(slug) => setValue('motif', slug)}
         detailOf={(candidate) => borderFitWords(layoutBorder(setting, state.sizeId, trialBorder(candidate.slug, run)))}
       />
       <Button type="submit" disabled={!hasRoomForPlacement(state)}>

@@ -1,4 +1,7 @@
-import { useState, type FormEvent } from 'react';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { designFieldRules, designLimits } from '@server/contracts/designs.ts';
 import { Button } from '@ui/components/button.tsx';
 import { EmptyState } from '@ui/components/page-state.tsx';
 import { commandOf } from '../commands/command-registry.ts';
@@ -9,6 +12,13 @@ import type { Dispatch } from '../commands/command-registry.ts';
 import { MotifChoice } from './motif-choice.tsx';
 import { MotifSizeField } from './motif-size-field.tsx';
 import { ZoneChoice } from './zone-choice.tsx';
+
+/** A single motif to add: the design document's rules for its choice, size and place. */
+const addMotifFields = z.object({
+  motif: designFieldRules.catalogueSlug,
+  scalePct: z.number().min(designLimits.scalePct.min).max(designLimits.scalePct.max),
+  zone: designFieldRules.zoneCode,
+});
 
 export function AddMotifForm({
   setting,
@@ -21,28 +31,38 @@ export function AddMotifForm({
 }) {
   const singles = setting.motifs.filter((motif) => motif.kind === 'single');
   const size = sizeOf(setting, state.sizeId);
-  const [slug, setSlug] = useState(singles[0]?.slug ?? '');
-  const [scalePct, setScalePct] = useState(100);
-  const [zone, setZone] = useState(() => defaultItemZone(size)?.code ?? '');
-  const motif = motifOf(setting, slug);
+  const { watch, setValue, handleSubmit } = useForm({
+    resolver: zodResolver(addMotifFields),
+    defaultValues: { motif: singles[0]?.slug ?? '', scalePct: 100, zone: defaultItemZone(size)?.code ?? '' },
+  });
+  const motif = motifOf(setting, watch('motif'));
+  const zone = watch('zone');
   if (!motif) return <EmptyState title="No single motifs are on offer just now." />;
-  const scale = clampMotifScale(motif, scalePct, setting.hoops);
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    dispatch('add-motif', { motif: motif.slug, scalePct: scale, zone });
-  };
+  const scale = clampMotifScale(motif, watch('scalePct'), setting.hoops);
+  const submit = handleSubmit((fields) =>
+    dispatch('add-motif', {
+      motif: motif.slug,
+      scalePct: clampMotifScale(motif, fields.scalePct, setting.hoops),
+      zone: fields.zone,
+    }),
+  );
   return (
-    <form onSubmit={submit} className="space-y-4">
+    <form onSubmit={submit} noValidate className="space-y-4">
       <MotifChoice
         name="new-motif"
         legend="Choose a motif"
         motifs={singles}
         value={motif.slug}
-        onChange={setSlug}
+        onChange={(slug) => setValue('motif', slug)}
         detailOf={(candidate) => `${candidate.colourCount} thread colour${candidate.colourCount === 1 ? '' : 's'}`}
       />
-      <MotifSizeField motif={motif} hoops={setting.hoops} value={scale} onChange={setScalePct} />
-      <ZoneChoice zones={size.zones} value={zone} onChange={setZone} />
+      <MotifSizeField
+        motif={motif}
+        hoops={setting.hoops}
+        value={scale}
+        onChange={(scalePct) => setValue('scalePct', scalePct)}
+      />
+      <ZoneChoice zones={size.zones} value={zone} onChange={(code) => setValue('zone', code)} />
       <Button type="submit" disabled={!hasRoomForPlacement(state)}>
         {commandOf('add-motif').label}
       </Button>

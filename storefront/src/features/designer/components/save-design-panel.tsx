@@ -1,7 +1,10 @@
-import { useId, useState, type FormEvent } from 'react';
+import { useId, useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
 import { useLocation, useNavigate } from 'react-router-dom';
 import type { GarmentSummary } from '@server/contracts/catalogue.ts';
-import type { SaveDesignRequest, SavedDesign } from '@server/contracts/saved-designs.ts';
+import { designName, type SaveDesignRequest, type SavedDesign } from '@server/contracts/saved-designs.ts';
 import { ApiError } from '@ui/api-client.ts';
 import { Button, ButtonLink } from '@ui/components/button.tsx';
 import { useCurrentUser } from '@ui/session/get-current-user.ts';
@@ -12,6 +15,8 @@ import type { DesignerState } from '../model/designer-state.ts';
 import { paths } from '../../../config/paths.ts';
 
 const MAX_NAME_LENGTH = 80;
+/** The panel's one field; the garment, size, colour and document come from the designer. */
+const saveDesignFields = z.object({ name: designName });
 
 const requestOf = (garment: GarmentSummary, state: DesignerState, name: string): SaveDesignRequest => ({
   garmentId: garment.id,
@@ -42,7 +47,12 @@ export function SaveDesignPanel({
   const me = useCurrentUser();
   const create = useCreateDesign();
   const update = useUpdateDesign();
-  const [name, setName] = useState(saved?.name ?? `My ${garment.name.toLowerCase()}`);
+  const { register, watch, formState, setError, handleSubmit } = useForm({
+    resolver: zodResolver(saveDesignFields),
+    defaultValues: { name: saved?.name ?? `My ${garment.name.toLowerCase()}` },
+  });
+  const name = watch('name');
+  const nameError = formState.errors.name?.message;
   // What was last saved, as this page sent it: the server's copy may order the same fields differently.
   const [savedAs, setSavedAs] = useState(() =>
     saved ? JSON.stringify(requestOf(garment, state, saved.name)) : undefined,
@@ -54,6 +64,10 @@ export function SaveDesignPanel({
 
   const save = (asNew: boolean, then?: (design: SavedDesign) => void) => {
     const done = {
+      onError: (error: Error) => {
+        const message = error instanceof ApiError ? error.fields?.name : undefined;
+        if (message) setError('name', { type: 'server', message });
+      },
       onSuccess: (design: SavedDesign) => {
         setSavedAs(JSON.stringify(request));
         // A design saved anew after a refusal is the one to save over from now on; the refusal no longer applies.
@@ -71,10 +85,7 @@ export function SaveDesignPanel({
     if (saved && isSaved) toCheckout(saved);
     else save(false, toCheckout);
   };
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    save(false);
-  };
+  const submit = handleSubmit(() => save(false));
 
   return (
     <section aria-labelledby="save-heading" className="rounded-card border border-linen-200 bg-linen-100/60 p-5">
@@ -89,18 +100,24 @@ export function SaveDesignPanel({
           <ButtonLink href={signInHref(location.pathname + location.search)}>Sign in to save or order</ButtonLink>
         </div>
       ) : (
-        <form onSubmit={submit} className="mt-3 space-y-3">
+        <form onSubmit={submit} noValidate className="mt-3 space-y-3">
           <div>
             <label htmlFor={nameId} className="text-sm font-medium">
               Name this design
             </label>
             <input
               id={nameId}
-              value={name}
               maxLength={MAX_NAME_LENGTH}
-              onChange={(event) => setName(event.target.value)}
+              aria-invalid={nameError ? true : undefined}
+              aria-describedby={nameError ? `${nameId}-error` : undefined}
               className="mt-2 block min-h-11 w-full rounded-lg border border-linen-300 bg-white px-3"
+              {...register('name')}
             />
+            {nameError && (
+              <p id={`${nameId}-error`} className="mt-1 text-sm text-madder-700">
+                {nameError}
+              </p>
+            )}
           </div>
           <div className="flex flex-wrap items-center gap-3">
             <Button
