@@ -185,7 +185,7 @@ export function createCustomerOrderService(deps: {
         version,
         isApproved,
         comment: answer.comment ?? null,
-        pinCount: answer.pins.length,
+        pins: answer.pins,
       }),
     );
     return ok({ number, version });
