@@ -12,6 +12,11 @@ test('when Priya pins a note and approves, then she chooses to approve with it a
   const db = openDatabase(loadDatabaseConfig());
   try {
     await sendTestProof(db, { orderNumber: 'WB-1007', message: 'Proof 2, with the changes you asked for.' });
+    // Its seeded hold lapsed long ago on the real clock; the customer's page only reads how long it lasts.
+    const order = await db('orders').where({ number: 'WB-1007' }).first('id');
+    await db('payments')
+      .where({ order_id: order.id, status: 'authorized' })
+      .update({ capture_before: new Date(Date.now() + 6 * 86_400_000) });
   } finally {
     await db.destroy();
   }
@@ -19,6 +24,7 @@ test('when Priya pins a note and approves, then she chooses to approve with it a
   await signInAs(page, 'Priya Castellanos');
   const proof = page.getByRole('region', { name: 'Your proof' });
   await expect(proof).toContainText('Version 2 · Waiting for your answer');
+  await expect(page.getByRole('region', { name: 'Payment' })).toContainText('We charge it once you approve');
   await proof.getByRole('button', { name: 'Add a pin' }).click();
   await proof.getByLabel('What should change at pin 1?').fill('Please use the pale pink thread for the name.');
 
@@ -31,6 +37,9 @@ test('when Priya pins a note and approves, then she chooses to approve with it a
 
   await expect(proof).toContainText('You approved this one');
   await expect(proof).toContainText('Please use the pale pink thread for the name.');
+  const payment = page.getByRole('region', { name: 'Payment' });
+  await expect(payment).toContainText('You have approved your proof');
+  await expect(payment).not.toContainText('once you approve');
 
   const studio = await (await browser.newContext()).newPage();
   await studio.goto('/admin/orders/WB-1007/production');
