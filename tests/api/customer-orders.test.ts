@@ -175,6 +175,40 @@ describe('proof answers', () => {
     expect((await harness.db('proofs').where({ order_id: 8, version: 2 }).first()).status).toBe('sent');
   });
 
+  it('when Harriet approves with pins on the picture, then the studio gets every note: order page, e-mail to the studio app and the sheet', async () => {
+    const pins = [
+      { xPct: 40, yPct: 70, comment: 'Please use the pale pink thread for the name.' },
+      { xPct: 60, yPct: 20, comment: 'Leave a little more room under the collar.' },
+    ];
+    await (
+      await signedIn('harriet@example.test')
+    )
+      .post('/api/orders/WB-1008/proofs/2/approval')
+      .send({ comment: 'Lovely!', pins })
+      .expect(200);
+
+    const staff = await signedIn('tobias@wrenandbobbin.test');
+    const order = (await staff.get('/api/admin/orders/WB-1008').expect(200)).body;
+    expect(order.proofs.at(-1)).toMatchObject({ status: 'approved', customerComment: 'Lovely!', commentPins: pins });
+
+    const mail = await harness
+      .db('email_log')
+      .where({ order_id: 8, template: 'proof_approved_studio' })
+      .orderBy('id', 'desc')
+      .first();
+    expect(mail.text_body).toContain('Pin 1: “Please use the pale pink thread for the name.”');
+    expect(mail.text_body).toContain('Pin 2: “Leave a little more room under the collar.”');
+    expect(mail.text_body).toMatch(/http:\/\/[^\s]+\/admin\/orders\/WB-1008(\s|$)/);
+    expect(mail.text_body).not.toMatch(/[^n]\/orders\/WB-1008/);
+
+    const sheet = (await staff.get('/api/admin/orders/WB-1008/production-sheet').expect(200)).body;
+    expect(sheet.order.approvalNotes).toEqual({
+      proofVersion: 2,
+      comment: 'Lovely!',
+      pins: pins.map((pin) => pin.comment),
+    });
+  });
+
   it('when a customer cancels an order already charged, then it is 409 and the order stays', async () => {
     const res = await (await signedIn('priya@example.test')).post('/api/orders/WB-1002/cancel').expect(409);
     expect(res.body.error.message).toMatch(/refund it instead/);

@@ -17,6 +17,8 @@ describe('the customer’s own pictures on an order, for the studio', () => {
     expect(picture).toMatchObject({
       uploadId: 1,
       zone: 'chest',
+      // What the studio reads is the place's name on the romper's size (seeds/data/garments.ts), never its code.
+      zoneLabel: 'Chest',
       widthMm: 56,
       imageUrl: '/api/admin/orders/WB-1009/artwork/1/image',
     });

@@ -42,7 +42,8 @@ test('when staff proof an order and the customer approves, then approve & charge
     .getByRole('group', { name: 'Show orders that are' })
     .getByRole('button', { name: 'Proof to send' })
     .click();
-  await expect(page).toHaveURL(/status=authorized/);
+  // The address names the status in words, never its stored code.
+  await expect(page).toHaveURL(/status=proof-to-send/);
   const table = page.getByRole('table');
   await expect(table.getByRole('link', { name: 'WB-1010' })).toBeVisible();
   await expect(table.getByRole('link', { name: 'WB-1004' })).toHaveCount(0);
@@ -71,7 +72,7 @@ test('when staff proof an order and the customer approves, then approve & charge
   await expect(page.getByText('Card charged')).toBeVisible();
   await page.screenshot({ path: shots('charged'), fullPage: true });
 
-  await page.goto('/admin/orders?status=in_production');
+  await page.goto('/admin/orders?status=on-the-machine');
   await expect(page.getByRole('table').getByRole('link', { name: 'WB-1010' })).toBeVisible();
   await expect(page.getByRole('button', { name: 'On the machine' })).toHaveAttribute('aria-pressed', 'true');
 });

@@ -4,6 +4,7 @@ import { SkipLink } from '@ui/components/skip-link.tsx';
 import { Button } from '@ui/components/button.tsx';
 import { useCurrentUser } from '@ui/session/get-current-user.ts';
 import { useSignOut } from '@ui/session/sign-out.ts';
+import { useRouteTitle } from '@ui/hooks/use-page-title.ts';
 import { paths } from '../config/paths.ts';
 import { StaffGate } from './staff-gate.tsx';
 
@@ -40,6 +41,7 @@ function SignedInAs() {
 }
 
 export function StudioLayout() {
+  useRouteTitle('Hoopwright studio');
   const me = useCurrentUser();
   const isOwner = me.data?.role === 'owner';
   return (

@@ -13,3 +13,19 @@ export const statusLabels: Record<OrderStatus, string> = {
   cancelled: 'Cancelled',
   refunded: 'Refunded',
 };
+
+const byWord = new Map<string, OrderStatus>();
+/**
+ * Each status as the board's page address spells it: its plain name in lower case with hyphens
+ * (`?status=proof-to-send`), so nobody reads a stored code in a link they share.
+ */
+export const statusWords = Object.fromEntries(
+  Object.entries(statusLabels).map(([status, label]) => {
+    const word = label.toLowerCase().replace(/[^a-z0-9]+/g, '-');
+    byWord.set(word, status as OrderStatus);
+    return [status, word];
+  }),
+) as Record<OrderStatus, string>;
+
+/** The status a word from the address names; a stored code (an older bookmark) is read as itself. */
+export const statusOfWord = (word: string): string => byWord.get(word) ?? word;

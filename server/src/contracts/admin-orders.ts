@@ -41,7 +41,14 @@ export const orderDetailResponse = z.object({
       designName: z.string(),
       /** The customer's own pictures on the design, for the studio to digitize: where each is and its picture's address. */
       artwork: z.array(
-        z.object({ uploadId: z.number().int(), zone: z.string(), widthMm: z.number(), imageUrl: z.string() }),
+        z.object({
+          uploadId: z.number().int(),
+          zone: z.string(),
+          /** The place's name on this size, for people to read; `zone` is its code. */
+          zoneLabel: z.string(),
+          widthMm: z.number(),
+          imageUrl: z.string(),
+        }),
       ),
     }),
   ),

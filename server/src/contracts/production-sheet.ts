@@ -119,6 +119,10 @@ export const productionSheetResponse = z.object({
     customerName: z.string(),
     neededBy: z.string().nullable(),
     customerNote: z.string().nullable(),
+    /** The customer's words on the approved proof (its comment and pinned notes), for the operator to read. */
+    approvalNotes: z
+      .object({ proofVersion: z.number().int(), comment: z.string().nullable(), pins: z.array(z.string()) })
+      .nullable(),
     quantity: z.number().int(),
     designName: z.string(),
   }),

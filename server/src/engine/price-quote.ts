@@ -86,7 +86,7 @@ export function priceQuote(input: QuoteInput): EngineResult<Quote> {
   if (sizeLabel !== undefined && typeof sizeLabel !== 'string') return fail('The size label must be text.');
   const garmentCents = garmentBaseFor(ruleSet, garment.slug, sizeCode);
   if (garmentCents === undefined)
-    return fail(`Price list ${ruleSet.version} has no price for the ${garment.name} in size ${sizeCode}.`);
+    return fail(`Price list ${ruleSet.version} has no price for the ${garment.name} in size ${sizeLabel ?? sizeCode}.`);
   if (!isWholeNumber(quantity, 1)) return fail('The quantity must be a whole number, 1 or more.');
   if (typeof isRush !== 'boolean') return fail('Say whether the order is a rush order.');
   if (!Array.isArray(placements)) return fail('The placements must be a list.');

@@ -5,7 +5,9 @@ import { Button, ButtonLink } from '@ui/components/button.tsx';
 import { useCurrentUser } from '@ui/session/get-current-user.ts';
 import { useSignOut } from '@ui/session/sign-out.ts';
 import { signInHref } from '@ui/session/sign-in-href.ts';
+import { useRouteTitle } from '@ui/hooks/use-page-title.ts';
 import { paths } from '../config/paths.ts';
+import { SHOP_TITLE } from '../config/shop-title.ts';
 import { SafetyNotes } from '../components/safety-notes.tsx';
 
 function AccountArea() {
@@ -50,6 +52,7 @@ function AccountArea() {
 }
 
 export function ShopLayout() {
+  useRouteTitle(SHOP_TITLE);
   return (
     <div className="flex min-h-screen flex-col">
       <SkipLink />

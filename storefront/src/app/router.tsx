@@ -1,6 +1,5 @@
-import type { ComponentType } from 'react';
 import { createBrowserRouter } from 'react-router-dom';
-import { Loading } from '@ui/components/page-state.tsx';
+import { lazyPage } from '@ui/lazy-page.tsx';
 import { RouteError } from '@ui/components/route-error.tsx';
 import { paths } from '../config/paths.ts';
 import { ShopLayout } from './layout.tsx';
@@ -8,23 +7,6 @@ import { HomePage } from './routes/home.tsx';
 import { GarmentPage } from './routes/garment.tsx';
 import { SignInPage } from './routes/sign-in.tsx';
 import { NotFoundPage } from './routes/not-found.tsx';
-
-/**
- * A page loaded only when someone opens it, so the catalogue's first download stays small: the designer brings the
- * canvas library and lettering fonts, checkout the form library.
- */
-function lazyPage<Module, Name extends keyof Module>(
-  path: string,
-  load: () => Promise<Module>,
-  name: Name & (Module[Name] extends ComponentType ? unknown : never),
-  waiting: string,
-) {
-  return {
-    path,
-    lazy: () => load().then((module) => ({ Component: module[name] as ComponentType })),
-    hydrateFallbackElement: <Loading label={waiting} />,
-  };
-}
 
 export const router = createBrowserRouter([
   {
@@ -35,21 +17,46 @@ export const router = createBrowserRouter([
         // A page that fails to render is replaced inside the layout, so the header and sign-in stay usable.
         errorElement: <RouteError homeHref="/" />,
         children: [
-          { path: paths.home.path, element: <HomePage /> },
+          { path: paths.home.path, element: <HomePage />, handle: { title: 'Garments to personalize' } },
           { path: paths.garment.path, element: <GarmentPage /> },
           lazyPage(paths.design.path, () => import('./routes/design.tsx'), 'DesignPage', 'Opening the designer…'),
-          { path: paths.signIn.path, element: <SignInPage /> },
-          lazyPage(paths.checkout.path, () => import('./routes/checkout.tsx'), 'CheckoutPage', 'Opening the checkout…'),
-          lazyPage(paths.orders.path, () => import('./routes/orders.tsx'), 'OrdersPage', 'Fetching your orders…'),
-          lazyPage(paths.order.path, () => import('./routes/order.tsx'), 'OrderPage', 'Fetching your order…'),
-          lazyPage(paths.designs.path, () => import('./routes/designs.tsx'), 'DesignsPage', 'Fetching your designs…'),
+          { path: paths.signIn.path, element: <SignInPage />, handle: { title: 'Sign in' } },
+          lazyPage(
+            paths.checkout.path,
+            () => import('./routes/checkout.tsx'),
+            'CheckoutPage',
+            'Opening the checkout…',
+            'Checkout',
+          ),
+          lazyPage(
+            paths.orders.path,
+            () => import('./routes/orders.tsx'),
+            'OrdersPage',
+            'Fetching your orders…',
+            'Your orders',
+          ),
+          lazyPage(
+            paths.order.path,
+            () => import('./routes/order.tsx'),
+            'OrderPage',
+            'Fetching your order…',
+            (params) => `Order ${params.number ?? ''}`,
+          ),
+          lazyPage(
+            paths.designs.path,
+            () => import('./routes/designs.tsx'),
+            'DesignsPage',
+            'Fetching your designs…',
+            'Your designs',
+          ),
           lazyPage(
             paths.shared.path,
             () => import('./routes/shared-design.tsx'),
             'SharedDesignPage',
             'Opening the shared design…',
+            'A shared design',
           ),
-          { path: '*', element: <NotFoundPage /> },
+          { path: '*', element: <NotFoundPage />, handle: { title: 'Page not found' } },
         ],
       },
     ],

@@ -195,6 +195,11 @@ describe('priceQuote', () => {
   it.each([
     ['an unknown size', { ...order, sizeCode: 'XXL' }, 'Price list 3 has no price for the Smocked dress in size XXL.'],
     [
+      'an unknown size with its label, which a person reads instead of the code',
+      { ...order, sizeCode: '0-3m', sizeLabel: '0–3 months' },
+      'Price list 3 has no price for the Smocked dress in size 0–3 months.',
+    ],
+    [
       'an unknown garment',
       { ...order, garment: { slug: 'bishop-dress', name: 'Bishop dress' } },
       'Price list 3 has no price for the Bishop dress in size 4.',

@@ -103,6 +103,24 @@ describe('sheetBorderPlan', () => {
   });
 });
 
+describe('tileName', () => {
+  it('when a template is cut into parts, then each is named by its count and place in words, never a grid code', () => {
+    const one = { row: 0, column: 0, rows: 1, columns: 1 };
+    expect(tileName(one)).toBe('Part 1 of 1');
+    expect([0, 1].map((column) => tileName({ ...one, column, columns: 2 }))).toEqual([
+      'Part 1 of 2, left',
+      'Part 2 of 2, right',
+    ]);
+    expect([0, 1, 2, 3].map((column) => tileName({ ...one, column, columns: 4 }))).toEqual([
+      'Part 1 of 4, left',
+      'Part 2 of 4, second from the left',
+      'Part 3 of 4, third from the left',
+      'Part 4 of 4, right',
+    ]);
+    expect(tileName({ row: 1, column: 1, rows: 3, columns: 3 })).toBe('Part 5 of 9, centre');
+  });
+});
+
 describe('tileTemplate', () => {
   it('when a template fits the printable area, then it prints as one tile', () => {
     expect(tileTemplate({ widthMm: 188, heightMm: 128 }, templateArea('letter'))).toEqual([
@@ -114,7 +132,12 @@ describe('tileTemplate', () => {
     const area = templateArea('a4');
     const template = { widthMm: 268, heightMm: 300 };
     const tiles = tileTemplate(template, area);
-    expect(tiles.map(tileName)).toEqual(['A1', 'A2', 'B1', 'B2']);
+    expect(tiles.map(tileName)).toEqual([
+      'Part 1 of 4, top left',
+      'Part 2 of 4, top right',
+      'Part 3 of 4, bottom left',
+      'Part 4 of 4, bottom right',
+    ]);
     for (const tile of tiles) {
       expect(tile.widthMm).toBeLessThanOrEqual(area.widthMm);
       expect(tile.heightMm).toBeLessThanOrEqual(area.heightMm);

@@ -48,7 +48,7 @@ function formTitle(open: OpenForm): string {
     case 'garment':
       return `Edit ${open.garment.name}`;
     case 'size':
-      return open.size ? `Edit size ${open.size.code} of ${open.garment.name}` : `Add a size to ${open.garment.name}`;
+      return open.size ? `Edit size ${open.size.label} of ${open.garment.name}` : `Add a size to ${open.garment.name}`;
     case 'colour':
       return open.colour ? `Edit ${open.colour.name}` : `Add a colour to ${open.garment.name}`;
     case 'motif':

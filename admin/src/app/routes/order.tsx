@@ -91,10 +91,10 @@ export function OrderPage() {
                           >
                             <img
                               src={picture.imageUrl}
-                              alt={`The customer's picture for the ${picture.zone}, ${picture.widthMm} mm wide`}
+                              alt={`The customer's picture for the ${picture.zoneLabel.toLowerCase()}, ${picture.widthMm} mm wide`}
                               className="h-24 w-28 rounded-md border border-linen-300 bg-white object-contain p-1"
                             />
-                            Their picture · {picture.zone}, {picture.widthMm} mm wide (to digitize)
+                            Their picture · {picture.zoneLabel}, {picture.widthMm} mm wide (to digitize)
                           </a>
                         ))}
                       </span>

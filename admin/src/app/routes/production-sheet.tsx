@@ -100,6 +100,24 @@ export function ProductionSheetPage() {
         {data.order.customerNote && (
           <p className="max-w-2xl rounded-lg bg-saffron-100 p-3 text-sm">“{data.order.customerNote}”</p>
         )}
+        {data.order.approvalNotes && (
+          <section
+            aria-labelledby="approval-notes"
+            className="max-w-2xl rounded-lg border border-saffron-500 bg-saffron-100 p-3 text-sm"
+          >
+            <h2 id="approval-notes" className="font-semibold">
+              Customer notes on the approved proof {data.order.approvalNotes.proofVersion}
+            </h2>
+            {data.order.approvalNotes.comment && <p className="mt-1">“{data.order.approvalNotes.comment}”</p>}
+            {data.order.approvalNotes.pins.length > 0 && (
+              <ol className="mt-1 list-decimal pl-5">
+                {data.order.approvalNotes.pins.map((pin, index) => (
+                  <li key={index}>{pin}</li>
+                ))}
+              </ol>
+            )}
+          </section>
+        )}
         <div className="screen-only flex flex-wrap items-center gap-3">
           <fieldset className="flex items-center gap-1 rounded-full border border-linen-300 bg-white p-1">
             <legend className="sr-only">Paper size</legend>

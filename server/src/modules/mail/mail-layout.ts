@@ -22,3 +22,7 @@ export function mailBodies(paragraphs: readonly string[]): { text: string; html:
 
 /** The customer's page for an order on the storefront, which e-mails and the payment page send them back to. */
 export const orderPageUrl = (appOrigin: string, number: string) => `${appOrigin}/orders/${encodeURIComponent(number)}`;
+
+/** The studio's page for an order in the studio app: e-mails to the studio link here, not to the storefront. */
+export const studioOrderPageUrl = (appOrigin: string, number: string) =>
+  `${appOrigin}/admin/orders/${encodeURIComponent(number)}`;

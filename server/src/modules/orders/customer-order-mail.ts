@@ -2,7 +2,7 @@
  * The e-mails the customer's side of an order sends, as plain text with a light HTML copy. Each names the order
  * and links to its page, where everything else lives.
  */
-import { mailBodies, orderPageUrl } from '../mail/mail-layout.ts';
+import { mailBodies, orderPageUrl, studioOrderPageUrl } from '../mail/mail-layout.ts';
 import type { LoggedMail } from '../mail/order-mail.ts';
 import { formatDayText } from '../mail/day-text.ts';
 
@@ -60,25 +60,36 @@ export function proofApprovedMail(context: MailContext, to: string, version: num
   ]);
 }
 
+/**
+ * The studio hears of every answer, with the customer's words in full: pins left on an approved proof are notes the
+ * studio must read before stitching. It links to the order in the studio app.
+ */
 export function proofAnsweredStudioMail(
   context: MailContext,
   to: string,
-  answer: { version: number; isApproved: boolean; comment: string | null; pinCount: number },
+  answer: { version: number; isApproved: boolean; comment: string | null; pins: { comment: string }[] },
 ): LoggedMail {
   const what = answer.isApproved ? 'approved' : 'asked for changes to';
-  return compose(
-    context,
+  const pinned = answer.pins.map((pin, index) => `Pin ${index + 1}: “${pin.comment}”`);
+  return {
     to,
-    answer.isApproved ? 'proof_approved_studio' : 'changes_requested_studio',
-    `${context.number}: the customer ${what} proof ${answer.version}`,
-    [
+    subject: `${context.number}: the customer ${what} proof ${answer.version}`,
+    ...mailBodies([
       `The customer ${what} proof version ${answer.version} of ${context.number}.`,
       ...(answer.comment ? [`Their comment: “${answer.comment}”`] : []),
-      ...(answer.pinCount > 0
-        ? [`They pinned ${answer.pinCount} ${answer.pinCount === 1 ? 'comment' : 'comments'} to the picture.`]
+      ...(pinned.length > 0
+        ? [
+            answer.isApproved
+              ? `They approved with ${pinned.length === 1 ? 'a note' : `${pinned.length} notes`} pinned to the picture; read ${pinned.length === 1 ? 'it' : 'them'} before stitching:`
+              : `They pinned ${pinned.length === 1 ? 'a comment' : `${pinned.length} comments`} to the picture:`,
+            ...pinned,
+          ]
         : []),
-    ],
-  );
+      `Open the order in the studio: ${studioOrderPageUrl(context.appOrigin, context.number)}`,
+    ]),
+    template: answer.isApproved ? 'proof_approved_studio' : 'changes_requested_studio',
+    orderId: context.orderId,
+  };
 }
 
 export function orderCancelledMail(context: MailContext, to: string, wasHeld: boolean): LoggedMail {

@@ -180,7 +180,7 @@ export function createCustomerOrderService(deps: {
           version,
           isApproved,
           comment: answer.comment ?? null,
-          pinCount: answer.pins.length,
+          pins: answer.pins,
         }),
       ];
       const queued: QueuedMail[] = [];

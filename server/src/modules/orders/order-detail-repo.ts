@@ -28,7 +28,16 @@ export async function readOrderDetail(
   const [items, payments, proofs, events] = await Promise.all([
     db('order_items as i')
       .join('designs as d', 'd.id', 'i.design_id')
-      .select('i.id', 'i.description', 'i.quantity', 'i.total_cents', 'd.name as design_name', 'd.document')
+      .join('garment_sizes as s', 's.id', 'i.garment_size_id')
+      .select(
+        'i.id',
+        'i.description',
+        'i.quantity',
+        'i.total_cents',
+        'd.name as design_name',
+        'd.document',
+        's.placement_zones',
+      )
       .where('i.order_id', order.id)
       .orderBy('i.id'),
     db('payments')
@@ -78,6 +87,7 @@ export async function readOrderDetail(
       designName: i.design_name,
       artwork: artworkOn(i.document).map((placement) => ({
         ...placement,
+        zoneLabel: zoneLabelOf(i.placement_zones, placement.zone),
         imageUrl: orderArtworkImagePath(order.number, placement.uploadId),
       })),
     })),
@@ -110,6 +120,12 @@ export async function readOrderDetail(
       createdAt: iso(e.created_at)!,
     })),
   };
+}
+
+/** The name people read for a place on the garment ("Hem border"), never its code; the code if the size lost it. */
+function zoneLabelOf(zones: unknown, code: string): string {
+  const list = (typeof zones === 'string' ? JSON.parse(zones) : zones) as { code: string; label: string }[] | null;
+  return list?.find((zone) => zone.code === code)?.label ?? code;
 }
 
 /** The uploaded pictures a stored design places; a document that no longer reads has none to show. */

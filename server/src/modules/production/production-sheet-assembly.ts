@@ -65,6 +65,7 @@ export function assembleSheet(sources: SheetSources): Result<ProductionSheet> {
       customerName: order.customerName,
       neededBy: order.neededBy,
       customerNote: order.customerNote,
+      approvalNotes: order.approvalNotes,
       quantity: order.quantity,
       designName: order.designName,
     },

@@ -75,9 +75,30 @@ export function tileTemplate(
   );
 }
 
-/** "A1": rows are letters, columns numbers. */
-export const tileName = (tile: Pick<TemplateTile, 'row' | 'column'>) =>
-  `${String.fromCharCode(65 + tile.row)}${tile.column + 1}`;
+const ORDINALS = ['first', 'second', 'third', 'fourth', 'fifth', 'sixth', 'seventh', 'eighth', 'ninth', 'tenth'];
+
+/** Where a piece sits along one side: its two ends by name, the one between them "middle", else counted. */
+function sidePlace(index: number, count: number, ends: [string, string], from: string): string | null {
+  if (count === 1) return null;
+  if (index === 0) return ends[0];
+  if (index === count - 1) return ends[1];
+  if (count === 3) return 'middle';
+  return `${ORDINALS[index] ?? `number ${index + 1}`} from the ${from}`;
+}
+
+/**
+ * "Part 2 of 4, top right": a count and a place in words, never a grid code such as "A1" that reads like a paper
+ * size. Parts are counted along each row, top row first.
+ */
+export function tileName(tile: Pick<TemplateTile, 'row' | 'column' | 'rows' | 'columns'>): string {
+  const place = [
+    sidePlace(tile.row, tile.rows, ['top', 'bottom'], 'top'),
+    sidePlace(tile.column, tile.columns, ['left', 'right'], 'left'),
+  ].filter((word) => word !== null);
+  const part = `Part ${tile.row * tile.columns + tile.column + 1} of ${tile.rows * tile.columns}`;
+  const where = place.join(' ') === 'middle middle' ? 'centre' : place.join(' ');
+  return where ? `${part}, ${where}` : part;
+}
 
 /** Adds the pages of every template, tile by tile. */
 export function addTemplatePages(
@@ -111,7 +132,7 @@ function drawHeader(doc: Pdf, orderNumber: string, template: PlacementTemplate, 
     });
   const isTiled = tile.rows * tile.columns > 1;
   const tiling = isTiled
-    ? `Tile ${tileName(tile)} of ${tile.rows} down × ${tile.columns} across: overlap the tiles by ${TILE_OVERLAP_MM} mm so the crosses meet, then tape.`
+    ? `${tileName(tile)} (${tile.rows} down × ${tile.columns} across): overlap the parts by ${TILE_OVERLAP_MM} mm so the crosses meet, then tape.`
     : 'Printed at true size on one page.';
   const legend = template.guideLineYMm === null ? LEGEND_ITEM : LEGEND_BORDER;
   doc.fillColor(SOFT_INK).font(FONT).fontSize(7.5);

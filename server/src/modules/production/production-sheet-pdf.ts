@@ -52,6 +52,7 @@ class SummaryWriter {
       { size: 10, colour: SOFT_INK },
     );
     if (order.customerNote) this.text(`Customer's note: "${order.customerNote}"`, { size: 9, colour: SOFT_INK });
+    this.approvalNotes();
     this.gap(4);
     this.garmentLine();
     for (const placement of this.sheet.placements) if (placement.border) this.hoopingPlan(placement, placement.border);
@@ -229,6 +230,15 @@ class SummaryWriter {
     for (const item of runMinutes.items)
       this.text(`${item.label}: ${minutesText(item.minutes)}`, { size: 8.5, colour: SOFT_INK, indent: 8 });
     this.gap(6);
+  }
+
+  /** What the customer asked for when approving: the operator reads it before the first stitch. */
+  private approvalNotes(): void {
+    const notes = this.sheet.order.approvalNotes;
+    if (!notes) return;
+    this.heading(`Customer notes on the approved proof ${notes.proofVersion}`);
+    if (notes.comment) this.text(`"${notes.comment}"`, { size: 9 });
+    for (const [index, pin] of notes.pins.entries()) this.text(`Pin ${index + 1}: "${pin}"`, { size: 9 });
   }
 
   private heading(title: string): void {

@@ -11,6 +11,8 @@ export interface OrderToMake {
   /** YYYY-MM-DD, or null. */
   neededBy: string | null;
   customerNote: string | null;
+  /** What the customer said when approving the proof the studio stitches: a comment and pinned notes. */
+  approvalNotes: { proofVersion: number; comment: string | null; pins: string[] } | null;
   quantity: number;
   designName: string;
   garmentId: number;
@@ -55,6 +57,21 @@ export async function readOrderToMake(db: Db, number: string): Promise<OrderToMa
     .orderBy('i.id')
     .first();
   if (!row) return undefined;
+  const approved = await db('proofs as p')
+    .join('orders as o', 'o.id', 'p.order_id')
+    .select('p.version', 'p.customer_comment', 'p.comment_pins')
+    .where({ 'o.number': number, 'p.status': 'approved' })
+    .orderBy('p.version', 'desc')
+    .first();
+  const pins: { comment: string }[] = approved
+    ? typeof approved.comment_pins === 'string'
+      ? JSON.parse(approved.comment_pins)
+      : approved.comment_pins
+    : [];
+  const approvalNotes =
+    approved && (approved.customer_comment || pins.length > 0)
+      ? { proofVersion: approved.version, comment: approved.customer_comment, pins: pins.map((pin) => pin.comment) }
+      : null;
   return {
     number: row.number,
     status: row.status,
@@ -62,6 +79,7 @@ export async function readOrderToMake(db: Db, number: string): Promise<OrderToMa
     customerName: row.customer_name,
     neededBy: row.needed_by ? new Date(row.needed_by).toISOString().slice(0, 10) : null,
     customerNote: row.customer_note,
+    approvalNotes,
     quantity: row.quantity,
     designName: row.design_name,
     garmentId: row.garment_id,

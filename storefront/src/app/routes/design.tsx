@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
+import { Link, useLocation, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import type {
   GarmentSummary,
   LetteringFontSummary,
@@ -28,6 +28,8 @@ import { DesignQuote } from '../../features/quote/components/design-quote.tsx';
 import { DesignQuoteTotal } from '../../features/quote/components/design-quote-total.tsx';
 import { ReadyDatesNote } from '../../features/quote/components/ready-dates-note.tsx';
 import { paths } from '../../config/paths.ts';
+import { usePageTitle } from '@ui/hooks/use-page-title.ts';
+import { SHOP_TITLE } from '../../config/shop-title.ts';
 
 interface Catalogue {
   garment: GarmentSummary;
@@ -45,8 +47,10 @@ function LoadedDesigner({
   saved: opened,
 }: Catalogue & { saved: SavedDesign | undefined }) {
   const navigate = useNavigate();
+  const { state: navigationState } = useLocation();
+  usePageTitle(`Design your ${garment.name.toLowerCase()}`, SHOP_TITLE);
   const setting = useDesignSetting(garment, motifs, fonts);
-  const designer = useDesigner(setting, useInitialDesign(garment, opened));
+  const designer = useDesigner(setting, useInitialDesign(garment, opened, navigationState));
   const [saved, setSaved] = useState(opened);
   const { sizeId, colourId, document } = designer.state;
   const request = useMemo<QuotePreviewRequest>(

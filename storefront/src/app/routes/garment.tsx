@@ -15,6 +15,9 @@ import { MotifCard } from '../../features/catalogue/components/motif-card.tsx';
 import { motifSuitsGarment } from '../../features/catalogue/model/motif-suits-garment.ts';
 import { BorderPrice } from '../../features/quote/components/border-price.tsx';
 import { paths } from '../../config/paths.ts';
+import { usePageTitle } from '@ui/hooks/use-page-title.ts';
+import { SHOP_TITLE } from '../../config/shop-title.ts';
+import type { DesignStart } from '../../features/designer/model/design-start.ts';
 
 export function GarmentPage() {
   const { slug = '' } = useParams();
@@ -22,6 +25,7 @@ export function GarmentPage() {
   const motifs = useMotifs();
   const [colourId, setColourId] = useState<number>();
   const [sizeId, setSizeId] = useState<number>();
+  usePageTitle(garment.data?.name, SHOP_TITLE);
   if (garment.isPending) return <Loading label="Fetching the garment…" />;
   if (garment.isError) {
     const isMissing =
@@ -57,7 +61,11 @@ export function GarmentPage() {
           </Link>
           <h1 className="mt-1 text-3xl font-semibold">{data.name}</h1>
           <p className="mt-3 text-walnut-700">{data.description}</p>
-          <Link to={paths.design.href(data.slug)} className={`mt-5 ${buttonClassName()}`}>
+          <Link
+            to={paths.design.href(data.slug)}
+            state={{ sizeId: size?.id, colourId: colour?.id } satisfies DesignStart}
+            className={`mt-5 ${buttonClassName()}`}
+          >
             Design this garment
           </Link>
           <div className="mt-6">

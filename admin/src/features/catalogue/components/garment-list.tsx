@@ -119,7 +119,7 @@ function SizeTable({ garment, onEdit }: { garment: StudioGarment; onEdit: (reque
                     <button
                       type="button"
                       className={smallButtonClassName}
-                      aria-label={`Edit size ${size.code}`}
+                      aria-label={`Edit size ${size.label}`}
                       onClick={() => onEdit({ form: 'size', garment, size })}
                     >
                       Edit
@@ -128,7 +128,7 @@ function SizeTable({ garment, onEdit }: { garment: StudioGarment; onEdit: (reque
                       part="sizes"
                       garmentId={garment.id}
                       partId={size.id}
-                      name={`size ${size.code}`}
+                      name={`size ${size.label}`}
                       isInUse={size.isInUse}
                     />
                   </span>

@@ -2,8 +2,16 @@ import { useCallback, useMemo } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { orderBoardQuery, type OrderBoardQuery } from '@server/contracts/studio-orders.ts';
 import { boardSearch } from '../api/get-order-board.ts';
+import { statusOfWord, statusWords } from '../../../lib/order-status-labels.ts';
 
 const defaults = orderBoardQuery.parse({});
+
+/** The page's address for a board query: the API's own search, with each status in words. */
+function pageSearch(query: OrderBoardQuery): URLSearchParams {
+  const search = new URLSearchParams(boardSearch(query));
+  if (query.status?.length) search.set('status', query.status.map((status) => statusWords[status]).join(','));
+  return search;
+}
 
 /**
  * The board's filters, sort and page live in the URL's search params, so a view can be bookmarked, shared and
@@ -12,7 +20,9 @@ const defaults = orderBoardQuery.parse({});
 export function useBoardQuery() {
   const [params, setParams] = useSearchParams();
   const query = useMemo(() => {
-    const parsed = orderBoardQuery.safeParse(Object.fromEntries(params));
+    const fields = Object.fromEntries(params);
+    if (fields.status) fields.status = fields.status.split(',').map(statusOfWord).join(',');
+    const parsed = orderBoardQuery.safeParse(fields);
     return parsed.success ? parsed.data : defaults;
   }, [params]);
   const view: 'list' | 'calendar' = params.get('view') === 'calendar' ? 'calendar' : 'list';
@@ -21,7 +31,7 @@ export function useBoardQuery() {
   const update = useCallback(
     (changes: Partial<OrderBoardQuery>) => {
       const next = { ...query, ...changes, page: 'page' in changes ? (changes.page ?? 1) : 1 };
-      const search = new URLSearchParams(boardSearch(next));
+      const search = pageSearch(next);
       if (view === 'calendar') search.set('view', 'calendar');
       setParams(search, { replace: !('page' in changes) && 'q' in changes });
     },
@@ -30,7 +40,7 @@ export function useBoardQuery() {
 
   const setView = useCallback(
     (nextView: 'list' | 'calendar') => {
-      const search = new URLSearchParams(boardSearch(query));
+      const search = pageSearch(query);
       if (nextView === 'calendar') search.set('view', 'calendar');
       setParams(search);
     },

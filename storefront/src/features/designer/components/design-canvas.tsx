@@ -105,7 +105,7 @@ export function DesignCanvas({
       role="group"
       aria-label={label}
       aria-describedby="canvas-help"
-      className="flex w-full justify-center overflow-hidden rounded-card bg-linen-100 outline-offset-4"
+      className="flex w-full min-w-0 justify-center overflow-hidden rounded-card bg-linen-100 outline-offset-4"
       style={{ minHeight: view.heightPx || undefined }}
     />
   );

@@ -74,7 +74,7 @@ export function DesignerWorkspace({
     <div onKeyDown={designer.onKeyDown}>
       {header}
       <div className="mt-6 grid items-start gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(20rem,2fr)] lg:gap-8">
-        <div ref={garmentView} className="scroll-mt-4 space-y-3 lg:sticky lg:top-4">
+        <div ref={garmentView} className="min-w-0 scroll-mt-4 space-y-3 lg:sticky lg:top-4">
           <DesignerToolbar
             canUndo={designer.canUndo}
             canRedo={designer.canRedo}

@@ -21,6 +21,7 @@ export function PaymentState({ order, checkoutReturn }: PaymentStateProps) {
   const money = (cents: number) => formatMoney(cents, summary.currency);
   const canPay = order.actions.includes('pay');
   const pay = () => retry.mutate(undefined, { onSuccess: (started) => window.location.assign(started.checkoutUrl) });
+  const hasApproved = order.proofs.some((proof) => proof.status === 'approved');
   const isConfirming = checkoutReturn === 'done' && summary.status === 'awaiting_payment' && !payment.failureMessage;
 
   return (
@@ -32,8 +33,10 @@ export function PaymentState({ order, checkoutReturn }: PaymentStateProps) {
         {isConfirming && <p>Confirming your payment with the card company…</p>}
         {payment.heldCents > 0 && (
           <p>
-            <strong className="font-semibold">{money(payment.heldCents)}</strong> is held on your card, not charged. We
-            charge it once you approve your proof
+            <strong className="font-semibold">{money(payment.heldCents)}</strong> is held on your card, not charged.{' '}
+            {hasApproved
+              ? 'You have approved your proof, so we charge it as we start stitching'
+              : 'We charge it once you approve your proof'}
             {payment.holdExpiresAt ? ` (the hold lasts until ${day(payment.holdExpiresAt)})` : ''}.
           </p>
         )}

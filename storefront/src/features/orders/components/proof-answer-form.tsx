@@ -22,6 +22,8 @@ export function ProofAnswerForm({
   const answer = useAnswerProof(number);
   const [pins, setPins] = useState<ProofPin[]>([]);
   const [comment, setComment] = useState('');
+  // Approving with pins on the picture asks first: the pins either go with the approval or become a change request.
+  const [isChoosing, setIsChoosing] = useState(false);
   const fields = answer.error instanceof ApiError ? (answer.error.fields ?? {}) : {};
   const isFull = pins.length >= MAX_PROOF_PINS;
 
@@ -35,7 +37,9 @@ export function ProofAnswerForm({
   const changePin = (index: number, change: Partial<ProofPin>) =>
     setPins((current) => current.map((pin, i) => (i === index ? { ...pin, ...change } : pin)));
   const send = (isApproved: boolean) =>
-    answer.mutate({ version: proof.version, isApproved, answer: { comment, pins: isApproved ? [] : pins } });
+    answer.mutate({ version: proof.version, isApproved, answer: { comment, pins } });
+  const approve = () => (pins.length > 0 ? setIsChoosing(true) : send(true));
+  const notes = pins.length === 1 ? 'this note' : 'these notes';
 
   return (
     <div className="space-y-4">
@@ -133,8 +137,27 @@ export function ProofAnswerForm({
           {answer.error.message}
         </p>
       )}
+      {isChoosing && pins.length > 0 ? (
+        <div role="group" aria-labelledby={`${commentId}-choice`} className="space-y-3 rounded-lg bg-saffron-100 p-3">
+          <p id={`${commentId}-choice`} className="text-sm">
+            You pinned {pins.length === 1 ? 'a note' : `${pins.length} notes`} to the picture. Should we stitch the
+            proof as it is and follow {notes}, or draw a new proof with the changes first?
+          </p>
+          <div className="flex flex-wrap gap-3">
+            <Button onClick={() => send(true)} disabled={answer.isPending}>
+              Approve with {notes}
+            </Button>
+            <Button tone="quiet" onClick={() => send(false)} disabled={answer.isPending}>
+              Ask for changes and a new proof
+            </Button>
+            <Button tone="quiet" onClick={() => setIsChoosing(false)} disabled={answer.isPending}>
+              Go back
+            </Button>
+          </div>
+        </div>
+      ) : null}
       <div className="flex flex-wrap gap-3">
-        <Button onClick={() => send(true)} disabled={answer.isPending}>
+        <Button onClick={approve} disabled={answer.isPending || isChoosing}>
           Approve this proof
         </Button>
         <Button
