@@ -67,8 +67,16 @@ describe('the job worker', () => {
     const subjects = Array.from({ length: 24 }, (_, i) => `Batch message ${i + 1}`);
     for (const subject of subjects)
       await sendLoggedMail({ db: harness.db, mailer, now }, letter(subject), { sendNow: false });
-    const first = createJobWorker({ db: harness.db, mailer, now, log, workerId: 'worker-a' });
-    const second = createJobWorker({ db: harness.db, mailer, now, log, workerId: 'worker-b' });
+    // A provider that takes a moment per message, so the two workers' batches overlap as they would in a shop.
+    const slowMailer: Mailer = {
+      send: async (message) => {
+        await new Promise((resolve) => setTimeout(resolve, 25));
+        return mailer.send(message);
+      },
+      close: () => {},
+    };
+    const first = createJobWorker({ db: harness.db, mailer: slowMailer, now, log, workerId: 'worker-a' });
+    const second = createJobWorker({ db: harness.db, mailer: slowMailer, now, log, workerId: 'worker-b' });
     const [ranByFirst, ranBySecond] = await Promise.all([first.runDue(3), second.runDue(3)]);
     expect(ranByFirst + ranBySecond).toBe(24);
     for (const subject of subjects) expect(delivered(subject), subject).toHaveLength(1);
