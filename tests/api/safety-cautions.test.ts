@@ -2,14 +2,13 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { garmentDetailResponse } from '../../server/src/contracts/catalogue.ts';
 import { studioGarmentListResponse } from '../../server/src/contracts/admin-catalogue-garments.ts';
 import { quotePreviewResponse } from '../../server/src/contracts/quotes.ts';
-import { storedQuoteResponse } from '../../server/src/contracts/stored-quotes.ts';
 import { checkoutStartedResponse, customerOrderResponse } from '../../server/src/contracts/orders.ts';
-import { savedDesignResponse } from '../../server/src/contracts/saved-designs.ts';
 import { apiErrorBody } from '../../server/src/contracts/errors.ts';
 import { startPaymentHarness, type PaymentHarness } from '../support/payment-stand-ins.ts';
 import { signedInAgent } from '../support/api-calls.ts';
 import { productionSheetResponse } from '../../server/src/contracts/production-sheet.ts';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
+import { quoteSavedDesign } from '../support/priya-orders.ts';
 
 let harness: PaymentHarness;
 beforeAll(async () => {
@@ -19,7 +18,6 @@ afterAll(async () => {
   await harness.close();
 });
 
-type Agent = ReturnType<PaymentHarness['agent']>;
 const shipTo = {
   name: 'Dominic Aldana',
   line1: '7 Wicket Row',
@@ -35,20 +33,7 @@ const garmentPage = async (slug: string) =>
   garmentDetailResponse.parse((await harness.agent().get(`/api/catalogue/garments/${slug}`).expect(200)).body).garment;
 const codesOf = (messages: { code: string }[]) => messages.map((message) => message.code);
 
-/** A customer's seeded design as a stored quote, ready to order. */
-async function quoteFor(agent: Agent, designId: number) {
-  const { design } = savedDesignResponse.parse((await agent.get(`/api/designs/${designId}`).expect(200)).body);
-  const body = {
-    garmentId: design.garmentId,
-    sizeId: design.sizeId,
-    colourId: design.colourId,
-    quantity: 1,
-    isRush: false,
-    document: design.document,
-    designId,
-  };
-  return storedQuoteResponse.parse((await agent.post('/api/quotes').send(body).expect(201)).body);
-}
+const quoteFor = quoteSavedDesign;
 
 describe('GET /api/catalogue/garments/:slug', () => {
   it('when a parent opens the sun bonnet, then every size carries the ribbon-ties caution and the youngest sizes the thread-ends note', async () => {

@@ -1,16 +1,11 @@
 /** Priya (a demo customer) ordering her saved designs: the steps several API tests share. */
+import { shipToByCustomer } from '../../seeds/data/orders.ts';
 import { storedQuoteResponse } from '../../server/src/contracts/stored-quotes.ts';
 import { savedDesignResponse } from '../../server/src/contracts/saved-designs.ts';
 import type { ApiAgent } from './api-harness.ts';
 
-export const priyaShipTo = {
-  name: 'Priya Castellanos',
-  line1: '48 Larkspur Lane',
-  city: 'Fernhollow',
-  region: 'OR',
-  postalCode: '97000',
-  countryCode: 'US',
-};
+/** Priya's seeded address, as the checkout form sends it. */
+export const priyaShipTo = shipToByCustomer.priya;
 
 /** Prices one of the signed-in customer's saved designs as it is and stores the quote. */
 export async function quoteSavedDesign(agent: ApiAgent, designId = 1) {
