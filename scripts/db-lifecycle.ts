@@ -95,6 +95,9 @@ function isAlive(pid: number): boolean {
   }
 }
 
+/** The local MariaDB's process id while it runs (benchmarks read its CPU time). */
+export const localDatabasePid = (settings = localDatabaseSettings()) => runningPid(settings);
+
 function runningPid(settings: LocalDatabaseSettings): number | undefined {
   const file = pidFile(settings);
   if (!existsSync(file)) return undefined;

@@ -5,7 +5,6 @@ import { purgeExpiredSessions } from './modules/people/session-sweep-repo.ts';
 import { createHealthRouter } from './modules/health/routes.ts';
 import { createHealthService } from './modules/health/health-service.ts';
 import express, { type Express, type Request } from 'express';
-import helmet from 'helmet';
 import cookieParser from 'cookie-parser';
 import compression from 'compression';
 import expressStaticGzip from 'express-static-gzip';
@@ -20,6 +19,7 @@ import { requireRole } from './auth/roles.ts';
 import { sessionWhereNeeded, type SessionLayer } from './auth/session.ts';
 import { createLetteringFontLoader } from './integrations/lettering-fonts.ts';
 import { requestId } from './middleware/request-id.ts';
+import { securityHeaders } from './middleware/security-headers.ts';
 import { accessLog } from './middleware/access-log.ts';
 import { requireSameOrigin } from './middleware/same-origin.ts';
 import { createRateLimits } from './middleware/rate-limit.ts';
@@ -81,28 +81,6 @@ export interface AppDeps {
   log: (line: string) => void;
   /** True once the process has begun to shut down: readiness then says no, so a proxy stops sending work. */
   isDraining?: () => boolean;
-}
-
-function securityHeaders(config: AppConfig) {
-  return helmet({
-    contentSecurityPolicy: {
-      useDefaults: false,
-      directives: {
-        defaultSrc: ["'self'"],
-        scriptSrc: ["'self'"],
-        styleSrc: ["'self'"],
-        imgSrc: ["'self'", 'data:', 'blob:'],
-        fontSrc: ["'self'", 'data:'],
-        connectSrc: ["'self'"],
-        formAction: ["'self'"],
-        frameAncestors: ["'none'"],
-        objectSrc: ["'none'"],
-        baseUri: ["'self'"],
-        ...(config.isCookieSecure ? { upgradeInsecureRequests: [] } : {}),
-      },
-    },
-    strictTransportSecurity: config.isCookieSecure,
-  });
 }
 
 /** Vite names the files under assets/ by their content's hash, so a browser may keep them for good. */
@@ -168,7 +146,7 @@ export function createApp(deps: AppDeps): Express {
   const fonts = createLetteringFontLoader();
   const artwork = createArtworkService({ db, now, heavyWork });
   // One watch of the catalogue's change count for every in-memory copy of the catalogue this instance keeps.
-  const versions = createCatalogueVersionWatch(db);
+  const versions = createCatalogueVersionWatch(db, config.catalogueRecheckMs);
   const catalogue = createCatalogueService({ db, versions });
   const quotes = createQuoteService({ db, fonts, versions });
   const storedQuotes = createStoredQuoteService({ db, quotes, now });
@@ -240,6 +218,11 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/artwork', createArtworkRouter({ artwork, uploadMaxBytes }));
 
   app.use('/api/admin', requireRole('staff', 'owner'));
+  // A studio change through this server reaches its own next quote at once, whatever the re-check window.
+  app.use('/api/admin', (req, res, next) => {
+    if (req.method !== 'GET') res.once('finish', versions.markStale);
+    next();
+  });
   app.use('/api/admin/overview', createAdminOverviewRouter({ overview: createOverviewService({ db, now }) }));
   app.use(
     '/api/admin/catalogue',

@@ -73,6 +73,7 @@ const appSchema = databaseSchema.extend({
   RATE_LIMIT_ORDERS: z.coerce.number().int().min(1).default(10),
   RATE_LIMIT_PROOF_ANSWERS: z.coerce.number().int().min(1).default(20),
   VISITOR_DATA_RETENTION_DAYS: z.coerce.number().int().min(1).max(3650).default(30),
+  CATALOGUE_RECHECK_MS: z.coerce.number().int().min(0).max(60_000).default(500),
 });
 
 export interface DatabaseConfig {
@@ -105,6 +106,8 @@ export interface AppConfig {
   rateLimits: RateLimitSettings;
   /** Days a visitor's sessions, uploads and quotes are kept when no account claimed them. */
   visitorDataRetentionDays: number;
+  /** How long a read of the catalogue's change count is shared by requests (0: every request waits for a fresh one). */
+  catalogueRecheckMs: number;
 }
 
 /** Requests one client may make per window (per signed-in person, or per address for visitors). */
@@ -185,5 +188,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Readonly<AppCo
       proofAnswers: e.RATE_LIMIT_PROOF_ANSWERS,
     },
     visitorDataRetentionDays: e.VISITOR_DATA_RETENTION_DAYS,
+    catalogueRecheckMs: e.CATALOGUE_RECHECK_MS,
   });
 }

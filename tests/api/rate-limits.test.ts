@@ -12,6 +12,8 @@ import { createMailer, type Mailer } from '../../server/src/integrations/mailer.
 import { fixedNow, useApiHarness, type ApiAgent } from '../support/api-harness.ts';
 import { errorOf } from '../support/api-calls.ts';
 import { daisyDressQuote } from '../support/sample-designs.ts';
+import { RateLimiterRes } from 'rate-limiter-flexible';
+import { OneTripRateLimiter } from '../../server/src/middleware/one-trip-rate-limiter.ts';
 
 const harness = useApiHarness({
   env: {
@@ -128,5 +130,48 @@ describe('rate limits', () => {
       mailer.close();
       await heavyWork.close();
     }
+  });
+});
+
+describe('the one-statement counter', () => {
+  const counter = (points: number, duration: number) =>
+    new OneTripRateLimiter({
+      storeClient: harness.db,
+      storeType: 'knex',
+      dbName: harness.config.database.database,
+      tableName: 'rate_limits',
+      tableCreated: true,
+      clearExpiredByTimeout: false,
+      keyPrefix: `counter-${points}-${duration}`,
+      points,
+      duration,
+    });
+
+  it('when 40 requests count at once against a limit of 25, then exactly 25 pass and 15 are refused', async () => {
+    const limiter = counter(25, 600);
+    const outcomes = await Promise.all(
+      Array.from({ length: 40 }, () =>
+        limiter.consume('one-address').then(
+          () => 'passed',
+          (refusal: unknown) => (refusal instanceof RateLimiterRes ? 'refused' : 'failed'),
+        ),
+      ),
+    );
+    expect(outcomes.filter((o) => o === 'passed')).toHaveLength(25);
+    expect(outcomes.filter((o) => o === 'refused')).toHaveLength(15);
+  });
+
+  it('when a client is refused, then the wait is what is left of its window, and the next window counts from 1', async () => {
+    const limiter = counter(2, 2);
+    await limiter.consume('a');
+    await limiter.consume('a');
+    const refusal = await limiter.consume('a').catch((r: RateLimiterRes) => r);
+    expect(refusal).toBeInstanceOf(RateLimiterRes);
+    expect((refusal as RateLimiterRes).msBeforeNext).toBeGreaterThan(0);
+    expect((refusal as RateLimiterRes).msBeforeNext).toBeLessThanOrEqual(2_000);
+    await new Promise((resolve) => setTimeout(resolve, (refusal as RateLimiterRes).msBeforeNext + 50));
+    const fresh = await limiter.consume('a');
+    expect(fresh.consumedPoints).toBe(1);
+    expect(fresh.remainingPoints).toBe(1);
   });
 });

@@ -191,6 +191,9 @@ describe('two servers behind a proxy', () => {
       .put('/api/admin/settings')
       .send({ ...settings, setupMinutes: settings.setupMinutes + 30 })
       .expect(200);
+    // The server that took the edit sees it at once; the other within its re-check window (CATALOGUE_RECHECK_MS,
+    // 500 ms by default), which has passed once the wait is over.
+    await new Promise((resolve) => setTimeout(resolve, 600));
     for (let i = 0; i < 4; i += 1) expect(await runMinutes()).toBeCloseTo(before + 30, 6);
 
     // Six price checks so far from this address, three on each server: the seventh is refused, whichever answers.

@@ -1,8 +1,9 @@
 import type { Request, RequestHandler } from 'express';
-import { RateLimiterMySQL, RateLimiterRes } from 'rate-limiter-flexible';
+import { RateLimiterRes } from 'rate-limiter-flexible';
 import type { RateLimitSettings } from '../config.ts';
 import type { Db } from '../db/knex.ts';
 import { HttpError } from './http-error.ts';
+import { OneTripRateLimiter } from './one-trip-rate-limiter.ts';
 
 /** What each limit guards, in the words of the refusal. */
 const limitedActions = {
@@ -27,12 +28,12 @@ const inWords = (seconds: number) =>
 
 /**
  * The abuse limits: one counter per limit and client in the `rate_limits` table (rate-limiter-flexible's MySQL
- * store over the app's knex pool), so every server instance counts the same requests. A client over its limit is
+ * store over the app's knex pool, counting in one statement), so every server instance counts the same requests. A client over its limit is
  * answered 429 with `Retry-After` and a sentence saying when to try again.
  */
 export function createRateLimits(db: Db, database: string, settings: RateLimitSettings): RateLimits {
   const limit = (name: RateLimitName): RequestHandler => {
-    const limiter = new RateLimiterMySQL({
+    const limiter = new OneTripRateLimiter({
       storeClient: db,
       storeType: 'knex',
       dbName: database,

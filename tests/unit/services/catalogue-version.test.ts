@@ -39,6 +39,37 @@ describe('the catalogue version watch', () => {
   });
 });
 
+describe('the version watch with a re-check window', () => {
+  it('when requests come within the window, then they share one read; after it, or once marked stale, they read again', async () => {
+    let clock = 1_000;
+    let reads = 0;
+    const watch = watchVersion(async () => ++reads, { recheckMs: 500, now: () => clock });
+    expect(await watch.current()).toBe(1);
+    clock += 499;
+    expect(await Promise.all([watch.current(), watch.current()])).toEqual([1, 1]);
+    clock += 1;
+    expect(await watch.current()).toBe(2);
+    watch.markStale();
+    expect(await watch.current()).toBe(3);
+    expect(reads).toBe(3);
+  });
+
+  it('when this server changes the catalogue while a read runs, then later requests wait for a read after it', async () => {
+    const reads = controlledReads();
+    const watch = watchVersion(reads.read, { recheckMs: 500, now: () => 0 });
+    const during = watch.current();
+    watch.markStale();
+    const after = watch.current();
+    reads.answer(8);
+    expect(await during).toBe(8);
+    await Promise.resolve();
+    await Promise.resolve();
+    expect(reads.pending).toHaveLength(1);
+    reads.answer(9);
+    expect(await after).toBe(9);
+  });
+});
+
 describe('data kept while the catalogue is unchanged', () => {
   it('when the count stays, then the data is read once; when it moves, then it is read again', async () => {
     let version = 1;
