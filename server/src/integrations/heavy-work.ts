@@ -43,6 +43,10 @@ export function createHeavyWork(settings: HeavyWorkSettings): HeavyWork {
     // The request thread comes first when cores are short: heavy jobs run at a lower priority (Linux nice, per
     // thread, through piscina's optional @napi-rs/nice; where that is missing they run at normal priority).
     niceIncrement: 10,
+    // The young heap the API server gets from --max-semi-space-size=64 (V8 sizes the young generation at three
+    // semi-spaces): measuring a large SVG allocates a point or a segment at a time, and in the default 16 MB the
+    // collector copied the live ones again and again, so 10 × the segments cost 20 × the time (bench:engine).
+    resourceLimits: { maxYoungGenerationSizeMb: 192 },
   });
   // Each thread loads tsx, jsdom, jimp, resvg and pdfkit before its first job (seconds on a busy machine): the
   // first job waits for that without it counting against the job's time limit.
