@@ -28,12 +28,12 @@ async function fillAddress(page: Page) {
 }
 
 async function payWith(page: Page, cardNumber: string) {
-  await expect(page.getByRole('heading', { name: /^Pay \$/ })).toBeVisible();
+  await expect(page.getByRole('heading', { name: /^(Pay \$|Save your card)/ })).toBeVisible();
   await page.getByLabel('Card number').fill(cardNumber);
   await page.getByLabel('Expiry (MM/YY)').fill('12/30');
   await page.getByLabel('CVC').fill('123');
   await page.getByLabel('Name on card').fill('Priya Castellanos');
-  await page.getByRole('button', { name: /^Pay \$/ }).click();
+  await page.getByRole('button', { name: /^(Pay \$|Save your card)/ }).click();
 }
 
 let orderNumber = '';

@@ -6,7 +6,10 @@ import type { ShipTo } from '../../contracts/orders.ts';
 const ORDER_NUMBER_PREFIX = 'WB';
 
 export type PaymentRowStatus =
-  'pending' | 'authorized' | 'captured' | 'partially_refunded' | 'refunded' | 'voided' | 'failed';
+  'pending' | 'authorized' | 'saved' | 'captured' | 'partially_refunded' | 'refunded' | 'voided' | 'failed';
+
+/** How a payment row takes money: a hold, a card kept for later, the studio's off-session charge, a payment link. */
+export type PaymentMethodKind = 'hold' | 'saved_card' | 'off_session' | 'payment_link';
 
 /** An order as checkout and the payment webhooks handle it. */
 export interface OrderRecord {
@@ -29,6 +32,10 @@ export interface PaymentRecord {
   capturedCents: number;
   refundedCents: number;
   captureBefore: Date | null;
+  method: PaymentMethodKind;
+  providerCustomerId: string | null;
+  paymentMethodId: string | null;
+  paymentPageUrl: string | null;
 }
 
 const toOrder = (row: Record<string, unknown>): OrderRecord => ({
@@ -51,6 +58,10 @@ const toPayment = (row: Record<string, unknown>): PaymentRecord => ({
   capturedCents: Number(row.amount_captured_cents),
   refundedCents: Number(row.amount_refunded_cents),
   captureBefore: row.capture_before ? new Date(row.capture_before as string) : null,
+  method: (row.method as PaymentMethodKind | undefined) ?? 'hold',
+  providerCustomerId: (row.provider_customer_id as string | null) ?? null,
+  paymentMethodId: (row.payment_method_id as string | null) ?? null,
+  paymentPageUrl: (row.payment_page_url as string | null) ?? null,
 });
 
 const orderColumns = ['id', 'number', 'customer_id', 'status', 'payment_status', 'total_cents', 'currency'];
@@ -168,8 +179,10 @@ export async function insertPendingPayment(
   trx: Db,
   order: Pick<OrderRecord, 'id' | 'currency'>,
   now: Date,
+  extra: { method?: PaymentMethodKind; amount_authorized_cents?: number; provider_customer_id?: string } = {},
 ): Promise<number> {
   const [id] = await trx('payments').insert({
+    ...extra,
     order_id: order.id,
     status: 'pending',
     currency: order.currency,
@@ -182,6 +195,40 @@ export async function insertPendingPayment(
 export async function listPayments(db: Db, orderId: number): Promise<PaymentRecord[]> {
   const rows = await db('payments').select('*').where({ order_id: orderId }).orderBy('id');
   return rows.map(toPayment);
+}
+
+/** The customer at the payment provider an earlier attempt of this order used, so its cards stay together. */
+export async function findProviderCustomer(db: Db, orderId: number): Promise<string | null> {
+  const row = await db('payments')
+    .where({ order_id: orderId })
+    .whereNotNull('provider_customer_id')
+    .orderBy('id', 'desc')
+    .first('provider_customer_id');
+  return row?.provider_customer_id ?? null;
+}
+
+/** The card the order keeps at the provider for a later charge (the latest one checkout saved), if any. */
+export async function findKeptCard(
+  db: Db,
+  orderId: number,
+): Promise<{ paymentId: number; customerId: string; paymentMethodId: string } | undefined> {
+  const row = await db('payments')
+    .where({ order_id: orderId })
+    .whereIn('method', ['hold', 'saved_card', 'payment_link'])
+    .whereNotNull('provider_customer_id')
+    .whereNotNull('payment_method_id')
+    .orderBy('id', 'desc')
+    .first('id', 'provider_customer_id', 'payment_method_id');
+  return row
+    ? { paymentId: row.id, customerId: row.provider_customer_id, paymentMethodId: row.payment_method_id }
+    : undefined;
+}
+
+/** The bank will not let this card be charged without the customer: it is no longer kept for later charges. */
+export async function forgetKeptCard(db: Db, orderId: number, paymentMethodId: string): Promise<void> {
+  await db('payments')
+    .where({ order_id: orderId, payment_method_id: paymentMethodId })
+    .update({ payment_method_id: null });
 }
 
 /** The payment by the provider's ids, locked for the caller's transaction. */
