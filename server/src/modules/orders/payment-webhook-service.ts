@@ -83,6 +83,12 @@ export function createPaymentWebhookService(deps: {
           (await lockPaymentBy(trx, { paymentIntentId: pi.id })) ?? (await pendingPaymentOfOrder(trx, pi.metadata));
         return attemptFailed(trx, payment, pi.last_payment_error?.message ?? GENERIC_DECLINE, now);
       }
+      case 'setup_intent.setup_failed': {
+        // A card declined on a page that only keeps it (setup mode): the attempt failed as a declined payment does.
+        const si = event.data.object;
+        const payment = await pendingPaymentOfOrder(trx, si.metadata);
+        return attemptFailed(trx, payment, si.last_setup_error?.message ?? GENERIC_DECLINE, now);
+      }
       case 'payment_intent.canceled':
         return bringInLine(
           trx,
