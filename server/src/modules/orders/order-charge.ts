@@ -48,6 +48,13 @@ type KeptCard = { paymentId: number; customerId: string; paymentMethodId: string
 const isStripeError = (error: unknown): error is Stripe.errors.StripeError =>
   error instanceof Stripe.errors.StripeError;
 
+const unknownHold = (intentId: string): ChargeOutcome => ({
+  result: failure(
+    'conflict',
+    `The payment service has no record of this order's card hold (${intentId}), so it could not be charged. Nothing was charged; ask the customer to pay again from their order page.`,
+  ),
+});
+
 export function createOrderCharge(deps: OrderChargeDeps) {
   const { stripe } = deps;
 
@@ -91,7 +98,8 @@ export function createOrderCharge(deps: OrderChargeDeps) {
     } else if (hold) {
       if (!kept && step.kind === 'ask_customer' && step.why === 'hold_lapsed')
         return markLapsed(trx, order, hold.id, actor, now);
-      await letHoldGo(trx, order, hold, actor, now);
+      const unknown = await letHoldGo(trx, order, hold, actor, now);
+      if (unknown) return unknown;
       if (!kept) return askCustomer(trx, order, null, 'no_card', actor, now);
     }
     return chargeKeptCard(trx, order, kept!, actor, now);
@@ -116,14 +124,7 @@ export function createOrderCharge(deps: OrderChargeDeps) {
       );
       capturedCents = intent.amount_received;
     } catch (error) {
-      if (isStripeError(error) && error.code === 'resource_missing') {
-        return {
-          result: failure(
-            'conflict',
-            `The payment service has no record of this order's card hold (${intentId}), so it could not be charged. Nothing was charged; ask the customer to pay again from their order page.`,
-          ),
-        };
-      }
+      if (isStripeError(error) && error.code === 'resource_missing') return unknownHold(intentId);
       if (!isStripeError(error) || error.type !== 'StripeInvalidRequestError') throw error;
       const intent = await stripe.paymentIntents.retrieve(intentId);
       if (intent.status === 'canceled') {
@@ -171,7 +172,7 @@ export function createOrderCharge(deps: OrderChargeDeps) {
     hold: OrderPayment,
     actor: ChargeActor,
     now: Date,
-  ) {
+  ): Promise<ChargeOutcome | undefined> {
     const isLive = hold.captureBefore === null || hold.captureBefore > now;
     if (isLive) {
       try {
@@ -181,6 +182,7 @@ export function createOrderCharge(deps: OrderChargeDeps) {
           { idempotencyKey: `release-order-${order.id}-${hold.id}` },
         );
       } catch (error) {
+        if (isStripeError(error) && error.code === 'resource_missing') return unknownHold(hold.paymentIntentId!);
         const intent = await stripe.paymentIntents.retrieve(hold.paymentIntentId!).catch(() => undefined);
         if (intent?.status !== 'canceled') throw error;
       }
@@ -193,6 +195,7 @@ export function createOrderCharge(deps: OrderChargeDeps) {
       payload: { paymentId: hold.id, heldCents: hold.authorizedCents, totalCents: order.totalCents },
       now,
     });
+    return undefined;
   }
 
   /** Charges the kept card without the customer present (`off_session`), for the order's current total. */
