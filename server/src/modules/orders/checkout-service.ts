@@ -12,7 +12,6 @@ import {
   insertOrder,
   insertOrderNote,
   insertPendingPayment,
-  findProviderCustomer,
   listPayments,
   nextOrderNumber,
   readOrderDescription,
@@ -29,6 +28,7 @@ import { failure, ok, type Result } from '../../contracts/result.ts';
 import { formatMoneyText } from '../mail/money-text.ts';
 import { orderPageUrl } from '../mail/mail-layout.ts';
 import { openCheckoutSession, providerCustomerFor } from './checkout-session.ts';
+import { findProviderCustomer } from './kept-card-repo.ts';
 import { chooseCheckoutMethod } from './payment-method-choice.ts';
 import { moveOrder } from './order-transitions.ts';
 import { queueLoggedMail, sendQueuedMail } from '../mail/order-mail.ts';

@@ -12,13 +12,7 @@ import { failure, ok, type Result } from '../../contracts/result.ts';
 import type { OrderActionResponse } from '../../contracts/studio-orders.ts';
 import { formatMoneyText } from '../mail/money-text.ts';
 import { queueLoggedMail, type QueuedMail } from '../mail/order-mail.ts';
-import {
-  findKeptCard,
-  forgetKeptCard,
-  insertPendingPayment,
-  readOrderDescription,
-  updatePayment as writePayment,
-} from './order-repo.ts';
+import { insertPendingPayment, readOrderDescription, updatePayment as writePayment } from './order-repo.ts';
 import {
   readOrderStanding,
   recordOrderEvent,
@@ -28,6 +22,7 @@ import {
 } from './studio-order-repo.ts';
 import { applyCapture } from './payment-capture.ts';
 import { openCheckoutSession } from './checkout-session.ts';
+import { findKeptCard, forgetKeptCard } from './kept-card-repo.ts';
 import { cardChargedMail, confirmPaymentMail } from './payment-mail.ts';
 import { payAgainMail } from './studio-order-mail.ts';
 
