@@ -1,6 +1,6 @@
 import type { ErrorRequestHandler } from 'express';
 
-type StripeErrorType = 'invalid_request_error' | 'idempotency_error' | 'api_error';
+type StripeErrorType = 'invalid_request_error' | 'idempotency_error' | 'api_error' | 'card_error';
 
 /**
  * An error answered in Stripe's shape, `{ error: { type, code, message, param } }`; the SDK picks its error class

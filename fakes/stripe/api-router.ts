@@ -2,6 +2,8 @@ import express, { Router } from 'express';
 import { requireApiKey } from './api-auth.ts';
 import { invalidRequest, stripeApiErrorHandler } from './api-error.ts';
 import { createCheckoutSessionsRouter } from './checkout-sessions.ts';
+import { createCustomersRouter } from './customers.ts';
+import { expireLapsedHolds } from './hold-expiry.ts';
 import type { FakeStripeContext } from './fake-stripe-context.ts';
 import { honourIdempotencyKeys } from './idempotency.ts';
 import { createPaymentIntentsRouter } from './payment-intents.ts';
@@ -16,7 +18,12 @@ export function createApiRouter(ctx: FakeStripeContext, apiKey: string): Router 
   });
   router.use(requireApiKey(apiKey));
   router.use(express.urlencoded({ extended: true, limit: '1mb' }));
+  router.use((_req, _res, next) => {
+    expireLapsedHolds(ctx);
+    next();
+  });
   router.use(honourIdempotencyKeys(ctx.state.idempotentResponses));
+  router.use(createCustomersRouter(ctx));
   router.use('/checkout/sessions', createCheckoutSessionsRouter(ctx));
   router.use('/payment_intents', createPaymentIntentsRouter(ctx));
   router.use('/refunds', createRefundsRouter(ctx));

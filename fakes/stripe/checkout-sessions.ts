@@ -29,8 +29,11 @@ const lineItemSchema = z.object({
 
 const createSessionSchema = z
   .object({
-    mode: z.literal('payment', { error: 'this fake supports mode=payment only' }),
-    line_items: z.array(lineItemSchema).min(1).max(100),
+    mode: z.enum(['payment', 'setup'], { error: 'this fake supports mode=payment and mode=setup only' }),
+    line_items: z.array(lineItemSchema).min(1).max(100).optional(),
+    // Setup mode names the currency of the payments the saved card will make.
+    currency: currency.optional(),
+    customer: z.string().startsWith('cus_', 'Invalid customer id').optional(),
     success_url: httpUrl,
     cancel_url: httpUrl.optional(),
     client_reference_id: z.string().max(200).optional(),
@@ -39,13 +42,25 @@ const createSessionSchema = z
     payment_intent_data: z
       .object({
         capture_method: z.enum(['automatic', 'automatic_async', 'manual']).optional(),
+        setup_future_usage: z.enum(['off_session', 'on_session']).optional(),
         description: z.string().max(1000).optional(),
         metadata: metadata.optional(),
       })
       .optional(),
+    setup_intent_data: z.object({ metadata: metadata.optional() }).optional(),
     expand,
   })
   .superRefine((params, issues) => {
+    if (params.mode === 'setup') {
+      if (params.line_items)
+        issues.addIssue({ code: 'custom', path: ['line_items'], message: 'not allowed in setup mode' });
+      if (!params.currency) issues.addIssue({ code: 'custom', path: ['currency'], message: 'required in setup mode' });
+      return;
+    }
+    if (!params.line_items) {
+      issues.addIssue({ code: 'custom', path: ['line_items'], message: 'required in payment mode' });
+      return;
+    }
     const first = params.line_items[0].price_data.currency;
     params.line_items.forEach((item, index) => {
       if (item.price_data.currency !== first) {
@@ -71,13 +86,16 @@ export function createCheckoutSessionsRouter(ctx: FakeStripeContext): Router {
   const present = (session: CheckoutSession, fields: string[] | undefined) =>
     expandFields(session, fields, {
       payment_intent: (s) => (s.payment_intent ? (ctx.state.paymentIntents.get(s.payment_intent) ?? null) : null),
+      setup_intent: (s) => (s.setup_intent ? (ctx.state.setupIntents.get(s.setup_intent) ?? null) : null),
     });
 
   router.post('/', (req, res) => {
     const params = parseParams(createSessionSchema, req.body);
     const id = ctx.nextId('cs');
     const created = ctx.nowSeconds();
-    const lineItems = params.line_items.map((item) => ({
+    if (params.customer && !ctx.state.customers.has(params.customer))
+      throw resourceMissing('customer', params.customer);
+    const lineItems = (params.line_items ?? []).map((item) => ({
       name: item.price_data.product_data.name,
       unitAmount: item.price_data.unit_amount,
       quantity: item.quantity,
@@ -92,13 +110,15 @@ export function createCheckoutSessionsRouter(ctx: FakeStripeContext): Router {
         cancel_url: params.cancel_url ?? null,
         client_reference_id: params.client_reference_id ?? null,
         created,
-        currency: params.line_items[0].price_data.currency,
+        currency: params.currency ?? params.line_items![0].price_data.currency,
+        customer: params.customer ?? null,
         customer_email: params.customer_email ?? null,
         expires_at: created + SESSION_LIFETIME_SECONDS,
         livemode: false,
         metadata: params.metadata ?? {},
-        mode: 'payment',
+        mode: params.mode,
         payment_intent: null,
+        setup_intent: null,
         payment_status: 'unpaid',
         status: 'open',
         success_url: params.success_url,
@@ -109,7 +129,9 @@ export function createCheckoutSessionsRouter(ctx: FakeStripeContext): Router {
         captureMethod: params.payment_intent_data?.capture_method ?? 'automatic',
         metadata: params.payment_intent_data?.metadata ?? {},
         description: params.payment_intent_data?.description ?? null,
+        setupFutureUsage: params.payment_intent_data?.setup_future_usage ?? null,
       },
+      setupIntentMetadata: params.setup_intent_data?.metadata ?? {},
     };
     ctx.state.checkoutSessions.set(id, record);
     res.json(present(record.session, params.expand));

@@ -6,14 +6,17 @@ export interface FakeStripeContext {
   state: FakeStripeState;
   /** A new object id with the real service's prefix (`cs_test_…`, `pi_…`, `ch_…`, `re_…`, `evt_…`, `req_…`). */
   nextId(prefix: IdPrefix): string;
+  /** The stand-in's clock: the given clock plus whatever a test moved it on by (`POST /_fake/clock`). */
   nowMs(): number;
   nowSeconds(): number;
+  /** Moves the stand-in's clock on; holds past their `capture_before` lapse on the next request. */
+  advanceClock(seconds: number): void;
   paymentPageUrl(sessionId: string): string;
   /** Records an event of `type` with a snapshot of `object` and queues its webhook delivery. */
   emit(type: string, object: unknown): void;
 }
 
-export type IdPrefix = 'cs' | 'pi' | 'ch' | 're' | 'evt' | 'req';
+export type IdPrefix = 'cs' | 'pi' | 'ch' | 're' | 'evt' | 'req' | 'cus' | 'pm' | 'seti';
 
 /**
  * Ids as the real service mints them for practical purposes: random after the object's prefix (Checkout Sessions

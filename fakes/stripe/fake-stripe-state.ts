@@ -13,13 +13,15 @@ export interface CheckoutSession {
   client_reference_id: string | null;
   created: number;
   currency: string;
+  customer: string | null;
   customer_email: string | null;
   expires_at: number;
   livemode: false;
   metadata: Metadata;
-  mode: 'payment';
+  mode: 'payment' | 'setup';
   payment_intent: string | null;
-  payment_status: 'paid' | 'unpaid';
+  setup_intent: string | null;
+  payment_status: 'paid' | 'unpaid' | 'no_payment_required';
   status: 'open' | 'complete';
   success_url: string;
   url: string | null;
@@ -35,7 +37,46 @@ export interface CheckoutLineItem {
 export interface CheckoutSessionRecord {
   session: CheckoutSession;
   lineItems: CheckoutLineItem[];
-  paymentIntentData: { captureMethod: CaptureMethod; metadata: Metadata; description: string | null };
+  paymentIntentData: {
+    captureMethod: CaptureMethod;
+    metadata: Metadata;
+    description: string | null;
+    setupFutureUsage: 'off_session' | 'on_session' | null;
+  };
+  /** Setup mode: the SetupIntent's metadata. */
+  setupIntentMetadata: Metadata;
+}
+
+export interface Customer {
+  id: string;
+  object: 'customer';
+  created: number;
+  email: string | null;
+  livemode: false;
+  metadata: Metadata;
+}
+
+export interface PaymentMethod {
+  id: string;
+  object: 'payment_method';
+  billing_details: { name: string };
+  card: { brand: string; last4: string; exp_month: number; exp_year: number };
+  created: number;
+  customer: string | null;
+  livemode: false;
+  type: 'card';
+}
+
+export interface SetupIntent {
+  id: string;
+  object: 'setup_intent';
+  created: number;
+  customer: string | null;
+  livemode: false;
+  metadata: Metadata;
+  payment_method: string;
+  status: 'succeeded';
+  usage: 'off_session' | 'on_session';
 }
 
 export interface PaymentIntent {
@@ -49,12 +90,16 @@ export interface PaymentIntent {
   capture_method: CaptureMethod;
   created: number;
   currency: string;
+  customer: string | null;
   description: string | null;
+  last_payment_error: { type: 'card_error'; code: string; decline_code?: string; message: string } | null;
   latest_charge: string | null;
   livemode: false;
   metadata: Metadata;
+  payment_method: string | null;
   payment_method_types: ['card'];
-  status: 'requires_capture' | 'succeeded' | 'canceled';
+  setup_future_usage: 'off_session' | 'on_session' | null;
+  status: 'requires_capture' | 'succeeded' | 'canceled' | 'requires_payment_method';
 }
 
 export interface Charge {
@@ -125,6 +170,11 @@ export interface IdempotentResponse {
 /** Everything the fake knows, in memory, for tests to read (also served as JSON at `GET /_fake/state`). */
 export interface FakeStripeState {
   checkoutSessions: Map<string, CheckoutSessionRecord>;
+  customers: Map<string, Customer>;
+  paymentMethods: Map<string, PaymentMethod>;
+  /** Saved cards whose bank asks for the customer on every payment (the off-session authentication test card). */
+  cardsNeedingAuthentication: Set<string>;
+  setupIntents: Map<string, SetupIntent>;
   paymentIntents: Map<string, PaymentIntent>;
   charges: Map<string, Charge>;
   refunds: Map<string, Refund>;
@@ -136,6 +186,10 @@ export interface FakeStripeState {
 export function createFakeStripeState(): FakeStripeState {
   return {
     checkoutSessions: new Map(),
+    customers: new Map(),
+    paymentMethods: new Map(),
+    cardsNeedingAuthentication: new Set(),
+    setupIntents: new Map(),
     paymentIntents: new Map(),
     charges: new Map(),
     refunds: new Map(),
@@ -148,6 +202,10 @@ export function createFakeStripeState(): FakeStripeState {
 export function snapshotFakeStripeState(state: FakeStripeState) {
   return {
     checkoutSessions: Object.fromEntries(state.checkoutSessions),
+    customers: Object.fromEntries(state.customers),
+    paymentMethods: Object.fromEntries(state.paymentMethods),
+    cardsNeedingAuthentication: [...state.cardsNeedingAuthentication],
+    setupIntents: Object.fromEntries(state.setupIntents),
     paymentIntents: Object.fromEntries(state.paymentIntents),
     charges: Object.fromEntries(state.charges),
     refunds: Object.fromEntries(state.refunds),

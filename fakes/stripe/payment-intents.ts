@@ -4,6 +4,7 @@ import { invalidRequest, resourceMissing } from './api-error.ts';
 import type { FakeStripeContext } from './fake-stripe-context.ts';
 import type { PaymentIntent } from './fake-stripe-state.ts';
 import { expand, expandFields, parseParams, positiveAmount } from './form-params.ts';
+import { createOffSessionPayment } from './off-session-payments.ts';
 
 const captureSchema = z.object({ amount_to_capture: positiveAmount.optional(), expand });
 const cancelSchema = z.object({
@@ -11,7 +12,10 @@ const cancelSchema = z.object({
   expand,
 });
 
-/** Retrieve, capture (authorize-then-charge) and cancel for the PaymentIntents the hosted page created. */
+/**
+ * Create (an off-session charge of a saved card), retrieve, capture (authorize-then-charge, in full or for
+ * `amount_to_capture`) and cancel.
+ */
 export function createPaymentIntentsRouter(ctx: FakeStripeContext): Router {
   const router = Router();
 
@@ -33,6 +37,16 @@ export function createPaymentIntentsRouter(ctx: FakeStripeContext): Router {
       );
     }
   };
+
+  router.post('/', (req, res) => {
+    const { intent, error } = createOffSessionPayment(ctx, req.body);
+    if (error) {
+      // A card error carries the PaymentIntent it left behind, so the caller can bring the customer back to it.
+      res.status(402).json({ error: { ...error, payment_intent: present(intent, undefined) } });
+      return;
+    }
+    res.json(present(intent, parseParams(z.object({ expand }), { expand: req.body?.expand }).expand));
+  });
 
   router.get('/:id', (req, res) => {
     res.json(present(find(req.params.id), parseParams(z.object({ expand }), req.query).expand));

@@ -15,6 +15,18 @@ const cardFormSchema = z.object({ card_number: typed, expiry: typed, cvc: typed,
  * stand-in intent (its own id series, so the ids of real intents do not shift) with the session's metadata.
  */
 function announceDecline(ctx: FakeStripeContext, record: CheckoutSessionRecord, message: string): void {
+  if (record.session.mode === 'setup') {
+    // Setup mode reports a declined card on the session's SetupIntent instead.
+    ctx.emit('setup_intent.setup_failed', {
+      id: ctx.nextId('seti'),
+      object: 'setup_intent',
+      customer: record.session.customer,
+      metadata: { ...record.setupIntentMetadata },
+      status: 'requires_payment_method',
+      last_setup_error: { type: 'card_error', code: 'card_declined', message },
+    });
+    return;
+  }
   ctx.emit('payment_intent.payment_failed', {
     id: ctx.nextId('pi'),
     object: 'payment_intent',

@@ -77,10 +77,18 @@ export function sendPaymentPage(res: Response, model: PaymentPageModel, status =
   const { record, fieldErrors = {} } = model;
   const form = model.form ?? { card_number: '', expiry: '', cvc: '', name: '' };
   const { id, amount_total: total, currency, cancel_url: cancelUrl } = record.session;
-  const body = html`<h1>Pay ${formatAmount(total, currency)}</h1>
-    <p class="lead">Enter a test card to finish this order.</p>
+  const isSetup = record.session.mode === 'setup';
+  const heading = isSetup ? 'Save your card' : `Pay ${formatAmount(total, currency)}`;
+  const body = html`<h1>${heading}</h1>
+    <p class="lead">
+      ${
+        isSetup
+          ? 'Enter a test card to keep on file. Nothing is taken now; the shop charges it later.'
+          : 'Enter a test card to finish this order.'
+      }
+    </p>
     <div class="layout">
-      ${orderSummary(record)}
+      ${isSetup ? '' : orderSummary(record)}
       <section aria-labelledby="card-title">
         <h2 id="card-title">Card details</h2>
         ${model.decline ? html`<p class="alert" role="alert">${model.decline}</p>` : ''}
@@ -91,12 +99,13 @@ export function sendPaymentPage(res: Response, model: PaymentPageModel, status =
             ${field('cvc', 'CVC', form.cvc, fieldErrors.cvc, html`inputmode="numeric" autocomplete="cc-csc" placeholder="123" maxlength="4"`)}
           </div>
           ${field('name', 'Name on card', form.name, fieldErrors.name, html`autocomplete="cc-name" maxlength="100"`)}
-          <button class="primary" type="submit">Pay ${formatAmount(total, currency)}</button>
+          <button class="primary" type="submit">${heading}</button>
         </form>
         ${cancelUrl ? html`<a class="cancel" href="${cancelUrl}">Cancel and return to the shop</a>` : ''}
         <p class="hint">
           Test cards: <code>4242 4242 4242 4242</code> succeeds, <code>4000 0000 0000 0002</code> is declined,
-          <code>4000 0000 0000 9995</code> has insufficient funds. Any future expiry and any three digits.
+          <code>4000 0000 0000 9995</code> has insufficient funds, <code>4000 0027 6000 3184</code> is accepted here but
+          its bank asks for you again on any later charge. Any future expiry and any three digits.
         </p>
       </section>
     </div>`;

@@ -26,8 +26,9 @@ export interface StripeFakeOptions {
 }
 
 /**
- * A local stand-in for the subset of Stripe's REST API the shop uses (Checkout Sessions with manual capture,
- * PaymentIntents, Refunds), its hosted payment page and its signed webhooks. Point the official SDK at it with
+ * A local stand-in for the subset of Stripe's REST API the shop uses (Checkout Sessions with manual capture or in
+ * setup mode, Customers with saved cards, PaymentIntents including off-session charges, holds that lapse, Refunds),
+ * its hosted payment page and its signed webhooks. Point the official SDK at it with
  * `new Stripe(apiKey, { host, port, protocol: 'http' })`.
  */
 export async function startStripeFake(
@@ -36,7 +37,9 @@ export async function startStripeFake(
   if (opts.webhookUrl !== undefined && !isLoopbackHost(new URL(opts.webhookUrl).hostname)) {
     throw new Error(`The Stripe fake delivers webhooks on loopback only; refusing ${opts.webhookUrl}.`);
   }
-  const now = opts.now ?? Date.now;
+  const baseNow = opts.now ?? Date.now;
+  let clockOffsetMs = 0;
+  const now = () => baseNow() + clockOffsetMs;
   const nowSeconds = () => Math.floor(now() / 1000);
   const nextId = opts.mintId ?? mintProviderId;
   const state = loadFakeStripeState(opts.stateFile);
@@ -53,7 +56,8 @@ export async function startStripeFake(
   const webhooks = createWebhookDispatcher({
     webhookUrl: opts.webhookUrl,
     webhookSecret: opts.webhookSecret,
-    nowSeconds,
+    // Signed on the unmoved clock: the receiver checks the signature's age against its own clock.
+    nowSeconds: () => Math.floor(baseNow() / 1000),
     deliveries: state.deliveries,
   });
   let baseUrl = '';
@@ -63,6 +67,9 @@ export async function startStripeFake(
     nextId,
     nowMs: now,
     nowSeconds,
+    advanceClock(seconds) {
+      clockOffsetMs += seconds * 1000;
+    },
     paymentPageUrl: (sessionId) => `${baseUrl}/pay/${sessionId}`,
     emit(type, object) {
       const event: StripeEvent = {

@@ -13,6 +13,10 @@ export function loadFakeStripeState(file: string | undefined): FakeStripeState {
   const saved = JSON.parse(readFileSync(file, 'utf8')) as ReturnType<typeof snapshotFakeStripeState>;
   for (const [id, record] of Object.entries(saved.checkoutSessions ?? {})) state.checkoutSessions.set(id, record);
   for (const [id, intent] of Object.entries(saved.paymentIntents ?? {})) state.paymentIntents.set(id, intent);
+  for (const [id, customer] of Object.entries(saved.customers ?? {})) state.customers.set(id, customer);
+  for (const [id, method] of Object.entries(saved.paymentMethods ?? {})) state.paymentMethods.set(id, method);
+  for (const [id, intent] of Object.entries(saved.setupIntents ?? {})) state.setupIntents.set(id, intent);
+  for (const id of saved.cardsNeedingAuthentication ?? []) state.cardsNeedingAuthentication.add(id);
   for (const [id, charge] of Object.entries(saved.charges ?? {})) state.charges.set(id, charge);
   for (const [id, refund] of Object.entries(saved.refunds ?? {})) state.refunds.set(id, refund);
   for (const [key, answer] of Object.entries(saved.idempotentResponses ?? {}))

@@ -151,7 +151,8 @@ export function createApp(deps: AppDeps): Express {
   const quotes = createQuoteService({ db, fonts, versions });
   const storedQuotes = createStoredQuoteService({ db, quotes, now });
   const sharing = createDesignSharingService({ db });
-  const money = { db, stripe, mailer, now, appOrigin };
+  const holdWindowDays = config.stripe.holdWindowDays;
+  const money = { db, stripe, mailer, now, appOrigin, holdWindowDays };
 
   const app = express();
   app.disable('x-powered-by');
@@ -169,7 +170,7 @@ export function createApp(deps: AppDeps): Express {
     createPaymentWebhookRouter({
       stripe,
       webhookSecret: config.stripe.webhookSecret,
-      webhooks: createPaymentWebhookService({ db, stripe, mailer, appOrigin, now }),
+      webhooks: createPaymentWebhookService({ db, stripe, mailer, appOrigin, now, holdWindowDays }),
     }),
   );
 
@@ -211,7 +212,16 @@ export function createApp(deps: AppDeps): Express {
   app.use(
     '/api/orders',
     createOrdersRouter({
-      checkout: createCheckoutService({ db, stripe, mailer, storedQuotes, appOrigin, now, log: deps.log }),
+      checkout: createCheckoutService({
+        db,
+        stripe,
+        mailer,
+        storedQuotes,
+        appOrigin,
+        holdWindowDays,
+        now,
+        log: deps.log,
+      }),
       customerOrders: createCustomerOrderService({ db, mailer, quotes, appOrigin, now }),
     }),
   );

@@ -50,6 +50,8 @@ const appSchema = databaseSchema.extend({
   STRIPE_SECRET_KEY: z.string().min(1),
   STRIPE_WEBHOOK_SECRET: z.string().min(1),
   STRIPE_API_URL: z.url().optional(),
+  // Stripe's lifetime for an uncaptured online card authorization (Stripe docs: place a hold on a payment method, from memory).
+  CARD_HOLD_WINDOW_DAYS: z.coerce.number().int().min(1).max(30).default(7),
   SMTP_URL: z.string().min(1).default('smtp://127.0.0.1:2525'),
   MAIL_FROM: z.string().default('Wren & Bobbin <studio@wrenandbobbin.test>'),
   UPLOAD_MAX_BYTES: z.coerce
@@ -96,7 +98,8 @@ export interface AppConfig {
   ownerEmails: string[];
   database: DatabaseConfig;
   google: { clientId: string; clientSecret: string; providerBaseUrl?: string };
-  stripe: { secretKey: string; webhookSecret: string; apiUrl?: string };
+  /** `holdWindowDays`: how long a card hold lasts; orders due after it keep the card for a later charge instead. */
+  stripe: { secretKey: string; webhookSecret: string; apiUrl?: string; holdWindowDays: number };
   mail: { smtpUrl: string; from: string };
   uploadMaxBytes: number;
   /** Whether the API process also runs a job worker (the demo, one-server shops); false when workers run apart. */
@@ -174,7 +177,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Readonly<AppCo
       clientSecret: e.GOOGLE_CLIENT_SECRET,
       providerBaseUrl: e.GOOGLE_OAUTH_BASE_URL,
     },
-    stripe: { secretKey: e.STRIPE_SECRET_KEY, webhookSecret: e.STRIPE_WEBHOOK_SECRET, apiUrl: e.STRIPE_API_URL },
+    stripe: {
+      secretKey: e.STRIPE_SECRET_KEY,
+      webhookSecret: e.STRIPE_WEBHOOK_SECRET,
+      apiUrl: e.STRIPE_API_URL,
+      holdWindowDays: e.CARD_HOLD_WINDOW_DAYS,
+    },
     mail: { smtpUrl: e.SMTP_URL, from: e.MAIL_FROM },
     uploadMaxBytes: e.UPLOAD_MAX_BYTES,
     isWorkerInProcess: e.WORKER_IN_PROCESS,

@@ -26,7 +26,13 @@ beforeAll(async () => {
   standIn = await startStripeFake({ port: 0, apiKey: STRIPE_KEY, webhookSecret: WEBHOOK_SECRET, stateFile });
   port = Number(new URL(standIn.url).port);
   harness = await startApiHarness({
-    env: { STRIPE_API_URL: standIn.url, STRIPE_SECRET_KEY: STRIPE_KEY, STRIPE_WEBHOOK_SECRET: WEBHOOK_SECRET },
+    env: {
+      STRIPE_API_URL: standIn.url,
+      STRIPE_SECRET_KEY: STRIPE_KEY,
+      STRIPE_WEBHOOK_SECRET: WEBHOOK_SECRET,
+      // Holds across restarts: a 30-day window holds the test orders' cards (due Dec 18) instead of saving them.
+      CARD_HOLD_WINDOW_DAYS: '30',
+    },
   });
 });
 afterAll(async () => {

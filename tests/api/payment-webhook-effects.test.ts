@@ -90,7 +90,8 @@ describe('checkout.session.completed', () => {
     await harness
       .db('payments')
       .where({ order_id: (await orderRow(order.number)).id })
-      .update({ capture_before: new Date('2026-11-30T00:00:00Z') });
+      // A hold whose card was not kept for later: with a kept card the studio would charge that instead.
+      .update({ capture_before: new Date('2026-11-30T00:00:00Z'), payment_method_id: null });
 
     const lapsed = await detail(agent, order.number);
     expect(lapsed.actions).toContain('pay');

@@ -213,7 +213,13 @@ describe('the studio moves an order along', () => {
       .where({ order_id: order.id })
       .orderBy('id')
       .pluck('template')) as string[];
-    expect(templates.slice(-4)).toEqual(['proof_ready', 'order_shipped', 'refund_issued', 'refund_issued']);
+    expect(templates.slice(-5)).toEqual([
+      'proof_ready',
+      'card_charged',
+      'order_shipped',
+      'refund_issued',
+      'refund_issued',
+    ]);
     const shippedMail = await harness
       .db('email_log')
       .where({ order_id: order.id, template: 'order_shipped' })

@@ -17,6 +17,7 @@ const totalOf = async (page: Page) =>
 const screens = (name: string) => `test-results/screens/checkout-${name}.png`;
 
 /** A month ahead: well past the studio's lead time, so the order is not a rush. */
+// Thirty days out: past the 7-day hold window, so checkout saves the card for the charge instead of holding it.
 const neededBy = new Date(Date.now() + 30 * 86_400_000).toISOString().slice(0, 10);
 
 async function fillAddress(page: Page) {
@@ -28,17 +29,17 @@ async function fillAddress(page: Page) {
 }
 
 async function payWith(page: Page, cardNumber: string) {
-  await expect(page.getByRole('heading', { name: /^Pay \$/ })).toBeVisible();
+  await expect(page.getByRole('heading', { name: /^(Pay \$|Save your card)/ })).toBeVisible();
   await page.getByLabel('Card number').fill(cardNumber);
   await page.getByLabel('Expiry (MM/YY)').fill('12/30');
   await page.getByLabel('CVC').fill('123');
   await page.getByLabel('Name on card').fill('Priya Castellanos');
-  await page.getByRole('button', { name: /^Pay \$/ }).click();
+  await page.getByRole('button', { name: /^(Pay \$|Save your card)/ }).click();
 }
 
 let orderNumber = '';
 
-test('when Priya designs a bishop dress, orders it and pays with the test card, then the order waits for its proof with the card held', async ({
+test('when Priya designs a bishop dress, orders it and pays with the test card, then the order waits for its proof with the card saved for the charge', async ({
   page,
 }) => {
   await page.goto('/design/bishop-dress');
@@ -89,7 +90,9 @@ test('when Priya designs a bishop dress, orders it and pays with the test card, 
   orderNumber = /WB-\d+/.exec(page.url())![0];
   await expect(page.getByRole('heading', { name: `Order ${orderNumber}` })).toBeVisible();
   await expect(page.getByText('Proof on its way')).toBeVisible();
-  await expect(page.getByRole('region', { name: 'Payment' })).toContainText('is held on your card, not charged');
+  await expect(page.getByRole('region', { name: 'Payment' })).toContainText(
+    'Your card is saved with our payment provider',
+  );
   await expect(page.getByRole('list', { name: 'Where your order is' }).getByRole('listitem').nth(1)).toHaveAttribute(
     'aria-current',
     'step',
@@ -148,7 +151,9 @@ test('when the card is declined, then the payment page says so, nothing is charg
   await payment.getByRole('button', { name: 'Try another card' }).click();
   await payWith(page, '4242 4242 4242 4242');
   await expect(page.getByText('Thank you! Your order is in')).toBeVisible();
-  await expect(page.getByRole('region', { name: 'Payment' })).toContainText('is held on your card, not charged');
+  await expect(page.getByRole('region', { name: 'Payment' })).toContainText(
+    'Your card is saved with our payment provider',
+  );
 });
 
 test('when the studio sends proofs, then Priya pins a change on the first, approves the second, and the e-mails arrive', async ({

@@ -63,8 +63,21 @@ export const orderDetailResponse = z.object({
       capturedCents: z.number().int(),
       refundedCents: z.number().int(),
       captureBefore: z.string().nullable(),
+      /** hold, saved_card (kept for later, nothing held), off_session (the studio's charge of it) or payment_link. */
+      method: z.string(),
+      /** Whether the card is kept at the provider for a later charge without the customer. */
+      isCardKept: z.boolean(),
     }),
   ),
+  /** What the studio's charge button does now, for the order's current total; null once charged or before a card. */
+  charge: z
+    .object({
+      kind: z.enum(['capture', 'capture_less', 'charge_saved_card', 'ask_customer']),
+      amountCents: z.number().int(),
+      /** In plain words for the studio. */
+      summary: z.string(),
+    })
+    .nullable(),
   proofs: z.array(
     z.object({
       version: z.number().int(),

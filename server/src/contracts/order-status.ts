@@ -16,7 +16,15 @@ export const orderStatuses = [
 export const orderStatus = z.enum(orderStatuses);
 export type OrderStatus = z.infer<typeof orderStatus>;
 
-export const paymentStatuses = ['none', 'authorized', 'captured', 'partially_refunded', 'refunded', 'voided'] as const;
+export const paymentStatuses = [
+  'none',
+  'authorized',
+  'saved',
+  'captured',
+  'partially_refunded',
+  'refunded',
+  'voided',
+] as const;
 export const paymentStatus = z.enum(paymentStatuses);
 export type PaymentStatus = z.infer<typeof paymentStatus>;
 

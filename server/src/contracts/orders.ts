@@ -207,6 +207,10 @@ export const customerOrderResponse = z.object({
     holdExpiresAt: z.string().nullable(),
     /** Set when the latest attempt to pay did not go through, in words for the customer. */
     failureMessage: z.string().nullable(),
+    /** The card is kept for the charge at approval and nothing is held (the work is due after a hold would end). */
+    isCardSaved: z.boolean(),
+    /** The page to pay on when the customer's bank wants them to confirm the charge themselves. */
+    confirmPaymentUrl: z.string().nullable(),
   }),
   proofs: z.array(proofSummary),
   timeline: z.array(timelineEntry),

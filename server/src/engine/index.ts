@@ -77,3 +77,6 @@ export {
   weekStartOf,
 } from './shop-calendar.ts';
 export type { DatedOrder, ShopCalendar } from './shop-calendar.ts';
+
+export { chargeStepOf, planCardPayment } from './card-payment-plan.ts';
+export type { CardMethod, CardPlan, ChargeStep } from './card-payment-plan.ts';

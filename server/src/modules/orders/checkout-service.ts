@@ -27,7 +27,9 @@ import type { CurrentUser } from '../../contracts/users.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import { formatMoneyText } from '../mail/money-text.ts';
 import { orderPageUrl } from '../mail/mail-layout.ts';
-import { openCheckoutSession } from './checkout-session.ts';
+import { openCheckoutSession, providerCustomerFor } from './checkout-session.ts';
+import { findProviderCustomer } from './kept-card-repo.ts';
+import { chooseCheckoutMethod } from './payment-method-choice.ts';
 import { moveOrder } from './order-transitions.ts';
 import { queueLoggedMail, sendQueuedMail } from '../mail/order-mail.ts';
 import { orderCancelledMail } from './customer-order-mail.ts';
@@ -39,6 +41,8 @@ export interface CheckoutDeps {
   mailer: Mailer;
   storedQuotes: StoredQuoteService;
   appOrigin: string;
+  /** How long a card hold lasts (`CARD_HOLD_WINDOW_DAYS`). */
+  holdWindowDays: number;
   now: () => Date;
   log: (line: string) => void;
 }
@@ -50,7 +54,13 @@ export interface CheckoutDeps {
 export function isPaymentNeeded(order: Pick<OrderRecord, 'status'>, payments: PaymentRecord[], now: Date): boolean {
   if (order.status === 'awaiting_payment') return true;
   if (!isIn(cardHeldOrderStatuses, order.status as OrderStatus)) return false;
-  return !payments.some((p) => p.status === 'authorized' && (p.captureBefore === null || p.captureBefore > now));
+  // A payment link is waiting: the bank wanted the customer to confirm the charge themselves.
+  if (payments.at(-1)?.method === 'payment_link' && payments.at(-1)?.status === 'pending') return true;
+  return !payments.some(
+    (p) =>
+      p.status === 'saved' ||
+      (p.status === 'authorized' && (p.paymentMethodId !== null || p.captureBefore === null || p.captureBefore > now)),
+  );
 }
 
 /** Checkout: an order from a stored quote, the card held through the payment provider, and cancelling before a charge. */
@@ -156,6 +166,7 @@ export function createCheckoutService(deps: CheckoutDeps) {
     const checkoutUrl = await paymentPageOrOrderPage(
       {
         id: created.orderId,
+        status: 'awaiting_payment',
         number: created.number,
         totalCents: quote.totalCents,
         currency: quote.currency,
@@ -198,10 +209,7 @@ export function createCheckoutService(deps: CheckoutDeps) {
    * (the provider or the database is away), the answer is still 201 and leads to the order's page, which offers to
    * pay; the same checkout sent again opens the page for the same attempt.
    */
-  async function paymentPageOrOrderPage(
-    order: Parameters<typeof openCheckoutSession>[2],
-    paymentId: number,
-  ): Promise<string> {
+  async function paymentPageOrOrderPage(order: PayingOrder, paymentId: number): Promise<string> {
     try {
       return await startPayment(order, paymentId);
     } catch (error) {
@@ -236,11 +244,34 @@ export function createCheckoutService(deps: CheckoutDeps) {
     });
   }
 
-  /** Opens the hosted payment page for one pending payment row and keeps the session's id on it. */
-  async function startPayment(order: Parameters<typeof openCheckoutSession>[2], paymentId: number): Promise<string> {
+  /**
+   * Opens the hosted payment page for one pending payment row (holding the card, keeping it for later, or charging
+   * an approved order at once) and keeps the session's id, its page and the provider's customer on the row.
+   */
+  async function startPayment(order: PayingOrder, paymentId: number): Promise<string> {
     try {
-      const session = await openCheckoutSession(deps.stripe, deps.appOrigin, order, paymentId);
-      await updatePayment(db, paymentId, { checkout_session_id: session.id }, deps.now());
+      const { method } = await chooseCheckoutMethod(db, order, deps.now(), deps.holdWindowDays);
+      const providerCustomerId = await providerCustomerFor(
+        deps.stripe,
+        order,
+        await findProviderCustomer(db, order.id),
+      );
+      const session = await openCheckoutSession(deps.stripe, deps.appOrigin, order, {
+        id: paymentId,
+        method,
+        providerCustomerId,
+      });
+      await updatePayment(
+        db,
+        paymentId,
+        {
+          checkout_session_id: session.id,
+          method,
+          provider_customer_id: providerCustomerId,
+          payment_page_url: session.url,
+        },
+        deps.now(),
+      );
       return session.url;
     } catch (error) {
       // The order stays awaiting payment, and its page offers to try again. Marking the attempt is best effort: a
@@ -262,6 +293,11 @@ export function createCheckoutService(deps: CheckoutDeps) {
           : 'Your card is already held for this order; there is nothing to pay now.',
       );
     }
+    // A payment link the customer was e-mailed is the same attempt: its page opens again.
+    const payments = await listPayments(db, order.id);
+    const waiting = payments.findLast((p) => p.status === 'pending' && p.paymentPageUrl !== null);
+    if (waiting?.paymentPageUrl && waiting.method === 'payment_link' && order.status === 'proof_approved')
+      return ok({ number: order.number, checkoutUrl: waiting.paymentPageUrl });
     const paymentId = await insertPendingPayment(db, order, deps.now());
     const description = (await readOrderDescription(db, order.id)) ?? order.number;
     const checkoutUrl = await startPayment({ ...order, description, customerEmail: customer.email }, paymentId);
@@ -284,7 +320,11 @@ export function createCheckoutService(deps: CheckoutDeps) {
         now,
       });
       if (!move.ok) return move;
-      const held = (await listPayments(trx, order.id)).filter((p) => p.status === 'authorized' && p.paymentIntentId);
+      const payments = await listPayments(trx, order.id);
+      // A card only kept for later holds nothing: it is simply not charged.
+      for (const kept of payments.filter((p) => p.status === 'saved'))
+        await updatePayment(trx, kept.id, { status: 'voided' }, now);
+      const held = payments.filter((p) => p.status === 'authorized' && p.paymentIntentId);
       for (const payment of held) {
         await releaseHold(deps.stripe, payment.paymentIntentId!);
         await updatePayment(trx, payment.id, { status: 'voided' }, now);
@@ -312,6 +352,9 @@ export function createCheckoutService(deps: CheckoutDeps) {
 
   return { place, openPayment, cancel };
 }
+
+/** The order as the payment page needs it: its figures, its status (which decides how the card is taken). */
+type PayingOrder = Parameters<typeof openCheckoutSession>[2] & { status: OrderStatus };
 
 /** Cancels a held PaymentIntent; one the provider already let go of (lapsed, cancelled) needs nothing more. */
 async function releaseHold(stripe: Stripe, paymentIntentId: string): Promise<void> {

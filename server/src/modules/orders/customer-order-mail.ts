@@ -39,6 +39,7 @@ export function orderPlacedMail(
   to: string,
   totalText: string,
   due: { date: string; isAskedFor: boolean } | null,
+  card: 'held' | 'saved' = 'held',
 ): LoggedMail {
   const when = due
     ? due.isAskedFor
@@ -47,7 +48,9 @@ export function orderPlacedMail(
     : [];
   return compose(context, to, 'order_placed', `We have your order ${context.number}`, [
     `Thank you! Your order ${context.number} is in.`,
-    `We have put a hold of ${totalText} on your card. Nothing is charged until you approve the proof of your design.`,
+    card === 'held'
+      ? `We have put a hold of ${totalText} on your card. Nothing is charged until you approve the proof of your design.`
+      : `Your card is saved with our payment provider and nothing has been taken yet. A hold would run out before your order is due, so we charge the order's total (${totalText} now) when you approve the proof of your design.`,
     ...when,
     'Next, we draw a proof of your design on the garment and e-mail you when it is ready to look at.',
   ]);

@@ -218,8 +218,11 @@ function paymentSummary(
   const latest = payments.at(-1);
   const failedNote = events.findLast((e) => e.type === 'payment_failed')?.note;
   const hasLapsed = !held.length && payments.some((p) => p.status === 'authorized');
+  const waitingLink = latest?.method === 'payment_link' && latest.status === 'pending' ? latest.paymentPageUrl : null;
   let failureMessage: string | null = null;
-  if (needsPayment && latest?.status === 'failed')
+  if (needsPayment && waitingLink)
+    failureMessage = 'Your bank asked for you to confirm this payment yourself, so we could not charge your card.';
+  else if (needsPayment && latest?.status === 'failed')
     failureMessage = failedNote ?? 'We could not open the payment page. Please try again.';
   else if (needsPayment && hasLapsed)
     failureMessage =
@@ -235,6 +238,8 @@ function paymentSummary(
         .sort((a, b) => a.getTime() - b.getTime())[0]
         ?.toISOString() ?? null,
     failureMessage,
+    isCardSaved: payments.some((p) => p.status === 'saved'),
+    confirmPaymentUrl: needsPayment ? waitingLink : null,
   };
 }
 

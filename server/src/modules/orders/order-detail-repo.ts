@@ -10,7 +10,7 @@ const iso = (value: Date | string | null): string | null => (value === null ? nu
 export async function readOrderDetail(
   db: Db,
   number: string,
-): Promise<Omit<OrderDetailResponse, 'studioActions'> | undefined> {
+): Promise<Omit<OrderDetailResponse, 'studioActions' | 'charge'> | undefined> {
   const order = await db('orders as o')
     .join('users as u', 'u.id', 'o.customer_id')
     .join('quotes as q', 'q.id', 'o.quote_id')
@@ -41,7 +41,16 @@ export async function readOrderDetail(
       .where('i.order_id', order.id)
       .orderBy('i.id'),
     db('payments')
-      .select('status', 'amount_authorized_cents', 'amount_captured_cents', 'amount_refunded_cents', 'capture_before')
+      .select(
+        'status',
+        'amount_authorized_cents',
+        'amount_captured_cents',
+        'amount_refunded_cents',
+        'capture_before',
+        'method',
+        'provider_customer_id',
+        'payment_method_id',
+      )
       .where({ order_id: order.id })
       .orderBy('id'),
     db('proofs')
@@ -98,6 +107,8 @@ export async function readOrderDetail(
       capturedCents: Number(p.amount_captured_cents),
       refundedCents: Number(p.amount_refunded_cents),
       captureBefore: iso(p.capture_before),
+      method: p.method,
+      isCardKept: p.provider_customer_id !== null && p.payment_method_id !== null,
     })),
     proofs: proofs.map((p) => ({
       version: p.version,

@@ -6,7 +6,6 @@
  * replays Stripe's first answer instead of charging or refunding twice.
  */
 import { formatMoneyText } from '../mail/money-text.ts';
-import type { Knex } from 'knex';
 import Stripe from 'stripe';
 import type { Db } from '../../db/knex.ts';
 import type { Mailer } from '../../integrations/mailer.ts';
@@ -18,13 +17,13 @@ import {
   readOrderStanding,
   recordOrderEvent,
   updatePayment,
-  type StudioOrder,
 } from './studio-order-repo.ts';
 import { queueLoggedMail, sendQueuedMail, type QueuedMail } from '../mail/order-mail.ts';
 import { planOrderMove } from './order-flow.ts';
 import { moveOrder } from './order-transitions.ts';
 import { applyCapture } from './payment-capture.ts';
-import { orderCancelledMail, payAgainMail, refundIssuedMail } from './studio-order-mail.ts';
+import { createOrderCharge } from './order-charge.ts';
+import { orderCancelledMail, refundIssuedMail } from './studio-order-mail.ts';
 
 export interface OrderPaymentDeps {
   db: Db;
@@ -32,6 +31,7 @@ export interface OrderPaymentDeps {
   mailer: Mailer;
   now: () => Date;
   appOrigin: string;
+  holdWindowDays: number;
 }
 
 /** Who asks: a signed-in member of the studio. */
@@ -57,38 +57,17 @@ const unknownHold = (paymentIntentId: string, doing: string) =>
 
 export function createOrderPaymentService(deps: OrderPaymentDeps) {
   const { db, stripe } = deps;
+  const orderCharge = createOrderCharge(deps);
 
   async function finish(outcome: Outcome): Promise<Result<OrderActionResponse>> {
     if (outcome.mail) await sendQueuedMail(deps, outcome.mail);
     return outcome.result;
   }
 
-  /** The hold ran out: the payment is voided, the order keeps its approved proof and waits for a new card. */
-  async function markLapsed(
-    trx: Knex.Transaction,
-    order: StudioOrder,
-    paymentId: number,
-    actor: StudioActor,
-    now: Date,
-  ): Promise<Outcome> {
-    await updatePayment(trx, order.id, paymentId, { status: 'voided' });
-    await recordOrderEvent(trx, {
-      orderId: order.id,
-      type: 'authorization_lapsed',
-      actorUserId: actor.userId,
-      payload: { paymentId },
-      now,
-    });
-    return {
-      result: failure(
-        'conflict',
-        'The hold on the customer’s card has run out, so nothing could be charged. We have e-mailed them a link to confirm their card again; charge the order once they have.',
-      ),
-      mail: await queueLoggedMail(trx, payAgainMail(order, deps.appOrigin), now),
-    };
-  }
-
-  /** Charges the held card for an approved proof and starts production: exactly one capture per payment. */
+  /**
+   * Charges an approved order for its current total and starts production: the hold captured (in part when the
+   * total fell), or the kept card charged off-session, or a payment link e-mailed when the bank wants the customer.
+   */
   async function capture(number: string, actor: StudioActor): Promise<Result<OrderActionResponse>> {
     const outcome = await db.transaction(async (trx): Promise<Outcome> => {
       const now = deps.now();
@@ -113,45 +92,7 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
         return { result: failure('conflict', `Order ${number} has already been charged.`) };
       }
       if (!planned.ok) return { result: failure(planned.kind, planned.reason) };
-      if (!payment || payment.status !== 'authorized' || !payment.paymentIntentId) {
-        return {
-          result: failure(
-            'conflict',
-            'No card is held for this order, so there is nothing to charge. The customer needs to pay again first.',
-          ),
-        };
-      }
-      if (payment.captureBefore && payment.captureBefore.getTime() <= now.getTime())
-        return markLapsed(trx, order, payment.id, actor, now);
-
-      let capturedCents: number;
-      try {
-        const intent = await stripe.paymentIntents.capture(
-          payment.paymentIntentId,
-          {},
-          { idempotencyKey: `capture-order-${order.id}-${payment.id}` },
-        );
-        capturedCents = intent.amount_received;
-      } catch (error) {
-        if (isUnknownToProvider(error)) return { result: unknownHold(payment.paymentIntentId, 'charged') };
-        if (!isStripeError(error) || error.type !== 'StripeInvalidRequestError') throw error;
-        const intent = await stripe.paymentIntents.retrieve(payment.paymentIntentId);
-        if (intent.status === 'canceled') return markLapsed(trx, order, payment.id, actor, now);
-        if (intent.status !== 'succeeded')
-          return { result: failure('payment-failed', `The card could not be charged: ${error.message}`) };
-        // Charged by an earlier attempt whose answer was lost: record that charge, never make a second one.
-        capturedCents = intent.amount_received;
-      }
-      await applyCapture(trx, {
-        orderId: order.id,
-        paymentId: payment.id,
-        paymentIntentId: payment.paymentIntentId,
-        capturedCents,
-        actor: actor.role,
-        actorUserId: actor.userId,
-        now,
-      });
-      return { result: ok(await readOrderStanding(trx, order.id)) };
+      return orderCharge.charge(trx, order, payment, actor, now);
     });
     return finish(outcome);
   }
@@ -196,6 +137,9 @@ export function createOrderPaymentService(deps: OrderPaymentDeps) {
           now,
         });
         wasCardReleased = true;
+      } else if (payment?.status === 'saved') {
+        // A card only kept for later holds nothing: it is simply never charged.
+        await updatePayment(trx, order.id, payment.id, { status: 'voided' });
       }
       const moved = await moveOrder(trx, {
         orderId: order.id,

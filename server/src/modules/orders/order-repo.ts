@@ -6,7 +6,10 @@ import type { ShipTo } from '../../contracts/orders.ts';
 const ORDER_NUMBER_PREFIX = 'WB';
 
 export type PaymentRowStatus =
-  'pending' | 'authorized' | 'captured' | 'partially_refunded' | 'refunded' | 'voided' | 'failed';
+  'pending' | 'authorized' | 'saved' | 'captured' | 'partially_refunded' | 'refunded' | 'voided' | 'failed';
+
+/** How a payment row takes money: a hold, a card kept for later, the studio's off-session charge, a payment link. */
+export type PaymentMethodKind = 'hold' | 'saved_card' | 'off_session' | 'payment_link';
 
 /** An order as checkout and the payment webhooks handle it. */
 export interface OrderRecord {
@@ -29,6 +32,10 @@ export interface PaymentRecord {
   capturedCents: number;
   refundedCents: number;
   captureBefore: Date | null;
+  method: PaymentMethodKind;
+  providerCustomerId: string | null;
+  paymentMethodId: string | null;
+  paymentPageUrl: string | null;
 }
 
 const toOrder = (row: Record<string, unknown>): OrderRecord => ({
@@ -51,6 +58,10 @@ const toPayment = (row: Record<string, unknown>): PaymentRecord => ({
   capturedCents: Number(row.amount_captured_cents),
   refundedCents: Number(row.amount_refunded_cents),
   captureBefore: row.capture_before ? new Date(row.capture_before as string) : null,
+  method: (row.method as PaymentMethodKind | undefined) ?? 'hold',
+  providerCustomerId: (row.provider_customer_id as string | null) ?? null,
+  paymentMethodId: (row.payment_method_id as string | null) ?? null,
+  paymentPageUrl: (row.payment_page_url as string | null) ?? null,
 });
 
 const orderColumns = ['id', 'number', 'customer_id', 'status', 'payment_status', 'total_cents', 'currency'];
@@ -168,8 +179,10 @@ export async function insertPendingPayment(
   trx: Db,
   order: Pick<OrderRecord, 'id' | 'currency'>,
   now: Date,
+  extra: { method?: PaymentMethodKind; amount_authorized_cents?: number; provider_customer_id?: string } = {},
 ): Promise<number> {
   const [id] = await trx('payments').insert({
+    ...extra,
     order_id: order.id,
     status: 'pending',
     currency: order.currency,

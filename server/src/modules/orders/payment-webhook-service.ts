@@ -3,12 +3,8 @@ import type Stripe from 'stripe';
 import type { Db } from '../../db/knex.ts';
 import type { Mailer } from '../../integrations/mailer.ts';
 import { markWebhookEventProcessed, recordWebhookEvent } from './webhook-event-repo.ts';
-import { shopCalendarOf, shopScheduleOf } from '../settings/settings-service.ts';
-import { dueDateOf } from '../../engine/index.ts';
+import { createCheckoutCompleted, readSessionOutcome, type SessionOutcome } from './checkout-completed.ts';
 import {
-  findCustomerEmail,
-  findOrderNeededBy,
-  findOrderById,
   insertOrderNote,
   lockLatestPendingPayment,
   lockPaymentBy,
@@ -16,13 +12,7 @@ import {
   updatePayment,
   type PaymentRecord,
 } from './order-repo.ts';
-import type { LoggedMail } from '../mail/order-mail.ts';
-import { queueLoggedMail, sendQueuedMail } from '../mail/order-mail.ts';
-import { moveOrder } from './order-transitions.ts';
 import { applyCapture } from './payment-capture.ts';
-import { finalStatuses } from './order-flow.ts';
-import { orderPlacedMail } from './customer-order-mail.ts';
-import { formatMoneyText } from '../mail/money-text.ts';
 
 /** What a payment webhook changes; `after` runs once the transaction has committed (the e-mails). */
 type Effect = { after?: () => Promise<unknown> } | undefined;
@@ -41,15 +31,19 @@ export function createPaymentWebhookService(deps: {
   mailer: Mailer;
   appOrigin: string;
   now: () => Date;
+  holdWindowDays: number;
 }) {
   const { db } = deps;
+  const checkoutCompleted = createCheckoutCompleted(deps, (trx, payment, now) =>
+    attemptFailed(trx, payment, GENERIC_DECLINE, now),
+  );
 
   async function receive(event: Stripe.Event, rawPayload: string): Promise<{ isDuplicate: boolean }> {
     // The PaymentIntent's own status is what counts, so it is read before the transaction opens.
-    const intent =
+    const provider: SessionOutcome =
       event.type === 'checkout.session.completed'
-        ? await intentOf(event.data.object as Stripe.Checkout.Session)
-        : undefined;
+        ? await readSessionOutcome(deps.stripe, event.data.object as Stripe.Checkout.Session)
+        : {};
     const outcome = await db.transaction(async (trx) => {
       const now = deps.now();
       const isNew = await recordWebhookEvent(trx, {
@@ -59,7 +53,7 @@ export function createPaymentWebhookService(deps: {
         receivedAt: now,
       });
       if (!isNew) return { isDuplicate: true, effect: undefined };
-      const effect = await apply(trx, event, intent, now);
+      const effect = await apply(trx, event, provider, now);
       await markWebhookEventProcessed(trx, event.id, now);
       return { isDuplicate: false, effect };
     });
@@ -67,20 +61,15 @@ export function createPaymentWebhookService(deps: {
     return { isDuplicate: outcome.isDuplicate };
   }
 
-  async function intentOf(session: Stripe.Checkout.Session): Promise<Stripe.PaymentIntent | undefined> {
-    const id = typeof session.payment_intent === 'string' ? session.payment_intent : session.payment_intent?.id;
-    return id ? deps.stripe.paymentIntents.retrieve(id, { expand: ['latest_charge'] }) : undefined;
-  }
-
   async function apply(
     trx: Knex.Transaction,
     event: Stripe.Event,
-    intent: Stripe.PaymentIntent | undefined,
+    outcome: SessionOutcome,
     now: Date,
   ): Promise<Effect> {
     switch (event.type) {
       case 'checkout.session.completed':
-        return sessionCompleted(trx, event.data.object, intent, now);
+        return sessionCompleted(trx, event.data.object, outcome, now);
       case 'checkout.session.expired':
         return attemptFailed(
           trx,
@@ -93,6 +82,12 @@ export function createPaymentWebhookService(deps: {
         const payment =
           (await lockPaymentBy(trx, { paymentIntentId: pi.id })) ?? (await pendingPaymentOfOrder(trx, pi.metadata));
         return attemptFailed(trx, payment, pi.last_payment_error?.message ?? GENERIC_DECLINE, now);
+      }
+      case 'setup_intent.setup_failed': {
+        // A card declined on a page that only keeps it (setup mode): the attempt failed as a declined payment does.
+        const si = event.data.object;
+        const payment = await pendingPaymentOfOrder(trx, si.metadata);
+        return attemptFailed(trx, payment, si.last_setup_error?.message ?? GENERIC_DECLINE, now);
       }
       case 'payment_intent.canceled':
         return bringInLine(
@@ -143,11 +138,11 @@ export function createPaymentWebhookService(deps: {
     }
   }
 
-  /** The card is held: the payment is authorized and a waiting order is placed; a later hold is simply recorded. */
+  /** The payment page finished: a held card, a card kept for later, or a payment link paid. */
   async function sessionCompleted(
     trx: Knex.Transaction,
     session: Stripe.Checkout.Session,
-    intent: Stripe.PaymentIntent | undefined,
+    outcome: SessionOutcome,
     now: Date,
   ): Promise<Effect> {
     const payment =
@@ -155,78 +150,7 @@ export function createPaymentWebhookService(deps: {
       (await pendingPaymentOfOrder(trx, session.metadata));
     // A declined card fails the attempt, yet the customer may try another card on the same page and succeed.
     if (!payment || !['pending', 'failed'].includes(payment.status)) return undefined;
-    if (!intent || intent.status !== 'requires_capture') {
-      return attemptFailed(trx, payment, GENERIC_DECLINE, now);
-    }
-    const charge = typeof intent.latest_charge === 'object' ? intent.latest_charge : null;
-    const captureBefore = charge?.payment_method_details?.card?.capture_before;
-    await updatePayment(
-      trx,
-      payment.id,
-      {
-        status: 'authorized',
-        checkout_session_id: session.id,
-        payment_intent_id: intent.id,
-        amount_authorized_cents: intent.amount_capturable,
-        capture_before: captureBefore ? new Date(captureBefore * 1000) : null,
-        authorized_at: now,
-      },
-      now,
-    );
-    const order = await findOrderById(trx, payment.orderId);
-    if (!order) throw new Error(`Payment ${payment.id} belongs to no order.`);
-    const payload = { paymentIntentId: intent.id, amountCents: intent.amount_capturable };
-    if (order.status === 'awaiting_payment') {
-      const moved = await moveOrder(trx, {
-        orderId: order.id,
-        action: 'authorize',
-        actor: 'system',
-        actorUserId: null,
-        payload,
-        now,
-      });
-      if (!moved.ok) throw new Error(`Order ${order.number} could not take its payment: ${moved.error.message}`);
-    } else {
-      // A second payment after a lapsed hold: the order is already under way, so only the new hold is noted.
-      await insertOrderNote(trx, {
-        orderId: order.id,
-        type: 'payment_authorized',
-        actorUserId: null,
-        payload,
-        at: now,
-      });
-    }
-    if (finalStatuses.includes(order.status)) {
-      // The order was cancelled while the payment page was open: the new hold is let go at once.
-      await deps.stripe.paymentIntents.cancel(intent.id, { cancellation_reason: 'abandoned' });
-      await updatePayment(trx, payment.id, { status: 'voided' }, now);
-      await insertOrderNote(trx, {
-        orderId: order.id,
-        type: 'payment_voided',
-        actorUserId: null,
-        payload: { paymentIntentId: intent.id },
-        at: now,
-      });
-    }
-    await syncOrderPaymentStatus(trx, order.id, now);
-    if (order.status !== 'awaiting_payment') return undefined;
-    const customerEmail = await findCustomerEmail(trx, order.id);
-    const [shop, calendar, neededBy] = await Promise.all([
-      shopScheduleOf(trx),
-      shopCalendarOf(trx),
-      findOrderNeededBy(trx, order.id),
-    ]);
-    // The card is held now, so this is the moment the lead time counts from (the order's placed_at).
-    const dueDate = dueDateOf({ neededBy, placedAtMs: now.getTime() }, calendar);
-    const mail: LoggedMail = orderPlacedMail(
-      { appOrigin: deps.appOrigin, shopName: shop.name, number: order.number, orderId: order.id },
-      customerEmail,
-      formatMoneyText(intent.amount_capturable, order.currency),
-      dueDate === null ? null : { date: dueDate, isAskedFor: neededBy !== null },
-    );
-    // Queued with the order's move, in this transaction; the first attempt follows the commit.
-    const queued = await queueLoggedMail(trx, mail, now);
-    return { after: () => sendQueuedMail({ db, mailer: deps.mailer, now: deps.now }, queued) };
+    return checkoutCompleted.completed(trx, session, payment, outcome, now);
   }
 
   /** A declined card or an abandoned page: the attempt failed, the order keeps waiting for payment. */

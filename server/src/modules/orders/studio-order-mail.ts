@@ -18,7 +18,8 @@ export interface MailOrder {
 
 const firstName = (name: string) => name.split(/\s+/)[0] || name;
 
-function compose(order: MailOrder, template: string, subject: string, paragraphs: string[]): LoggedMail {
+/** A message to the order's customer: greeting, paragraphs, the shop's name. */
+export function compose(order: MailOrder, template: string, subject: string, paragraphs: string[]): LoggedMail {
   return {
     to: order.customerEmail,
     subject,

@@ -21,11 +21,13 @@ export interface StudioOrder {
 export interface OrderPayment {
   id: number;
   paymentIntentId: string | null;
-  status: 'pending' | 'authorized' | 'captured' | 'partially_refunded' | 'refunded' | 'voided' | 'failed';
+  status: 'pending' | 'authorized' | 'saved' | 'captured' | 'partially_refunded' | 'refunded' | 'voided' | 'failed';
   authorizedCents: number;
   capturedCents: number;
   refundedCents: number;
   captureBefore: Date | null;
+  /** The card kept at the provider for a later off-session charge, when checkout saved it. */
+  keptCard: { customerId: string; paymentMethodId: string } | null;
 }
 
 export async function findStudioOrder(
@@ -73,7 +75,7 @@ export async function findStudioOrder(
 export async function lockLivePayment(trx: Knex.Transaction, orderId: number): Promise<OrderPayment | undefined> {
   const row = await trx('payments')
     .where({ order_id: orderId })
-    .whereIn('status', ['authorized', 'captured', 'partially_refunded', 'refunded'])
+    .whereIn('status', ['authorized', 'saved', 'captured', 'partially_refunded', 'refunded'])
     .orderBy('id', 'desc')
     .forUpdate()
     .first();
@@ -86,6 +88,10 @@ export async function lockLivePayment(trx: Knex.Transaction, orderId: number): P
     capturedCents: Number(row.amount_captured_cents),
     refundedCents: Number(row.amount_refunded_cents),
     captureBefore: row.capture_before === null ? null : new Date(row.capture_before),
+    keptCard:
+      row.provider_customer_id && row.payment_method_id
+        ? { customerId: row.provider_customer_id, paymentMethodId: row.payment_method_id }
+        : null,
   };
 }
 
@@ -94,12 +100,19 @@ export async function updatePayment(
   trx: Knex.Transaction,
   orderId: number,
   paymentId: number,
-  changes: { status: PaymentStatus; capturedCents?: number; refundedCents?: number; capturedAt?: Date },
+  changes: {
+    status: PaymentStatus;
+    authorizedCents?: number;
+    capturedCents?: number;
+    refundedCents?: number;
+    capturedAt?: Date;
+  },
 ): Promise<void> {
   await trx('payments')
     .where({ id: paymentId })
     .update({
       status: changes.status,
+      ...(changes.authorizedCents !== undefined && { amount_authorized_cents: changes.authorizedCents }),
       ...(changes.capturedCents !== undefined && { amount_captured_cents: changes.capturedCents }),
       ...(changes.refundedCents !== undefined && { amount_refunded_cents: changes.refundedCents }),
       ...(changes.capturedAt && { captured_at: changes.capturedAt }),

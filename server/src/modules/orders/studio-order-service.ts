@@ -22,6 +22,7 @@ function dated(row: BoardOrderRow, schedule: ShopCalendar & { leadTimeDays: numb
 }
 import { readOrderArtworkOwner, readOrderDetail } from './order-detail-repo.ts';
 import { availableOrderActions } from './order-flow.ts';
+import { previewCharge } from './charge-preview.ts';
 
 /** What the studio reads about orders: the board, the due-date calendar, one order's page and its customer's pictures. */
 export function createStudioOrderService(deps: { db: Db; artwork: ArtworkService; now: () => Date }) {
@@ -60,7 +61,11 @@ export function createStudioOrderService(deps: { db: Db; artwork: ArtworkService
       const studioActions = availableOrderActions(detail.order.status, 'staff').filter(
         (action) => action !== 'authorize' && action !== 'request_changes' && action !== 'approve_proof',
       );
-      return ok({ ...detail, studioActions: studioActions as OrderDetailResponse['studioActions'] });
+      return ok({
+        ...detail,
+        studioActions: studioActions as OrderDetailResponse['studioActions'],
+        charge: previewCharge(detail, deps.now()),
+      });
     },
 
     /** Only uploads the order's designs place, and only the order's customer's, for the studio to digitize. */

@@ -47,7 +47,7 @@ function Confirm({
  * confirmation for every money move and the server's answer shown in place.
  */
 export function OrderActions({ detail }: { detail: OrderDetailResponse }) {
-  const { order, payments, studioActions } = detail;
+  const { order, payments, studioActions, charge } = detail;
   const [step, setStep] = useState<Step>(null);
   const [reason, setReason] = useState('');
   const [refundText, setRefundText] = useState('');
@@ -78,10 +78,8 @@ export function OrderActions({ detail }: { detail: OrderDetailResponse }) {
   return (
     <div className="grid gap-3">
       <div className="flex flex-wrap gap-2">
-        {can('start_production') && order.paymentStatus === 'authorized' && (
-          <Button onClick={() => open('charge')}>
-            Approve & charge {money(live?.authorizedCents ?? order.totalCents)}
-          </Button>
+        {can('start_production') && charge && (
+          <Button onClick={() => open('charge')}>Approve & charge {money(charge.amountCents)}</Button>
         )}
         {can('mark_stitched') && (
           <Button onClick={() => run({ action: 'stitched' })} disabled={action.isPending}>
@@ -100,16 +98,25 @@ export function OrderActions({ detail }: { detail: OrderDetailResponse }) {
           </Button>
         )}
       </div>
-      {can('start_production') && order.paymentStatus !== 'authorized' && (
-        <p className="rounded-md bg-saffron-100 p-2 text-sm">
-          The proof is approved, but no card is held: the customer has been asked to confirm their card again. Charge
-          the order once they have.
+      {can('start_production') && charge && (
+        <p className="text-sm text-walnut-700" id="charge-plan">
+          {charge.summary}
         </p>
       )}
-      {step === 'charge' && (
+      {can('start_production') && !charge && (
+        <p className="rounded-md bg-saffron-100 p-2 text-sm">
+          The proof is approved, but no card is held or saved: the customer has been asked to pay. The order goes into
+          production once they have.
+        </p>
+      )}
+      {step === 'charge' && charge && (
         <Confirm
-          question={`Charge ${money(live?.authorizedCents ?? order.totalCents)} to ${order.customer.name}’s card and start production?`}
-          confirmLabel="Charge the card"
+          question={
+            charge.kind === 'ask_customer'
+              ? `E-mail ${order.customer.name} a link to pay ${money(charge.amountCents)}?`
+              : `Charge ${money(charge.amountCents)} to ${order.customer.name}’s card and start production?`
+          }
+          confirmLabel={charge.kind === 'ask_customer' ? 'Send the payment link' : 'Charge the card'}
           isBusy={action.isPending}
           onBack={() => setStep(null)}
           onConfirm={() => run({ action: 'capture' })}

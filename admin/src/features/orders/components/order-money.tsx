@@ -4,6 +4,7 @@ import { formatMoney } from '@ui/format.ts';
 const paymentWords: Record<string, string> = {
   pending: 'Checkout started',
   authorized: 'Card held, not charged',
+  saved: 'Card saved for later, nothing held',
   captured: 'Charged',
   partially_refunded: 'Partly refunded',
   refunded: 'Refunded',
@@ -40,14 +41,27 @@ export function OrderMoney({ detail }: { detail: OrderDetailResponse }) {
         <ul className="grid gap-2 text-sm">
           {payments.map((payment, index) => (
             <li key={index} className="rounded-lg bg-linen-100 p-3">
-              <p className="font-medium">{paymentWords[payment.status] ?? payment.status}</p>
+              <p className="font-medium">
+                {payment.method === 'off_session' && payment.status === 'captured'
+                  ? 'Charged to the saved card'
+                  : payment.method === 'payment_link' && payment.status === 'pending'
+                    ? 'Payment link sent, waiting for the customer'
+                    : (paymentWords[payment.status] ?? payment.status)}
+              </p>
               <p className="text-walnut-700">
                 Held {money(payment.authorizedCents)} · charged {money(payment.capturedCents)}
                 {payment.refundedCents > 0 && ` · refunded ${money(payment.refundedCents)}`}
               </p>
               {payment.status === 'authorized' && payment.captureBefore && (
                 <p className="text-xs text-madder-700">
-                  Charge before {new Date(payment.captureBefore).toUTCString().slice(0, 16)}, or the hold lapses.
+                  Charge before {new Date(payment.captureBefore).toUTCString().slice(0, 16)}, or the hold lapses
+                  {payment.isCardKept ? '; the card is also saved, so a later charge can still be made.' : '.'}
+                </p>
+              )}
+              {payment.status === 'saved' && (
+                <p className="text-xs text-walnut-700">
+                  The work is due after a hold would run out, so the card is saved instead and charged when the customer
+                  approves the proof.
                 </p>
               )}
             </li>

@@ -40,6 +40,14 @@ export function PaymentState({ order, checkoutReturn }: PaymentStateProps) {
             {payment.holdExpiresAt ? ` (the hold lasts until ${day(payment.holdExpiresAt)})` : ''}.
           </p>
         )}
+        {payment.isCardSaved && payment.chargedCents === 0 && (
+          <p>
+            Your card is saved with our payment provider; nothing has been taken yet.{' '}
+            {hasApproved
+              ? `You have approved your proof, so we charge ${money(summary.totalCents)} as we start stitching.`
+              : `We charge the order's total (${money(summary.totalCents)} now) once you approve your proof. A hold on the card would run out before your order is due, so we keep the card instead.`}
+          </p>
+        )}
         {payment.chargedCents > 0 && (
           <p>
             <strong className="font-semibold">{money(payment.chargedCents)}</strong> charged.
@@ -58,13 +66,29 @@ export function PaymentState({ order, checkoutReturn }: PaymentStateProps) {
           </p>
         )}
       </div>
-      {payment.failureMessage && (
+      {payment.confirmPaymentUrl ? (
         <div role="alert" className="mt-3 rounded-lg bg-madder-50 p-3 text-sm text-madder-700">
           <p className="font-semibold">{payment.failureMessage}</p>
-          <p>Your card has not been charged. You can try again with another card.</p>
+          <p>
+            Nothing has been charged. Pay {money(summary.totalCents)} on the secure payment page and we start stitching
+            straight away.
+          </p>
+          <a
+            href={payment.confirmPaymentUrl}
+            className="mt-3 inline-block rounded-lg bg-walnut-700 px-4 py-2 font-semibold text-white focus:outline-none focus-visible:ring-2 focus-visible:ring-walnut-500"
+          >
+            Confirm and pay {money(summary.totalCents)}
+          </a>
         </div>
+      ) : (
+        payment.failureMessage && (
+          <div role="alert" className="mt-3 rounded-lg bg-madder-50 p-3 text-sm text-madder-700">
+            <p className="font-semibold">{payment.failureMessage}</p>
+            <p>Your card has not been charged. You can try again with another card.</p>
+          </div>
+        )
       )}
-      {canPay && (
+      {canPay && !payment.confirmPaymentUrl && (
         <Button className="mt-4" onClick={pay} disabled={retry.isPending || isConfirming}>
           {retry.isPending
             ? 'Opening the payment page…'
