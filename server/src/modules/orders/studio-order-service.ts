@@ -1,3 +1,4 @@
+import { withPickupNote } from './order-delivery.ts';
 import type { Db } from '../../db/knex.ts';
 import type { OrderDetailResponse } from '../../contracts/admin-orders.ts';
 import type {
@@ -60,7 +61,12 @@ export function createStudioOrderService(deps: { db: Db; artwork: ArtworkService
       const studioActions = availableOrderActions(detail.order.status, 'staff').filter(
         (action) => action !== 'authorize' && action !== 'request_changes' && action !== 'approve_proof',
       );
-      return ok({ ...detail, studioActions: studioActions as OrderDetailResponse['studioActions'] });
+      const delivery = await withPickupNote(db, detail.order.delivery);
+      return ok({
+        ...detail,
+        order: { ...detail.order, delivery },
+        studioActions: studioActions as OrderDetailResponse['studioActions'],
+      });
     },
 
     /** Only uploads the order's designs place, and only the order's customer's, for the studio to digitize. */
