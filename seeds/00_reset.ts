@@ -15,6 +15,7 @@ export const seededTables = [
   'order_events',
   'order_items',
   'orders',
+  'customer_addresses',
   'quotes',
   'artwork_uploads',
   'artwork_owner_locks',

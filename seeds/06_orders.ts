@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 import { orderPlacementKey } from '../server/src/modules/orders/order-repo.ts';
+import { rememberAddress } from '../server/src/modules/orders/customer-address-repo.ts';
 import { userIds } from './data/accounts.ts';
 import { replayOrder } from './data/order-history.ts';
 import { orders, shipToByCustomer } from './data/orders.ts';
@@ -16,6 +17,7 @@ export async function seed(knex: Knex): Promise<void> {
     payments: [],
     emails: [],
   };
+  const customersWithOrders: (keyof typeof shipToByCustomer)[] = [];
   for (const order of orders) {
     const spec = quoteSpecs.find((candidate) => candidate.id === order.quoteId);
     if (!spec) throw new Error(`Seed data: order ${order.number} names a missing quote`);
@@ -24,6 +26,7 @@ export async function seed(knex: Knex): Promise<void> {
       throw new Error(`Seed data: order ${order.number} needs a saved design`);
     const totals = quote.row as {
       subtotal_cents: number;
+      shipping_cents: number;
       tax_cents: number;
       total_cents: number;
       currency: string;
@@ -37,6 +40,8 @@ export async function seed(knex: Knex): Promise<void> {
       currency: totals.currency,
       ids,
     });
+    const shipped = order.steps.find((step) => step.type === 'shipped');
+    customersWithOrders.push(quote.customer);
     rows.orders.push({
       id: order.id,
       number: order.number,
@@ -46,6 +51,10 @@ export async function seed(knex: Knex): Promise<void> {
       status: history.status,
       payment_status: history.paymentStatus,
       subtotal_cents: totals.subtotal_cents,
+      shipping_cents: totals.shipping_cents,
+      shipping_method: 'delivery',
+      shipping_carrier: shipped ? 'Parcel post' : null,
+      tracking_number: shipped?.trackingNumber ?? null,
       tax_cents: totals.tax_cents,
       total_cents: totals.total_cents,
       currency: totals.currency,
@@ -81,6 +90,11 @@ export async function seed(knex: Knex): Promise<void> {
   await knex('proofs').insert(rows.proofs);
   await knex('payments').insert(rows.payments);
   await knex('email_log').insert(rows.emails);
+  // Each customer's address, as their orders were sent there: offered again at their next checkout.
+  const now = new Date();
+  for (const customer of new Set(customersWithOrders)) {
+    await rememberAddress(knex, userIds[customer], shipToByCustomer[customer], now);
+  }
   // The demo's orders carry their own numbers; the shop's next order continues after the highest.
   await knex.raw('ALTER SEQUENCE order_numbers RESTART WITH ?', [
     Math.max(...orders.map((order) => Number(order.number.slice(3)))) + 1,

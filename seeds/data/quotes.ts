@@ -1,4 +1,5 @@
 import { estimateRunMinutes, priceQuote } from '../../server/src/engine/index.ts';
+import { shippingRatesOfRow } from '../../server/src/db/shipping-rates-columns.ts';
 import { designFigures, type DesignChoice } from './design-figures.ts';
 import { designs } from './designs.ts';
 import { publishedRuleSet } from './pricing.ts';
@@ -79,6 +80,7 @@ export function buildQuote(spec: QuoteSpec): BuiltQuote {
     quantity: spec.quantity,
     placements: figures.quotePlacements,
     isRush: spec.isRush,
+    shipping: { rates: shippingRatesOfRow(shopSettings), method: 'delivery' },
   });
   if (!quote.ok) throw new Error(`Seed data: quote ${spec.id}: ${quote.reason}`);
   const sum = (pick: (placement: (typeof figures.quotePlacements)[number]) => number) =>
@@ -113,9 +115,16 @@ export function buildQuote(spec: QuoteSpec): BuiltQuote {
         quantity: spec.quantity,
         isRush: spec.isRush,
         placements: figures.quotePlacements,
+        shipping: quote.shipping && {
+          ...quote.shipping,
+          freeDeliveryFromCents: shopSettings.delivery_free_from_cents,
+          pickupNote: shopSettings.pickup_note,
+        },
       }),
       lines: JSON.stringify(quote.lines),
       subtotal_cents: quote.subtotalCents,
+      shipping_cents: quote.shippingCents,
+      shipping_method: 'delivery',
       tax_cents: quote.taxCents,
       total_cents: quote.totalCents,
       currency: quote.currency,

@@ -11,4 +11,10 @@ export const shopSettings = {
   minutes_per_colour_change: 0.5,
   minutes_per_hooping: 4,
   setup_minutes: 10,
+  // Delivery at one charge per order, free from 75.00 of goods; or collect from the studio.
+  delivery_is_offered: true,
+  delivery_flat_cents: 695,
+  delivery_free_from_cents: 7500,
+  pickup_is_offered: true,
+  pickup_note: 'Collect from the studio, 14 Mill Lane, weekdays 10 to 4. We e-mail you when it is ready.',
 };

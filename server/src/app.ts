@@ -53,6 +53,8 @@ import { createCustomerOrderService } from './modules/orders/customer-order-serv
 import { createStudioOrderService } from './modules/orders/studio-order-service.ts';
 import { createOrderProductionSteps } from './modules/orders/order-production-steps.ts';
 import { createOrdersRouter } from './modules/orders/routes.ts';
+import { createAddressesRouter } from './modules/orders/address-routes.ts';
+import { createCustomerAddressService } from './modules/orders/customer-address-service.ts';
 import { createAdminOrdersRouter } from './modules/orders/admin-routes.ts';
 import { createOrderPaymentService } from './modules/orders/order-payment-service.ts';
 import { createPaymentWebhookService } from './modules/orders/payment-webhook-service.ts';
@@ -64,6 +66,7 @@ import { createPricingService } from './modules/pricing/pricing-service.ts';
 import { createAdminPricingRouter } from './modules/pricing/admin-routes.ts';
 import { createSettingsService } from './modules/settings/settings-service.ts';
 import { createAdminSettingsRouter } from './modules/settings/admin-routes.ts';
+import { createShippingSettingsService } from './modules/settings/shipping-settings-service.ts';
 import { createOverviewService } from './modules/studio/overview-service.ts';
 import { createAdminOverviewRouter } from './modules/studio/admin-overview-routes.ts';
 import { createOutboxService } from './modules/mail/outbox-service.ts';
@@ -225,6 +228,7 @@ export function createApp(deps: AppDeps): Express {
       customerOrders: createCustomerOrderService({ db, mailer, quotes, appOrigin, now }),
     }),
   );
+  app.use('/api/addresses', createAddressesRouter({ addresses: createCustomerAddressService({ db }) }));
   app.use('/api/artwork', createArtworkRouter({ artwork, uploadMaxBytes }));
 
   app.use('/api/admin', requireRole('staff', 'owner'));
@@ -260,7 +264,13 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
   app.use('/api/admin/pricing', createAdminPricingRouter({ pricing: createPricingService({ db, now }) }));
-  app.use('/api/admin/settings', createAdminSettingsRouter({ settings: createSettingsService({ db, now }) }));
+  app.use(
+    '/api/admin/settings',
+    createAdminSettingsRouter({
+      settings: createSettingsService({ db, now }),
+      shipping: createShippingSettingsService({ db, now }),
+    }),
+  );
   app.use(
     '/api/admin/users',
     createAdminUsersRouter({ people: createPeopleService({ db, ownerEmails: config.ownerEmails, now }) }),

@@ -42,13 +42,15 @@ describe('GET /api/admin/overview', () => {
       '2026-12-28',
       '2027-01-04',
     ]);
-    // Week of 30 Nov: WB-1006 42.35 + WB-1010 79.25 = 121.60 min = 2.0267 h.
-    // Week of 7 Dec: WB-1004 35.14 + WB-1008 63.27 + WB-1009 17.63 (placed Thu 26 Nov + 10 working days = Thu 10 Dec)
-    // + WB-1013 66.45 (needed by Thu 10 Dec) = 182.49 min = 3.0415 h.
+    // Thread changes between placements count (issue 12 §10), so designs with a border and a name take one change
+    // (0.5 min) more than before.
+    // Week of 30 Nov: WB-1006 42.85 + WB-1010 79.75 = 122.60 min = 2.0433 h.
+    // Week of 7 Dec: WB-1004 35.14 + WB-1008 63.77 + WB-1009 17.63 (placed Thu 26 Nov + 10 working days = Thu 10 Dec)
+    // + WB-1013 66.95 (needed by Thu 10 Dec) = 183.49 min = 3.0582 h.
     // Week of 14 Dec: WB-1007 48.10 min = 0.8017 h. WB-1003 is stitched, so it no longer books the machine.
     expect(machineHours.weeks.slice(0, 3)).toEqual([
-      { weekStart: '2026-11-30', bookedHours: 2.03, orderCount: 2 },
-      { weekStart: '2026-12-07', bookedHours: 3.04, orderCount: 4 },
+      { weekStart: '2026-11-30', bookedHours: 2.04, orderCount: 2 },
+      { weekStart: '2026-12-07', bookedHours: 3.06, orderCount: 4 },
       { weekStart: '2026-12-14', bookedHours: 0.8, orderCount: 1 },
     ]);
   });
@@ -58,20 +60,22 @@ describe('GET /api/admin/overview', () => {
     expect(revenue.currency).toBe('USD');
     expect(revenue.weeks).toHaveLength(8);
     const byWeek = Object.fromEntries(revenue.weeks.map((week) => [week.weekStart, week]));
-    // Week of 9 Nov: 22.47 + 33.17 + 85.51 = 141.15 captured.
+    // The seeded orders carry their delivery (6.95 under 75.00 of goods, free from it) and the thread changes
+    // between placements (issue 12 §9 and §10).
+    // Week of 9 Nov: 29.42 + 40.66 + 85.51 = 155.59 captured.
     expect(byWeek['2026-11-09']).toEqual({
       weekStart: '2026-11-09',
-      capturedCents: 14_115,
+      capturedCents: 15_559,
       refundedCents: 0,
-      netCents: 14_115,
+      netCents: 15_559,
     });
-    // Week of 16 Nov: 84.58 + 74.90 + 87.33 (WB-1013, 19 Nov) = 246.81 captured; refunds 84.58 (WB-1005) + 5.00 (WB-1002) =
-    // 89.58; net 157.23.
+    // Week of 16 Nov: 84.58 + 81.85 + 87.87 (WB-1013, 19 Nov) = 254.30 captured; refunds 84.58 (WB-1005) + 5.00 (WB-1002) =
+    // 89.58; net 164.72.
     expect(byWeek['2026-11-16']).toEqual({
       weekStart: '2026-11-16',
-      capturedCents: 24_681,
+      capturedCents: 25_430,
       refundedCents: 8958,
-      netCents: 15_723,
+      netCents: 16_472,
     });
     expect(byWeek['2026-11-30']).toEqual({ weekStart: '2026-11-30', capturedCents: 0, refundedCents: 0, netCents: 0 });
   });

@@ -1,4 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
+import { shopSettings } from '../../seeds/data/shop.ts';
+import { shippingRatesOfRow } from '../../server/src/db/shipping-rates-columns.ts';
 import {
   pricingPreviewResponse,
   ruleSetDetailResponse,
@@ -131,6 +133,7 @@ describe('POST /api/admin/pricing/preview', () => {
         quantity: number;
         isRush: boolean;
         placements: QuotePlacement[];
+        shipping?: { method: 'delivery' | 'pickup' };
       };
       const size = await harness
         .db('garment_sizes as s')
@@ -146,6 +149,10 @@ describe('POST /api/admin/pricing/preview', () => {
           quantity: input.quantity,
           placements: input.placements,
           isRush: input.isRush,
+          // Priced to ship as the quote was, at the seeded rates.
+          ...(input.shipping
+            ? { shipping: { rates: shippingRatesOfRow(shopSettings), method: input.shipping.method } }
+            : {}),
         });
       const before = direct(published);
       const after = direct({ ...rules, version: 2 });

@@ -12,6 +12,8 @@ import {
   type PricingRuleSet,
 } from '../../server/src/engine/index.ts';
 import { garments } from '../../seeds/data/garments.ts';
+import { shopSettings } from '../../seeds/data/shop.ts';
+import { shippingRatesOfRow } from '../../server/src/db/shipping-rates-columns.ts';
 import { motifs } from '../../seeds/data/motifs.ts';
 import { useApiHarness } from '../support/api-harness.ts';
 import { chestLettering } from '../support/sample-designs.ts';
@@ -71,7 +73,7 @@ describe('POST /api/quotes/preview', () => {
     );
     const { quote } = body;
     expect(quote.lines.reduce((sum, line) => sum + line.amountCents, 0)).toBe(quote.totalCents);
-    expect(quote.subtotalCents + quote.taxCents).toBe(quote.totalCents);
+    expect(quote.subtotalCents + quote.shippingCents + quote.taxCents).toBe(quote.totalCents);
 
     // The same figures straight from the engine and the published price list.
     const { rules } = await harness.db('pricing_rule_sets').select('rules').where({ status: 'published' }).first();
@@ -106,6 +108,8 @@ describe('POST /api/quotes/preview', () => {
       sizeLabel: sixMonths.label,
       quantity: 3,
       isRush: true,
+      // Without a method asked for, the shop's first: delivery, at the seeded rates.
+      shipping: { rates: shippingRatesOfRow(shopSettings), method: 'delivery' },
       placements: [
         {
           id: 'hem',
@@ -122,10 +126,16 @@ describe('POST /api/quotes/preview', () => {
     expect(quote).toEqual({
       lines: expected.lines,
       subtotalCents: expected.subtotalCents,
+      shippingCents: expected.shippingCents,
       taxCents: expected.taxCents,
       totalCents: expected.totalCents,
       currency: 'USD',
       ruleSetVersion: 1,
+      shipping: {
+        ...expected.shipping,
+        freeDeliveryFromCents: shopSettings.delivery_free_from_cents,
+        pickupNote: shopSettings.pickup_note,
+      },
     });
     expect(body.placements[0].stitches).toBe(border.stitches);
   });

@@ -7,10 +7,14 @@ import type { ApiAgent } from './api-harness.ts';
 /** Priya's seeded address, as the checkout form sends it. */
 export const priyaShipTo = shipToByCustomer.priya;
 
-/** Prices one of the signed-in customer's saved designs as it is and stores the quote. */
-export async function quoteSavedDesign(agent: ApiAgent, designId = 1) {
+/** One of the signed-in customer's saved designs as it is, as the body that prices it (and names it). */
+export async function savedDesignQuoteBody(
+  agent: ApiAgent,
+  designId = 1,
+  changes: { shippingMethod?: 'delivery' | 'pickup' } = {},
+) {
   const { design } = savedDesignResponse.parse((await agent.get(`/api/designs/${designId}`).expect(200)).body);
-  const body = {
+  return {
     garmentId: design.garmentId,
     sizeId: design.sizeId,
     colourId: design.colourId,
@@ -18,7 +22,17 @@ export async function quoteSavedDesign(agent: ApiAgent, designId = 1) {
     isRush: false,
     document: design.document,
     designId,
+    ...changes,
   };
+}
+
+/** Prices one of the signed-in customer's saved designs as it is and stores the quote. */
+export async function quoteSavedDesign(
+  agent: ApiAgent,
+  designId = 1,
+  changes: { shippingMethod?: 'delivery' | 'pickup' } = {},
+) {
+  const body = await savedDesignQuoteBody(agent, designId, changes);
   return storedQuoteResponse.parse((await agent.post('/api/quotes').send(body).expect(201)).body);
 }
 

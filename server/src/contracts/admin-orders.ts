@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { orderStatus, paymentStatus } from './order-status.ts';
+import { orderDelivery, shownAddress } from './shipping.ts';
 
 export const orderNumberParams = z.object({
   number: z.string().regex(/^[A-Z]{2}-\d{1,10}$/, 'must look like WB-1001'),
@@ -28,9 +29,13 @@ export const orderDetailResponse = z.object({
     placedAt: z.string().nullable(),
     customerNote: z.string().nullable(),
     subtotalCents: z.number().int(),
+    shippingCents: z.number().int(),
     taxCents: z.number().int(),
     totalCents: z.number().int(),
     currency: z.string(),
+    delivery: orderDelivery,
+    /** Where the parcel goes (for pick-up, the customer's address). */
+    shipTo: shownAddress,
   }),
   items: z.array(
     z.object({

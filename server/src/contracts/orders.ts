@@ -3,6 +3,8 @@ import { designDocument } from './designs.ts';
 import { orderStatus, paymentStatus } from './order-status.ts';
 import { guidanceMessage } from './guidance.ts';
 import { calendarDate } from './calendar-date.ts';
+import { quoteLine } from './quotes.ts';
+import { orderDelivery, shippingMethod, shownAddress } from './shipping.ts';
 
 /** Most pins a customer may drop on one proof: more is a conversation for e-mail. */
 export const MAX_PROOF_PINS = 20;
@@ -63,6 +65,11 @@ export const placeOrderRequest = z.strictObject({
   designId: positiveId('Choose one of your saved designs'),
   neededBy: neededByDate,
   shipTo,
+  /**
+   * How the parcel reaches the customer; the quote must have been priced with it, and the shop must still offer it
+   * (422 otherwise). Without it, the quote's own method.
+   */
+  shippingMethod: shippingMethod.optional(),
   note: optionalText('the note to the studio', MAX_ORDER_NOTE),
   /**
    * The customer ticked that they have read the safety notes for the garment and size. Needed when any note is more
@@ -167,21 +174,14 @@ export const customerOrderResponse = z.object({
     taxCents: z.number().int(),
     quantity: z.number().int(),
     isRush: z.boolean(),
-    shipTo: z.object({
-      name: z.string(),
-      line1: z.string(),
-      line2: z.string().optional(),
-      city: z.string(),
-      region: z.string(),
-      postalCode: z.string(),
-      countryCode: z.string(),
-      phone: z.string().optional(),
-    }),
+    shippingCents: z.number().int(),
+    shipTo: shownAddress,
+    delivery: orderDelivery,
     customerNote: z.string().nullable(),
   }),
   quote: z.object({
     ruleSetVersion: z.number().int(),
-    lines: z.array(z.object({ code: z.string(), label: z.string(), amountCents: z.number().int() })),
+    lines: z.array(quoteLine),
   }),
   design: z.object({
     id: z.number().int(),

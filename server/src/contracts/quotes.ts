@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { designDocument, strictObjectErrors } from './designs.ts';
 import { guidanceMessage } from './guidance.ts';
+import { quoteShipping, shippingMethod } from './shipping.ts';
 
 export { guidanceMessage };
 
@@ -25,6 +26,8 @@ export const quotePreviewRequest = z.strictObject(
       .min(1, 'Order at least 1 garment')
       .max(MAX_QUOTE_QUANTITY, `We can quote up to ${MAX_QUOTE_QUANTITY} garments at a time; get in touch for more`),
     isRush: z.boolean({ error: 'Say whether this is a rush order' }),
+    /** How the order reaches the customer; without it the shop's first method (delivery, when offered) is priced. */
+    shippingMethod: shippingMethod.optional(),
     document: designDocument,
   },
   strictObjectErrors('the design to price'),
@@ -32,7 +35,7 @@ export const quotePreviewRequest = z.strictObject(
 export type QuotePreviewRequest = z.infer<typeof quotePreviewRequest>;
 
 /** One priced line; amounts are whole cents for the whole quantity, negative for discounts. */
-const quoteLine = z.object({
+export const quoteLine = z.object({
   code: z.enum([
     'garment',
     'stitching',
@@ -42,24 +45,39 @@ const quoteLine = z.object({
     'quantity-discount',
     'rush',
     'artwork-setup',
+    'shipping',
     'tax',
   ]),
   label: z.string(),
   amountCents: z.number().int(),
   /** Set on stitching and lettering lines: the design placement they price. */
   placementId: z.string().optional(),
+  /** The unit rate the line is priced at, for showing beside its count: 120 per "1,000 stitches". */
+  rate: z
+    .object({
+      cents: z.number().int(),
+      per: z.enum(['1,000 stitches', 'garment', 'extra hooping', 'colour change']),
+      /** The least the line costs per garment. */
+      minimumCents: z.number().int().optional(),
+    })
+    .optional(),
 });
+export type QuoteLineShape = z.infer<typeof quoteLine>;
 
 /** The priced quote: the lines, tax included, add up to totalCents. */
 const quoteSummary = z.object({
   lines: z.array(quoteLine),
+  /** The goods and the work: every line but shipping and tax. Tax is charged on this, not on shipping. */
   subtotalCents: z.number().int(),
+  shippingCents: z.number().int(),
   taxCents: z.number().int(),
   totalCents: z.number().int(),
   /** ISO 4217 code. */
   currency: z.string(),
   /** The published price list version the quote was priced with. */
   ruleSetVersion: z.number().int(),
+  /** Left out of quotes priced before shipping was quoted. */
+  shipping: quoteShipping.optional(),
 });
 
 /** What the server worked out for one placement, per garment. */
@@ -114,5 +132,18 @@ export const quotePreviewResponse = z.object({
   }),
   /** Safety notes for children's garments; guidance only, never a certification. */
   cautions: z.array(guidanceMessage),
+  /**
+   * The design's hoopings and thread changes in all, per garment, as the quote's lines charge them: each
+   * placement's first hooping is in its price (so `extraHoopings` is `hoopings` less one a placement), and the
+   * thread changes count those between placements, in the order they are stitched. Left out of older quotes.
+   */
+  stitching: z
+    .object({
+      hoopings: z.number().int(),
+      extraHoopings: z.number().int(),
+      colourChanges: z.number().int(),
+      colourChangesBetweenPlacements: z.number().int(),
+    })
+    .optional(),
 });
 export type QuotePreviewResponse = z.infer<typeof quotePreviewResponse>;

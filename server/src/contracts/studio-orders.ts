@@ -166,15 +166,23 @@ export const refundOrderRequest = z.object({
 });
 export type RefundOrderRequest = z.infer<typeof refundOrderRequest>;
 
+/** Marking the parcel posted (or, for a pick-up order, handed over): the carrier and its tracking number, if any. */
 export const shipOrderRequest = z.object({
+  carrier: z
+    .string()
+    .trim()
+    .max(60, 'keep the carrier’s name under 60 characters')
+    .optional()
+    .transform((value) => value || undefined),
   trackingNumber: z
     .string()
     .trim()
     .max(60, 'keep the tracking number under 60 characters')
     .regex(/^[A-Za-z0-9 -]*$/, 'use letters, digits, spaces and dashes')
-    .optional(),
+    .optional()
+    .transform((value) => value || undefined),
 });
-export type ShipOrderRequest = z.infer<typeof shipOrderRequest>;
+export type ShipOrderRequest = z.input<typeof shipOrderRequest>;
 
 /** What every action answers: where the order stands now, and the money on its card. */
 export const orderActionResponse = z.object({

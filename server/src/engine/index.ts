@@ -40,8 +40,19 @@ export type {
 
 export { checkPricingRuleSet } from './pricing-rules.ts';
 export type { PricingRuleSet, QuantityBreak } from './pricing-rules.ts';
-export { priceQuote } from './price-quote.ts';
-export type { PlacementKind, Quote, QuoteInput, QuoteLine, QuoteLineCode, QuotePlacement } from './price-quote.ts';
+export { priceQuote, rehoopingWords } from './price-quote.ts';
+export type {
+  PlacementKind,
+  Quote,
+  QuoteInput,
+  QuoteLine,
+  QuoteLineCode,
+  QuoteLineRate,
+  QuotePlacement,
+} from './price-quote.ts';
+export { checkShippingRates, shippingMethodInWords, shippingOptions, shippingRefusal } from './price-shipping.ts';
+export type { ShippingMethodCode, ShippingOption, ShippingRates } from './price-shipping.ts';
+export { colourChangesBetween } from './colour-changes-between.ts';
 
 export { colorDifferenceCiede2000, hexToLab } from './color-difference.ts';
 export type { LabColor } from './color-difference.ts';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { calendarRange } from '../../../admin/src/features/orders/model/calendar-range.ts';
-import { parseCents } from '../../../admin/src/features/orders/model/money-input.ts';
+import { parseCents } from '../../../admin/src/lib/money-input.ts';
 import { boardSearch } from '../../../admin/src/features/orders/api/get-order-board.ts';
 import { orderBoardQuery } from '../../../server/src/contracts/studio-orders.ts';
 

@@ -43,6 +43,7 @@ function answer(totalCents: number, overrides: Partial<QuotePreviewResponse> = {
         { code: 'artwork-setup', label: 'Artwork setup: 1 design, once per order', amountCents: 2500 },
       ],
       subtotalCents: totalCents,
+      shippingCents: 0,
       taxCents: 0,
       totalCents,
       currency: 'USD',

@@ -130,6 +130,7 @@ describe('priceQuote', () => {
       code: 'garment',
       label: 'Terry bib, size 4 × 1 garment',
       amountCents: 800,
+      rate: { cents: 800, per: 'garment' },
     });
     expect(frock.ok && frock.lines[0].amountCents).toBe(2000);
     const labelled = priceQuote({
@@ -144,6 +145,7 @@ describe('priceQuote', () => {
       code: 'garment',
       label: 'Bishop dress, size 6 months × 1 garment',
       amountCents: 3800,
+      rate: { cents: 3800, per: 'garment' },
     });
   });
 

@@ -186,7 +186,9 @@ describe('figureDesign', () => {
     expect(name).toMatchObject({ id: 'name', label: 'Lettering “Noah”', kind: 'lettering', hoopings: 1 });
     expect(name.estimate.stitches).toBeGreaterThan(300);
     expect(name.estimate.widthMm).toBeGreaterThan(30);
-    expect(figured.value.quotePlacements[1]).toMatchObject({ kind: 'lettering', colorChanges: 0 });
+    // One thread of its own, but the border before it ended in another: one change into the name.
+    expect(figured.value.quotePlacements[1]).toMatchObject({ kind: 'lettering', colorChanges: 1 });
+    expect(figured.value.totals.colourChangesBetweenPlacements).toBe(1);
     expect(figured.value.totals.hoopings).toBe(5);
     expect(figured.value.totals.stitches).toBe(figured.value.placements[0].estimate.stitches + name.estimate.stitches);
   });

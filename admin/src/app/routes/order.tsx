@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
 import { formatMoney } from '@ui/format.ts';
+import { DeliveryDetails } from '@ui/components/delivery-details.tsx';
 import { useOrder } from '../../features/orders/api/get-order.ts';
 import { OrderTimeline } from '../../features/orders/components/order-timeline.tsx';
 import { OrderMoney } from '../../features/orders/components/order-money.tsx';
@@ -107,6 +108,9 @@ export function OrderPage() {
           </Panel>
           <Panel title="Price and payment">
             <OrderMoney detail={detail.data} />
+          </Panel>
+          <Panel title={order.delivery.method === 'pickup' ? 'Pick-up' : 'Delivery'}>
+            <DeliveryDetails delivery={order.delivery} shipTo={order.shipTo} audience="studio" />
           </Panel>
         </div>
         <div className="grid min-w-0 content-start gap-6">

@@ -3,6 +3,8 @@ import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
 import { overviewQuery } from '../../features/overview/api/get-overview.ts';
 import { useSettings } from '../../features/settings/api/get-settings.ts';
 import { SettingsForm } from '../../features/settings/components/settings-form.tsx';
+import { useShippingSettings } from '../../features/settings/api/get-shipping-settings.ts';
+import { ShippingSettingsForm } from '../../features/settings/components/shipping-settings-form.tsx';
 
 export function SettingsPage() {
   const settings = useSettings();
@@ -25,6 +27,20 @@ export function SettingsPage() {
           onSaved={() => void queryClient.invalidateQueries({ queryKey: overviewQuery().queryKey })}
         />
       </section>
+      <section aria-labelledby="shipping-heading" className="rounded-card border border-linen-200 bg-white p-5">
+        <h2 id="shipping-heading" className="mb-3 text-lg font-semibold">
+          Delivery and pick-up
+        </h2>
+        <ShippingSettingsSection />
+      </section>
     </div>
   );
+}
+
+/** The shipping rates load on their own, so the rest of the page does not wait for them. */
+function ShippingSettingsSection() {
+  const shipping = useShippingSettings();
+  if (shipping.isPending) return <Loading label="Opening delivery and pick-up…" />;
+  if (shipping.isError) return <ErrorNotice message={shipping.error.message} onRetry={() => void shipping.refetch()} />;
+  return <ShippingSettingsForm settings={shipping.data.settings} canEdit={shipping.data.canEdit} />;
 }

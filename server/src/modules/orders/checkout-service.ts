@@ -5,6 +5,9 @@ import type { Db } from '../../db/knex.ts';
 import type { Mailer } from '../../integrations/mailer.ts';
 import { findCustomerDesign } from '../designs/design-service.ts';
 import { shopScheduleOf } from '../settings/settings-service.ts';
+import { shippingRatesOf } from '../settings/shipping-settings-service.ts';
+import { rememberAddress } from './customer-address-repo.ts';
+import { checkShippingChoice } from './shipping-at-checkout.ts';
 import {
   describeDesignForOrder,
   findCustomerOrder,
@@ -108,6 +111,9 @@ export function createCheckoutService(deps: CheckoutDeps) {
       });
     }
 
+    const shipping = checkShippingChoice(quote, request.shippingMethod, await shippingRatesOf(db));
+    if (!shipping.ok) return shipping;
+
     const dates = await deps.storedQuotes.readyDatesToday();
     const shop = await shopScheduleOf(db);
     const today = shopDayOf(deps.now().getTime(), shop.timezone);
@@ -135,6 +141,8 @@ export function createCheckoutService(deps: CheckoutDeps) {
         customerId: customer.id,
         quoteId: quote.id,
         subtotalCents: quote.subtotalCents,
+        shippingCents: quote.shippingCents,
+        shippingMethod: shipping.value,
         taxCents: quote.taxCents,
         totalCents: quote.totalCents,
         currency: quote.currency,
@@ -145,6 +153,8 @@ export function createCheckoutService(deps: CheckoutDeps) {
         createdAt: now,
       });
       if (orderId === undefined) return undefined;
+      // Offered again at the customer's next checkout, whichever way this parcel goes.
+      await rememberAddress(trx, customer.id, request.shipTo, now);
       if (needsSafetyAcknowledgement(cautions)) {
         await insertOrderNote(trx, {
           orderId,

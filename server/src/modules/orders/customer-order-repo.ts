@@ -1,6 +1,9 @@
 import type { Db } from '../../db/knex.ts';
 import type { OrderStatus, PaymentStatus } from '../../contracts/order-status.ts';
 import type { ShipTo } from '../../contracts/orders.ts';
+import type { OrderDelivery } from '../../contracts/shipping.ts';
+import type { QuoteLineShape } from '../../contracts/quotes.ts';
+import { deliveryOfRow } from './order-shipment-repo.ts';
 
 const iso = (value: Date | string | null): string | null => (value === null ? null : new Date(value).toISOString());
 const dateOnly = (value: Date | string | null): string | null => (value === null ? null : iso(value)!.slice(0, 10));
@@ -14,6 +17,7 @@ export interface CustomerOrderRow {
   designName: string;
   garmentName: string;
   subtotalCents: number;
+  shippingCents: number;
   taxCents: number;
   totalCents: number;
   currency: string;
@@ -21,6 +25,7 @@ export interface CustomerOrderRow {
   createdAt: string;
   placedAt: string | null;
   shipTo: ShipTo;
+  delivery: OrderDelivery;
   customerNote: string | null;
   quantity: number;
 }
@@ -54,6 +59,7 @@ function toRow(row: Record<string, unknown>): CustomerOrderRow {
     designName: row.design_name as string,
     garmentName: row.garment_name as string,
     subtotalCents: Number(row.subtotal_cents),
+    shippingCents: Number(row.shipping_cents),
     taxCents: Number(row.tax_cents),
     totalCents: Number(row.total_cents),
     currency: row.currency as string,
@@ -61,6 +67,7 @@ function toRow(row: Record<string, unknown>): CustomerOrderRow {
     createdAt: iso(row.created_at as Date)!,
     placedAt: iso(row.placed_at as Date | null),
     shipTo: row.ship_to as ShipTo,
+    delivery: deliveryOfRow(row),
     customerNote: row.customer_note as string | null,
     quantity: row.quantity as number,
   };
@@ -85,7 +92,7 @@ export async function ordersWithProofWaiting(db: Db, orderIds: number[]): Promis
 
 export interface CustomerOrderDetailRows {
   order: CustomerOrderRow;
-  quote: { ruleSetVersion: number; isRush: boolean; lines: { code: string; label: string; amountCents: number }[] };
+  quote: { ruleSetVersion: number; isRush: boolean; lines: QuoteLineShape[] };
   design: {
     id: number;
     name: string;

@@ -1,3 +1,4 @@
+import { withPickupNote } from './order-delivery.ts';
 import type { Db } from '../../db/knex.ts';
 import type { Mailer } from '../../integrations/mailer.ts';
 import {
@@ -102,6 +103,7 @@ export function createCustomerOrderService(deps: {
     return ok({
       order: {
         ...withoutId(order),
+        delivery: await withPickupNote(db, order.delivery),
         dueDate: (await dueDates())(order),
         isRush: detail.quote.isRush,
         isWaitingOnCustomer: needsPayment || latestSent !== undefined,

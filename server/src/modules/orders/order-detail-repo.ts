@@ -3,6 +3,9 @@ import type { OrderDetailResponse } from '../../contracts/admin-orders.ts';
 import { proofImagePath } from '../../contracts/studio-orders.ts';
 import { orderArtworkImagePath } from '../../contracts/admin-orders.ts';
 import { restoreDesign } from '../../contracts/designs.ts';
+import { jsonColumn } from '../../db/json-column.ts';
+import type { ShipTo } from '../../contracts/orders.ts';
+import { deliveryOfRow } from './order-shipment-repo.ts';
 
 const iso = (value: Date | string | null): string | null => (value === null ? null : new Date(value).toISOString());
 
@@ -84,9 +87,12 @@ export async function readOrderDetail(
       placedAt: iso(order.placed_at),
       customerNote: order.customer_note,
       subtotalCents: Number(order.subtotal_cents),
+      shippingCents: Number(order.shipping_cents),
       taxCents: Number(order.tax_cents),
       totalCents: Number(order.total_cents),
       currency: order.currency,
+      delivery: deliveryOfRow(order),
+      shipTo: jsonColumn(order.ship_to) as ShipTo,
     },
     items: items.map((i) => ({
       id: i.id,

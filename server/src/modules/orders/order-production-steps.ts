@@ -9,6 +9,8 @@ import type { OrderAction } from './order-flow.ts';
 import { moveOrder } from './order-transitions.ts';
 import type { StudioActor } from './order-payment-service.ts';
 import { orderShippedMail } from './studio-order-mail.ts';
+import { readShippingMethod, recordShipment } from './order-shipment-repo.ts';
+import type { Db as Trx } from '../../db/knex.ts';
 
 export function createOrderProductionSteps(deps: { db: Db; mailer: Mailer; now: () => Date; appOrigin: string }) {
   async function step(
@@ -16,8 +18,8 @@ export function createOrderProductionSteps(deps: { db: Db; mailer: Mailer; now: 
     action: Extract<OrderAction, 'mark_stitched' | 'ship'>,
     actor: StudioActor,
     payload?: object,
-    /** The message the step sends, queued in the step's own transaction. */
-    mailOf?: (order: NonNullable<Awaited<ReturnType<typeof findStudioOrder>>>) => LoggedMail,
+    /** The message the step sends, queued in the step's own transaction (after `write`). */
+    mailOf?: (order: NonNullable<Awaited<ReturnType<typeof findStudioOrder>>>, trx: Trx) => Promise<LoggedMail>,
   ): Promise<{ result: Result<OrderActionResponse>; mail?: QueuedMail }> {
     return deps.db.transaction(async (trx) => {
       const order = await findStudioOrder(trx, number);
@@ -32,7 +34,7 @@ export function createOrderProductionSteps(deps: { db: Db; mailer: Mailer; now: 
         now: deps.now(),
       });
       if (!moved.ok) return { result: moved as Result<OrderActionResponse> };
-      const mail = mailOf && (await queueLoggedMail(trx, mailOf(order), deps.now()));
+      const mail = mailOf && (await queueLoggedMail(trx, await mailOf(order, trx), deps.now()));
       return { result: ok(await readOrderStanding(trx, order.id)), mail };
     });
   }
@@ -42,14 +44,14 @@ export function createOrderProductionSteps(deps: { db: Db; mailer: Mailer; now: 
       return (await step(number, 'mark_stitched', actor)).result;
     },
     async ship(number: string, request: ShipOrderRequest, actor: StudioActor): Promise<Result<OrderActionResponse>> {
-      const trackingNumber = request.trackingNumber || undefined;
-      const { result, mail } = await step(
-        number,
-        'ship',
-        actor,
-        { carrier: 'Parcel post', trackingNumber: trackingNumber ?? null },
-        (order) => orderShippedMail(order, deps.appOrigin, trackingNumber),
-      );
+      const shipment = { carrier: request.carrier ?? null, trackingNumber: request.trackingNumber ?? null };
+      const { result, mail } = await step(number, 'ship', actor, shipment, async (order, trx) => {
+        await recordShipment(trx, order.id, shipment, deps.now());
+        return orderShippedMail(order, deps.appOrigin, {
+          ...shipment,
+          method: await readShippingMethod(trx, order.id),
+        });
+      });
       if (mail) await sendQueuedMail(deps, mail);
       return result;
     },

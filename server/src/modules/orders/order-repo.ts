@@ -1,3 +1,4 @@
+import type { ShippingMethod } from '../../contracts/shipping.ts';
 import type { Db } from '../../db/knex.ts';
 import type { OrderStatus, PaymentStatus } from '../../contracts/order-status.ts';
 import type { ShipTo } from '../../contracts/orders.ts';
@@ -84,6 +85,8 @@ export interface OrderWrite {
   customerId: number;
   quoteId: number;
   subtotalCents: number;
+  shippingCents: number;
+  shippingMethod: ShippingMethod;
   taxCents: number;
   totalCents: number;
   currency: string;
@@ -112,6 +115,8 @@ export async function insertOrder(trx: Db, write: OrderWrite): Promise<number | 
       status: 'awaiting_payment',
       payment_status: 'none',
       subtotal_cents: write.subtotalCents,
+      shipping_cents: write.shippingCents,
+      shipping_method: write.shippingMethod,
       tax_cents: write.taxCents,
       total_cents: write.totalCents,
       currency: write.currency,

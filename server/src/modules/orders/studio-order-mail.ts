@@ -77,12 +77,27 @@ export function refundIssuedMail(
   ]);
 }
 
-export function orderShippedMail(order: MailOrder, appOrigin: string, trackingNumber: string | undefined): LoggedMail {
+/** Posted with its carrier and tracking number; a pick-up order is handed over at the studio instead. */
+export function orderShippedMail(
+  order: MailOrder,
+  appOrigin: string,
+  shipment: { method: 'delivery' | 'pickup'; carrier: string | null; trackingNumber: string | null },
+): LoggedMail {
+  const page = `Your order page: ${orderPageUrl(appOrigin, order.number)}`;
+  if (shipment.method === 'pickup') {
+    return compose(order, 'order_shipped', `${order.number} has been collected`, [
+      'Your embroidered order has been handed over at the studio. Thank you!',
+      page,
+    ]);
+  }
+  const tracking = shipment.trackingNumber
+    ? `${shipment.carrier ? `Carrier: ${shipment.carrier}. ` : ''}Tracking number: ${shipment.trackingNumber}`
+    : shipment.carrier
+      ? `It is with ${shipment.carrier}, without a tracking number; it usually arrives within a week.`
+      : 'The parcel has no tracking number; it usually arrives within a week.';
   return compose(order, 'order_shipped', `${order.number} is on its way`, [
     'Your embroidered order has been packed and posted.',
-    trackingNumber
-      ? `Tracking number: ${trackingNumber}`
-      : 'The parcel has no tracking number; it usually arrives within a week.',
-    `Your order page: ${orderPageUrl(appOrigin, order.number)}`,
+    tracking,
+    page,
   ]);
 }

@@ -1,3 +1,4 @@
+import { withPickupNote } from './order-delivery.ts';
 import type { Db } from '../../db/knex.ts';
 import type { OrderDetailResponse } from '../../contracts/admin-orders.ts';
 import type {
@@ -61,8 +62,10 @@ export function createStudioOrderService(deps: { db: Db; artwork: ArtworkService
       const studioActions = availableOrderActions(detail.order.status, 'staff').filter(
         (action) => action !== 'authorize' && action !== 'request_changes' && action !== 'approve_proof',
       );
+      const delivery = await withPickupNote(db, detail.order.delivery);
       return ok({
         ...detail,
+        order: { ...detail.order, delivery },
         studioActions: studioActions as OrderDetailResponse['studioActions'],
         charge: previewCharge(detail, deps.now()),
       });

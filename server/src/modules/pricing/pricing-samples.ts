@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { priceQuote, type PricingRuleSet, type QuotePlacement } from '../../engine/index.ts';
+import { priceQuote, type PricingRuleSet, type QuotePlacement, type ShippingRates } from '../../engine/index.ts';
 import type { SamplePreview } from '../../contracts/admin-pricing.ts';
 import type { StoredQuoteRow } from './pricing-rule-set-repo.ts';
 
@@ -20,6 +20,8 @@ const storedQuoteInput = z.object({
       hasCustomerArtwork: z.boolean(),
     }),
   ),
+  /** The way the quote was priced to ship; quotes from before shipping was quoted have none. */
+  shipping: z.object({ method: z.enum(['delivery', 'pickup']) }).optional(),
 });
 export type StoredQuoteInput = z.infer<typeof storedQuoteInput>;
 
@@ -54,7 +56,18 @@ export function chooseSampleQuotes(rows: readonly StoredQuoteRow[]): SampleQuote
 
 type GarmentLabels = ReadonlyMap<string, { name: string; sizeLabels: ReadonlyMap<string, string> }>;
 
-function priceWith(ruleSet: PricingRuleSet, sample: SampleQuote, labels: GarmentLabels): SamplePreview['published'] {
+/** The shop's shipping rates now, for pricing samples with the way each was priced to ship. */
+type SampleShipping = ShippingRates | undefined;
+
+function priceWith(
+  ruleSet: PricingRuleSet,
+  sample: SampleQuote,
+  labels: GarmentLabels,
+  rates: SampleShipping,
+): SamplePreview['published'] {
+  const method = sample.input.shipping?.method;
+  // A way the shop no longer offers is left out: the sample compares the price list, not shipping.
+  const shipping = method && rates?.[method].isOffered ? { rates, method } : undefined;
   const garment = labels.get(sample.input.garment);
   const quote = priceQuote({
     ruleSet,
@@ -64,6 +77,7 @@ function priceWith(ruleSet: PricingRuleSet, sample: SampleQuote, labels: Garment
     quantity: sample.input.quantity,
     placements: sample.input.placements as QuotePlacement[],
     isRush: sample.input.isRush,
+    ...(shipping ? { shipping } : {}),
   });
   if (!quote.ok) return { ok: false, reason: quote.reason };
   return {
@@ -81,10 +95,11 @@ export function compareSample(
   published: PricingRuleSet,
   draft: PricingRuleSet,
   labels: GarmentLabels,
+  rates?: SampleShipping,
 ): SamplePreview {
   const garment = labels.get(sample.input.garment);
-  const before = priceWith(published, sample, labels);
-  const after = priceWith(draft, sample, labels);
+  const before = priceWith(published, sample, labels, rates);
+  const after = priceWith(draft, sample, labels, rates);
   const what = `${garment?.name ?? sample.input.garment}, ${garment?.sizeLabels.get(sample.input.sizeCode) ?? sample.input.sizeCode}`;
   return {
     quoteId: sample.id,

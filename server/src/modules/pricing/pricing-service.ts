@@ -21,6 +21,7 @@ import {
   updateDraftRules,
 } from './pricing-rule-set-repo.ts';
 import { chooseSampleQuotes, compareSample } from './pricing-samples.ts';
+import { shippingRatesOf } from '../settings/shipping-settings-service.ts';
 
 /** How many recent quotes the samples are chosen from. */
 const sampleWindow = 30;
@@ -113,10 +114,11 @@ export function createPricingService(deps: { db: Db; now: () => Date }) {
     if (!draft.ok) return draft;
     const samples = chooseSampleQuotes(await readRecentQuotes(db, sampleWindow));
     const labels = await readGarmentLabels(db, [...new Set(samples.map((sample) => sample.input.garment))]);
+    const rates = await shippingRatesOf(db);
     return ok({
       currency: published.currency,
       publishedVersion: published.version,
-      samples: samples.map((sample) => compareSample(sample, published, draft.value, labels)),
+      samples: samples.map((sample) => compareSample(sample, published, draft.value, labels, rates)),
     });
   }
 

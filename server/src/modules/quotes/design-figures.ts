@@ -6,6 +6,7 @@
  */
 import {
   adviseStabilizer,
+  colourChangesBetween,
   estimateRunMinutes,
   cautionsForGarment,
   type GuidanceMessage,
@@ -27,8 +28,17 @@ export interface DesignFigures {
   placements: PlacementFigures[];
   /** One per placement, per garment, ready for `priceQuote`. */
   quotePlacements: QuotePlacement[];
-  /** Sums over the placements, per garment. */
-  totals: { stitches: number; colourChanges: number; hoopings: number; trims: number };
+  /**
+   * Sums over the placements, per garment. `colourChanges` counts the changes between placements too
+   * (`colourChangesBetweenPlacements` of them), in the order the document lists them, which is the stitching order.
+   */
+  totals: {
+    stitches: number;
+    colourChanges: number;
+    colourChangesBetweenPlacements: number;
+    hoopings: number;
+    trims: number;
+  };
   /** For one garment, setup included. */
   runMinutes: RunTimeEstimate;
   stabilizer: StabilizerAdvice;
@@ -62,9 +72,12 @@ export function figureDesign(catalogue: QuoteCatalogue, document: DesignDocument
   const placements = outcomes.flatMap((outcome) => (outcome.ok ? [outcome.figures] : []));
   const sum = (pick: (figures: PlacementFigures) => number) =>
     placements.reduce((total, figures) => total + pick(figures), 0);
+  const changesInto = colourChangesBetween(document.placements.map(threadsOf));
+  const colourChangesBetweenPlacements = changesInto.reduce((total, changes) => total + changes, 0);
   const totals = {
     stitches: sum((figures) => figures.estimate.stitches),
-    colourChanges: sum((figures) => figures.estimate.colorChanges),
+    colourChanges: sum((figures) => figures.estimate.colorChanges) + colourChangesBetweenPlacements,
+    colourChangesBetweenPlacements,
     hoopings: sum((figures) => figures.hoopings),
     trims: sum((figures) => figures.estimate.trims),
   };
@@ -91,13 +104,13 @@ export function figureDesign(catalogue: QuoteCatalogue, document: DesignDocument
 
   return ok({
     placements,
-    quotePlacements: placements.map((figures) => ({
+    quotePlacements: placements.map((figures, index) => ({
       id: figures.id,
       label: figures.label,
       kind: figures.kind === 'lettering' ? 'lettering' : 'stitching',
       stitches: figures.estimate.stitches,
       hoopings: figures.hoopings,
-      colorChanges: figures.estimate.colorChanges,
+      colorChanges: figures.estimate.colorChanges + changesInto[index],
       hasCustomerArtwork: figures.hasCustomerArtwork,
       ...(figures.isPriceProvisional ? { isStitchCountPending: true } : {}),
     })),
@@ -112,6 +125,13 @@ export function figureDesign(catalogue: QuoteCatalogue, document: DesignDocument
     },
     cautions: cautions.messages,
   });
+}
+
+/** A placement's threads in stitching order; a customer's picture has none until the studio digitizes it. */
+function threadsOf(placement: DesignDocument['placements'][number]): readonly string[] | undefined {
+  if (placement.kind === 'border' || placement.kind === 'motif') return placement.threads;
+  if (placement.kind === 'lettering') return [placement.thread];
+  return undefined;
 }
 
 /**

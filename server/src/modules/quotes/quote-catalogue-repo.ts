@@ -1,6 +1,7 @@
 import type { Db } from '../../db/knex.ts';
 import { jsonColumn } from '../../db/json-column.ts';
-import type { PricingRuleSet } from '../../engine/index.ts';
+import { SHIPPING_RATE_COLUMNS, shippingRatesOfRow } from '../../db/shipping-rates-columns.ts';
+import type { PricingRuleSet, ShippingRates } from '../../engine/index.ts';
 import type { LetteringFontFile } from '../../integrations/lettering-fonts.ts';
 import { garmentSafetyFacts } from '../../contracts/guidance.ts';
 import type {
@@ -21,6 +22,8 @@ export interface QuoteCatalogueRecord {
   fonts: QuoteCatalogueFontRow[];
   hoops: CatalogueHoop[];
   machine: ShopMachine;
+  /** The shop's shipping methods and rates. */
+  shipping: ShippingRates;
   /** The published price list, and its row id for the quotes priced with it. */
   ruleSet: PricingRuleSet;
   ruleSetId: number;
@@ -42,6 +45,7 @@ export interface ActiveQuoteCatalogue {
   hoops: CatalogueHoop[];
   /** Undefined until the studio has set up its machine or published prices. */
   machine: ShopMachine | undefined;
+  shipping: ShippingRates | undefined;
   ruleSet: { id: number; rules: PricingRuleSet } | undefined;
 }
 
@@ -109,7 +113,13 @@ export async function readActiveQuoteCatalogue(db: Db): Promise<ActiveQuoteCatal
       .where({ is_active: true })
       .orderBy(ordered),
     db('shop_settings')
-      .select('machine_stitches_per_minute', 'minutes_per_colour_change', 'minutes_per_hooping', 'setup_minutes')
+      .select(
+        'machine_stitches_per_minute',
+        'minutes_per_colour_change',
+        'minutes_per_hooping',
+        'setup_minutes',
+        ...SHIPPING_RATE_COLUMNS,
+      )
       .where({ id: 1 })
       .first(),
     db('pricing_rule_sets').select('id', 'rules').where({ status: 'published' }).first(),
@@ -197,6 +207,7 @@ export async function readActiveQuoteCatalogue(db: Db): Promise<ActiveQuoteCatal
       minutesPerHooping: Number(shop.minutes_per_hooping),
       setupMinutes: Number(shop.setup_minutes),
     },
+    shipping: shop && shippingRatesOfRow(shop),
     ruleSet: ruleSet && { id: ruleSet.id, rules: ruleSet.rules as PricingRuleSet },
   };
 }

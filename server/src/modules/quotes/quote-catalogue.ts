@@ -42,11 +42,12 @@ export function pickQuoteCatalogue(
       colourId: 'Choose one of this garment’s colours',
     });
   }
-  const { ruleSet, machine, hoops } = active;
+  const { ruleSet, machine, hoops, shipping } = active;
   if (!ruleSet) return failure('conflict', 'The studio has not published its prices yet, so designs cannot be priced.');
   if (hoops.length === 0)
     return failure('conflict', 'The studio has no hoops set up yet, so designs cannot be priced.');
-  if (!machine) return failure('conflict', 'The studio has not set up its machine yet, so designs cannot be priced.');
+  if (!machine || !shipping)
+    return failure('conflict', 'The studio has not set up its machine yet, so designs cannot be priced.');
   const { garmentId: _garmentId, ...size } = sizeRow;
   return ok({
     garment,
@@ -55,6 +56,7 @@ export function pickQuoteCatalogue(
     fonts: query.fontSlugs.flatMap((slug) => active.fonts.get(slug) ?? []),
     hoops,
     machine,
+    shipping,
     ruleSet: ruleSet.rules,
     ruleSetId: ruleSet.id,
   });

@@ -3,12 +3,13 @@ import { artworkForQuote, type ArtworkOwner } from '../artwork/artwork-service.t
 import type { QuoteCatalogueRecord } from './quote-catalogue-repo.ts';
 import { createQuoteCatalogueSnapshot, quoteCatalogueFor as readQuoteCatalogue } from './quote-catalogue.ts';
 import type { CatalogueVersionWatch } from '../catalogue/catalogue-version.ts';
-import { priceQuote, type GuidanceMessage } from '../../engine/index.ts';
+import { priceQuote, type GuidanceMessage, type Quote } from '../../engine/index.ts';
 import type { LetteringFontLoader } from '../../integrations/lettering-fonts.ts';
 import type { DesignDocument } from '../../contracts/designs.ts';
 import type { QuotePreviewRequest, QuotePreviewResponse } from '../../contracts/quotes.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import { figureDesign, type DesignFigures } from './design-figures.ts';
+import { chooseShippingMethod } from './shipping-choice.ts';
 import type { CatalogueArtwork, QuoteCatalogue } from './quote-catalogue-types.ts';
 
 /** A priced design: the preview's answer, the engine's figures and the catalogue rows it was priced from. */
@@ -44,7 +45,9 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader; v
     );
     if (!figured.ok) return figured;
     const figures = figured.value;
-    const { garment, size, ruleSet } = record.value;
+    const { garment, size, ruleSet, shipping } = record.value;
+    const method = chooseShippingMethod(shipping, request.shippingMethod);
+    if (!method.ok) return method;
     const quote = priceQuote({
       ruleSet,
       garment: { slug: garment.slug, name: garment.name },
@@ -53,12 +56,13 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader; v
       quantity: request.quantity,
       placements: figures.quotePlacements,
       isRush: request.isRush,
+      shipping: { rates: shipping, method: method.value },
     });
     // The design was sound, so a pricing failure is the price list's: it has no price for this size, say.
     if (!quote.ok) return failure('conflict', `This garment can't be priced online right now: ${quote.reason}`);
 
     const response: QuotePreviewResponse = {
-      quote: quoteSummaryOf(quote),
+      quote: quoteSummaryOf({ ...quote, shipping: quoteShippingOf(quote, shipping) }),
       placements: figures.placements.map((placement) => ({
         id: placement.id,
         label: placement.label,
@@ -87,6 +91,12 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader; v
         messages: figures.stabilizer.messages,
       },
       cautions: figures.cautions,
+      stitching: {
+        hoopings: figures.totals.hoopings,
+        extraHoopings: figures.totals.hoopings - figures.placements.length,
+        colourChanges: figures.totals.colourChanges,
+        colourChangesBetweenPlacements: figures.totals.colourChangesBetweenPlacements,
+      },
     };
     return ok({ response, figures, catalogue: record.value });
   }
@@ -106,6 +116,7 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader; v
     design: { garmentId: number; sizeId: number; document: DesignDocument },
     owner?: ArtworkOwner,
   ): Promise<GuidanceMessage[]> {
+    // Cautions do not depend on shipping: any method the shop offers will do.
     const priced = await price({ ...design, quantity: 1, isRush: false }, owner);
     return priced.ok ? priced.value.figures.cautions : [];
   }
@@ -117,8 +128,30 @@ export type QuoteService = ReturnType<typeof createQuoteService>;
 
 /** The priced lines and totals as the apps get them, from the engine's quote or a stored one. */
 export function quoteSummaryOf(quote: QuotePreviewResponse['quote']): QuotePreviewResponse['quote'] {
-  const { lines, subtotalCents, taxCents, totalCents, currency, ruleSetVersion } = quote;
-  return { lines, subtotalCents, taxCents, totalCents, currency, ruleSetVersion };
+  const { lines, subtotalCents, shippingCents, taxCents, totalCents, currency, ruleSetVersion, shipping } = quote;
+  return {
+    lines,
+    subtotalCents,
+    shippingCents,
+    taxCents,
+    totalCents,
+    currency,
+    ruleSetVersion,
+    ...(shipping ? { shipping } : {}),
+  };
+}
+
+/** The quote's shipping as the apps show it: the engine's priced methods with the shop's own words on them. */
+function quoteShippingOf(
+  quote: Quote,
+  rates: PricedDesign['catalogue']['shipping'],
+): NonNullable<QuotePreviewResponse['quote']['shipping']> | undefined {
+  if (!quote.shipping) return undefined;
+  return {
+    ...quote.shipping,
+    freeDeliveryFromCents: rates.delivery.isOffered ? rates.delivery.freeFromCents : null,
+    pickupNote: rates.pickup.isOffered ? rates.pickup.note : null,
+  };
 }
 
 /** The motifs, fonts and uploads a design names, so only those rows are read. */

@@ -2,6 +2,7 @@ import type { Db } from '../../db/knex.ts';
 import type { DesignDocument } from '../../contracts/designs.ts';
 import type { QuotePreviewResponse } from '../../contracts/quotes.ts';
 import type { QuotePlacement } from '../../engine/index.ts';
+import type { ShippingMethod } from '../../contracts/shipping.ts';
 
 /** What a quote priced, kept in quotes.input so the quote can be shown, checked against an order and repriced. */
 export interface StoredQuoteInput {
@@ -15,6 +16,8 @@ export interface StoredQuoteInput {
   quantity: number;
   isRush: boolean;
   placements: QuotePlacement[];
+  /** The method the shipping line prices and the methods offered with it; missing on quotes from before shipping. */
+  shipping?: QuotePreviewResponse['quote']['shipping'];
   /** The preview's figures beyond the price (placements, run time, stabilizer, cautions), to show the quote again. */
   figures: Omit<QuotePreviewResponse, 'quote'>;
 }
@@ -31,10 +34,15 @@ export interface StoredQuote {
   input: Partial<StoredQuoteInput>;
   lines: QuotePreviewResponse['quote']['lines'];
   subtotalCents: number;
+  shippingCents: number;
+  /** Null on quotes priced before shipping was quoted. */
+  shippingMethod: ShippingMethod | null;
   taxCents: number;
   totalCents: number;
   currency: string;
   expiresAt: Date;
+  /** The quote's shipping as the apps show it, when it has any. */
+  shipping?: QuotePreviewResponse['quote']['shipping'];
 }
 
 export interface QuoteWrite {
@@ -61,6 +69,8 @@ export async function insertQuote(db: Db, write: QuoteWrite): Promise<number> {
     input: JSON.stringify(write.input),
     lines: JSON.stringify(write.quote.lines),
     subtotal_cents: write.quote.subtotalCents,
+    shipping_cents: write.quote.shippingCents,
+    shipping_method: write.quote.shipping?.method ?? null,
     tax_cents: write.quote.taxCents,
     total_cents: write.quote.totalCents,
     currency: write.quote.currency,
@@ -93,6 +103,9 @@ export async function findQuote(db: Db, id: number): Promise<StoredQuote | undef
     input: row.input,
     lines: row.lines,
     subtotalCents: Number(row.subtotal_cents),
+    shippingCents: Number(row.shipping_cents),
+    shippingMethod: row.shipping_method,
+    ...(row.input?.shipping ? { shipping: row.input.shipping } : {}),
     taxCents: Number(row.tax_cents),
     totalCents: Number(row.total_cents),
     currency: row.currency,

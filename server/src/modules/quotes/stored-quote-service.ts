@@ -11,6 +11,7 @@ import {
 import { estimateRunMinutes, shopDayOf, type GuidanceMessage } from '../../engine/index.ts';
 import type { CreateQuoteRequest, StoredQuoteResponse } from '../../contracts/stored-quotes.ts';
 import type { QuotePreviewRequest } from '../../contracts/quotes.ts';
+import type { ShippingMethod } from '../../contracts/shipping.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import { quoteSummaryOf, type QuoteService } from './quote-service.ts';
 import { workOutReadyDates } from './ready-dates.ts';
@@ -58,7 +59,10 @@ export function createStoredQuoteService(deps: { db: Db; quotes: QuoteService; n
   }
 
   /** Prices a quote's design again with today's price list (a quote that expired, or one to turn into a rush). */
-  async function reprice(quote: StoredQuote, changes: { isRush?: boolean } = {}): Promise<Result<StoredQuote>> {
+  async function reprice(
+    quote: StoredQuote,
+    changes: { isRush?: boolean; shippingMethod?: ShippingMethod } = {},
+  ): Promise<Result<StoredQuote>> {
     const { input } = quote;
     if (input.garmentId === undefined || input.sizeId === undefined || !input.document) {
       return failure('conflict', 'This quote is too old to be priced again; open the design and price it afresh.');
@@ -70,6 +74,9 @@ export function createStoredQuoteService(deps: { db: Db; quotes: QuoteService; n
         ...(input.colourId ? { colourId: input.colourId } : {}),
         quantity: quote.quantity,
         isRush: changes.isRush ?? quote.isRush,
+        ...((changes.shippingMethod ?? quote.shippingMethod)
+          ? { shippingMethod: changes.shippingMethod ?? quote.shippingMethod! }
+          : {}),
         document: input.document,
       },
       { designId: quote.designId, customerId: quote.customerId },
@@ -110,6 +117,7 @@ export function createStoredQuoteService(deps: { db: Db; quotes: QuoteService; n
       quantity,
       isRush: request.isRush,
       placements: figures.quotePlacements,
+      ...(quote.shipping ? { shipping: quote.shipping } : {}),
       figures: shown,
     };
     const now = deps.now();

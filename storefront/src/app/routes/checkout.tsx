@@ -21,6 +21,8 @@ import { QuoteLines } from '../../features/quote/components/quote-lines.tsx';
 import { usePlaceOrder } from '../../features/checkout/api/place-order.ts';
 import { CheckoutForm, type CheckoutFields } from '../../features/checkout/components/checkout-form.tsx';
 import { QuantityField } from '../../features/checkout/components/quantity-field.tsx';
+import { ShippingChoice } from '../../features/checkout/components/shipping-choice.tsx';
+import type { ShippingMethod } from '@server/contracts/shipping.ts';
 import { useCheckoutQuote, type OrderedDesign } from '../../features/checkout/hooks/use-checkout-quote.ts';
 import { SafetyAcknowledgement } from '../../features/checkout/components/safety-acknowledgement.tsx';
 import { paths } from '../../config/paths.ts';
@@ -72,10 +74,12 @@ export function CheckoutPage() {
       },
     [saved.data, resized],
   );
-  const priced = useCheckoutQuote(ordered, quantity, false);
+  // Unset until the customer chooses: the server then prices the shop's first way (delivery, when offered).
+  const [shippingMethod, setShippingMethod] = useState<ShippingMethod>();
+  const priced = useCheckoutQuote(ordered, quantity, false, shippingMethod);
   const readyDates = priced.quote?.readyDates;
   const isRush = readyDates !== undefined && neededBy !== '' && neededBy < readyDates.earliestReadyDate;
-  const rushPriced = useCheckoutQuote(isRush ? ordered : undefined, quantity, true);
+  const rushPriced = useCheckoutQuote(isRush ? ordered : undefined, quantity, true, shippingMethod);
   const shown = isRush ? rushPriced : priced;
   const place = usePlaceOrder();
   const [repriced, setRepriced] = useState<Repriced>();
@@ -146,6 +150,8 @@ export function CheckoutPage() {
   const submit = async (fields: CheckoutFields, quoteId = shown.quote?.quoteId) => {
     if (quoteId === undefined) return;
     lastFields.current = fields;
+    // The way the shown price ships; the server checks the shop still offers it.
+    const chosenShipping = shown.quote?.quote.shipping?.method;
     setRepriced(undefined);
     let designId = design.id;
     if (resized) {
@@ -163,6 +169,7 @@ export function CheckoutPage() {
               document: kept.document,
               quantity,
               isRush,
+              ...(chosenShipping ? { shippingMethod: chosenShipping } : {}),
             })
           ).quoteId;
         }
@@ -174,7 +181,13 @@ export function CheckoutPage() {
       }
     }
     place.mutate(
-      { quoteId, designId, ...fields, ...(needsSafetyTick ? { hasReadSafetyNotes: hasTickedSafety } : {}) },
+      {
+        quoteId,
+        designId,
+        ...fields,
+        ...(chosenShipping ? { shippingMethod: chosenShipping } : {}),
+        ...(needsSafetyTick ? { hasReadSafetyNotes: hasTickedSafety } : {}),
+      },
       {
         onSuccess: (started) => window.location.assign(started.checkoutUrl),
         onError: (error) => setRepriced(repricedOf(error)),
@@ -211,6 +224,7 @@ export function CheckoutPage() {
             onNeededByChange={onNeededByChange}
             onSubmit={(fields) => void submit(fields)}
             serverFields={serverFields}
+            shippingMethod={quote?.quote.shipping?.method}
             isSubmitting={place.isPending || isSavingDesign}
             canSubmit={quote !== undefined && !shown.isPricing && (!needsSafetyTick || hasTickedSafety)}
             summary={
@@ -289,6 +303,17 @@ export function CheckoutPage() {
             </p>
           )}
           <QuantityField quantity={quantity} onChange={setQuantity} />
+          <ShippingChoice
+            shipping={quote?.quote.shipping}
+            currency={quote?.quote.currency}
+            chosen={shippingMethod}
+            onChoose={setShippingMethod}
+          />
+          {serverFields?.shippingMethod && (
+            <p role="alert" className="text-sm text-madder-700">
+              {serverFields.shippingMethod}
+            </p>
+          )}
           <div aria-live="polite" className={shown.isPricing ? 'opacity-60' : ''}>
             <p role="status" className="text-sm text-walnut-500">
               {shown.isPricing ? 'Pricing…' : isRush ? 'Priced as a rush order' : ''}

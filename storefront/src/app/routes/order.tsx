@@ -9,6 +9,7 @@ import { useMotifs } from '../../features/catalogue/api/get-motifs.ts';
 import { useFonts } from '../../features/catalogue/api/get-fonts.ts';
 import { useThreads } from '../../features/catalogue/api/get-threads.ts';
 import { QuoteLines } from '../../features/quote/components/quote-lines.tsx';
+import { DeliveryDetails } from '@ui/components/delivery-details.tsx';
 import { useOrder } from '../../features/orders/api/get-order.ts';
 import { OrderStatusBadge } from '../../features/orders/components/order-status-badge.tsx';
 import { OrderSteps } from '../../features/orders/components/order-steps.tsx';
@@ -173,23 +174,9 @@ export function OrderPage() {
           </section>
           <section aria-labelledby="ship-heading" className={card}>
             <h2 id="ship-heading" className="mb-2 text-lg font-semibold">
-              Sending to
+              {summary.delivery.method === 'pickup' ? 'Picking it up' : 'Sending to'}
             </h2>
-            <address className="text-sm not-italic">
-              {summary.shipTo.name}
-              <br />
-              {summary.shipTo.line1}
-              <br />
-              {summary.shipTo.line2 && (
-                <>
-                  {summary.shipTo.line2}
-                  <br />
-                </>
-              )}
-              {summary.shipTo.city}, {summary.shipTo.region} {summary.shipTo.postalCode}
-              <br />
-              {summary.shipTo.countryCode}
-            </address>
+            <DeliveryDetails delivery={summary.delivery} shipTo={summary.shipTo} audience="customer" />
             {summary.customerNote && (
               <p className="mt-2 text-sm text-walnut-700">Your note: “{summary.customerNote}”</p>
             )}

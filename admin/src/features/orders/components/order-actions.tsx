@@ -5,7 +5,8 @@ import type { ApiError } from '@ui/api-client.ts';
 import { formatMoney } from '@ui/format.ts';
 import { statusLabels } from '../../../lib/order-status-labels.ts';
 import { useOrderAction, type OrderActionRequest } from '../api/order-actions.ts';
-import { parseCents } from '../model/money-input.ts';
+import { parseCents } from '../../../lib/money-input.ts';
+import { ShipStep } from './ship-step.tsx';
 
 type Step = 'charge' | 'cancel' | 'refund' | 'ship' | null;
 const input = 'min-h-11 rounded-lg border border-linen-300 bg-white px-3 text-sm';
@@ -52,7 +53,6 @@ export function OrderActions({ detail }: { detail: OrderDetailResponse }) {
   const [reason, setReason] = useState('');
   const [refundText, setRefundText] = useState('');
   const [isFullRefund, setIsFullRefund] = useState(true);
-  const [tracking, setTracking] = useState('');
   const action = useOrderAction(order.number);
   const money = (cents: number) => formatMoney(cents, order.currency);
   const live = payments.at(-1);
@@ -192,31 +192,13 @@ export function OrderActions({ detail }: { detail: OrderDetailResponse }) {
         </Confirm>
       )}
       {step === 'ship' && (
-        <div className="grid gap-3 rounded-lg border border-linen-200 p-3 text-sm">
-          <label className="grid gap-1">
-            <span className="font-medium">Tracking number (if the parcel has one)</span>
-            <input
-              value={tracking}
-              onChange={(event) => setTracking(event.target.value)}
-              className={input}
-              aria-invalid={Boolean(fields.trackingNumber)}
-            />
-            {fields.trackingNumber && <span className="text-madder-700">{fields.trackingNumber}</span>}
-          </label>
-          <div className="flex gap-2">
-            <Button
-              onClick={() =>
-                run({ action: 'shipped', body: tracking.trim() ? { trackingNumber: tracking.trim() } : {} })
-              }
-              disabled={action.isPending}
-            >
-              Posted: tell the customer
-            </Button>
-            <Button tone="quiet" onClick={() => setStep(null)}>
-              Not now
-            </Button>
-          </div>
-        </div>
+        <ShipStep
+          isPickup={order.delivery.method === 'pickup'}
+          isBusy={action.isPending}
+          serverFields={fields}
+          onShip={(body) => run({ action: 'shipped', body })}
+          onBack={() => setStep(null)}
+        />
       )}
       {action.isError && (
         <p role="alert" className="rounded-md bg-madder-50 p-2 text-sm text-madder-700">

@@ -4,6 +4,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { placeOrderRequest } from '@server/contracts/orders.ts';
 import { Button } from '@ui/components/button.tsx';
+import { SavedAddressPicker } from './saved-address-picker.tsx';
 
 /** The part of the order the customer types; the quote and design come from the page. */
 export const checkoutFields = placeOrderRequest.pick({ neededBy: true, shipTo: true, note: true });
@@ -22,6 +23,8 @@ interface CheckoutFormProps {
   /** Shown above the button: the total to be held, and anything that stops the order. */
   summary: ReactNode;
   canSubmit: boolean;
+  /** How the priced order travels: the address is where to post it, or, for pick-up, the customer's own. */
+  shippingMethod: 'delivery' | 'pickup' | undefined;
 }
 
 const inputClass =
@@ -44,6 +47,7 @@ export function CheckoutForm({
   isSubmitting,
   summary,
   canSubmit,
+  shippingMethod,
 }: CheckoutFormProps) {
   const id = useId();
   const form = useForm<CheckoutFieldsInput, unknown, CheckoutFields>({
@@ -54,7 +58,13 @@ export function CheckoutForm({
       note: '',
     },
   });
-  const { register, formState, setError, watch } = form;
+  const { register, formState, setError, watch, setValue } = form;
+  const fillAddress = (address: CheckoutFieldsInput['shipTo']) => {
+    for (const [key, value] of Object.entries({ line2: '', phone: '', ...address }))
+      setValue(`shipTo.${key}` as FieldPath<CheckoutFieldsInput>, value ?? '', {
+        shouldValidate: formState.isSubmitted,
+      });
+  };
   const neededBy = watch('neededBy');
 
   useEffect(() => onNeededByChange(neededBy), [neededBy, onNeededByChange]);
@@ -139,7 +149,15 @@ export function CheckoutForm({
       </fieldset>
 
       <fieldset className="grid gap-4 sm:grid-cols-2">
-        <legend className="mb-2 text-lg font-semibold">Where should we send it?</legend>
+        <legend className="mb-2 text-lg font-semibold">
+          {shippingMethod === 'pickup' ? 'Your address' : 'Where should we send it?'}
+        </legend>
+        {shippingMethod === 'pickup' && (
+          <p className="text-sm text-walnut-500 sm:col-span-2">
+            You collect the order from the studio; we keep your address with the order in case we need to reach you.
+          </p>
+        )}
+        <SavedAddressPicker onUse={fillAddress} />
         {field('shipTo.name', 'Name', { autoComplete: 'name', className: 'sm:col-span-2' })}
         {field('shipTo.line1', 'Street address', { autoComplete: 'address-line1', className: 'sm:col-span-2' })}
         {field('shipTo.line2', 'Flat, suite or building', {

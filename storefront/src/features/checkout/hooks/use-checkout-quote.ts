@@ -1,6 +1,7 @@
 import { useEffect, useState } from 'react';
 import type { DesignDocument } from '@server/contracts/designs.ts';
 import type { StoredQuoteResponse } from '@server/contracts/stored-quotes.ts';
+import type { ShippingMethod } from '@server/contracts/shipping.ts';
 import { useCreateQuote } from '../api/create-quote.ts';
 
 /** Wait this long after the last change before asking for a new quote. */
@@ -19,11 +20,18 @@ export interface OrderedDesign {
  * The stored quote for the design at this quantity and pace, asked for again whenever they change; the last
  * quote stays on show while the next is priced.
  */
-export function useCheckoutQuote(design: OrderedDesign | undefined, quantity: number, isRush: boolean) {
+export function useCheckoutQuote(
+  design: OrderedDesign | undefined,
+  quantity: number,
+  isRush: boolean,
+  shippingMethod?: ShippingMethod,
+) {
   const create = useCreateQuote();
   const [priced, setPriced] = useState<{ key: string; quote: StoredQuoteResponse }>();
   const { mutate } = create;
-  const key = design ? JSON.stringify([design.id, design.sizeId, design.document, quantity, isRush]) : '';
+  const key = design
+    ? JSON.stringify([design.id, design.sizeId, design.document, quantity, isRush, shippingMethod])
+    : '';
   useEffect(() => {
     if (!design) return;
     const timer = setTimeout(() => {
@@ -35,10 +43,11 @@ export function useCheckoutQuote(design: OrderedDesign | undefined, quantity: nu
         document: design.document,
         quantity,
         isRush,
+        ...(shippingMethod ? { shippingMethod } : {}),
       };
       mutate(request, { onSuccess: (quote) => setPriced({ key, quote }) });
     }, SETTLE_MS);
     return () => clearTimeout(timer);
-  }, [design, quantity, isRush, mutate, key]);
+  }, [design, quantity, isRush, shippingMethod, mutate, key]);
   return { quote: priced?.quote, isPricing: create.isPending || priced?.key !== key, error: create.error };
 }

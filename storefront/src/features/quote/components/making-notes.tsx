@@ -5,6 +5,30 @@ const counted = (count: number, one: string, many: string) =>
   `${count.toLocaleString('en-US')} ${count === 1 ? one : many}`;
 
 /**
+ * The hoopings and thread changes in all, in the words the price's lines use: each part's first hooping is in its
+ * own price, so only the rest are "extra"; thread changes count the ones between parts too.
+ */
+function StitchingTotals({
+  stitching,
+  placements,
+}: {
+  stitching: NonNullable<QuotePreviewResponse['stitching']>;
+  placements: number;
+}) {
+  return (
+    <p className="mt-1 text-walnut-700" aria-label="Hoopings and thread changes in all">
+      In all: {counted(stitching.hoopings, 'hooping', 'hoopings')}, of which{' '}
+      {counted(stitching.extraHoopings, 'is extra', 'are extra')} (
+      {placements === 1 ? 'the first is included' : `the first of each of the ${placements} parts is included`});{' '}
+      {counted(stitching.colourChanges, 'thread change', 'thread changes')}
+      {stitching.colourChangesBetweenPlacements > 0 &&
+        `, ${stitching.colourChangesBetweenPlacements} of them between parts, in the order they are stitched`}
+      .
+    </p>
+  );
+}
+
+/**
  * How the design will be made and what to know about it, in plain words: the trade words "hooping" and
  * "stabilizer" are explained where they first appear; the server's stabilizer advice follows as notes, then its
  * safety notes for the garment, size and design.
@@ -26,6 +50,7 @@ export function MakingNotes({ preview }: { preview: QuotePreviewResponse }) {
             </li>
           ))}
         </ul>
+        {preview.stitching && <StitchingTotals stitching={preview.stitching} placements={preview.placements.length} />}
         <p className="mt-2 text-xs text-walnut-500">
           <strong className="font-medium">Hooping</strong> is how each part is stitched: the fabric is held taut in a
           ring (the hoop) on the machine. A border is stitched one hooping at a time, moving the hoop along the hem.{' '}
