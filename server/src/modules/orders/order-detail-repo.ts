@@ -3,6 +3,7 @@ import type { OrderDetailResponse } from '../../contracts/admin-orders.ts';
 import { proofImagePath } from '../../contracts/studio-orders.ts';
 import { orderArtworkImagePath } from '../../contracts/admin-orders.ts';
 import { restoreDesign } from '../../contracts/designs.ts';
+import { proofVersionColumns, proofVersionOf } from './proof-repo.ts';
 
 const iso = (value: Date | string | null): string | null => (value === null ? null : new Date(value).toISOString());
 
@@ -54,6 +55,7 @@ export async function readOrderDetail(
         'source',
         'customer_comment',
         'comment_pins',
+        ...proofVersionColumns,
         db.raw('image_png IS NOT NULL as has_image'),
       )
       .where({ order_id: order.id })
@@ -109,6 +111,7 @@ export async function readOrderDetail(
       customerComment: p.customer_comment,
       commentPins: typeof p.comment_pins === 'string' ? JSON.parse(p.comment_pins) : p.comment_pins,
       imageUrl: p.has_image ? proofImagePath(order.number, p.version) : null,
+      ...proofVersionOf(p),
     })),
     events: events.map((e) => ({
       id: e.id,
