@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { orderDetailResponse } from '../../server/src/contracts/admin-orders.ts';
 import { customerOrderResponse } from '../../server/src/contracts/orders.ts';
+import { adminOverviewResponse } from '../../server/src/contracts/admin-overview.ts';
 import { orderDesignResponse, repricedOrder, stitchFileResponse } from '../../server/src/contracts/proof-versions.ts';
 import type { DesignDocument } from '../../server/src/contracts/designs.ts';
 import { useApiHarness, type ApiAgent } from '../support/api-harness.ts';
@@ -23,8 +24,17 @@ const stitchFilePath = '/api/admin/orders/WB-1009/placements/sunshine/stitch-fil
 const totalOf = async (number: string) =>
   Number((await harness.db('orders').where({ number }).first('total_cents')).total_cents);
 
+const picturesToDigitize = async () => {
+  const body = adminOverviewResponse.parse((await staff.get('/api/admin/overview').expect(200)).body);
+  return body.actions.find((group) => group.kind === 'pictures_to_digitize')!.orders.map((order) => order.number);
+};
+
 describe('the stitch file of a customer’s picture, entered after digitizing', () => {
   let authorizedCents = 0;
+
+  it('when a paid order’s picture has no stitch file yet, then Today lists it among the pictures to digitize', async () => {
+    expect(await picturesToDigitize()).toEqual(['WB-1009']);
+  });
 
   it('when staff enter a file with many more stitches than the estimate, then the price rises against what was authorized, and the order keeps its total', async () => {
     authorizedCents = await totalOf('WB-1009');
@@ -49,6 +59,7 @@ describe('the stitch file of a customer’s picture, entered after digitizing', 
     expect(answer.price.isPriceProvisional).toBe(false);
     // Only the customer's approval of a proof carrying the new price changes the order's total.
     expect(await totalOf('WB-1009')).toBe(authorizedCents);
+    expect(await picturesToDigitize()).toEqual([]);
     const row = await harness.db('placement_stitch_files').first();
     expect(row).toMatchObject({ placement_id: 'sunshine', stitch_count: 42_000, colour_count: 4 });
   });
