@@ -100,6 +100,8 @@ export const orderDesignResponse = z.object({
   document: designDocument,
   /** The proof version this design comes from; 0 for the design as ordered. */
   fromVersion: z.number().int(),
+  /** The number the next proof will carry. */
+  nextVersion: z.number().int(),
   price: repricedOrder,
   stitchFiles: z.array(stitchFile),
 });

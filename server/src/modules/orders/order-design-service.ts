@@ -54,6 +54,7 @@ export function createOrderDesignService(deps: { db: Db; repricing: OrderReprici
       mockupHeightMm: size.heightMm * context.mockup.scale,
       document,
       fromVersion,
+      nextVersion: (context.latestProof?.version ?? 0) + 1,
       price: price.value,
       stitchFiles,
     });
