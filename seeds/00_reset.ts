@@ -11,6 +11,7 @@ export const seededTables = [
   'email_log',
   'payments',
   'payment_webhook_events',
+  'placement_stitch_files',
   'proofs',
   'order_events',
   'order_items',

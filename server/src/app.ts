@@ -60,6 +60,8 @@ import { createOrderPaymentService } from './modules/orders/order-payment-servic
 import { createPaymentWebhookService } from './modules/orders/payment-webhook-service.ts';
 import { createPaymentWebhookRouter } from './modules/orders/payment-webhook-routes.ts';
 import { createProofService } from './modules/orders/proof-service.ts';
+import { createOrderRepricing } from './modules/orders/order-repricing.ts';
+import { createOrderDesignService } from './modules/orders/order-design-service.ts';
 import { createProductionSheetService } from './modules/production/production-sheet-service.ts';
 import { createProductionSheetRouter } from './modules/production/admin-routes.ts';
 import { createPricingService } from './modules/pricing/pricing-service.ts';
@@ -250,13 +252,15 @@ export function createApp(deps: AppDeps): Express {
       uploadMaxBytes,
     }),
   );
+  const repricing = createOrderRepricing({ db, quotes });
   app.use(
     '/api/admin/orders',
     createAdminOrdersRouter({
       orders: createStudioOrderService({ db, artwork, now }),
       payments: createOrderPaymentService(money),
       production: createOrderProductionSteps({ db, mailer, now, appOrigin }),
-      proofs: createProofService({ db, mailer, now, appOrigin, heavyWork }),
+      proofs: createProofService({ db, mailer, now, appOrigin, heavyWork, repricing }),
+      designs: createOrderDesignService({ db, repricing, now }),
       productionSheets: createProductionSheetRouter({
         sheets: createProductionSheetService({ db, fonts, heavyWork }),
       }),

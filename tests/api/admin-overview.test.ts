@@ -18,6 +18,8 @@ describe('GET /api/admin/overview', () => {
       body.actions.map((group) => [group.kind, group.orders.map((order) => order.number)]),
     );
     expect(numbers).toEqual({
+      // WB-1009 places Harriet's granddaughter's drawing, and no stitch file has been entered for it yet.
+      pictures_to_digitize: ['WB-1009'],
       proofs_to_send: ['WB-1009', 'WB-1010'],
       changes_asked: ['WB-1007'],
       awaiting_charge: ['WB-1006'],

@@ -106,3 +106,23 @@ export async function approveLatestProofAsCustomer(db: Db, number: string, now: 
     await trx('proofs').where({ id: proof.id }).update({ status: 'approved', responded_at: now });
   });
 }
+
+/** The customer asking for changes to the latest proof, as their answer would, through the same state machine. */
+export async function requestChangesAsCustomer(db: Db, number: string, comment: string, now: Date): Promise<void> {
+  await db.transaction(async (trx) => {
+    const order = await trx('orders').where({ number }).first('id', 'customer_id');
+    const moved = await moveOrder(trx, {
+      orderId: order.id,
+      action: 'request_changes',
+      actor: 'customer',
+      actorUserId: order.customer_id,
+      note: comment,
+      now,
+    });
+    if (!moved.ok) throw new Error(`Could not ask for changes to ${number}: ${moved.error.message}`);
+    const proof = await trx('proofs').where({ order_id: order.id }).orderBy('version', 'desc').first('id');
+    await trx('proofs')
+      .where({ id: proof.id })
+      .update({ status: 'changes_requested', customer_comment: comment, responded_at: now });
+  });
+}

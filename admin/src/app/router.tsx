@@ -41,6 +41,13 @@ export const router = createBrowserRouter(
               (params) => `Order ${params.number ?? ''}`,
             ),
             lazyPage(
+              paths.orderDesign.path,
+              () => import('./routes/order-design.tsx'),
+              'OrderDesignPage',
+              'Opening the design…',
+              (params) => `Change the design of ${params.number ?? ''}`,
+            ),
+            lazyPage(
               paths.productionSheet.path,
               () => import('./routes/production-sheet.tsx'),
               'ProductionSheetPage',

@@ -8,6 +8,10 @@ export const paths = {
     path: '/orders/:number/production',
     href: (number: string) => `/orders/${encodeURIComponent(number)}/production`,
   },
+  orderDesign: {
+    path: '/orders/:number/design',
+    href: (number: string) => `/orders/${encodeURIComponent(number)}/design`,
+  },
   pricing: { path: '/pricing', href: () => '/pricing' },
   settings: { path: '/settings', href: () => '/settings' },
   people: { path: '/people', href: () => '/people' },

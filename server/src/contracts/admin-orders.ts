@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { orderStatus, paymentStatus } from './order-status.ts';
 import { orderDelivery, shownAddress } from './shipping.ts';
+import { proofPrice } from './proof-versions.ts';
 
 export const orderNumberParams = z.object({
   number: z.string().regex(/^[A-Z]{2}-\d{1,10}$/, 'must look like WB-1001'),
@@ -96,6 +97,10 @@ export const orderDetailResponse = z.object({
       commentPins: z.array(z.object({ xPct: z.number(), yPct: z.number(), comment: z.string() })),
       /** Null when no picture was kept (seeded history). */
       imageUrl: z.string().nullable(),
+      /** What changed since the version before, in words. */
+      changes: z.array(z.string()),
+      /** The price this version carries against the order's total when it was sent. */
+      price: proofPrice,
     }),
   ),
   /** What the studio can do to the order now, by the state machine: the order page shows a button for each. */

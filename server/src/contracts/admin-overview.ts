@@ -20,6 +20,8 @@ export const actionOrder = recentOrder.extend({ dueDate: z.string().nullable(), 
 export type ActionOrder = z.infer<typeof actionOrder>;
 
 export const actionGroupKinds = [
+  /** Paid orders with a customer's picture whose stitch file is not entered yet: its price is still to confirm. */
+  'pictures_to_digitize',
   'proofs_to_send',
   'changes_asked',
   'awaiting_charge',

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { designDocument } from './designs.ts';
+import { proofPrice } from './proof-versions.ts';
 import { orderStatus, paymentStatus } from './order-status.ts';
 import { guidanceMessage } from './guidance.ts';
 import { calendarDate } from './calendar-date.ts';
@@ -165,6 +166,10 @@ const proofSummary = z.object({
   imageUrl: z.string().nullable(),
   /** Only the latest version the studio sent, while unanswered, takes an answer. */
   isAnswerable: z.boolean(),
+  /** What the studio changed since the version before, in words. */
+  changes: z.array(z.string()),
+  /** The price that approving this proof agrees to, against the order's total when it was sent. */
+  price: proofPrice,
 });
 export type CustomerProof = z.infer<typeof proofSummary>;
 

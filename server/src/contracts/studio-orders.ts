@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { orderStatus, orderStatuses, paymentStatus } from './order-status.ts';
+import { designDocument } from './designs.ts';
 
 /**
  * The studio's order board and the actions on one order: the list with its filters, the due-date calendar, and the
@@ -117,7 +118,11 @@ const message = z
 /** JSON for a render; multipart (`file` + these fields) for a photo of a test stitch-out. */
 export const sendProofRequest = z.discriminatedUnion(
   'source',
-  [z.object({ source: z.literal('render'), message }), z.object({ source: z.literal('photo'), message })],
+  [
+    // A render may carry the studio's changed version of the design, which the proof then shows and prices.
+    z.object({ source: z.literal('render'), message, document: designDocument.optional() }),
+    z.object({ source: z.literal('photo'), message }),
+  ],
   { error: 'choose render or photo' },
 );
 export type SendProofRequest = z.infer<typeof sendProofRequest>;

@@ -9,6 +9,7 @@ import { OrderMoney } from '../../features/orders/components/order-money.tsx';
 import { OrderActions } from '../../features/orders/components/order-actions.tsx';
 import { ProofVersions } from '../../features/orders/components/proof-versions.tsx';
 import { SendProofForm } from '../../features/orders/components/send-proof-form.tsx';
+import { DesignWorkPanel } from '../../features/orders/components/design-work-panel.tsx';
 import { statusLabels } from '../../lib/order-status-labels.ts';
 import { paths } from '../../config/paths.ts';
 
@@ -106,6 +107,11 @@ export function OrderPage() {
               ))}
             </ul>
           </Panel>
+          {studioActions.includes('send_proof') && (
+            <Panel title="Digitizing and price">
+              <DesignWorkPanel number={order.number} editorHref={paths.orderDesign.href(order.number)} />
+            </Panel>
+          )}
           <Panel title="Price and payment">
             <OrderMoney detail={detail.data} />
           </Panel>
@@ -119,7 +125,7 @@ export function OrderPage() {
               {studioActions.includes('send_proof') && (
                 <SendProofForm number={order.number} versionCount={proofs.length} />
               )}
-              <ProofVersions proofs={proofs} />
+              <ProofVersions proofs={proofs} currency={order.currency} />
             </div>
           </Panel>
           <Panel title="History">

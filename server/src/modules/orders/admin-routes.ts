@@ -19,12 +19,15 @@ import type { OrderPaymentService, StudioActor } from './order-payment-service.t
 import type { ProofService } from './proof-service.ts';
 import type { OrderProductionSteps } from './order-production-steps.ts';
 import type { StudioOrderService } from './studio-order-service.ts';
+import type { OrderDesignService } from './order-design-service.ts';
+import { proofDraftRequest, stitchFileParams, stitchFileRequest } from '../../contracts/proof-versions.ts';
 
 export interface AdminOrdersDeps {
   orders: StudioOrderService;
   payments: OrderPaymentService;
   production: OrderProductionSteps;
   proofs: ProofService;
+  designs: OrderDesignService;
   /** The production sheet's routes (`/:number/production-sheet…`), which the production module answers. */
   productionSheets: Router;
   uploadMaxBytes: number;
@@ -99,6 +102,33 @@ export function createAdminOrdersRouter(deps: AdminOrdersDeps): Router {
       const image = await deps.proofs.image(params.number, params.version);
       if (!image.ok) return sendResult(res, image);
       res.set('Cache-Control', 'private, max-age=3600').type('image/png').send(image.value);
+    }),
+  );
+
+  router.get(
+    '/:number/design',
+    validated(byNumber, async ({ params }, _req, res) => {
+      sendResult(res, await deps.designs.design(params.number));
+    }),
+  );
+  router.post(
+    '/:number/design/price',
+    validated({ ...byNumber, body: proofDraftRequest }, async ({ params, body }, _req, res) => {
+      sendResult(res, await deps.designs.draftPrice(params.number, body.document));
+    }),
+  );
+  router.post(
+    '/:number/design/picture',
+    validated({ ...byNumber, body: proofDraftRequest }, async ({ params, body }, _req, res) => {
+      const image = await deps.proofs.preview(params.number, body.document);
+      if (!image.ok) return sendResult(res, image);
+      res.type('image/png').send(image.value);
+    }),
+  );
+  router.put(
+    '/:number/placements/:placementId/stitch-file',
+    validated({ params: stitchFileParams, body: stitchFileRequest }, async ({ params, body }, req, res) => {
+      sendResult(res, await deps.designs.enterStitchFile(params.number, params.placementId, body, actorOf(req)));
     }),
   );
 

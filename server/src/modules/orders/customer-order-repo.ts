@@ -1,3 +1,5 @@
+import { proofVersionColumns, proofVersionOf } from './proof-repo.ts';
+import type { ProofPrice } from '../../contracts/proof-versions.ts';
 import type { Db } from '../../db/knex.ts';
 import type { OrderStatus, PaymentStatus } from '../../contracts/order-status.ts';
 import type { ShipTo } from '../../contracts/orders.ts';
@@ -116,6 +118,8 @@ export interface CustomerOrderDetailRows {
     customerComment: string | null;
     pins: { xPct: number; yPct: number; comment: string }[];
     hasImage: boolean;
+    changes: string[];
+    price: ProofPrice;
   }[];
   events: StoredOrderEvent[];
 }
@@ -163,6 +167,7 @@ export async function readCustomerOrder(
         'responded_at',
         'customer_comment',
         'comment_pins',
+        ...proofVersionColumns,
         db.raw('image_png IS NOT NULL AS has_image'),
       )
       .where({ order_id: row.id })
@@ -198,6 +203,7 @@ export async function readCustomerOrder(
       customerComment: p.customer_comment,
       pins: p.comment_pins ?? [],
       hasImage: Boolean(p.has_image),
+      ...proofVersionOf(p),
     })),
     events: events.map((e) => ({
       id: e.id,

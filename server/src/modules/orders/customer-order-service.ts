@@ -29,6 +29,8 @@ import { customerTimeline } from './customer-order-wording.ts';
 import { isPaymentNeeded } from './checkout-service.ts';
 import type { QuoteService } from '../quotes/quote-service.ts';
 import { dueDateOf } from '../../engine/index.ts';
+import { adoptApprovedProofPrice } from './order-price-of-record.ts';
+import { latestProofDocument } from './proof-repo.ts';
 
 type ProofAnswer = z.output<typeof proofAnswerRequest>;
 
@@ -80,8 +82,12 @@ export function createCustomerOrderService(deps: {
   async function get(customerId: number, number: string): Promise<Result<CustomerOrderResponse>> {
     const detail = await readCustomerOrder(db, customerId, number);
     if (!detail) return noSuchOrder(number);
-    const payments = await listPayments(db, detail.order.id);
-    const restored = restoreDesign(detail.design.document);
+    const [payments, proofDocument] = await Promise.all([
+      listPayments(db, detail.order.id),
+      latestProofDocument(db, detail.order.id),
+    ]);
+    // The design as the latest proof showed it: the studio may have changed it at the customer's request.
+    const restored = restoreDesign(proofDocument ?? detail.design.document);
     if (!restored.success) throw new Error(`The design of ${number} no longer restores: ${restored.error.message}`);
     const { order } = detail;
     const now = deps.now();
@@ -108,7 +114,11 @@ export function createCustomerOrderService(deps: {
         isRush: detail.quote.isRush,
         isWaitingOnCustomer: needsPayment || latestSent !== undefined,
       },
-      quote: { ruleSetVersion: detail.quote.ruleSetVersion, lines: detail.quote.lines },
+      // Once a proof with its own price is approved, its lines are the order's.
+      quote: {
+        ruleSetVersion: detail.quote.ruleSetVersion,
+        lines: detail.proofs.findLast((p) => p.status === 'approved' && p.price)?.price?.lines ?? detail.quote.lines,
+      },
       design: { ...detail.design, document: restored.data },
       cautions,
       payment: paymentSummary(payments, detail.events, needsPayment, now),
@@ -167,6 +177,15 @@ export function createCustomerOrderService(deps: {
         now,
       });
       if (!moved.ok) return moved;
+      // Approving a proof that carries a new price makes it the order's price; the studio's charge takes it.
+      if (isApproved)
+        await adoptApprovedProofPrice(trx, {
+          orderId: order.id,
+          proofId: latest.id,
+          proofVersion: version,
+          actorUserId: customer.id,
+          now,
+        });
       await recordProofAnswer(trx, latest.id, {
         status: isApproved ? 'approved' : 'changes_requested',
         comment: answer.comment ?? null,

@@ -31,6 +31,8 @@ function titleOf(event: StoredOrderEvent, currency: string): string | undefined 
       return `You asked for changes to proof${version}`;
     case 'proof_approved':
       return `You approved proof${version}`;
+    case 'price_changed':
+      return amount ? `The order now comes to ${amount}, as proof${version} showed` : undefined;
     case 'payment_captured':
       return amount ? `${amount} charged; stitching has started` : 'Card charged; stitching has started';
     case 'stitched':

@@ -6,6 +6,7 @@ import { restoreDesign } from '../../contracts/designs.ts';
 import { jsonColumn } from '../../db/json-column.ts';
 import type { ShipTo } from '../../contracts/orders.ts';
 import { deliveryOfRow } from './order-shipment-repo.ts';
+import { proofVersionColumns, proofVersionOf } from './proof-repo.ts';
 
 const iso = (value: Date | string | null): string | null => (value === null ? null : new Date(value).toISOString());
 
@@ -66,6 +67,7 @@ export async function readOrderDetail(
         'source',
         'customer_comment',
         'comment_pins',
+        ...proofVersionColumns,
         db.raw('image_png IS NOT NULL as has_image'),
       )
       .where({ order_id: order.id })
@@ -126,6 +128,7 @@ export async function readOrderDetail(
       customerComment: p.customer_comment,
       commentPins: typeof p.comment_pins === 'string' ? JSON.parse(p.comment_pins) : p.comment_pins,
       imageUrl: p.has_image ? proofImagePath(order.number, p.version) : null,
+      ...proofVersionOf(p),
     })),
     events: events.map((e) => ({
       id: e.id,

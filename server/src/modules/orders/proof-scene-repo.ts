@@ -38,7 +38,11 @@ const mmOrNull = (value: string | null) => (value === null ? null : Number(value
  * The scene of an order's first line (an order is one design on identical garments), with the catalogue rows its
  * design names, retired ones included: a proof shows what was ordered, even if the shop no longer offers it.
  */
-export async function loadProofScene(db: Db, orderId: number): Promise<ProofScene | undefined> {
+export async function loadProofScene(
+  db: Db,
+  orderId: number,
+  design?: DesignDocument,
+): Promise<ProofScene | undefined> {
   const row = await db('order_items as i')
     .join('designs as d', 'd.id', 'i.design_id')
     .join('garments as g', 'g.id', 'd.garment_id')
@@ -57,7 +61,9 @@ export async function loadProofScene(db: Db, orderId: number): Promise<ProofScen
       'c.hex',
     );
   if (!row) return undefined;
-  const document = designDocument.parse(typeof row.document === 'string' ? JSON.parse(row.document) : row.document);
+  // The studio's own version of the design (a change it made for a proof) is drawn instead of the one ordered.
+  const document =
+    design ?? designDocument.parse(typeof row.document === 'string' ? JSON.parse(row.document) : row.document);
   const motifSlugs = document.placements.flatMap((p) => (p.kind === 'border' || p.kind === 'motif' ? [p.motif] : []));
   const fontSlugs = document.placements.flatMap((p) => (p.kind === 'lettering' ? [p.font] : []));
   const uploadIds = document.placements.flatMap((p) => (p.kind === 'artwork' ? [p.artworkUploadId] : []));

@@ -17,6 +17,9 @@ import { planOrderMove } from './order-flow.ts';
 import { moveOrder } from './order-transitions.ts';
 import type { StudioActor } from './order-payment-service.ts';
 import { proofReadyMail } from './studio-order-mail.ts';
+import type { DesignDocument } from '../../contracts/designs.ts';
+import { readOrderPricingContext } from './order-design-repo.ts';
+import { currentDesignOf, type OrderRepricing } from './order-repricing.ts';
 
 export function createProofService(deps: {
   db: Db;
@@ -24,12 +27,13 @@ export function createProofService(deps: {
   now: () => Date;
   appOrigin: string;
   heavyWork: HeavyWork;
+  repricing: OrderRepricing;
 }) {
   const { db } = deps;
 
   /** The render proof of the order's design, drawn in the heavy-work pool (resvg and jimp take a while). */
-  async function drawing(orderId: number): Promise<Result<Buffer>> {
-    const scene = await loadProofScene(db, orderId);
+  async function drawing(orderId: number, design: DesignDocument): Promise<Result<Buffer>> {
+    const scene = await loadProofScene(db, orderId, design);
     if (!scene) return failure('conflict', 'This order has no design to draw a proof from; send a photo instead.');
     const drawn = await deps.heavyWork.run<{ png: Uint8Array }>('renderProof', scene);
     return drawn.ok ? ok(asBuffer(drawn.value.png)) : drawn;
@@ -39,18 +43,27 @@ export function createProofService(deps: {
     orderId: number,
     request: SendProofRequest,
     photo: Buffer | undefined,
+    design: DesignDocument,
   ): Promise<Result<Buffer>> {
-    if (request.source === 'render') return drawing(orderId);
+    if (request.source === 'render') return drawing(orderId, design);
     if (!photo)
       return failure('invalid', 'Choose the photo of the stitch-out to send.', { file: 'Choose a PNG or JPEG photo' });
     return cleanPhotoOffThread(deps.heavyWork, photo);
   }
 
-  /** The drawing a render proof would send now, for the studio to look at first; nothing is stored or sent. */
-  async function preview(number: string): Promise<Result<Buffer>> {
-    const order = await findStudioOrder(db, number);
-    if (!order) return failure('not-found', `There is no order ${number}.`);
-    return drawing(order.id);
+  /**
+   * The drawing a render proof would send now, for the studio to look at first, of the design as last sent or of
+   * the studio's draft; nothing is stored or sent.
+   */
+  async function preview(number: string, draft?: DesignDocument): Promise<Result<Buffer>> {
+    const context = await readOrderPricingContext(db, number);
+    if (!context) return failure('not-found', `There is no order ${number}.`);
+    if (draft) {
+      // Pricing refuses a picture that is not the customer's, so a draft cannot draw anyone else's upload.
+      const priced = await deps.repricing.reprice(context, draft);
+      if (!priced.ok) return priced;
+    }
+    return drawing(context.id, draft ?? currentDesignOf(context).document);
   }
 
   async function send(
@@ -64,7 +77,14 @@ export function createProofService(deps: {
     // Checked before the picture is made, so a refused proof costs no rendering; moveOrder checks again under the lock.
     const planned = planOrderMove(order.status, 'send_proof', actor.role);
     if (!planned.ok) return failure(planned.kind, planned.reason);
-    const picture = await pictureFor(order.id, request, photo);
+    const context = await readOrderPricingContext(db, number);
+    if (!context) return failure('not-found', `There is no order ${number}.`);
+    // A change is drawn and priced from the studio's version; otherwise the proof shows the design as last sent.
+    const draft = request.source === 'render' ? request.document : undefined;
+    const design = draft ?? currentDesignOf(context).document;
+    const price = await deps.repricing.reprice(context, draft);
+    if (!price.ok) return price;
+    const picture = await pictureFor(order.id, request, photo, design);
     if (!picture.ok) return picture;
 
     const sent = await db.transaction(async (trx): Promise<Result<{ sent: SentProofResponse; mail: QueuedMail }>> => {
@@ -86,10 +106,25 @@ export function createProofService(deps: {
         message: request.message,
         sentByUserId: actor.userId,
         at: now,
+        version: {
+          document: design,
+          lines: price.value.lines,
+          subtotalCents: price.value.subtotalCents,
+          taxCents: price.value.taxCents,
+          totalCents: price.value.totalCents,
+          previousTotalCents: context.totalCents,
+          changes: price.value.changes,
+        },
       });
       const mail = await queueLoggedMail(
         trx,
-        proofReadyMail(order, deps.appOrigin, { version, message: request.message }),
+        proofReadyMail(order, deps.appOrigin, {
+          version,
+          message: request.message,
+          ...(price.value.differenceCents !== 0 && {
+            newPrice: { totalCents: price.value.totalCents, previousTotalCents: context.totalCents },
+          }),
+        }),
         now,
       );
       return ok({

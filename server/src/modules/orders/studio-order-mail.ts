@@ -32,10 +32,16 @@ export function compose(order: MailOrder, template: string, subject: string, par
 export function proofReadyMail(
   order: MailOrder,
   appOrigin: string,
-  proof: { version: number; message: string },
+  proof: { version: number; message: string; newPrice?: { totalCents: number; previousTotalCents: number } },
 ): LoggedMail {
+  const price = proof.newPrice;
   return compose(order, 'proof_ready', `Your proof for ${order.number} is ready`, [
     proof.message,
+    ...(price
+      ? [
+          `With this proof the order comes to ${formatMoneyText(price.totalCents, order.currency)} instead of ${formatMoneyText(price.previousTotalCents, order.currency)}; approving the proof agrees to the new price.`,
+        ]
+      : []),
     `Look at proof ${proof.version} and approve it, or point at anything you would like changed: ${orderPageUrl(appOrigin, order.number)}`,
     'Nothing is stitched and your card is not charged until you approve.',
   ]);

@@ -50,7 +50,11 @@ export interface DesignFigures {
  * a document records are ignored, and a border's `count` is only the customer's wish. Failures are `invalid`
  * with a message a parent can act on, keyed by the field path in the quote request (`document.placements.0.motif`).
  */
-export function figureDesign(catalogue: QuoteCatalogue, document: DesignDocument): Result<DesignFigures> {
+export function figureDesign(
+  catalogue: QuoteCatalogue,
+  document: DesignDocument,
+  digitized: ReadonlyMap<string, DigitizedFigures> = new Map(),
+): Result<DesignFigures> {
   if (document.placements.length === 0) {
     const message = 'Add a border, a name or a motif so there is embroidery to price.';
     return failure('invalid', message, { 'document.placements': message });
@@ -69,7 +73,9 @@ export function figureDesign(catalogue: QuoteCatalogue, document: DesignDocument
       Object.fromEntries(refusals.map((refusal) => [refusal.field, refusal.message])),
     );
   }
-  const placements = outcomes.flatMap((outcome) => (outcome.ok ? [outcome.figures] : []));
+  const placements = outcomes.flatMap((outcome) =>
+    outcome.ok ? [withDigitizedFigures(outcome.figures, digitized.get(outcome.figures.id))] : [],
+  );
   const sum = (pick: (figures: PlacementFigures) => number) =>
     placements.reduce((total, figures) => total + pick(figures), 0);
   const changesInto = colourChangesBetween(document.placements.map(threadsOf));
@@ -132,6 +138,26 @@ function threadsOf(placement: DesignDocument['placements'][number]): readonly st
   if (placement.kind === 'border' || placement.kind === 'motif') return placement.threads;
   if (placement.kind === 'lettering') return [placement.thread];
   return undefined;
+}
+
+/** What the studio's stitch file of a customer's picture sews: its real stitches and colours. */
+export interface DigitizedFigures {
+  stitches: number;
+  colourCount: number;
+}
+
+/**
+ * A customer's picture once the studio has digitized it is priced from the stitch file, not the estimate: its
+ * stitches, and one colour change between each two of its colours (common practice, no source). Only uploads are
+ * digitized by hand; a catalogue motif or lettering keeps its figures.
+ */
+function withDigitizedFigures(figures: PlacementFigures, file: DigitizedFigures | undefined): PlacementFigures {
+  if (!file || figures.kind !== 'artwork') return figures;
+  return {
+    ...figures,
+    estimate: { ...figures.estimate, stitches: file.stitches, colorChanges: Math.max(0, file.colourCount - 1) },
+    isPriceProvisional: false,
+  };
 }
 
 /**

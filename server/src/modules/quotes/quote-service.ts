@@ -8,7 +8,7 @@ import type { LetteringFontLoader } from '../../integrations/lettering-fonts.ts'
 import type { DesignDocument } from '../../contracts/designs.ts';
 import type { QuotePreviewRequest, QuotePreviewResponse } from '../../contracts/quotes.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
-import { figureDesign, type DesignFigures } from './design-figures.ts';
+import { figureDesign, type DesignFigures, type DigitizedFigures } from './design-figures.ts';
 import { chooseShippingMethod } from './shipping-choice.ts';
 import type { CatalogueArtwork, QuoteCatalogue } from './quote-catalogue-types.ts';
 
@@ -26,7 +26,11 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader; v
    * Prices a design for one garment size and quantity, with what storing the quote needs. Reads only. Artwork
    * uploads count only when `owner` may see them; anyone else's read as not available.
    */
-  async function price(request: QuotePreviewRequest, owner?: ArtworkOwner): Promise<Result<PricedDesign>> {
+  async function price(
+    request: QuotePreviewRequest,
+    owner?: ArtworkOwner,
+    digitized?: ReadonlyMap<string, DigitizedFigures>,
+  ): Promise<Result<PricedDesign>> {
     const { motifSlugs, fontSlugs, artworkIds } = namedIn(request.document);
     const [record, uploads] = await Promise.all([
       catalogueFor({
@@ -42,6 +46,7 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader; v
     const figured = figureDesign(
       toQuoteCatalogue(record.value, deps.fonts, artworkCatalogueOf(uploads)),
       request.document,
+      digitized,
     );
     if (!figured.ok) return figured;
     const figures = figured.value;

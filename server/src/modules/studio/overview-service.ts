@@ -5,6 +5,7 @@ import { readOrderOverview } from './order-overview-repo.ts';
 import { readCapacitySettings, readMoneyMovements, readOpenOrders, type OpenOrderRow } from './studio-week-repo.ts';
 import { bookMachineHours, dueDateOfRow, sumRevenueByWeek } from './studio-weeks.ts';
 import { shopCalendarOf } from '../settings/settings-service.ts';
+import { readOrdersWithPicturesToDigitize } from './digitizing-repo.ts';
 import { addCalendarDays, isPastDue, shopDayOf, weekStartOf } from '../../engine/index.ts';
 
 /** Weeks of machine time shown ahead (this one included) and of takings shown back. */
@@ -14,7 +15,7 @@ const weeksBack = 8;
 const dueSoonDays = 7;
 
 /** The groups that are one status each; "due soon" is by date instead. */
-const statusOfGroup: Record<Exclude<ActionGroupKind, 'due_soon'>, OrderStatus> = {
+const statusOfGroup: Record<Exclude<ActionGroupKind, 'due_soon' | 'pictures_to_digitize'>, OrderStatus> = {
   proofs_to_send: 'authorized',
   changes_asked: 'changes_requested',
   awaiting_charge: 'proof_approved',
@@ -31,11 +32,12 @@ export function createOverviewService(deps: { db: Db; now: () => Date }) {
     // Takings from the first shop day of the earliest week shown; a day before that in UTC does no harm, as the
     // weeks themselves are counted in the shop's days.
     const since = new Date(Date.parse(`${addCalendarDays(weekStartOf(today), -7 * (weeksBack - 1) - 1)}T00:00:00Z`));
-    const [base, open, money, settings] = await Promise.all([
+    const [base, open, money, settings, toDigitize] = await Promise.all([
       readOrderOverview(deps.db, 12),
       readOpenOrders(deps.db),
       readMoneyMovements(deps.db, since),
       readCapacitySettings(deps.db),
+      readOrdersWithPicturesToDigitize(deps.db),
     ]);
     const { leadTimeDays } = schedule;
     const soon = addCalendarDays(today, dueSoonDays);
@@ -68,6 +70,7 @@ export function createOverviewService(deps: { db: Db; now: () => Date }) {
       ...base,
       today,
       actions: [
+        { kind: 'pictures_to_digitize', orders: actions.filter((order) => toDigitize.has(order.id)) },
         inStatus('proofs_to_send'),
         inStatus('changes_asked'),
         inStatus('awaiting_charge'),

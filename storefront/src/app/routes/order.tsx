@@ -113,7 +113,7 @@ export function OrderPage() {
                 Once your card is held we draw a proof of your design on the garment for you to approve.
               </p>
             ) : (
-              <ProofReview number={summary.number} proofs={proofs} />
+              <ProofReview number={summary.number} proofs={proofs} currency={summary.currency} />
             )}
             <SafetyCautions
               cautions={cautions}

@@ -1,11 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { sentProofResponse, type SentProofResponse } from '@server/contracts/studio-orders.ts';
 import { apiErrorBody } from '@server/contracts/errors.ts';
+import type { DesignDocument } from '@server/contracts/designs.ts';
 import { ApiError, apiRequest } from '@ui/api-client.ts';
 import { orderQuery } from './get-order.ts';
 import { orderBoardKey } from './get-order-board.ts';
 
-export type SendProofInput = { source: 'render'; message: string } | { source: 'photo'; message: string; file: File };
+export type SendProofInput =
+  { source: 'render'; message: string; document?: DesignDocument } | { source: 'photo'; message: string; file: File };
 
 const proofsPath = (number: string) => `/api/admin/orders/${encodeURIComponent(number)}/proofs`;
 
@@ -54,7 +56,7 @@ export const sendProof = (number: string, input: SendProofInput, onProgress: (fr
     ? uploadPhoto(number, input, onProgress)
     : apiRequest(`/admin/orders/${encodeURIComponent(number)}/proofs`, sentProofResponse, {
         method: 'POST',
-        body: { source: 'render', message: input.message },
+        body: { source: 'render', message: input.message, ...(input.document && { document: input.document }) },
       });
 
 export function useSendProof(number: string, onProgress: (fraction: number) => void) {
@@ -65,6 +67,7 @@ export function useSendProof(number: string, onProgress: (fraction: number) => v
       Promise.all([
         queryClient.invalidateQueries({ queryKey: orderQuery(number).queryKey }),
         queryClient.invalidateQueries({ queryKey: orderBoardKey }),
+        queryClient.invalidateQueries({ queryKey: ['admin', 'orders', number, 'design'] }),
       ]),
   });
 }

@@ -1,4 +1,5 @@
 import type { OrderDetailResponse } from '@server/contracts/admin-orders.ts';
+import { formatMoney } from '@ui/format.ts';
 
 type Proof = OrderDetailResponse['proofs'][number];
 
@@ -43,7 +44,7 @@ function PinnedPicture({ proof }: { proof: Proof }) {
 }
 
 /** Every version sent, newest first, with what the customer said about it. */
-export function ProofVersions({ proofs }: { proofs: OrderDetailResponse['proofs'] }) {
+export function ProofVersions({ proofs, currency }: { proofs: OrderDetailResponse['proofs']; currency: string }) {
   if (proofs.length === 0) return <p className="text-sm text-walnut-500">No proof sent yet.</p>;
   return (
     <ol className="grid gap-4" aria-label="Proof versions">
@@ -68,6 +69,19 @@ export function ProofVersions({ proofs }: { proofs: OrderDetailResponse['proofs'
           </p>
           {proof.status !== 'superseded' && <PinnedPicture proof={proof} />}
           {proof.message && <p className="text-walnut-700">“{proof.message}”</p>}
+          {proof.price && proof.price.totalCents !== proof.price.previousTotalCents && (
+            <p>
+              Price with this proof: <strong>{formatMoney(proof.price.totalCents, currency)}</strong> (was{' '}
+              {formatMoney(proof.price.previousTotalCents, currency)})
+            </p>
+          )}
+          {proof.changes.length > 0 && (
+            <ul className="list-disc pl-5" aria-label={`Changes in proof ${proof.version}`}>
+              {proof.changes.map((change) => (
+                <li key={change}>{change}</li>
+              ))}
+            </ul>
+          )}
           {proof.customerComment && <p className="rounded-md bg-white p-2">Customer: {proof.customerComment}</p>}
           {proof.commentPins.length > 0 && (
             <ol className="grid gap-1" aria-label={`Comments on proof ${proof.version}`}>

@@ -4,6 +4,10 @@ import { formatMoney } from '@ui/format.ts';
 import { statusLabels } from '../../../lib/order-status-labels.ts';
 
 const groupText: Record<ActionGroupKind, { title: string; empty: string }> = {
+  pictures_to_digitize: {
+    title: 'Pictures to digitize',
+    empty: 'Every customer’s picture has its stitch file.',
+  },
   proofs_to_send: { title: 'Proofs to send', empty: 'Every paid order has its proof.' },
   changes_asked: { title: 'Changes asked for', empty: 'No customer is waiting on a change.' },
   awaiting_charge: { title: 'Approved, ready to charge', empty: 'Nothing approved is waiting to be charged.' },
@@ -28,7 +32,7 @@ export function ActionGroups({
   orderHref: (number: string) => string;
 }) {
   return (
-    <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-5">
+    <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-3">
       {groups.map((group) => (
         <section
           key={group.kind}

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import type { CustomerProof } from '@server/contracts/orders.ts';
 import { ProofAnswerForm } from './proof-answer-form.tsx';
 import { ProofPins } from './proof-pins.tsx';
+import { ProofPriceAndChanges } from './proof-price-and-changes.tsx';
 
 const statusWords: Record<CustomerProof['status'], string> = {
   sent: 'Waiting for your answer',
@@ -13,7 +14,15 @@ const statusWords: Record<CustomerProof['status'], string> = {
 const day = (iso: string) => new Date(iso).toLocaleDateString('en-US', { month: 'long', day: 'numeric' });
 
 /** Every proof the studio sent, newest first to look at; the latest unanswered one takes an answer. */
-export function ProofReview({ number, proofs }: { number: string; proofs: CustomerProof[] }) {
+export function ProofReview({
+  number,
+  proofs,
+  currency,
+}: {
+  number: string;
+  proofs: CustomerProof[];
+  currency: string;
+}) {
   const [shownVersion, setShownVersion] = useState(proofs.at(-1)?.version);
   const proof = proofs.find((p) => p.version === shownVersion) ?? proofs.at(-1);
   if (!proof) {
@@ -49,6 +58,9 @@ export function ProofReview({ number, proofs }: { number: string; proofs: Custom
           {proof.source === 'photo' ? 'a photo of a test stitch-out' : 'drawn to scale on your garment'}
         </p>
         {proof.message && <p className="mt-2 rounded-lg bg-linen-100 p-3 text-sm">“{proof.message}”</p>}
+        <div className="mt-2">
+          <ProofPriceAndChanges proof={proof} currency={currency} />
+        </div>
       </div>
       {proof.isAnswerable ? (
         <ProofAnswerForm key={proof.version} number={number} proof={proof} />
