@@ -7,10 +7,12 @@ import {
   insertArtwork,
   listOwnedArtwork,
   loadOwnedArtworkForQuote,
+  loadOwnedArtworkPictures,
   lockArtworkOwner,
   type ArtworkImage,
   type ArtworkMeta,
   type ArtworkOwner,
+  type ArtworkPicture,
 } from './artwork-repo.ts';
 import type { ArtworkUpload } from '../../contracts/artwork.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
@@ -140,10 +142,17 @@ function toUpload(meta: ArtworkMeta): ArtworkUpload {
   return { ...meta, imageUrl: artworkImageUrl(meta.id) };
 }
 
-export type { ArtworkImage, ArtworkOwner };
+export type { ArtworkImage, ArtworkOwner, ArtworkPicture };
 
 /**
  * The drawings of these uploads that this owner may use, for pricing and production sheets: other owners' uploads
  * are left out. `db` may be the caller's transaction.
  */
 export const artworkForQuote = (db: Db, owner: ArtworkOwner, ids: number[]) => loadOwnedArtworkForQuote(db, owner, ids);
+
+/**
+ * The clean copies of these uploads that this owner may use, with their proportions: what every picture of a design
+ * (the proof, the production sheet's template) draws an upload from. `db` may be the caller's transaction.
+ */
+export const artworkPicturesFor = (db: Db, owner: ArtworkOwner, ids: number[]) =>
+  loadOwnedArtworkPictures(db, owner, ids);
