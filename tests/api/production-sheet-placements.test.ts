@@ -1,12 +1,12 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import { Jimp, JimpMime } from 'jimp';
 import { productionSheetResponse, type ProductionSheet } from '../../server/src/contracts/production-sheet.ts';
 import type { DesignDocument } from '../../server/src/contracts/designs.ts';
-import { artworkUploadResponse } from '../../server/src/contracts/artwork.ts';
 import { MM_PER_INCH } from '../../server/src/engine/units.ts';
 import { useApiHarness, type ApiAgent } from '../support/api-harness.ts';
 import { signedInAgent } from '../support/api-calls.ts';
 import { readPdfText } from '../support/pdf-text.ts';
+import { uploadPlainPicture } from '../support/upload-picture.ts';
+import { orderDesignOf } from '../support/order-design.ts';
 
 /**
  * WB-1013 (seeds/data/orders.ts) is Harriet's approved 6-month bishop dress: a daisy chain round the hem in four
@@ -22,18 +22,8 @@ const CENTRE_FRONT_MM = 418.83 / 2;
 const harness = useApiHarness();
 let staff: ApiAgent;
 
-async function designOf(): Promise<{ id: number; document: DesignDocument }> {
-  const row = await harness
-    .db('order_items as i')
-    .join('orders as o', 'o.id', 'i.order_id')
-    .join('designs as d', 'd.id', 'i.design_id')
-    .where('o.number', ORDER)
-    .first('d.id', 'd.document');
-  return { id: row.id, document: typeof row.document === 'string' ? JSON.parse(row.document) : row.document };
-}
-
 async function setPlacements(extra: DesignDocument['placements']): Promise<void> {
-  const design = await designOf();
+  const design = await orderDesignOf(harness.db, ORDER);
   const base = design.document.placements.filter((placement) => placement.id === 'hem' || placement.id === 'lamb');
   await harness
     .db('designs')
@@ -222,15 +212,7 @@ describe('the production sheet, per placement other than the border', () => {
 
   it('when the customer’s picture is a photo or scan, then its template prints the picture itself at its size', async () => {
     const harriet = await signedInAgent(harness, 'harriet@example.test');
-    const png = await new Jimp({ width: 80, height: 40, color: 0xc2253fff }).getBuffer(JimpMime.png);
-    const uploaded = artworkUploadResponse.parse(
-      (
-        await harriet
-          .post('/api/artwork')
-          .attach('file', png, { filename: 'scan.png', contentType: 'image/png' })
-          .expect(201)
-      ).body,
-    ).artwork;
+    const uploaded = await uploadPlainPicture(harriet, { width: 80, height: 40 }, 0xc2253fff);
     await setPlacements([
       {
         id: 'scan',

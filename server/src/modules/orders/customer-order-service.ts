@@ -28,6 +28,7 @@ import { customerTimeline } from './customer-order-wording.ts';
 import { isPaymentNeeded } from './checkout-service.ts';
 import type { QuoteService } from '../quotes/quote-service.ts';
 import { dueDateOf } from '../../engine/index.ts';
+import { designUploadPictures, uploadsOf } from '../artwork/artwork-service.ts';
 
 type ProofAnswer = z.output<typeof proofAnswerRequest>;
 
@@ -107,7 +108,11 @@ export function createCustomerOrderService(deps: {
         isWaitingOnCustomer: needsPayment || latestSent !== undefined,
       },
       quote: { ruleSetVersion: detail.quote.ruleSetVersion, lines: detail.quote.lines },
-      design: { ...detail.design, document: restored.data },
+      design: {
+        ...detail.design,
+        document: restored.data,
+        uploads: uploadsOf(restored.data, await designUploadPictures(db, customerId, [restored.data])),
+      },
       cautions,
       payment: paymentSummary(payments, detail.events, needsPayment, now),
       proofs: detail.proofs.map(({ hasImage, ...proof }) => ({
