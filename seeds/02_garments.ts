@@ -4,6 +4,7 @@ import { scaleZones } from './data/placement-zones.ts';
 import { readSeedFile } from './data/seed-files.ts';
 import { catalogueStamp } from './data/seed-time.ts';
 import { backMockupFiles, sizeMeasurements } from './data/garment-measurements.ts';
+import { garmentLandmarks } from './data/garment-landmarks.ts';
 
 export async function seed(knex: Knex): Promise<void> {
   await knex('garments').insert(
@@ -24,6 +25,7 @@ export async function seed(knex: Knex): Promise<void> {
       intended_use: garment.safety.intendedUse,
       mockup_svg: readSeedFile('garments', garment.mockupFile),
       mockup_back_svg: backMockupFiles[garment.slug] ? readSeedFile('garments', backMockupFiles[garment.slug]!) : null,
+      landmarks: garmentLandmarks[garment.slug] ? JSON.stringify(garmentLandmarks[garment.slug]) : null,
       is_active: true,
       sort_order: index + 1,
       ...catalogueStamp,

@@ -154,9 +154,18 @@ describe('sharing a design by link', () => {
       sizeId: mine.sizeId,
       colourId: mine.colourId,
       document: mine.document,
+      // The pictures of its uploads (none here), fetched through the link.
+      uploads: [],
     });
     // Nothing that names or numbers the customer, nor the design's own id and dates.
-    expect(Object.keys(res.body.design).sort()).toEqual(['colourId', 'document', 'garmentId', 'name', 'sizeId']);
+    expect(Object.keys(res.body.design).sort()).toEqual([
+      'colourId',
+      'document',
+      'garmentId',
+      'name',
+      'sizeId',
+      'uploads',
+    ]);
     const priyaPerson = demoPeople.find((person) => person.email === 'priya@example.test')!;
     const text = JSON.stringify(res.body);
     for (const secret of [priyaPerson.email, priyaPerson.name, priyaPerson.familyName, 'customer'])

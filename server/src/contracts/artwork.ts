@@ -29,3 +29,15 @@ export type ArtworkUpload = z.infer<typeof artworkUpload>;
 
 export const artworkUploadResponse = z.object({ artwork: artworkUpload });
 export const artworkListResponse = z.object({ artworks: z.array(artworkUpload) });
+
+/**
+ * An upload a design places, as every picture of the design draws it: its proportions (which set its height at the
+ * placement's width) and where the viewer's browser fetches it (the owner's own address, or the shared link's).
+ */
+export const designUploadPicture = z.object({
+  uploadId: z.number().int(),
+  widthPx: z.number().int().positive(),
+  heightPx: z.number().int().positive(),
+  imageUrl: z.string(),
+});
+export type DesignUploadPicture = z.infer<typeof designUploadPicture>;

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { designDocument, strictObjectErrors } from './designs.ts';
 import { designName } from './saved-designs.ts';
+import { designUploadPicture } from './artwork.ts';
 
 /** A new name for a saved design; the document stays as it is, so an ordered design may be renamed too. */
 export const renameDesignRequest = z.strictObject({ name: designName }, strictObjectErrors('the new name'));
@@ -24,7 +25,17 @@ export const sharedDesign = z.object({
   sizeId: z.number().int(),
   colourId: z.number().int(),
   document: designDocument,
+  /** The uploads its artwork placements show, fetched through the link. */
+  uploads: z.array(designUploadPicture),
 });
 export type SharedDesign = z.infer<typeof sharedDesign>;
 export const sharedDesignResponse = z.object({ design: sharedDesign });
 export type SharedDesignResponse = z.infer<typeof sharedDesignResponse>;
+
+/** One upload a shared design places, by the link's code. */
+export const sharedUploadParams = shareTokenParams.extend({
+  uploadId: z
+    .string()
+    .regex(/^[1-9]\d{0,9}$/, 'must be a picture number')
+    .transform(Number),
+});

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { designDocument } from './designs.ts';
 import { proofPrice } from './proof-versions.ts';
+import { designUploadPicture } from './artwork.ts';
 import { orderStatus, paymentStatus } from './order-status.ts';
 import { guidanceMessage } from './guidance.ts';
 import { calendarDate } from './calendar-date.ts';
@@ -200,6 +201,8 @@ export const customerOrderResponse = z.object({
     colourName: z.string(),
     colourHex: z.string(),
     document: designDocument,
+    /** The customer's uploads its artwork placements show. */
+    uploads: z.array(designUploadPicture),
   }),
   /** The safety notes for the garment, size and motifs as ordered, worked out as the catalogue states them now. */
   cautions: z.array(guidanceMessage),

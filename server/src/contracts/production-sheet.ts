@@ -1,6 +1,12 @@
 import { z } from 'zod';
 import { orderStatus } from './order-status.ts';
 import { guidanceMessage } from './quotes.ts';
+import {
+  borderHoopingWarning,
+  placementLettering,
+  placementPosition,
+  sewingOrder,
+} from './production-sheet-placement.ts';
 
 /** The paper the sheet is printed on; the PDF lays its pages and tiles out for it. */
 export const paperSizes = ['letter', 'a4'] as const;
@@ -76,9 +82,17 @@ const sheetPlacement = z.object({
   widthMm: z.number(),
   heightMm: z.number(),
   hoop: hoop.nullable(),
-  /** Empty for the customer's own artwork, which is sewn in its own colours. */
+  /** For the customer's own artwork: the palette threads nearest its colours, in the drawing's order. */
   threads: z.array(threadStep),
   border: borderPlan.nullable(),
+  /** Where it goes on the garment; null for a border, whose plan says where each hooping goes. */
+  position: placementPosition.nullable(),
+  lettering: placementLettering.nullable(),
+  /** Which step of the sheet's stitching order sews it (1 first). */
+  sewOrder: z.number().int(),
+  hoopingWarning: borderHoopingWarning.nullable(),
+  /** The studio's stitch file for it, once entered after digitizing. */
+  stitchFileName: z.string().optional(),
 });
 
 /**
@@ -109,6 +123,8 @@ const placementTemplate = z.object({
   /** The stitched area's box: a 173 mm repeat is 173 mm wide here. */
   artwork: z.object({ xMm: z.number(), yMm: z.number(), widthMm: z.number(), heightMm: z.number() }),
   outlines: z.array(templateOutline),
+  /** A photo or scan of the customer's (no outline to draw): the picture itself, a PNG data URL, in the artwork box. */
+  pictureDataUrl: z.string().nullable(),
 });
 export type PlacementTemplate = z.infer<typeof placementTemplate>;
 
@@ -134,6 +150,7 @@ export const productionSheetResponse = z.object({
     fabricType: z.string(),
   }),
   placements: z.array(sheetPlacement),
+  sewingOrder,
   totals: z.object({
     stitches: z.number().int(),
     colourChanges: z.number().int(),

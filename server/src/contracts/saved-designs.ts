@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { designDocument, strictObjectErrors } from './designs.ts';
+import { designUploadPicture } from './artwork.ts';
 
 const catalogueId = (what: string) =>
   z
@@ -37,6 +38,8 @@ export const savedDesign = z.object({
   sizeId: z.number().int(),
   colourId: z.number().int(),
   document: designDocument,
+  /** The customer's uploads its artwork placements show. */
+  uploads: z.array(designUploadPicture),
   /** The code of its read-only link while the customer shares it, else null. */
   shareToken: z.string().nullable(),
   createdAt: z.string(),

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { BorderPlacement, DesignDocument } from '../../../server/src/contracts/designs.ts';
 import { layoutBorder } from '../../../storefront/src/features/designer/model/border-layout.ts';
+import { artworkPictureBox } from '../../../server/src/engine/artwork-picture.ts';
 import {
   drawingOf,
   layoutDesignDrawing,
@@ -177,6 +178,32 @@ describe('layoutDesignDrawing', () => {
       ['unavailable', 'A motif that is no longer offered'],
       ['unavailable', 'Name “Bo” (its lettering is no longer offered)'],
     ]);
+  });
+
+  it('when the design places the customer’s upload, then the drawing shows her picture; without it, a dashed outline of its place', () => {
+    const photo = {
+      id: 'photo',
+      kind: 'artwork' as const,
+      zone: 'chest',
+      centerXMm: 200,
+      centerYMm: 120,
+      rotationDeg: 15,
+      artworkUploadId: 7,
+      widthMm: 60,
+    };
+    const upload = { uploadId: 7, widthPx: 800, heightPx: 400, imageUrl: '/api/artwork/7/image' };
+    const [drawn] = layoutDesignDrawing(catalogue, sixMonths.id, documentOf(photo), [upload])!.placements;
+    expect(drawn).toMatchObject({ kind: 'artwork', label: 'Your uploaded picture', upload });
+    // 60 mm wide at the picture's 2 : 1 is 30 mm tall, centred on the placement and turned about its centre.
+    expect(artworkPictureBox(photo, upload)).toEqual({
+      xMm: 170,
+      yMm: 105,
+      widthMm: 60,
+      heightMm: 30,
+      transform: 'rotate(15 200 120)',
+    });
+    const [outline] = layoutDesignDrawing(catalogue, sixMonths.id, documentOf(photo))!.placements;
+    expect(outline).toMatchObject({ kind: 'artwork', upload: undefined });
   });
 
   it('when the garment no longer has the size, then there is no drawing', () => {

@@ -10,7 +10,8 @@ import {
   useProductionSheet,
 } from '../../features/production-sheet/api/get-production-sheet.ts';
 import { HemPlanPicture } from '../../features/production-sheet/components/hem-plan-picture.tsx';
-import { ThreadSequence } from '../../features/production-sheet/components/thread-sequence.tsx';
+import { PlacementDetails } from '../../features/production-sheet/components/placement-details.tsx';
+import { SewingOrderList } from '../../features/production-sheet/components/sewing-order-list.tsx';
 import { CheckSquare, TrueSizeTemplate } from '../../features/production-sheet/components/true-size-template.tsx';
 import '../../features/production-sheet/production-sheet-print.css';
 import { statusLabels } from '../../lib/order-status-labels.ts';
@@ -152,19 +153,13 @@ export function ProductionSheetPage() {
         (placement) =>
           placement.border && <HoopingPlan key={placement.id} placement={placement} border={placement.border} />,
       )}
+      <Section title="Stitching order">
+        <SewingOrderList sewingOrder={data.sewingOrder} />
+      </Section>
       <Section title="Placements and threads">
         <div className="grid gap-5 md:grid-cols-2">
           {data.placements.map((placement) => (
-            <div key={placement.id} className="grid content-start gap-2">
-              <h3 className="font-semibold">{placement.label}</h3>
-              <p className="text-sm text-walnut-500">
-                {formatLength(placement.widthMm)} × {formatLength(placement.heightMm)} ·{' '}
-                {placement.stitches.toLocaleString('en-US')} stitches · {placement.colourChanges} colour changes ·{' '}
-                {placement.hoopings} hooping{placement.hoopings === 1 ? '' : 's'}
-                {placement.hoop && <> · {placement.hoop.name}</>}
-              </p>
-              <ThreadSequence threads={placement.threads} />
-            </div>
+            <PlacementDetails key={placement.id} placement={placement} />
           ))}
         </div>
       </Section>

@@ -131,6 +131,24 @@ export async function loadOwnedArtworkForQuote(db: Db, owner: ArtworkOwner, ids:
   }));
 }
 
+/** An upload's clean copy with its proportions, for drawing it into pictures of a design. */
+export type ArtworkPicture = { id: number; widthPx: number; heightPx: number } & ArtworkImage;
+
+/** The clean copies of these uploads that the owner may use; others' are left out. */
+export async function loadOwnedArtworkPictures(db: Db, owner: ArtworkOwner, ids: number[]): Promise<ArtworkPicture[]> {
+  if (ids.length === 0) return [];
+  const rows: Record<string, unknown>[] = await ownedBy(
+    db('artwork_uploads').select('id', 'sanitized_svg', 'png', 'width_px', 'height_px').whereIn('id', ids),
+    owner,
+  );
+  return rows.map((row) => {
+    const base = { id: Number(row.id), widthPx: Number(row.width_px), heightPx: Number(row.height_px) };
+    return row.sanitized_svg !== null
+      ? { ...base, kind: 'svg' as const, svg: String(row.sanitized_svg) }
+      : { ...base, kind: 'raster' as const, png: row.png as Buffer };
+  });
+}
+
 const ownerKeyOf = (owner: ArtworkOwner) =>
   'userId' in owner ? `user:${owner.userId}` : `session:${owner.sessionKey}`;
 

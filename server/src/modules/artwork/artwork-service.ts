@@ -7,12 +7,15 @@ import {
   insertArtwork,
   listOwnedArtwork,
   loadOwnedArtworkForQuote,
+  loadOwnedArtworkPictures,
   lockArtworkOwner,
   type ArtworkImage,
   type ArtworkMeta,
   type ArtworkOwner,
+  type ArtworkPicture,
 } from './artwork-repo.ts';
-import type { ArtworkUpload } from '../../contracts/artwork.ts';
+import type { ArtworkUpload, DesignUploadPicture } from '../../contracts/artwork.ts';
+import type { DesignDocument } from '../../contracts/designs.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import type { SvgArtworkFigures } from '../../engine/index.ts';
 import { asBuffer, type HeavyWork } from '../../integrations/heavy-work.ts';
@@ -140,10 +143,54 @@ function toUpload(meta: ArtworkMeta): ArtworkUpload {
   return { ...meta, imageUrl: artworkImageUrl(meta.id) };
 }
 
-export type { ArtworkImage, ArtworkOwner };
+export type { ArtworkImage, ArtworkOwner, ArtworkPicture };
 
 /**
  * The drawings of these uploads that this owner may use, for pricing and production sheets: other owners' uploads
  * are left out. `db` may be the caller's transaction.
  */
 export const artworkForQuote = (db: Db, owner: ArtworkOwner, ids: number[]) => loadOwnedArtworkForQuote(db, owner, ids);
+
+/**
+ * The clean copies of these uploads that this owner may use, with their proportions: what every picture of a design
+ * (the proof, the production sheet's template) draws an upload from. `db` may be the caller's transaction.
+ */
+export const artworkPicturesFor = (db: Db, owner: ArtworkOwner, ids: number[]) =>
+  loadOwnedArtworkPictures(db, owner, ids);
+
+/** The upload ids a design's artwork placements name, each once. */
+export const uploadIdsIn = (document: DesignDocument) => [
+  ...new Set(document.placements.flatMap((p) => (p.kind === 'artwork' ? [p.artworkUploadId] : []))),
+];
+
+/**
+ * The uploads these designs place, as their pictures draw them: proportions and the address the viewer fetches
+ * each from (`imageUrlOf`; the owner's own by default). Only the owner's uploads; one read for all the designs.
+ */
+export async function designUploadPictures(
+  db: Db,
+  ownerUserId: number,
+  documents: readonly DesignDocument[],
+  imageUrlOf: (id: number) => string = artworkImageUrl,
+): Promise<Map<number, DesignUploadPicture>> {
+  const ids = [...new Set(documents.flatMap(uploadIdsIn))];
+  const rows = await loadOwnedArtworkForQuote(db, { userId: ownerUserId }, ids);
+  return new Map(
+    rows.map((row) => [
+      row.id,
+      { uploadId: row.id, widthPx: row.widthPx, heightPx: row.heightPx, imageUrl: imageUrlOf(row.id) },
+    ]),
+  );
+}
+
+/** The pictures of one design's uploads, from the map `designUploadPictures` read. */
+export const uploadsOf = (document: DesignDocument, pictures: ReadonlyMap<number, DesignUploadPicture>) =>
+  uploadIdsIn(document).flatMap((id) => {
+    const picture = pictures.get(id);
+    return picture ? [picture] : [];
+  });
+
+/** An upload's clean copy when this owner may use it, for a picture shown through a shared link. */
+export async function ownedArtworkImage(db: Db, ownerUserId: number, id: number): Promise<ArtworkImage | undefined> {
+  return findOwnedArtworkImage(db, { userId: ownerUserId }, id);
+}

@@ -21,6 +21,8 @@ import type {
 } from '../../contracts/saved-designs.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import type { QuoteService } from '../quotes/quote-service.ts';
+import { designUploadPictures, uploadsOf } from '../artwork/artwork-service.ts';
+import type { DesignUploadPicture } from '../../contracts/artwork.ts';
 
 type SavedDesignResponse = z.infer<typeof savedDesignResponse>;
 type SavedDesignListResponse = z.infer<typeof savedDesignListResponse>;
@@ -35,14 +37,21 @@ export function createDesignService(deps: { db: Db; quotes: QuoteService; now: (
 
   /** The customer's designs, the most recently changed first. */
   async function list(customerId: number): Promise<Result<SavedDesignListResponse>> {
-    const stored = await listCustomerDesigns(db, customerId);
-    return ok({ designs: stored.map(toSavedDesign) });
+    const designs = (await listCustomerDesigns(db, customerId)).map(restored);
+    const pictures = await designUploadPictures(
+      db,
+      customerId,
+      designs.map((design) => design.document),
+    );
+    return ok({ designs: designs.map((design) => withUploads(design, pictures)) });
   }
 
   /** One of the customer's designs. */
   async function get(customerId: number, id: number): Promise<Result<SavedDesignResponse>> {
     const stored = await findOwnedDesign(db, { id, customerId });
-    return stored ? ok({ design: toSavedDesign(stored) }) : noSuchDesign(id);
+    if (!stored) return noSuchDesign(id);
+    const design = restored(stored);
+    return ok({ design: withUploads(design, await designUploadPictures(db, customerId, [design.document])) });
   }
 
   /** Saves a new design once the server can price it; the answer is the design as stored. */
@@ -160,11 +169,19 @@ function toWrite(request: SaveDesignRequest, savedAt: Date): DesignWrite {
   };
 }
 
-/** A stored design as the customer gets it; its document passes restoreDesign, and one that fails it is a bug. */
-function toSavedDesign(stored: StoredDesign): SavedDesign {
-  const restored = restoreDesign(stored.document);
-  if (!restored.success) throw new Error(`Saved design ${stored.id} no longer restores: ${restored.error.message}`);
-  return { ...stored, document: restored.data };
+/** A stored design with its document restored; one that fails restoreDesign is a bug. */
+function restored(stored: StoredDesign): Omit<SavedDesign, 'uploads'> {
+  const result = restoreDesign(stored.document);
+  if (!result.success) throw new Error(`Saved design ${stored.id} no longer restores: ${result.error.message}`);
+  return { ...stored, document: result.data };
+}
+
+/** The design as the customer gets it, with the pictures of the uploads it places. */
+function withUploads(
+  design: Omit<SavedDesign, 'uploads'>,
+  pictures: ReadonlyMap<number, DesignUploadPicture>,
+): SavedDesign {
+  return { ...design, uploads: uploadsOf(design.document, pictures) };
 }
 
 /** A customer's own saved design as stored, or undefined for anyone else's; `db` may be the caller's transaction. */

@@ -2,9 +2,15 @@ import type { Db } from '../../db/knex.ts';
 import { storedColumns, toStoredDesign, type OwnedDesignKey, type StoredDesign } from './design-repo.ts';
 
 /** The design behind a shared link, whoever owns it; undefined once the link is switched off. */
-export async function findDesignByShareToken(db: Db, shareToken: string): Promise<StoredDesign | undefined> {
-  const row = await db('designs').select(storedColumns).where({ share_token: shareToken }).first();
-  return row ? toStoredDesign(row) : undefined;
+export async function findDesignByShareToken(
+  db: Db,
+  shareToken: string,
+): Promise<(StoredDesign & { customerId: number }) | undefined> {
+  const row = await db('designs')
+    .select([...storedColumns, 'customer_id'])
+    .where({ share_token: shareToken })
+    .first();
+  return row ? { ...toStoredDesign(row), customerId: row.customer_id as number } : undefined;
 }
 
 /** The customer's design's link code (null when not shared), or undefined when they have no such design. */

@@ -4,6 +4,17 @@ import { findDesignByShareToken, findOwnedShareToken, setOwnedShareToken } from 
 import { restoreDesign } from '../../contracts/designs.ts';
 import type { DesignShareResponse, SharedDesignResponse } from '../../contracts/design-sharing.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
+import {
+  designUploadPictures,
+  ownedArtworkImage,
+  uploadIdsIn,
+  uploadsOf,
+  type ArtworkImage,
+} from '../artwork/artwork-service.ts';
+
+/** Where a shared link's viewer fetches one of the design's uploads: through the link, as the owner's are private. */
+export const sharedUploadImageUrl = (shareToken: string, uploadId: number) =>
+  `/api/shared-designs/${shareToken}/uploads/${uploadId}/image`;
 
 /** 18 random bytes: 144 bits, 24 URL-safe characters, far past guessing. */
 export const randomShareToken = () => randomBytes(18).toString('base64url');
@@ -44,10 +55,35 @@ export function createDesignSharingService(deps: { db: Db; newShareToken?: () =>
     const restored = restoreDesign(stored.document);
     if (!restored.success) throw new Error(`Shared design ${stored.id} no longer restores: ${restored.error.message}`);
     const { name, garmentId, sizeId, colourId } = stored;
-    return ok({ design: { name, garmentId, sizeId, colourId, document: restored.data } });
+    const pictures = await designUploadPictures(db, stored.customerId, [restored.data], (id) =>
+      sharedUploadImageUrl(shareToken, id),
+    );
+    return ok({
+      design: {
+        name,
+        garmentId,
+        sizeId,
+        colourId,
+        document: restored.data,
+        uploads: uploadsOf(restored.data, pictures),
+      },
+    });
   }
 
-  return { share, unshare, viewShared };
+  /** A picture the shared design places, through its link: only one the design names and its owner uploaded. */
+  async function sharedUploadImage(shareToken: string, uploadId: number): Promise<Result<ArtworkImage>> {
+    const stored = await findDesignByShareToken(db, shareToken);
+    const restored = stored ? restoreDesign(stored.document) : undefined;
+    const image =
+      stored && restored?.success && uploadIdsIn(restored.data).includes(uploadId)
+        ? await ownedArtworkImage(db, stored.customerId, uploadId)
+        : undefined;
+    return image
+      ? ok(image)
+      : failure('not-found', 'This link shows no such picture: its owner may have stopped sharing it.');
+  }
+
+  return { share, unshare, viewShared, sharedUploadImage };
 }
 
 export type DesignSharingService = ReturnType<typeof createDesignSharingService>;

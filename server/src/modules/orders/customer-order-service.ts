@@ -31,6 +31,7 @@ import type { QuoteService } from '../quotes/quote-service.ts';
 import { dueDateOf } from '../../engine/index.ts';
 import { adoptApprovedProofPrice } from './order-price-of-record.ts';
 import { latestProofDocument } from './proof-repo.ts';
+import { designUploadPictures, uploadsOf } from '../artwork/artwork-service.ts';
 
 type ProofAnswer = z.output<typeof proofAnswerRequest>;
 
@@ -119,7 +120,11 @@ export function createCustomerOrderService(deps: {
         ruleSetVersion: detail.quote.ruleSetVersion,
         lines: detail.proofs.findLast((p) => p.status === 'approved' && p.price)?.price?.lines ?? detail.quote.lines,
       },
-      design: { ...detail.design, document: restored.data },
+      design: {
+        ...detail.design,
+        document: restored.data,
+        uploads: uploadsOf(restored.data, await designUploadPictures(db, customerId, [restored.data])),
+      },
       cautions,
       payment: paymentSummary(payments, detail.events, needsPayment, now),
       proofs: detail.proofs.map(({ hasImage, ...proof }) => ({

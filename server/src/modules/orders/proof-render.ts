@@ -7,6 +7,7 @@
 import { Resvg } from '@resvg/resvg-js';
 import { Jimp, JimpMime } from 'jimp';
 import { JSDOM } from 'jsdom';
+import { artworkImageMarkup, artworkPictureBox } from '../../engine/artwork-picture.ts';
 import { fitMotifBorder } from '../../engine/fit-border.ts';
 import { layoutHemBorder } from '../../engine/hem-border-layout.ts';
 import { recolourThreadGroups } from '../../engine/recolour-threads.ts';
@@ -171,16 +172,9 @@ function placementMarkup(
       );
     }
     case 'artwork': {
+      // A drawing or a photo alike, by the one rule every picture of a design draws an upload with.
       const artwork = scene.artwork.get(placement.artworkUploadId);
-      if (!artwork) return '';
-      const heightMm = (placement.widthMm * artwork.heightPx) / artwork.widthPx;
-      const box = {
-        x: placement.centerXMm - placement.widthMm / 2,
-        y: placement.centerYMm - heightMm / 2,
-        width: placement.widthMm,
-        height: heightMm,
-      };
-      return rotated(placedDrawing(artwork.svg, box), placement.rotationDeg, placement.centerXMm, placement.centerYMm);
+      return artwork ? artworkImageMarkup(artworkPictureBox(placement, artwork), artwork.href) : '';
     }
   }
 }

@@ -29,7 +29,15 @@ export interface ProofScene {
   motifs: ReadonlyMap<string, SceneMotif>;
   threadHexes: ReadonlyMap<string, string>;
   fonts: ReadonlyMap<string, LetteringFontFile>;
-  artwork: ReadonlyMap<number, { svg: string; widthPx: number; heightPx: number }>;
+  /** The customer's uploads the design names, drawn from their clean copies (`proof-scene.ts` fills them in). */
+  artwork: ReadonlyMap<number, SceneArtwork>;
+}
+
+/** An upload as the proof draws it: its clean copy as a data URL, and its proportions. */
+export interface SceneArtwork {
+  href: string;
+  widthPx: number;
+  heightPx: number;
 }
 
 const mmOrNull = (value: string | null) => (value === null ? null : Number(value));
@@ -42,8 +50,9 @@ export async function loadProofScene(
   db: Db,
   orderId: number,
   design?: DesignDocument,
-): Promise<ProofScene | undefined> {
+): Promise<{ scene: ProofScene; customerId: number; uploadIds: number[] } | undefined> {
   const row = await db('order_items as i')
+    .join('orders as o', 'o.id', 'i.order_id')
     .join('designs as d', 'd.id', 'i.design_id')
     .join('garments as g', 'g.id', 'd.garment_id')
     .join('garment_sizes as s', 's.id', 'i.garment_size_id')
@@ -59,6 +68,7 @@ export async function loadProofScene(
       's.hem_circumference_mm',
       's.placement_zones',
       'c.hex',
+      'o.customer_id',
     );
   if (!row) return undefined;
   // The studio's own version of the design (a change it made for a proof) is drawn instead of the one ordered.
@@ -67,20 +77,16 @@ export async function loadProofScene(
   const motifSlugs = document.placements.flatMap((p) => (p.kind === 'border' || p.kind === 'motif' ? [p.motif] : []));
   const fontSlugs = document.placements.flatMap((p) => (p.kind === 'lettering' ? [p.font] : []));
   const uploadIds = document.placements.flatMap((p) => (p.kind === 'artwork' ? [p.artworkUploadId] : []));
-  const [motifs, threads, fonts, uploads] = await Promise.all([
+  const [motifs, threads, fonts] = await Promise.all([
     db('motifs')
       .whereIn('slug', motifSlugs)
       .select('slug', 'svg', 'width_mm', 'height_mm', 'gap_mm', 'min_scale_pct', 'max_scale_pct'),
     db('threads').select('code', 'hex'),
     db('lettering_fonts').whereIn('slug', fontSlugs).select('slug', 'fontsource_package', 'file_name'),
-    db('artwork_uploads')
-      .whereIn('id', uploadIds)
-      .whereNotNull('sanitized_svg')
-      .select('id', 'sanitized_svg', 'width_px', 'height_px'),
   ]);
   const reference = mockupSizeMm(row.mockup_svg, row.slug);
   const scale = Number(row.mockup_scale);
-  return {
+  const scene: ProofScene = {
     document,
     mockupSvg: row.mockup_svg,
     mockupWidthMm: reference.widthMm * scale,
@@ -104,6 +110,7 @@ export async function loadProofScene(
     ),
     threadHexes: new Map(threads.map((t) => [t.code, t.hex])),
     fonts: new Map(fonts.map((f) => [f.slug, { fontsourcePackage: f.fontsource_package, fileName: f.file_name }])),
-    artwork: new Map(uploads.map((u) => [u.id, { svg: u.sanitized_svg, widthPx: u.width_px, heightPx: u.height_px }])),
+    artwork: new Map(),
   };
+  return { scene, customerId: row.customer_id, uploadIds };
 }

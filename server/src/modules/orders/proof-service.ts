@@ -9,7 +9,7 @@ import type { Mailer } from '../../integrations/mailer.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
 import { proofImagePath, type SendProofRequest, type SentProofResponse } from '../../contracts/studio-orders.ts';
 import { findStudioOrder } from './studio-order-repo.ts';
-import { loadProofScene } from './proof-scene-repo.ts';
+import { proofSceneFor } from './proof-scene.ts';
 import { asBuffer, type HeavyWork } from '../../integrations/heavy-work.ts';
 import { cleanPhotoOffThread } from '../../integrations/inspect-upload-job.ts';
 import { queueLoggedMail, sendQueuedMail, type QueuedMail } from '../mail/order-mail.ts';
@@ -33,7 +33,7 @@ export function createProofService(deps: {
 
   /** The render proof of the order's design, drawn in the heavy-work pool (resvg and jimp take a while). */
   async function drawing(orderId: number, design: DesignDocument): Promise<Result<Buffer>> {
-    const scene = await loadProofScene(db, orderId, design);
+    const scene = await proofSceneFor(db, orderId, design);
     if (!scene) return failure('conflict', 'This order has no design to draw a proof from; send a photo instead.');
     const drawn = await deps.heavyWork.run<{ png: Uint8Array }>('renderProof', scene);
     return drawn.ok ? ok(asBuffer(drawn.value.png)) : drawn;

@@ -15,6 +15,11 @@ import { letteringOutline, motifOutline, type ArtworkOutline } from './productio
 import { borderTemplates, itemTemplate } from './production-sheet-templates.ts';
 import { BACKING_NAMES, toppingName } from './production-sheet-wording.ts';
 import type { QuoteCatalogue } from '../quotes/quote-catalogue-types.ts';
+import type { ArtworkPicture } from '../artwork/artwork-service.ts';
+import { artworkTemplateOutline, artworkThreads } from './production-sheet-artwork.ts';
+import { landmarksOf, placementPositionOf } from './production-sheet-position.ts';
+import { planSewingOrder } from './production-sheet-sewing-order.ts';
+import { formatLengthPlain } from './format-length-plain.ts';
 
 export interface SheetSources {
   order: OrderToMake;
@@ -24,6 +29,12 @@ export interface SheetSources {
   threads: ReadonlyMap<string, ThreadRow>;
   /** Motif SVG by slug. */
   artwork: ReadonlyMap<string, string>;
+  /** The customer's uploads the design names, by id. */
+  pictures: ReadonlyMap<number, ArtworkPicture>;
+  /** The active palette, which the customer's own colours are matched to. */
+  palette: readonly ThreadRow[];
+  /** The studio's stitch-file names by placement id, where entered. */
+  stitchFileNames: ReadonlyMap<string, string>;
 }
 
 /** A thread code no longer in the palette still prints, in a neutral grey, so the sheet never hides a step. */
@@ -31,12 +42,24 @@ const UNKNOWN_THREAD_HEX = '#9a9a9a';
 
 export function assembleSheet(sources: SheetSources): Result<ProductionSheet> {
   const { order, document, catalogue, figures } = sources;
-  const placements: SheetPlacement[] = [];
+  const drafts = figures.placements.map((figured, index) =>
+    toSheetPlacement(sources, document.placements[index]!, figured),
+  );
+  const hemZone = catalogue.size.zones.find((zone) => zone.code === 'hem');
+  const { sewingOrder, byId } = planSewingOrder(
+    drafts.map((placement, index) => ({ placement, where: whereOf(document.placements[index]!) })),
+    hemZone && catalogue.size.hemFrontMm !== null
+      ? { zone: hemZone, hemFrontMm: catalogue.size.hemFrontMm }
+      : undefined,
+  );
+  const placements: SheetPlacement[] = drafts.map((draft) => ({
+    ...draft,
+    sewOrder: byId.get(draft.id)?.sewOrder ?? 0,
+    hoopingWarning: byId.get(draft.id)?.hoopingWarning ?? null,
+  }));
   const templates: PlacementTemplate[] = [];
-  for (const [index, figured] of figures.placements.entries()) {
-    const placement = document.placements[index];
-    const sheetPlacement = toSheetPlacement(sources, placement, figured);
-    placements.push(sheetPlacement);
+  for (const [index, sheetPlacement] of placements.entries()) {
+    const placement = document.placements[index]!;
     const artwork = artworkOf(sources, placement, sheetPlacement);
     if (artwork && sheetPlacement.hoop) {
       templates.push(
@@ -77,6 +100,7 @@ export function assembleSheet(sources: SheetSources): Result<ProductionSheet> {
       fabricType: catalogue.garment.fabricType,
     },
     placements,
+    sewingOrder,
     totals,
     stabilizer: {
       ...figures.stabilizer,
@@ -102,6 +126,13 @@ function toSheetPlacement(
   const { estimate } = figured;
   const codes =
     placement.kind === 'lettering' ? [placement.thread] : placement.kind === 'artwork' ? [] : placement.threads;
+  const picture = placement.kind === 'artwork' ? sources.pictures.get(placement.artworkUploadId) : undefined;
+  const where = whereOf(placement);
+  const landmarks = landmarksOf(
+    sources.order.landmarks,
+    sources.catalogue.size.zones.find((zone) => zone.code === 'hem'),
+  );
+  const fileName = sources.stitchFileNames.get(figured.id);
   const hoop =
     figured.border?.hoop ?? smallestHoopHolding(sources.catalogue.hoops, estimate.widthMm, estimate.heightMm) ?? null;
   let border: SheetPlacement['border'] = null;
@@ -121,20 +152,47 @@ function toSheetPlacement(
     widthMm: estimate.widthMm,
     heightMm: estimate.heightMm,
     hoop,
-    threads: codes.map((code, i) => {
-      const thread = sources.threads.get(code);
-      return {
-        order: i + 1,
-        code,
-        name: thread?.name ?? 'Not in the palette any more',
-        hex: thread?.hex ?? UNKNOWN_THREAD_HEX,
-      };
-    }),
+    threads: picture
+      ? artworkThreads(picture, sources.palette)
+      : codes.map((code, i) => {
+          const thread = sources.threads.get(code);
+          return {
+            order: i + 1,
+            code,
+            name: thread?.name ?? 'Not in the palette any more',
+            hex: thread?.hex ?? UNKNOWN_THREAD_HEX,
+          };
+        }),
     border,
+    position: where ? placementPositionOf(where, sources.order.mockupWidthMm, landmarks) : null,
+    lettering: placement.kind === 'lettering' ? letteringOf(sources, placement) : null,
+    sewOrder: 0,
+    hoopingWarning: null,
+    ...(fileName === undefined ? {} : { stitchFileName: fileName }),
   };
 }
 
-/** The outline a template draws; customer artwork has none yet (the server does not store uploads for orders). */
+/** A single item's centre and turn on the garment; null for a border, which runs along the hem. */
+function whereOf(placement: DesignPlacement) {
+  return placement.kind === 'border'
+    ? null
+    : { centerXMm: placement.centerXMm, centerYMm: placement.centerYMm, rotationDeg: placement.rotationDeg };
+}
+
+function letteringOf(
+  sources: SheetSources,
+  placement: Extract<DesignPlacement, { kind: 'lettering' }>,
+): NonNullable<SheetPlacement['lettering']> {
+  const fontName = sources.catalogue.fonts.get(placement.font)?.name ?? placement.font;
+  return {
+    text: placement.text,
+    fontName,
+    letterHeightMm: placement.letterHeightMm,
+    words: `“${placement.text}” in ${fontName}, capital letters ${formatLengthPlain(placement.letterHeightMm)} tall when stitched.`,
+  };
+}
+
+/** The outline a template draws: a motif's, the lettering's, or the customer's upload at its placed width. */
 function artworkOf(
   sources: SheetSources,
   placement: DesignPlacement,
@@ -157,5 +215,6 @@ function artworkOf(
     const hex = sheetPlacement.threads[0]?.hex ?? UNKNOWN_THREAD_HEX;
     return font ? letteringOutline(font.outlines, placement.text, placement.letterHeightMm, hex) : undefined;
   }
-  return undefined;
+  const picture = sources.pictures.get(placement.artworkUploadId);
+  return picture ? artworkTemplateOutline(picture, placement.widthMm) : undefined;
 }

@@ -21,6 +21,8 @@ export interface ArtworkOutline {
   widthMm: number;
   heightMm: number;
   outlines: Outline[];
+  /** A raster upload has no outline: the template prints the picture itself (PNG data URL). */
+  pictureDataUrl?: string;
 }
 
 /** Path data to a hundredth of a millimetre: far finer than a printer or a needle can place. */

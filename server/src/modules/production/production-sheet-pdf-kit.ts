@@ -5,7 +5,6 @@ import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import PDFDocument from 'pdfkit';
 import { MM_PER_INCH } from '../../engine/index.ts';
-import { toInchFraction } from '../../engine/inch-fraction.ts';
 import type { PaperSize } from '../../contracts/production-sheet.ts';
 
 /** PDF user space is 1/72 in (ISO 32000-1 §8.3.2.3), and 1 in = 25.4 mm (NIST SP 811), so 1 mm = 72/25.4 pt. */
@@ -63,13 +62,4 @@ export function finishDocument(doc: Pdf): Promise<Buffer> {
   });
 }
 
-/**
- * A length in millimetres and in inches to the nearest sixteenth, in plain characters the embedded font
- * certainly has: "173 mm (6 13/16 in)".
- */
-export function formatLengthPlain(mm: number, decimals = 1): string {
-  const { whole, numerator, denominator } = toInchFraction(mm);
-  const inches =
-    numerator === 0 ? `${whole}` : whole === 0 ? `${numerator}/${denominator}` : `${whole} ${numerator}/${denominator}`;
-  return `${Number(Math.abs(mm).toFixed(decimals))} mm (${inches} in)`;
-}
+export { formatLengthPlain } from './format-length-plain.ts';

@@ -162,6 +162,14 @@ function drawTile(doc: Pdf, template: PlacementTemplate, tile: TemplateTile, ori
     .fontSize(7)
     .text('sewing field', X(field.xMm) + 3, Y(field.yMm) + 3, { lineBreak: false });
 
+  if (template.pictureDataUrl) {
+    // A photo or scan has no outline: the picture itself, at 1:1 in its box (pdfkit reads the PNG data URL).
+    const { artwork } = template;
+    doc.image(template.pictureDataUrl, X(artwork.xMm), Y(artwork.yMm), {
+      width: pt(artwork.widthMm),
+      height: pt(artwork.heightMm),
+    });
+  }
   for (const outline of template.outlines) {
     doc
       .path(

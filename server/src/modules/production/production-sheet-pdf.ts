@@ -4,6 +4,7 @@
 import type { PaperSize, ProductionSheet, SheetPlacement } from '../../contracts/production-sheet.ts';
 import { addTemplatePages } from './production-sheet-pdf-templates.ts';
 import { hoopingWhere, minutesText } from './production-sheet-wording.ts';
+import { placementDetailLines } from './production-sheet-placement-lines.ts';
 import {
   ACCENT,
   createSheetDocument,
@@ -56,6 +57,9 @@ class SummaryWriter {
     this.gap(4);
     this.garmentLine();
     for (const placement of this.sheet.placements) if (placement.border) this.hoopingPlan(placement, placement.border);
+    this.heading('Stitching order');
+    this.text(this.sheet.sewingOrder.rule, { size: 9 });
+    for (const step of this.sheet.sewingOrder.steps) this.text(`${step.order}.  ${step.text}`, { size: 9, indent: 8 });
     this.heading('Placements and threads');
     for (const placement of this.sheet.placements) this.placement(placement);
     this.materials();
@@ -195,7 +199,8 @@ class SummaryWriter {
         `${placement.hoop ? ` · ${placement.hoop.name}` : ''}`,
       { size: 8.5, colour: SOFT_INK },
     );
-    if (placement.threads.length === 0) this.text('Sewn in the colours of the artwork.', { size: 8.5 });
+    for (const line of placementDetailLines(placement))
+      this.text(line.text, { size: 8.5, bold: line.isWarning, colour: line.isWarning ? ACCENT : INK });
     for (const thread of placement.threads) {
       this.ensure(16);
       this.doc.rect(this.left + 8, this.y + 1, 22, 11).fillAndStroke(thread.hex, INK);

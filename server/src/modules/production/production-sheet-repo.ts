@@ -1,8 +1,16 @@
 import type { Db } from '../../db/knex.ts';
 import type { OrderStatus } from '../../contracts/order-status.ts';
+import { mockupSizeMm } from '../../engine/garment-mockup-size.ts';
+
+/** A mark on the centre-front line the studio measures from, mm down the front drawing at the order's size. */
+export interface GarmentLandmark {
+  label: string;
+  yMm: number;
+}
 
 /** The order row and its (one) item with the ordered design, as a production sheet needs them. */
 export interface OrderToMake {
+  id: number;
   number: string;
   status: OrderStatus;
   /** Whose uploads the design's artwork placements are. */
@@ -20,6 +28,9 @@ export interface OrderToMake {
   colourId: number;
   colourName: string;
   colourHex: string;
+  /** The front drawing at the order's size, mm: its centre-front line is the middle of its width. */
+  mockupWidthMm: number;
+  landmarks: GarmentLandmark[];
   /** Left unread (`unknown`): the caller must pass it through restoreDesign. */
   document: unknown;
 }
@@ -37,7 +48,10 @@ export async function readOrderToMake(db: Db, number: string): Promise<OrderToMa
     .join('order_items as i', 'i.order_id', 'o.id')
     .join('designs as d', 'd.id', 'i.design_id')
     .join('fabric_colours as c', 'c.id', 'd.fabric_colour_id')
+    .join('garments as g', 'g.id', 'd.garment_id')
+    .join('garment_sizes as s', 's.id', 'i.garment_size_id')
     .select(
+      'o.id',
       'o.number',
       'o.status',
       'o.needed_by',
@@ -52,6 +66,10 @@ export async function readOrderToMake(db: Db, number: string): Promise<OrderToMa
       'd.document',
       'c.name as colour_name',
       'c.hex as colour_hex',
+      'g.slug as garment_slug',
+      'g.mockup_svg',
+      'g.landmarks',
+      's.mockup_scale',
     )
     .where('o.number', number)
     .orderBy('i.id')
@@ -72,7 +90,11 @@ export async function readOrderToMake(db: Db, number: string): Promise<OrderToMa
     approved && (approved.customer_comment || pins.length > 0)
       ? { proofVersion: approved.version, comment: approved.customer_comment, pins: pins.map((pin) => pin.comment) }
       : null;
+  const scale = Number(row.mockup_scale);
+  const landmarks: GarmentLandmark[] =
+    (typeof row.landmarks === 'string' ? JSON.parse(row.landmarks) : row.landmarks) ?? [];
   return {
+    id: row.id,
     number: row.number,
     status: row.status,
     customerId: row.customer_id,
@@ -87,6 +109,8 @@ export async function readOrderToMake(db: Db, number: string): Promise<OrderToMa
     colourId: row.fabric_colour_id,
     colourName: row.colour_name,
     colourHex: row.colour_hex,
+    mockupWidthMm: mockupSizeMm(row.mockup_svg, row.garment_slug).widthMm * scale,
+    landmarks: landmarks.map((landmark) => ({ label: landmark.label, yMm: landmark.yMm * scale })),
     document: row.document,
   };
 }
@@ -101,4 +125,9 @@ export async function readThreadsByCode(db: Db, codes: string[]): Promise<Map<st
 export async function readMotifArtwork(db: Db, slugs: string[]): Promise<Map<string, string>> {
   const rows = await db('motifs').select('slug', 'svg').whereIn('slug', slugs);
   return new Map(rows.map((row) => [row.slug as string, row.svg as string]));
+}
+
+/** The shop's active palette, for matching the customer's own colours to threads. */
+export async function readPalette(db: Db): Promise<ThreadRow[]> {
+  return db('threads').select('code', 'name', 'hex').where({ is_active: true }).orderBy(['sort_order', 'code']);
 }

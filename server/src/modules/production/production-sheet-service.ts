@@ -1,7 +1,14 @@
 import type { Db } from '../../db/knex.ts';
 import { approvedOrderStatuses, isIn } from '../../contracts/order-status.ts';
-import { artworkForQuote } from '../artwork/artwork-service.ts';
-import { readMotifArtwork, readOrderToMake, readThreadsByCode, type OrderToMake } from './production-sheet-repo.ts';
+import { artworkForQuote, artworkPicturesFor } from '../artwork/artwork-service.ts';
+import {
+  readMotifArtwork,
+  readOrderToMake,
+  readPalette,
+  readThreadsByCode,
+  type OrderToMake,
+} from './production-sheet-repo.ts';
+import { readStitchFileNames } from './placement-stitch-file-repo.ts';
 import { restoreDesign, type DesignDocument } from '../../contracts/designs.ts';
 import type { OrderStatus } from '../../contracts/order-status.ts';
 import type { PaperSize, ProductionSheet } from '../../contracts/production-sheet.ts';
@@ -75,7 +82,11 @@ export function createProductionSheetService(deps: { db: Db; fonts: LetteringFon
     const artworkIds = document.placements.flatMap((placement) =>
       placement.kind === 'artwork' ? [placement.artworkUploadId] : [],
     );
-    const uploads = await artworkForQuote(db, { userId: order.customerId }, artworkIds);
+    const owner = { userId: order.customerId };
+    const [uploads, pictures] = await Promise.all([
+      artworkForQuote(db, owner, artworkIds),
+      artworkPicturesFor(db, owner, artworkIds),
+    ]);
     const catalogue = toQuoteCatalogue(record.value, deps.fonts, artworkCatalogueOf(uploads));
     const figured = figureDesign(catalogue, document);
     if (!figured.ok)
@@ -86,11 +97,23 @@ export function createProductionSheetService(deps: { db: Db; fonts: LetteringFon
     const threadCodes = document.placements.flatMap((placement) =>
       placement.kind === 'lettering' ? [placement.thread] : placement.kind === 'artwork' ? [] : placement.threads,
     );
-    const [threads, artwork] = await Promise.all([
+    const [threads, artwork, palette, stitchFileNames] = await Promise.all([
       readThreadsByCode(db, threadCodes),
       readMotifArtwork(db, slugsNamedIn(document).motifSlugs),
+      artworkIds.length > 0 ? readPalette(db) : Promise.resolve([]),
+      readStitchFileNames(db, order.id),
     ]);
-    return assembleSheet({ order, document, catalogue, figures: figured.value, threads, artwork });
+    return assembleSheet({
+      order,
+      document,
+      catalogue,
+      figures: figured.value,
+      threads,
+      artwork,
+      pictures: new Map(pictures.map((picture) => [picture.id, picture])),
+      palette,
+      stitchFileNames,
+    });
   }
 
   return { get, pdf };

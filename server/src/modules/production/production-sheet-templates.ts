@@ -28,13 +28,7 @@ export function borderTemplates(
   const bySize = new Map<number, number[]>();
   for (const hooping of border.hoopings)
     bySize.set(hooping.repeatNumbers.length, [...(bySize.get(hooping.repeatNumbers.length) ?? []), hooping.order]);
-  const longMm = Math.max(hoop.fieldWidthMm, hoop.fieldHeightMm);
-  const shortMm = Math.min(hoop.fieldWidthMm, hoop.fieldHeightMm);
-  // As planHoopings orients the row: along the long side when the motif's height fits across the short one of
-  // the usable field (the field less the hoop's clearance at each edge).
-  const usable = usableField(hoop);
-  const [rowMm, acrossMm] =
-    border.repeatHeightMm <= Math.min(usable.widthMm, usable.heightMm) + 1e-9 ? [longMm, shortMm] : [shortMm, longMm];
+  const [rowMm, acrossMm] = fieldAlongRow(hoop, border.repeatHeightMm);
 
   return [...bySize].map(([repeats, orders]): PlacementTemplate => {
     const field = { xMm: PADDING_MM, yMm: PADDING_MM, widthMm: rowMm, heightMm: acrossMm };
@@ -66,11 +60,23 @@ export function borderTemplates(
       joinMarksXMm: [...joins].sort((a, b) => a - b),
       artwork: box,
       outlines: starts.flatMap((start) => placeOutlines(artwork.outlines, start, box.yMm)),
+      pictureDataUrl: null,
     };
   });
 }
 
-/** A single motif or lettering centred in its hoop's field, turned to fit when it only fits the other way. */
+/**
+ * A border hooping's sewing field as [along the row, across it], mm, as planHoopings orients the row: along the
+ * long side when the motif's height fits across the short one of the usable field (less the clearance at each edge).
+ */
+export function fieldAlongRow(hoop: Hoop, repeatHeightMm: number): [number, number] {
+  const longMm = Math.max(hoop.fieldWidthMm, hoop.fieldHeightMm);
+  const shortMm = Math.min(hoop.fieldWidthMm, hoop.fieldHeightMm);
+  const usable = usableField(hoop);
+  return repeatHeightMm <= Math.min(usable.widthMm, usable.heightMm) + 1e-9 ? [longMm, shortMm] : [shortMm, longMm];
+}
+
+/** A single motif, lettering or the customer's artwork centred in its hoop's field, turned to fit when it only fits the other way. */
 export function itemTemplate(placement: SheetPlacement, hoop: Hoop, artwork: ArtworkOutline): PlacementTemplate {
   const fitsAsIs = fitInField(hoop, artwork) !== 'turned';
   const [fieldWidthMm, fieldHeightMm] = fitsAsIs
@@ -98,5 +104,6 @@ export function itemTemplate(placement: SheetPlacement, hoop: Hoop, artwork: Art
     joinMarksXMm: [],
     artwork: box,
     outlines: placeOutlines(artwork.outlines, box.xMm, box.yMm),
+    pictureDataUrl: artwork.pictureDataUrl ?? null,
   };
 }

@@ -150,6 +150,7 @@ export function OrderPage() {
                       motifs={motifs.data}
                       fonts={fonts.data}
                       threads={threads.data}
+                      uploads={design.uploads}
                       label={`Your design on the ${design.garmentName.toLowerCase()}`}
                     />
                   </Suspense>

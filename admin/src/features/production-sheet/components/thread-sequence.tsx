@@ -3,7 +3,9 @@ import type { SheetPlacement } from '@server/contracts/production-sheet.ts';
 /** The threads in stitching order, each with a swatch of its colour. */
 export function ThreadSequence({ threads }: { threads: SheetPlacement['threads'] }) {
   if (threads.length === 0)
-    return <p className="text-sm text-walnut-500">Sewn in the colours of the customer’s artwork.</p>;
+    return (
+      <p className="text-sm text-walnut-500">A photo or scan of the customer’s: choose its threads when digitizing.</p>
+    );
   return (
     <ol className="grid gap-1.5 text-sm">
       {threads.map((thread) => (

@@ -33,6 +33,16 @@ export function TrueSizeTemplate({ template }: { template: PlacementTemplate }) 
       <text x={field.xMm + 1.5} y={field.yMm + 4} fontSize={3} fill={FIELD}>
         sewing field
       </text>
+      {template.pictureDataUrl && (
+        <image
+          href={template.pictureDataUrl}
+          x={artwork.xMm}
+          y={artwork.yMm}
+          width={artwork.widthMm}
+          height={artwork.heightMm}
+          preserveAspectRatio="none"
+        />
+      )}
       {template.outlines.map((outline, i) => (
         <path
           key={i}

@@ -12,6 +12,8 @@ import { useDesignSetting } from '../hooks/use-design-setting.ts';
 import { useLetteringFontsReady } from '../hooks/use-lettering-fonts.ts';
 import { describeScene, type Drawable } from '../render/describe-scene.ts';
 import { svgDataUrl } from '@ui/svg-data-url.ts';
+import type { DesignUploadPicture } from '@server/contracts/artwork.ts';
+import { ArtworkPicture } from '@store/components/artwork-picture.tsx';
 
 interface DesignPreviewProps {
   garment: GarmentSummary;
@@ -21,6 +23,8 @@ interface DesignPreviewProps {
   motifs: readonly MotifSummary[];
   fonts: readonly LetteringFontSummary[];
   threads: readonly ThreadColourSummary[];
+  /** The customer's uploads the design places. */
+  uploads: readonly DesignUploadPicture[];
   label: string;
 }
 
@@ -91,6 +95,7 @@ export function DesignPreview({
   motifs,
   fonts,
   threads,
+  uploads,
   label,
 }: DesignPreviewProps) {
   const clipPrefix = useId();
@@ -108,6 +113,15 @@ export function DesignPreview({
       {drawables.map((drawable) => (
         <PreviewItem key={drawable.id} drawable={drawable} clipId={`${clipPrefix}-${drawable.id}`.replace(/:/g, '')} />
       ))}
+      {document.placements.map((placement) => {
+        // Uploads come from the design's own list (their proportions and address), drawn by the shared rule;
+        // the scene's artwork drawables, made for the canvas, are not drawn here.
+        const upload =
+          placement.kind === 'artwork' && uploads.find((candidate) => candidate.uploadId === placement.artworkUploadId);
+        return placement.kind === 'artwork' && upload ? (
+          <ArtworkPicture key={placement.id} placement={placement} upload={upload} />
+        ) : null;
+      })}
     </svg>
   );
 }

@@ -4,10 +4,11 @@ import { dyedMockupSrc } from '@store/lib/dyed-mockup.ts';
 import { useLetteringFaces } from '@store/lib/load-lettering-faces.ts';
 import type { DesignDrawingLayout, DrawnPlacement } from '../model/design-drawing-layout.ts';
 import { motifInThreadsSrc } from './motif-in-threads.ts';
+import { ArtworkPicture } from '@store/components/artwork-picture.tsx';
 
 /** A capital H is about 0.7 em in most Latin faces: lettering is sized by its H, SVG text by its em. */
 const CAP_HEIGHT_EM = 0.7;
-/** How far an artwork placeholder is tall for its width: the upload's own shape is not part of a shared design. */
+/** How far an artwork placeholder is tall for its width, where the upload's picture is not there to show. */
 const ARTWORK_ASPECT = 0.75;
 
 const turned = (placement: { centerXMm: number; centerYMm: number; rotationDeg: number }) =>
@@ -69,6 +70,7 @@ function Placement({ placement, clipId }: { placement: DrawnPlacement; clipId: s
         </text>
       );
     case 'artwork': {
+      if (placement.upload) return <ArtworkPicture placement={placement} upload={placement.upload} />;
       const heightMm = placement.widthMm * ARTWORK_ASPECT;
       return (
         <rect

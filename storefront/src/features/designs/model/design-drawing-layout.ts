@@ -5,6 +5,7 @@ import type {
   ThreadColourSummary,
 } from '@server/contracts/catalogue.ts';
 import type { BorderPlacement, DesignDocument, DesignPlacement } from '@server/contracts/designs.ts';
+import type { DesignUploadPicture } from '@server/contracts/artwork.ts';
 // Straight from their modules: the engine's entry also registers colour spaces at load, which a drawing does not need.
 import { fitMotifBorder } from '@server/engine/fit-border.ts';
 import { layoutHemBorder, type BorderBand, type BorderRepeat } from '@server/engine/hem-border-layout.ts';
@@ -54,7 +55,8 @@ export type DrawnPlacement =
       letterHeightMm: number;
       hex: string | undefined;
     } & Turned)
-  | ({ kind: 'artwork'; id: string; label: string; widthMm: number } & Turned)
+  /** The customer's upload; without its picture (no longer theirs to show) a dashed outline of its place. */
+  | ({ kind: 'artwork'; id: string; label: string; widthMm: number; upload: DesignUploadPicture | undefined } & Turned)
   /** A placement the catalogue no longer has the motif or font for: listed, not drawn. */
   | { kind: 'unavailable'; id: string; label: string };
 
@@ -121,13 +123,16 @@ function drawPlacement(
   catalogue: DrawingCatalogue,
   size: GarmentSummary['sizes'][number],
   placement: DesignPlacement,
+  uploads: readonly DesignUploadPicture[],
 ): DrawnPlacement {
   const hexOf = (code: string) => catalogue.threads.find((thread) => thread.code === code)?.hex;
   if (placement.kind === 'artwork') {
+    const upload = uploads.find((candidate) => candidate.uploadId === placement.artworkUploadId);
     return {
       kind: 'artwork',
       id: placement.id,
-      label: 'An uploaded picture (drawn as a dashed outline)',
+      label: upload ? 'Your uploaded picture' : 'An uploaded picture (drawn as a dashed outline)',
+      upload,
       widthMm: placement.widthMm,
       centerXMm: placement.centerXMm,
       centerYMm: placement.centerYMm,
@@ -178,20 +183,22 @@ function drawPlacement(
 
 /**
  * A saved or shared design laid out for a still drawing, without the designer's canvas: the garment's mockup at the
- * chosen size and every placement where the document puts it, in the mockup's millimetres. Undefined when the
+ * chosen size and every placement where the document puts it (the customer's uploads from `uploads`), in the
+ * mockup's millimetres. Undefined when the
  * garment no longer has the design's size.
  */
 export function layoutDesignDrawing(
   catalogue: DrawingCatalogue,
   sizeId: number,
   document: DesignDocument,
+  uploads: readonly DesignUploadPicture[] = [],
 ): DesignDrawingLayout | undefined {
   const size = catalogue.garment.sizes.find((candidate) => candidate.id === sizeId);
   if (!size) return undefined;
   return {
     widthMm: catalogue.garment.mockupWidthMm * size.mockupScale,
     heightMm: catalogue.garment.mockupHeightMm * size.mockupScale,
-    placements: document.placements.map((placement) => drawPlacement(catalogue, size, placement)),
+    placements: document.placements.map((placement) => drawPlacement(catalogue, size, placement, uploads)),
   };
 }
 
@@ -206,9 +213,11 @@ export interface CatalogueLists {
 /** A design's garment and its drawing from the catalogue lists; either is undefined when the catalogue lost it. */
 export function drawingOf(
   lists: CatalogueLists,
-  design: { garmentId: number; sizeId: number; document: DesignDocument },
+  design: { garmentId: number; sizeId: number; document: DesignDocument; uploads?: readonly DesignUploadPicture[] },
 ) {
   const garment = lists.garments.find((candidate) => candidate.id === design.garmentId);
-  const layout = garment ? layoutDesignDrawing({ ...lists, garment }, design.sizeId, design.document) : undefined;
+  const layout = garment
+    ? layoutDesignDrawing({ ...lists, garment }, design.sizeId, design.document, design.uploads)
+    : undefined;
   return { garment, layout };
 }
