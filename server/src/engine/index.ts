@@ -77,3 +77,8 @@ export {
   weekStartOf,
 } from './shop-calendar.ts';
 export type { DatedOrder, ShopCalendar } from './shop-calendar.ts';
+
+export { findOverlaps, MIN_OVERLAP_MM, overlapDepthMm, overlappingIds } from './placement-overlap.ts';
+export type { PlacementOutline, PlacementOverlap } from './placement-overlap.ts';
+export { findFreeCentre, GRID_STEP_MM } from './free-space.ts';
+export type { FreeCentre, ZoneRect } from './free-space.ts';
