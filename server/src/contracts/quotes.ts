@@ -114,5 +114,7 @@ export const quotePreviewResponse = z.object({
   }),
   /** Safety notes for children's garments; guidance only, never a certification. */
   cautions: z.array(guidanceMessage),
+  /** Where two placements would be stitched over each other; guidance, not a refusal. Left out by older servers. */
+  layoutNotes: z.array(guidanceMessage).optional(),
 });
 export type QuotePreviewResponse = z.infer<typeof quotePreviewResponse>;

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
+import { LayoutNotes } from '@ui/components/layout-notes.tsx';
 import { formatMoney } from '@ui/format.ts';
 import { useOrder } from '../../features/orders/api/get-order.ts';
 import { OrderTimeline } from '../../features/orders/components/order-timeline.tsx';
@@ -27,7 +28,7 @@ export function OrderPage() {
   const detail = useOrder(number);
   if (detail.isPending) return <Loading label={`Opening order ${number}…`} />;
   if (detail.isError) return <ErrorNotice message={detail.error.message} onRetry={() => void detail.refetch()} />;
-  const { order, items, proofs, events, studioActions } = detail.data;
+  const { order, items, proofs, events, studioActions, layoutNotes } = detail.data;
   return (
     <div className="grid gap-6">
       <div>
@@ -112,6 +113,10 @@ export function OrderPage() {
         <div className="grid min-w-0 content-start gap-6">
           <Panel title="Proofs">
             <div className="grid gap-4">
+              <LayoutNotes
+                notes={layoutNotes}
+                advice="Check the layout before the proof goes out: move one of them, or tell the customer in the proof's message."
+              />
               {studioActions.includes('send_proof') && (
                 <SendProofForm number={order.number} versionCount={proofs.length} />
               )}

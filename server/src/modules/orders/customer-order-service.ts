@@ -35,7 +35,7 @@ type ProofAnswer = z.output<typeof proofAnswerRequest>;
 export function createCustomerOrderService(deps: {
   db: Db;
   mailer: Mailer;
-  quotes: Pick<QuoteService, 'cautionsFor'>;
+  quotes: Pick<QuoteService, 'guidanceFor'>;
   appOrigin: string;
   now: () => Date;
 }) {
@@ -88,7 +88,7 @@ export function createCustomerOrderService(deps: {
     const latestVersion = detail.proofs.at(-1)?.version;
     const needsPayment = isPaymentNeeded(order, payments, now);
     const { garmentId, sizeId } = detail.design;
-    const cautions = await deps.quotes.cautionsFor(
+    const { cautions, layoutNotes } = await deps.quotes.guidanceFor(
       { garmentId, sizeId, document: restored.data },
       { userId: customerId },
     );
@@ -109,6 +109,7 @@ export function createCustomerOrderService(deps: {
       quote: { ruleSetVersion: detail.quote.ruleSetVersion, lines: detail.quote.lines },
       design: { ...detail.design, document: restored.data },
       cautions,
+      layoutNotes,
       payment: paymentSummary(payments, detail.events, needsPayment, now),
       proofs: detail.proofs.map(({ hasImage, ...proof }) => ({
         ...proof,

@@ -21,11 +21,33 @@ function dated(row: BoardOrderRow, schedule: ShopCalendar & { leadTimeDays: numb
   return { ...row, dueDate, isOverdue: isPastDue(dueDate, today) && !isIn(closedOrderStatuses, row.status) };
 }
 import { readOrderArtworkOwner, readOrderDetail } from './order-detail-repo.ts';
+import { readOrderDesign } from './order-design-repo.ts';
+import { restoreDesign } from '../../contracts/designs.ts';
+import type { GuidanceMessageSummary } from '../../contracts/guidance.ts';
+import type { QuoteService } from '../quotes/quote-service.ts';
 import { availableOrderActions } from './order-flow.ts';
 
 /** What the studio reads about orders: the board, the due-date calendar, one order's page and its customer's pictures. */
-export function createStudioOrderService(deps: { db: Db; artwork: ArtworkService; now: () => Date }) {
+export function createStudioOrderService(deps: {
+  db: Db;
+  artwork: ArtworkService;
+  quotes: Pick<QuoteService, 'guidanceFor'>;
+  now: () => Date;
+}) {
   const { db } = deps;
+
+  /** Where the order's design has placements stitched over each other, by the one overlap rule. */
+  async function layoutNotesOf(number: string): Promise<GuidanceMessageSummary[]> {
+    const design = await readOrderDesign(db, number);
+    const restored = design && restoreDesign(design.document);
+    if (!design || !restored?.success) return [];
+    const { garmentId, sizeId, customerId } = design;
+    const guidance = await deps.quotes.guidanceFor(
+      { garmentId, sizeId, document: restored.data },
+      { userId: customerId },
+    );
+    return guidance.layoutNotes;
+  }
   /** The shop's calendar and its today, in its own time zone: the one "today" of the board and the calendar. */
   async function shopDay() {
     const schedule = await shopCalendarOf(db);
@@ -60,7 +82,11 @@ export function createStudioOrderService(deps: { db: Db; artwork: ArtworkService
       const studioActions = availableOrderActions(detail.order.status, 'staff').filter(
         (action) => action !== 'authorize' && action !== 'request_changes' && action !== 'approve_proof',
       );
-      return ok({ ...detail, studioActions: studioActions as OrderDetailResponse['studioActions'] });
+      return ok({
+        ...detail,
+        studioActions: studioActions as OrderDetailResponse['studioActions'],
+        layoutNotes: await layoutNotesOf(number),
+      });
     },
 
     /** Only uploads the order's designs place, and only the order's customer's, for the studio to digitize. */

@@ -15,6 +15,7 @@ import {
 } from '../../engine/index.ts';
 import type { DesignDocument } from '../../contracts/designs.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
+import { overlapNotes } from './design-overlaps.ts';
 import { figureBorder } from './figure-border.ts';
 import { figureItem } from './figure-item.ts';
 import type { PlacementFigures } from './placement-outcome.ts';
@@ -33,6 +34,8 @@ export interface DesignFigures {
   runMinutes: RunTimeEstimate;
   stabilizer: StabilizerAdvice;
   cautions: GuidanceMessage[];
+  /** Where two placements would be stitched over each other (the engine's overlap rule); guidance, not a refusal. */
+  layoutNotes: GuidanceMessage[];
 }
 
 /**
@@ -111,6 +114,7 @@ export function figureDesign(catalogue: QuoteCatalogue, document: DesignDocument
       messages: stabilizer.messages,
     },
     cautions: cautions.messages,
+    layoutNotes: overlapNotes(catalogue, document, placements),
   });
 }
 

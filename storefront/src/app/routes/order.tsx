@@ -16,6 +16,7 @@ import { OrderTimeline } from '../../features/orders/components/order-timeline.t
 import { PaymentState } from '../../features/orders/components/payment-state.tsx';
 import { ProofReview } from '../../features/orders/components/proof-review.tsx';
 import { SafetyCautions } from '../../components/safety-cautions.tsx';
+import { LayoutNotes } from '@ui/components/layout-notes.tsx';
 import { DesignSummary } from '../../features/orders/components/design-summary.tsx';
 import { CancelOrderButton } from '../../features/orders/components/cancel-order-button.tsx';
 import { SignInNeeded } from '../../components/sign-in-needed.tsx';
@@ -62,7 +63,7 @@ export function OrderPage() {
       </div>
     );
   }
-  const { order: summary, design, quote, proofs, timeline, actions, cautions } = order.data;
+  const { order: summary, design, quote, proofs, timeline, actions, cautions, layoutNotes } = order.data;
   const garment = garments.data?.find((candidate) => candidate.id === design.garmentId);
   const hasProofToAnswer = proofs.some((proof) => proof.isAnswerable);
 
@@ -114,6 +115,11 @@ export function OrderPage() {
             ) : (
               <ProofReview number={summary.number} proofs={proofs} />
             )}
+            <LayoutNotes
+              notes={layoutNotes}
+              advice="If that is not what you meant, ask for a change on the proof and say which to move."
+              className="mt-4"
+            />
             <SafetyCautions
               cautions={cautions}
               heading={`Safety notes for ${design.garmentName}, size ${design.sizeLabel}`}
