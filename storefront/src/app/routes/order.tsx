@@ -2,7 +2,7 @@ import { lazy, Suspense } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { ApiError } from '@ui/api-client.ts';
 import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
-import { formatMoney } from '@ui/format.ts';
+import { formatMoney, formatCustomerDate } from '@ui/format.ts';
 import { useGarments } from '../../features/catalogue/api/get-garments.ts';
 import { GarmentPicture } from '../../features/catalogue/components/garment-picture.tsx';
 import { useMotifs } from '../../features/catalogue/api/get-motifs.ts';
@@ -80,7 +80,7 @@ export function OrderPage() {
         <p className="mt-1 text-walnut-700">
           {summary.description} · {formatMoney(summary.totalCents, summary.currency)}
           {summary.dueDate &&
-            ` · ${summary.neededBy ? 'needed by' : 'ready by about'} ${new Date(`${summary.dueDate}T12:00:00Z`).toLocaleDateString('en-US', { month: 'long', day: 'numeric', timeZone: 'UTC' })}`}
+            ` · ${summary.neededBy ? 'needed by' : 'ready by about'} ${formatCustomerDate(summary.dueDate)}`}
           {summary.isRush && ' · rush'}
         </p>
       </div>
