@@ -1,7 +1,7 @@
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { join } from 'node:path';
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { formatCustomerDate, formatCustomerDateTime } from '../../../ui/src/format.ts';
+import { sourcesUnder } from './support/sources-under.ts';
 
 describe('formatCustomerDate', () => {
   it('when a calendar date is shown to a customer, then it reads month, day and year, the same day in every time zone', () => {
@@ -15,14 +15,6 @@ describe('formatCustomerDate', () => {
     expect(formatCustomerDateTime('2026-12-03T12:00:00.000Z')).toMatch(/^December 3, 2026, \d{1,2}:\d{2} (AM|PM)$/);
   });
 });
-
-/** Every source file of the storefront. */
-function sourcesUnder(dir: string): string[] {
-  return readdirSync(dir).flatMap((name) => {
-    const path = join(dir, name);
-    return statSync(path).isDirectory() ? sourcesUnder(path) : /\.tsx?$/.test(name) ? [path] : [];
-  });
-}
 
 describe('one date style on the storefront', () => {
   it('when a storefront page shows a date, then it goes through formatCustomerDate, never its own format', () => {

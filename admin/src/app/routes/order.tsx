@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
 import { LayoutNotes } from '@ui/components/layout-notes.tsx';
-import { formatMoney } from '@ui/format.ts';
+import { formatMoney, formatStudioDate } from '@ui/format.ts';
 import { useOrder } from '../../features/orders/api/get-order.ts';
 import { OrderTimeline } from '../../features/orders/components/order-timeline.tsx';
 import { OrderMoney } from '../../features/orders/components/order-money.tsx';
@@ -11,8 +11,6 @@ import { ProofVersions } from '../../features/orders/components/proof-versions.t
 import { SendProofForm } from '../../features/orders/components/send-proof-form.tsx';
 import { statusLabels } from '../../lib/order-status-labels.ts';
 import { paths } from '../../config/paths.ts';
-
-const day = new Intl.DateTimeFormat('en-US', { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' });
 
 function Panel({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -58,7 +56,7 @@ export function OrderPage() {
           {order.neededBy && (
             <>
               {' '}
-              · needed by <strong>{day.format(new Date(`${order.neededBy}T12:00:00Z`))}</strong>
+              · needed by <strong>{formatStudioDate(order.neededBy)}</strong>
             </>
           )}
         </p>
