@@ -37,7 +37,17 @@ test('when two motifs are added to the same zone, then they do not overlap; drag
 
   // Drag the second bunny onto the first. The 6-month mockup is 418.8 × 427.9 mm and the chest zone is centred at
   // (209.4, 104.7) mm (seeds/data/garments.ts).
-  const surface = await canvas(page).locator('canvas').last().boundingBox();
+  // Adding scrolls the garment into view smoothly: measure the canvas once it has stopped moving.
+  const drawing = canvas(page).locator('canvas').last();
+  await drawing.scrollIntoViewIfNeeded();
+  let surface = await drawing.boundingBox();
+  await expect
+    .poll(async () => {
+      const before = surface;
+      surface = await drawing.boundingBox();
+      return JSON.stringify(before) === JSON.stringify(surface);
+    })
+    .toBe(true);
   const at = (xMm: number, yMm: number) =>
     [surface!.x + (xMm / 418.83) * surface!.width, surface!.y + (yMm / 427.94) * surface!.height] as const;
   await page.mouse.move(...at(209.4 + offsetMm, 104.7));
