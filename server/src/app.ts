@@ -256,7 +256,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(
     '/api/admin/orders',
     createAdminOrdersRouter({
-      orders: createStudioOrderService({ db, artwork, now }),
+      orders: createStudioOrderService({ db, artwork, quotes, now }),
       payments: createOrderPaymentService(money),
       production: createOrderProductionSteps({ db, mailer, now, appOrigin }),
       proofs: createProofService({ db, mailer, now, appOrigin, heavyWork, repricing }),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { guidanceMessage } from './guidance.ts';
 import { orderStatus, paymentStatus } from './order-status.ts';
 import { orderDelivery, shownAddress } from './shipping.ts';
 import { proofPrice } from './proof-versions.ts';
@@ -106,6 +107,8 @@ export const orderDetailResponse = z.object({
   /** What the studio can do to the order now, by the state machine: the order page shows a button for each. */
   studioActions: z.array(z.enum(['send_proof', 'start_production', 'mark_stitched', 'ship', 'cancel', 'refund'])),
   events: z.array(orderEvent),
+  /** Where two placements of the design would be stitched over each other, to check before sending a proof. */
+  layoutNotes: z.array(guidanceMessage).optional(),
 });
 export type OrderDetailResponse = z.infer<typeof orderDetailResponse>;
 

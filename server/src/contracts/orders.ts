@@ -206,6 +206,8 @@ export const customerOrderResponse = z.object({
   }),
   /** The safety notes for the garment, size and motifs as ordered, worked out as the catalogue states them now. */
   cautions: z.array(guidanceMessage),
+  /** Where two placements of the design would be stitched over each other (the proof's overlap warning). */
+  layoutNotes: z.array(guidanceMessage).optional(),
   payment: z.object({
     /** Held on the card, not yet charged. */
     heldCents: z.number().int(),

@@ -145,5 +145,7 @@ export const quotePreviewResponse = z.object({
       colourChangesBetweenPlacements: z.number().int(),
     })
     .optional(),
+  /** Where two placements would be stitched over each other; guidance, not a refusal. Left out by older servers. */
+  layoutNotes: z.array(guidanceMessage).optional(),
 });
 export type QuotePreviewResponse = z.infer<typeof quotePreviewResponse>;

@@ -91,3 +91,7 @@ export type { DatedOrder, ShopCalendar } from './shop-calendar.ts';
 
 export { chargeStepOf, planCardPayment } from './card-payment-plan.ts';
 export type { CardMethod, CardPlan, ChargeStep } from './card-payment-plan.ts';
+export { findOverlaps, MIN_OVERLAP_MM, overlapDepthMm, overlappingIds } from './placement-overlap.ts';
+export type { PlacementOutline, PlacementOverlap } from './placement-overlap.ts';
+export { findFreeCentre, GRID_STEP_MM } from './free-space.ts';
+export type { FreeCentre, ZoneRect } from './free-space.ts';

@@ -1,8 +1,9 @@
 import type { ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
-import { formatMoney } from '@ui/format.ts';
+import { formatMoney, formatStudioDate } from '@ui/format.ts';
 import { DeliveryDetails } from '@ui/components/delivery-details.tsx';
+import { LayoutNotes } from '@ui/components/layout-notes.tsx';
 import { useOrder } from '../../features/orders/api/get-order.ts';
 import { OrderTimeline } from '../../features/orders/components/order-timeline.tsx';
 import { OrderMoney } from '../../features/orders/components/order-money.tsx';
@@ -12,8 +13,6 @@ import { SendProofForm } from '../../features/orders/components/send-proof-form.
 import { DesignWorkPanel } from '../../features/orders/components/design-work-panel.tsx';
 import { statusLabels } from '../../lib/order-status-labels.ts';
 import { paths } from '../../config/paths.ts';
-
-const day = new Intl.DateTimeFormat('en-US', { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' });
 
 function Panel({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -29,7 +28,7 @@ export function OrderPage() {
   const detail = useOrder(number);
   if (detail.isPending) return <Loading label={`Opening order ${number}…`} />;
   if (detail.isError) return <ErrorNotice message={detail.error.message} onRetry={() => void detail.refetch()} />;
-  const { order, items, proofs, events, studioActions } = detail.data;
+  const { order, items, proofs, events, studioActions, layoutNotes } = detail.data;
   return (
     <div className="grid gap-6">
       <div>
@@ -59,7 +58,7 @@ export function OrderPage() {
           {order.neededBy && (
             <>
               {' '}
-              · needed by <strong>{day.format(new Date(`${order.neededBy}T12:00:00Z`))}</strong>
+              · needed by <strong>{formatStudioDate(order.neededBy)}</strong>
             </>
           )}
         </p>
@@ -122,6 +121,10 @@ export function OrderPage() {
         <div className="grid min-w-0 content-start gap-6">
           <Panel title="Proofs">
             <div className="grid gap-4">
+              <LayoutNotes
+                notes={layoutNotes}
+                advice="Check the layout before the proof goes out: move one of them, or tell the customer in the proof's message."
+              />
               {studioActions.includes('send_proof') && (
                 <SendProofForm number={order.number} versionCount={proofs.length} />
               )}

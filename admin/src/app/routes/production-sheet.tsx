@@ -4,7 +4,7 @@ import type { PaperSize, ProductionSheet, SheetPlacement } from '@server/contrac
 import { ApiError } from '@ui/api-client.ts';
 import { Button, ButtonLink } from '@ui/components/button.tsx';
 import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
-import { formatLength } from '@ui/format.ts';
+import { formatLength, formatStudioDate } from '@ui/format.ts';
 import {
   productionSheetPdfHref,
   useProductionSheet,
@@ -26,13 +26,6 @@ const papers: { value: PaperSize; label: string }[] = [
 const printableWidthMm: Record<PaperSize, number> = { letter: 195.9, a4: 190 };
 const printableHeightMm: Record<PaperSize, number> = { letter: 259.4, a4: 277 };
 
-const day = new Intl.DateTimeFormat('en-US', {
-  weekday: 'short',
-  month: 'short',
-  day: 'numeric',
-  year: 'numeric',
-  timeZone: 'UTC',
-});
 const mm1 = (mm: number) => `${Number(Math.abs(mm).toFixed(1))} mm`;
 /** The inch half of formatLength ("3 ⅜ in"), for figures shown in mm to a tenth. */
 const inchesOf = (mm: number) => formatLength(Math.abs(mm)).split(' · ')[1];
@@ -94,7 +87,7 @@ export function ProductionSheetPage() {
           {data.order.neededBy && (
             <>
               {' '}
-              · needed by <strong>{day.format(new Date(`${data.order.neededBy}T12:00:00Z`))}</strong>
+              · needed by <strong>{formatStudioDate(data.order.neededBy)}</strong>
             </>
           )}
         </p>

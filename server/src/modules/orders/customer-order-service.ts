@@ -39,7 +39,7 @@ type ProofAnswer = z.output<typeof proofAnswerRequest>;
 export function createCustomerOrderService(deps: {
   db: Db;
   mailer: Mailer;
-  quotes: Pick<QuoteService, 'cautionsFor'>;
+  quotes: Pick<QuoteService, 'guidanceFor'>;
   appOrigin: string;
   now: () => Date;
 }) {
@@ -96,7 +96,7 @@ export function createCustomerOrderService(deps: {
     const latestVersion = detail.proofs.at(-1)?.version;
     const needsPayment = isPaymentNeeded(order, payments, now);
     const { garmentId, sizeId } = detail.design;
-    const cautions = await deps.quotes.cautionsFor(
+    const { cautions, layoutNotes } = await deps.quotes.guidanceFor(
       { garmentId, sizeId, document: restored.data },
       { userId: customerId },
     );
@@ -126,6 +126,7 @@ export function createCustomerOrderService(deps: {
         uploads: uploadsOf(restored.data, await designUploadPictures(db, customerId, [restored.data])),
       },
       cautions,
+      layoutNotes,
       payment: paymentSummary(payments, detail.events, needsPayment, now),
       proofs: detail.proofs.map(({ hasImage, ...proof }) => ({
         ...proof,

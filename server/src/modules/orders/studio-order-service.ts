@@ -22,12 +22,34 @@ function dated(row: BoardOrderRow, schedule: ShopCalendar & { leadTimeDays: numb
   return { ...row, dueDate, isOverdue: isPastDue(dueDate, today) && !isIn(closedOrderStatuses, row.status) };
 }
 import { readOrderArtworkOwner, readOrderDetail } from './order-detail-repo.ts';
+import { readOrderDesign } from './order-design-repo.ts';
+import { restoreDesign } from '../../contracts/designs.ts';
+import type { GuidanceMessageSummary } from '../../contracts/guidance.ts';
+import type { QuoteService } from '../quotes/quote-service.ts';
 import { availableOrderActions } from './order-flow.ts';
 import { previewCharge } from './charge-preview.ts';
 
 /** What the studio reads about orders: the board, the due-date calendar, one order's page and its customer's pictures. */
-export function createStudioOrderService(deps: { db: Db; artwork: ArtworkService; now: () => Date }) {
+export function createStudioOrderService(deps: {
+  db: Db;
+  artwork: ArtworkService;
+  quotes: Pick<QuoteService, 'guidanceFor'>;
+  now: () => Date;
+}) {
   const { db } = deps;
+
+  /** Where the order's design has placements stitched over each other, by the one overlap rule. */
+  async function layoutNotesOf(number: string): Promise<GuidanceMessageSummary[]> {
+    const design = await readOrderDesign(db, number);
+    const restored = design && restoreDesign(design.document);
+    if (!design || !restored?.success) return [];
+    const { garmentId, sizeId, customerId } = design;
+    const guidance = await deps.quotes.guidanceFor(
+      { garmentId, sizeId, document: restored.data },
+      { userId: customerId },
+    );
+    return guidance.layoutNotes;
+  }
   /** The shop's calendar and its today, in its own time zone: the one "today" of the board and the calendar. */
   async function shopDay() {
     const schedule = await shopCalendarOf(db);
@@ -68,6 +90,7 @@ export function createStudioOrderService(deps: { db: Db; artwork: ArtworkService
         order: { ...detail.order, delivery },
         studioActions: studioActions as OrderDetailResponse['studioActions'],
         charge: previewCharge(detail, deps.now()),
+        layoutNotes: await layoutNotesOf(number),
       });
     },
 

@@ -16,6 +16,7 @@ import {
 } from '../../engine/index.ts';
 import type { DesignDocument } from '../../contracts/designs.ts';
 import { failure, ok, type Result } from '../../contracts/result.ts';
+import { overlapNotes } from './design-overlaps.ts';
 import { figureBorder } from './figure-border.ts';
 import { figureItem } from './figure-item.ts';
 import type { PlacementFigures } from './placement-outcome.ts';
@@ -43,6 +44,8 @@ export interface DesignFigures {
   runMinutes: RunTimeEstimate;
   stabilizer: StabilizerAdvice;
   cautions: GuidanceMessage[];
+  /** Where two placements would be stitched over each other (the engine's overlap rule); guidance, not a refusal. */
+  layoutNotes: GuidanceMessage[];
 }
 
 /**
@@ -130,6 +133,7 @@ export function figureDesign(
       messages: stabilizer.messages,
     },
     cautions: cautions.messages,
+    layoutNotes: overlapNotes(catalogue, document, placements),
   });
 }
 

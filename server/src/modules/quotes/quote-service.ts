@@ -102,6 +102,7 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader; v
         colourChanges: figures.totals.colourChanges,
         colourChangesBetweenPlacements: figures.totals.colourChangesBetweenPlacements,
       },
+      layoutNotes: figures.layoutNotes,
     };
     return ok({ response, figures, catalogue: record.value });
   }
@@ -126,7 +127,21 @@ export function createQuoteService(deps: { db: Db; fonts: LetteringFontLoader; v
     return priced.ok ? priced.value.figures.cautions : [];
   }
 
-  return { preview, price, cautionsFor };
+  /**
+   * The cautions and the layout notes (overlapping placements) of a design as the catalogue states it now, priced
+   * once; both empty when the design can no longer be figured.
+   */
+  async function guidanceFor(
+    design: { garmentId: number; sizeId: number; document: DesignDocument },
+    owner?: ArtworkOwner,
+  ): Promise<{ cautions: GuidanceMessage[]; layoutNotes: GuidanceMessage[] }> {
+    const priced = await price({ ...design, quantity: 1, isRush: false }, owner);
+    return priced.ok
+      ? { cautions: priced.value.figures.cautions, layoutNotes: priced.value.figures.layoutNotes }
+      : { cautions: [], layoutNotes: [] };
+  }
+
+  return { preview, price, cautionsFor, guidanceFor };
 }
 
 export type QuoteService = ReturnType<typeof createQuoteService>;

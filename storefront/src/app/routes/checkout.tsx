@@ -5,7 +5,7 @@ import { Link, useParams } from 'react-router-dom';
 import { ApiError } from '@ui/api-client.ts';
 import { Button, ButtonLink } from '@ui/components/button.tsx';
 import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
-import { formatMoney } from '@ui/format.ts';
+import { formatMoney, formatCustomerDate } from '@ui/format.ts';
 import { signInHref } from '@ui/session/sign-in-href.ts';
 import { useCurrentUser } from '@ui/session/get-current-user.ts';
 import { useGarments } from '../../features/catalogue/api/get-garments.ts';
@@ -322,10 +322,7 @@ export function CheckoutPage() {
           </div>
           {shown.error && <ErrorNotice message={shown.error.message} />}
           {quote && (
-            <p className="text-xs text-walnut-500">
-              This price is held until{' '}
-              {new Date(quote.expiresAt).toLocaleDateString('en-US', { month: 'long', day: 'numeric' })}.
-            </p>
+            <p className="text-xs text-walnut-500">This price is held until {formatCustomerDate(quote.expiresAt)}.</p>
           )}
         </aside>
       </div>

@@ -2,7 +2,7 @@ import { lazy, Suspense } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { ApiError } from '@ui/api-client.ts';
 import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
-import { formatMoney } from '@ui/format.ts';
+import { formatMoney, formatCustomerDate } from '@ui/format.ts';
 import { useGarments } from '../../features/catalogue/api/get-garments.ts';
 import { GarmentPicture } from '../../features/catalogue/components/garment-picture.tsx';
 import { useMotifs } from '../../features/catalogue/api/get-motifs.ts';
@@ -17,6 +17,7 @@ import { OrderTimeline } from '../../features/orders/components/order-timeline.t
 import { PaymentState } from '../../features/orders/components/payment-state.tsx';
 import { ProofReview } from '../../features/orders/components/proof-review.tsx';
 import { SafetyCautions } from '../../components/safety-cautions.tsx';
+import { LayoutNotes } from '@ui/components/layout-notes.tsx';
 import { DesignSummary } from '../../features/orders/components/design-summary.tsx';
 import { CancelOrderButton } from '../../features/orders/components/cancel-order-button.tsx';
 import { SignInNeeded } from '../../components/sign-in-needed.tsx';
@@ -63,7 +64,7 @@ export function OrderPage() {
       </div>
     );
   }
-  const { order: summary, design, quote, proofs, timeline, actions, cautions } = order.data;
+  const { order: summary, design, quote, proofs, timeline, actions, cautions, layoutNotes } = order.data;
   const garment = garments.data?.find((candidate) => candidate.id === design.garmentId);
   const hasProofToAnswer = proofs.some((proof) => proof.isAnswerable);
 
@@ -80,7 +81,7 @@ export function OrderPage() {
         <p className="mt-1 text-walnut-700">
           {summary.description} · {formatMoney(summary.totalCents, summary.currency)}
           {summary.dueDate &&
-            ` · ${summary.neededBy ? 'needed by' : 'ready by about'} ${new Date(`${summary.dueDate}T12:00:00Z`).toLocaleDateString('en-US', { month: 'long', day: 'numeric', timeZone: 'UTC' })}`}
+            ` · ${summary.neededBy ? 'needed by' : 'ready by about'} ${formatCustomerDate(summary.dueDate)}`}
           {summary.isRush && ' · rush'}
         </p>
       </div>
@@ -115,6 +116,11 @@ export function OrderPage() {
             ) : (
               <ProofReview number={summary.number} proofs={proofs} currency={summary.currency} />
             )}
+            <LayoutNotes
+              notes={layoutNotes}
+              advice="If that is not what you meant, ask for a change on the proof and say which to move."
+              className="mt-4"
+            />
             <SafetyCautions
               cautions={cautions}
               heading={`Safety notes for ${design.garmentName}, size ${design.sizeLabel}`}

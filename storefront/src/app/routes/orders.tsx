@@ -1,14 +1,11 @@
 import { Link } from 'react-router-dom';
 import { ApiError } from '@ui/api-client.ts';
 import { EmptyState, ErrorNotice, Loading } from '@ui/components/page-state.tsx';
-import { formatMoney } from '@ui/format.ts';
+import { formatMoney, formatCustomerDate } from '@ui/format.ts';
 import { useOrders } from '../../features/orders/api/get-orders.ts';
 import { OrderStatusBadge } from '../../features/orders/components/order-status-badge.tsx';
 import { SignInNeeded } from '../../components/sign-in-needed.tsx';
 import { paths } from '../../config/paths.ts';
-
-const day = (iso: string) =>
-  new Date(iso).toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric' });
 
 export function OrdersPage() {
   const orders = useOrders();
@@ -43,7 +40,8 @@ export function OrdersPage() {
                   <OrderStatusBadge status={order.status} />
                 </div>
                 <p className="mt-1 text-sm text-walnut-700">
-                  {order.garmentName} · {formatMoney(order.totalCents, order.currency)} · ordered {day(order.createdAt)}
+                  {order.garmentName} · {formatMoney(order.totalCents, order.currency)} · ordered{' '}
+                  {formatCustomerDate(order.createdAt)}
                 </p>
                 {order.isWaitingOnCustomer && (
                   <p className="mt-1 text-sm font-medium text-madder-700">

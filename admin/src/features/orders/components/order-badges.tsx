@@ -1,9 +1,8 @@
+import { formatStudioDate } from '@ui/format.ts';
 import type { BoardOrder } from '@server/contracts/studio-orders.ts';
 
-const day = new Intl.DateTimeFormat('en-US', { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' });
-
 /** A due date (YYYY-MM-DD) as people read it. */
-export const formatDueDay = (isoDay: string) => day.format(new Date(`${isoDay}T12:00:00Z`));
+export const formatDueDay = (isoDay: string) => formatStudioDate(isoDay);
 
 /** "Rush" and "Overdue" flags, in words as well as colour. */
 export function DueFlags({ order }: { order: Pick<BoardOrder, 'isRush' | 'isOverdue'> }) {

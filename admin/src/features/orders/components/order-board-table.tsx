@@ -8,12 +8,11 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import type { BoardOrder, BoardSortKey, OrderBoardQuery } from '@server/contracts/studio-orders.ts';
-import { formatMoney } from '@ui/format.ts';
+import { formatMoney, formatStudioDate } from '@ui/format.ts';
 import { paths } from '../../../config/paths.ts';
 import { statusLabels } from '../../../lib/order-status-labels.ts';
 import { DueFlags, formatDueDay } from './order-badges.tsx';
 
-const placed = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
 const column = createColumnHelper<BoardOrder>();
 
 /** What the cells may ask of the board. */
@@ -37,7 +36,7 @@ const columns = [
   column.accessor('placedAt', {
     id: 'placed',
     header: 'Placed',
-    cell: (info) => (info.getValue() ? placed.format(new Date(info.getValue()!)) : 'Not paid yet'),
+    cell: (info) => (info.getValue() ? formatStudioDate(info.getValue()!) : 'Not paid yet'),
   }),
   column.accessor((order) => order.customer.name, {
     id: 'customer',

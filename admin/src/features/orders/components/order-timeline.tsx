@@ -1,14 +1,7 @@
+import { formatStudioDateTime } from '@ui/format.ts';
 import type { OrderDetailResponse } from '@server/contracts/admin-orders.ts';
 import { statusLabels } from '../../../lib/order-status-labels.ts';
 import { eventLabel } from '../../../lib/order-event-labels.ts';
-
-const when = new Intl.DateTimeFormat('en-US', {
-  month: 'short',
-  day: 'numeric',
-  hour: 'numeric',
-  minute: '2-digit',
-  timeZone: 'UTC',
-});
 
 /** The order's history, oldest first, as a line of stitches down the page. */
 export function OrderTimeline({ events }: { events: OrderDetailResponse['events'] }) {
@@ -31,7 +24,7 @@ export function OrderTimeline({ events }: { events: OrderDetailResponse['events'
           </p>
           {event.note && <p className="text-sm text-walnut-700">{event.note}</p>}
           <p className="text-xs text-walnut-500">
-            <time dateTime={event.createdAt}>{when.format(new Date(event.createdAt))} UTC</time>
+            <time dateTime={event.createdAt}>{formatStudioDateTime(event.createdAt)}</time>
           </p>
         </li>
       ))}

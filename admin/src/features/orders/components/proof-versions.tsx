@@ -1,3 +1,4 @@
+import { formatStudioDateTime } from '@ui/format.ts';
 import type { OrderDetailResponse } from '@server/contracts/admin-orders.ts';
 import { formatMoney } from '@ui/format.ts';
 
@@ -9,13 +10,6 @@ const statusWords: Record<string, string> = {
   changes_requested: 'Customer asked for changes',
   superseded: 'Replaced by a later version',
 };
-const when = new Intl.DateTimeFormat('en-US', {
-  month: 'short',
-  day: 'numeric',
-  hour: 'numeric',
-  minute: '2-digit',
-  timeZone: 'UTC',
-});
 
 /** The picture with the customer's pins drawn where they pointed, numbered to match the comments below it. */
 function PinnedPicture({ proof }: { proof: Proof }) {
@@ -54,7 +48,7 @@ export function ProofVersions({ proofs, currency }: { proofs: OrderDetailRespons
             <p className="font-medium">
               Proof {proof.version} · {proof.source === 'photo' ? 'stitch-out photo' : 'drawing'}
             </p>
-            <p className="text-xs text-walnut-500">Sent {when.format(new Date(proof.sentAt))} UTC</p>
+            <p className="text-xs text-walnut-500">Sent {formatStudioDateTime(proof.sentAt)}</p>
           </div>
           <p
             className={

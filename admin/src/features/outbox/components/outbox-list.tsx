@@ -1,13 +1,7 @@
+import { formatStudioDateTime } from '@ui/format.ts';
 import { Link } from 'react-router-dom';
 import type { OutboxEntry } from '@server/contracts/admin-outbox.ts';
 import { MailStatusBadge } from './mail-status-badge.tsx';
-
-const timeFormat = new Intl.DateTimeFormat('en-US', {
-  month: 'short',
-  day: 'numeric',
-  hour: 'numeric',
-  minute: '2-digit',
-});
 
 /** One page of messages, newest first; each subject opens the message. */
 export function OutboxList({
@@ -35,14 +29,14 @@ export function OutboxList({
           </div>
           <p className="text-sm text-walnut-500">
             To {message.toEmail}
-            {message.orderNumber ? ` · ${message.orderNumber}` : ''} · {timeFormat.format(new Date(message.createdAt))}
+            {message.orderNumber ? ` · ${message.orderNumber}` : ''} · {formatStudioDateTime(message.createdAt)}
           </p>
           {message.status === 'failed' && message.error && (
             <p className="text-sm text-madder-700">Not delivered: {message.error}</p>
           )}
           {message.status === 'retrying' && message.nextAttemptAt && (
             <p className="text-sm text-walnut-700">
-              Attempt {message.attempts} failed; trying again at {timeFormat.format(new Date(message.nextAttemptAt))}.
+              Attempt {message.attempts} failed; trying again at {formatStudioDateTime(message.nextAttemptAt)}.
             </p>
           )}
         </li>

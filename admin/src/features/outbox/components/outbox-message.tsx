@@ -1,11 +1,10 @@
+import { formatStudioDateTime } from '@ui/format.ts';
 import { useState } from 'react';
 import { ErrorNotice, Loading } from '@ui/components/page-state.tsx';
 import { Button } from '@ui/components/button.tsx';
 import { useOutboxMessage } from '../api/get-outbox-message.ts';
 import { useResendMessage } from '../api/resend-message.ts';
 import { MailStatusBadge } from './mail-status-badge.tsx';
-
-const timeFormat = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
 
 /**
  * One message as the customer got it. The HTML body is shown in a sandboxed frame (no scripts, no same-origin
@@ -29,12 +28,12 @@ export function OutboxMessage({ id }: { id: number }) {
           <MailStatusBadge status={m.status} />
           <span>To {m.toEmail}</span>
           {m.orderNumber && <span>· order {m.orderNumber}</span>}
-          <span>· {timeFormat.format(new Date(m.createdAt))}</span>
+          <span>· {formatStudioDateTime(m.createdAt)}</span>
         </div>
         {m.status === 'retrying' && (
           <p role="note" className="rounded-lg bg-saffron-100 p-2.5 text-sm text-walnut-900">
             Attempt {m.attempts} did not go through{m.error ? ` (${m.error})` : ''}.{' '}
-            {m.nextAttemptAt ? `The next try is at ${timeFormat.format(new Date(m.nextAttemptAt))}.` : ''}
+            {m.nextAttemptAt ? `The next try is at ${formatStudioDateTime(m.nextAttemptAt)}.` : ''}
           </p>
         )}
         {m.status === 'failed' && (

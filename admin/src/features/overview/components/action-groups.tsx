@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { ActionGroupKind, AdminOverviewResponse } from '@server/contracts/admin-overview.ts';
-import { formatMoney } from '@ui/format.ts';
+import { formatMoney, formatStudioDate } from '@ui/format.ts';
 import { statusLabels } from '../../../lib/order-status-labels.ts';
 
 const groupText: Record<ActionGroupKind, { title: string; empty: string }> = {
@@ -15,13 +15,7 @@ const groupText: Record<ActionGroupKind, { title: string; empty: string }> = {
   ready_to_ship: { title: 'Stitched, ready to ship', empty: 'Nothing is waiting to be packed.' },
 };
 
-const dayFormat = new Intl.DateTimeFormat('en-US', {
-  weekday: 'short',
-  month: 'short',
-  day: 'numeric',
-  timeZone: 'UTC',
-});
-const dayOf = (date: string) => dayFormat.format(new Date(`${date}T12:00:00Z`));
+const dayOf = formatStudioDate;
 
 /** What needs a hand today, one card per kind of work, each order a link to its page. */
 export function ActionGroups({

@@ -1,7 +1,7 @@
+import { formatStudioDate } from '@ui/format.ts';
 import type { RuleSetSummary } from '@server/contracts/admin-pricing.ts';
 
-const dateFormat = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', year: 'numeric' });
-const day = (iso: string | null) => (iso ? dateFormat.format(new Date(iso)) : '—');
+const day = (iso: string | null) => (iso ? formatStudioDate(iso) : '—');
 
 const statusLook: Record<RuleSetSummary['status'], { label: string; className: string }> = {
   draft: { label: 'Draft', className: 'bg-saffron-100 text-walnut-900' },

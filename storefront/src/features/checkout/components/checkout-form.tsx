@@ -1,4 +1,5 @@
 import { useEffect, useId, type ReactNode } from 'react';
+import { formatCustomerDate } from '@ui/format.ts';
 import { useForm, type FieldPath } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
@@ -29,13 +30,7 @@ interface CheckoutFormProps {
 
 const inputClass =
   'mt-1 block min-h-11 w-full rounded-lg border border-linen-300 bg-white px-3 aria-invalid:border-madder-600';
-const dayName = (date: string) =>
-  new Date(`${date}T12:00:00Z`).toLocaleDateString('en-US', {
-    weekday: 'long',
-    month: 'long',
-    day: 'numeric',
-    timeZone: 'UTC',
-  });
+const dayName = formatCustomerDate;
 
 /** The date, address and note, checked with the same contract the server uses; server messages appear in place. */
 export function CheckoutForm({

@@ -2,6 +2,7 @@ import type { ArtworkPlacement } from '@server/contracts/designs.ts';
 import { appendPlacement, hasRoomForPlacement, nextPlacementId } from '../model/designer-state.ts';
 import { artworkOf, defaultItemZone, sizeOf, zoneOf } from '../model/design-setting.ts';
 import { artworkWidthRange, clampArtworkWidth, STARTING_WIDTH_MM } from '../model/artwork-rules.ts';
+import { placeFreely } from '../model/placement-outlines.ts';
 import { centreOfZone, settleItem } from '../model/settle.ts';
 import type { EditCommand } from './command.ts';
 
@@ -12,7 +13,7 @@ export interface AddArtworkArgs {
   zone?: string;
 }
 
-/** Puts the customer's own artwork in the middle of a zone, as wide as reads well and no wider than fits. */
+/** Puts the customer's own artwork in the largest free part of a zone, as wide as reads well and no wider than fits. */
 export const addArtwork: EditCommand<AddArtworkArgs, 'add-artwork'> = {
   id: 'add-artwork',
   label: 'Put it on the garment',
@@ -31,6 +32,6 @@ export const addArtwork: EditCommand<AddArtworkArgs, 'add-artwork'> = {
       artworkUploadId: artwork.id,
       widthMm: clampArtworkWidth(artworkWidthRange(setting, artwork, zone), STARTING_WIDTH_MM),
     };
-    return appendPlacement(state, settleItem(setting, state.sizeId, placement));
+    return appendPlacement(state, settleItem(setting, state.sizeId, placeFreely(setting, state, zone, placement)));
   },
 };

@@ -2,6 +2,7 @@ import type { LetteringPlacement } from '@server/contracts/designs.ts';
 import { appendPlacement, hasRoomForPlacement, nextPlacementId } from '../model/designer-state.ts';
 import { defaultItemZone, fontOf, sizeOf, zoneOf } from '../model/design-setting.ts';
 import { checkLetteringText, clampLetterHeight } from '../model/lettering-rules.ts';
+import { placeFreely } from '../model/placement-outlines.ts';
 import { centreOfZone, settleItem } from '../model/settle.ts';
 import type { EditCommand } from './command.ts';
 
@@ -14,7 +15,7 @@ export interface AddLetteringArgs {
   zone?: string;
 }
 
-/** Adds a name (or short words) in the middle of a zone; text the contract would refuse is not added. */
+/** Adds a name (or short words) in the largest free part of a zone; text the contract would refuse is not added. */
 export const addLettering: EditCommand<AddLetteringArgs, 'add-lettering'> = {
   id: 'add-lettering',
   label: 'Add the name',
@@ -35,6 +36,6 @@ export const addLettering: EditCommand<AddLetteringArgs, 'add-lettering'> = {
       letterHeightMm: clampLetterHeight(font, args.letterHeightMm),
       thread: args.thread,
     };
-    return appendPlacement(state, settleItem(setting, state.sizeId, lettering));
+    return appendPlacement(state, settleItem(setting, state.sizeId, placeFreely(setting, state, zone, lettering)));
   },
 };

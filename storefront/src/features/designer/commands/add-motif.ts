@@ -2,6 +2,7 @@ import type { MotifPlacement } from '@server/contracts/designs.ts';
 import { appendPlacement, hasRoomForPlacement, nextPlacementId } from '../model/designer-state.ts';
 import { defaultItemZone, motifOf, sizeOf, zoneOf } from '../model/design-setting.ts';
 import { clampMotifScale } from '../model/motif-rules.ts';
+import { placeFreely } from '../model/placement-outlines.ts';
 import { centreOfZone, settleItem } from '../model/settle.ts';
 import type { EditCommand } from './command.ts';
 
@@ -12,7 +13,7 @@ export interface AddMotifArgs {
   zone?: string;
 }
 
-/** Adds a single motif in the middle of a zone, in the motif's own threads. */
+/** Adds a single motif in the largest free part of a zone, in the motif's own threads. */
 export const addMotif: EditCommand<AddMotifArgs, 'add-motif'> = {
   id: 'add-motif',
   label: 'Add this motif',
@@ -32,6 +33,6 @@ export const addMotif: EditCommand<AddMotifArgs, 'add-motif'> = {
       scalePct: clampMotifScale(motif, args.scalePct, setting.hoops),
       threads: motif.threadCodes,
     };
-    return appendPlacement(state, settleItem(setting, state.sizeId, placement));
+    return appendPlacement(state, settleItem(setting, state.sizeId, placeFreely(setting, state, zone, placement)));
   },
 };

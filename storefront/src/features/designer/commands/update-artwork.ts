@@ -1,7 +1,8 @@
 import { findPlacement } from '../model/designer-state.ts';
 import { artworkOf, sizeOf, zoneOf } from '../model/design-setting.ts';
 import { artworkWidthRange, clampArtworkWidth } from '../model/artwork-rules.ts';
-import { centreOfZone, withSettled } from '../model/settle.ts';
+import { placeFreely } from '../model/placement-outlines.ts';
+import { withSettled } from '../model/settle.ts';
 import type { EditCommand } from './command.ts';
 
 export interface UpdateArtworkArgs {
@@ -30,10 +31,7 @@ export const updateArtwork: EditCommand<UpdateArtworkArgs, 'update-artwork'> = {
     );
     const widthMm = clampArtworkWidth(range, args.widthMm ?? placement.widthMm);
     if (!zone && widthMm === placement.widthMm) return state;
-    return withSettled(setting, state, {
-      ...placement,
-      widthMm,
-      ...(zone ? { zone: zone.code, ...centreOfZone(zone) } : {}),
-    });
+    const next = { ...placement, widthMm };
+    return withSettled(setting, state, zone ? placeFreely(setting, state, zone, next) : next);
   },
 };

@@ -1,7 +1,8 @@
 import { findPlacement } from '../model/designer-state.ts';
 import { fontOf, sizeOf, zoneOf } from '../model/design-setting.ts';
 import { checkLetteringText, clampLetterHeight } from '../model/lettering-rules.ts';
-import { centreOfZone, withSettled } from '../model/settle.ts';
+import { placeFreely } from '../model/placement-outlines.ts';
+import { withSettled } from '../model/settle.ts';
 import type { EditCommand } from './command.ts';
 
 export interface UpdateLetteringArgs {
@@ -34,7 +35,6 @@ export const updateLettering: EditCommand<UpdateLetteringArgs, 'update-lettering
         : zoneOf(sizeOf(setting, state.sizeId), args.zone);
     const next = {
       ...lettering,
-      ...(zone ? { zone: zone.code, ...centreOfZone(zone) } : {}),
       text: args.text ?? lettering.text,
       font: font.slug,
       letterHeightMm: clampLetterHeight(font, args.letterHeightMm ?? lettering.letterHeightMm),
@@ -44,6 +44,7 @@ export const updateLettering: EditCommand<UpdateLetteringArgs, 'update-lettering
       next.text === lettering.text &&
       next.font === lettering.font &&
       next.letterHeightMm === lettering.letterHeightMm;
-    return isUnchanged ? state : withSettled(setting, state, next);
+    if (isUnchanged) return state;
+    return withSettled(setting, state, zone ? placeFreely(setting, state, zone, next) : next);
   },
 };

@@ -1,7 +1,8 @@
 import { findPlacement } from '../model/designer-state.ts';
 import { motifOf, sizeOf, zoneOf } from '../model/design-setting.ts';
 import { clampMotifScale } from '../model/motif-rules.ts';
-import { centreOfZone, withSettled } from '../model/settle.ts';
+import { placeFreely } from '../model/placement-outlines.ts';
+import { withSettled } from '../model/settle.ts';
 import type { EditCommand } from './command.ts';
 
 export interface UpdateMotifArgs {
@@ -30,10 +31,7 @@ export const updateMotif: EditCommand<UpdateMotifArgs, 'update-motif'> = {
         ? undefined
         : zoneOf(sizeOf(setting, state.sizeId), args.zone);
     if (!zone && scalePct === placement.scalePct) return state;
-    return withSettled(setting, state, {
-      ...placement,
-      scalePct,
-      ...(zone ? { zone: zone.code, ...centreOfZone(zone) } : {}),
-    });
+    const next = { ...placement, scalePct };
+    return withSettled(setting, state, zone ? placeFreely(setting, state, zone, next) : next);
   },
 };

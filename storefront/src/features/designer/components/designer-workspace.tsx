@@ -7,6 +7,8 @@ import { mockupSizeMm, sizeOf, type DesignSetting } from '../model/design-settin
 import type { Designer } from '../hooks/use-designer.ts';
 import { useDesignDraft } from '../hooks/use-design-draft.ts';
 import { describeScene } from '../render/describe-scene.ts';
+import { designOverlaps } from '../model/placement-outlines.ts';
+import { OverlapWarning } from './overlap-warning.tsx';
 import { AddPanels } from './add-panels.tsx';
 import { DesignCanvas } from './design-canvas.tsx';
 import { DesignerToolbar } from './designer-toolbar.tsx';
@@ -59,6 +61,7 @@ export function DesignerWorkspace({
     () => describeScene({ document, sizeId }, setting, threads),
     [document, sizeId, setting, threads],
   );
+  const overlaps = useMemo(() => designOverlaps(setting, { document, sizeId }), [document, sizeId, setting]);
   const scene = useMemo(
     () => ({
       drawables,
@@ -87,6 +90,7 @@ export function DesignerWorkspace({
             dispatch={dispatch}
             label={`The ${garment.name.toLowerCase()} in size ${size.label}, with your design`}
           />
+          <OverlapWarning setting={setting} placements={document.placements} overlaps={overlaps} />
           {/* On a phone the full price is far below the garment, so its total rides along here. */}
           <div className="lg:hidden">{priceTotal}</div>
           <p id="canvas-help" className="text-sm text-walnut-500">
@@ -97,7 +101,7 @@ export function DesignerWorkspace({
         </div>
         <div className="min-w-0 space-y-6">
           {garmentOptions}
-          <PlacementList setting={setting} state={state} threads={threads} dispatch={dispatch} />
+          <PlacementList setting={setting} state={state} threads={threads} dispatch={dispatch} overlaps={overlaps} />
           <AddPanels
             setting={setting}
             state={state}

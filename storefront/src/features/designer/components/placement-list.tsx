@@ -1,4 +1,5 @@
 import type { ThreadColourSummary } from '@server/contracts/catalogue.ts';
+import type { PlacementOverlap } from '@server/engine/placement-overlap.ts';
 import type { DesignPlacement } from '@server/contracts/designs.ts';
 import { EmptyState } from '@ui/components/page-state.tsx';
 import { commandOf, type Dispatch } from '../commands/command-registry.ts';
@@ -12,6 +13,7 @@ import { MotifEditor } from './motif-editor.tsx';
 import { ArtworkEditor } from './artwork-editor.tsx';
 import { RotationField } from './rotation-field.tsx';
 import { NudgePad } from './nudge-pad.tsx';
+import { PlacementOverlapNote } from './overlap-warning.tsx';
 
 interface ListProps {
   setting: DesignSetting;
@@ -31,7 +33,7 @@ function Editor({ placement, ...props }: ListProps & { placement: DesignPlacemen
  * Everything on the garment, each with its own buttons, so the whole design can be made without the canvas or a
  * mouse: open one to move it step by step or to its centre line, resize or turn it, choose its threads, or remove it.
  */
-export function PlacementList(props: ListProps) {
+export function PlacementList({ overlaps = [], ...props }: ListProps & { overlaps?: readonly PlacementOverlap[] }) {
   const { setting, state, dispatch } = props;
   const { placements } = state.document;
   return (
@@ -72,6 +74,7 @@ export function PlacementList(props: ListProps) {
                     {commandOf('remove-placement').label}
                   </button>
                 </div>
+                <PlacementOverlapNote setting={setting} placements={placements} id={placement.id} overlaps={overlaps} />
                 {isOpen && (
                   <div className="space-y-4 border-t border-linen-200 p-4">
                     <NudgePad

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { formatCustomerDate } from '@ui/format.ts';
 import { Link } from 'react-router-dom';
 import type { GarmentSummary } from '@server/contracts/catalogue.ts';
 import type { SavedDesign } from '@server/contracts/saved-designs.ts';
@@ -10,8 +11,7 @@ import { RenameDesignForm } from './rename-design-form.tsx';
 import { ShareDesignPanel } from './share-design-panel.tsx';
 import { DeleteDesignButton } from './delete-design-button.tsx';
 
-const changedOn = (iso: string) =>
-  new Date(iso).toLocaleDateString('en-US', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+const changedOn = formatCustomerDate;
 
 /**
  * One saved design: its picture on the garment, what it is, and everything the customer can do with it. Rename and

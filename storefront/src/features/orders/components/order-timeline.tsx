@@ -1,6 +1,7 @@
+import { formatCustomerDateTime } from '@ui/format.ts';
 import type { CustomerOrderResponse } from '@server/contracts/orders.ts';
 
-const when = (iso: string) => new Date(iso).toLocaleString('en-US', { dateStyle: 'medium', timeStyle: 'short' });
+const when = formatCustomerDateTime;
 
 /** Everything that happened to the order, newest last, in the server's words. */
 export function OrderTimeline({ timeline }: { timeline: CustomerOrderResponse['timeline'] }) {

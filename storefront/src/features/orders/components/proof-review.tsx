@@ -1,3 +1,4 @@
+import { formatCustomerDate } from '@ui/format.ts';
 import { useState } from 'react';
 import type { CustomerProof } from '@server/contracts/orders.ts';
 import { ProofAnswerForm } from './proof-answer-form.tsx';
@@ -11,7 +12,7 @@ const statusWords: Record<CustomerProof['status'], string> = {
   superseded: 'Replaced by a newer version',
 };
 
-const day = (iso: string) => new Date(iso).toLocaleDateString('en-US', { month: 'long', day: 'numeric' });
+const day = formatCustomerDate;
 
 /** Every proof the studio sent, newest first to look at; the latest unanswered one takes an answer. */
 export function ProofReview({

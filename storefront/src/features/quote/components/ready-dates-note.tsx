@@ -1,12 +1,7 @@
+import { formatCustomerDate } from '@ui/format.ts';
 import { useReadyDates } from '../api/get-ready-dates.ts';
 
-const shortDay = (date: string) =>
-  new Date(`${date}T12:00:00Z`).toLocaleDateString('en-US', {
-    weekday: 'short',
-    month: 'short',
-    day: 'numeric',
-    timeZone: 'UTC',
-  });
+const shortDay = formatCustomerDate;
 
 /** When an order placed today could be ready, from the studio's lead time; nothing shows until the server answers. */
 export function ReadyDatesNote({ isRush }: { isRush: boolean }) {
