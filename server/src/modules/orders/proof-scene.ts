@@ -8,11 +8,7 @@ import { loadProofScene, type ProofScene, type SceneArtwork } from './proof-scen
  * photo) taken from the artwork module's clean copies (the studio's changed version of the design when given), as every picture of a design takes them. Uploads are the
  * order's customer's: anyone else's id in the design draws nothing.
  */
-export async function proofSceneFor(
-  db: Db,
-  orderId: number,
-  design?: DesignDocument,
-): Promise<ProofScene | undefined> {
+export async function proofSceneFor(db: Db, orderId: number, design?: DesignDocument): Promise<ProofScene | undefined> {
   const loaded = await loadProofScene(db, orderId, design);
   if (!loaded) return undefined;
   const pictures = await artworkPicturesFor(db, { userId: loaded.customerId }, loaded.uploadIds);
