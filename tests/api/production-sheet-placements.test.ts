@@ -185,21 +185,11 @@ describe('the production sheet, per placement other than the border', () => {
 
   it('when the studio has entered a stitch file for a placement, then the sheet names it; otherwise it says nothing', async () => {
     expect(placementOf(sheet, 'lamb').stitchFileName).toBeUndefined();
-    // The studio's proof work keeps these rows; made here only where that table is not there yet.
-    if (!(await harness.db.schema.hasTable('placement_stitch_files')))
-      await harness.db.schema.createTable('placement_stitch_files', (t) => {
-        t.increments('id');
-        t.integer('order_id').unsigned().notNullable();
-        t.string('placement_id', 40).notNullable();
-        t.integer('stitch_count').unsigned().nullable();
-        t.integer('colour_count').unsigned().nullable();
-        t.string('file_name', 255).nullable();
-        t.integer('entered_by').unsigned().nullable();
-        t.timestamps(true, true);
-      });
     const order = await harness.db('orders').where({ number: ORDER }).first('id');
+    const staff = await harness.db('users').where({ role: 'staff' }).first('id');
     await harness.db('placement_stitch_files').insert({
       order_id: order.id,
+      entered_by: staff.id,
       placement_id: 'lamb',
       stitch_count: 2704,
       colour_count: 3,

@@ -2,6 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { orderDetailResponse } from '../../server/src/contracts/admin-orders.ts';
 import { customerOrderResponse } from '../../server/src/contracts/orders.ts';
 import { adminOverviewResponse } from '../../server/src/contracts/admin-overview.ts';
+import { productionSheetResponse } from '../../server/src/contracts/production-sheet.ts';
 import { orderDesignResponse, repricedOrder, stitchFileResponse } from '../../server/src/contracts/proof-versions.ts';
 import type { DesignDocument } from '../../server/src/contracts/designs.ts';
 import { useApiHarness, type ApiAgent } from '../support/api-harness.ts';
@@ -216,6 +217,17 @@ describe('proof 2: the studio’s change, its price, and the customer’s approv
     expect(mine.timeline.map((entry) => entry.title)).toContain(
       `The order now comes to $${(proof2.price!.totalCents / 100).toFixed(2)}, as proof 2 showed`,
     );
+  });
+
+  it('when the studio prints the production sheet, then it makes the design as proof 2 had it, not as ordered', async () => {
+    const mine = customerOrderResponse.parse((await harriet.get('/api/orders/WB-1009').expect(200)).body);
+    const sheet = productionSheetResponse.parse(
+      (await staff.get('/api/admin/orders/WB-1009/production-sheet').expect(200)).body,
+    );
+    expect(sheet.placements.map((placement) => placement.id)).toEqual(
+      mine.design.document.placements.map((placement) => placement.id),
+    );
+    expect(sheet.placements.map((placement) => placement.id)).toContain('lily');
   });
 
   it('when the studio reads the history, then each version keeps its price and what changed, and the design can no longer be re-priced', async () => {

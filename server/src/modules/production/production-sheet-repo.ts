@@ -1,4 +1,5 @@
 import type { Db } from '../../db/knex.ts';
+import { jsonColumn } from '../../db/json-column.ts';
 import type { OrderStatus } from '../../contracts/order-status.ts';
 import { mockupSizeMm } from '../../engine/garment-mockup-size.ts';
 
@@ -77,7 +78,7 @@ export async function readOrderToMake(db: Db, number: string): Promise<OrderToMa
   if (!row) return undefined;
   const approved = await db('proofs as p')
     .join('orders as o', 'o.id', 'p.order_id')
-    .select('p.version', 'p.customer_comment', 'p.comment_pins')
+    .select('p.version', 'p.customer_comment', 'p.comment_pins', 'p.design_document')
     .where({ 'o.number': number, 'p.status': 'approved' })
     .orderBy('p.version', 'desc')
     .first();
@@ -111,7 +112,8 @@ export async function readOrderToMake(db: Db, number: string): Promise<OrderToMa
     colourHex: row.colour_hex,
     mockupWidthMm: mockupSizeMm(row.mockup_svg, row.garment_slug).widthMm * scale,
     landmarks: landmarks.map((landmark) => ({ label: landmark.label, yMm: landmark.yMm * scale })),
-    document: row.document,
+    // The design the customer approved: the studio may have changed it for a later proof (null on older proofs).
+    document: jsonColumn(approved?.design_document ?? null) ?? row.document,
   };
 }
 
