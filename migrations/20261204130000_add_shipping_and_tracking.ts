@@ -59,6 +59,8 @@ export async function down(knex: Knex): Promise<void> {
   await knex.schema.alterTable('orders', (t) => {
     t.dropChecks(['orders_total_sums', 'orders_shipping_cents_non_negative']);
   });
+  // Without a shipping column the money shipping took is part of the subtotal, so every total still adds up.
+  await knex('orders').update({ subtotal_cents: knex.raw('subtotal_cents + shipping_cents') });
   await knex.schema.alterTable('orders', (t) => {
     t.dropColumns('shipping_cents', 'shipping_method', 'shipping_carrier', 'tracking_number');
     t.check('`subtotal_cents` + `tax_cents` = `total_cents`', [], 'orders_total_sums');
@@ -66,6 +68,7 @@ export async function down(knex: Knex): Promise<void> {
   await knex.schema.alterTable('quotes', (t) => {
     t.dropChecks(['quotes_total_sums', 'quotes_shipping_cents_non_negative']);
   });
+  await knex('quotes').update({ subtotal_cents: knex.raw('subtotal_cents + shipping_cents') });
   await knex.schema.alterTable('quotes', (t) => {
     t.dropColumns('shipping_cents', 'shipping_method');
     t.check('`subtotal_cents` + `tax_cents` = `total_cents`', [], 'quotes_total_sums');

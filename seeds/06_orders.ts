@@ -90,10 +90,13 @@ export async function seed(knex: Knex): Promise<void> {
   await knex('proofs').insert(rows.proofs);
   await knex('payments').insert(rows.payments);
   await knex('email_log').insert(rows.emails);
-  // Each customer's address, as their orders were sent there: offered again at their next checkout.
-  const now = new Date();
+  // Each customer's address, as their orders were sent there: offered again at their next checkout, last used
+  // when their latest order was placed (so a second seeding writes the same rows).
   for (const customer of new Set(customersWithOrders)) {
-    await rememberAddress(knex, userIds[customer], shipToByCustomer[customer], now);
+    const placedTimes = (rows.orders as { customer_id: number; created_at: Date | string }[])
+      .filter((row) => row.customer_id === userIds[customer])
+      .map((row) => new Date(row.created_at).getTime());
+    await rememberAddress(knex, userIds[customer], shipToByCustomer[customer], new Date(Math.max(...placedTimes)));
   }
   // The demo's orders carry their own numbers; the shop's next order continues after the highest.
   await knex.raw('ALTER SEQUENCE order_numbers RESTART WITH ?', [

@@ -11,7 +11,8 @@ import type { ShopSettings } from '../../server/src/contracts/admin-settings.ts'
 import { daisyDressQuote } from '../support/sample-designs.ts';
 import { startAnotherApp, useApiHarness, type ApiAgent } from '../support/api-harness.ts';
 
-const harness = useApiHarness();
+// The shop's default re-check window, as a server runs it.
+const harness = useApiHarness({ env: { CATALOGUE_RECHECK_MS: '500' } });
 
 /** A second server over the same database, with its own pool, sessions and in-memory catalogue. */
 let other: { app: Express; close(): Promise<void> };

@@ -62,6 +62,9 @@ export async function startApiHarness(options: HarnessOptions = {}): Promise<Api
     ...stack.env,
     GOOGLE_OAUTH_BASE_URL: google.url,
     STATIC_DIR: '/nonexistent',
+    // Tests change the catalogue straight in the database and expect the next request to see it; the re-check
+    // window of a real server (500 ms) is tested on its own in catalogue-snapshot.test.ts.
+    CATALOGUE_RECHECK_MS: '0',
     ...options.env,
   });
   const db = openDatabase(config.database);
