@@ -59,7 +59,7 @@ export function orderPlacedMail(
 export function proofApprovedMail(context: MailContext, to: string, version: number): LoggedMail {
   return compose(context, to, 'proof_approved', `You approved the proof for ${context.number}`, [
     `Thank you for approving version ${version} of your proof for ${context.number}.`,
-    'We now charge the amount held on your card and start stitching. We will e-mail you when it ships.',
+    'We now charge your card the order’s total and start stitching. We will e-mail you when it ships.',
   ]);
 }
 

@@ -20,7 +20,11 @@ function titleOf(event: StoredOrderEvent, currency: string): string | undefined 
     case 'safety_notes_read':
       return 'You read the safety notes for this garment';
     case 'payment_authorized':
+      // Orders due after a hold would lapse keep the card instead of holding an amount on it.
+      if (typeof p.setupIntentId === 'string') return 'Your card was saved for this order (nothing charged yet)';
       return amount ? `${amount} held on your card (not charged yet)` : 'Payment held on your card (not charged yet)';
+    case 'card_saved':
+      return 'Your new card was saved for this order (nothing charged yet)';
     case 'payment_failed':
       return 'The payment did not go through';
     case 'payment_voided':

@@ -11,8 +11,8 @@ interface Step {
 
 const steps: Step[] = [
   {
-    label: 'Card held',
-    hint: 'Nothing is charged yet',
+    label: 'Card given',
+    hint: 'Held or saved, nothing charged yet',
     doneIn: ['authorized', 'proof_sent', 'changes_requested', 'proof_approved', 'in_production', 'stitched', 'shipped'],
     currentIn: ['awaiting_payment'],
   },

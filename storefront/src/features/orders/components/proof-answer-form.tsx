@@ -169,7 +169,7 @@ export function ProofAnswerForm({
         </Button>
       </div>
       <p className="text-xs text-walnut-500">
-        Approving lets us charge the amount held on your card and start stitching exactly what the proof shows.
+        Approving lets us charge your card the order’s total and start stitching exactly what the proof shows.
       </p>
     </div>
   );
