@@ -61,7 +61,7 @@ describe('GET /api/orders/:number', () => {
     });
     const titles = order.timeline.map((entry) => entry.title);
     expect(titles[0]).toBe('You placed the order');
-    expect(titles).toContain('On its way (Parcel post SEEDPOST0002)');
+    expect(titles).toContain('Posted (Parcel post SEEDPOST0002)');
     // The studio's own note about the late parcel stays in the studio; the refund's reason is the customer's to read.
     expect(order.timeline.some((entry) => entry.type === 'note_added')).toBe(false);
     expect(order.timeline.find((entry) => entry.type === 'refunded')).toMatchObject({

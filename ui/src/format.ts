@@ -1,3 +1,4 @@
+import { customerDateStyle, studioDateStyle } from '@server/engine/date-style.ts';
 import { toInchFraction } from '@server/engine/inch-fraction.ts';
 
 /** Formats integer minor units with the currency's own decimals (USD 1234 → $12.34, JPY 500 → ¥500). */
@@ -17,29 +18,11 @@ export function formatLength(mm: number): string {
   return `${Math.round(mm)} mm · ${whole || !fraction ? whole : ''}${fraction} in`;
 }
 
-const CALENDAR_DATE = /^\d{4}-\d{2}-\d{2}$/;
-const clock = new Intl.DateTimeFormat('en-US', { hour: 'numeric', minute: '2-digit' });
-
-/**
- * One audience's date style: a calendar date ("2026-12-18": a due or needed-by date) is that day wherever the
- * reader is; a moment (an ISO timestamp) is the day it was where the reader is; `withTime` adds the clock.
- */
-function dateStyle(options: Intl.DateTimeFormatOptions) {
-  const moment = new Intl.DateTimeFormat('en-US', options);
-  const calendarDay = new Intl.DateTimeFormat('en-US', { ...options, timeZone: 'UTC' });
-  const date = (value: string) =>
-    CALENDAR_DATE.test(value) ? calendarDay.format(new Date(`${value}T12:00:00Z`)) : moment.format(new Date(value));
-  return { date, withTime: (iso: string) => `${date(iso)}, ${clock.format(new Date(iso))}` };
-}
-
-const customerStyle = dateStyle({ month: 'long', day: 'numeric', year: 'numeric' });
-const studioStyle = dateStyle({ weekday: 'short', month: 'short', day: 'numeric', year: 'numeric' });
-
 /** The one date style customers see, on the storefront: "December 18, 2026". */
-export const formatCustomerDate = customerStyle.date;
+export const formatCustomerDate = customerDateStyle.date;
 /** A moment for customers, in the same style with the time: "December 3, 2026, 3:05 PM". */
-export const formatCustomerDateTime = customerStyle.withTime;
+export const formatCustomerDateTime = customerDateStyle.withTime;
 /** The one date style of the studio app, weekday first as the studio plans by it: "Fri, Dec 18, 2026". */
-export const formatStudioDate = studioStyle.date;
+export const formatStudioDate = studioDateStyle.date;
 /** A moment for the studio, in the same style with the time: "Thu, Dec 3, 2026, 3:05 PM". */
-export const formatStudioDateTime = studioStyle.withTime;
+export const formatStudioDateTime = studioDateStyle.withTime;

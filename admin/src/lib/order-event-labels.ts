@@ -1,3 +1,5 @@
+import { shippedWords } from '@server/contracts/order-status.ts';
+
 /** Plain words for what happened to an order; unknown kinds of event fall back to their own name. */
 const eventLabels: Record<string, string> = {
   order_created: 'Order placed',
@@ -9,7 +11,7 @@ const eventLabels: Record<string, string> = {
   payment_captured: 'Card charged',
   note_added: 'Note',
   stitched: 'Stitched',
-  shipped: 'Shipped',
+  shipped: shippedWords.either,
   refunded: 'Refunded',
   cancelled: 'Cancelled',
   authorization_lapsed: 'Card hold ran out (customer asked to pay again)',

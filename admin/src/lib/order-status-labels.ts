@@ -1,3 +1,4 @@
+import { shippedWords } from '@server/contracts/order-status.ts';
 import type { OrderStatus } from '@server/contracts/admin-overview.ts';
 
 /** Plain names for the order statuses, in the order work flows through the studio. */
@@ -9,7 +10,7 @@ export const statusLabels: Record<OrderStatus, string> = {
   proof_approved: 'Ready to charge',
   in_production: 'On the machine',
   stitched: 'Ready to ship',
-  shipped: 'Sent',
+  shipped: shippedWords.either,
   cancelled: 'Cancelled',
   refunded: 'Refunded',
 };

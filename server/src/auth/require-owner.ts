@@ -1,5 +1,6 @@
 import type { RequestHandler } from 'express';
 import { HttpError } from '../middleware/http-error.ts';
+import { roleWords } from '../contracts/users.ts';
 import { currentUserOf } from './roles.ts';
 
 /**
@@ -10,7 +11,8 @@ export function requireOwner(action: string): RequestHandler {
   return (req, _res, next) => {
     const user = currentUserOf(req);
     if (!user) throw new HttpError('unauthenticated', 'Please sign in to continue.');
-    if (user.role !== 'owner') throw new HttpError('forbidden', `Only the studio owner can ${action}.`);
+    if (user.role !== 'owner')
+      throw new HttpError('forbidden', `Only the ${roleWords.owner.toLowerCase()} can ${action}.`);
     next();
   };
 }

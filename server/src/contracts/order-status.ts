@@ -54,5 +54,11 @@ export const approvedOrderStatuses = [
   'shipped',
 ] as const satisfies readonly OrderStatus[];
 
+/**
+ * The one word for a shipped order on both sides and in the e-mails: a delivery order is posted, a pick-up order
+ * collected; where the method does not matter (the status on the board, its filter, a badge) both are named.
+ */
+export const shippedWords = { delivery: 'Posted', pickup: 'Collected', either: 'Posted or collected' } as const;
+
 /** Whether a status is in one of the groups above. */
 export const isIn = (group: readonly OrderStatus[], status: OrderStatus): boolean => group.includes(status);

@@ -4,6 +4,9 @@ export const roles = ['customer', 'staff', 'owner'] as const;
 export const role = z.enum(roles);
 export type Role = z.infer<typeof role>;
 
+/** The one name of each role wherever people read it: both apps, e-mails and refusals ("Only the studio owner can …"). */
+export const roleWords: Record<Role, string> = { customer: 'Customer', staff: 'Studio team', owner: 'Studio owner' };
+
 export const currentUser = z.object({
   id: z.number().int(),
   email: z.string(),

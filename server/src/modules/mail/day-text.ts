@@ -1,10 +1,7 @@
-/** A calendar day (YYYY-MM-DD) as a person reads it in messages and e-mails: Tuesday, December 15. */
-export function formatDayText(day: string): string {
-  // Noon UTC of the day, shown in UTC: the calendar day itself, whatever zone the server runs in.
-  return new Date(`${day}T12:00:00Z`).toLocaleDateString('en-US', {
-    weekday: 'long',
-    month: 'long',
-    day: 'numeric',
-    timeZone: 'UTC',
-  });
-}
+import { customerDateStyle, studioDateStyle } from '../../engine/date-style.ts';
+
+/** A date in a customer's e-mail, in the storefront's style: "December 18, 2026". */
+export const formatCustomerMailDate = (day: string): string => customerDateStyle.date(day);
+
+/** A date in an e-mail or message to the studio, in the studio app's style: "Fri, Dec 18, 2026". */
+export const formatStudioMailDate = (day: string): string => studioDateStyle.date(day);

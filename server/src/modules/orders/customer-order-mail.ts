@@ -4,7 +4,7 @@
  */
 import { mailBodies, orderPageUrl, studioOrderPageUrl } from '../mail/mail-layout.ts';
 import type { LoggedMail } from '../mail/order-mail.ts';
-import { formatDayText } from '../mail/day-text.ts';
+import { formatCustomerMailDate } from '../mail/day-text.ts';
 
 interface MailContext {
   appOrigin: string;
@@ -43,8 +43,8 @@ export function orderPlacedMail(
 ): LoggedMail {
   const when = due
     ? due.isAskedFor
-      ? [`We have noted that you need it by ${formatDayText(due.date)}.`]
-      : [`We aim to have it ready by ${formatDayText(due.date)}.`]
+      ? [`We have noted that you need it by ${formatCustomerMailDate(due.date)}.`]
+      : [`We aim to have it ready by ${formatCustomerMailDate(due.date)}.`]
     : [];
   return compose(context, to, 'order_placed', `We have your order ${context.number}`, [
     `Thank you! Your order ${context.number} is in.`,

@@ -2,6 +2,7 @@
  * The order's history as the customer reads it: plain words for each event, the studio's internal notes left
  * out. Amounts come from the event's payload.
  */
+import { shippedWords } from '../../contracts/order-status.ts';
 import { formatMoneyText } from '../mail/money-text.ts';
 import type { StoredOrderEvent } from './customer-order-repo.ts';
 
@@ -43,8 +44,8 @@ function titleOf(event: StoredOrderEvent, currency: string): string | undefined 
       return 'Stitched and checked';
     case 'shipped':
       return typeof p.trackingNumber === 'string'
-        ? `On its way (${p.carrier ?? 'tracking'} ${p.trackingNumber})`
-        : 'On its way';
+        ? `${shippedWords.delivery} (${p.carrier ?? 'tracking'} ${p.trackingNumber})`
+        : shippedWords.either;
     case 'cancelled':
       return 'Order cancelled';
     case 'refunded':

@@ -2,6 +2,7 @@
  * The messages the studio's actions send a customer: plain words, the order number, and a link to the order's page
  * on the storefront, where the proof, the payment and the parcel's progress are shown.
  */
+import { shippedWords } from '../../contracts/order-status.ts';
 import { mailBodies, orderPageUrl } from '../mail/mail-layout.ts';
 import { formatMoneyText } from '../mail/money-text.ts';
 import type { LoggedMail } from '../mail/order-mail.ts';
@@ -91,7 +92,7 @@ export function orderShippedMail(
 ): LoggedMail {
   const page = `Your order page: ${orderPageUrl(appOrigin, order.number)}`;
   if (shipment.method === 'pickup') {
-    return compose(order, 'order_shipped', `${order.number} has been collected`, [
+    return compose(order, 'order_shipped', `${order.number} has been ${shippedWords.pickup.toLowerCase()}`, [
       'Your embroidered order has been handed over at the studio. Thank you!',
       page,
     ]);
@@ -101,8 +102,8 @@ export function orderShippedMail(
     : shipment.carrier
       ? `It is with ${shipment.carrier}, without a tracking number; it usually arrives within a week.`
       : 'The parcel has no tracking number; it usually arrives within a week.';
-  return compose(order, 'order_shipped', `${order.number} is on its way`, [
-    'Your embroidered order has been packed and posted.',
+  return compose(order, 'order_shipped', `${order.number} has been ${shippedWords.delivery.toLowerCase()}`, [
+    `Your embroidered order has been packed and ${shippedWords.delivery.toLowerCase()}.`,
     tracking,
     page,
   ]);

@@ -1,3 +1,4 @@
+import { shippedWords } from '@server/contracts/order-status.ts';
 import { useState, type ReactNode } from 'react';
 import type { OrderDetailResponse } from '@server/contracts/admin-orders.ts';
 import { Button } from '@ui/components/button.tsx';
@@ -86,7 +87,7 @@ export function OrderActions({ detail }: { detail: OrderDetailResponse }) {
             Mark stitched
           </Button>
         )}
-        {can('ship') && <Button onClick={() => open('ship')}>Mark shipped</Button>}
+        {can('ship') && <Button onClick={() => open('ship')}>Mark {shippedWords.either.toLowerCase()}</Button>}
         {can('refund') && refundableCents > 0 && (
           <Button tone="quiet" onClick={() => open('refund')}>
             Refund…

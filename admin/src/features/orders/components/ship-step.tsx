@@ -1,3 +1,4 @@
+import { shippedWords } from '@server/contracts/order-status.ts';
 import { useId } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
@@ -62,7 +63,7 @@ export function ShipStep({
       )}
       <div className="flex flex-wrap gap-2">
         <Button type="submit" disabled={isBusy}>
-          {isPickup ? 'Collected: tell the customer' : 'Posted: tell the customer'}
+          {`${isPickup ? shippedWords.pickup : shippedWords.delivery}: tell the customer`}
         </Button>
         <Button tone="quiet" onClick={onBack}>
           Not now

@@ -1,10 +1,9 @@
 import { formatStudioDate } from '@ui/format.ts';
 import type { StudioPerson } from '@server/contracts/admin-users.ts';
+import { roleWords } from '@server/contracts/users.ts';
 import { Button } from '@ui/components/button.tsx';
 import { ErrorNotice } from '@ui/components/page-state.tsx';
 import { useSetRole } from '../api/set-role.ts';
-
-const roleLabel = { owner: 'Owner', staff: 'Studio team', customer: 'Customer' } as const;
 
 /** Everyone with an account; the owner grants or removes the studio-team role with one button per person. */
 export function PeopleTable({ people, myId }: { people: StudioPerson[]; myId: number }) {
@@ -38,7 +37,7 @@ export function PeopleTable({ people, myId }: { people: StudioPerson[]; myId: nu
                   <span className="font-semibold">{person.name}</span>
                   <span className="block text-walnut-500">{person.email}</span>
                 </th>
-                <td className="py-2">{roleLabel[person.role]}</td>
+                <td className="py-2">{roleWords[person.role]}</td>
                 <td className="py-2">{formatStudioDate(person.joinedAt)}</td>
                 <td className="py-2 text-right">
                   {person.id === myId ? (

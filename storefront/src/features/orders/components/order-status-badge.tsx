@@ -1,4 +1,4 @@
-import type { OrderStatus } from '@server/contracts/order-status.ts';
+import { shippedWords, type OrderStatus } from '@server/contracts/order-status.ts';
 
 /** Each status as the customer reads it, with the badge colours. */
 export const orderStatusWords: Record<OrderStatus, { label: string; tone: string }> = {
@@ -9,7 +9,7 @@ export const orderStatusWords: Record<OrderStatus, { label: string; tone: string
   proof_approved: { label: 'Approved, about to start', tone: 'bg-sage-50 text-sage-700' },
   in_production: { label: 'Being stitched', tone: 'bg-sage-50 text-sage-700' },
   stitched: { label: 'Stitched, packing', tone: 'bg-sage-50 text-sage-700' },
-  shipped: { label: 'Shipped', tone: 'bg-linen-200 text-walnut-900' },
+  shipped: { label: shippedWords.either, tone: 'bg-linen-200 text-walnut-900' },
   cancelled: { label: 'Cancelled', tone: 'bg-linen-200 text-walnut-700' },
   refunded: { label: 'Refunded', tone: 'bg-linen-200 text-walnut-700' },
 };

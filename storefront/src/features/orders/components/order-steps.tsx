@@ -1,4 +1,4 @@
-import type { OrderStatus } from '@server/contracts/order-status.ts';
+import { shippedWords, type OrderStatus } from '@server/contracts/order-status.ts';
 
 interface Step {
   label: string;
@@ -34,7 +34,12 @@ const steps: Step[] = [
     doneIn: ['stitched', 'shipped'],
     currentIn: ['proof_approved', 'in_production'],
   },
-  { label: 'On its way', hint: 'Packed and posted', doneIn: ['shipped'], currentIn: ['stitched'] },
+  {
+    label: shippedWords.either,
+    hint: 'Packed and posted, or handed over at the studio',
+    doneIn: ['shipped'],
+    currentIn: ['stitched'],
+  },
 ];
 
 /**
