@@ -50,7 +50,7 @@ test('when a parent uploads a child’s drawing, then it uploads with a progress
   await expect(artwork).toContainText('a drawing, so we can count its stitches straight away');
 
   // The server counts the drawing's stitches and adds the one-off setup.
-  const stitching = price(page).getByRole('cell', { name: /^Your artwork: [\d,]+ stitches × 1 garment$/ });
+  const stitching = price(page).getByRole('cell', { name: /^Your artwork: [\d,]+ stitches × 1 garment/ });
   await expect(stitching).toBeVisible();
   await expect(price(page).getByRole('cell', { name: 'Artwork setup: 1 design, once per order' })).toBeVisible();
   const before = await stitching.textContent();
@@ -61,7 +61,7 @@ test('when a parent uploads a child’s drawing, then it uploads with a progress
   await width.fill('40');
   await width.press('Enter');
   await expect(artwork.getByRole('slider', { name: /^Width/ })).toHaveAttribute('aria-valuetext', /^40 mm/);
-  await expect(price(page).getByRole('cell', { name: /^Your artwork: [\d,]+ stitches × 1 garment$/ })).not.toHaveText(
+  await expect(price(page).getByRole('cell', { name: /^Your artwork: [\d,]+ stitches × 1 garment/ })).not.toHaveText(
     before!,
   );
 

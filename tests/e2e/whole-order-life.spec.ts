@@ -151,7 +151,7 @@ test('when a grandparent orders a dress with her granddaughter’s drawing, then
 
   // Stitched, then posted with a carrier and tracking number that both order pages show.
   await tobias.getByRole('button', { name: 'Mark stitched' }).click();
-  await tobias.getByRole('button', { name: 'Mark shipped' }).click();
+  await tobias.getByRole('button', { name: 'Mark posted or collected' }).click();
   const post = tobias.getByRole('form', { name: 'Post the order' });
   await post.getByLabel('Carrier').fill('Parcel post');
   await post.getByLabel('Tracking number (if the parcel has one)').fill('PP-2026-4471');

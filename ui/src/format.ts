@@ -1,4 +1,4 @@
-import { customerDateStyle, studioDateStyle } from '@server/engine/date-style.ts';
+import { customerDateStyle, studioDateStyle } from '@server/contracts/date-style.ts';
 import { toInchFraction } from '@server/engine/inch-fraction.ts';
 
 /** Formats integer minor units with the currency's own decimals (USD 1234 → $12.34, JPY 500 → ¥500). */

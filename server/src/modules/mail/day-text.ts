@@ -1,4 +1,4 @@
-import { customerDateStyle, studioDateStyle } from '../../engine/date-style.ts';
+import { customerDateStyle, studioDateStyle } from '../../contracts/date-style.ts';
 
 /** A date in a customer's e-mail, in the storefront's style: "December 18, 2026". */
 export const formatCustomerMailDate = (day: string): string => customerDateStyle.date(day);
