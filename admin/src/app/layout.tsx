@@ -5,6 +5,7 @@ import { Button } from '@ui/components/button.tsx';
 import { useCurrentUser } from '@ui/session/get-current-user.ts';
 import { useSignOut } from '@ui/session/sign-out.ts';
 import { useRouteTitle } from '@ui/hooks/use-page-title.ts';
+import { roleWords } from '@server/contracts/users.ts';
 import { paths } from '../config/paths.ts';
 import { StaffGate } from './staff-gate.tsx';
 
@@ -26,7 +27,9 @@ function SignedInAs() {
     <div className="flex items-center gap-3 text-sm">
       <span>
         <strong className="font-semibold">{me.data.name}</strong>
-        <span className="ml-2 rounded-full bg-sage-50 px-2 py-0.5 text-xs text-sage-700">{me.data.role}</span>
+        <span className="ml-2 rounded-full bg-sage-50 px-2 py-0.5 text-xs text-sage-700">
+          {roleWords[me.data.role]}
+        </span>
       </span>
       <Button
         tone="quiet"

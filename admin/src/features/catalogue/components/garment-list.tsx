@@ -102,7 +102,7 @@ function SizeTable({ garment, onEdit }: { garment: StudioGarment; onEdit: (reque
             return (
               <tr key={size.id} className="border-t border-linen-200">
                 <td className="py-1.5">
-                  <span className="font-medium">{size.code}</span> · {size.label}
+                  <span className="font-medium">{size.label}</span>
                 </td>
                 <td className="py-1.5 whitespace-nowrap">
                   {size.hemFrontMm === null ? '—' : formatLength(size.hemFrontMm)}

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { NumberField } from '../../../components/number-field.tsx';
 import { garmentLabel, type MoneyField, type RulesForm } from '../model/rules-form.ts';
+import { useSizeLabels } from '../api/get-size-labels.ts';
 
 interface RulesFieldsProps {
   form: RulesForm;
@@ -22,6 +23,7 @@ function Group({ title, note, children }: { title: string; note?: string; childr
 
 /** Every rule of a price list, grouped the way the studio thinks about a job. */
 export function RulesFields({ form, onChange, errors, isReadOnly }: RulesFieldsProps) {
+  const sizeLabel = useSizeLabels();
   const money = (field: MoneyField, label: string, suffix?: string, hint?: string) => (
     <NumberField
       label={label}
@@ -175,7 +177,7 @@ export function RulesFields({ form, onChange, errors, isReadOnly }: RulesFieldsP
                     label={
                       <>
                         <span className="sr-only">{garmentLabel(garment)}, </span>
-                        {size}
+                        {sizeLabel(garment, size)}
                       </>
                     }
                     prefix="$"
