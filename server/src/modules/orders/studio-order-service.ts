@@ -22,8 +22,8 @@ function dated(row: BoardOrderRow, schedule: ShopCalendar & { leadTimeDays: numb
   return { ...row, dueDate, isOverdue: isPastDue(dueDate, today) && !isIn(closedOrderStatuses, row.status) };
 }
 import { readOrderArtworkOwner, readOrderDetail } from './order-detail-repo.ts';
-import { readOrderDesign } from './order-design-repo.ts';
-import { restoreDesign } from '../../contracts/designs.ts';
+import { readOrderPricingContext } from './order-design-repo.ts';
+import { currentDesignOf } from './order-repricing.ts';
 import type { GuidanceMessageSummary } from '../../contracts/guidance.ts';
 import type { QuoteService } from '../quotes/quote-service.ts';
 import { availableOrderActions } from './order-flow.ts';
@@ -38,14 +38,16 @@ export function createStudioOrderService(deps: {
 }) {
   const { db } = deps;
 
-  /** Where the order's design has placements stitched over each other, by the one overlap rule. */
+  /**
+   * Where the design the customer last saw (the latest proof's own, else the one ordered) has placements stitched
+   * over each other, by the one overlap rule.
+   */
   async function layoutNotesOf(number: string): Promise<GuidanceMessageSummary[]> {
-    const design = await readOrderDesign(db, number);
-    const restored = design && restoreDesign(design.document);
-    if (!design || !restored?.success) return [];
-    const { garmentId, sizeId, customerId } = design;
+    const context = await readOrderPricingContext(db, number);
+    if (!context) return [];
+    const { garmentId, sizeId, customerId } = context;
     const guidance = await deps.quotes.guidanceFor(
-      { garmentId, sizeId, document: restored.data },
+      { garmentId, sizeId, document: currentDesignOf(context).document },
       { userId: customerId },
     );
     return guidance.layoutNotes;
