@@ -8,7 +8,8 @@ import { signInAs } from './support/sign-in.ts';
  * price; Harriet approves it; a week after any hold would have lapsed, the studio charges the new total from the
  * saved card; the studio posts it with a tracking number, which both order pages show.
  *
- * Named to run last: it moves the payment stand-in's clock on, which would lapse other journeys' holds.
+ * Named to run after the journeys that hold cards (only whole-order.spec.ts, which saves its card, follows): it
+ * moves the payment stand-in's clock on, which would lapse their holds.
  */
 test.describe.configure({ mode: 'serial', timeout: 240_000 });
 
