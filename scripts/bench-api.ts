@@ -216,7 +216,7 @@ async function main(): Promise<void> {
   recreateLocalDatabase('hoopwright_test');
   await migrateAndSeed(stack.env, 'always');
   fakes = await startLocalFakes(stack);
-  server = await startServerProcess(stack, { isSilent: true, onSpawn: (child) => (server = child) });
+  server = await startServerProcess(stack, { isSilent: !process.env.BENCH_LOUD, onSpawn: (child) => (server = child) });
 
   const { request: preview, garmentSlug } = await previewRequest();
   const previewBody = JSON.stringify(preview);
@@ -225,8 +225,10 @@ async function main(): Promise<void> {
   );
   const border = answered.placements.find((placement) => placement.id === 'hem')?.border;
   console.log(
-    `The design: ${border?.count ?? 0} border repeats, a name, two motifs; ${answered.quote.totalCents} cents.`,
+    `The design: ${border?.count ?? 0} border repeats, a name, two motifs; ${answered.quote.totalCents} cents; ${previewBody.length} bytes asked, ${JSON.stringify(answered).length} answered.`,
   );
+  if (process.env.BENCH_DUMP)
+    (await import('node:fs')).writeFileSync(process.env.BENCH_DUMP, JSON.stringify(answered, null, 1));
   const garments = await fetchJson('/api/catalogue/garments');
   const garmentPath = `/api/catalogue/garments/${garmentSlug}`;
   const garment = await fetchJson(garmentPath);

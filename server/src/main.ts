@@ -9,9 +9,13 @@ import { createSessionLayer } from './auth/session.ts';
 import { createStripeClient } from './integrations/payment-gateway.ts';
 import { createMailer } from './integrations/mailer.ts';
 import { createHeavyWork } from './integrations/heavy-work.ts';
+import { createLogWriter } from './integrations/log-writer.ts';
 import { createApp, createJobWorker } from './app.ts';
 
-const log = (line: string) => console.error(`${new Date().toISOString()} ${line}`);
+const logWriter = createLogWriter();
+const { log } = logWriter;
+// Whatever way the process ends, the lines still held are written first.
+process.on('exit', logWriter.flushSync);
 
 const config = loadConfig();
 const db = openDatabase(config.database);

@@ -6,9 +6,12 @@
 import { loadConfig } from './config.ts';
 import { openDatabase } from './db/knex.ts';
 import { createMailer } from './integrations/mailer.ts';
+import { createLogWriter } from './integrations/log-writer.ts';
 import { createJobWorker } from './app.ts';
 
-const log = (line: string) => console.error(`${new Date().toISOString()} ${line}`);
+const logWriter = createLogWriter();
+const { log } = logWriter;
+process.on('exit', logWriter.flushSync);
 const config = loadConfig();
 const db = openDatabase(config.database);
 const mailer = createMailer(config);

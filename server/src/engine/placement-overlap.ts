@@ -31,13 +31,24 @@ export const MIN_OVERLAP_MM = 0.5;
 
 type Point = { x: number; y: number };
 
-function cornersOf(outline: PlacementOutline): Point[] {
+/** An outline with what the test needs worked out once: its corners, the axes of its sides and its bounding box. */
+interface Prepared {
+  id: string;
+  corners: Point[];
+  axes: [Point, Point];
+  minX: number;
+  maxX: number;
+  minY: number;
+  maxY: number;
+}
+
+function prepare(outline: PlacementOutline): Prepared {
   const radians = (outline.rotationDeg * Math.PI) / 180;
   const cos = Math.cos(radians);
   const sin = Math.sin(radians);
   const halfW = outline.widthMm / 2;
   const halfH = outline.heightMm / 2;
-  return [
+  const corners = [
     [-halfW, -halfH],
     [halfW, -halfH],
     [halfW, halfH],
@@ -46,25 +57,51 @@ function cornersOf(outline: PlacementOutline): Point[] {
     x: outline.centerXMm + dx! * cos - dy! * sin,
     y: outline.centerYMm + dx! * sin + dy! * cos,
   }));
+  const xs = corners.map((corner) => corner.x);
+  const ys = corners.map((corner) => corner.y);
+  return {
+    id: outline.placementId,
+    corners,
+    axes: [
+      { x: cos, y: sin },
+      { x: -sin, y: cos },
+    ],
+    minX: Math.min(...xs),
+    maxX: Math.max(...xs),
+    minY: Math.min(...ys),
+    maxY: Math.max(...ys),
+  };
 }
 
-function axesOf(outline: PlacementOutline): Point[] {
-  const radians = (outline.rotationDeg * Math.PI) / 180;
-  return [
-    { x: Math.cos(radians), y: Math.sin(radians) },
-    { x: -Math.sin(radians), y: Math.cos(radians) },
-  ];
-}
-
-function project(corners: readonly Point[], axis: Point): { min: number; max: number } {
+/** The shadow of a rectangle's corners on an axis: from `min` to `max` along it. */
+function shadowOf(corners: readonly Point[], axis: Point): { min: number; max: number } {
   let min = Infinity;
   let max = -Infinity;
   for (const corner of corners) {
     const along = corner.x * axis.x + corner.y * axis.y;
-    min = Math.min(min, along);
-    max = Math.max(max, along);
+    if (along < min) min = along;
+    if (along > max) max = along;
   }
   return { min, max };
+}
+
+/** How far two shadows on one axis share: negative or 0 when the axis separates them. */
+function sharedAlong(a: readonly Point[], b: readonly Point[], axis: Point): number {
+  const shadowA = shadowOf(a, axis);
+  const shadowB = shadowOf(b, axis);
+  return Math.min(shadowA.max, shadowB.max) - Math.max(shadowA.min, shadowB.min);
+}
+
+function depthOf(a: Prepared, b: Prepared): number {
+  // Boxes apart means the rectangles are apart (or touch): no overlap, and no need to try the four axes.
+  if (a.maxX <= b.minX || b.maxX <= a.minX || a.maxY <= b.minY || b.maxY <= a.minY) return 0;
+  let depth = Infinity;
+  for (const axis of [a.axes[0], a.axes[1], b.axes[0], b.axes[1]]) {
+    const shared = sharedAlong(a.corners, b.corners, axis);
+    if (shared <= 0) return 0;
+    depth = Math.min(depth, shared);
+  }
+  return Math.round(depth * 100) / 100;
 }
 
 /**
@@ -72,17 +109,7 @@ function project(corners: readonly Point[], axis: Point): { min: number; max: nu
  * 0 when some axis separates them (the separating-axis theorem for convex shapes).
  */
 export function overlapDepthMm(a: PlacementOutline, b: PlacementOutline): number {
-  const cornersA = cornersOf(a);
-  const cornersB = cornersOf(b);
-  let depth = Infinity;
-  for (const axis of [...axesOf(a), ...axesOf(b)]) {
-    const pa = project(cornersA, axis);
-    const pb = project(cornersB, axis);
-    const shared = Math.min(pa.max, pb.max) - Math.max(pa.min, pb.min);
-    if (shared <= 0) return 0;
-    depth = Math.min(depth, shared);
-  }
-  return Math.round(depth * 100) / 100;
+  return depthOf(prepare(a), prepare(b));
 }
 
 /**
@@ -91,22 +118,21 @@ export function overlapDepthMm(a: PlacementOutline, b: PlacementOutline): number
  */
 export function findOverlaps(outlines: readonly PlacementOutline[]): PlacementOverlap[] {
   const found = new Map<string, PlacementOverlap>();
-  outlines.forEach((a, i) => {
-    for (const b of outlines.slice(i + 1)) {
-      if (a.placementId === b.placementId) continue;
-      const depthMm = overlapDepthMm(a, b);
+  const prepared = outlines.map(prepare);
+  for (let i = 0; i < prepared.length; i += 1) {
+    const a = prepared[i]!;
+    for (let j = i + 1; j < prepared.length; j += 1) {
+      const b = prepared[j]!;
+      if (a.id === b.id) continue;
+      const depthMm = depthOf(a, b);
       if (depthMm <= MIN_OVERLAP_MM) continue;
-      const key = JSON.stringify([a.placementId, b.placementId].sort());
+      const key = a.id < b.id ? `${a.id}\u0000${b.id}` : `${b.id}\u0000${a.id}`;
       const known = found.get(key);
       if (!known || known.depthMm < depthMm) {
-        found.set(key, {
-          firstId: known?.firstId ?? a.placementId,
-          secondId: known?.secondId ?? b.placementId,
-          depthMm,
-        });
+        found.set(key, { firstId: known?.firstId ?? a.id, secondId: known?.secondId ?? b.id, depthMm });
       }
     }
-  });
+  }
   return [...found.values()];
 }
 

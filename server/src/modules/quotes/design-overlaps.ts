@@ -3,7 +3,6 @@
  * one overlap rule (the designer warns by the same rule as the customer drags). Items are their stitched box,
  * turned; a border is each of its repeats that shows on the front of the hem, laid out as the proof draws them.
  */
-import { fitMotifBorder } from '../../engine/fit-border.ts';
 import { layoutHemBorder } from '../../engine/hem-border-layout.ts';
 import { findOverlaps, type PlacementOutline } from '../../engine/placement-overlap.ts';
 import type { GuidanceMessage } from '../../engine/guidance.ts';
@@ -14,20 +13,21 @@ import type { QuoteCatalogue } from './quote-catalogue-types.ts';
 /** The stable code of the note, for the apps and tests. */
 export const OVERLAP_NOTE_CODE = 'layout.overlap';
 
-function borderOutlines(catalogue: QuoteCatalogue, placement: Extract<DesignPlacement, { kind: 'border' }>) {
+function borderOutlines(
+  catalogue: QuoteCatalogue,
+  placement: Extract<DesignPlacement, { kind: 'border' }>,
+  figured: PlacementFigures | undefined,
+) {
   const { size } = catalogue;
   const motif = catalogue.motifs.get(placement.motif);
   const zone = size.zones.find((candidate) => candidate.code === 'hem');
-  const isClosed = placement.run === 'circumference';
-  const runLengthMm = isClosed ? size.hemCircumferenceMm : size.hemFrontMm;
-  if (!motif || !zone || runLengthMm === null || size.hemFrontMm === null) return [];
-  const fit = fitMotifBorder(motif, { runLengthMm, closed: isClosed, count: placement.count });
-  if (!fit.ok) return [];
+  const border = figured?.border;
+  if (!motif || !zone || !border || size.hemFrontMm === null) return [];
   const { repeats } = layoutHemBorder({
     zone,
-    fit,
-    isClosed,
-    runLengthMm,
+    fit: border.fit,
+    isClosed: border.isClosed,
+    runLengthMm: border.runLengthMm,
     hemFrontMm: size.hemFrontMm,
     hemOffsetMm: placement.hemOffsetMm,
     motifHeightMm: motif.heightMm,
@@ -42,8 +42,8 @@ export function designOutlines(
   figures: readonly PlacementFigures[],
 ): PlacementOutline[] {
   return document.placements.flatMap((placement): PlacementOutline[] => {
-    if (placement.kind === 'border') return borderOutlines(catalogue, placement);
     const figured = figures.find((candidate) => candidate.id === placement.id);
+    if (placement.kind === 'border') return borderOutlines(catalogue, placement, figured);
     if (!figured || figured.estimate.widthMm <= 0 || figured.estimate.heightMm <= 0) return [];
     const { centerXMm, centerYMm, rotationDeg } = placement;
     const { widthMm, heightMm } = figured.estimate;

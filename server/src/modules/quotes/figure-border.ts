@@ -1,10 +1,13 @@
+import { LRUCache } from 'lru-cache';
 import {
   estimateBorderStitches,
   estimateStitches,
   fitMotifBorder,
   planHoopings,
   type BorderFit,
+  type BorderFitFailure,
   type HoopingPlan,
+  type StitchEstimate,
 } from '../../engine/index.ts';
 import type { BorderPlacement } from '../../contracts/designs.ts';
 import type { CatalogueHoop, CatalogueMotifEntry, QuoteCatalogue } from './quote-catalogue-types.ts';
@@ -35,8 +38,9 @@ export function figureBorder(catalogue: QuoteCatalogue, placement: BorderPlaceme
   const runLengthMm = isClosed ? size.hemCircumferenceMm : size.hemFrontMm;
   if (runLengthMm === null) return refuse(`${path}.zone`, `The ${garment.name} has no hem to take a border.`);
 
-  const fit = fitMotifBorder(motif, { runLengthMm, closed: isClosed, count: placement.count });
-  if (!fit.ok) {
+  const sewn = sewnBorder(catalogue.hoops, motif, { runLengthMm, closed: isClosed, count: placement.count });
+  if (!sewn.ok && sewn.step === 'fit') {
+    const { fit } = sewn;
     const where = isClosed ? 'round the hem' : 'along the front hem';
     const isAsked = placement.count !== undefined;
     const hint = isAsked && fit.nearest?.isWithinLimits ? ` ${countOf(fit.nearest.count, 'repeat')} would fit.` : '';
@@ -45,14 +49,11 @@ export function figureBorder(catalogue: QuoteCatalogue, placement: BorderPlaceme
       `The ${motif.name} doesn't fit ${where} in size ${size.label}: ${fit.reason}${hint}`,
     );
   }
-
-  const planned = planInBestHoop(catalogue.hoops, motif, fit);
-  if (!planned.ok) return refuse(path, `No hoop holds the ${motif.name} in size ${size.label}: ${planned.reason}`);
-  const repeat = estimateStitches({ kind: 'catalogue', motif: catalogueMotifFor(motif), scale: fit.scale });
-  if (!repeat.ok) return refuse(`${path}.motif`, `The ${motif.name} can't be estimated: ${repeat.reason}`);
+  if (!sewn.ok && sewn.step === 'hoop')
+    return refuse(path, `No hoop holds the ${motif.name} in size ${size.label}: ${sewn.reason}`);
+  if (!sewn.ok) return refuse(`${path}.motif`, `The ${motif.name} can't be estimated: ${sewn.reason}`);
+  const { fit, planned, estimate } = sewn;
   const hoopings = planned.plan.hoopings.length;
-  const estimate = estimateBorderStitches({ repeat, fit, hoopings });
-  if (!estimate.ok) return refuse(`${path}.motif`, `The ${motif.name} can't be estimated: ${estimate.reason}`);
   return {
     ok: true,
     figures: {
@@ -73,12 +74,56 @@ export function figureBorder(catalogue: QuoteCatalogue, placement: BorderPlaceme
         isClosed,
         hoop: planned.hoop,
         plan: planned.plan,
+        fit,
       },
     },
   };
 }
 
 type PlannedHoop = { ok: true; hoop: CatalogueHoop; plan: HoopingPlan } | { ok: false; reason: string };
+
+/** A border as the engine sews it: the fit, the hoop and plan, the whole border's stitches, or the step that failed. */
+type SewnBorder =
+  | { ok: true; fit: BorderFit; planned: { hoop: CatalogueHoop; plan: HoopingPlan }; estimate: StitchEstimate }
+  | { ok: false; step: 'fit'; fit: BorderFitFailure }
+  | { ok: false; step: 'hoop' | 'estimate'; reason: string };
+
+const BORDERS_KEPT_PER_MOTIF = 200;
+/**
+ * Borders already worked out, per catalogue snapshot and motif (the snapshot's hoop list and motif entries are
+ * the same objects for as long as it lives, so a studio change starts afresh), then per run length, open or closed
+ * and asked count: the same dress, size and border are priced again and again while a customer designs, and each
+ * time the answer is the same.
+ */
+const sewnBorders = new WeakMap<readonly CatalogueHoop[], WeakMap<CatalogueMotifEntry, LRUCache<string, SewnBorder>>>();
+
+/** The run a border fills: its length, mm, whether it closes on itself, and the count the customer asked for. */
+type BorderRun = { runLengthMm: number; closed: boolean; count?: number };
+
+function sewnBorder(hoops: readonly CatalogueHoop[], motif: CatalogueMotifEntry, run: BorderRun): SewnBorder {
+  let byMotif = sewnBorders.get(hoops);
+  if (!byMotif) sewnBorders.set(hoops, (byMotif = new WeakMap()));
+  let kept = byMotif.get(motif);
+  if (!kept) byMotif.set(motif, (kept = new LRUCache({ max: BORDERS_KEPT_PER_MOTIF })));
+  const key = `${run.runLengthMm}|${run.closed}|${run.count ?? ''}`;
+  const known = kept.get(key);
+  if (known) return known;
+  const sewn = sewBorder(hoops, motif, run);
+  kept.set(key, sewn);
+  return sewn;
+}
+
+function sewBorder(hoops: readonly CatalogueHoop[], motif: CatalogueMotifEntry, run: BorderRun): SewnBorder {
+  const fit = fitMotifBorder(motif, run);
+  if (!fit.ok) return { ok: false, step: 'fit', fit };
+  const planned = planInBestHoop(hoops, motif, fit);
+  if (!planned.ok) return { ok: false, step: 'hoop', reason: planned.reason };
+  const repeat = estimateStitches({ kind: 'catalogue', motif: catalogueMotifFor(motif), scale: fit.scale });
+  if (!repeat.ok) return { ok: false, step: 'estimate', reason: repeat.reason };
+  const estimate = estimateBorderStitches({ repeat, fit, hoopings: planned.plan.hoopings.length });
+  if (!estimate.ok) return { ok: false, step: 'estimate', reason: estimate.reason };
+  return { ok: true, fit, planned, estimate };
+}
 
 /**
  * The hoop that stitches the border in the fewest hoopings, because each re-hooping is slow, skilled labour; among

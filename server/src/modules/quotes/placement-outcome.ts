@@ -1,4 +1,4 @@
-import type { CatalogueMotif, HoopingPlan, StitchEstimate } from '../../engine/index.ts';
+import type { BorderFit, CatalogueMotif, HoopingPlan, StitchEstimate } from '../../engine/index.ts';
 import { fitInField, usableField } from '../../engine/hoop-fit.ts';
 import type { DesignPlacement } from '../../contracts/designs.ts';
 import type { CatalogueHoop, CatalogueMotifEntry } from './quote-catalogue-types.ts';
@@ -28,6 +28,8 @@ export interface PlacementFigures {
     hoop: CatalogueHoop;
     /** The engine's hooping plan in that hoop: which repeats each hooping holds, in stitching order. */
     plan: HoopingPlan;
+    /** The engine's fit the figures above come from, with each repeat's centre along the run. */
+    fit: BorderFit;
   };
 }
 
