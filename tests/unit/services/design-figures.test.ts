@@ -146,6 +146,28 @@ describe('figureDesign', () => {
     );
   });
 
+  it('when the same border is priced again, then it gives the same figures, and a catalogue with other hoops or another motif is worked out afresh', () => {
+    const catalogue = catalogueWith();
+    const first = figureDesign(catalogue, design(border()));
+    const again = figureDesign(catalogue, design(border()));
+    if (!first.ok || !again.ok) throw new Error('the border should fit');
+    expect(again.value).toEqual(first.value);
+    // A new snapshot of the catalogue brings new hoop and motif objects: the studio's change counts at once.
+    const onlyLong = figureDesign(
+      catalogueWith({
+        hoops: [
+          { slug: 'long-160x260', name: 'Long 160 × 260 mm', fieldWidthMm: 160, fieldHeightMm: 260, clearanceMm: 3 },
+        ],
+      }),
+      design(border()),
+    );
+    expect(onlyLong.ok && onlyLong.value.placements[0].border?.hoop.slug).toBe('long-160x260');
+    const widerChain = { ...daisyChain, widthMm: 200, minScalePct: 80 };
+    const wider = figureDesign(catalogueWith({ motifs: new Map([[widerChain.slug, widerChain]]) }), design(border()));
+    // 692 mm round the hem in repeats of 200 mm allowed 80–110 %: 4 repeats at 86.5 %, not the 96.11 % above.
+    expect(wider.ok && wider.value.placements[0].border?.scalePct).toBe(86.5);
+  });
+
   it('when the customer asks for a count that cannot fit, then it is refused at the count with the engine’s reason and a count that fits', () => {
     const figured = figureDesign(catalogueWith(), design(border({ count: 3 })));
     expect(figured).toEqual({
