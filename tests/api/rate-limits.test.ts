@@ -64,6 +64,13 @@ describe('rate limits', () => {
     await visitor.get('/api/auth/google').expect(302);
     expectRefused(await visitor.get('/api/auth/google'), /more sign-in attempts/);
     expectRefused(await visitor.get('/api/auth/google/callback?code=x&state=y'), /more sign-in attempts/);
+    // A browser opening the sign-in page gets the same refusal as a page to read, with the way back.
+    const page = await visitor.get('/api/auth/google').set('Accept', 'text/html,application/xhtml+xml,*/*;q=0.8');
+    expect(page.status).toBe(429);
+    expect(Number(page.headers['retry-after'])).toBeGreaterThan(0);
+    expect(page.headers['content-type']).toMatch(/^text\/html/);
+    expect(page.text).toMatch(/That is more sign-in attempts than we take in a short while\. Please try again in \d+/);
+    expect(page.text).toContain('<a href="/sign-in">Back to signing in</a>');
   });
 
   it('when a visitor sends more uploads than the limit, then the next is refused before the file is read', async () => {

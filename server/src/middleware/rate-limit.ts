@@ -23,6 +23,26 @@ const clientKey = (req: Request) => {
   return user?.id ? `user-${user.id}` : `ip-${req.ip ?? 'unknown'}`;
 };
 
+/**
+ * Sign-in is a page the browser opens, not a call the app makes, so a refusal there is a short page saying the same
+ * sentence, with the way back, rather than JSON the person would see raw. Status and Retry-After stay as for any limit.
+ */
+function refusalPage(sentence: string): string {
+  return [
+    '<!doctype html>',
+    '<html lang="en">',
+    '<meta charset="utf-8">',
+    '<meta name="viewport" content="width=device-width, initial-scale=1">',
+    '<title>Please wait a little · Sign in</title>',
+    '<main>',
+    '<h1>Please wait a little before signing in again</h1>',
+    `<p>${sentence}</p>`,
+    '<p><a href="/sign-in">Back to signing in</a> · <a href="/">Back to the shop</a></p>',
+    '</main>',
+    '</html>',
+  ].join('\n');
+}
+
 const inWords = (seconds: number) =>
   seconds < 90 ? `${seconds} second${seconds === 1 ? '' : 's'}` : `${Math.ceil(seconds / 60)} minutes`;
 
@@ -53,12 +73,12 @@ export function createRateLimits(db: Db, database: string, settings: RateLimitSe
       if (!(refusal instanceof RateLimiterRes)) return next(refusal);
       const retryAfterSeconds = Math.max(1, Math.ceil(refusal.msBeforeNext / 1000));
       res.set('Retry-After', String(retryAfterSeconds));
-      next(
-        new HttpError(
-          'too-many-requests',
-          `That is more ${limitedActions[name]} than we take in a short while. Please try again in ${inWords(retryAfterSeconds)}.`,
-        ),
-      );
+      const sentence = `That is more ${limitedActions[name]} than we take in a short while. Please try again in ${inWords(retryAfterSeconds)}.`;
+      if (name === 'signIn' && req.accepts(['json', 'html']) === 'html') {
+        res.status(429).type('html').send(refusalPage(sentence));
+        return;
+      }
+      next(new HttpError('too-many-requests', sentence));
     };
   };
   return Object.fromEntries(
