@@ -8,7 +8,7 @@
  * Run with `npm run bench:api`.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
-import { readFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { cpus, loadavg } from 'node:os';
 import { join } from 'node:path';
 import autocannon from 'autocannon';
@@ -227,8 +227,8 @@ async function main(): Promise<void> {
   console.log(
     `The design: ${border?.count ?? 0} border repeats, a name, two motifs; ${answered.quote.totalCents} cents; ${previewBody.length} bytes asked, ${JSON.stringify(answered).length} answered.`,
   );
-  if (process.env.BENCH_DUMP)
-    (await import('node:fs')).writeFileSync(process.env.BENCH_DUMP, JSON.stringify(answered, null, 1));
+  // BENCH_DUMP=file keeps the answer for reading; BENCH_LOUD=1 lets the server's messages through.
+  if (process.env.BENCH_DUMP) writeFileSync(process.env.BENCH_DUMP, JSON.stringify(answered, null, 1));
   const garments = await fetchJson('/api/catalogue/garments');
   const garmentPath = `/api/catalogue/garments/${garmentSlug}`;
   const garment = await fetchJson(garmentPath);

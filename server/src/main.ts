@@ -9,13 +9,10 @@ import { createSessionLayer } from './auth/session.ts';
 import { createStripeClient } from './integrations/payment-gateway.ts';
 import { createMailer } from './integrations/mailer.ts';
 import { createHeavyWork } from './integrations/heavy-work.ts';
-import { createLogWriter } from './integrations/log-writer.ts';
+import { openProcessLog } from './integrations/log-writer.ts';
 import { createApp, createJobWorker } from './app.ts';
 
-const logWriter = createLogWriter();
-const { log } = logWriter;
-// Whatever way the process ends, the lines still held are written first.
-process.on('exit', logWriter.flushSync);
+const log = openProcessLog();
 
 const config = loadConfig();
 const db = openDatabase(config.database);

@@ -6,12 +6,10 @@
 import { loadConfig } from './config.ts';
 import { openDatabase } from './db/knex.ts';
 import { createMailer } from './integrations/mailer.ts';
-import { createLogWriter } from './integrations/log-writer.ts';
+import { openProcessLog } from './integrations/log-writer.ts';
 import { createJobWorker } from './app.ts';
 
-const logWriter = createLogWriter();
-const { log } = logWriter;
-process.on('exit', logWriter.flushSync);
+const log = openProcessLog();
 const config = loadConfig();
 const db = openDatabase(config.database);
 const mailer = createMailer(config);

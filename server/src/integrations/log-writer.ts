@@ -13,6 +13,13 @@ export interface LogWriter {
   flushSync: () => void;
 }
 
+/** The process's own log on standard error, written out when the process ends, whichever way it ends. */
+export function openProcessLog(): LogWriter['log'] {
+  const writer = createLogWriter();
+  process.on('exit', writer.flushSync);
+  return writer.log;
+}
+
 export function createLogWriter(fd = 2, now: () => Date = () => new Date()): LogWriter {
   const stream = new SonicBoom({ fd, sync: false });
   return {

@@ -84,7 +84,7 @@ type PlannedHoop = { ok: true; hoop: CatalogueHoop; plan: HoopingPlan } | { ok: 
 
 /** A border as the engine sews it: the fit, the hoop and plan, the whole border's stitches, or the step that failed. */
 type SewnBorder =
-  | { ok: true; fit: BorderFit; planned: { hoop: CatalogueHoop; plan: HoopingPlan }; estimate: StitchEstimate }
+  | { ok: true; fit: BorderFit; planned: Extract<PlannedHoop, { ok: true }>; estimate: StitchEstimate }
   | { ok: false; step: 'fit'; fit: BorderFitFailure }
   | { ok: false; step: 'hoop' | 'estimate'; reason: string };
 
